@@ -1,0 +1,37 @@
+import { type DynamicModule, Module } from '@nestjs/common';
+import { ConfigModule } from '@nestjs/config';
+import { APP_FILTER } from '@nestjs/core';
+import { ServeStaticModule } from '@nestjs/serve-static';
+import { AuthModule } from './auth/auth.module.js';
+import { AllExceptionsFilter } from './common/filters/all-exceptions.filter.js';
+import { clientDistPath } from './config/paths.js';
+import { validateEnv } from './config/env.validation.js';
+import { DatabaseModule } from './database/database.module.js';
+import { DrugsModule } from './drugs/drugs.module.js';
+import { HealthModule } from './health/health.module.js';
+import { PatientsModule } from './patients/patients.module.js';
+import { UsersModule } from './users/users.module.js';
+import { WardsModule } from './wards/wards.module.js';
+
+/** Serves the built client with an index.html fallback for client routes; never for /api or /assets. */
+function clientModules(): DynamicModule[] {
+  const rootPath = clientDistPath();
+  if (!rootPath) return [];
+  return [ServeStaticModule.forRoot({ rootPath, exclude: /^\/(api|assets)(\/|$)/ })];
+}
+
+@Module({
+  imports: [
+    ConfigModule.forRoot({ isGlobal: true, validate: validateEnv, ignoreEnvFile: true }),
+    DatabaseModule,
+    AuthModule,
+    UsersModule,
+    WardsModule,
+    PatientsModule,
+    DrugsModule,
+    HealthModule,
+    ...clientModules(),
+  ],
+  providers: [{ provide: APP_FILTER, useClass: AllExceptionsFilter }],
+})
+export class AppModule {}

@@ -1,0 +1,38 @@
+import { Body, Controller, Get, HttpCode, Post } from '@nestjs/common';
+import { ConfigService } from '@nestjs/config';
+import type { DemoAccounts, LoginResponse } from '@lockstep/shared';
+import type { Env } from '../config/env.validation.js';
+import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../database/seed/demo-staff.js';
+import type { AuthUser } from './auth-user.js';
+import { AuthService } from './auth.service.js';
+import { CurrentUser } from './decorators/current-user.decorator.js';
+import { Public } from './decorators/public.decorator.js';
+import { LoginDto } from './dto/login.dto.js';
+
+@Controller('auth')
+export class AuthController {
+  constructor(
+    private readonly auth: AuthService,
+    private readonly config: ConfigService<Env, true>,
+  ) {}
+
+  @Public()
+  @Post('login')
+  @HttpCode(200)
+  login(@Body() body: LoginDto): Promise<LoginResponse> {
+    return this.auth.login(body);
+  }
+
+  @Get('me')
+  me(@CurrentUser() user: AuthUser): AuthUser {
+    return user;
+  }
+
+  /** Lets the sign-in page offer the demo accounts; empty outside demo mode. */
+  @Public()
+  @Get('demo-accounts')
+  demoAccounts(): DemoAccounts {
+    if (!this.config.get('DEMO', { infer: true })) return { demo: false, password: null, accounts: [] };
+    return { demo: true, password: DEMO_PASSWORD, accounts: DEMO_ACCOUNTS };
+  }
+}

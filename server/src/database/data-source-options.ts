@@ -1,0 +1,20 @@
+import { fromRepoRoot } from '../config/paths.js';
+import type { DataSourceOptions } from 'typeorm';
+import { ENTITIES } from './entities.js';
+import { MIGRATIONS } from './migrations/index.js';
+
+/** One definition of the database for Nest, the reset script and the tests. */
+export function dataSourceOptions(databasePath: string): DataSourceOptions {
+  return {
+    type: 'better-sqlite3',
+    database: fromRepoRoot(databasePath),
+    entities: ENTITIES,
+    migrations: MIGRATIONS,
+    migrationsRun: true,
+    migrationsTransactionMode: 'each',
+    synchronize: false,
+    enableWAL: true,
+    // A writer waits this long for another writer instead of failing with SQLITE_BUSY.
+    timeout: 5000,
+  };
+}

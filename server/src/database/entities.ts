@@ -1,0 +1,7 @@
+import { Drug } from '../drugs/entities/drug.entity.js';
+import { Patient } from '../patients/entities/patient.entity.js';
+import { User } from '../users/entities/user.entity.js';
+import { Ward } from '../wards/entities/ward.entity.js';
+
+/** Every entity, for the data source used outside Nest (migrations, reset, schema check). */
+export const ENTITIES = [Ward, User, Patient, Drug];

@@ -1,0 +1,20 @@
+import { Controller, Get, Param, Query } from '@nestjs/common';
+import type { Patient } from '@lockstep/shared';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
+import { PatientQueryDto } from './dto/patient-query.dto.js';
+import { PatientsService } from './patients.service.js';
+
+@Controller('patients')
+export class PatientsController {
+  constructor(private readonly patients: PatientsService) {}
+
+  @Get()
+  list(@Query() query: PatientQueryDto): Promise<Patient[]> {
+    return this.patients.list(query.wardId);
+  }
+
+  @Get(':id')
+  get(@Param('id', ParseIdPipe) id: number): Promise<Patient> {
+    return this.patients.get(id);
+  }
+}

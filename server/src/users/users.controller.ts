@@ -1,0 +1,28 @@
+import { Body, Controller, Get, Param, Patch, Post } from '@nestjs/common';
+import type { User } from '@lockstep/shared';
+import { Roles } from '../auth/decorators/roles.decorator.js';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
+import { CreateUserDto } from './dto/create-user.dto.js';
+import { UpdateUserDto } from './dto/update-user.dto.js';
+import { UsersService } from './users.service.js';
+
+@Controller('users')
+@Roles('admin')
+export class UsersController {
+  constructor(private readonly users: UsersService) {}
+
+  @Get()
+  list(): Promise<User[]> {
+    return this.users.list();
+  }
+
+  @Post()
+  create(@Body() body: CreateUserDto): Promise<User> {
+    return this.users.create(body);
+  }
+
+  @Patch(':id')
+  update(@Param('id', ParseIdPipe) id: number, @Body() body: UpdateUserDto): Promise<User> {
+    return this.users.update(id, body);
+  }
+}

@@ -1,0 +1,83 @@
+import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
+import { DataSource, In, type Repository } from 'typeorm';
+import type { SessionUser, User as UserResponse } from '@lockstep/shared';
+import { Ward } from '../wards/entities/ward.entity.js';
+import type { CreateUserDto } from './dto/create-user.dto.js';
+import type { UpdateUserDto } from './dto/update-user.dto.js';
+import { toSessionUser, toUserResponse } from './dto/user-response.js';
+import { User } from './entities/user.entity.js';
+import { hashPassword, passwordMatches } from './passwords.js';
+
+@Injectable()
+export class UsersService {
+  constructor(
+    @InjectRepository(User) private readonly users: Repository<User>,
+    @InjectDataSource() private readonly dataSource: DataSource,
+  ) {}
+
+  /** The signed-in person if the credentials are right and the account is active. */
+  async verifyCredentials(username: string, password: string): Promise<SessionUser | null> {
+    const user = await this.users.findOneBy({ username });
+    const matches = await passwordMatches(password, user?.passwordHash);
+    return user && matches && user.active ? toSessionUser(user) : null;
+  }
+
+  async findActiveSessionUser(id: number): Promise<SessionUser | null> {
+    const user = await this.users.findOneBy({ id, active: true });
+    return user ? toSessionUser(user) : null;
+  }
+
+  async list(): Promise<UserResponse[]> {
+    const users = await this.users.find({ relations: { wards: true }, order: { username: 'ASC' } });
+    return users.map(toUserResponse);
+  }
+
+  async create(dto: CreateUserDto): Promise<UserResponse> {
+    return this.dataSource.transaction(async (manager) => {
+      if (await manager.existsBy(User, { username: dto.username })) {
+        throw new ConflictException({
+          statusCode: 409,
+          message: `The username ${dto.username} is already taken`,
+          errors: [{ field: 'username', message: 'This username is already taken' }],
+        });
+      }
+      const user = manager.create(User, {
+        username: dto.username,
+        displayName: dto.displayName.trim(),
+        role: dto.role,
+        active: true,
+        passwordHash: await hashPassword(dto.password),
+        wards: await findWards(manager.getRepository(Ward), dto.wardIds),
+      });
+      return toUserResponse(await manager.save(user));
+    });
+  }
+
+  async update(id: number, dto: UpdateUserDto): Promise<UserResponse> {
+    return this.dataSource.transaction(async (manager) => {
+      const user = await manager.findOne(User, { where: { id }, relations: { wards: true } });
+      if (!user) throw new NotFoundException(`No user with id ${id}`);
+      if (dto.displayName !== undefined) user.displayName = dto.displayName.trim();
+      if (dto.role !== undefined) user.role = dto.role;
+      if (dto.active !== undefined) user.active = dto.active;
+      if (dto.password !== undefined) user.passwordHash = await hashPassword(dto.password);
+      if (dto.wardIds !== undefined) user.wards = await findWards(manager.getRepository(Ward), dto.wardIds);
+      return toUserResponse(await manager.save(user));
+    });
+  }
+}
+
+async function findWards(wards: Repository<Ward>, ids: number[]): Promise<Ward[]> {
+  const unique = [...new Set(ids)];
+  const found = await wards.findBy({ id: In(unique) });
+  const missing = unique.filter((id) => !found.some((ward) => ward.id === id));
+  if (missing.length > 0) {
+    throw new BadRequestException({
+      statusCode: 400,
+      message: `No ward with id ${missing.join(', ')}`,
+      errors: [{ field: 'wardIds', message: `No ward with id ${missing.join(', ')}` }],
+    });
+  }
+  return found;
+}

@@ -1,0 +1,22 @@
+import { z } from 'zod';
+import { roleSchema } from './roles.js';
+
+export const loginSchema = z.object({
+  username: z.string().trim().min(1, 'Enter your username').max(64, 'Username is at most 64 characters'),
+  password: z.string().min(1, 'Enter your password').max(256, 'Password is at most 256 characters'),
+});
+export type LoginRequest = z.infer<typeof loginSchema>;
+
+export const sessionUserSchema = z.object({
+  id: z.number().int(),
+  username: z.string(),
+  displayName: z.string(),
+  role: roleSchema,
+});
+export type SessionUser = z.infer<typeof sessionUserSchema>;
+
+export const loginResponseSchema = z.object({
+  accessToken: z.string(),
+  user: sessionUserSchema,
+});
+export type LoginResponse = z.infer<typeof loginResponseSchema>;
