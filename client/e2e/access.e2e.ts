@@ -1,0 +1,46 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { openBrowser, signIn, type BrowserSession } from './support/browser.js';
+import { startServer, type RunningServer } from './support/server.js';
+
+describe('roles are enforced by the API, not only by the screens', () => {
+  let server: RunningServer;
+  let browser: BrowserSession;
+
+  beforeAll(async () => {
+    server = await startServer();
+    browser = await openBrowser(server.baseUrl);
+  });
+  afterAll(async () => {
+    await browser?.close();
+    await server?.stop();
+  });
+
+  it('a nurse calling an admin route with her own token gets 403', async () => {
+    const { page } = browser;
+    await signIn(page, 'kai.mendes');
+    await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    const status = await page.evaluate(async () => {
+      const token = Object.keys(sessionStorage)
+        .map((key) => sessionStorage.getItem(key) ?? '')
+        .map((value) => value.match(/eyJ[\w-]+\.[\w-]+\.[\w-]+/)?.[0])
+        .find(Boolean);
+      const response = await fetch('/api/users', { headers: { Authorization: `Bearer ${token}` } });
+      return response.status;
+    });
+    expect(status).toBe(403);
+  });
+
+  it('a nurse who types the admin address is not shown the users screen', async () => {
+    const { page } = browser;
+    await page.goto('/admin/users');
+    await page.waitForLoadState('networkidle');
+    expect(await page.getByRole('heading', { name: 'Users', level: 1 }).count()).toBe(0);
+  });
+
+  it('signed out, a protected address leads to sign-in', async () => {
+    const { page } = browser;
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.goto('/patients');
+    await expect.poll(() => page.url()).toContain('/sign-in');
+  });
+});

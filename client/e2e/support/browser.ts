@@ -1,0 +1,67 @@
+import { existsSync, mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
+import { type BrowserContext, chromium, type Page } from 'playwright-core';
+
+export const DEMO_PASSWORD = 'lockstep-demo';
+
+// The flags keep headless chromium quiet on a machine with no outside network.
+const CHROMIUM_ARGS = [
+  '--no-sandbox',
+  '--disable-gpu',
+  '--disable-quic',
+  '--no-first-run',
+  '--disable-background-networking',
+  '--disable-component-update',
+  '--disable-sync',
+];
+
+export function chromiumPath(): string {
+  const candidates = [process.env.CHROMIUM_PATH, '/usr/bin/chromium', '/usr/bin/chromium-browser'].filter(
+    (candidate): candidate is string => Boolean(candidate),
+  );
+  const found = candidates.find((candidate) => existsSync(candidate));
+  if (!found) throw new Error('No chromium found: run `node client/e2e/ensure-chromium.mjs` first.');
+  return found;
+}
+
+export interface BrowserSession {
+  context: BrowserContext;
+  page: Page;
+  close(): Promise<void>;
+}
+
+/** A fresh browser profile: one per person at the screen, so sessions never leak between them. */
+export async function openBrowser(baseUrl: string): Promise<BrowserSession> {
+  const profile = mkdtempSync(path.join(tmpdir(), 'lockstep-chromium-'));
+  const context = await chromium.launchPersistentContext(profile, {
+    executablePath: chromiumPath(),
+    headless: true,
+    args: CHROMIUM_ARGS,
+    baseURL: baseUrl,
+    viewport: { width: 1366, height: 900 },
+  });
+  context.setDefaultTimeout(10_000);
+  const page = context.pages()[0] ?? (await context.newPage());
+  return {
+    context,
+    page,
+    async close() {
+      await context.close();
+      rmSync(profile, { recursive: true, force: true });
+    },
+  };
+}
+
+export async function signIn(page: Page, username: string, password = DEMO_PASSWORD): Promise<void> {
+  await page.goto('/sign-in');
+  await page.getByLabel('Username').fill(username);
+  await page.getByLabel('Password').fill(password);
+  await page.getByRole('button', { name: 'Sign in' }).click();
+}
+
+/** Saves a screenshot under client/e2e/artifacts for a person to look at after a run. */
+export async function snapshot(page: Page, name: string): Promise<void> {
+  const directory = path.resolve(path.dirname(new URL(import.meta.url).pathname), '..', 'artifacts');
+  await page.screenshot({ path: path.join(directory, `${name}.png`), fullPage: true });
+}

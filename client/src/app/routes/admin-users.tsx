@@ -1,0 +1,9 @@
+import { UsersScreen } from '@/features/users/components/users-screen';
+import { useWards } from '@/features/wards/api/get-wards';
+import { usePageTitle } from '@/hooks/use-page-title';
+
+export function Component() {
+  usePageTitle('Users');
+  const wards = useWards();
+  return <UsersScreen wards={wards.data ?? []} wardsLoading={wards.isPending} />;
+}

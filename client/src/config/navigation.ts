@@ -1,0 +1,56 @@
+import { CLINICAL_ROLES, type Role } from '@lockstep/shared';
+import { isSafeRedirect, paths } from './paths';
+
+/** Groups of screens; each route is guarded by one of these. */
+export type Area = 'clinical' | 'admin';
+
+export const AREA_ROLES: Record<Area, readonly Role[]> = {
+  clinical: CLINICAL_ROLES,
+  admin: ['admin'],
+};
+
+export type NavIcon = 'patients' | 'users';
+
+export interface NavItem {
+  label: string;
+  href: string;
+  icon: NavIcon;
+  area: Area;
+}
+
+// In the order they appear in the left navigation. Only screens that exist are listed.
+const NAV_ITEMS: readonly NavItem[] = [
+  { label: 'Patients', href: paths.patients.getHref(), icon: 'patients', area: 'clinical' },
+  { label: 'Users', href: paths.adminUsers.getHref(), icon: 'users', area: 'admin' },
+];
+
+export function canAccess(role: Role, area: Area): boolean {
+  return AREA_ROLES[area].includes(role);
+}
+
+export function navItemsFor(role: Role): NavItem[] {
+  return NAV_ITEMS.filter((item) => canAccess(role, item.area));
+}
+
+/** Where a role lands after signing in, and where it is sent from a screen not its own. */
+export function homePathFor(role: Role): string {
+  return role === 'admin' ? paths.adminUsers.getHref() : paths.patients.getHref();
+}
+
+const ROUTE_AREAS: ReadonlyArray<{ prefix: string; area: Area }> = [
+  { prefix: paths.patients.path, area: 'clinical' },
+  { prefix: '/admin', area: 'admin' },
+];
+
+/**
+ * After sign-in: the page asked for, when this role may see it; otherwise the role's home.
+ * (A nurse signing in on a screen left open by an admin lands on Patients, not Users.)
+ */
+export function landingPathFor(role: Role, requested: string | null): string {
+  if (!isSafeRedirect(requested)) return homePathFor(role);
+  const pathname = requested.split(/[?#]/)[0];
+  const match = ROUTE_AREAS.find(
+    ({ prefix }) => pathname === prefix || pathname.startsWith(`${prefix}/`),
+  );
+  return match && canAccess(role, match.area) ? requested : homePathFor(role);
+}

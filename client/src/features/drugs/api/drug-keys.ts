@@ -1,0 +1,4 @@
+export const drugKeys = {
+  all: ['drugs'] as const,
+  lists: () => [...drugKeys.all, 'list'] as const,
+};

@@ -1,0 +1,82 @@
+import { useMemo, useState } from 'react';
+import { Anchor, EmptyState } from '@mantine/core';
+import { IconUserSearch } from '@tabler/icons-react';
+import {
+  createColumnHelper,
+  getCoreRowModel,
+  getSortedRowModel,
+  useReactTable,
+  type SortingState,
+} from '@tanstack/react-table';
+import { Link } from 'react-router-dom';
+import { ageInYears, type Patient } from '@lockstep/shared';
+import { DataTable } from '@/components/ui/data-table';
+import { paths } from '@/config/paths';
+import { formatPatientName, formatWeight } from '../utils/patient-format';
+import { RiskMarkers } from './risk-markers';
+
+const column = createColumnHelper<Patient>();
+
+const columns = [
+  column.accessor('bed', { header: 'Bed', sortingFn: 'alphanumeric' }),
+  column.accessor((patient) => formatPatientName(patient), {
+    id: 'name',
+    header: 'Name',
+    cell: ({ row, getValue }) => (
+      // The row itself takes keyboard focus; the link serves pointer and screen-reader users.
+      <Anchor component={Link} to={paths.patient.getHref(row.original.id)} tabIndex={-1} fw={500} size="sm">
+        {getValue()}
+      </Anchor>
+    ),
+  }),
+  column.accessor('mrn', { header: 'MRN' }),
+  column.accessor((patient) => ageInYears(patient.dateOfBirth), { id: 'age', header: 'Age' }),
+  column.accessor((patient) => patient.weightKg ?? undefined, {
+    id: 'weight',
+    header: 'Weight',
+    sortUndefined: 'last',
+    cell: ({ row }) => formatWeight(row.original.weightKg),
+  }),
+  column.accessor('wardName', { header: 'Ward' }),
+  column.display({
+    id: 'risks',
+    header: 'Risk markers',
+    cell: ({ row }) => <RiskMarkers patient={row.original} compact />,
+  }),
+];
+
+export interface PatientsTableProps {
+  patients: Patient[];
+  totalCount: number;
+  isLoading: boolean;
+  emptyMessage: string;
+  onOpen: (patient: Patient) => void;
+}
+
+export function PatientsTable({ patients, totalCount, isLoading, emptyMessage, onOpen }: PatientsTableProps) {
+  const [sorting, setSorting] = useState<SortingState>([{ id: 'bed', desc: false }]);
+  const table = useReactTable({
+    data: patients,
+    columns,
+    state: { sorting },
+    onSortingChange: setSorting,
+    getCoreRowModel: getCoreRowModel(),
+    getSortedRowModel: getSortedRowModel(),
+    getRowId: (patient) => String(patient.id),
+  });
+  const caption = useMemo(
+    () => (isLoading ? undefined : `Showing ${patients.length} of ${totalCount} patients`),
+    [isLoading, patients.length, totalCount],
+  );
+
+  return (
+    <DataTable
+      table={table}
+      label="Patients"
+      caption={caption}
+      isLoading={isLoading}
+      onRowOpen={onOpen}
+      empty={<EmptyState size="sm" icon={<IconUserSearch aria-hidden />} title="No patients to show" description={emptyMessage} />}
+    />
+  );
+}

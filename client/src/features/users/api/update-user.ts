@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { userSchema, type UpdateUserRequest, type User } from '@lockstep/shared';
+import { apiRequest } from '@/lib/api-client';
+import { userKeys } from './user-keys';
+
+export interface UpdateUserVariables {
+  id: number;
+  changes: UpdateUserRequest;
+}
+
+export function updateUser({ id, changes }: UpdateUserVariables): Promise<User> {
+  return apiRequest(`/users/${id}`, { method: 'PATCH', body: changes, schema: userSchema });
+}
+
+export function useUpdateUser() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateUser,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: userKeys.lists() }),
+  });
+}

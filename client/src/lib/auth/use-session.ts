@@ -1,0 +1,39 @@
+import { useCallback, useSyncExternalStore } from 'react';
+import type { SessionUser } from '@lockstep/shared';
+import { queryClient } from '../query-client';
+import { endSession, getSession, startSession, subscribeSession, type Session } from './session-store';
+
+export interface SessionState {
+  session: Session | null;
+  user: SessionUser | null;
+  signIn: (session: Session) => void;
+  signOut: () => void;
+}
+
+/**
+ * The signed-in person, read from one store outside React so that the API client (which has
+ * no React context) can end the session on a 401 and every screen follows.
+ */
+export function useSession(): SessionState {
+  const session = useSyncExternalStore(subscribeSession, getSession, () => null);
+
+  const signIn = useCallback((next: Session) => {
+    // Nothing cached for the previous person may show to the next one.
+    queryClient.clear();
+    startSession(next);
+  }, []);
+
+  const signOut = useCallback(() => {
+    endSession('signed-out');
+    queryClient.clear();
+  }, []);
+
+  return { session, user: session?.user ?? null, signIn, signOut };
+}
+
+/** For screens inside the signed-in layout, where a user is guaranteed by the route guard. */
+export function useCurrentUser(): SessionUser {
+  const { user } = useSession();
+  if (!user) throw new Error('useCurrentUser needs a signed-in user');
+  return user;
+}
