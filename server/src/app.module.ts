@@ -9,6 +9,8 @@ import { validateEnv } from './config/env.validation.js';
 import { DatabaseModule } from './database/database.module.js';
 import { DrugsModule } from './drugs/drugs.module.js';
 import { HealthModule } from './health/health.module.js';
+import { LibraryModule } from './library/library.module.js';
+import { OrdersModule } from './orders/orders.module.js';
 import { PatientsModule } from './patients/patients.module.js';
 import { UsersModule } from './users/users.module.js';
 import { WardsModule } from './wards/wards.module.js';
@@ -29,6 +31,8 @@ function clientModules(): DynamicModule[] {
     WardsModule,
     PatientsModule,
     DrugsModule,
+    LibraryModule,
+    OrdersModule,
     HealthModule,
     ...clientModules(),
   ],

@@ -44,10 +44,10 @@ describe('database', () => {
     await dataSource.destroy();
   });
 
-  it('rolls back migrations cleanly', async () => {
+  it('rolls every migration back cleanly', async () => {
     const dataSource = await openFresh();
-    await dataSource.undoLastMigration();
-    const tables = await dataSource.query(`SELECT name FROM sqlite_master WHERE type = 'table' AND name IN ('users', 'patients')`);
+    for (let i = 0; i < dataSource.migrations.length; i++) await dataSource.undoLastMigration();
+    const tables = await dataSource.query(`SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT IN ('migrations', 'sqlite_sequence')`);
     expect(tables).toEqual([]);
     await dataSource.destroy();
   });

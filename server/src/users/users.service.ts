@@ -1,4 +1,4 @@
-import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { BadRequestException, ConflictException, Injectable, NotFoundException, UnauthorizedException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { DataSource, In, type Repository } from 'typeorm';
 import type { SessionUser, User as UserResponse } from '@lockstep/shared';
@@ -21,6 +21,18 @@ export class UsersService {
     const user = await this.users.findOneBy({ username });
     const matches = await passwordMatches(password, user?.passwordHash);
     return user && matches && user.active ? toSessionUser(user) : null;
+  }
+
+  /** A signature is the caller's own password typed again; a wrong one is a 401 and nothing is signed. */
+  async verifySignature(userId: number, password: string): Promise<void> {
+    const user = await this.users.findOneBy({ id: userId, active: true });
+    if (!user || !(await passwordMatches(password, user.passwordHash))) {
+      throw new UnauthorizedException({
+        statusCode: 401,
+        message: 'The password you signed with is not correct',
+        errors: [{ field: 'signature.password', message: 'The password you signed with is not correct' }],
+      });
+    }
   }
 
   async findActiveSessionUser(id: number): Promise<SessionUser | null> {

@@ -4,6 +4,9 @@ import { z } from 'zod';
 export const fieldErrorSchema = z.object({
   field: z.string(),
   message: z.string(),
+  /** For an uploaded file: the spreadsheet row (header = 1) and column of the problem. */
+  row: z.number().int().optional(),
+  column: z.string().optional(),
 });
 export type FieldError = z.infer<typeof fieldErrorSchema>;
 

@@ -1,10 +1,13 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { Drug } from '../../drugs/entities/drug.entity.js';
+import { LibraryVersion } from '../../library/entities/library-version.entity.js';
+import { LimitRule } from '../../library/entities/limit-rule.entity.js';
 import { Patient } from '../../patients/entities/patient.entity.js';
 import { User } from '../../users/entities/user.entity.js';
 import { hashPassword } from '../../users/passwords.js';
 import { Ward } from '../../wards/entities/ward.entity.js';
 import { DEMO_DRUGS, DEMO_PATIENTS, DEMO_WARDS } from './demo-data.js';
+import { DEMO_LIBRARIES, DEMO_PENDING_CHANGE } from './demo-library.js';
 import { DEMO_PASSWORD, DEMO_STAFF } from './demo-staff.js';
 
 /** Seeds the demo scenario in one transaction, only into an empty database. Returns whether it did. */
@@ -22,11 +25,11 @@ async function seedDemoData(manager: EntityManager): Promise<void> {
   const wards = await manager.save(Ward, DEMO_WARDS.map((ward) => manager.create(Ward, ward)));
   const wardByCode = new Map(wards.map((ward) => [ward.code, ward]));
 
-  await manager.save(Drug, DEMO_DRUGS.map((drug) => manager.create(Drug, drug)));
+  const drugs = await manager.save(Drug, DEMO_DRUGS.map((drug) => manager.create(Drug, drug)));
 
   // The demo accounts share one password, so one (slow, salted) hash serves them all.
   const passwordHash = await hashPassword(DEMO_PASSWORD);
-  await manager.save(
+  const users = await manager.save(
     User,
     DEMO_STAFF.map(({ wardCodes, ...person }) =>
       manager.create(User, {
@@ -38,10 +41,61 @@ async function seedDemoData(manager: EntityManager): Promise<void> {
     ),
   );
 
+  await seedDemoLibraries(manager, wards, drugs, users);
+
   await manager.save(
     Patient,
     DEMO_PATIENTS.map(({ wardCode, ...patient }) =>
       manager.create(Patient, { ...patient, wardId: wardByCode.get(wardCode)!.id }),
     ),
+  );
+}
+
+async function seedDemoLibraries(manager: EntityManager, wards: Ward[], drugs: Drug[], users: User[]): Promise<void> {
+  const wardId = (code: string) => wards.find((ward) => ward.code === code)!.id;
+  const drugId = (name: string) => drugs.find((drug) => drug.genericName === name)!.id;
+  const author = users.find((user) => user.username === 'lin.park')!;
+  const approver = users.find((user) => user.username === 'tomas.ortiz')!;
+  const approvedAt = new Date(Date.now() - 30 * 24 * 3600 * 1000);
+
+  for (const library of DEMO_LIBRARIES) {
+    const version = await manager.save(
+      manager.create(LibraryVersion, {
+        wardId: wardId(library.wardCode),
+        number: 1,
+        status: 'active',
+        note: library.note,
+        authorId: author.id,
+        approverId: approver.id,
+        submittedAt: approvedAt,
+        approvedAt,
+      }),
+    );
+    await manager.insert(
+      LimitRule,
+      library.rules.map(({ drug, ...rule }) => ({ ...rule, versionId: version.id, drugId: drugId(drug) })),
+    );
+  }
+
+  const pending = DEMO_PENDING_CHANGE;
+  const base = DEMO_LIBRARIES.find((library) => library.wardCode === pending.wardCode)!;
+  const draft = await manager.save(
+    manager.create(LibraryVersion, {
+      wardId: wardId(pending.wardCode),
+      number: 2,
+      status: 'pending_approval',
+      note: pending.note,
+      authorId: author.id,
+      submittedAt: new Date(Date.now() - 2 * 3600 * 1000),
+    }),
+  );
+  await manager.insert(
+    LimitRule,
+    base.rules.map(({ drug, ...rule }) => ({
+      ...rule,
+      limits: drug === pending.drug ? { ...rule.limits, demandDose: pending.demandDose } : rule.limits,
+      versionId: draft.id,
+      drugId: drugId(drug),
+    })),
   );
 }

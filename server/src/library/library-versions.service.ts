@@ -1,0 +1,136 @@
+import { BadRequestException, ConflictException, ForbiddenException, Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { type DataSource, type EntityManager, In } from 'typeorm';
+import { LIBRARY_STATUS_LABELS, validateLimitRules, type LibraryStatus, type LibraryVersionDetail, type LimitRuleInput } from '@lockstep/shared';
+import type { AuthUser } from '../auth/auth-user.js';
+import { Drug } from '../drugs/entities/drug.entity.js';
+import { UsersService } from '../users/users.service.js';
+import { Ward } from '../wards/entities/ward.entity.js';
+import { toLibraryVersionDetail } from './dto/library-response.js';
+import { LibraryVersion } from './entities/library-version.entity.js';
+import { LimitRule } from './entities/limit-rule.entity.js';
+import { LibraryService } from './library.service.js';
+
+/**
+ * The library's life: draft → pending_approval → active → retired. Every change is one
+ * transaction; a second pharmacist approves, and the old active version retires in the same one.
+ */
+@Injectable()
+export class LibraryVersionsService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly library: LibraryService,
+    private readonly users: UsersService,
+  ) {}
+
+  /** A new draft for the ward, starting from a copy of its active rules (or given rules). */
+  async createDraft(wardId: number, note: string | undefined, author: AuthUser, rules?: LimitRuleInput[]): Promise<LibraryVersionDetail> {
+    return this.dataSource.transaction(async (manager) => {
+      if (!(await manager.existsBy(Ward, { id: wardId }))) {
+        throw badRequest('wardId', `No ward with id ${wardId}`);
+      }
+      const open = await manager.findOneBy(LibraryVersion, { wardId, status: In(['draft', 'pending_approval']) });
+      if (open) {
+        throw new ConflictException(
+          `This ward already has version ${open.number} (${LIBRARY_STATUS_LABELS[open.status].toLowerCase()}); finish or discard it before starting another`,
+        );
+      }
+      const active = await manager.findOne(LibraryVersion, { where: { wardId, status: 'active' }, relations: { rules: true } });
+      const last = await manager.findOne(LibraryVersion, { where: { wardId }, order: { number: 'DESC' } });
+      const draft = await manager.save(
+        manager.create(LibraryVersion, { wardId, number: (last?.number ?? 0) + 1, status: 'draft', note: note?.trim() ?? '', authorId: author.id }),
+      );
+      const startingRules = rules ?? active?.rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }) => ({ drugId, concentrationPerMl, doseUnit, perKg, limits })) ?? [];
+      await this.writeRules(manager, draft.id, startingRules);
+      return toLibraryVersionDetail(await this.library.loadVersion(manager, draft.id));
+    });
+  }
+
+  async replaceRules(id: number, rules: LimitRuleInput[]): Promise<LibraryVersionDetail> {
+    return this.dataSource.transaction(async (manager) => {
+      const version = await this.lockedVersion(manager, id, ['draft'], 'change its rules');
+      await manager.delete(LimitRule, { versionId: version.id });
+      await this.writeRules(manager, version.id, rules);
+      return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
+    });
+  }
+
+  async submit(id: number, note: string | undefined): Promise<LibraryVersionDetail> {
+    return this.dataSource.transaction(async (manager) => {
+      const version = await this.lockedVersion(manager, id, ['draft'], 'submit it');
+      if ((await manager.countBy(LimitRule, { versionId: id })) === 0) {
+        throw badRequest('rules', 'A library version needs at least one rule before it is submitted');
+      }
+      await manager.update(LibraryVersion, { id }, { status: 'pending_approval', submittedAt: new Date(), ...(note?.trim() ? { note: note.trim() } : {}) });
+      return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
+    });
+  }
+
+  /** Back to draft, for changes after a colleague's query. */
+  async withdraw(id: number): Promise<LibraryVersionDetail> {
+    return this.dataSource.transaction(async (manager) => {
+      await this.lockedVersion(manager, id, ['pending_approval'], 'withdraw it');
+      await manager.update(LibraryVersion, { id }, { status: 'draft', submittedAt: null });
+      return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
+    });
+  }
+
+  /** A draft that is not wanted is removed; versions that were ever active are kept for the record. */
+  async discard(id: number): Promise<void> {
+    await this.dataSource.transaction(async (manager) => {
+      await this.lockedVersion(manager, id, ['draft'], 'discard it');
+      await manager.delete(LibraryVersion, { id });
+    });
+  }
+
+  async approve(id: number, approver: AuthUser, password: string): Promise<LibraryVersionDetail> {
+    await this.users.verifySignature(approver.id, password);
+    return this.dataSource.transaction(async (manager) => {
+      const version = await this.lockedVersion(manager, id, ['pending_approval'], 'approve it');
+      if (version.authorId === approver.id) {
+        throw new ForbiddenException('A second pharmacist must approve: you wrote this version');
+      }
+      const now = new Date();
+      await manager.update(LibraryVersion, { wardId: version.wardId, status: 'active' }, { status: 'retired', retiredAt: now });
+      await manager.update(LibraryVersion, { id }, { status: 'active', approverId: approver.id, approvedAt: now });
+      return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
+    });
+  }
+
+  private async lockedVersion(manager: EntityManager, id: number, allowed: LibraryStatus[], action: string): Promise<LibraryVersion> {
+    const version = await this.library.loadVersion(manager, id);
+    if (!allowed.includes(version.status)) {
+      throw new ConflictException(`Version ${version.number} is ${LIBRARY_STATUS_LABELS[version.status].toLowerCase()}, so you cannot ${action}`);
+    }
+    return version;
+  }
+
+  private async writeRules(manager: EntityManager, versionId: number, rules: LimitRuleInput[]): Promise<void> {
+    const problems = validateLimitRules(rules);
+    const drugs = await manager.findBy(Drug, { id: In([...new Set(rules.map((rule) => rule.drugId))]) });
+    rules.forEach((rule, index) => {
+      const drug = drugs.find((candidate) => candidate.id === rule.drugId);
+      if (!drug) problems.push({ path: `rules.${index}.drugId`, message: `No drug with id ${rule.drugId}` });
+      else if (drug.doseUnit !== rule.doseUnit) {
+        problems.push({ path: `rules.${index}.doseUnit`, message: `${drug.genericName} is dosed in ${drug.doseUnit}, not ${rule.doseUnit}` });
+      }
+    });
+    if (problems.length > 0) {
+      throw new BadRequestException({
+        statusCode: 400,
+        message: 'Some limit rules need correcting',
+        errors: problems.map((problem) => ({ field: problem.path, message: problem.message })),
+      });
+    }
+    if (rules.length > 0) {
+      await manager.insert(
+        LimitRule,
+        rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }) => ({ versionId, drugId, concentrationPerMl, doseUnit, perKg, limits })),
+      );
+    }
+  }
+}
+
+function badRequest(field: string, message: string): BadRequestException {
+  return new BadRequestException({ statusCode: 400, message, errors: [{ field, message }] });
+}

@@ -1,0 +1,109 @@
+import { Body, Controller, Delete, Get, Header, HttpCode, Param, Post, Put, Query, Res, UploadedFile, UseFilters, UseInterceptors } from '@nestjs/common';
+import { FileInterceptor } from '@nestjs/platform-express';
+import type { Response } from 'express';
+import type { LibraryDiff, LibraryVersion, LibraryVersionDetail } from '@lockstep/shared';
+import type { AuthUser } from '../auth/auth-user.js';
+import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
+import { Roles } from '../auth/decorators/roles.decorator.js';
+import { SignedRequestDto } from '../common/dto/signature.dto.js';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
+import { CreateDraftDto } from './dto/create-draft.dto.js';
+import { ImportLibraryDto } from './dto/import-library.dto.js';
+import { LibraryQueryDto } from './dto/library-query.dto.js';
+import { ReplaceRulesDto } from './dto/replace-rules.dto.js';
+import { SubmitVersionDto } from './dto/submit-version.dto.js';
+import { type ImportPreview, LibraryCsvService, MAX_LIBRARY_CSV_BYTES, type UploadedCsv } from './library-csv.service.js';
+import { LibraryVersionsService } from './library-versions.service.js';
+import { LibraryService } from './library.service.js';
+import { UploadTooLargeFilter } from './upload-too-large.filter.js';
+
+/** Anyone signed in reads the library; only pharmacists write it. */
+@Controller('library')
+export class LibraryController {
+  constructor(
+    private readonly library: LibraryService,
+    private readonly versions: LibraryVersionsService,
+    private readonly csv: LibraryCsvService,
+  ) {}
+
+  @Get('versions')
+  list(@Query() query: LibraryQueryDto): Promise<LibraryVersion[]> {
+    return this.library.list(query.wardId);
+  }
+
+  @Get('versions/:id')
+  get(@Param('id', ParseIdPipe) id: number): Promise<LibraryVersionDetail> {
+    return this.library.getVersion(id);
+  }
+
+  @Get('versions/:id/diff')
+  diff(@Param('id', ParseIdPipe) id: number): Promise<LibraryDiff & { againstVersionId: number | null }> {
+    return this.library.diff(id);
+  }
+
+  @Get('versions/:id/export')
+  @Header('Content-Type', 'text/csv; charset=utf-8')
+  async export(@Param('id', ParseIdPipe) id: number, @Res({ passthrough: true }) response: Response): Promise<string> {
+    const { filename, csv } = await this.csv.export(id);
+    response.setHeader('Content-Disposition', `attachment; filename="${filename}"`);
+    return csv;
+  }
+
+  @Post('versions')
+  @Roles('pharmacist')
+  createDraft(@Body() body: CreateDraftDto, @CurrentUser() user: AuthUser): Promise<LibraryVersionDetail> {
+    return this.versions.createDraft(body.wardId, body.note, user);
+  }
+
+  @Put('versions/:id/rules')
+  @Roles('pharmacist')
+  replaceRules(@Param('id', ParseIdPipe) id: number, @Body() body: ReplaceRulesDto): Promise<LibraryVersionDetail> {
+    return this.versions.replaceRules(id, body.rules);
+  }
+
+  @Post('versions/:id/submit')
+  @HttpCode(200)
+  @Roles('pharmacist')
+  submit(@Param('id', ParseIdPipe) id: number, @Body() body: SubmitVersionDto): Promise<LibraryVersionDetail> {
+    return this.versions.submit(id, body.note);
+  }
+
+  @Post('versions/:id/withdraw')
+  @HttpCode(200)
+  @Roles('pharmacist')
+  withdraw(@Param('id', ParseIdPipe) id: number): Promise<LibraryVersionDetail> {
+    return this.versions.withdraw(id);
+  }
+
+  @Post('versions/:id/approve')
+  @HttpCode(200)
+  @Roles('pharmacist')
+  approve(@Param('id', ParseIdPipe) id: number, @Body() body: SignedRequestDto, @CurrentUser() user: AuthUser): Promise<LibraryVersionDetail> {
+    return this.versions.approve(id, user, body.signature.password);
+  }
+
+  @Delete('versions/:id')
+  @HttpCode(204)
+  @Roles('pharmacist')
+  discard(@Param('id', ParseIdPipe) id: number): Promise<void> {
+    return this.versions.discard(id);
+  }
+
+  /** Multipart: `file` (CSV), `wardId`, optional `note`; `dryRun=true` previews without writing. */
+  @Post('import')
+  @Roles('pharmacist')
+  @UseFilters(UploadTooLargeFilter)
+  @UseInterceptors(FileInterceptor('file', { limits: { fileSize: MAX_LIBRARY_CSV_BYTES, files: 1 } }))
+  async import(
+    @Body() body: ImportLibraryDto,
+    @UploadedFile() file: UploadedCsv | undefined,
+    @CurrentUser() user: AuthUser,
+    @Res({ passthrough: true }) response: Response,
+  ): Promise<LibraryVersionDetail | ImportPreview> {
+    if (body.dryRun) {
+      response.status(200);
+      return this.csv.preview(body.wardId, file);
+    }
+    return this.csv.import(body.wardId, file, body.note, user);
+  }
+}

@@ -1,0 +1,53 @@
+import { BadRequestException, Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { DataSource } from 'typeorm';
+import { ageInYears, checkOrder, deriveOrderValues, formatDose, tallMan, type Finding, type OrderPreview, type Regimen } from '@lockstep/shared';
+import { Drug } from '../drugs/entities/drug.entity.js';
+import { toLimitRuleResponse } from '../library/dto/library-response.js';
+import { LibraryService } from '../library/library.service.js';
+import { Patient } from '../patients/entities/patient.entity.js';
+import type { OrderFieldsDto } from './dto/order-fields.dto.js';
+
+/** Derived values and findings for an order against its ward's active library. Writes nothing. */
+@Injectable()
+export class OrderPreviewService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly library: LibraryService,
+  ) {}
+
+  async preview(fields: OrderFieldsDto): Promise<OrderPreview> {
+    const patient = await this.dataSource.manager.findOneBy(Patient, { id: fields.patientId });
+    if (!patient) throw badRequest('patientId', `No patient with id ${fields.patientId}`);
+    const drug = await this.dataSource.manager.findOneBy(Drug, { id: fields.drugId });
+    if (!drug) throw badRequest('drugId', `No drug with id ${fields.drugId}`);
+
+    const regimen: Regimen = { ...fields };
+    const factors = {
+      weightKg: patient.weightKg,
+      ageYears: ageInYears(patient.dateOfBirth),
+      opioidTolerant: patient.opioidTolerant,
+      sleepApnoea: patient.sleepApnoea,
+      otherSedatives: patient.otherSedatives,
+    };
+    const rule = await this.library.findActiveRule(patient.wardId, drug.id, fields.concentrationPerMl);
+    const findings: Finding[] = rule
+      ? checkOrder(regimen, { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits }, factors)
+      : [missingRuleFinding(drug, fields), ...checkOrder(regimen, { doseUnit: drug.doseUnit, perKg: false, limits: {} }, factors)];
+    return { derived: deriveOrderValues(regimen), findings, rule: rule ? toLimitRuleResponse(rule) : null };
+  }
+}
+
+function missingRuleFinding(drug: Drug, fields: OrderFieldsDto): Finding {
+  const concentration = formatDose(fields.concentrationPerMl, `${fields.doseUnit}/mL`);
+  return {
+    field: 'concentrationPerMl',
+    severity: 'hard',
+    code: 'library.no-rule',
+    message: `The ward's dose-limit library has no rule for ${tallMan(drug.genericName)} ${concentration}: choose a listed concentration`,
+  };
+}
+
+function badRequest(field: string, message: string): BadRequestException {
+  return new BadRequestException({ statusCode: 400, message, errors: [{ field, message }] });
+}

@@ -1,0 +1,27 @@
+import { describe, expect, it } from 'vitest';
+import { BASAL_OPIOID_NAIVE_CAUTION, CROSS_TOLERANCE_CAUTION, DECISION_SUPPORT_CAUTION } from './cautions.js';
+
+describe('caution texts', () => {
+  it('carries the decision-support wording of the product brief', () => {
+    expect(DECISION_SUPPORT_CAUTION).toBe(
+      "Decision support only: check every value against the prescriber's order, local policy and licensed clinical judgement.",
+    );
+  });
+
+  it('states the 25–50 % cross-tolerance reduction', () => {
+    // Fine & Portenoy, J Pain Symptom Manage 2009;38(3):418-425.
+    expect(CROSS_TOLERANCE_CAUTION).toContain('25–50 %');
+  });
+
+  it('limits basal infusions to opioid-tolerant patients', () => {
+    // ASHP Standardize 4 Safety, PCA standards (2023): basal rate only for opioid-tolerant patients.
+    expect(BASAL_OPIOID_NAIVE_CAUTION).toMatch(/only for opioid-tolerant patients/);
+  });
+
+  it('uses safe symbols: no µg, no cc', () => {
+    // ISMP List of Error-Prone Abbreviations, Symbols, and Dose Designations.
+    for (const text of [DECISION_SUPPORT_CAUTION, CROSS_TOLERANCE_CAUTION, BASAL_OPIOID_NAIVE_CAUTION]) {
+      expect(text).not.toMatch(/µg|μg|\bcc\b/);
+    }
+  });
+});

@@ -1,0 +1,178 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { checkOrder, hasBlockingFinding } from './check-order.js';
+import { withoutFloatNoise } from './float-noise.js';
+import { DOSE_FIELDS, REGIMEN_FIELDS } from './regimen-fields.js';
+import type { Finding, LimitRule, Limits, PatientFactors, Regimen, RegimenField } from './types.js';
+
+const codes = (findings: Finding[]) => findings.map((f) => `${f.field}:${f.code}`);
+
+// ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg demand, lockout 10 minutes,
+// at 1 mg/mL [practice; ASHP Standardize 4 Safety].
+const ashpMorphine: Regimen = { doseUnit: 'mg', concentrationPerMl: 1, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0, fourHourLimit: 30 };
+
+// Typical ranges [read, a widely used clinical reference table]: morphine demand 0.5–2 mg,
+// lockout 5–10 min, 4-hour limit 30 mg, as soft limits; hard limits illustrative, not published.
+const morphineRule: LimitRule = {
+  doseUnit: 'mg',
+  perKg: false,
+  limits: {
+    demandDose: { hardMin: 0.2, softMin: 0.5, softMax: 2, hardMax: 4 },
+    lockoutMinutes: { hardMin: 4, softMin: 5, softMax: 10 },
+    fourHourLimit: { softMax: 30 },
+  },
+};
+
+const adult: PatientFactors = { weightKg: 70, ageYears: 45, opioidTolerant: false };
+
+// Association of Paediatric Anaesthetists of Great Britain and Ireland, Good Practice in
+// Postoperative and Procedural Pain Management: morphine PCA bolus 10–20 mcg/kg, lockout 5–10 min.
+// 10–20 mcg/kg is 0.01–0.02 mg/kg (1 mg = 1000 mcg, checked against UCUM in units.spec.ts).
+const paediatricRuleMcg: LimitRule = {
+  doseUnit: 'mcg',
+  perKg: true,
+  limits: { demandDose: { hardMin: 10, hardMax: 20 }, lockoutMinutes: { hardMin: 5, softMax: 10 } },
+};
+const paediatricRuleMg: LimitRule = { ...paediatricRuleMcg, doseUnit: 'mg', limits: { demandDose: { hardMin: 0.01, hardMax: 0.02 } } };
+// Concentration illustrative.
+const childMcg: Regimen = { doseUnit: 'mcg', concentrationPerMl: 400, demandDose: 300, lockoutMinutes: 5, basalRatePerHour: 0 };
+const childMg: Regimen = { ...childMcg, doseUnit: 'mg', concentrationPerMl: 0.4, demandDose: 0.3 };
+const child20kg: PatientFactors = { weightKg: 20, ageYears: 7, opioidTolerant: false };
+
+describe('checkOrder: adult morphine', () => {
+  it('finds nothing for the ASHP starting regimen', () => {
+    expect(checkOrder(ashpMorphine, morphineRule, adult)).toEqual([]);
+  });
+
+  it('blocks a missed decimal point with a hard finding', () => {
+    const findings = checkOrder({ ...ashpMorphine, demandDose: 10 }, morphineRule, adult);
+    expect(findings).toEqual([
+      { field: 'demandDose', severity: 'hard', code: 'limit.hard-high', message: 'Demand dose 10 mg is above the hard maximum 4 mg' },
+    ]);
+    expect(hasBlockingFinding(findings)).toBe(true);
+  });
+
+  it('asks for a reason on a soft finding without blocking', () => {
+    const findings = checkOrder({ ...ashpMorphine, demandDose: 2.5 }, morphineRule, adult);
+    expect(codes(findings)).toEqual(['demandDose:limit.soft-high']);
+    expect(hasBlockingFinding(findings)).toBe(false);
+  });
+
+  it('cautions about a basal rate for an opioid-naive patient', () => {
+    // ASHP Standardize 4 Safety, PCA standards (2023): basal rate only for opioid-tolerant patients.
+    expect(codes(checkOrder({ ...ashpMorphine, basalRatePerHour: 1 }, morphineRule, adult))).toEqual([
+      'basalRatePerHour:caution.basal-opioid-naive',
+    ]);
+    expect(checkOrder({ ...ashpMorphine, basalRatePerHour: 1 }, morphineRule, { ...adult, opioidTolerant: true })).toEqual([]);
+  });
+
+  it('returns every finding, worst first', () => {
+    const r: Regimen = { ...ashpMorphine, demandDose: 3, lockoutMinutes: 3, basalRatePerHour: 1, oneHourLimit: 2 };
+    const p: PatientFactors = { ...adult, sleepApnoea: true, ageYears: 82, otherSedatives: true };
+    expect(codes(checkOrder(r, morphineRule, p))).toEqual([
+      'oneHourLimit:consistency.one-hour-limit-below-basal-and-demand',
+      'lockoutMinutes:limit.hard-low',
+      'demandDose:limit.soft-high',
+      'basalRatePerHour:caution.basal-opioid-naive',
+      'patient:caution.sleep-apnoea',
+      'patient:caution.age-70-or-over',
+      'patient:caution.other-sedatives',
+    ]);
+  });
+
+  it('gives errors, not limit findings, for numbers that cannot be right', () => {
+    const r: Regimen = { ...ashpMorphine, demandDose: Number.NaN, lockoutMinutes: 0.5, concentrationPerMl: 0, fourHourLimit: -30 };
+    expect(codes(checkOrder(r, morphineRule, adult))).toEqual([
+      'concentrationPerMl:concentration.not-positive',
+      'demandDose:number.not-finite',
+      'fourHourLimit:number.negative',
+      'lockoutMinutes:lockout.too-short',
+      'lockoutMinutes:limit.hard-low',
+    ]);
+  });
+
+  it('refuses a dose unit that differs from the rule and skips its dose limits', () => {
+    const r: Regimen = { ...ashpMorphine, doseUnit: 'mcg', demandDose: 1000, concentrationPerMl: 1000, fourHourLimit: null };
+    const findings = checkOrder(r, morphineRule, adult);
+    expect(findings).toEqual([
+      { field: 'doseUnit', severity: 'error', code: 'unit.mismatch', message: 'Dose unit mcg does not match the limit rule, which is in mg' },
+    ]);
+  });
+});
+
+describe('checkOrder: weight-based paediatric rule', () => {
+  it('accepts a bolus inside 10–20 mcg/kg', () => {
+    expect(checkOrder(childMcg, paediatricRuleMcg, child20kg)).toEqual([]); // 300 mcg ÷ 20 kg = 15 mcg/kg
+    expect(checkOrder({ ...childMcg, demandDose: 400 }, paediatricRuleMcg, child20kg)).toEqual([]); // exactly 20 mcg/kg
+  });
+
+  it('compares per kg and says so in the message', () => {
+    expect(checkOrder({ ...childMcg, demandDose: 600 }, paediatricRuleMcg, child20kg)[0].message).toBe(
+      'Demand dose 30 mcg/kg is above the hard maximum 20 mcg/kg',
+    );
+    expect(checkOrder({ ...childMg, demandDose: 0.6 }, paediatricRuleMg, child20kg)[0].message).toBe(
+      'Demand dose 0.03 mg/kg is above the hard maximum 0.02 mg/kg',
+    );
+    expect(checkOrder({ ...childMg, demandDose: 0.1 }, paediatricRuleMg, child20kg)[0].message).toBe(
+      'Demand dose 0.005 mg/kg is below the hard minimum 0.01 mg/kg',
+    );
+  });
+
+  it('counts a per-kg value equal to the limit as inside it despite float noise', () => {
+    // 0.29 mg ÷ 29 kg is 0.009999999999999998 in binary; 0.58 ÷ 29 is 0.019999999999999997.
+    expect(checkOrder({ ...childMg, demandDose: 0.29 }, paediatricRuleMg, { ...child20kg, weightKg: 29 })).toEqual([]);
+    expect(checkOrder({ ...childMg, demandDose: 0.58 }, paediatricRuleMg, { ...child20kg, weightKg: 29 })).toEqual([]);
+  });
+
+  it('does not divide the lockout by weight', () => {
+    expect(checkOrder({ ...childMcg, lockoutMinutes: 3 }, paediatricRuleMcg, child20kg)[0].message).toBe(
+      'Lockout 3 min is below the hard minimum 5 min',
+    );
+  });
+
+  it('needs a weight, and still checks the lockout without one', () => {
+    for (const weightKg of [null, undefined, 0]) {
+      const findings = checkOrder({ ...childMcg, demandDose: 600, lockoutMinutes: 3 }, paediatricRuleMcg, { ...child20kg, weightKg });
+      expect(codes(findings)).toEqual(['weightKg:weight.missing', 'lockoutMinutes:limit.hard-low']);
+    }
+    expect(codes(checkOrder(childMcg, paediatricRuleMcg, { ...child20kg, weightKg: -20 }))).toEqual(['weightKg:weight.invalid']);
+  });
+
+  it('ignores weight for a rule that is not per kg', () => {
+    expect(checkOrder(ashpMorphine, morphineRule, { ...adult, weightKg: null })).toEqual([]);
+  });
+});
+
+describe('checkOrder: properties', () => {
+  const typed = fc.integer({ min: 0, max: 100_000 }).map((n) => n / 100);
+  const limits: fc.Arbitrary<Limits> = fc.record({ hardMin: fc.option(typed, { nil: null }), hardMax: fc.option(typed, { nil: null }) });
+  const ruleLimits = fc.dictionary(fc.constantFrom(...REGIMEN_FIELDS), limits) as fc.Arbitrary<Partial<Record<RegimenField, Limits>>>;
+  const regimen: fc.Arbitrary<Regimen> = fc.record({
+    doseUnit: fc.constant('mg' as const),
+    concentrationPerMl: typed.filter((c) => c > 0),
+    loadingDose: fc.option(typed, { nil: null }),
+    demandDose: typed,
+    lockoutMinutes: typed,
+    basalRatePerHour: typed,
+    oneHourLimit: fc.option(typed, { nil: undefined }),
+    fourHourLimit: fc.option(typed, { nil: undefined }),
+    clinicianBolusDose: fc.option(typed, { nil: null }),
+  });
+
+  it('never misses a value outside a hard limit, per kg or not', () => {
+    fc.assert(
+      fc.property(regimen, ruleLimits, fc.boolean(), fc.integer({ min: 1, max: 200_000 }).map((g) => g / 1000), (r, l, perKg, weightKg) => {
+        const findings = checkOrder(r, { doseUnit: 'mg', perKg, limits: l }, { weightKg, opioidTolerant: false });
+        for (const field of REGIMEN_FIELDS) {
+          const raw = r[field];
+          const hard = l[field];
+          if (raw === null || raw === undefined || hard === undefined) continue;
+          const value = perKg && DOSE_FIELDS.includes(field) ? withoutFloatNoise(raw / weightKg) : raw;
+          const outside = (hard.hardMin != null && value < hard.hardMin) || (hard.hardMax != null && value > hard.hardMax);
+          const flagged = findings.some((f) => f.field === field && f.severity === 'hard');
+          expect(flagged, `${field} ${value} against ${JSON.stringify(hard)}`).toBe(outside);
+        }
+      }),
+    );
+  });
+});

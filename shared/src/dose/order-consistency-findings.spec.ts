@@ -1,0 +1,49 @@
+import { describe, expect, it } from 'vitest';
+import { consistencyFindings } from './order-consistency-findings.js';
+import type { Regimen } from './types.js';
+
+// ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg demand, lockout 10 minutes.
+// The limits below are arithmetic on the definitions in the brief §4.
+const ashpMorphine: Regimen = { doseUnit: 'mg', concentrationPerMl: 1, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0 };
+
+describe('consistencyFindings', () => {
+  it('accepts a consistent regimen', () => {
+    // Typical ranges [read, a widely used clinical reference table]: morphine 4-hour limit 30 mg.
+    expect(consistencyFindings({ ...ashpMorphine, oneHourLimit: 6, fourHourLimit: 30 })).toEqual([]);
+  });
+
+  it('needs a lockout of at least 1 minute', () => {
+    expect(consistencyFindings({ ...ashpMorphine, lockoutMinutes: 0.5 })).toEqual([
+      { field: 'lockoutMinutes', severity: 'error', code: 'lockout.too-short', message: 'Lockout must be at least 1 minute' },
+    ]);
+    expect(consistencyFindings({ ...ashpMorphine, lockoutMinutes: 1 })).toEqual([]);
+  });
+
+  it('needs a 1-hour limit of at least an hour of basal plus one demand dose', () => {
+    const findings = consistencyFindings({ ...ashpMorphine, basalRatePerHour: 1, oneHourLimit: 1.5 });
+    expect(findings).toEqual([
+      {
+        field: 'oneHourLimit',
+        severity: 'error',
+        code: 'consistency.one-hour-limit-below-basal-and-demand',
+        message: '1-hour limit 1.5 mg is less than an hour of basal rate plus one demand dose (2 mg)',
+      },
+    ]);
+    expect(consistencyFindings({ ...ashpMorphine, basalRatePerHour: 1, oneHourLimit: 2 })).toEqual([]);
+    // 0.1 + 0.2 is 0.30000000000000004 in binary: still exactly at the limit.
+    expect(consistencyFindings({ ...ashpMorphine, basalRatePerHour: 0.1, demandDose: 0.2, oneHourLimit: 0.3 })).toEqual([]);
+  });
+
+  it('needs a 4-hour limit of at least four hours of basal', () => {
+    const findings = consistencyFindings({ ...ashpMorphine, doseUnit: 'mcg', basalRatePerHour: 25, fourHourLimit: 90 });
+    expect(findings.map((f) => f.message)).toEqual([
+      '4-hour limit 90 mcg is less than four hours of basal rate (100 mcg)',
+    ]);
+    expect(consistencyFindings({ ...ashpMorphine, basalRatePerHour: 0.1, fourHourLimit: 0.4 })).toEqual([]);
+  });
+
+  it('skips checks that need an unusable number', () => {
+    expect(consistencyFindings({ ...ashpMorphine, basalRatePerHour: Number.NaN, oneHourLimit: 0, fourHourLimit: 0 })).toEqual([]);
+    expect(consistencyFindings({ ...ashpMorphine, lockoutMinutes: -1 })).toEqual([]);
+  });
+});

@@ -1,0 +1,35 @@
+import { describe, expect, it } from 'vitest';
+import type { LimitRuleInput } from './library.schema.js';
+import { limitOrderProblems, validateLimitRules } from './validate-limit-rules.js';
+
+// The ordering hard min ≤ soft min ≤ soft max ≤ hard max is what makes "hard blocks, soft asks for
+// a reason" coherent [read, Cummings & McGowan, Nursing 2011;41(3):58-59: hard limits cannot be
+// overridden, soft limits warn]. The values are illustrative (demo library), not published.
+const morphine: LimitRuleInput = {
+  drugId: 1,
+  concentrationPerMl: 1,
+  doseUnit: 'mg',
+  perKg: false,
+  limits: { demandDose: { hardMin: 0.2, softMin: 0.5, softMax: 2, hardMax: 4 }, lockoutMinutes: { hardMin: 5 } },
+};
+
+describe('validateLimitRules', () => {
+  it('accepts ordered limits with gaps', () => {
+    expect(validateLimitRules([morphine])).toEqual([]);
+    expect(limitOrderProblems({ hardMin: 1, hardMax: 1 }, 'x', 'Demand dose')).toEqual([]);
+  });
+
+  it('names the limit that is out of order', () => {
+    const swapped = { ...morphine, limits: { demandDose: { softMin: 0.5, softMax: 2, hardMax: 1.5 } } };
+    expect(validateLimitRules([swapped])).toEqual([
+      { path: 'rules.0.limits.demandDose.hardMax', message: 'Demand dose: the hard maximum (1.5) is below the soft maximum (2)' },
+    ]);
+  });
+
+  it('refuses two rules for one drug at one concentration, but allows another concentration', () => {
+    const other = { ...morphine, concentrationPerMl: 2 };
+    expect(validateLimitRules([morphine, other])).toEqual([]);
+    const problems = validateLimitRules([morphine, other, { ...morphine }]);
+    expect(problems).toEqual([{ path: 'rules.2.concentrationPerMl', message: 'Rule 3 repeats rule 1: one rule per drug and concentration' }]);
+  });
+});
