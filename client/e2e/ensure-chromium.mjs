@@ -23,7 +23,7 @@ if (!isRoot || !hasApt) {
 console.log(`No chromium found; installing Debian's chromium (${command}) ...`);
 const env = { ...process.env, DEBIAN_FRONTEND: 'noninteractive' };
 execFileSync('apt-get', ['update'], { stdio: 'inherit', env });
-execFileSync('apt-get', ['install', '-y', '--no-install-recommends', 'chromium'], { stdio: 'inherit', env });
+execFileSync('apt-get', ['install', '-y', 'chromium'], { stdio: 'inherit', env });
 
 if (!found()) {
   console.error('apt-get finished but no chromium binary was found at /usr/bin/chromium.');

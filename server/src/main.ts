@@ -1,27 +1,24 @@
 import 'reflect-metadata';
 import { Logger } from '@nestjs/common';
-import { ConfigService } from '@nestjs/config';
 import { NestFactory } from '@nestjs/core';
-import { AppModule } from './app.module.js';
 import { configureApp } from './app.setup.js';
-import { clientDistPath } from './config/paths.js';
-import { DEMO_JWT_SECRET, type Env } from './config/env.validation.js';
+import { DEMO_JWT_SECRET, validateEnv } from './config/env.validation.js';
+import { clientDistPath, fromRepoRoot } from './config/paths.js';
 
 async function bootstrap(): Promise<void> {
-  const app = configureApp(await NestFactory.create(AppModule, { bodyParser: true }));
-  const config = app.get<ConfigService<Env, true>>(ConfigService);
+  // Check the settings before AppModule is imported (ConfigModule validates at import), so a bad
+  // setting prints a short list instead of a stack trace.
+  const env = validateEnv(process.env);
+  const { AppModule } = await import('./app.module.js');
+  const app = configureApp(await NestFactory.create(AppModule));
   const logger = new Logger('Lockstep');
-  if (config.get('JWT_SECRET', { infer: true }) === DEMO_JWT_SECRET) {
-    logger.warn('Using the DEMO JWT secret. Set JWT_SECRET before any real use.');
-  }
+  if (env.JWT_SECRET === DEMO_JWT_SECRET) logger.warn('Using the DEMO JWT secret. Set JWT_SECRET before any real use.');
   if (!clientDistPath()) logger.warn('No built client found (client/dist): serving the API only.');
-  const port = config.get('PORT', { infer: true });
-  await app.listen(port);
-  logger.log(`Lockstep is listening on http://localhost:${port} (database ${config.get('DATABASE_PATH', { infer: true })})`);
+  await app.listen(env.PORT);
+  logger.log(`Lockstep is listening on http://localhost:${env.PORT} (database ${fromRepoRoot(env.DATABASE_PATH)})`);
 }
 
 bootstrap().catch((error: unknown) => {
-  // Config errors are already a readable list; print them without a stack.
   console.error(error instanceof Error ? error.message : error);
   process.exit(1);
 });

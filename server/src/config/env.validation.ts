@@ -12,10 +12,15 @@ const booleanFlag = z
 export const envSchema = z
   .object({
     NODE_ENV: z.enum(['development', 'production', 'test']).default('development'),
-    PORT: z.coerce.number().int().min(1).max(65535).default(3000),
+    PORT: z.coerce.number({ error: 'must be a port number' }).int().min(1).max(65535, 'must be at most 65535').default(3000),
     DATABASE_PATH: z.string().min(1).default('server/data/lockstep.sqlite'),
     JWT_SECRET: z.string().min(16, 'must be at least 16 characters').default(DEMO_JWT_SECRET),
-    JWT_EXPIRES_IN_SECONDS: z.coerce.number().int().min(60).max(7 * 24 * 3600).default(8 * 3600),
+    JWT_EXPIRES_IN_SECONDS: z.coerce
+      .number({ error: 'must be a number of seconds' })
+      .int()
+      .min(60, 'must be at least 60 seconds')
+      .max(7 * 24 * 3600, 'must be at most 7 days')
+      .default(8 * 3600),
     DEMO: booleanFlag.default(true),
     CLIENT_DIST_PATH: z.string().optional(),
   })
