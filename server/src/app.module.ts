@@ -10,8 +10,10 @@ import { DatabaseModule } from './database/database.module.js';
 import { DrugsModule } from './drugs/drugs.module.js';
 import { HealthModule } from './health/health.module.js';
 import { LibraryModule } from './library/library.module.js';
+import { MailModule } from './mail/mail.module.js';
 import { OrdersModule } from './orders/orders.module.js';
 import { PatientsModule } from './patients/patients.module.js';
+import { ReleasesModule } from './releases/releases.module.js';
 import { UsersModule } from './users/users.module.js';
 import { WardsModule } from './wards/wards.module.js';
 
@@ -31,8 +33,10 @@ function clientModules(): DynamicModule[] {
     WardsModule,
     PatientsModule,
     DrugsModule,
+    MailModule,
     LibraryModule,
     OrdersModule,
+    ReleasesModule,
     HealthModule,
     ...clientModules(),
   ],

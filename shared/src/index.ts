@@ -33,3 +33,6 @@ export * from './library/diff-library.js';
 export * from './library/library-csv.js';
 export * from './orders/order-fields.schema.js';
 export * from './orders/derive-order-values.js';
+export * from './orders/order-status.js';
+export * from './orders/order.schema.js';
+export * from './orders/release-code.js';

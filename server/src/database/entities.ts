@@ -1,9 +1,13 @@
 import { Drug } from '../drugs/entities/drug.entity.js';
 import { LibraryVersion } from '../library/entities/library-version.entity.js';
 import { LimitRule } from '../library/entities/limit-rule.entity.js';
+import { MailboxMessage } from '../mail/entities/mailbox-message.entity.js';
+import { OrderEvent } from '../orders/entities/order-event.entity.js';
+import { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { Patient } from '../patients/entities/patient.entity.js';
+import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
 import { User } from '../users/entities/user.entity.js';
 import { Ward } from '../wards/entities/ward.entity.js';
 
 /** Every entity, for the data source used outside Nest (migrations, reset, schema check). */
-export const ENTITIES = [Ward, User, Patient, Drug, LibraryVersion, LimitRule];
+export const ENTITIES = [Ward, User, Patient, Drug, LibraryVersion, LimitRule, PcaOrder, OrderEvent, SyringeRelease, MailboxMessage];

@@ -1,9 +1,10 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
-import { ageInYears, checkOrder, deriveOrderValues, formatDose, tallMan, type Finding, type OrderPreview, type Regimen } from '@lockstep/shared';
+import { ageInYears, checkOrder, deriveOrderValues, formatDose, tallMan, type Finding, type OrderDerivedValues, type OrderPreview, type Regimen } from '@lockstep/shared';
 import { Drug } from '../drugs/entities/drug.entity.js';
 import { toLimitRuleResponse } from '../library/dto/library-response.js';
+import type { LimitRule } from '../library/entities/limit-rule.entity.js';
 import { LibraryService } from '../library/library.service.js';
 import { Patient } from '../patients/entities/patient.entity.js';
 import type { OrderFieldsDto } from './dto/order-fields.dto.js';
@@ -17,6 +18,12 @@ export class OrderPreviewService {
   ) {}
 
   async preview(fields: OrderFieldsDto): Promise<OrderPreview> {
+    const { derived, findings, rule } = await this.evaluate(fields);
+    return { derived, findings, rule: rule ? toLimitRuleResponse(rule) : null };
+  }
+
+  /** Everything signing needs: the patient, drug, active rule, findings and derived values. */
+  async evaluate(fields: OrderFieldsDto): Promise<OrderEvaluation> {
     const patient = await this.dataSource.manager.findOneBy(Patient, { id: fields.patientId });
     if (!patient) throw badRequest('patientId', `No patient with id ${fields.patientId}`);
     const drug = await this.dataSource.manager.findOneBy(Drug, { id: fields.drugId });
@@ -34,9 +41,17 @@ export class OrderPreviewService {
     const findings: Finding[] = rule
       ? checkOrder(regimen, { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits }, factors)
       : [missingRuleFinding(drug, fields), ...checkOrder(regimen, { doseUnit: drug.doseUnit, perKg: false, limits: {} }, factors)];
-    return { derived: deriveOrderValues(regimen), findings, rule: rule ? toLimitRuleResponse(rule) : null };
+    return { patient, drug, rule, findings, derived: deriveOrderValues(regimen) };
   }
 }
+
+export type OrderEvaluation = {
+  patient: Patient;
+  drug: Drug;
+  rule: LimitRule | null;
+  findings: Finding[];
+  derived: OrderDerivedValues;
+};
 
 function missingRuleFinding(drug: Drug, fields: OrderFieldsDto): Finding {
   const concentration = formatDose(fields.concentrationPerMl, `${fields.doseUnit}/mL`);

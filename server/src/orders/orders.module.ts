@@ -1,11 +1,15 @@
 import { Module } from '@nestjs/common';
 import { LibraryModule } from '../library/library.module.js';
+import { UsersModule } from '../users/users.module.js';
 import { OrderPreviewService } from './order-preview.service.js';
+import { OrderReviewService } from './order-review.service.js';
 import { OrdersController } from './orders.controller.js';
+import { OrdersService } from './orders.service.js';
 
 @Module({
-  imports: [LibraryModule],
+  imports: [LibraryModule, UsersModule],
   controllers: [OrdersController],
-  providers: [OrderPreviewService],
+  providers: [OrderPreviewService, OrdersService, OrderReviewService],
+  exports: [OrdersService],
 })
 export class OrdersModule {}

@@ -32,9 +32,15 @@ export class AllExceptionsFilter implements ExceptionFilter {
       const statusCode = exception.getStatus();
       const raw = exception.getResponse();
       if (typeof raw === 'string') return { statusCode, message: raw };
-      const { message, errors } = raw as { message?: unknown; errors?: FieldError[] };
+      // Extra keys a service adds (e.g. `currentStatus` on a 409) pass through; Nest's `error` does not.
+      const { message, errors, error: _error, statusCode: _statusCode, ...extra } = raw as {
+        message?: unknown;
+        errors?: FieldError[];
+        error?: unknown;
+        statusCode?: unknown;
+      };
       const text = Array.isArray(message) ? message.join('; ') : typeof message === 'string' ? message : exception.message;
-      return errors ? { statusCode, message: text, errors } : { statusCode, message: text };
+      return { statusCode, message: text, ...(errors ? { errors } : {}), ...extra };
     }
     const status = (exception as { status?: unknown; type?: unknown })?.status;
     if (typeof status === 'number' && status >= 400 && status < 500) {

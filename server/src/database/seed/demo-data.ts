@@ -4,11 +4,16 @@ import type { DoseUnit, Sex } from '@lockstep/shared';
 
 export const DEMO_HOSPITAL = 'Kestrel Bay Hospital';
 
+const wardMail = (ward: string) => ({
+  pharmacyEmail: `pharmacy.${ward}@kestrelbay.example`,
+  nurseInChargeEmail: `nurse-in-charge.${ward}@kestrelbay.example`,
+});
+
 export const DEMO_WARDS = [
-  { code: 'HAR', name: 'Harbour', specialty: 'General surgery', weightBasedDosing: false },
-  { code: 'CED', name: 'Cedar', specialty: 'Orthopaedics', weightBasedDosing: false },
-  { code: 'WRE', name: 'Wren', specialty: 'Paediatrics', weightBasedDosing: true },
-  { code: 'SUM', name: 'Summit', specialty: 'High dependency', weightBasedDosing: false },
+  { code: 'HAR', name: 'Harbour', specialty: 'General surgery', weightBasedDosing: false, ...wardMail('harbour') },
+  { code: 'CED', name: 'Cedar', specialty: 'Orthopaedics', weightBasedDosing: false, ...wardMail('cedar') },
+  { code: 'WRE', name: 'Wren', specialty: 'Paediatrics', weightBasedDosing: true, ...wardMail('wren') },
+  { code: 'SUM', name: 'Summit', specialty: 'High dependency', weightBasedDosing: false, ...wardMail('summit') },
 ];
 
 export const DEMO_DRUGS: { genericName: string; doseUnit: DoseUnit }[] = [

@@ -35,6 +35,7 @@ async function seedDemoData(manager: EntityManager): Promise<void> {
       manager.create(User, {
         ...person,
         passwordHash,
+        email: `${person.username}@kestrelbay.example`,
         active: true,
         wards: wardCodes.map((code) => wardByCode.get(code)!),
       }),

@@ -16,6 +16,10 @@ export class User {
   @Column({ type: 'varchar', length: 20 })
   role: Role;
 
+  /** For notices about this person's own work (a returned order, say); may be empty. */
+  @Column({ type: 'varchar', length: 200, default: '' })
+  email: string;
+
   @Column({ type: 'varchar', length: 100 })
   passwordHash: string;
 

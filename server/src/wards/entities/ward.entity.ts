@@ -17,4 +17,12 @@ export class Ward {
   /** Paediatric wards check doses per kg of body weight. */
   @Column({ type: 'boolean', default: false })
   weightBasedDosing: boolean;
+
+  /** Where new orders awaiting verification and reconciliation alerts are e-mailed. */
+  @Column({ type: 'varchar', length: 200, default: '' })
+  pharmacyEmail: string;
+
+  /** Where released syringes and urgent flags are e-mailed. */
+  @Column({ type: 'varchar', length: 200, default: '' })
+  nurseInChargeEmail: string;
 }

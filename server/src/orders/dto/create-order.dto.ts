@@ -1,0 +1,37 @@
+import { Type } from 'class-transformer';
+import { ArrayMaxSize, IsArray, IsDefined, IsISO8601, IsObject, IsString, MaxLength, MinLength, ValidateNested } from 'class-validator';
+import { MIN_REASON_LENGTH, type CreateOrderRequest, type Override } from '@lockstep/shared';
+import { SignatureDto } from '../../common/dto/signature.dto.js';
+import { OrderFieldsDto } from './order-fields.dto.js';
+
+export class OverrideDto implements Override {
+  @MaxLength(64, { message: 'field is at most 64 characters' })
+  @IsString({ message: 'field must name the order field' })
+  @IsDefined({ message: 'field is required' })
+  field: string;
+
+  @MaxLength(1000, { message: 'The reason is at most 1,000 characters' })
+  @MinLength(MIN_REASON_LENGTH, { message: `Give a reason of at least ${MIN_REASON_LENGTH} characters` })
+  @IsString({ message: 'reason must be text' })
+  @IsDefined({ message: 'Give a reason for going past the soft limit' })
+  reason: string;
+}
+
+export class CreateOrderDto extends OrderFieldsDto implements CreateOrderRequest {
+  @IsISO8601({ strict: true }, { message: 'Enter the review date (yyyy-mm-dd)' })
+  @IsDefined({ message: 'Enter the review date' })
+  reviewDate: string;
+
+  @ValidateNested({ each: true })
+  @Type(() => OverrideDto)
+  @ArrayMaxSize(20, { message: 'At most 20 overrides' })
+  @IsArray({ message: 'overrides must be a list of {field, reason}' })
+  @IsDefined({ message: 'overrides is required (an empty list when there are no soft findings)' })
+  overrides: OverrideDto[];
+
+  @ValidateNested()
+  @Type(() => SignatureDto)
+  @IsObject({ message: 'signature must be an object with your password' })
+  @IsDefined({ message: 'Sign with your password' })
+  signature: SignatureDto;
+}

@@ -1,0 +1,10 @@
+import { IsDefined, IsString, MaxLength, MinLength } from 'class-validator';
+import { MIN_REASON_LENGTH, type ReasonRequest } from '@lockstep/shared';
+
+export class ReasonDto implements ReasonRequest {
+  @MaxLength(1000, { message: 'The reason is at most 1,000 characters' })
+  @MinLength(MIN_REASON_LENGTH, { message: `Give a reason of at least ${MIN_REASON_LENGTH} characters` })
+  @IsString({ message: 'reason must be text' })
+  @IsDefined({ message: 'Give a reason' })
+  reason: string;
+}

@@ -1,0 +1,145 @@
+import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { type DataSource, type EntityManager, In } from 'typeorm';
+import type { Finding, OrderDetail, OrderStatus, OrderSummary } from '@lockstep/shared';
+import type { AuthUser } from '../auth/auth-user.js';
+import { toLimitRuleResponse } from '../library/dto/library-response.js';
+import { MailService } from '../mail/mail.service.js';
+import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
+import { UsersService } from '../users/users.service.js';
+import type { CreateOrderDto } from './dto/create-order.dto.js';
+import { ORDER_SUMMARY_RELATIONS, toOrderDetail, toOrderSummary } from './dto/order-response.js';
+import type { OrderQueryDto } from './dto/order-query.dto.js';
+import { OrderEvent } from './entities/order-event.entity.js';
+import { PcaOrder } from './entities/pca-order.entity.js';
+import { orderAwaitingVerificationMail } from './order-notifications.js';
+import { OrderPreviewService } from './order-preview.service.js';
+import { statusConflict, transitionOrder } from './order-transitions.js';
+
+const DETAIL_RELATIONS = { ...ORDER_SUMMARY_RELATIONS, verifiedBy: true } as const;
+
+/** Signing, revising, cancelling and reading PCA orders. */
+@Injectable()
+export class OrdersService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly previews: OrderPreviewService,
+    private readonly users: UsersService,
+    private readonly mail: MailService,
+  ) {}
+
+  /** The server re-checks the order itself; hard and error findings refuse it, soft ones need a reason. */
+  async create(dto: CreateOrderDto, prescriber: AuthUser, revising?: number): Promise<OrderDetail> {
+    await this.users.verifySignature(prescriber.id, dto.signature.password);
+    const { findings, rule } = await this.previews.evaluate(dto);
+    const overrides = checkSignable(findings, dto);
+
+    const id = await this.dataSource.transaction(async (manager) => {
+      const previous = revising === undefined ? null : await this.revisable(manager, revising, dto.patientId);
+      const now = new Date();
+      const { identifiers } = await manager.insert(PcaOrder, {
+        patientId: dto.patientId,
+        prescriberId: prescriber.id,
+        drugId: dto.drugId,
+        status: 'awaiting_verification',
+        regimenType: dto.basalRatePerHour > 0 ? 'demand_basal' : 'demand_only',
+        version: previous ? previous.version + 1 : 1,
+        supersedesId: previous?.id ?? null,
+        concentrationPerMl: dto.concentrationPerMl,
+        doseUnit: dto.doseUnit,
+        loadingDose: dto.loadingDose ?? null,
+        demandDose: dto.demandDose,
+        lockoutMinutes: dto.lockoutMinutes,
+        basalRatePerHour: dto.basalRatePerHour,
+        oneHourLimit: dto.oneHourLimit ?? null,
+        fourHourLimit: dto.fourHourLimit ?? null,
+        clinicianBolusDose: dto.clinicianBolusDose ?? null,
+        indication: dto.indication?.trim() ?? '',
+        reviewDate: dto.reviewDate,
+        ruleSnapshot: rule ? toLimitRuleResponse(rule) : null,
+        findingsSnapshot: findings,
+        overrides,
+        signedAt: now,
+        statusChangedAt: now,
+        statusReason: null,
+      });
+      const orderId = identifiers[0].id as number;
+      await manager.insert(OrderEvent, { orderId, fromStatus: null, toStatus: 'awaiting_verification', userId: prescriber.id, at: now, reason: previous ? `Revision of order ${previous.id}` : null });
+      if (previous) await transitionOrder(manager, previous, 'superseded', prescriber.id, `Revised as order ${orderId}`);
+      return orderId;
+    });
+
+    const order = await this.get(id);
+    const entity = await this.load(this.dataSource.manager, id);
+    this.mail.send(orderAwaitingVerificationMail(entity));
+    return order;
+  }
+
+  async cancel(id: number, reason: string, user: AuthUser): Promise<OrderDetail> {
+    await this.dataSource.transaction(async (manager) => {
+      const order = await this.load(manager, id);
+      await transitionOrder(manager, order, 'cancelled', user.id, reason);
+    });
+    return this.get(id);
+  }
+
+  async list(query: OrderQueryDto, user: AuthUser): Promise<OrderSummary[]> {
+    const orders = await this.dataSource.manager.find(PcaOrder, {
+      where: {
+        ...(query.status ? { status: In(query.status) } : {}),
+        ...(query.patientId ? { patientId: query.patientId } : {}),
+        ...(query.wardId ? { patient: { wardId: query.wardId } } : {}),
+        ...(query.mine ? { prescriberId: user.id } : {}),
+      },
+      relations: ORDER_SUMMARY_RELATIONS,
+      order: { id: 'DESC' },
+      take: 1000,
+    });
+    return orders.map(toOrderSummary);
+  }
+
+  async get(id: number): Promise<OrderDetail> {
+    const manager = this.dataSource.manager;
+    const order = await this.load(manager, id);
+    const events = await manager.find(OrderEvent, { where: { orderId: id }, relations: { user: true }, order: { id: 'ASC' } });
+    const releases = await manager.find(SyringeRelease, { where: { orderId: id }, relations: { releasedBy: true }, order: { id: 'ASC' } });
+    return toOrderDetail(order, events, releases);
+  }
+
+  async load(manager: EntityManager, id: number): Promise<PcaOrder> {
+    const order = await manager.findOne(PcaOrder, { where: { id }, relations: DETAIL_RELATIONS });
+    if (!order) throw new NotFoundException(`No order with id ${id}`);
+    return order;
+  }
+
+  private async revisable(manager: EntityManager, id: number, patientId: number): Promise<PcaOrder> {
+    const previous = await this.load(manager, id);
+    if (previous.status !== 'returned') throw statusConflict(previous.status, 'superseded' satisfies OrderStatus);
+    if (previous.patientId !== patientId) {
+      throw new BadRequestException({ statusCode: 400, message: 'A revision is for the same patient', errors: [{ field: 'patientId', message: 'A revision is for the same patient as the order it revises' }] });
+    }
+    return previous;
+  }
+}
+
+/** Refuses hard and error findings; demands a reason for each soft one. Answers the overrides to keep. */
+function checkSignable(findings: Finding[], dto: CreateOrderDto): CreateOrderDto['overrides'] {
+  const blocking = findings.filter((finding) => finding.severity === 'hard' || finding.severity === 'error');
+  if (blocking.length > 0) {
+    throw new BadRequestException({
+      statusCode: 400,
+      message: 'This order cannot be signed: correct the values outside the hard limits',
+      errors: blocking.map((finding) => ({ field: finding.field, message: finding.message })),
+    });
+  }
+  const soft = findings.filter((finding) => finding.severity === 'soft');
+  const unexplained = soft.filter((finding) => !dto.overrides.some((override) => override.field === finding.field));
+  if (unexplained.length > 0) {
+    throw new BadRequestException({
+      statusCode: 400,
+      message: 'Give a reason for each value outside a soft limit',
+      errors: unexplained.map((finding) => ({ field: finding.field, message: `Reason needed: ${finding.message}` })),
+    });
+  }
+  return dto.overrides.filter((override) => soft.some((finding) => finding.field === override.field)).map(({ field, reason }) => ({ field, reason: reason.trim() }));
+}

@@ -1,0 +1,45 @@
+import { IsDefined, IsISO8601, IsNumber, IsOptional, IsPositive, IsString, Max, MaxLength, MinLength } from 'class-validator';
+import { MIN_REASON_LENGTH, type CreateReleaseRequest } from '@lockstep/shared';
+
+const finite = { allowNaN: false, allowInfinity: false };
+
+export class CreateReleaseDto implements CreateReleaseRequest {
+  @IsPositive({ message: 'Concentration must be more than 0' })
+  @IsNumber(finite, { message: 'Concentration must be a number' })
+  @IsDefined({ message: 'Enter the concentration on the label' })
+  concentrationPerMl: number;
+
+  @Max(100, { message: 'A PCA syringe holds at most 100 mL' })
+  @IsPositive({ message: 'Volume must be more than 0' })
+  @IsNumber(finite, { message: 'Volume must be a number of mL' })
+  @IsDefined({ message: 'Enter the syringe volume in mL' })
+  volumeMl: number;
+
+  @MaxLength(40, { message: 'Batch is at most 40 characters' })
+  @MinLength(1, { message: 'Enter the batch' })
+  @IsString({ message: 'Batch must be text' })
+  @IsDefined({ message: 'Enter the batch' })
+  batch: string;
+
+  @IsISO8601({ strict: true }, { message: 'Enter the expiry as a date and time' })
+  @IsDefined({ message: 'Enter the expiry' })
+  expiresAt: string;
+
+  @MaxLength(120, { message: 'At most 120 characters' })
+  @MinLength(1, { message: 'Enter who prepared the syringe' })
+  @IsString({ message: 'preparedBy must be text' })
+  @IsDefined({ message: 'Enter who prepared the syringe' })
+  preparedBy: string;
+
+  @MaxLength(120, { message: 'At most 120 characters' })
+  @MinLength(1, { message: 'Enter who checked the syringe' })
+  @IsString({ message: 'checkedBy must be text' })
+  @IsDefined({ message: 'Enter who checked the syringe' })
+  checkedBy: string;
+
+  @MaxLength(1000, { message: 'The reason is at most 1,000 characters' })
+  @MinLength(MIN_REASON_LENGTH, { message: `Give a reason of at least ${MIN_REASON_LENGTH} characters` })
+  @IsString({ message: 'overrideReason must be text' })
+  @IsOptional()
+  overrideReason?: string;
+}

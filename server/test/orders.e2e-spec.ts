@@ -1,0 +1,177 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { waitForMail } from './support/mailbox.js';
+import { createTestApp, DEMO_PASSWORD, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
+
+type Role = keyof typeof DEMO_USER_BY_ROLE;
+const ROLES = Object.keys(DEMO_USER_BY_ROLE) as Role[];
+
+// Patient 1: adult on Harbour; drug 1 morphine. ASHP Standardize 4 Safety, PCA standards (2023):
+// morphine 1 mg/mL, demand 1 mg, lockout 10 min. Limits met are the demo library's (invented).
+const ORDER = {
+  patientId: 1,
+  drugId: 1,
+  concentrationPerMl: 1,
+  doseUnit: 'mg',
+  demandDose: 1,
+  lockoutMinutes: 10,
+  basalRatePerHour: 0,
+  fourHourLimit: 30,
+  indication: 'Pain after open abdominal surgery',
+  reviewDate: '2030-01-02',
+  overrides: [] as { field: string; reason: string }[],
+  signature: { password: DEMO_PASSWORD },
+};
+const SOFT = { ...ORDER, demandDose: 2.5, overrides: [{ field: 'demandDose', reason: 'Opioid use before surgery; pain team agreed' }] };
+const RELEASE = { concentrationPerMl: 1, volumeMl: 50, batch: 'KB-24-0117', expiresAt: '2030-01-01T12:00:00Z', preparedBy: 'Lin Park', checkedBy: 'Tomas Ortiz' };
+
+describe('orders, verification and syringe release', () => {
+  let t: TestApp;
+  const tokens = {} as Record<Role, string>;
+  let tomas: string;
+  const as = (role: Role) => ({ Authorization: `Bearer ${tokens[role]}` });
+  const sign = (body: object) => request(t.http).post('/api/orders').set(as('prescriber')).send(body);
+  const act = (id: number, action: string, body: object, role: Role = 'pharmacist') =>
+    request(t.http).post(`/api/orders/${id}/${action}`).set(as(role)).send(body);
+  const orderCount = async () => (await request(t.http).get('/api/orders').set(as('pharmacist'))).body.length as number;
+
+  beforeAll(async () => {
+    t = await createTestApp();
+    for (const role of ROLES) tokens[role] = await t.tokenFor(DEMO_USER_BY_ROLE[role]);
+    tomas = await t.tokenFor('tomas.ortiz');
+  });
+  afterAll(() => t.close());
+
+  describe('signing', () => {
+    it('signs an order with one soft override, keeps the findings and reason, and tells pharmacy', async () => {
+      const response = await sign(SOFT).expect(201);
+      expect(response.body).toMatchObject({ status: 'awaiting_verification', version: 1, regimenType: 'demand_only', prescriberName: 'Dr Amara Osei', wardName: 'Harbour' });
+      expect(response.body.findings.map((f: { field: string; severity: string }) => [f.field, f.severity])).toEqual([['demandDose', 'soft']]);
+      expect(response.body.overrides).toEqual(SOFT.overrides);
+      expect(response.body.events).toMatchObject([{ fromStatus: null, toStatus: 'awaiting_verification', userName: 'Dr Amara Osei' }]);
+      const mail = await waitForMail(t.http, tokens.admin, (m) => m.subject.includes(`PCA order ${response.body.id} awaiting verification`));
+      expect(mail.to).toBe('pharmacy.harbour@kestrelbay.example');
+      expect(mail.text).toContain('demand 2.5 mg');
+    });
+
+    it('refuses a soft finding without a reason: 400 naming the field, nothing written', async () => {
+      const before = await orderCount();
+      const response = await sign({ ...SOFT, overrides: [] }).expect(400);
+      expect(response.body.errors).toEqual([{ field: 'demandDose', message: expect.stringContaining('Reason needed') }]);
+      expect(await orderCount()).toBe(before);
+    });
+
+    it('refuses a hard finding (a missed decimal point) even with a reason', async () => {
+      const response = await sign({ ...ORDER, demandDose: 10, overrides: [{ field: 'demandDose', reason: 'I really mean ten milligrams' }] }).expect(400);
+      expect(response.body.errors[0]).toMatchObject({ field: 'demandDose' });
+    });
+
+    it('refuses a wrong signature password with 401 and writes nothing', async () => {
+      const before = await orderCount();
+      await sign({ ...ORDER, signature: { password: 'wrong-password' } }).expect(401);
+      expect(await orderCount()).toBe(before);
+    });
+
+    it.each([
+      [{ ...ORDER, reviewDate: 'soon' }, 'reviewDate'],
+      [{ ...ORDER, signature: undefined }, 'signature'],
+      [{ ...ORDER, overrides: [{ field: 'demandDose', reason: 'ok' }] }, 'overrides.0.reason'],
+      [{ ...ORDER, lockoutMinutes: 0.5 }, 'lockoutMinutes'],
+    ])('answers bad input with 400 naming the field (%#)', async (body, field) => {
+      const response = await sign(body).expect(400);
+      expect(response.body.errors.map((e: { field: string }) => e.field)).toContain(field);
+    });
+
+    it.each(['pharmacist', 'nurse', 'charge_nurse', 'admin'] as Role[])('refuses %s as a signer (403)', async (role) => {
+      await request(t.http).post('/api/orders').set(as(role)).send(ORDER).expect(403);
+    });
+
+    it('answers 401 without a token on every order route', async () => {
+      await request(t.http).post('/api/orders').send(ORDER).expect(401);
+      await request(t.http).get('/api/orders').expect(401);
+      await request(t.http).get('/api/orders/1').expect(401);
+      await request(t.http).post('/api/orders/1/verify').send({}).expect(401);
+    });
+  });
+
+  describe('verification', () => {
+    it('verifies once: prescriber and nurse 403, wrong password 401, twice 409 with the current status', async () => {
+      const { body: order } = await sign(ORDER).expect(201);
+      await act(order.id, 'verify', { signature: { password: DEMO_PASSWORD } }, 'prescriber').expect(403);
+      await act(order.id, 'verify', { signature: { password: DEMO_PASSWORD } }, 'nurse').expect(403);
+      await act(order.id, 'verify', { signature: { password: 'nope' } }).expect(401);
+      const verified = await act(order.id, 'verify', { signature: { password: DEMO_PASSWORD } }).expect(200);
+      expect(verified.body).toMatchObject({ status: 'verified', verifiedByName: 'Lin Park' });
+      const again = await request(t.http).post(`/api/orders/${order.id}/verify`).set({ Authorization: `Bearer ${tomas}` }).send({ signature: { password: DEMO_PASSWORD } }).expect(409);
+      expect(again.body).toMatchObject({ currentStatus: 'verified' });
+    });
+
+    it('returns with a query → the prescriber is e-mailed → revises as version 2 → the old one is superseded', async () => {
+      const { body: order } = await sign(ORDER).expect(201);
+      await act(order.id, 'return', { reason: 'short' }).expect(400);
+      const returned = await act(order.id, 'return', { reason: 'Please confirm the 4-hour limit with the pain team' }).expect(200);
+      expect(returned.body).toMatchObject({ status: 'returned', statusReason: 'Please confirm the 4-hour limit with the pain team' });
+      const mail = await waitForMail(t.http, tokens.admin, (m) => m.subject === `PCA order ${order.id} returned with a query`);
+      expect(mail.to).toBe('amara.osei@kestrelbay.example');
+
+      await request(t.http).post(`/api/orders/${order.id}/revise`).set(as('prescriber')).send({ ...ORDER, patientId: 2 }).expect(400);
+      const revised = await request(t.http).post(`/api/orders/${order.id}/revise`).set(as('prescriber')).send({ ...ORDER, fourHourLimit: 25 }).expect(201);
+      expect(revised.body).toMatchObject({ version: 2, supersedesId: order.id, status: 'awaiting_verification', fourHourLimit: 25 });
+      const old = await request(t.http).get(`/api/orders/${order.id}`).set(as('pharmacist')).expect(200);
+      expect(old.body.status).toBe('superseded');
+      expect(old.body.events.map((e: { toStatus: string }) => e.toStatus)).toEqual(['awaiting_verification', 'returned', 'superseded']);
+      await request(t.http).post(`/api/orders/${order.id}/revise`).set(as('prescriber')).send(ORDER).expect(409);
+    });
+
+    it('rejects with a reason, and an ended order cannot be cancelled (409)', async () => {
+      const { body: order } = await sign(ORDER).expect(201);
+      await act(order.id, 'reject', { reason: 'Patient has an epidural running instead' }).expect(200);
+      await waitForMail(t.http, tokens.admin, (m) => m.subject === `PCA order ${order.id} rejected`);
+      await act(order.id, 'cancel', { reason: 'No longer needed for this patient' }, 'prescriber').expect(409);
+    });
+
+    it('lets the prescriber cancel before the PCA starts, with a reason', async () => {
+      const { body: order } = await sign(ORDER).expect(201);
+      await act(order.id, 'cancel', { reason: 'Changed to oral analgesia' }, 'pharmacist').expect(403);
+      const cancelled = await act(order.id, 'cancel', { reason: 'Changed to oral analgesia' }, 'prescriber').expect(200);
+      expect(cancelled.body.status).toBe('cancelled');
+    });
+
+    it('lists orders by ward and status, and the prescriber’s own', async () => {
+      const queue = await request(t.http).get('/api/orders?wardId=1&status=awaiting_verification').set(as('pharmacist')).expect(200);
+      expect(queue.body.length).toBeGreaterThan(0);
+      expect(queue.body.every((o: { status: string; wardId: number }) => o.status === 'awaiting_verification' && o.wardId === 1)).toBe(true);
+      const mine = await request(t.http).get('/api/orders?mine=true').set(as('prescriber')).expect(200);
+      expect(mine.body.every((o: { prescriberName: string }) => o.prescriberName === 'Dr Amara Osei')).toBe(true);
+      await request(t.http).get('/api/orders?status=finished').set(as('pharmacist')).expect(400);
+    });
+  });
+
+  describe('syringe release', () => {
+    it('releases a syringe with a readable code for a verified order and tells the nurse in charge', async () => {
+      const { body: order } = await sign(ORDER).expect(201);
+      await request(t.http).post(`/api/orders/${order.id}/releases`).set(as('pharmacist')).send(RELEASE).expect(409);
+      await act(order.id, 'verify', { signature: { password: DEMO_PASSWORD } }).expect(200);
+      await request(t.http).post(`/api/orders/${order.id}/releases`).set(as('nurse')).send(RELEASE).expect(403);
+
+      const wrong = await request(t.http).post(`/api/orders/${order.id}/releases`).set(as('pharmacist')).send({ ...RELEASE, concentrationPerMl: 2, volumeMl: 70, expiresAt: '2020-01-01T00:00:00Z' }).expect(400);
+      expect(wrong.body.errors.map((e: { field: string }) => e.field)).toEqual(['concentrationPerMl', 'overrideReason', 'expiresAt']);
+
+      const released = await request(t.http).post(`/api/orders/${order.id}/releases`).set(as('pharmacist')).send(RELEASE).expect(201);
+      expect(released.body).toMatchObject({ status: 'ready', volumeMl: 50, totalAmount: 50, doseUnit: 'mg', releasedByName: 'Lin Park' });
+      expect(released.body.releaseCode).toMatch(/^[234679ACDEFGHJKMNPQRTUVWXYZ]{3}-[234679ACDEFGHJKMNPQRTUVWXYZ]{3}$/);
+      const unusual = await request(t.http).post(`/api/orders/${order.id}/releases`).set(as('pharmacist')).send({ ...RELEASE, volumeMl: 100, overrideReason: 'Only 100 mL syringes in stock tonight' }).expect(201);
+      expect(unusual.body.releaseCode).not.toBe(released.body.releaseCode);
+
+      const mail = await waitForMail(t.http, tokens.admin, (m) => m.text.includes(released.body.releaseCode));
+      expect(mail.to).toBe('nurse-in-charge.harbour@kestrelbay.example');
+      const detail = await request(t.http).get(`/api/orders/${order.id}`).set(as('nurse')).expect(200);
+      expect(detail.body.releases).toHaveLength(2);
+    });
+  });
+
+  it('keeps the mailbox for the admin only', async () => {
+    await request(t.http).get('/api/dev/mailbox').set(as('nurse')).expect(403);
+    await request(t.http).get('/api/dev/mailbox').set(as('admin')).expect(200);
+  });
+});
