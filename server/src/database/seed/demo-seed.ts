@@ -8,6 +8,7 @@ import { hashPassword } from '../../users/passwords.js';
 import { Ward } from '../../wards/entities/ward.entity.js';
 import { DEMO_DRUGS, DEMO_PATIENTS, DEMO_WARDS } from './demo-data.js';
 import { DEMO_LIBRARIES, DEMO_PENDING_CHANGE } from './demo-library.js';
+import { seedDemoOrders } from './demo-orders.js';
 import { DEMO_PASSWORD, DEMO_STAFF } from './demo-staff.js';
 
 /** Seeds the demo scenario in one transaction, only into an empty database. Returns whether it did. */
@@ -50,6 +51,8 @@ async function seedDemoData(manager: EntityManager): Promise<void> {
       manager.create(Patient, { ...patient, wardId: wardByCode.get(wardCode)!.id }),
     ),
   );
+
+  await seedDemoOrders(manager, users);
 }
 
 async function seedDemoLibraries(manager: EntityManager, wards: Ward[], drugs: Drug[], users: User[]): Promise<void> {
