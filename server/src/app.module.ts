@@ -3,11 +3,13 @@ import { ConfigModule } from '@nestjs/config';
 import { APP_FILTER } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
 import { AuthModule } from './auth/auth.module.js';
+import { BedsideModule } from './bedside/bedside.module.js';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter.js';
 import { clientDistPath } from './config/paths.js';
 import { validateEnv } from './config/env.validation.js';
 import { DatabaseModule } from './database/database.module.js';
 import { DrugsModule } from './drugs/drugs.module.js';
+import { FlagsModule } from './flags/flags.module.js';
 import { HealthModule } from './health/health.module.js';
 import { LibraryModule } from './library/library.module.js';
 import { MailModule } from './mail/mail.module.js';
@@ -37,6 +39,8 @@ function clientModules(): DynamicModule[] {
     LibraryModule,
     OrdersModule,
     ReleasesModule,
+    FlagsModule,
+    BedsideModule,
     HealthModule,
     ...clientModules(),
   ],

@@ -36,3 +36,5 @@ export * from './orders/derive-order-values.js';
 export * from './orders/order-status.js';
 export * from './orders/order.schema.js';
 export * from './orders/release-code.js';
+export * from './bedside/bedside.schema.js';
+export * from './bedside/compare-settings.js';

@@ -3,6 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In } from 'typeorm';
 import type { Finding, OrderDetail, OrderStatus, OrderSummary } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
+import { Flag } from '../flags/entities/flag.entity.js';
 import { toLimitRuleResponse } from '../library/dto/library-response.js';
 import { MailService } from '../mail/mail.service.js';
 import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
@@ -103,7 +104,8 @@ export class OrdersService {
     const order = await this.load(manager, id);
     const events = await manager.find(OrderEvent, { where: { orderId: id }, relations: { user: true }, order: { id: 'ASC' } });
     const releases = await manager.find(SyringeRelease, { where: { orderId: id }, relations: { releasedBy: true }, order: { id: 'ASC' } });
-    return toOrderDetail(order, events, releases);
+    const flags = await manager.find(Flag, { where: { orderId: id }, relations: { acknowledgedBy: true }, order: { id: 'DESC' } });
+    return toOrderDetail(order, events, releases, flags);
   }
 
   async load(manager: EntityManager, id: number): Promise<PcaOrder> {

@@ -1,7 +1,7 @@
-import { BadRequestException, ConflictException, Injectable, NotFoundException, UnauthorizedException } from '@nestjs/common';
+import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException, UnauthorizedException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { DataSource, In, type Repository } from 'typeorm';
-import type { SessionUser, User as UserResponse } from '@lockstep/shared';
+import { ROLE_LABELS, type Role, type SessionUser, type User as UserResponse } from '@lockstep/shared';
 import { Ward } from '../wards/entities/ward.entity.js';
 import type { CreateUserDto } from './dto/create-user.dto.js';
 import type { UpdateUserDto } from './dto/update-user.dto.js';
@@ -33,6 +33,25 @@ export class UsersService {
         errors: [{ field: 'signature.password', message: 'The password you signed with is not correct' }],
       });
     }
+  }
+
+  /**
+   * A colleague signing in on the same screen (second check, witness): right password, active,
+   * one of the allowed roles, and not the person already signed in.
+   */
+  async verifyColleague(username: string, password: string, roles: readonly Role[], notUserId: number, field = ''): Promise<SessionUser> {
+    const at = (name: string) => (field ? `${field}.${name}` : name);
+    const colleague = await this.verifyCredentials(username.trim(), password);
+    if (!colleague) {
+      throw new UnauthorizedException({ statusCode: 401, message: 'The second person’s username or password is incorrect', errors: [{ field: at('password'), message: 'Username or password is incorrect' }] });
+    }
+    if (colleague.id === notUserId) {
+      throw new BadRequestException({ statusCode: 400, message: 'A second, different person must sign', errors: [{ field: at('username'), message: 'You cannot be both people: a different colleague signs here' }] });
+    }
+    if (!roles.includes(colleague.role)) {
+      throw new ForbiddenException(`${colleague.displayName} is a ${ROLE_LABELS[colleague.role].toLowerCase()}; only a nurse or charge nurse can sign here`);
+    }
+    return colleague;
   }
 
   async findActiveSessionUser(id: number): Promise<SessionUser | null> {

@@ -79,6 +79,23 @@ export type OrderDetail = OrderSummary & {
   verifiedAt: string | null;
   events: OrderEventResponse[];
   releases: SyringeReleaseResponse[];
+  flags: FlagResponse[];
+  startedAt: string | null;
+};
+
+export type FlagSeverity = 'info' | 'review' | 'urgent';
+export const FLAG_SEVERITY_LABELS: Record<FlagSeverity, string> = { urgent: 'Urgent', review: 'Review', info: 'Info' };
+
+export type FlagResponse = {
+  id: number;
+  severity: FlagSeverity;
+  code: string;
+  message: string;
+  action: string;
+  raisedAt: string;
+  acknowledgedAt: string | null;
+  acknowledgedByName: string | null;
+  acknowledgeNote: string | null;
 };
 
 export const RELEASE_STATUSES = ['ready', 'in_use', 'finished'] as const;

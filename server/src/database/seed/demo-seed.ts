@@ -71,6 +71,7 @@ async function seedDemoLibraries(manager: EntityManager, wards: Ward[], drugs: D
         note: library.note,
         authorId: author.id,
         approverId: approver.id,
+        createdAt: new Date(approvedAt.getTime() - 2 * 24 * 3600 * 1000),
         submittedAt: approvedAt,
         approvedAt,
       }),
@@ -90,6 +91,7 @@ async function seedDemoLibraries(manager: EntityManager, wards: Ward[], drugs: D
       status: 'pending_approval',
       note: pending.note,
       authorId: author.id,
+      createdAt: new Date(Date.now() - 26 * 3600 * 1000),
       submittedAt: new Date(Date.now() - 2 * 3600 * 1000),
     }),
   );

@@ -1,4 +1,5 @@
 import { deriveOrderValues, type OrderDetail, type OrderSummary } from '@lockstep/shared';
+import type { Flag } from '../../flags/entities/flag.entity.js';
 import type { SyringeRelease } from '../../releases/entities/syringe-release.entity.js';
 import { toReleaseResponse } from '../../releases/dto/release-response.js';
 import type { OrderEvent } from '../entities/order-event.entity.js';
@@ -43,7 +44,7 @@ export function toOrderSummary(order: PcaOrder): OrderSummary {
 }
 
 /** Expects the summary relations plus `verifiedBy`; events and releases with their users. */
-export function toOrderDetail(order: PcaOrder, events: OrderEvent[], releases: SyringeRelease[]): OrderDetail {
+export function toOrderDetail(order: PcaOrder, events: OrderEvent[], releases: SyringeRelease[], flags: Flag[]): OrderDetail {
   return {
     ...toOrderSummary(order),
     derived: deriveOrderValues(order),
@@ -62,5 +63,17 @@ export function toOrderDetail(order: PcaOrder, events: OrderEvent[], releases: S
       reason: event.reason,
     })),
     releases: releases.map((release) => toReleaseResponse(release, order.doseUnit)),
+    flags: flags.map((flag) => ({
+      id: flag.id,
+      severity: flag.severity,
+      code: flag.code,
+      message: flag.message,
+      action: flag.action,
+      raisedAt: flag.raisedAt.toISOString(),
+      acknowledgedAt: flag.acknowledgedAt?.toISOString() ?? null,
+      acknowledgedByName: flag.acknowledgedBy?.displayName ?? null,
+      acknowledgeNote: flag.acknowledgeNote,
+    })),
+    startedAt: order.startedAt?.toISOString() ?? null,
   };
 }

@@ -107,6 +107,10 @@ export class PcaOrder {
   @Column({ type: 'datetime', nullable: true })
   verifiedAt: Date | null;
 
+  /** When the bedside check matched and the PCA started. */
+  @Column({ type: 'datetime', nullable: true })
+  startedAt: Date | null;
+
   @Column({ type: 'datetime' })
   statusChangedAt: Date;
 

@@ -25,4 +25,8 @@ export class Ward {
   /** Where released syringes and urgent flags are e-mailed. */
   @Column({ type: 'varchar', length: 200, default: '' })
   nurseInChargeEmail: string;
+
+  /** A finished syringe whose dispensed and accounted volumes differ by more than this is reported (local policy). */
+  @Column({ type: 'real', default: 0.5 })
+  reconciliationToleranceMl: number;
 }

@@ -1,0 +1,114 @@
+import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
+import { compareSettings, normaliseReleaseCode, type FirstCheckResponse, type PumpSettings, type SecondCheckResponse } from '@lockstep/shared';
+import type { AuthUser } from '../auth/auth-user.js';
+import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
+import { statusConflict, transitionOrder } from '../orders/order-transitions.js';
+import { OrdersService } from '../orders/orders.service.js';
+import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
+import { UsersService } from '../users/users.service.js';
+import type { FirstCheckDto, SecondCheckDto } from './dto/bedside-check.dto.js';
+import { BedsideCheck } from './entities/bedside-check.entity.js';
+import { BEDSIDE_ROLES } from './nurse-roles.js';
+
+/**
+ * The independent double-check. The first nurse identifies the patient and syringe and enters the
+ * pump settings; a second nurse signs in on the same screen and enters them blind. Only when both
+ * equal the verified order does the syringe (and, at the start, the order) go live.
+ */
+@Injectable()
+export class BedsideChecksService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly orders: OrdersService,
+    private readonly users: UsersService,
+  ) {}
+
+  async first(orderId: number, dto: FirstCheckDto, nurse: AuthUser): Promise<FirstCheckResponse> {
+    return this.dataSource.transaction(async (manager) => {
+      const order = await this.orders.load(manager, orderId);
+      if (order.status !== 'verified' && order.status !== 'active') throw statusConflict(order.status, 'active');
+      checkIdentity(order, dto);
+      const release = await readyRelease(manager, order, dto.releaseCode, 'releaseCode');
+      if (order.status === 'active' && (await manager.existsBy(SyringeRelease, { orderId, status: 'in_use' }))) {
+        throw new ConflictException('A syringe is still running for this order: record the syringe change (old syringe and witnessed waste) first');
+      }
+      const check = await manager.save(
+        manager.create(BedsideCheck, { orderId, releaseId: release.id, status: 'awaiting_second', firstNurseId: nurse.id, firstSettings: { ...dto.settings }, firstAt: new Date() }),
+      );
+      return { id: check.id, status: 'awaiting_second' };
+    });
+  }
+
+  async second(orderId: number, checkId: number, dto: SecondCheckDto): Promise<SecondCheckResponse> {
+    const pending = await this.dataSource.manager.findOneBy(BedsideCheck, { id: checkId, orderId });
+    if (!pending) throw new NotFoundException(`No bedside check ${checkId} for order ${orderId}`);
+    const colleague = await this.users.verifyColleague(dto.username, dto.password, BEDSIDE_ROLES, pending.firstNurseId);
+
+    return this.dataSource.transaction(async (manager) => {
+      const check = await manager.findOneByOrFail(BedsideCheck, { id: checkId });
+      if (check.status !== 'awaiting_second') throw new ConflictException('This check is already complete: start a new bedside check');
+      const order = await this.orders.load(manager, orderId);
+      const release = await manager.findOneByOrFail(SyringeRelease, { id: check.releaseId });
+      const differences = compareSettings(check.firstSettings, dto.settings, orderedSettings(order, release));
+      const status = differences.length === 0 ? 'matched' : 'mismatch';
+
+      const saved = await manager.update(
+        BedsideCheck,
+        { id: checkId, status: 'awaiting_second', rowVersion: check.rowVersion },
+        { status, secondNurseId: colleague.id, secondSettings: { ...dto.settings }, secondAt: new Date(), differences, rowVersion: check.rowVersion + 1 },
+      );
+      if (saved.affected !== 1) throw new ConflictException('This check was completed by someone else a moment ago');
+      if (status === 'matched') await this.start(manager, order, release, check.firstNurseId, colleague.displayName);
+      return { id: checkId, status, differences };
+    });
+  }
+
+  private async start(manager: EntityManager, order: PcaOrder, release: SyringeRelease, firstNurseId: number, secondName: string): Promise<void> {
+    const started = await manager.update(SyringeRelease, { id: release.id, status: 'ready' }, { status: 'in_use', rowVersion: release.rowVersion + 1 });
+    if (started.affected !== 1) throw new ConflictException('This syringe is no longer ready: it was started or finished a moment ago');
+    if (order.status === 'verified') {
+      await transitionOrder(manager, order, 'active', firstNurseId, `Bedside check matched; second check by ${secondName}`, { startedAt: new Date() });
+    }
+  }
+}
+
+function checkIdentity(order: PcaOrder, dto: FirstCheckDto): void {
+  const errors = [];
+  if (dto.patientMrn.trim().toUpperCase() !== order.patient.mrn.toUpperCase()) {
+    errors.push({ field: 'patientMrn', message: 'This MRN is not this order’s patient: check the wristband' });
+  }
+  if (dto.patientDateOfBirth !== order.patient.dateOfBirth) {
+    errors.push({ field: 'patientDateOfBirth', message: 'This date of birth is not this order’s patient: check the wristband' });
+  }
+  if (errors.length > 0) throw new BadRequestException({ statusCode: 400, message: 'The patient does not match this order: stop and check the wristband', errors });
+}
+
+/** A `ready` syringe released for this very order, from the code on its label. */
+export async function readyRelease(manager: EntityManager, order: PcaOrder, typedCode: string, field: string): Promise<SyringeRelease> {
+  const release = await manager.findOneBy(SyringeRelease, { releaseCode: normaliseReleaseCode(typedCode) });
+  const problem = !release
+    ? 'No syringe has this release code: check the label'
+    : release.orderId !== order.id
+      ? 'This syringe was released for another order: do not use it'
+      : release.status !== 'ready'
+        ? `This syringe is ${release.status === 'in_use' ? 'already in use' : 'finished'}: use a new, ready syringe`
+        : null;
+  if (problem) throw new BadRequestException({ statusCode: 400, message: problem, errors: [{ field, message: problem }] });
+  return release!;
+}
+
+function orderedSettings(order: PcaOrder, release: SyringeRelease): PumpSettings {
+  return {
+    drugId: order.drugId,
+    concentrationPerMl: order.concentrationPerMl,
+    syringeVolumeMl: release.volumeMl,
+    loadingDose: order.loadingDose,
+    demandDose: order.demandDose,
+    lockoutMinutes: order.lockoutMinutes,
+    basalRatePerHour: order.basalRatePerHour,
+    oneHourLimit: order.oneHourLimit,
+    fourHourLimit: order.fourHourLimit,
+  };
+}

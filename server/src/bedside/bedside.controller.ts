@@ -1,0 +1,50 @@
+import { Body, Controller, HttpCode, Param, Post } from '@nestjs/common';
+import type { FirstCheckResponse, SecondCheckResponse } from '@lockstep/shared';
+import type { AuthUser } from '../auth/auth-user.js';
+import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
+import { Roles } from '../auth/decorators/roles.decorator.js';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
+import { BedsideChecksService } from './bedside-checks.service.js';
+import { type BolusResponse, BolusesService } from './boluses.service.js';
+import { BolusDto, DiscontinueDto, SyringeChangeDto } from './dto/bedside-actions.dto.js';
+import { FirstCheckDto, SecondCheckDto } from './dto/bedside-check.dto.js';
+import { type DiscontinueResponse, type SyringeChangeResponse, SyringeEndService } from './syringe-end.service.js';
+
+/** What nurses do at the bedside. Every route needs a second nurse's signature in the body. */
+@Controller('orders/:orderId')
+@Roles('nurse', 'charge_nurse')
+export class BedsideController {
+  constructor(
+    private readonly checks: BedsideChecksService,
+    private readonly boluses: BolusesService,
+    private readonly syringeEnds: SyringeEndService,
+  ) {}
+
+  @Post('bedside-checks')
+  first(@Param('orderId', ParseIdPipe) orderId: number, @Body() body: FirstCheckDto, @CurrentUser() user: AuthUser): Promise<FirstCheckResponse> {
+    return this.checks.first(orderId, body, user);
+  }
+
+  @Post('bedside-checks/:checkId/second')
+  @HttpCode(200)
+  second(@Param('orderId', ParseIdPipe) orderId: number, @Param('checkId', ParseIdPipe) checkId: number, @Body() body: SecondCheckDto): Promise<SecondCheckResponse> {
+    return this.checks.second(orderId, checkId, body);
+  }
+
+  @Post('boluses')
+  bolus(@Param('orderId', ParseIdPipe) orderId: number, @Body() body: BolusDto, @CurrentUser() user: AuthUser): Promise<BolusResponse> {
+    return this.boluses.give(orderId, body, user);
+  }
+
+  @Post('syringe-changes')
+  syringeChange(@Param('orderId', ParseIdPipe) orderId: number, @Body() body: SyringeChangeDto, @CurrentUser() user: AuthUser): Promise<SyringeChangeResponse> {
+    return this.syringeEnds.change(orderId, body, user);
+  }
+
+  /** A nurse acting on the prescriber's decision; the reason records it. */
+  @Post('discontinue')
+  @HttpCode(200)
+  discontinue(@Param('orderId', ParseIdPipe) orderId: number, @Body() body: DiscontinueDto, @CurrentUser() user: AuthUser): Promise<DiscontinueResponse> {
+    return this.syringeEnds.discontinue(orderId, body, user);
+  }
+}

@@ -1,0 +1,14 @@
+import { Module } from '@nestjs/common';
+import { OrdersModule } from '../orders/orders.module.js';
+import { UsersModule } from '../users/users.module.js';
+import { BedsideChecksService } from './bedside-checks.service.js';
+import { BedsideController } from './bedside.controller.js';
+import { BolusesService } from './boluses.service.js';
+import { SyringeEndService } from './syringe-end.service.js';
+
+@Module({
+  imports: [OrdersModule, UsersModule],
+  controllers: [BedsideController],
+  providers: [BedsideChecksService, BolusesService, SyringeEndService],
+})
+export class BedsideModule {}

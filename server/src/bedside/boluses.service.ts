@@ -1,0 +1,56 @@
+import { BadRequestException, Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { DataSource } from 'typeorm';
+import { checkAgainstRule, formatDose } from '@lockstep/shared';
+import type { AuthUser } from '../auth/auth-user.js';
+import { statusConflict } from '../orders/order-transitions.js';
+import { OrdersService } from '../orders/orders.service.js';
+import { UsersService } from '../users/users.service.js';
+import type { BolusDto } from './dto/bedside-actions.dto.js';
+import { ClinicianBolus } from './entities/clinician-bolus.entity.js';
+import { BEDSIDE_ROLES } from './nurse-roles.js';
+
+export type BolusResponse = { id: number; orderId: number; amount: number; doseUnit: string; reason: string; overrideReason: string | null; givenByName: string; witnessName: string; at: string };
+
+/** A clinician bolus: within the order's bolus dose and the ward rule, co-signed by a second nurse. */
+@Injectable()
+export class BolusesService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly orders: OrdersService,
+    private readonly users: UsersService,
+  ) {}
+
+  async give(orderId: number, dto: BolusDto, nurse: AuthUser): Promise<BolusResponse> {
+    const witness = await this.users.verifyColleague(dto.witness.username, dto.witness.password, BEDSIDE_ROLES, nurse.id, 'witness');
+    return this.dataSource.transaction(async (manager) => {
+      const order = await this.orders.load(manager, orderId);
+      if (order.status !== 'active') throw statusConflict(order.status, 'active');
+      const unit = order.doseUnit;
+      if (order.clinicianBolusDose === null) throw amountProblem('This order has no clinician bolus: ask the prescriber');
+      if (dto.amount > order.clinicianBolusDose + 1e-9) {
+        throw amountProblem(`${formatDose(dto.amount, unit)} is more than the ordered clinician bolus of ${formatDose(order.clinicianBolusDose, unit)}`);
+      }
+      const rule = order.ruleSnapshot;
+      const limits = rule?.limits.clinicianBolusDose;
+      if (rule && limits) {
+        const weight = order.patient.weightKg;
+        const value = rule.perKg && weight ? dto.amount / weight : dto.amount;
+        const result = checkAgainstRule(value, limits);
+        if (result === 'hard-high' || result === 'hard-low') throw amountProblem(`${formatDose(dto.amount, unit)} is outside the ward's hard limit for a clinician bolus`);
+        if ((result === 'soft-high' || result === 'soft-low') && !dto.overrideReason?.trim()) {
+          const message = `${formatDose(dto.amount, unit)} is outside the ward's soft limit for a clinician bolus: give a reason`;
+          throw new BadRequestException({ statusCode: 400, message, errors: [{ field: 'overrideReason', message }] });
+        }
+      }
+      const bolus = await manager.save(
+        manager.create(ClinicianBolus, { orderId, amount: dto.amount, reason: dto.reason.trim(), overrideReason: dto.overrideReason?.trim() ?? null, givenById: nurse.id, witnessId: witness.id, at: new Date() }),
+      );
+      return { id: bolus.id, orderId, amount: bolus.amount, doseUnit: unit, reason: bolus.reason, overrideReason: bolus.overrideReason, givenByName: nurse.displayName, witnessName: witness.displayName, at: bolus.at.toISOString() };
+    });
+  }
+}
+
+function amountProblem(message: string): BadRequestException {
+  return new BadRequestException({ statusCode: 400, message, errors: [{ field: 'amount', message }] });
+}

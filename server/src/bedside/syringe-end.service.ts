@@ -1,0 +1,85 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { DataSource, EntityManager } from 'typeorm';
+import { formatDose, type OrderDetail, type ReconciliationResponse } from '@lockstep/shared';
+import type { AuthUser } from '../auth/auth-user.js';
+import { FlagsService } from '../flags/flags.service.js';
+import { MailService } from '../mail/mail.service.js';
+import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
+import { statusConflict, transitionOrder } from '../orders/order-transitions.js';
+import { OrdersService } from '../orders/orders.service.js';
+import { UsersService } from '../users/users.service.js';
+import { readyRelease } from './bedside-checks.service.js';
+import type { DiscontinueDto, SyringeChangeDto } from './dto/bedside-actions.dto.js';
+import { BEDSIDE_ROLES } from './nurse-roles.js';
+import { finishRunningSyringe } from './reconcile-release.js';
+
+export type SyringeChangeResponse = { reconciliation: ReconciliationResponse; newReleaseCode: string; nextStep: string };
+export type DiscontinueResponse = { order: OrderDetail; reconciliation: ReconciliationResponse };
+
+/** The end of a syringe: a change to a new one, or discontinuing the PCA. Both reconcile with witnessed waste. */
+@Injectable()
+export class SyringeEndService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly orders: OrdersService,
+    private readonly users: UsersService,
+    private readonly flags: FlagsService,
+    private readonly mail: MailService,
+  ) {}
+
+  async change(orderId: number, dto: SyringeChangeDto, nurse: AuthUser): Promise<SyringeChangeResponse> {
+    const witness = await this.users.verifyColleague(dto.witness.username, dto.witness.password, BEDSIDE_ROLES, nurse.id, 'witness');
+    const { order, reconciliation, newReleaseCode } = await this.dataSource.transaction(async (manager) => {
+      const found = await this.orders.load(manager, orderId);
+      if (found.status !== 'active') throw statusConflict(found.status, 'active');
+      const next = await readyRelease(manager, found, dto.newReleaseCode, 'newReleaseCode');
+      const result = await this.finish(manager, found, dto, nurse.id, witness.id);
+      return { order: found, reconciliation: result, newReleaseCode: next.releaseCode };
+    });
+    this.reportDiscrepancy(order, reconciliation);
+    return { reconciliation, newReleaseCode, nextStep: 'Two nurses do a bedside check to start the new syringe' };
+  }
+
+  async discontinue(orderId: number, dto: DiscontinueDto, nurse: AuthUser): Promise<DiscontinueResponse> {
+    const witness = await this.users.verifyColleague(dto.witness.username, dto.witness.password, BEDSIDE_ROLES, nurse.id, 'witness');
+    const { order, reconciliation } = await this.dataSource.transaction(async (manager) => {
+      const found = await this.orders.load(manager, orderId);
+      if (found.status !== 'active') throw statusConflict(found.status, 'discontinued');
+      const result = await this.finish(manager, found, dto, nurse.id, witness.id);
+      await transitionOrder(manager, found, 'discontinued', nurse.id, dto.reason.trim());
+      return { order: found, reconciliation: result };
+    });
+    this.reportDiscrepancy(order, reconciliation);
+    return { order: await this.orders.get(orderId), reconciliation };
+  }
+
+  private async finish(manager: EntityManager, order: PcaOrder, volumes: { volumeInfusedMl: number; wastedMl: number }, nurseId: number, witnessId: number) {
+    const result = await finishRunningSyringe(
+      manager,
+      order.id,
+      { infusedMl: volumes.volumeInfusedMl, wastedMl: volumes.wastedMl },
+      { recordedById: nurseId, witnessId },
+      order.patient.ward.reconciliationToleranceMl,
+    );
+    if (result.mustReport) {
+      await this.flags.raise(manager, {
+        orderId: order.id,
+        severity: 'review',
+        code: 'reconciliation.discrepancy',
+        message: `Syringe ${result.releaseCode}: ${formatDose(result.discrepancyMl, 'mL')} unaccounted for (dispensed ${formatDose(result.dispensedMl, 'mL')}, infused ${formatDose(result.infusedMl, 'mL')}, wasted ${formatDose(result.wastedMl, 'mL')})`,
+        action: 'Pharmacy to review the controlled-drug record with the ward and report per local policy',
+      });
+    }
+    return result;
+  }
+
+  private reportDiscrepancy(order: PcaOrder, reconciliation: ReconciliationResponse & { releaseCode?: string }): void {
+    if (!reconciliation.mustReport) return;
+    this.mail.send({
+      to: order.patient.ward.pharmacyEmail,
+      subject: `Reconciliation discrepancy: PCA order ${order.id}, ${order.patient.ward.name} bed ${order.patient.bed}`,
+      text: `A PCA syringe for ${order.patient.ward.name} bed ${order.patient.bed} (MRN ${order.patient.mrn}) does not reconcile.\n\nDispensed ${formatDose(reconciliation.dispensedMl, 'mL')}, infused ${formatDose(reconciliation.infusedMl, 'mL')}, wasted ${formatDose(reconciliation.wastedMl, 'mL')}: ${formatDose(reconciliation.discrepancyMl, 'mL')} unaccounted for.\n\nReview the controlled-drug record with the ward.`,
+    });
+  }
+}
