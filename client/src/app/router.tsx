@@ -31,6 +31,10 @@ const router = createBrowserRouter([
             ],
           },
           {
+            element: <RequireArea area="pharmacy" />,
+            children: [{ path: paths.library.path, lazy: () => import('./routes/library') }],
+          },
+          {
             element: <RequireArea area="admin" />,
             children: [{ path: paths.adminUsers.path, lazy: () => import('./routes/admin-users') }],
           },

@@ -2,14 +2,15 @@ import { CLINICAL_ROLES, type Role } from '@lockstep/shared';
 import { isSafeRedirect, paths } from './paths';
 
 /** Groups of screens; each route is guarded by one of these. */
-export type Area = 'clinical' | 'admin';
+export type Area = 'clinical' | 'pharmacy' | 'admin';
 
 export const AREA_ROLES: Record<Area, readonly Role[]> = {
   clinical: CLINICAL_ROLES,
+  pharmacy: ['pharmacist'],
   admin: ['admin'],
 };
 
-export type NavIcon = 'patients' | 'users';
+export type NavIcon = 'patients' | 'library' | 'users';
 
 export interface NavItem {
   label: string;
@@ -21,6 +22,7 @@ export interface NavItem {
 // In the order they appear in the left navigation. Only screens that exist are listed.
 const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Patients', href: paths.patients.getHref(), icon: 'patients', area: 'clinical' },
+  { label: 'Library', href: paths.library.getHref(), icon: 'library', area: 'pharmacy' },
   { label: 'Users', href: paths.adminUsers.getHref(), icon: 'users', area: 'admin' },
 ];
 
@@ -39,6 +41,7 @@ export function homePathFor(role: Role): string {
 
 const ROUTE_AREAS: ReadonlyArray<{ prefix: string; area: Area }> = [
   { prefix: paths.patients.path, area: 'clinical' },
+  { prefix: paths.library.path, area: 'pharmacy' },
   { prefix: '/admin', area: 'admin' },
 ];
 

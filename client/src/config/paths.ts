@@ -20,6 +20,17 @@ export const paths = {
     path: '/patients/:patientId',
     getHref: (patientId: number) => `/patients/${patientId}`,
   },
+  library: {
+    path: '/library',
+    /** `ward` and `version` pick what the screen shows, so a reload keeps them. */
+    getHref: (selection: { wardId?: number; versionId?: number } = {}) => {
+      const query = new URLSearchParams();
+      if (selection.wardId !== undefined) query.set('ward', String(selection.wardId));
+      if (selection.versionId !== undefined) query.set('version', String(selection.versionId));
+      const search = query.toString();
+      return search ? `/library?${search}` : '/library';
+    },
+  },
   adminUsers: {
     path: '/admin/users',
     getHref: () => '/admin/users',

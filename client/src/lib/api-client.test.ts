@@ -75,6 +75,20 @@ describe('api client', () => {
     expect(onUnauthorized).not.toHaveBeenCalled();
   });
 
+  it('keeps the session on a 401 for a wrong signature password, not for an expired token', async () => {
+    const wrongPassword = { statusCode: 401, message: 'The password you signed with is not correct', errors: [{ field: 'signature.password', message: 'The password you signed with is not correct' }] };
+    const signed = setup(jsonResponse(401, wrongPassword));
+    await expect(signed.request('/library/versions/2/approve', { method: 'POST', body: {}, signed: true })).rejects.toMatchObject({
+      status: 401,
+      errors: [{ field: 'signature.password' }],
+    });
+    expect(signed.onUnauthorized).not.toHaveBeenCalled();
+
+    const expired = setup(jsonResponse(401, { statusCode: 401, message: 'Unauthorized' }));
+    await expect(expired.request('/library/versions/2/approve', { method: 'POST', body: {}, signed: true })).rejects.toMatchObject({ status: 401 });
+    expect(expired.onUnauthorized).toHaveBeenCalledOnce();
+  });
+
   it('reports a network failure as status 0 with a plain message', async () => {
     const { request } = setup(new TypeError('Failed to fetch'));
     await expect(request('/wards')).rejects.toMatchObject({ status: 0, message: expect.stringContaining('cannot reach the server') });

@@ -1,5 +1,5 @@
 import type { z } from 'zod';
-import { ApiRequestError, NO_RESPONSE_STATUS, toApiRequestError } from './api-error';
+import { ApiRequestError, isSignatureError, NO_RESPONSE_MESSAGE, NO_RESPONSE_STATUS, toApiRequestError, UNREADABLE_ANSWER_MESSAGE } from './api-error';
 import { endSession, getSession } from './auth/session-store';
 import { queryClient } from './query-client';
 
@@ -17,6 +17,11 @@ export interface RequestOptions<T> {
    * session has ended.
    */
   anonymous?: boolean;
+  /**
+   * A signed action (the password typed again). A 401 that names `signature.password` is a
+   * wrong password to show beside the field; the session goes on.
+   */
+  signed?: boolean;
   signal?: AbortSignal;
 }
 
@@ -48,6 +53,12 @@ async function readJson(response: Response): Promise<unknown> {
   }
 }
 
+/** A 401 ends the session, except from sign-in itself or a signature with the wrong password. */
+export function endsSession(error: ApiRequestError, options: Pick<RequestOptions<unknown>, 'anonymous' | 'signed'>): boolean {
+  if (error.status !== 401 || options.anonymous) return false;
+  return !(options.signed && isSignatureError(error));
+}
+
 export function createApiClient(config: ApiClientConfig): ApiRequest {
   const fetchFn = config.fetchFn ?? ((input, init) => fetch(input, init));
 
@@ -67,13 +78,14 @@ export function createApiClient(config: ApiClientConfig): ApiRequest {
       });
     } catch (cause) {
       if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
-      throw new ApiRequestError(NO_RESPONSE_STATUS, 'Lockstep cannot reach the server. Check the network and try again.');
+      throw new ApiRequestError(NO_RESPONSE_STATUS, NO_RESPONSE_MESSAGE);
     }
 
     const body = await readJson(response);
     if (!response.ok) {
-      if (response.status === 401 && !options.anonymous) config.onUnauthorized();
-      throw toApiRequestError(response.status, body);
+      const error = toApiRequestError(response.status, body);
+      if (endsSession(error, options)) config.onUnauthorized();
+      throw error;
     }
     if (!options.schema) return body as T;
 
@@ -81,14 +93,14 @@ export function createApiClient(config: ApiClientConfig): ApiRequest {
     if (!parsed.success) {
       // A shape the client does not expect: show nothing rather than something wrong.
       console.error(`Unexpected answer from ${path}`, parsed.error.issues);
-      throw new ApiRequestError(NO_RESPONSE_STATUS, 'The server sent an answer Lockstep could not read.');
+      throw new ApiRequestError(NO_RESPONSE_STATUS, UNREADABLE_ANSWER_MESSAGE);
     }
     return parsed.data;
   };
 }
 
-/** The app's client: '/api', the session's token, and a 401 ends the session. */
-export const apiRequest: ApiRequest = createApiClient({
+/** The app's connection: '/api', the session's token, and a 401 ends the session. */
+export const appApiConfig: ApiClientConfig = {
   baseUrl: '/api',
   getToken: () => getSession()?.accessToken ?? null,
   onUnauthorized: () => {
@@ -97,4 +109,6 @@ export const apiRequest: ApiRequest = createApiClient({
     endSession('expired');
     queryClient.clear();
   },
-});
+};
+
+export const apiRequest: ApiRequest = createApiClient(appApiConfig);

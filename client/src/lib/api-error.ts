@@ -16,6 +16,10 @@ export class ApiRequestError extends Error {
 /** Status used when no HTTP answer arrived (network down) or the answer could not be read. */
 export const NO_RESPONSE_STATUS = 0;
 
+export const NO_RESPONSE_MESSAGE = 'Lockstep cannot reach the server. Check the network and try again.';
+
+export const UNREADABLE_ANSWER_MESSAGE = 'The server sent an answer Lockstep could not read.';
+
 const FALLBACK_MESSAGES: Record<number, string> = {
   400: 'Some of the details are not valid.',
   401: 'Please sign in again.',
@@ -53,6 +57,11 @@ export function toApiRequestError(status: number, body: unknown): ApiRequestErro
 
 export function isApiRequestError(error: unknown): error is ApiRequestError {
   return error instanceof ApiRequestError;
+}
+
+/** A signed action refused for the password typed, not for the session: `signature.password`. */
+export function isSignatureError(error: unknown): boolean {
+  return isApiRequestError(error) && error.errors.some((fieldError) => fieldError.field.startsWith('signature'));
 }
 
 /** A message fit to show a person for any error thrown by a query or mutation. */

@@ -12,3 +12,23 @@ export function formatCalendarDate(isoDate: string): string {
   if (!monthName) return isoDate;
   return `${Number(day)} ${monthName} ${year}`;
 }
+
+/**
+ * A moment (ISO timestamp) as "3 Mar 2026, 09:05" in the browser's time zone (or the one given),
+ * 24-hour clock. Assembled from parts so no locale can write the month as a number or "Sept".
+ */
+export function formatDateTime(isoTimestamp: string, timeZone?: string): string {
+  const date = new Date(isoTimestamp);
+  if (Number.isNaN(date.getTime())) return isoTimestamp;
+  const parts = new Intl.DateTimeFormat('en-GB', {
+    year: 'numeric',
+    month: 'numeric',
+    day: 'numeric',
+    hour: '2-digit',
+    minute: '2-digit',
+    hourCycle: 'h23',
+    timeZone,
+  }).formatToParts(date);
+  const part = (type: Intl.DateTimeFormatPartTypes) => parts.find((p) => p.type === type)?.value ?? '';
+  return `${Number(part('day'))} ${MONTHS[Number(part('month')) - 1]} ${part('year')}, ${part('hour')}:${part('minute')}`;
+}

@@ -1,7 +1,7 @@
 import type { ComponentType, ReactNode } from 'react';
 import { AppShell, Burger, Button, Group, NavLink, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
-import { IconLogout, IconUsers, IconUsersGroup, type IconProps } from '@tabler/icons-react';
+import { IconBooks, IconLogout, IconUsers, IconUsersGroup, type IconProps } from '@tabler/icons-react';
 import { Link, useLocation } from 'react-router-dom';
 import { ROLE_LABELS } from '@lockstep/shared';
 import { navItemsFor, type NavIcon } from '@/config/navigation';
@@ -11,6 +11,7 @@ import { LockstepMark } from '../ui/lockstep-mark';
 
 const NAV_ICONS: Record<NavIcon, ComponentType<IconProps>> = {
   patients: IconUsersGroup,
+  library: IconBooks,
   users: IconUsers,
 };
 

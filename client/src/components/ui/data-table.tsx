@@ -15,6 +15,8 @@ export interface DataTableProps<T> {
   empty: ReactNode;
   /** Makes each row open its record on click and on Enter. */
   onRowOpen?: (row: T) => void;
+  /** Marks the row whose record is open beside the table (`aria-current` and a bar). */
+  isRowCurrent?: (row: T) => boolean;
   skeletonRows?: number;
 }
 
@@ -50,13 +52,16 @@ function HeaderCell<T>({ header }: { header: Header<T, unknown> }) {
 }
 
 /** A dense, sortable table over a TanStack table instance, with loading and empty states. */
-export function DataTable<T>({ table, label, caption, isLoading, empty, onRowOpen, skeletonRows = 6 }: DataTableProps<T>) {
+export function DataTable<T>({ table, label, caption, isLoading, empty, onRowOpen, isRowCurrent, skeletonRows = 6 }: DataTableProps<T>) {
   const columnCount = table.getVisibleLeafColumns().length;
   const rows = table.getRowModel().rows;
 
   const rowProps = (row: Row<T>) => {
-    if (!onRowOpen) return {};
+    const current = isRowCurrent?.(row.original) ?? false;
+    const currentProps = current ? { 'aria-current': true, 'data-current': true } : {};
+    if (!onRowOpen) return currentProps;
     return {
+      ...currentProps,
       tabIndex: 0,
       className: 'row-link',
       onClick: () => onRowOpen(row.original),

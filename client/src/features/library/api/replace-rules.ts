@@ -1,0 +1,28 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { libraryVersionDetailSchema, type LibraryVersionDetail, type LimitRuleInput } from '@lockstep/shared';
+import { apiRequest } from '@/lib/api-client';
+import { libraryKeys } from './library-keys';
+
+export interface ReplaceRulesVariables {
+  versionId: number;
+  rules: LimitRuleInput[];
+}
+
+/** Draft only. A 400 names each field as `rules.<index>.…`. */
+export function replaceRules({ versionId, rules }: ReplaceRulesVariables): Promise<LibraryVersionDetail> {
+  return apiRequest(`/library/versions/${versionId}/rules`, { method: 'PUT', body: { rules }, schema: libraryVersionDetailSchema });
+}
+
+export function useReplaceRules() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: replaceRules,
+    onSuccess: (version) => {
+      queryClient.setQueryData(libraryKeys.versionDetail(version.id), version);
+      return Promise.all([
+        queryClient.invalidateQueries({ queryKey: libraryKeys.diff(version.id) }),
+        queryClient.invalidateQueries({ queryKey: libraryKeys.versionList(version.wardId) }),
+      ]);
+    },
+  });
+}

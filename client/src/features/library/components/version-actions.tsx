@@ -1,0 +1,97 @@
+import { useId, useState } from 'react';
+import { Button, Group, Text } from '@mantine/core';
+import { IconArrowBackUp, IconDownload, IconEdit, IconInfoCircle, IconSend, IconSignature, IconTrash } from '@tabler/icons-react';
+import type { Drug, LibraryVersionDetail } from '@lockstep/shared';
+import { errorMessage } from '@/lib/api-error';
+import { notifyError, notifySuccess } from '@/lib/notify';
+import { useExportLibraryVersion } from '../api/export-library-version';
+import { useWithdrawVersion } from '../api/withdraw-version';
+import { ApproveModal } from './approve-modal';
+import { DiscardModal } from './discard-modal';
+import { RulesEditorDrawer } from './rules-editor-drawer';
+import { SubmitModal } from './submit-modal';
+
+export const OWN_VERSION_REASON = 'You wrote this version; a second pharmacist approves';
+
+type OpenDialog = 'edit' | 'submit' | 'discard' | 'approve' | null;
+
+export interface VersionActionsProps {
+  version: LibraryVersionDetail;
+  drugs: Drug[];
+  currentUserId: number;
+  /** New rules start per kg on a weight-based ward. */
+  weightBased: boolean;
+  onDiscarded: () => void;
+}
+
+/** What a pharmacist can do with this version, by its status. */
+export function VersionActions({ version, drugs, currentUserId, weightBased, onDiscarded }: VersionActionsProps) {
+  const [dialog, setDialog] = useState<OpenDialog>(null);
+  const close = () => setDialog(null);
+  const reasonId = useId();
+  const withdraw = useWithdrawVersion();
+  const exportCsv = useExportLibraryVersion();
+  const ownVersion = version.authorId === currentUserId;
+
+  const doWithdraw = () =>
+    withdraw.mutate(version.id, {
+      onSuccess: (draft) => notifySuccess('Withdrawn to draft', `Version ${draft.number} is a draft again and can be edited.`),
+      onError: (error) => notifyError('Not withdrawn', errorMessage(error)),
+    });
+  const doExport = () =>
+    exportCsv.mutate(version, {
+      onSuccess: (filename) => notifySuccess('CSV exported', `Saved as ${filename}.`),
+      onError: (error) => notifyError('The CSV could not be exported', errorMessage(error)),
+    });
+
+  return (
+    <>
+      <Group gap="xs" wrap="wrap">
+        {version.status === 'draft' ? (
+          <>
+            <Button leftSection={<IconEdit size={16} aria-hidden />} onClick={() => setDialog('edit')} disabled={drugs.length === 0}>
+              Edit rules
+            </Button>
+            <Button variant="default" leftSection={<IconSend size={16} aria-hidden />} onClick={() => setDialog('submit')}>
+              Submit for approval
+            </Button>
+            <Button variant="subtle" color="red" leftSection={<IconTrash size={16} aria-hidden />} onClick={() => setDialog('discard')}>
+              Discard draft
+            </Button>
+          </>
+        ) : null}
+        {version.status === 'pending_approval' ? (
+          <>
+            <Button
+              leftSection={<IconSignature size={16} aria-hidden />}
+              onClick={() => setDialog('approve')}
+              disabled={ownVersion}
+              aria-describedby={ownVersion ? reasonId : undefined}
+            >
+              Approve
+            </Button>
+            <Button variant="default" leftSection={<IconArrowBackUp size={16} aria-hidden />} onClick={doWithdraw} loading={withdraw.isPending}>
+              Withdraw to draft
+            </Button>
+          </>
+        ) : null}
+        <Button variant="default" leftSection={<IconDownload size={16} aria-hidden />} onClick={doExport} loading={exportCsv.isPending}>
+          Export CSV
+        </Button>
+      </Group>
+      {version.status === 'pending_approval' && ownVersion ? (
+        <Group gap={6} wrap="nowrap" mt={6}>
+          <IconInfoCircle size={16} aria-hidden color="var(--mantine-color-dimmed)" />
+          <Text id={reasonId} size="sm" c="dimmed">
+            {OWN_VERSION_REASON}
+          </Text>
+        </Group>
+      ) : null}
+
+      {dialog === 'submit' ? <SubmitModal version={version} onClose={close} /> : null}
+      {dialog === 'discard' ? <DiscardModal version={version} onClose={close} onDiscarded={onDiscarded} /> : null}
+      {dialog === 'approve' ? <ApproveModal version={version} onClose={close} /> : null}
+      <RulesEditorDrawer opened={dialog === 'edit'} onClose={close} version={version} drugs={drugs} weightBased={weightBased} />
+    </>
+  );
+}

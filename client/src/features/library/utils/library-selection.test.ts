@@ -1,0 +1,29 @@
+import { describe, expect, it } from 'vitest';
+import type { LibraryVersion, Ward } from '@lockstep/shared';
+import { chooseWardId, openVersionOf, parseId } from './library-selection';
+
+const ward = (id: number, name: string): Ward => ({ id, code: name.slice(0, 3).toUpperCase(), name, specialty: 'x', weightBasedDosing: false });
+const wards = [ward(1, 'Harbour'), ward(2, 'Cedar')];
+
+describe('library selection', () => {
+  it('reads only positive whole numbers from the address', () => {
+    expect(parseId('12')).toBe(12);
+    expect(parseId(null)).toBeNull();
+    expect(parseId('0')).toBeNull();
+    expect(parseId('2abc')).toBeNull();
+    expect(parseId('-3')).toBeNull();
+  });
+
+  it('keeps a known ward and otherwise takes the first', () => {
+    expect(chooseWardId(2, wards)).toBe(2);
+    expect(chooseWardId(9, wards)).toBe(1);
+    expect(chooseWardId(null, wards)).toBe(1);
+    expect(chooseWardId(2, [])).toBeNull();
+  });
+
+  it("finds the ward's open version", () => {
+    const version = (id: number, status: LibraryVersion['status']) => ({ id, status }) as LibraryVersion;
+    expect(openVersionOf([version(2, 'pending_approval'), version(1, 'active')])?.id).toBe(2);
+    expect(openVersionOf([version(1, 'active'), version(0, 'retired')])).toBeUndefined();
+  });
+});

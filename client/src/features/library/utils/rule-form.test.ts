@@ -1,0 +1,72 @@
+import { describe, expect, it } from 'vitest';
+import type { Drug, LimitRuleInput } from '@lockstep/shared';
+import { emptyRuleForm, placeRuleErrors, readRulesForm, ruleToForm } from './rule-form';
+
+const drugs: Drug[] = [
+  { id: 1, genericName: 'morphine', doseUnit: 'mg' },
+  { id: 3, genericName: 'fentanyl', doseUnit: 'mcg' },
+];
+// Demo library values (invented).
+const morphine: LimitRuleInput = {
+  drugId: 1,
+  concentrationPerMl: 1,
+  doseUnit: 'mg',
+  perKg: false,
+  limits: { demandDose: { hardMin: 0.2, softMin: 0.5, softMax: 2, hardMax: 3 }, lockoutMinutes: { hardMin: 5 } },
+};
+
+describe('rules form', () => {
+  it('reads back the rules it was given', () => {
+    const values = { rules: [ruleToForm(morphine, 'a')] };
+    expect(values.rules[0].limits.demandDose.softMax).toBe(2);
+    expect(values.rules[0].limits.loadingDose.softMax).toBe('');
+    expect(readRulesForm(values, drugs)).toEqual({ rules: [morphine], errors: {} });
+  });
+
+  it('takes the dose unit from the drug and treats empty inputs as no limit', () => {
+    const rule = { ...emptyRuleForm('b', true), drugId: '3', concentrationPerMl: 10 };
+    rule.limits.demandDose.softMax = 0.5;
+    expect(readRulesForm({ rules: [rule] }, drugs).rules).toEqual([
+      { drugId: 3, concentrationPerMl: 10, doseUnit: 'mcg', perKg: true, limits: { demandDose: { softMax: 0.5 } } },
+    ]);
+  });
+
+  it('keys every problem by the path of its input', () => {
+    const missing = emptyRuleForm('c', false);
+    missing.limits.demandDose.softMax = '1.2.3';
+    const swapped = ruleToForm(morphine, 'd');
+    swapped.limits.demandDose.hardMax = 1.5;
+    const { errors } = readRulesForm({ rules: [missing, swapped, ruleToForm(morphine, 'e')] }, drugs);
+    expect(errors).toEqual({
+      'rules.0.drugId': 'Choose the drug',
+      'rules.0.concentrationPerMl': 'Enter the concentration, a number more than 0',
+      'rules.0.limits.demandDose.softMax': 'Enter a number of 0 or more, or leave empty',
+      'rules.1.limits.demandDose.hardMax': 'Demand dose: the hard maximum (1.5) is below the soft maximum (2)',
+      'rules.2.concentrationPerMl': 'Rule 3 repeats rule 2: one rule per drug and concentration',
+    });
+  });
+});
+
+describe('placeRuleErrors', () => {
+  it("puts the server's paths on the same inputs and words the rest for an alert", () => {
+    const placed = placeRuleErrors(
+      [
+        { field: 'rules.1.limits.demandDose.softMax', message: 'Demand dose: the soft maximum (1) is below the soft minimum (2)' },
+        { field: 'rules.0.doseUnit', message: 'morphine is dosed in mg, not mcg' },
+        { field: 'rules.0.limits.demandDose', message: 'limits must be an object' },
+        { field: 'rules.7.drugId', message: 'No drug with id 99' },
+        { field: 'rules', message: 'A library version needs at least one rule before it is submitted' },
+      ],
+      2,
+    );
+    expect(placed.fieldErrors).toEqual({
+      'rules.1.limits.demandDose.softMax': 'Demand dose: the soft maximum (1) is below the soft minimum (2)',
+      'rules.0.doseUnit': 'morphine is dosed in mg, not mcg',
+    });
+    expect(placed.otherErrors).toEqual([
+      'Rule 1, Demand dose: limits must be an object',
+      'Rule 8: No drug with id 99',
+      'A library version needs at least one rule before it is submitted',
+    ]);
+  });
+});

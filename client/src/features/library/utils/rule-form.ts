@@ -1,0 +1,135 @@
+import {
+  LIMIT_KEYS,
+  REGIMEN_FIELD_LABELS,
+  REGIMEN_FIELDS,
+  validateLimitRules,
+  type DoseUnit,
+  type Drug,
+  type FieldError,
+  type LimitKey,
+  type LimitRuleInput,
+  type Limits,
+  type RegimenField,
+} from '@lockstep/shared';
+
+// The rules editor's form. Its paths are the API's (`rules.2.limits.demandDose.softMax`), so a
+// problem found here, by `validateLimitRules` or by the server lands on the same input.
+
+/** A NumberInput's value: a number, or text while empty ('') or half-typed. */
+export type NumberFieldValue = number | string;
+
+export type RuleFormLimits = Record<RegimenField, Record<LimitKey, NumberFieldValue>>;
+
+// Type aliases, not interfaces: the form takes values as a string-keyed record.
+export type RuleFormValue = {
+  /** Stable React key for the list; not sent. */
+  key: string;
+  drugId: string | null;
+  concentrationPerMl: NumberFieldValue;
+  /** Follows the drug: the server accepts only the drug's own dosing unit. */
+  doseUnit: DoseUnit | null;
+  perKg: boolean;
+  limits: RuleFormLimits;
+};
+
+export type RulesFormValues = { rules: RuleFormValue[] };
+
+function emptyLimits(): RuleFormLimits {
+  const limits = {} as RuleFormLimits;
+  for (const field of REGIMEN_FIELDS) limits[field] = { hardMin: '', softMin: '', softMax: '', hardMax: '' };
+  return limits;
+}
+
+export function emptyRuleForm(key: string, perKg: boolean): RuleFormValue {
+  return { key, drugId: null, concentrationPerMl: '', doseUnit: null, perKg, limits: emptyLimits() };
+}
+
+export function ruleToForm(rule: LimitRuleInput, key: string): RuleFormValue {
+  const limits = emptyLimits();
+  for (const field of REGIMEN_FIELDS) {
+    for (const limit of LIMIT_KEYS) limits[field][limit] = rule.limits[field]?.[limit] ?? '';
+  }
+  return { key, drugId: String(rule.drugId), concentrationPerMl: rule.concentrationPerMl, doseUnit: rule.doseUnit, perKg: rule.perKg, limits };
+}
+
+/** '' is "not set" (null); anything else must be a finite number. */
+function readNumber(value: NumberFieldValue): number | null | undefined {
+  if (typeof value === 'number') return Number.isFinite(value) ? value : undefined;
+  if (value.trim() === '') return null;
+  const number = Number(value);
+  return Number.isFinite(number) ? number : undefined;
+}
+
+export interface ReadRules {
+  rules: LimitRuleInput[];
+  /** Problems keyed by form path. */
+  errors: Record<string, string>;
+}
+
+/** The form as API rules, with every problem keyed by its path: required fields, numbers, limit order. */
+export function readRulesForm(values: RulesFormValues, drugs: readonly Drug[]): ReadRules {
+  const errors: Record<string, string> = {};
+  const rules: LimitRuleInput[] = values.rules.map((rule, index) => {
+    const path = `rules.${index}`;
+    const drug = drugs.find((candidate) => String(candidate.id) === rule.drugId);
+    if (!drug) errors[`${path}.drugId`] = 'Choose the drug';
+    const concentration = readNumber(rule.concentrationPerMl);
+    if (concentration === null || concentration === undefined || concentration <= 0) {
+      errors[`${path}.concentrationPerMl`] = 'Enter the concentration, a number more than 0';
+    }
+    const limits: Partial<Record<RegimenField, Limits>> = {};
+    for (const field of REGIMEN_FIELDS) {
+      const fieldLimits: Limits = {};
+      for (const key of LIMIT_KEYS) {
+        const value = readNumber(rule.limits[field][key]);
+        if (value === undefined || (value !== null && value < 0)) errors[`${path}.limits.${field}.${key}`] = 'Enter a number of 0 or more, or leave empty';
+        else if (value !== null) fieldLimits[key] = value;
+      }
+      if (Object.keys(fieldLimits).length > 0) limits[field] = fieldLimits;
+    }
+    return {
+      drugId: drug?.id ?? 0,
+      concentrationPerMl: concentration ?? 0,
+      doseUnit: drug?.doseUnit ?? rule.doseUnit ?? 'mg',
+      perKg: rule.perKg,
+      limits,
+    };
+  });
+  for (const problem of validateLimitRules(rules)) errors[problem.path] ??= problem.message;
+  return { rules, errors };
+}
+
+const FIELD_PATH = /^rules\.(\d+)\.(drugId|concentrationPerMl|doseUnit|perKg)$/;
+const LIMIT_PATH = /^rules\.(\d+)\.limits\.(\w+)\.(hardMin|softMin|softMax|hardMax)$/;
+const RULE_PATH = /^rules\.(\d+)(?:\.limits\.(\w+))?/;
+
+function isRegimenField(name: string): name is RegimenField {
+  return (REGIMEN_FIELDS as readonly string[]).includes(name);
+}
+
+export interface PlacedRuleErrors {
+  fieldErrors: Record<string, string>;
+  /** For an alert above the form, each naming its rule. */
+  otherErrors: string[];
+}
+
+/** Puts a 400's `rules.…` errors on the inputs they name; the rest are worded for an alert. */
+export function placeRuleErrors(errors: readonly FieldError[], ruleCount: number): PlacedRuleErrors {
+  const fieldErrors: Record<string, string> = {};
+  const otherErrors: string[] = [];
+  for (const { field, message } of errors) {
+    const fieldMatch = FIELD_PATH.exec(field);
+    const limitMatch = LIMIT_PATH.exec(field);
+    const index = Number((fieldMatch ?? limitMatch)?.[1] ?? -1);
+    if (index >= 0 && index < ruleCount && (fieldMatch || (limitMatch && isRegimenField(limitMatch[2])))) {
+      fieldErrors[field] ??= message;
+      continue;
+    }
+    const ruleMatch = RULE_PATH.exec(field);
+    if (ruleMatch) {
+      const parameter = ruleMatch[2] && isRegimenField(ruleMatch[2]) ? `, ${REGIMEN_FIELD_LABELS[ruleMatch[2]]}` : '';
+      otherErrors.push(`Rule ${Number(ruleMatch[1]) + 1}${parameter}: ${message}`);
+    } else otherErrors.push(message);
+  }
+  return { fieldErrors, otherErrors };
+}
