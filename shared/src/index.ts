@@ -38,3 +38,6 @@ export * from './orders/order.schema.js';
 export * from './orders/release-code.js';
 export * from './bedside/bedside.schema.js';
 export * from './bedside/compare-settings.js';
+export * from './observations/sedation-scale.js';
+export * from './observations/ward-policy.js';
+export * from './observations/observation-flags.js';

@@ -1,0 +1,27 @@
+/** A ward's local monitoring and escalation settings. Defaults are starting points; local policy rules. */
+export type WardPolicy = {
+  /** Observation interval in the first 24 hours after a start or any regimen change. */
+  observationIntervalFirst24hMinutes: number;
+  observationIntervalMinutes: number;
+  respiratoryRateThreshold: number;
+  spo2Threshold: number;
+  syringeLowThresholdHours: number;
+  reconciliationToleranceMl: number;
+  painNotControlledScore: number;
+  painNotControlledRatio: number;
+};
+
+export const DEFAULT_WARD_POLICY: WardPolicy = {
+  // No single fixed interval is published; ward policy sets it (ASPMN guideline, Jarzyna et al.,
+  // Pain Manag Nurs 2011; Jungquist et al., 2020) [memory]. 60 / 120 minutes are local defaults.
+  observationIntervalFirst24hMinutes: 60,
+  observationIntervalMinutes: 120,
+  // Respiratory rate < 8/min is widely used [practice]; studies used < 10/min (Overdyk et al., Anesth Analg 2007).
+  respiratoryRateThreshold: 8,
+  // SpO2 < 90 % (Overdyk et al., Anesth Analg 2007).
+  spo2Threshold: 90,
+  syringeLowThresholdHours: 2, // [practice]
+  reconciliationToleranceMl: 0.5, // local setting [practice]
+  painNotControlledScore: 7, // [practice]
+  painNotControlledRatio: 2, // attempts per delivered dose [practice]
+};
