@@ -41,3 +41,5 @@ export * from './bedside/compare-settings.js';
 export * from './observations/sedation-scale.js';
 export * from './observations/ward-policy.js';
 export * from './observations/observation-flags.js';
+export * from './observations/usage-summary.js';
+export * from './observations/observation-due.js';
