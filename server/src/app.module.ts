@@ -13,6 +13,7 @@ import { FlagsModule } from './flags/flags.module.js';
 import { HealthModule } from './health/health.module.js';
 import { LibraryModule } from './library/library.module.js';
 import { MailModule } from './mail/mail.module.js';
+import { ObservationsModule } from './observations/observations.module.js';
 import { OrdersModule } from './orders/orders.module.js';
 import { PatientsModule } from './patients/patients.module.js';
 import { ReleasesModule } from './releases/releases.module.js';
@@ -41,6 +42,7 @@ function clientModules(): DynamicModule[] {
     ReleasesModule,
     FlagsModule,
     BedsideModule,
+    ObservationsModule,
     HealthModule,
     ...clientModules(),
   ],

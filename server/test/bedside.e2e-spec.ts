@@ -3,50 +3,21 @@ import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { waitForMail } from './support/mailbox.js';
+import { activeOrder as startOrder, IDENTITY, ORDER, RELEASE, ROSA, SETTINGS, verifiedOrderWithSyringe as releasedOrder } from './support/pca.js';
 import { createTestApp, DEMO_PASSWORD, type TestApp } from './support/test-app.js';
 
-// Patient 1 (KB100231, born 1968-03-14) on Harbour; drug 1 morphine. Regimen after ASHP
-// Standardize 4 Safety, PCA standards (2023): 1 mg/mL, demand 1 mg, lockout 10 min.
-const ORDER = {
-  patientId: 1,
-  drugId: 1,
-  concentrationPerMl: 1,
-  doseUnit: 'mg',
-  demandDose: 1,
-  lockoutMinutes: 10,
-  basalRatePerHour: 0,
-  fourHourLimit: 30,
-  clinicianBolusDose: 2,
-  reviewDate: '2030-01-02',
-  overrides: [],
-  signature: { password: DEMO_PASSWORD },
-};
-const SETTINGS = { drugId: 1, concentrationPerMl: 1, syringeVolumeMl: 50, loadingDose: null, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0, oneHourLimit: null, fourHourLimit: 30 };
-const IDENTITY = { patientMrn: 'KB100231', patientDateOfBirth: '1968-03-14' };
-const RELEASE = { concentrationPerMl: 1, volumeMl: 50, batch: 'KB-77', expiresAt: '2030-01-01T12:00:00Z', preparedBy: 'Lin Park', checkedBy: 'Tomas Ortiz' };
-const ROSA = { username: 'rosa.adeyemi', password: DEMO_PASSWORD };
-
+// Regimen, patient and syringe are in support/pca.ts (ASHP Standardize 4 Safety, PCA standards, 2023).
 describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
   let t: TestApp;
   const token = {} as Record<'amara' | 'lin' | 'kai' | 'rosa' | 'sam', string>;
   const as = (who: keyof typeof token) => ({ Authorization: `Bearer ${token[who]}` });
 
-  /** A verified order with a ready 50 mL syringe; answers the order id and release code. */
-  async function verifiedOrderWithSyringe(): Promise<{ id: number; code: string }> {
-    const { body: order } = await request(t.http).post('/api/orders').set(as('amara')).send(ORDER).expect(201);
-    await request(t.http).post(`/api/orders/${order.id}/verify`).set(as('lin')).send({ signature: { password: DEMO_PASSWORD } }).expect(200);
-    const { body: release } = await request(t.http).post(`/api/orders/${order.id}/releases`).set(as('lin')).send(RELEASE).expect(201);
-    return { id: order.id, code: release.releaseCode };
-  }
+  const pcaTokens = () => ({ prescriber: token.amara, pharmacist: token.lin, nurse: token.kai });
+  const verifiedOrderWithSyringe = () => releasedOrder(t.http, pcaTokens());
   const firstCheck = (id: number, body: object) => request(t.http).post(`/api/orders/${id}/bedside-checks`).set(as('kai')).send(body);
   const secondCheck = (id: number, checkId: number, body: object) => request(t.http).post(`/api/orders/${id}/bedside-checks/${checkId}/second`).set(as('kai')).send(body);
 
-  async function activeOrder(): Promise<{ id: number; code: string }> {
-    const order = await verifiedOrderWithSyringe();
-    const first = await firstCheck(order.id, { ...IDENTITY, releaseCode: order.code, settings: SETTINGS }).expect(201);
-    await secondCheck(order.id, first.body.id, { ...ROSA, settings: SETTINGS }).expect(200);
-    return order;
-  }
+  const activeOrder = () => startOrder(t.http, pcaTokens());
 
   beforeAll(async () => {
     t = await createTestApp();

@@ -6,6 +6,7 @@ import { Flag } from '../flags/entities/flag.entity.js';
 import { LibraryVersion } from '../library/entities/library-version.entity.js';
 import { LimitRule } from '../library/entities/limit-rule.entity.js';
 import { MailboxMessage } from '../mail/entities/mailbox-message.entity.js';
+import { Observation } from '../observations/entities/observation.entity.js';
 import { OrderEvent } from '../orders/entities/order-event.entity.js';
 import { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { Patient } from '../patients/entities/patient.entity.js';
@@ -14,4 +15,4 @@ import { User } from '../users/entities/user.entity.js';
 import { Ward } from '../wards/entities/ward.entity.js';
 
 /** Every entity, for the data source used outside Nest (migrations, reset, schema check). */
-export const ENTITIES = [Ward, User, Patient, Drug, LibraryVersion, LimitRule, PcaOrder, OrderEvent, SyringeRelease, MailboxMessage, BedsideCheck, ClinicianBolus, ReleaseReconciliation, Flag];
+export const ENTITIES = [Ward, User, Patient, Drug, LibraryVersion, LimitRule, PcaOrder, OrderEvent, SyringeRelease, MailboxMessage, BedsideCheck, ClinicianBolus, ReleaseReconciliation, Flag, Observation];

@@ -1,14 +1,43 @@
-import { Injectable } from '@nestjs/common';
-import type { EntityManager } from 'typeorm';
-import type { FlagSeverity } from '@lockstep/shared';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { type DataSource, type EntityManager, IsNull } from 'typeorm';
+import type { FlagResponse, FlagSeverity } from '@lockstep/shared';
+import type { AuthUser } from '../auth/auth-user.js';
 import { Flag } from './entities/flag.entity.js';
 
-export type NewFlag = { orderId: number; severity: FlagSeverity; code: string; message: string; action: string };
+export type NewFlag = { orderId: number; releaseId?: number | null; severity: FlagSeverity; code: string; message: string; action: string };
 
-/** Raises flags inside the caller's transaction, so a flag exists exactly when its cause does. */
 @Injectable()
 export class FlagsService {
+  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+
+  /** Inside the caller's transaction, so a flag exists exactly when its cause does. */
   async raise(manager: EntityManager, flag: NewFlag): Promise<Flag> {
-    return manager.save(manager.create(Flag, { ...flag, raisedAt: new Date(), acknowledgedAt: null, acknowledgedById: null, acknowledgeNote: null }));
+    return manager.save(manager.create(Flag, { releaseId: null, ...flag, raisedAt: new Date(), acknowledgedAt: null, acknowledgedById: null, acknowledgeNote: null }));
   }
+
+  async acknowledge(id: number, note: string, user: AuthUser): Promise<FlagResponse> {
+    return this.dataSource.transaction(async (manager) => {
+      const flag = await manager.findOneBy(Flag, { id });
+      if (!flag) throw new NotFoundException(`No flag with id ${id}`);
+      const done = await manager.update(Flag, { id, acknowledgedAt: IsNull() }, { acknowledgedAt: new Date(), acknowledgedById: user.id, acknowledgeNote: note.trim() });
+      if (done.affected !== 1) throw new ConflictException('This flag was already acknowledged');
+      const saved = await manager.findOneOrFail(Flag, { where: { id }, relations: { acknowledgedBy: true } });
+      return toFlagResponse(saved);
+    });
+  }
+}
+
+export function toFlagResponse(flag: Flag): FlagResponse {
+  return {
+    id: flag.id,
+    severity: flag.severity,
+    code: flag.code,
+    message: flag.message,
+    action: flag.action,
+    raisedAt: flag.raisedAt.toISOString(),
+    acknowledgedAt: flag.acknowledgedAt?.toISOString() ?? null,
+    acknowledgedByName: flag.acknowledgedBy?.displayName ?? null,
+    acknowledgeNote: flag.acknowledgeNote,
+  };
 }

@@ -1,6 +1,9 @@
-import { Controller, Get } from '@nestjs/common';
+import { Body, Controller, Get, Param, Patch } from '@nestjs/common';
 import type { Ward } from '@lockstep/shared';
-import { WardsService } from './wards.service.js';
+import { Roles } from '../auth/decorators/roles.decorator.js';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
+import { UpdateWardPolicyDto } from './dto/update-ward-policy.dto.js';
+import { type WardPolicySettings, WardsService } from './wards.service.js';
 
 @Controller('wards')
 export class WardsController {
@@ -9,5 +12,17 @@ export class WardsController {
   @Get()
   list(): Promise<Ward[]> {
     return this.wards.list();
+  }
+
+  /** Observation intervals, escalation thresholds, syringe-low and reconciliation settings, e-mail addresses. */
+  @Get(':wardId/policy')
+  policy(@Param('wardId', ParseIdPipe) wardId: number): Promise<WardPolicySettings> {
+    return this.wards.policy(wardId);
+  }
+
+  @Patch(':wardId/policy')
+  @Roles('admin')
+  updatePolicy(@Param('wardId', ParseIdPipe) wardId: number, @Body() body: UpdateWardPolicyDto): Promise<WardPolicySettings> {
+    return this.wards.updatePolicy(wardId, body);
   }
 }

@@ -1,7 +1,9 @@
-import { Injectable } from '@nestjs/common';
+import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import type { Repository } from 'typeorm';
-import type { Ward as WardResponse } from '@lockstep/shared';
+import type { Ward as WardResponse, WardPolicy } from '@lockstep/shared';
+import type { UpdateWardPolicyDto } from './dto/update-ward-policy.dto.js';
+import { wardPolicy } from './ward-policy.js';
 import { toWardResponse } from './dto/ward-response.js';
 import { Ward } from './entities/ward.entity.js';
 
@@ -13,4 +15,18 @@ export class WardsService {
     const wards = await this.wards.find({ order: { name: 'ASC' } });
     return wards.map(toWardResponse);
   }
+
+  async policy(wardId: number): Promise<WardPolicySettings> {
+    const ward = await this.wards.findOneBy({ id: wardId });
+    if (!ward) throw new NotFoundException(`No ward with id ${wardId}`);
+    return { ...wardPolicy(ward), pharmacyEmail: ward.pharmacyEmail, nurseInChargeEmail: ward.nurseInChargeEmail };
+  }
+
+  async updatePolicy(wardId: number, changes: UpdateWardPolicyDto): Promise<WardPolicySettings> {
+    await this.policy(wardId);
+    await this.wards.update({ id: wardId }, changes);
+    return this.policy(wardId);
+  }
 }
+
+export type WardPolicySettings = WardPolicy & { pharmacyEmail: string; nurseInChargeEmail: string };

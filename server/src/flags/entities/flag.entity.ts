@@ -18,6 +18,10 @@ export class Flag {
   @JoinColumn({ name: 'orderId' })
   order: Relation<PcaOrder>;
 
+  /** The syringe a flag is about, where it is about one (e.g. running low). */
+  @Column({ type: 'integer', nullable: true })
+  releaseId: number | null;
+
   @Column({ type: 'varchar', length: 8 })
   severity: FlagSeverity;
 

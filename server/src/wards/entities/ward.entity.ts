@@ -29,4 +29,26 @@ export class Ward {
   /** A finished syringe whose dispensed and accounted volumes differ by more than this is reported (local policy). */
   @Column({ type: 'real', default: 0.5 })
   reconciliationToleranceMl: number;
+
+  // Monitoring policy: local settings; defaults and their sources in shared DEFAULT_WARD_POLICY.
+  @Column({ type: 'integer', default: 60 })
+  observationIntervalFirst24hMinutes: number;
+
+  @Column({ type: 'integer', default: 120 })
+  observationIntervalMinutes: number;
+
+  @Column({ type: 'integer', default: 8 })
+  respiratoryRateThreshold: number;
+
+  @Column({ type: 'integer', default: 90 })
+  spo2Threshold: number;
+
+  @Column({ type: 'real', default: 2 })
+  syringeLowThresholdHours: number;
+
+  @Column({ type: 'integer', default: 7 })
+  painNotControlledScore: number;
+
+  @Column({ type: 'real', default: 2 })
+  painNotControlledRatio: number;
 }

@@ -1,0 +1,9 @@
+import { IsDefined, IsString, MaxLength, MinLength } from 'class-validator';
+
+export class AcknowledgeFlagDto {
+  @MaxLength(1000, { message: 'The note is at most 1,000 characters' })
+  @MinLength(5, { message: 'Say what was done (at least 5 characters)' })
+  @IsString({ message: 'The note must be text' })
+  @IsDefined({ message: 'Say what was done about the flag' })
+  note: string;
+}

@@ -1,0 +1,62 @@
+import { IsDefined, IsIn, IsInt, IsISO8601, IsNumber, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
+import { SEDATION_LEVELS, type SedationLevel } from '@lockstep/shared';
+
+const finite = { allowNaN: false, allowInfinity: false };
+
+export class CreateObservationDto {
+  /** Defaults to now; never in the future, never before the PCA started. */
+  @IsISO8601({ strict: true }, { message: 'Enter the time of the observation' })
+  @IsOptional()
+  at?: string;
+
+  @Max(10, { message: 'Pain score is 0 to 10' })
+  @Min(0, { message: 'Pain score is 0 to 10' })
+  @IsInt({ message: 'Pain score is a whole number from 0 to 10' })
+  @IsDefined({ message: 'Enter the pain score' })
+  painScore: number;
+
+  @IsIn(SEDATION_LEVELS, { message: 'Sedation level is S, 1, 2, 3 or 4' })
+  @IsDefined({ message: 'Enter the sedation level' })
+  sedationLevel: SedationLevel;
+
+  @Max(80, { message: 'Respiratory rate is 0 to 80 per minute' })
+  @Min(0, { message: 'Respiratory rate is 0 to 80 per minute' })
+  @IsInt({ message: 'Respiratory rate is a whole number per minute' })
+  @IsDefined({ message: 'Enter the respiratory rate' })
+  respiratoryRate: number;
+
+  @Max(100, { message: 'SpO2 is 0 to 100 %' })
+  @Min(0, { message: 'SpO2 is 0 to 100 %' })
+  @IsInt({ message: 'SpO2 is a whole number of %' })
+  @IsDefined({ message: 'Enter the SpO2' })
+  spo2: number;
+
+  @Max(100000, { message: 'Attempts looks too large: check the pump' })
+  @Min(0, { message: 'Attempts cannot be negative' })
+  @IsInt({ message: 'Attempts is a whole number from the pump' })
+  @IsDefined({ message: 'Enter the attempts from the pump' })
+  attempts: number;
+
+  @Max(100000, { message: 'Delivered looks too large: check the pump' })
+  @Min(0, { message: 'Delivered cannot be negative' })
+  @IsInt({ message: 'Delivered is a whole number from the pump' })
+  @IsDefined({ message: 'Enter the doses delivered from the pump' })
+  delivered: number;
+
+  @Max(1000, { message: 'Volume infused looks too large: check the pump' })
+  @Min(0, { message: 'Volume infused cannot be negative' })
+  @IsNumber(finite, { message: 'Volume infused is a number of mL' })
+  @IsDefined({ message: 'Enter the volume infused from the pump' })
+  volumeInfusedMl: number;
+
+  @Max(1000, { message: 'Syringe remaining looks too large: check the syringe' })
+  @Min(0, { message: 'Syringe remaining cannot be negative' })
+  @IsNumber(finite, { message: 'Syringe remaining is a number of mL' })
+  @IsDefined({ message: 'Enter the volume left in the syringe' })
+  syringeRemainingMl: number;
+
+  @MaxLength(2000, { message: 'The note is at most 2,000 characters' })
+  @IsString({ message: 'The note must be text' })
+  @IsOptional()
+  note?: string;
+}

@@ -1,0 +1,40 @@
+import type { FlagDraft, SedationLevel } from '@lockstep/shared';
+import type { Observation } from '../entities/observation.entity.js';
+
+export type ObservationResponse = {
+  id: number;
+  orderId: number;
+  releaseId: number;
+  at: string;
+  painScore: number;
+  sedationLevel: SedationLevel;
+  respiratoryRate: number;
+  spo2: number;
+  attempts: number;
+  delivered: number;
+  volumeInfusedMl: number;
+  syringeRemainingMl: number;
+  note: string;
+  recordedByName: string;
+  flags?: (FlagDraft & { id: number })[];
+};
+
+/** Expects `recordedBy` loaded. */
+export function toObservationResponse(observation: Observation): ObservationResponse {
+  return {
+    id: observation.id,
+    orderId: observation.orderId,
+    releaseId: observation.releaseId,
+    at: observation.at.toISOString(),
+    painScore: observation.painScore,
+    sedationLevel: observation.sedationLevel,
+    respiratoryRate: observation.respiratoryRate,
+    spo2: observation.spo2,
+    attempts: observation.attempts,
+    delivered: observation.delivered,
+    volumeInfusedMl: observation.volumeInfusedMl,
+    syringeRemainingMl: observation.syringeRemainingMl,
+    note: observation.note,
+    recordedByName: observation.recordedBy.displayName,
+  };
+}

@@ -1,0 +1,34 @@
+import { Body, Controller, Get, Param, Post, Query } from '@nestjs/common';
+import type { AuthUser } from '../auth/auth-user.js';
+import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
+import { Roles } from '../auth/decorators/roles.decorator.js';
+import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
+import { CreateObservationDto } from './dto/create-observation.dto.js';
+import type { ObservationResponse } from './dto/observation-response.js';
+import { UsageQueryDto } from './dto/usage-query.dto.js';
+import { ObservationsService } from './observations.service.js';
+import { type UsageResponse, UsageService } from './usage.service.js';
+
+@Controller('orders/:orderId')
+export class ObservationsController {
+  constructor(
+    private readonly observations: ObservationsService,
+    private readonly usageService: UsageService,
+  ) {}
+
+  @Post('observations')
+  @Roles('nurse', 'charge_nurse')
+  record(@Param('orderId', ParseIdPipe) orderId: number, @Body() body: CreateObservationDto, @CurrentUser() user: AuthUser): Promise<ObservationResponse> {
+    return this.observations.record(orderId, body, user);
+  }
+
+  @Get('observations')
+  list(@Param('orderId', ParseIdPipe) orderId: number): Promise<ObservationResponse[]> {
+    return this.observations.list(orderId);
+  }
+
+  @Get('usage')
+  usage(@Param('orderId', ParseIdPipe) orderId: number, @Query() query: UsageQueryDto): Promise<UsageResponse> {
+    return this.usageService.usage(orderId, query.hours ?? 24);
+  }
+}

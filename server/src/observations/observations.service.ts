@@ -1,0 +1,92 @@
+import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { type DataSource, type EntityManager, LessThanOrEqual, MoreThan } from 'typeorm';
+import { observationFlags, ORDER_STATUS_LABELS, type FieldError, type FlagDraft } from '@lockstep/shared';
+import type { AuthUser } from '../auth/auth-user.js';
+import { Flag } from '../flags/entities/flag.entity.js';
+import { FlagsService } from '../flags/flags.service.js';
+import { MailService } from '../mail/mail.service.js';
+import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
+import { OrdersService } from '../orders/orders.service.js';
+import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
+import { wardPolicy } from '../wards/ward-policy.js';
+import type { CreateObservationDto } from './dto/create-observation.dto.js';
+import { type ObservationResponse, toObservationResponse } from './dto/observation-response.js';
+import { Observation } from './entities/observation.entity.js';
+import { syringeLowMail, urgentFlagsMail } from './observation-notifications.js';
+
+// A device clock a little ahead of the server's is not "the future".
+const CLOCK_SKEW_MS = 60_000;
+const PUMP_COUNTERS = ['attempts', 'delivered', 'volumeInfusedMl'] as const;
+
+@Injectable()
+export class ObservationsService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly orders: OrdersService,
+    private readonly flags: FlagsService,
+    private readonly mail: MailService,
+  ) {}
+
+  async record(orderId: number, dto: CreateObservationDto, nurse: AuthUser): Promise<ObservationResponse> {
+    const { order, observation, raised } = await this.dataSource.transaction(async (manager) => {
+      const found = await this.orders.load(manager, orderId);
+      if (found.status !== 'active') {
+        throw new ConflictException({ statusCode: 409, message: `Observations are recorded on an active PCA; this one is ${ORDER_STATUS_LABELS[found.status].toLowerCase()}`, currentStatus: found.status });
+      }
+      const release = await manager.findOneBy(SyringeRelease, { orderId, status: 'in_use' });
+      if (!release) throw new ConflictException('No syringe is running: finish the bedside check first');
+      const at = dto.at ? new Date(dto.at) : new Date();
+      const { previous } = await checkTimeline(manager, found, release.id, at, dto);
+
+      const saved = await manager.save(manager.create(Observation, { ...dto, at, orderId, releaseId: release.id, note: dto.note?.trim() ?? '', recordedById: nurse.id }));
+      const drafts = observationFlags(
+        { ...dto, at: at.toISOString() },
+        previous ? { ...previous, at: previous.at.toISOString() } : null,
+        found.basalRatePerHour / found.concentrationPerMl,
+        wardPolicy(found.patient.ward),
+      );
+      const flags: (FlagDraft & { id: number })[] = [];
+      for (const draft of drafts) {
+        const oncePerSyringe = draft.code === 'syringe.low';
+        if (oncePerSyringe && (await manager.existsBy(Flag, { orderId, releaseId: release.id, code: draft.code }))) continue;
+        const flag = await this.flags.raise(manager, { ...draft, orderId, releaseId: oncePerSyringe ? release.id : null });
+        flags.push({ ...draft, id: flag.id });
+      }
+      const withUser = await manager.findOneOrFail(Observation, { where: { id: saved.id }, relations: { recordedBy: true } });
+      return { order: found, observation: withUser, raised: flags };
+    });
+
+    const urgent = raised.filter((flag) => flag.severity === 'urgent');
+    if (urgent.length > 0) {
+      for (const to of [order.prescriber.email, order.patient.ward.nurseInChargeEmail]) this.mail.send(urgentFlagsMail(order, urgent, to));
+    }
+    const low = raised.find((flag) => flag.code === 'syringe.low');
+    if (low) this.mail.send(syringeLowMail(order, low));
+    return { ...toObservationResponse(observation), flags: raised };
+  }
+
+  async list(orderId: number): Promise<ObservationResponse[]> {
+    await this.orders.load(this.dataSource.manager, orderId);
+    const observations = await this.dataSource.manager.find(Observation, { where: { orderId }, relations: { recordedBy: true }, order: { at: 'ASC', id: 'ASC' } });
+    return observations.map(toObservationResponse);
+  }
+}
+
+/** Not in the future, not before the start, and pump totals that never go down within one syringe. */
+async function checkTimeline(manager: EntityManager, order: PcaOrder, releaseId: number, at: Date, dto: CreateObservationDto) {
+  const errors: FieldError[] = [];
+  if (at.getTime() > Date.now() + CLOCK_SKEW_MS) errors.push({ field: 'at', message: 'An observation cannot be in the future' });
+  if (order.startedAt && at < order.startedAt) errors.push({ field: 'at', message: 'An observation cannot be before the PCA started' });
+  const previous = await manager.findOne(Observation, { where: { orderId: order.id, releaseId, at: LessThanOrEqual(at) }, order: { at: 'DESC', id: 'DESC' } });
+  const next = await manager.findOne(Observation, { where: { orderId: order.id, releaseId, at: MoreThan(at) }, order: { at: 'ASC', id: 'ASC' } });
+  for (const counter of PUMP_COUNTERS) {
+    if (previous && dto[counter] < previous[counter]) {
+      errors.push({ field: counter, message: `The pump total cannot go down within one syringe: it was ${previous[counter]} at the last observation` });
+    } else if (next && dto[counter] > next[counter]) {
+      errors.push({ field: counter, message: `The pump total cannot be more than the later observation's ${next[counter]}` });
+    }
+  }
+  if (errors.length > 0) throw new BadRequestException({ statusCode: 400, message: 'The observation needs correcting', errors });
+  return { previous };
+}

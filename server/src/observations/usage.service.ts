@@ -1,0 +1,54 @@
+import { Injectable } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import { type DataSource, In } from 'typeorm';
+import { hoursUntilEmpty, observationDue, usageSummary, type ObservationDue, type SyringeReading, type UsageSummary } from '@lockstep/shared';
+import { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
+import { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
+import { OrdersService } from '../orders/orders.service.js';
+import { wardPolicy } from '../wards/ward-policy.js';
+import { Observation } from './entities/observation.entity.js';
+
+export type UsageResponse = UsageSummary & {
+  doseUnit: string;
+  projectedEmptyAt: string | null;
+  nextObservation: ObservationDue | null;
+};
+
+/** Hourly use, the 24-hour total, oral-morphine equivalent, projected syringe-empty time and the next observation due. */
+@Injectable()
+export class UsageService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly orders: OrdersService,
+  ) {}
+
+  async usage(orderId: number, hours: number, now = new Date()): Promise<UsageResponse> {
+    const manager = this.dataSource.manager;
+    const order = await this.orders.load(manager, orderId);
+    const since = new Date(now.getTime() - Math.max(hours, 24) * 3_600_000 - 24 * 3_600_000);
+    const observations = await manager.find(Observation, { where: { orderId }, order: { at: 'ASC', id: 'ASC' } });
+    const recent = observations.filter((observation) => observation.at >= since);
+    const releaseIds = [...new Set(recent.map((observation) => observation.releaseId))];
+    // Each syringe's counters start at zero when its bedside check matched.
+    const starts = releaseIds.length === 0 ? [] : await manager.find(BedsideCheck, { where: { orderId, status: 'matched', releaseId: In(releaseIds) } });
+    const readings: SyringeReading[] = [
+      ...starts.map((check) => ({ syringeId: check.releaseId, at: (check.secondAt ?? check.firstAt).toISOString(), attempts: 0, delivered: 0, volumeInfusedMl: 0 })),
+      ...recent.map((o) => ({ syringeId: o.releaseId, at: o.at.toISOString(), attempts: o.attempts, delivered: o.delivered, volumeInfusedMl: o.volumeInfusedMl })),
+    ];
+    const boluses = await manager.find(ClinicianBolus, { where: { orderId } });
+    const summary = usageSummary(readings, boluses.map((bolus) => ({ at: bolus.at.toISOString(), amount: bolus.amount })), { concentrationPerMl: order.concentrationPerMl, doseUnit: order.doseUnit, drug: order.drug.genericName }, now, hours);
+
+    const last = observations.at(-1);
+    const basalMl = order.basalRatePerHour / order.concentrationPerMl;
+    let projectedEmptyAt: string | null = null;
+    if (last && order.status === 'active') {
+      const before = observations.filter((o) => o.releaseId === last.releaseId && o.id !== last.id).at(-1);
+      const hoursBetween = before ? (last.at.getTime() - before.at.getTime()) / 3_600_000 : 0;
+      const demandMl = before && hoursBetween > 0 ? Math.max(0, (last.volumeInfusedMl - before.volumeInfusedMl) / hoursBetween - basalMl) : 0;
+      const left = hoursUntilEmpty(last.syringeRemainingMl, basalMl, demandMl);
+      projectedEmptyAt = Number.isFinite(left) ? new Date(last.at.getTime() + left * 3_600_000).toISOString() : null;
+    }
+    const nextObservation = order.status === 'active' && order.startedAt ? observationDue(order.startedAt.toISOString(), last?.at.toISOString() ?? null, now, wardPolicy(order.patient.ward)) : null;
+    return { ...summary, doseUnit: order.doseUnit, projectedEmptyAt, nextObservation };
+  }
+}

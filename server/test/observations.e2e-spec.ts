@@ -1,0 +1,123 @@
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { waitForMail } from './support/mailbox.js';
+import { activeOrder, ORDER, SETTINGS } from './support/pca.js';
+import { createTestApp, type TestApp } from './support/test-app.js';
+
+const CALM = { painScore: 3, sedationLevel: '1', respiratoryRate: 14, spo2: 97, attempts: 4, delivered: 3, volumeInfusedMl: 3, syringeRemainingMl: 47 };
+
+describe('observations, flags, usage and ward policy', () => {
+  let t: TestApp;
+  const token = {} as Record<'amara' | 'lin' | 'kai' | 'mei' | 'sam', string>;
+  const as = (who: keyof typeof token) => ({ Authorization: `Bearer ${token[who]}` });
+  const observe = (id: number, body: object, who: keyof typeof token = 'kai') => request(t.http).post(`/api/orders/${id}/observations`).set(as(who)).send(body);
+  const start = (order: object = ORDER, settings: object = SETTINGS) => activeOrder(t.http, { prescriber: token.amara, pharmacist: token.lin, nurse: token.kai }, order, settings);
+
+  beforeAll(async () => {
+    t = await createTestApp();
+    token.amara = await t.tokenFor('amara.osei');
+    token.lin = await t.tokenFor('lin.park');
+    token.kai = await t.tokenFor('kai.mendes');
+    token.mei = await t.tokenFor('mei.tan');
+    token.sam = await t.tokenFor('sam.rivera');
+  });
+  afterAll(() => t.close());
+
+  it('records a calm observation with no flags; a charge nurse may record, a pharmacist may not', async () => {
+    const order = await start();
+    const response = await observe(order.id, CALM).expect(201);
+    expect(response.body).toMatchObject({ ...CALM, recordedByName: 'Kai Mendes', flags: [] });
+    await observe(order.id, { ...CALM, attempts: 5 }, 'mei').expect(201);
+    await observe(order.id, CALM, 'lin').expect(403);
+    await request(t.http).post(`/api/orders/${order.id}/observations`).send(CALM).expect(401);
+  });
+
+  it.each([
+    [{ painScore: 11 }, 'painScore'],
+    [{ spo2: 140 }, 'spo2'],
+    [{ sedationLevel: '5' }, 'sedationLevel'],
+    [{ respiratoryRate: 'fast' }, 'respiratoryRate'],
+    [{ at: '2099-01-01T00:00:00Z' }, 'at'],
+    [{ at: '2001-01-01T00:00:00Z' }, 'at'],
+  ])('answers bad values with 400 naming the field (%o)', async (change, field) => {
+    const order = await start();
+    const response = await observe(order.id, { ...CALM, ...change }).expect(400);
+    expect(response.body.errors.map((e: { field: string }) => e.field)).toContain(field);
+  });
+
+  it('refuses pump totals that go down within one syringe', async () => {
+    const order = await start();
+    await observe(order.id, { ...CALM, attempts: 10, delivered: 8, volumeInfusedMl: 8 }).expect(201);
+    const response = await observe(order.id, { ...CALM, attempts: 9, delivered: 8, volumeInfusedMl: 7 }).expect(400);
+    expect(response.body.errors.map((e: { field: string }) => e.field)).toEqual(['attempts', 'volumeInfusedMl']);
+  });
+
+  it('sedation 3 raises an urgent flag with the scale’s action (Pasero & McCaffery, 2011) and e-mails the prescriber and nurse in charge', async () => {
+    const order = await start();
+    const response = await observe(order.id, { ...CALM, sedationLevel: '3' }).expect(201);
+    expect(response.body.flags).toMatchObject([{ severity: 'urgent', code: 'sedation.3', action: expect.stringContaining('25–50 %') }]);
+    const toPrescriber = await waitForMail(t.http, token.sam, (m) => m.subject.startsWith('URGENT: Sedation level 3') && m.to === 'amara.osei@kestrelbay.example');
+    expect(toPrescriber.text).toContain('Harbour bed H02');
+    await waitForMail(t.http, token.sam, (m) => m.subject.startsWith('URGENT: Sedation level 3') && m.to === 'nurse-in-charge.harbour@kestrelbay.example');
+
+    const flagId = response.body.flags[0].id;
+    await request(t.http).post(`/api/flags/${flagId}/acknowledge`).set(as('kai')).send({ note: 'no' }).expect(400);
+    const acknowledged = await request(t.http).post(`/api/flags/${flagId}/acknowledge`).set(as('kai')).send({ note: 'PCA paused, prescriber called, dose reduced' }).expect(200);
+    expect(acknowledged.body).toMatchObject({ acknowledgedByName: 'Kai Mendes', acknowledgeNote: 'PCA paused, prescriber called, dose reduced' });
+    await request(t.http).post(`/api/flags/${flagId}/acknowledge`).set(as('mei')).send({ note: 'Seen and agreed' }).expect(409);
+    await request(t.http).post(`/api/flags/${flagId}/acknowledge`).set(as('sam')).send({ note: 'Admin cannot do this' }).expect(403);
+  });
+
+  it('answers 409 on a discontinued order', async () => {
+    const order = await start();
+    await request(t.http)
+      .post(`/api/orders/${order.id}/discontinue`)
+      .set(as('kai'))
+      .send({ reason: 'Prescriber stopped the PCA today', volumeInfusedMl: 0, wastedMl: 50, witness: { username: 'rosa.adeyemi', password: 'lockstep-demo' } })
+      .expect(200);
+    await observe(order.id, CALM).expect(409);
+  });
+
+  it('works out usage on a timeline: hourly buckets, 24-hour total, oral morphine equivalent, projected empty time', async () => {
+    const order = await start();
+    const now = Date.now();
+    const at = (minutesAgo: number) => new Date(now - minutesAgo * 60_000).toISOString();
+    // The PCA started moments ago (bedside check), so the observation is at the present; the
+    // multi-hour arithmetic is worked in shared/src/observations/usage-summary.spec.ts.
+    await observe(order.id, { ...CALM, at: at(0), attempts: 6, delivered: 4, volumeInfusedMl: 4, syringeRemainingMl: 46 }).expect(201);
+    const usage = await request(t.http).get(`/api/orders/${order.id}/usage?hours=8`).set(as('kai')).expect(200);
+    expect(usage.body.buckets).toHaveLength(8);
+    expect(usage.body.totals).toMatchObject({ attempts: 6, delivered: 4, dose: 4 });
+    expect(usage.body.rolling24hDose).toBe(4);
+    // 4 mg IV morphine × 3 = 12 mg oral morphine (NCI PDQ Cancer Pain, equianalgesic table).
+    expect(usage.body.oralMorphineEquivalent24hMg).toBe(12);
+    expect(usage.body.nextObservation).toMatchObject({ overdueMinutes: 0, severity: null });
+    await request(t.http).get(`/api/orders/${order.id}/usage?hours=100`).set(as('kai')).expect(400);
+    const list = await request(t.http).get(`/api/orders/${order.id}/observations`).set(as('amara')).expect(200);
+    expect(list.body).toHaveLength(1);
+  });
+
+  it('flags a syringe running low once per syringe and asks pharmacy for the next one', async () => {
+    const order = await start();
+    const low = { ...CALM, attempts: 40, delivered: 40, volumeInfusedMl: 48, syringeRemainingMl: 2 };
+    await observe(order.id, CALM).expect(201);
+    const first = await observe(order.id, low).expect(201);
+    expect(first.body.flags.map((f: { code: string }) => f.code)).toContain('syringe.low');
+    const again = await observe(order.id, { ...low, attempts: 41, delivered: 41, volumeInfusedMl: 48.5, syringeRemainingMl: 1.5 }).expect(201);
+    expect(again.body.flags.map((f: { code: string }) => f.code)).not.toContain('syringe.low');
+    await waitForMail(t.http, token.sam, (m) => m.subject.startsWith('PCA syringe running low') && m.to === 'pharmacy.harbour@kestrelbay.example');
+  });
+
+  it('lets the admin change a ward policy, names bad fields, and refuses other roles', async () => {
+    const policy = await request(t.http).get('/api/wards/1/policy').set(as('kai')).expect(200);
+    expect(policy.body).toMatchObject({ observationIntervalFirst24hMinutes: 60, observationIntervalMinutes: 120, respiratoryRateThreshold: 8, spo2Threshold: 90, syringeLowThresholdHours: 2, reconciliationToleranceMl: 0.5 });
+    await request(t.http).patch('/api/wards/1/policy').set(as('mei')).send({ spo2Threshold: 92 }).expect(403);
+    const bad = await request(t.http).patch('/api/wards/1/policy').set(as('sam')).send({ spo2Threshold: 20, pharmacyEmail: 'not-an-address' }).expect(400);
+    expect(bad.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['pharmacyEmail', 'spo2Threshold']);
+    const changed = await request(t.http).patch('/api/wards/1/policy').set(as('sam')).send({ spo2Threshold: 92 }).expect(200);
+    expect(changed.body.spo2Threshold).toBe(92);
+    const order = await start();
+    const response = await observe(order.id, { ...CALM, spo2: 91 }).expect(201);
+    expect(response.body.flags.map((f: { code: string }) => f.code)).toEqual(['spo2.low']);
+  });
+});
