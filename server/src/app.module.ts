@@ -10,6 +10,7 @@ import { validateEnv } from './config/env.validation.js';
 import { DatabaseModule } from './database/database.module.js';
 import { DrugsModule } from './drugs/drugs.module.js';
 import { FlagsModule } from './flags/flags.module.js';
+import { HandoverModule } from './handover/handover.module.js';
 import { HealthModule } from './health/health.module.js';
 import { LibraryModule } from './library/library.module.js';
 import { MailModule } from './mail/mail.module.js';
@@ -43,6 +44,7 @@ function clientModules(): DynamicModule[] {
     FlagsModule,
     BedsideModule,
     ObservationsModule,
+    HandoverModule,
     HealthModule,
     ...clientModules(),
   ],

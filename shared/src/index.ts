@@ -43,3 +43,7 @@ export * from './observations/ward-policy.js';
 export * from './observations/observation-flags.js';
 export * from './observations/usage-summary.js';
 export * from './observations/observation-due.js';
+export * from './handover/handover.schema.js';
+export * from './handover/handover-risk.js';
+export * from './handover/shift-window.js';
+export * from './observations/projected-empty-at.js';

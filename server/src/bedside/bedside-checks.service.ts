@@ -11,6 +11,7 @@ import { UsersService } from '../users/users.service.js';
 import type { FirstCheckDto, SecondCheckDto } from './dto/bedside-check.dto.js';
 import { BedsideCheck } from './entities/bedside-check.entity.js';
 import { BEDSIDE_ROLES } from './nurse-roles.js';
+import { WardEventsService } from '../handover/ward-events.service.js';
 
 /**
  * The independent double-check. The first nurse identifies the patient and syringe and enters the
@@ -23,6 +24,7 @@ export class BedsideChecksService {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly orders: OrdersService,
     private readonly users: UsersService,
+    private readonly events: WardEventsService,
   ) {}
 
   async first(orderId: number, dto: FirstCheckDto, nurse: AuthUser): Promise<FirstCheckResponse> {
@@ -46,13 +48,13 @@ export class BedsideChecksService {
     if (!pending) throw new NotFoundException(`No bedside check ${checkId} for order ${orderId}`);
     const colleague = await this.users.verifyColleague(dto.username, dto.password, BEDSIDE_ROLES, pending.firstNurseId);
 
-    return this.dataSource.transaction(async (manager) => {
+    const result = await this.dataSource.transaction(async (manager) => {
       const check = await manager.findOneByOrFail(BedsideCheck, { id: checkId });
       if (check.status !== 'awaiting_second') throw new ConflictException('This check is already complete: start a new bedside check');
       const order = await this.orders.load(manager, orderId);
       const release = await manager.findOneByOrFail(SyringeRelease, { id: check.releaseId });
       const differences = compareSettings(check.firstSettings, dto.settings, orderedSettings(order, release));
-      const status = differences.length === 0 ? 'matched' : 'mismatch';
+      const status: SecondCheckResponse['status'] = differences.length === 0 ? 'matched' : 'mismatch';
 
       const saved = await manager.update(
         BedsideCheck,
@@ -63,6 +65,8 @@ export class BedsideChecksService {
       if (status === 'matched') await this.start(manager, order, release, check.firstNurseId, colleague.displayName);
       return { id: checkId, status, differences };
     });
+    if (result.status === 'matched') this.events.publishForOrder(orderId, 'order');
+    return result;
   }
 
   private async start(manager: EntityManager, order: PcaOrder, release: SyringeRelease, firstNurseId: number, secondName: string): Promise<void> {

@@ -13,6 +13,7 @@ import { readyRelease } from './bedside-checks.service.js';
 import type { DiscontinueDto, SyringeChangeDto } from './dto/bedside-actions.dto.js';
 import { BEDSIDE_ROLES } from './nurse-roles.js';
 import { finishRunningSyringe } from './reconcile-release.js';
+import { WardEventsService } from '../handover/ward-events.service.js';
 
 export type SyringeChangeResponse = { reconciliation: ReconciliationResponse; newReleaseCode: string; nextStep: string };
 export type DiscontinueResponse = { order: OrderDetail; reconciliation: ReconciliationResponse };
@@ -26,6 +27,7 @@ export class SyringeEndService {
     private readonly users: UsersService,
     private readonly flags: FlagsService,
     private readonly mail: MailService,
+    private readonly events: WardEventsService,
   ) {}
 
   async change(orderId: number, dto: SyringeChangeDto, nurse: AuthUser): Promise<SyringeChangeResponse> {
@@ -38,6 +40,7 @@ export class SyringeEndService {
       return { order: found, reconciliation: result, newReleaseCode: next.releaseCode };
     });
     this.reportDiscrepancy(order, reconciliation);
+    this.events.publishForOrder(orderId, 'release');
     return { reconciliation, newReleaseCode, nextStep: 'Two nurses do a bedside check to start the new syringe' };
   }
 
@@ -51,6 +54,7 @@ export class SyringeEndService {
       return { order: found, reconciliation: result };
     });
     this.reportDiscrepancy(order, reconciliation);
+    this.events.publishForOrder(orderId, 'order');
     return { order: await this.orders.get(orderId), reconciliation };
   }
 

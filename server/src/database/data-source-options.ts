@@ -2,6 +2,7 @@ import { fromRepoRoot } from '../config/paths.js';
 import type { DataSourceOptions } from 'typeorm';
 import { ENTITIES } from './entities.js';
 import { MIGRATIONS } from './migrations/index.js';
+import { queryCounter } from './query-counter.js';
 
 /** One definition of the database for Nest, the reset script and the tests. */
 export function dataSourceOptions(databasePath: string): DataSourceOptions {
@@ -16,5 +17,6 @@ export function dataSourceOptions(databasePath: string): DataSourceOptions {
     enableWAL: true,
     // A writer waits this long for another writer instead of failing with SQLITE_BUSY.
     timeout: 5000,
+    logger: queryCounter,
   };
 }

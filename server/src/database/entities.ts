@@ -3,6 +3,7 @@ import { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
 import { ReleaseReconciliation } from '../bedside/entities/release-reconciliation.entity.js';
 import { Drug } from '../drugs/entities/drug.entity.js';
 import { Flag } from '../flags/entities/flag.entity.js';
+import { HandoverSignoff } from '../handover/entities/handover-signoff.entity.js';
 import { LibraryVersion } from '../library/entities/library-version.entity.js';
 import { LimitRule } from '../library/entities/limit-rule.entity.js';
 import { MailboxMessage } from '../mail/entities/mailbox-message.entity.js';
@@ -15,4 +16,4 @@ import { User } from '../users/entities/user.entity.js';
 import { Ward } from '../wards/entities/ward.entity.js';
 
 /** Every entity, for the data source used outside Nest (migrations, reset, schema check). */
-export const ENTITIES = [Ward, User, Patient, Drug, LibraryVersion, LimitRule, PcaOrder, OrderEvent, SyringeRelease, MailboxMessage, BedsideCheck, ClinicianBolus, ReleaseReconciliation, Flag, Observation];
+export const ENTITIES = [Ward, User, Patient, Drug, LibraryVersion, LimitRule, PcaOrder, OrderEvent, SyringeRelease, MailboxMessage, BedsideCheck, ClinicianBolus, ReleaseReconciliation, Flag, Observation, HandoverSignoff];

@@ -4,12 +4,16 @@ import { type DataSource, type EntityManager, IsNull } from 'typeorm';
 import type { FlagResponse, FlagSeverity } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { Flag } from './entities/flag.entity.js';
+import { WardEventsService } from '../handover/ward-events.service.js';
 
 export type NewFlag = { orderId: number; releaseId?: number | null; severity: FlagSeverity; code: string; message: string; action: string };
 
 @Injectable()
 export class FlagsService {
-  constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly events: WardEventsService,
+  ) {}
 
   /** Inside the caller's transaction, so a flag exists exactly when its cause does. */
   async raise(manager: EntityManager, flag: NewFlag): Promise<Flag> {
@@ -17,14 +21,15 @@ export class FlagsService {
   }
 
   async acknowledge(id: number, note: string, user: AuthUser): Promise<FlagResponse> {
-    return this.dataSource.transaction(async (manager) => {
+    const flag = await this.dataSource.transaction(async (manager) => {
       const flag = await manager.findOneBy(Flag, { id });
       if (!flag) throw new NotFoundException(`No flag with id ${id}`);
       const done = await manager.update(Flag, { id, acknowledgedAt: IsNull() }, { acknowledgedAt: new Date(), acknowledgedById: user.id, acknowledgeNote: note.trim() });
       if (done.affected !== 1) throw new ConflictException('This flag was already acknowledged');
-      const saved = await manager.findOneOrFail(Flag, { where: { id }, relations: { acknowledgedBy: true } });
-      return toFlagResponse(saved);
+      return manager.findOneOrFail(Flag, { where: { id }, relations: { acknowledgedBy: true } });
     });
+    this.events.publishForOrder(flag.orderId, 'flag');
+    return toFlagResponse(flag);
   }
 }
 

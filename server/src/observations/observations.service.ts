@@ -14,6 +14,7 @@ import type { CreateObservationDto } from './dto/create-observation.dto.js';
 import { type ObservationResponse, toObservationResponse } from './dto/observation-response.js';
 import { Observation } from './entities/observation.entity.js';
 import { syringeLowMail, urgentFlagsMail } from './observation-notifications.js';
+import { WardEventsService } from '../handover/ward-events.service.js';
 
 // A device clock a little ahead of the server's is not "the future".
 const CLOCK_SKEW_MS = 60_000;
@@ -26,6 +27,7 @@ export class ObservationsService {
     private readonly orders: OrdersService,
     private readonly flags: FlagsService,
     private readonly mail: MailService,
+    private readonly events: WardEventsService,
   ) {}
 
   async record(orderId: number, dto: CreateObservationDto, nurse: AuthUser): Promise<ObservationResponse> {
@@ -63,6 +65,7 @@ export class ObservationsService {
     }
     const low = raised.find((flag) => flag.code === 'syringe.low');
     if (low) this.mail.send(syringeLowMail(order, low));
+    this.events.publishForOrder(orderId, 'observation');
     return { ...toObservationResponse(observation), flags: raised };
   }
 

@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, In } from 'typeorm';
-import { hoursUntilEmpty, observationDue, usageSummary, type ObservationDue, type SyringeReading, type UsageSummary } from '@lockstep/shared';
+import { observationDue, projectedEmptyAt, usageSummary, type ObservationDue, type SyringeReading, type UsageSummary } from '@lockstep/shared';
 import { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
 import { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
 import { OrdersService } from '../orders/orders.service.js';
@@ -39,16 +39,9 @@ export class UsageService {
     const summary = usageSummary(readings, boluses.map((bolus) => ({ at: bolus.at.toISOString(), amount: bolus.amount })), { concentrationPerMl: order.concentrationPerMl, doseUnit: order.doseUnit, drug: order.drug.genericName }, now, hours);
 
     const last = observations.at(-1);
-    const basalMl = order.basalRatePerHour / order.concentrationPerMl;
-    let projectedEmptyAt: string | null = null;
-    if (last && order.status === 'active') {
-      const before = observations.filter((o) => o.releaseId === last.releaseId && o.id !== last.id).at(-1);
-      const hoursBetween = before ? (last.at.getTime() - before.at.getTime()) / 3_600_000 : 0;
-      const demandMl = before && hoursBetween > 0 ? Math.max(0, (last.volumeInfusedMl - before.volumeInfusedMl) / hoursBetween - basalMl) : 0;
-      const left = hoursUntilEmpty(last.syringeRemainingMl, basalMl, demandMl);
-      projectedEmptyAt = Number.isFinite(left) ? new Date(last.at.getTime() + left * 3_600_000).toISOString() : null;
-    }
+    const syringeReadings = last ? readings.filter((reading) => reading.syringeId === last.releaseId).sort((x, y) => Date.parse(x.at) - Date.parse(y.at)) : [];
+    const projected = last && order.status === 'active' ? projectedEmptyAt(syringeReadings, last.syringeRemainingMl, order.basalRatePerHour / order.concentrationPerMl) : null;
     const nextObservation = order.status === 'active' && order.startedAt ? observationDue(order.startedAt.toISOString(), last?.at.toISOString() ?? null, now, wardPolicy(order.patient.ward)) : null;
-    return { ...summary, doseUnit: order.doseUnit, projectedEmptyAt, nextObservation };
+    return { ...summary, doseUnit: order.doseUnit, projectedEmptyAt: projected, nextObservation };
   }
 }

@@ -8,6 +8,7 @@ import { UsersService } from '../users/users.service.js';
 import { orderRejectedMail, orderReturnedMail } from './order-notifications.js';
 import { transitionOrder } from './order-transitions.js';
 import { OrdersService } from './orders.service.js';
+import { WardEventsService } from '../handover/ward-events.service.js';
 
 /** Pharmacy's decisions on an order awaiting verification: verify, return with a query, reject. */
 @Injectable()
@@ -17,6 +18,7 @@ export class OrderReviewService {
     private readonly orders: OrdersService,
     private readonly users: UsersService,
     private readonly mail: MailService,
+    private readonly events: WardEventsService,
   ) {}
 
   async verify(id: number, pharmacist: AuthUser, password: string): Promise<OrderDetail> {
@@ -26,6 +28,7 @@ export class OrderReviewService {
       if (order.prescriberId === pharmacist.id) throw new ForbiddenException('You wrote this order: another pharmacist verifies it');
       await transitionOrder(manager, order, 'verified', pharmacist.id, null, { verifiedById: pharmacist.id, verifiedAt: new Date() });
     });
+    this.events.publishForOrder(id, 'order');
     return this.orders.get(id);
   }
 
@@ -36,6 +39,7 @@ export class OrderReviewService {
       return found;
     });
     this.mail.send(orderReturnedMail(order, reason.trim(), pharmacist.displayName));
+    this.events.publishForOrder(id, 'order');
     return this.orders.get(id);
   }
 
@@ -46,6 +50,7 @@ export class OrderReviewService {
       return found;
     });
     this.mail.send(orderRejectedMail(order, reason.trim(), pharmacist.displayName));
+    this.events.publishForOrder(id, 'order');
     return this.orders.get(id);
   }
 }

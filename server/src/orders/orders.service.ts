@@ -16,6 +16,7 @@ import { PcaOrder } from './entities/pca-order.entity.js';
 import { orderAwaitingVerificationMail } from './order-notifications.js';
 import { OrderPreviewService } from './order-preview.service.js';
 import { statusConflict, transitionOrder } from './order-transitions.js';
+import { WardEventsService } from '../handover/ward-events.service.js';
 
 const DETAIL_RELATIONS = { ...ORDER_SUMMARY_RELATIONS, verifiedBy: true } as const;
 
@@ -27,6 +28,7 @@ export class OrdersService {
     private readonly previews: OrderPreviewService,
     private readonly users: UsersService,
     private readonly mail: MailService,
+    private readonly events: WardEventsService,
   ) {}
 
   /** The server re-checks the order itself; hard and error findings refuse it, soft ones need a reason. */
@@ -73,6 +75,7 @@ export class OrdersService {
     const order = await this.get(id);
     const entity = await this.load(this.dataSource.manager, id);
     this.mail.send(orderAwaitingVerificationMail(entity));
+    this.events.publishForOrder(id, 'order');
     return order;
   }
 
@@ -81,6 +84,7 @@ export class OrdersService {
       const order = await this.load(manager, id);
       await transitionOrder(manager, order, 'cancelled', user.id, reason);
     });
+    this.events.publishForOrder(id, 'order');
     return this.get(id);
   }
 

@@ -10,6 +10,7 @@ import { OrdersService } from '../orders/orders.service.js';
 import { toReleaseResponse } from './dto/release-response.js';
 import type { CreateReleaseDto } from './dto/create-release.dto.js';
 import { SyringeRelease } from './entities/syringe-release.entity.js';
+import { WardEventsService } from '../handover/ward-events.service.js';
 
 // Concentrations are decimals; compare them with a tolerance, never bit for bit.
 const SAME_CONCENTRATION = 1e-9;
@@ -21,6 +22,7 @@ export class ReleasesService {
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly orders: OrdersService,
     private readonly mail: MailService,
+    private readonly events: WardEventsService,
   ) {}
 
   async release(orderId: number, dto: CreateReleaseDto, pharmacist: AuthUser): Promise<SyringeReleaseResponse> {
@@ -49,6 +51,7 @@ export class ReleasesService {
       return { order: found, release: await manager.findOneOrFail(SyringeRelease, { where: { id: saved.id }, relations: { releasedBy: true } }) };
     });
     this.mail.send(syringeReleasedMail(order, release));
+    this.events.publishForOrder(orderId, 'release');
     return toReleaseResponse(release, order.doseUnit);
   }
 }

@@ -51,4 +51,11 @@ export class Ward {
 
   @Column({ type: 'real', default: 2 })
   painNotControlledRatio: number;
+
+  /** Ward-local clock times ("07:00") at which the day and night shifts start. */
+  @Column({ type: 'varchar', length: 5, default: '07:00' })
+  dayShiftStart: string;
+
+  @Column({ type: 'varchar', length: 5, default: '19:00' })
+  nightShiftStart: string;
 }

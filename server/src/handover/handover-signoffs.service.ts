@@ -1,0 +1,56 @@
+import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { InjectDataSource } from '@nestjs/typeorm';
+import type { DataSource } from 'typeorm';
+import { shiftWindow, type HandoverSignoffResponse } from '@lockstep/shared';
+import type { AuthUser } from '../auth/auth-user.js';
+import { PcaOrder } from '../orders/entities/pca-order.entity.js';
+import { Ward } from '../wards/entities/ward.entity.js';
+import type { CreateSignoffDto } from './dto/create-signoff.dto.js';
+import { toSignoffResponse } from './dto/signoff-response.js';
+import { HandoverSignoff } from './entities/handover-signoff.entity.js';
+import { WardEventsService } from './ward-events.service.js';
+
+/** Each PCA is confirmed at handover by the outgoing nurse and by a different, incoming nurse. */
+@Injectable()
+export class HandoverSignoffsService {
+  constructor(
+    @InjectDataSource() private readonly dataSource: DataSource,
+    private readonly events: WardEventsService,
+  ) {}
+
+  async signOff(wardId: number, dto: CreateSignoffDto, nurse: AuthUser, now = new Date()): Promise<HandoverSignoffResponse> {
+    const saved = await this.dataSource.transaction(async (manager) => {
+      const ward = await manager.findOneBy(Ward, { id: wardId });
+      if (!ward) throw new NotFoundException(`No ward with id ${wardId}`);
+      const order = await manager.findOne(PcaOrder, { where: { id: dto.orderId }, relations: { patient: true } });
+      if (!order || order.patient.wardId !== wardId || order.status !== 'active') {
+        throw badRequest('orderId', 'Only an active PCA on this ward is confirmed at handover');
+      }
+      if (dto.role === 'incoming' && dto.pumpSettingsMatch !== true) {
+        throw badRequest('pumpSettingsMatch', 'Confirm the pump settings match the order; if they do not, stop and escalate before taking over');
+      }
+      const { shift, shiftDate } = shiftWindow(now, ward.dayShiftStart, ward.nightShiftStart);
+      const existing = await manager.find(HandoverSignoff, { where: { orderId: dto.orderId, shiftDate, shift } });
+      if (existing.some((signoff) => signoff.role === dto.role)) throw new ConflictException(`The ${dto.role} nurse has already confirmed this PCA for this shift`);
+      if (existing.some((signoff) => signoff.nurseId === nurse.id)) throw badRequest('role', 'The outgoing and incoming nurse are two different people');
+      const created = await manager.save(
+        manager.create(HandoverSignoff, { wardId, orderId: dto.orderId, shiftDate, shift, role: dto.role, nurseId: nurse.id, pumpSettingsMatch: dto.role === 'incoming' ? true : null, at: now }),
+      );
+      return manager.findOneOrFail(HandoverSignoff, { where: { id: created.id }, relations: { nurse: true } });
+    });
+    this.events.publishForOrder(dto.orderId, 'signoff');
+    return toSignoffResponse(saved);
+  }
+
+  async list(wardId: number, now = new Date()): Promise<HandoverSignoffResponse[]> {
+    const ward = await this.dataSource.manager.findOneBy(Ward, { id: wardId });
+    if (!ward) throw new NotFoundException(`No ward with id ${wardId}`);
+    const { shift, shiftDate } = shiftWindow(now, ward.dayShiftStart, ward.nightShiftStart);
+    const signoffs = await this.dataSource.manager.find(HandoverSignoff, { where: { wardId, shiftDate, shift }, relations: { nurse: true }, order: { id: 'ASC' } });
+    return signoffs.map(toSignoffResponse);
+  }
+}
+
+function badRequest(field: string, message: string): BadRequestException {
+  return new BadRequestException({ statusCode: 400, message, errors: [{ field, message }] });
+}
