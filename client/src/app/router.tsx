@@ -28,15 +28,47 @@ const router = createBrowserRouter([
             children: [
               { path: paths.patients.path, lazy: () => import('./routes/patients') },
               { path: paths.patient.path, lazy: () => import('./routes/patient') },
+              { path: paths.order.path, lazy: () => import('./routes/order') },
+              { path: paths.handover.path, lazy: () => import('./routes/handover') },
+              { path: paths.handoverPrint.path, lazy: () => import('./routes/handover-print') },
+              { path: paths.pca.path, lazy: () => import('./routes/pca') },
+            ],
+          },
+          {
+            element: <RequireArea area="prescribing" />,
+            children: [
+              { path: paths.newOrder.path, lazy: () => import('./routes/order-form') },
+              { path: paths.reviseOrder.path, lazy: () => import('./routes/order-form') },
+              { path: paths.myOrders.path, lazy: () => import('./routes/my-orders') },
+            ],
+          },
+          {
+            element: <RequireArea area="bedside" />,
+            children: [
+              { path: paths.bedside.path, lazy: () => import('./routes/bedside') },
+              { path: paths.bedsideCheck.path, lazy: () => import('./routes/bedside-check') },
+              { path: paths.bedsideBolus.path, lazy: () => import('./routes/bedside-bolus') },
+              { path: paths.bedsideSyringeChange.path, lazy: () => import('./routes/bedside-syringe-change') },
+              { path: paths.bedsideDiscontinue.path, lazy: () => import('./routes/bedside-discontinue') },
+              { path: paths.pcaObserve.path, lazy: () => import('./routes/pca-observe') },
             ],
           },
           {
             element: <RequireArea area="pharmacy" />,
-            children: [{ path: paths.library.path, lazy: () => import('./routes/library') }],
+            children: [
+              { path: paths.library.path, lazy: () => import('./routes/library') },
+              { path: paths.verificationQueue.path, lazy: () => import('./routes/verification-queue') },
+              { path: paths.verification.path, lazy: () => import('./routes/verification') },
+              { path: paths.releaseLabel.path, lazy: () => import('./routes/release-label') },
+            ],
           },
           {
             element: <RequireArea area="admin" />,
-            children: [{ path: paths.adminUsers.path, lazy: () => import('./routes/admin-users') }],
+            children: [
+              { path: paths.adminUsers.path, lazy: () => import('./routes/admin-users') },
+              { path: paths.adminWardPolicies.path, lazy: () => import('./routes/admin-ward-policies') },
+              { path: paths.adminMailbox.path, lazy: () => import('./routes/admin-mailbox') },
+            ],
           },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],

@@ -3,7 +3,13 @@ import { ROLES, type Role } from '@lockstep/shared';
 import { canAccess, homePathFor, landingPathFor, navItemsFor } from './navigation';
 import { isSafeRedirect, paths } from './paths';
 
-const NAV_LABELS: Partial<Record<Role, string[]>> = { admin: ['Users'], pharmacist: ['Patients', 'Library'] };
+const NAV_LABELS: Partial<Record<Role, string[]>> = {
+  admin: ['Users', 'Ward policies', 'Mailbox'],
+  pharmacist: ['Patients', 'Verification', 'Library'],
+  prescriber: ['Patients', 'My orders'],
+  nurse: ['Patients', 'PCA orders', 'Handover'],
+  charge_nurse: ['Patients', 'PCA orders', 'Handover'],
+};
 
 describe('role homes and navigation', () => {
   it('lands clinical roles on Patients and the admin on Users', () => {
@@ -71,5 +77,82 @@ describe('paths', () => {
     expect(isSafeRedirect('/\\evil.example')).toBe(false);
     expect(isSafeRedirect('https://evil.example')).toBe(false);
     expect(isSafeRedirect(null)).toBe(false);
+  });
+});
+
+describe('order, verification and mailbox routes', () => {
+  it('builds their hrefs', () => {
+    expect(paths.newOrder.getHref(1)).toBe('/patients/1/orders/new');
+    expect(paths.order.getHref(14)).toBe('/orders/14');
+    expect(paths.reviseOrder.getHref(14)).toBe('/orders/14/revise');
+    expect(paths.verificationQueue.getHref()).toBe('/verification');
+    expect(paths.verificationQueue.getHref(2)).toBe('/verification?ward=2');
+    expect(paths.releaseLabel.getHref(14, 3)).toBe('/releases/14/3/label');
+  });
+
+  it('lands each role only on order screens it may open', () => {
+    expect(landingPathFor('prescriber', '/orders/mine')).toBe('/orders/mine');
+    expect(landingPathFor('nurse', '/orders/mine')).toBe('/patients');
+    expect(landingPathFor('nurse', '/orders/14')).toBe('/orders/14');
+    expect(landingPathFor('pharmacist', '/verification/14')).toBe('/verification/14');
+    expect(landingPathFor('prescriber', '/verification/14')).toBe('/patients');
+    expect(landingPathFor('pharmacist', '/releases/14/3/label')).toBe('/releases/14/3/label');
+    expect(landingPathFor('admin', '/admin/mailbox')).toBe('/admin/mailbox');
+    expect(landingPathFor('admin', '/orders/14')).toBe('/admin/users');
+  });
+});
+
+describe('bedside routes', () => {
+  it('builds their hrefs', () => {
+    expect(paths.bedside.getHref()).toBe('/bedside');
+    expect(paths.bedside.getHref({ wardId: 2 })).toBe('/bedside?ward=2');
+    expect(paths.bedside.getHref({ wardId: 2, patientId: 5 })).toBe('/bedside?ward=2&patient=5');
+    expect(paths.bedsideCheck.getHref(14)).toBe('/bedside/14/check');
+    expect(paths.bedsideBolus.getHref(14)).toBe('/bedside/14/bolus');
+    expect(paths.bedsideSyringeChange.getHref(14)).toBe('/bedside/14/syringe-change');
+    expect(paths.bedsideDiscontinue.getHref(14)).toBe('/bedside/14/discontinue');
+  });
+
+  it('are for nurses and charge nurses only', () => {
+    expect(canAccess('nurse', 'bedside')).toBe(true);
+    expect(canAccess('charge_nurse', 'bedside')).toBe(true);
+    expect(canAccess('prescriber', 'bedside')).toBe(false);
+    expect(canAccess('pharmacist', 'bedside')).toBe(false);
+    expect(landingPathFor('nurse', '/bedside/14/check')).toBe('/bedside/14/check');
+    expect(landingPathFor('charge_nurse', '/bedside?ward=2')).toBe('/bedside?ward=2');
+    expect(landingPathFor('pharmacist', '/bedside/14/check')).toBe('/patients');
+  });
+});
+
+describe('handover routes', () => {
+  it('builds their hrefs', () => {
+    expect(paths.handover.getHref()).toBe('/handover');
+    expect(paths.handover.getHref(1)).toBe('/handover?ward=1');
+    expect(paths.handoverPrint.getHref(1)).toBe('/handover/print?ward=1');
+  });
+
+  it('are read by every clinical role; the admin goes home', () => {
+    expect(landingPathFor('charge_nurse', '/handover?ward=1')).toBe('/handover?ward=1');
+    expect(landingPathFor('nurse', '/handover/print?ward=1')).toBe('/handover/print?ward=1');
+    expect(landingPathFor('prescriber', '/handover?ward=1')).toBe('/handover?ward=1');
+    expect(landingPathFor('admin', '/handover')).toBe('/admin/users');
+  });
+});
+
+describe('PCA and ward policy routes', () => {
+  it('builds their hrefs', () => {
+    expect(paths.pca.getHref(14)).toBe('/pca/14');
+    expect(paths.pca.getHref(14, 8)).toBe('/pca/14?hours=8');
+    expect(paths.pcaObserve.getHref(14)).toBe('/pca/14/observe');
+    expect(paths.adminWardPolicies.getHref()).toBe('/admin/ward-policies');
+    expect(paths.adminWardPolicies.getHref(2)).toBe('/admin/ward-policies?ward=2');
+  });
+
+  it('opens the PCA page to every clinical role and the ward policies to the admin only', () => {
+    expect(landingPathFor('prescriber', '/pca/14?hours=8')).toBe('/pca/14?hours=8');
+    expect(landingPathFor('nurse', '/pca/14/observe')).toBe('/pca/14/observe');
+    expect(landingPathFor('admin', '/pca/14')).toBe('/admin/users');
+    expect(landingPathFor('admin', '/admin/ward-policies?ward=2')).toBe('/admin/ward-policies?ward=2');
+    expect(landingPathFor('charge_nurse', '/admin/ward-policies')).toBe('/patients');
   });
 });

@@ -2,15 +2,17 @@ import { CLINICAL_ROLES, type Role } from '@lockstep/shared';
 import { isSafeRedirect, paths } from './paths';
 
 /** Groups of screens; each route is guarded by one of these. */
-export type Area = 'clinical' | 'pharmacy' | 'admin';
+export type Area = 'clinical' | 'prescribing' | 'bedside' | 'pharmacy' | 'admin';
 
 export const AREA_ROLES: Record<Area, readonly Role[]> = {
   clinical: CLINICAL_ROLES,
+  prescribing: ['prescriber'],
+  bedside: ['nurse', 'charge_nurse'],
   pharmacy: ['pharmacist'],
   admin: ['admin'],
 };
 
-export type NavIcon = 'patients' | 'library' | 'users';
+export type NavIcon = 'patients' | 'library' | 'users' | 'orders' | 'verification' | 'mailbox' | 'bedside' | 'handover' | 'policy';
 
 export interface NavItem {
   label: string;
@@ -22,8 +24,15 @@ export interface NavItem {
 // In the order they appear in the left navigation. Only screens that exist are listed.
 const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Patients', href: paths.patients.getHref(), icon: 'patients', area: 'clinical' },
+  { label: 'My orders', href: paths.myOrders.getHref(), icon: 'orders', area: 'prescribing' },
+  { label: 'PCA orders', href: paths.bedside.getHref(), icon: 'bedside', area: 'bedside' },
+  // Listed for nurses and charge nurses; prescribers and pharmacists may still open it (clinical area).
+  { label: 'Handover', href: paths.handover.getHref(), icon: 'handover', area: 'bedside' },
+  { label: 'Verification', href: paths.verificationQueue.getHref(), icon: 'verification', area: 'pharmacy' },
   { label: 'Library', href: paths.library.getHref(), icon: 'library', area: 'pharmacy' },
   { label: 'Users', href: paths.adminUsers.getHref(), icon: 'users', area: 'admin' },
+  { label: 'Ward policies', href: paths.adminWardPolicies.getHref(), icon: 'policy', area: 'admin' },
+  { label: 'Mailbox', href: paths.adminMailbox.getHref(), icon: 'mailbox', area: 'admin' },
 ];
 
 export function canAccess(role: Role, area: Area): boolean {
@@ -42,6 +51,13 @@ export function homePathFor(role: Role): string {
 const ROUTE_AREAS: ReadonlyArray<{ prefix: string; area: Area }> = [
   { prefix: paths.patients.path, area: 'clinical' },
   { prefix: paths.library.path, area: 'pharmacy' },
+  { prefix: paths.myOrders.path, area: 'prescribing' },
+  { prefix: '/orders', area: 'clinical' },
+  { prefix: paths.verificationQueue.path, area: 'pharmacy' },
+  { prefix: '/releases', area: 'pharmacy' },
+  { prefix: paths.bedside.path, area: 'bedside' },
+  { prefix: paths.handover.path, area: 'clinical' },
+  { prefix: '/pca', area: 'clinical' },
   { prefix: '/admin', area: 'admin' },
 ];
 

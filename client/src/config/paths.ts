@@ -35,6 +35,89 @@ export const paths = {
     path: '/admin/users',
     getHref: () => '/admin/users',
   },
+  newOrder: {
+    path: '/patients/:patientId/orders/new',
+    getHref: (patientId: number) => `/patients/${patientId}/orders/new`,
+  },
+  myOrders: {
+    path: '/orders/mine',
+    getHref: () => '/orders/mine',
+  },
+  order: {
+    path: '/orders/:orderId',
+    getHref: (orderId: number) => `/orders/${orderId}`,
+  },
+  reviseOrder: {
+    path: '/orders/:orderId/revise',
+    getHref: (orderId: number) => `/orders/${orderId}/revise`,
+  },
+  verificationQueue: {
+    path: '/verification',
+    /** `ward` filters the queue, so a reload keeps it. */
+    getHref: (wardId?: number) => (wardId === undefined ? '/verification' : `/verification?ward=${wardId}`),
+  },
+  verification: {
+    path: '/verification/:orderId',
+    getHref: (orderId: number) => `/verification/${orderId}`,
+  },
+  releaseLabel: {
+    path: '/releases/:orderId/:releaseId/label',
+    getHref: (orderId: number, releaseId: number) => `/releases/${orderId}/${releaseId}/label`,
+  },
+  adminMailbox: {
+    path: '/admin/mailbox',
+    getHref: () => '/admin/mailbox',
+  },
+  bedside: {
+    path: '/bedside',
+    /** The nurse's PCA orders; `ward` and `patient` narrow the list, so a reload keeps them. */
+    getHref: (selection: { wardId?: number; patientId?: number } = {}) => {
+      const query = new URLSearchParams();
+      if (selection.wardId !== undefined) query.set('ward', String(selection.wardId));
+      if (selection.patientId !== undefined) query.set('patient', String(selection.patientId));
+      const search = query.toString();
+      return search ? `/bedside?${search}` : '/bedside';
+    },
+  },
+  bedsideCheck: {
+    path: '/bedside/:orderId/check',
+    getHref: (orderId: number) => `/bedside/${orderId}/check`,
+  },
+  bedsideBolus: {
+    path: '/bedside/:orderId/bolus',
+    getHref: (orderId: number) => `/bedside/${orderId}/bolus`,
+  },
+  bedsideSyringeChange: {
+    path: '/bedside/:orderId/syringe-change',
+    getHref: (orderId: number) => `/bedside/${orderId}/syringe-change`,
+  },
+  bedsideDiscontinue: {
+    path: '/bedside/:orderId/discontinue',
+    getHref: (orderId: number) => `/bedside/${orderId}/discontinue`,
+  },
+  handover: {
+    path: '/handover',
+    /** `ward` picks the board, so a reload keeps it. */
+    getHref: (wardId?: number) => (wardId === undefined ? '/handover' : `/handover?ward=${wardId}`),
+  },
+  handoverPrint: {
+    path: '/handover/print',
+    getHref: (wardId: number) => `/handover/print?ward=${wardId}`,
+  },
+  pca: {
+    path: '/pca/:orderId',
+    /** One patient's PCA: flags, usage and charts; `hours` is the chart window (default 12). */
+    getHref: (orderId: number, hours?: number) => (hours === undefined ? `/pca/${orderId}` : `/pca/${orderId}?hours=${hours}`),
+  },
+  pcaObserve: {
+    path: '/pca/:orderId/observe',
+    getHref: (orderId: number) => `/pca/${orderId}/observe`,
+  },
+  adminWardPolicies: {
+    path: '/admin/ward-policies',
+    /** `ward` picks the ward, so a reload keeps it. */
+    getHref: (wardId?: number) => (wardId === undefined ? '/admin/ward-policies' : `/admin/ward-policies?ward=${wardId}`),
+  },
 } as const;
 
 /**

@@ -84,6 +84,13 @@ describe('api client', () => {
     });
     expect(signed.onUnauthorized).not.toHaveBeenCalled();
 
+    // A colleague (second nurse, witness) signing on the same screen with a wrong password.
+    for (const field of ['password', 'witness.password']) {
+      const colleague = setup(jsonResponse(401, { statusCode: 401, message: 'The second person’s username or password is incorrect', errors: [{ field, message: 'Username or password is incorrect' }] }));
+      await expect(colleague.request('/orders/2/boluses', { method: 'POST', body: {}, signed: true })).rejects.toMatchObject({ status: 401, errors: [{ field }] });
+      expect(colleague.onUnauthorized).not.toHaveBeenCalled();
+    }
+
     const expired = setup(jsonResponse(401, { statusCode: 401, message: 'Unauthorized' }));
     await expect(expired.request('/library/versions/2/approve', { method: 'POST', body: {}, signed: true })).rejects.toMatchObject({ status: 401 });
     expect(expired.onUnauthorized).toHaveBeenCalledOnce();

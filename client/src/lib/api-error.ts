@@ -59,9 +59,15 @@ export function isApiRequestError(error: unknown): error is ApiRequestError {
   return error instanceof ApiRequestError;
 }
 
-/** A signed action refused for the password typed, not for the session: `signature.password`. */
+/**
+ * A signed action refused for the password typed, not for the session: the signer's own
+ * `signature.password`, or a colleague's `password` / `witness.password` typed on the same screen.
+ */
 export function isSignatureError(error: unknown): boolean {
-  return isApiRequestError(error) && error.errors.some((fieldError) => fieldError.field.startsWith('signature'));
+  return (
+    isApiRequestError(error) &&
+    error.errors.some(({ field }) => field.startsWith('signature') || field === 'password' || field.endsWith('.password'))
+  );
 }
 
 /** A message fit to show a person for any error thrown by a query or mutation. */

@@ -1,6 +1,9 @@
 import { Anchor, Stack, Text, Title } from '@mantine/core';
 import { Link, useParams } from 'react-router-dom';
 import { paths } from '@/config/paths';
+import { PatientBedsideLink } from '@/features/bedside/components/patient-bedside-link';
+import { PatientPcaOrders } from '@/features/observations/components/patient-pca-orders';
+import { PatientOrders } from '@/features/orders/components/patient-orders';
 import { PatientScreen } from '@/features/patients/components/patient-screen';
 import { usePageTitle } from '@/hooks/use-page-title';
 
@@ -21,5 +24,11 @@ export function Component() {
     );
   }
   // Keyed by id so moving between patients never shows the previous one's details.
-  return <PatientScreen key={id} patientId={id} />;
+  return (
+    <PatientScreen key={id} patientId={id}>
+      <PatientPcaOrders patientId={id} />
+      <PatientBedsideLink patientId={id} />
+      <PatientOrders patientId={id} />
+    </PatientScreen>
+  );
 }

@@ -1,7 +1,7 @@
 import type { ComponentType, ReactNode } from 'react';
 import { AppShell, Burger, Button, Group, NavLink, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
-import { IconBooks, IconLogout, IconUsers, IconUsersGroup, type IconProps } from '@tabler/icons-react';
+import { IconAdjustments, IconArrowsExchange, IconBooks, IconClipboardCheck, IconClipboardList, IconHeartbeat, IconLogout, IconMail, IconUsers, IconUsersGroup, type IconProps } from '@tabler/icons-react';
 import { Link, useLocation } from 'react-router-dom';
 import { ROLE_LABELS } from '@lockstep/shared';
 import { navItemsFor, type NavIcon } from '@/config/navigation';
@@ -13,6 +13,12 @@ const NAV_ICONS: Record<NavIcon, ComponentType<IconProps>> = {
   patients: IconUsersGroup,
   library: IconBooks,
   users: IconUsers,
+  orders: IconClipboardList,
+  verification: IconClipboardCheck,
+  mailbox: IconMail,
+  bedside: IconHeartbeat,
+  handover: IconArrowsExchange,
+  policy: IconAdjustments,
 };
 
 export function AppShellLayout({ children }: { children: ReactNode }) {

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { Anchor, Group, Skeleton, Stack } from '@mantine/core';
 import { IconArrowLeft } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
@@ -18,7 +19,13 @@ function BackLink() {
   );
 }
 
-export function PatientScreen({ patientId }: { patientId: number }) {
+export interface PatientScreenProps {
+  patientId: number;
+  /** What other features show on the patient page once the patient is loaded (PCA orders). */
+  children?: ReactNode;
+}
+
+export function PatientScreen({ patientId, children }: PatientScreenProps) {
   const patientQuery = usePatient(patientId);
 
   let body;
@@ -46,6 +53,7 @@ export function PatientScreen({ patientId }: { patientId: number }) {
     <Stack gap="md">
       <BackLink />
       {body}
+      {patientQuery.isSuccess ? children : null}
     </Stack>
   );
 }

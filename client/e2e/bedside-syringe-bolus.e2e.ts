@@ -1,0 +1,169 @@
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_PASSWORD, openBrowser, signIn, snapshot, type BrowserSession } from './support/browser.js';
+import { startServer, type RunningServer } from './support/server.js';
+
+// An active morphine PCA for NOAH ACHTERBERG (KB100231, born 1968-03-14, Harbour bed H02), set up
+// through the API: 1 mg/mL, demand 1 mg, lockout 10 min, 4-hour limit 30 mg and a clinician bolus
+// of up to 3 mg (over the demo library's soft maximum of 2 mg, so the prescriber gave a reason).
+const ORDER = {
+  patientId: 1,
+  drugId: 1,
+  concentrationPerMl: 1,
+  doseUnit: 'mg',
+  demandDose: 1,
+  lockoutMinutes: 10,
+  basalRatePerHour: 0,
+  fourHourLimit: 30,
+  clinicianBolusDose: 3,
+  reviewDate: '2030-01-02',
+  overrides: [{ field: 'clinicianBolusDose', reason: 'Larger boluses agreed with the acute pain team' }],
+  signature: { password: DEMO_PASSWORD },
+};
+const SETTINGS = { drugId: 1, concentrationPerMl: 1, syringeVolumeMl: 50, loadingDose: null, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0, oneHourLimit: null, fourHourLimit: 30 };
+const RELEASE = { concentrationPerMl: 1, volumeMl: 50, batch: 'E2E-1', expiresAt: '2030-01-01T12:00:00Z', preparedBy: 'Lin Park', checkedBy: 'Tomas Ortiz' };
+
+async function api<T>(baseUrl: string, token: string | null, path: string, body?: object): Promise<T> {
+  const response = await fetch(`${baseUrl}/api${path}`, {
+    method: body ? 'POST' : 'GET',
+    headers: { 'Content-Type': 'application/json', ...(token ? { Authorization: `Bearer ${token}` } : {}) },
+    body: body ? JSON.stringify(body) : undefined,
+  });
+  if (!response.ok) throw new Error(`${path}: ${response.status} ${await response.text()}`);
+  return (await response.json()) as T;
+}
+
+async function tokenFor(baseUrl: string, username: string): Promise<string> {
+  return (await api<{ accessToken: string }>(baseUrl, null, '/auth/login', { username, password: DEMO_PASSWORD })).accessToken;
+}
+
+/** Prescribed, verified, released, started by kai and rosa; then a second syringe is released. */
+async function activeOrderWithSpareSyringe(baseUrl: string): Promise<{ id: number; spareCode: string }> {
+  const [amara, lin, kai] = await Promise.all(['amara.osei', 'lin.park', 'kai.mendes'].map((name) => tokenFor(baseUrl, name)));
+  const order = await api<{ id: number }>(baseUrl, amara, '/orders', ORDER);
+  await api(baseUrl, lin, `/orders/${order.id}/verify`, { signature: { password: DEMO_PASSWORD } });
+  const first = await api<{ releaseCode: string }>(baseUrl, lin, `/orders/${order.id}/releases`, RELEASE);
+  const check = await api<{ id: number }>(baseUrl, kai, `/orders/${order.id}/bedside-checks`, {
+    patientMrn: 'KB100231',
+    patientDateOfBirth: '1968-03-14',
+    releaseCode: first.releaseCode,
+    settings: SETTINGS,
+  });
+  await api(baseUrl, kai, `/orders/${order.id}/bedside-checks/${check.id}/second`, { username: 'rosa.adeyemi', password: DEMO_PASSWORD, settings: SETTINGS });
+  const spare = await api<{ releaseCode: string }>(baseUrl, lin, `/orders/${order.id}/releases`, RELEASE);
+  return { id: order.id, spareCode: spare.releaseCode };
+}
+
+const stepHeading = (page: Page, name: string | RegExp) => page.getByRole('heading', { level: 2, name });
+const orderRow = (page: Page) => page.getByRole('row', { name: /ACHTERBERG, Noah/ });
+
+async function enterMorphinePump(page: Page): Promise<void> {
+  await page.getByRole('combobox', { name: 'Drug' }).click();
+  await page.getByRole('option', { name: 'morphine', exact: true }).click();
+  await page.getByLabel('Concentration').fill('1');
+  await page.getByLabel('Syringe volume').fill('50');
+  await page.getByLabel('Demand dose').fill('1');
+  await page.getByLabel('Lockout').fill('10');
+  await page.getByLabel('Basal rate').fill('0');
+  await page.getByLabel('4-hour limit').fill('30');
+}
+
+describe('bedside: clinician bolus over the soft limit, and a syringe change with a new check', () => {
+  let server: RunningServer;
+  let kai: BrowserSession;
+  let spareCode = '';
+
+  beforeAll(async () => {
+    server = await startServer();
+    ({ spareCode } = await activeOrderWithSpareSyringe(server.baseUrl));
+    kai = await openBrowser(server.baseUrl);
+    await signIn(kai.page, 'kai.mendes');
+    await kai.page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+  });
+  afterAll(async () => {
+    await kai?.close();
+    await server?.stop();
+  });
+
+  it('leads from the patient page to the patient’s PCA tasks', async () => {
+    const { page } = kai;
+    await page.getByText('KB100231').click();
+    await page.getByRole('link', { name: 'Bedside PCA tasks' }).click();
+    await page.getByRole('heading', { name: 'PCA orders', level: 1 }).waitFor();
+    await page.getByText('Showing one patient’s PCA orders.').waitFor();
+    await orderRow(page).getByText('Active').waitFor();
+    expect(await page.locator('table[aria-label="PCA orders"] tbody tr').count()).toBe(1);
+  });
+
+  it('gives a witnessed bolus, asking for a reason over the ward’s soft limit', async () => {
+    const { page } = kai;
+    await orderRow(page).getByRole('link', { name: 'Clinician bolus' }).click();
+    await stepHeading(page, 'Bolus and reason').waitFor();
+    await page.getByText('Ordered clinician bolus: at most 3 mg of morphine').waitFor();
+    await page.getByLabel('Bolus (mg)').fill('3.5');
+    await page.getByRole('textbox', { name: 'Reason' }).fill('Breakthrough pain on movement, score 8');
+    await page.getByRole('button', { name: 'Next: witness' }).click();
+    await page.getByText('The most this order allows is 3 mg').waitFor();
+    await page.getByLabel('Bolus (mg)').fill('2.5');
+    await page.getByRole('button', { name: 'Next: witness' }).click();
+
+    await stepHeading(page, 'Witness co-signs').waitFor();
+    await page.getByLabel('Witness username').fill('rosa.adeyemi');
+    await page.getByLabel('Witness password').fill(DEMO_PASSWORD);
+    await page.getByRole('button', { name: 'Sign and record bolus' }).click();
+
+    // 2.5 mg is over the ward's soft maximum of 2 mg: the server sends the nurse back for a reason.
+    await stepHeading(page, 'Bolus and reason').waitFor();
+    await page.getByText('2.5 mg is outside the ward\'s soft limit for a clinician bolus: give a reason').waitFor();
+    await snapshot(page, 'bedside-bolus-soft-limit');
+    await page.getByLabel('Reason for going outside the ward’s soft limit').fill('Opioid-tolerant; agreed with the acute pain team');
+    await page.getByRole('button', { name: 'Next: witness' }).click();
+    await page.getByLabel('Witness password').fill(DEMO_PASSWORD);
+    await page.getByRole('button', { name: 'Sign and record bolus' }).click();
+
+    await stepHeading(page, 'Clinician bolus recorded').waitFor();
+    await page.getByText('2.5 mg morphine').waitFor();
+    await page.getByText('Rosa Adeyemi').waitFor();
+    await snapshot(page, 'bedside-bolus-recorded');
+  });
+
+  it('changes the syringe with witnessed waste, then a new blind check starts the new one', async () => {
+    const { page } = kai;
+    await page.getByRole('link', { name: 'Back to PCA orders' }).last().click();
+    await orderRow(page).getByRole('link', { name: 'Change syringe' }).click();
+    await stepHeading(page, 'The old syringe').waitFor();
+    await page.getByLabel('Volume infused').fill('45');
+    await page.getByLabel('Volume wasted').fill('4.8');
+    await page.getByRole('button', { name: 'Next: new syringe' }).click();
+
+    await stepHeading(page, 'The new syringe and the witness').waitFor();
+    await page.getByLabel('New syringe release code').fill(spareCode.toLowerCase().replace('-', ''));
+    await page.getByText('Discrepancy: 0.2 mL unaccounted for').waitFor();
+    await page.getByLabel('Witness username').fill('rosa.adeyemi');
+    await page.getByLabel('Witness password').fill(DEMO_PASSWORD);
+    await page.getByRole('button', { name: 'Sign and finish old syringe' }).click();
+
+    await stepHeading(page, /^Old syringe .+ finished$/).waitFor();
+    await page.getByText('Within the ward’s tolerance: nothing to report.').waitFor();
+    await snapshot(page, 'bedside-syringe-changed');
+    await page.getByRole('link', { name: 'Start bedside check for the new syringe' }).click();
+
+    await stepHeading(page, 'Identify the patient').waitFor();
+    await page.getByLabel('MRN').fill('KB100231');
+    await page.getByLabel('Date of birth').fill('1968-03-14');
+    await page.getByRole('button', { name: 'Next: syringe' }).click();
+    await page.getByLabel('Release code').fill(spareCode);
+    await page.getByRole('button', { name: 'Next: first check' }).click();
+    await enterMorphinePump(page);
+    await page.getByRole('button', { name: 'Save first check' }).click();
+    await stepHeading(page, 'Second check: a second nurse').waitFor();
+    await page.getByLabel('Second nurse username').fill('rosa.adeyemi');
+    await page.getByLabel('Second nurse password').fill(DEMO_PASSWORD);
+    await enterMorphinePump(page);
+    await page.getByRole('button', { name: 'Sign and compare' }).click();
+
+    await stepHeading(page, 'Matched — new syringe started').waitFor();
+    await page.getByRole('link', { name: 'Back to PCA orders' }).last().click();
+    await expect.poll(() => orderRow(page).getByRole('link', { name: 'Change syringe' }).count()).toBe(1);
+  });
+});

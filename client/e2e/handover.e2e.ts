@@ -1,0 +1,202 @@
+import { writeFileSync } from 'node:fs';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_PASSWORD, openBrowser, signIn, snapshot, type BrowserSession } from './support/browser.js';
+import { startServer, type RunningServer } from './support/server.js';
+
+// The demo's Harbour ward: NOAH ACHTERBERG (H02) awaiting verification, and TAVITA FALEOLO (H07)
+// with a verified HYDROmorphone order and a ready syringe, release code HK3-7QT.
+const HARBOUR = 1;
+const PUMP = { drugId: 2, concentrationPerMl: 0.2, syringeVolumeMl: 50, loadingDose: null, demandDose: 0.2, lockoutMinutes: 10, basalRatePerHour: 0.1, oneHourLimit: null, fourHourLimit: 6 };
+// Sedation 3 on the Pasero scale: an urgent flag.
+const URGENT_OBSERVATION = { painScore: 4, sedationLevel: '3', respiratoryRate: 12, spo2: 95, attempts: 6, delivered: 4, volumeInfusedMl: 2, syringeRemainingMl: 48 };
+
+type BoardAnswer = { rows: { orderId: number; patient: { name: string } }[] };
+
+async function login(baseUrl: string, username: string): Promise<string> {
+  const response = await fetch(`${baseUrl}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'Content-Type': 'application/json' },
+    body: JSON.stringify({ username, password: DEMO_PASSWORD }),
+  });
+  if (!response.ok) throw new Error(`Sign-in of ${username} failed: ${response.status}`);
+  return ((await response.json()) as { accessToken: string }).accessToken;
+}
+
+async function api<T>(baseUrl: string, token: string, route: string, body?: unknown): Promise<T> {
+  const response = await fetch(`${baseUrl}/api${route}`, {
+    method: body === undefined ? 'GET' : 'POST',
+    headers: { Authorization: `Bearer ${token}`, ...(body === undefined ? {} : { 'Content-Type': 'application/json' }) },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  if (!response.ok) throw new Error(`${route} answered ${response.status}: ${await response.text()}`);
+  return (await response.json()) as T;
+}
+
+const board = (page: Page) => page.getByRole('table', { name: 'Handover board' });
+const bodyRows = (page: Page) => board(page).locator('tbody tr');
+const rowOf = (page: Page, name: string) => bodyRows(page).filter({ hasText: name });
+
+async function openHarbourBoard(page: Page): Promise<void> {
+  await page.goto(`/handover?ward=${HARBOUR}`);
+  await page.getByRole('heading', { name: 'Handover', level: 1 }).waitFor();
+  await board(page).waitFor();
+}
+
+describe('handover board', () => {
+  let server: RunningServer;
+  let mei: BrowserSession;
+  let nurse: BrowserSession | undefined;
+  let kaiToken: string;
+  let faleoloOrderId: number;
+
+  beforeAll(async () => {
+    server = await startServer();
+    mei = await openBrowser(server.baseUrl);
+    await signIn(mei.page, 'mei.tan');
+    await mei.page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    kaiToken = await login(server.baseUrl, 'kai.mendes');
+  });
+  afterAll(async () => {
+    await nurse?.close();
+    await mei?.close();
+    await server?.stop();
+  });
+
+  it("opens from the navigation and lists Harbour's PCAs in the server's risk order", async () => {
+    const { page } = mei;
+    await page.getByRole('link', { name: 'Handover' }).click();
+    await page.getByRole('heading', { name: 'Handover', level: 1 }).waitFor();
+    await page.getByRole('combobox', { name: 'Ward' }).click();
+    await page.getByRole('option', { name: 'Harbour' }).click();
+    await page.getByTestId('board-shift').filter({ hasText: /^Harbour · (Day|Night) shift, / }).waitFor();
+
+    const answer = await api<BoardAnswer>(server.baseUrl, kaiToken, `/wards/${HARBOUR}/handover`);
+    const names = answer.rows.map((row) => row.patient.name);
+    expect(names).toEqual(['ACHTERBERG, Noah', 'FALEOLO, Tavita']);
+    await expect.poll(() => bodyRows(page).count()).toBe(2);
+    for (const [index, name] of names.entries()) expect(await bodyRows(page).nth(index).innerText()).toContain(name);
+    faleoloOrderId = answer.rows[1].orderId;
+
+    expect(await rowOf(page, 'ACHTERBERG').innerText()).toMatch(/Awaiting verification\s+since \d\d:\d\d/);
+    expect(await rowOf(page, 'FALEOLO').innerText()).toContain('Awaiting bedside check');
+    expect(await rowOf(page, 'FALEOLO').innerText()).toContain('HYDROmorphone 0.2 mg/mL');
+    expect(await rowOf(page, 'FALEOLO').innerText()).toContain('0.2 mg / 10 min, basal 0.1 mg/h, 4-h limit 6 mg');
+    await page.getByRole('status').filter({ hasText: 'Connected' }).waitFor();
+    await page.getByTestId('board-updated').filter({ hasText: /^Updated \d\d:\d\d:\d\d$/ }).waitFor();
+    await snapshot(page, 'handover-board');
+  });
+
+  it('shows an urgent observation recorded elsewhere within 2 seconds, without a reload', async () => {
+    const { page } = mei;
+    // A mark on the window: a page reload would wipe it.
+    await page.evaluate(() => Object.assign(window, { handoverMark: 'kept' }));
+
+    const first = await api<{ id: number }>(server.baseUrl, kaiToken, `/orders/${faleoloOrderId}/bedside-checks`, {
+      patientMrn: 'KB100672',
+      patientDateOfBirth: '1979-07-28',
+      releaseCode: 'HK3-7QT',
+      settings: PUMP,
+    });
+    await api(server.baseUrl, kaiToken, `/orders/${faleoloOrderId}/bedside-checks/${first.id}/second`, { username: 'rosa.adeyemi', password: DEMO_PASSWORD, settings: PUMP });
+    await expect.poll(() => rowOf(page, 'FALEOLO').innerText(), { timeout: 2500 }).toContain('Outgoing: not signed');
+
+    await api(server.baseUrl, kaiToken, `/orders/${faleoloOrderId}/observations`, URGENT_OBSERVATION);
+    const saved = Date.now();
+    await expect
+      .poll(() => bodyRows(page).first().innerText(), { timeout: 2500, interval: 25 })
+      .toMatch(/^H07\s+Urgent[\s\S]*FALEOLO, Tavita[\s\S]*Sedation 3[\s\S]*Urgent 1/);
+    const elapsed = Date.now() - saved;
+    console.log(`Handover board showed the urgent flag ${elapsed} ms after the observation was saved`);
+    expect(elapsed).toBeLessThan(2000);
+    expect(await page.evaluate(() => (window as unknown as { handoverMark?: string }).handoverMark)).toBe('kept');
+    await snapshot(page, 'handover-urgent');
+
+    // Mantine's chip is a visually hidden checkbox: the label is what a person clicks.
+    const onlyFlagged = page.getByRole('checkbox', { name: 'Only flagged' });
+    await page.locator('label', { hasText: /^Only flagged$/ }).click();
+    expect(await onlyFlagged.isChecked()).toBe(true);
+    await expect.poll(() => bodyRows(page).count()).toBe(1);
+    expect(await page.getByText('Showing 1 of 2 PCAs').count()).toBe(1);
+    await page.locator('label', { hasText: /^Only flagged$/ }).click();
+    await expect.poll(() => bodyRows(page).count()).toBe(2);
+  });
+
+  it('takes the outgoing and incoming sign-offs (a pharmacist only reads), and the charge nurse sees both', async () => {
+    nurse = await openBrowser(server.baseUrl);
+    const { page } = nurse;
+    // A pharmacist may read the board (no link in the navigation), but signs nothing.
+    await signIn(page, 'lin.park');
+    await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    expect(await page.getByRole('link', { name: 'Handover' }).count()).toBe(0);
+    await openHarbourBoard(page);
+    await rowOf(page, 'FALEOLO').getByText('Outgoing: not signed').waitFor();
+    expect(await page.getByRole('button', { name: /^Sign off/ }).count()).toBe(0);
+    await page.getByRole('button', { name: 'Sign out' }).click();
+
+    await signIn(page, 'kai.mendes');
+    await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await openHarbourBoard(page);
+
+    await page.getByRole('button', { name: /^Sign off \(outgoing\): FALEOLO, Tavita/ }).click();
+    const outgoing = page.getByRole('dialog', { name: 'Sign off (outgoing): FALEOLO, Tavita' });
+    await outgoing.getByRole('button', { name: 'Sign as outgoing nurse' }).click();
+    await outgoing.waitFor({ state: 'detached' });
+    await expect.poll(() => rowOf(mei.page, 'FALEOLO').innerText(), { timeout: 2500 }).toContain('Outgoing ✓ Kai Mendes');
+
+    // The same nurse cannot also take the PCA over: the server's refusal shows in the dialog.
+    await page.getByRole('button', { name: /^Sign off \(incoming\): FALEOLO, Tavita/ }).click();
+    const sameNurse = page.getByRole('dialog', { name: 'Sign off (incoming): FALEOLO, Tavita' });
+    await sameNurse.getByRole('checkbox', { name: 'The pump settings match the order' }).check();
+    await sameNurse.getByRole('button', { name: 'Sign as incoming nurse' }).click();
+    await sameNurse.getByRole('alert').filter({ hasText: 'two different people' }).waitFor();
+    await sameNurse.getByRole('button', { name: 'Back' }).click();
+
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await signIn(page, 'rosa.adeyemi');
+    await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await openHarbourBoard(page);
+    await page.getByRole('button', { name: /^Sign off \(incoming\): FALEOLO, Tavita/ }).click();
+    const incoming = page.getByRole('dialog', { name: 'Sign off (incoming): FALEOLO, Tavita' });
+    await incoming.getByRole('table', { name: "The order's regimen" }).getByText('0.1 mg/h').waitFor();
+    await incoming.getByRole('button', { name: 'Sign as incoming nurse' }).click();
+    await incoming.getByText(/^Confirm the pump settings match the order/).waitFor();
+    await snapshot(page, 'handover-incoming-confirm');
+    await incoming.getByRole('checkbox', { name: 'The pump settings match the order' }).check();
+    await incoming.getByRole('button', { name: 'Sign as incoming nurse' }).click();
+    await incoming.waitFor({ state: 'detached' });
+
+    await expect.poll(() => rowOf(mei.page, 'FALEOLO').innerText(), { timeout: 2500 }).toContain('Incoming ✓ Rosa Adeyemi (pump checked)');
+    expect(await rowOf(mei.page, 'FALEOLO').innerText()).toContain('Outgoing ✓ Kai Mendes');
+    await mei.page.getByTestId('signoff-progress').filter({ hasText: '1 of 1 PCA confirmed' }).waitFor();
+    await snapshot(mei.page, 'handover-signed');
+  });
+
+  it('prints a handover sheet: A4 landscape, who printed it, every PCA, the caution', async () => {
+    const { page } = mei;
+    await page.getByRole('link', { name: 'Print handover sheet' }).click();
+    await page.waitForURL(`**/handover/print?ward=${HARBOUR}`);
+    await page.getByRole('heading', { name: 'Handover sheet: Harbour', level: 1 }).waitFor();
+    await page.getByTestId('sheet-meta').filter({ hasText: /(Day|Night) shift, .* · Printed .* by Mei Tan · / }).waitFor();
+    const sheet = page.getByRole('table', { name: 'Handover sheet' });
+    expect(await sheet.locator('tbody tr').count()).toBe(2);
+    expect(await sheet.locator('tbody tr').first().innerText()).toMatch(/^H07\s+Urgent[\s\S]*FALEOLO, Tavita/);
+    await sheet.getByText(/^Decision support only:/).waitFor();
+
+    // Roughly the printable area of A4 landscape with 10 mm margins, at 96 px to the inch.
+    await page.setViewportSize({ width: 1047, height: 720 });
+    await page.emulateMedia({ media: 'print' });
+    expect(await page.getByRole('navigation', { name: 'Main navigation' }).isVisible()).toBe(false);
+    expect(await page.getByRole('button', { name: 'Print' }).isVisible()).toBe(false);
+    await snapshot(page, 'handover-print');
+    const pdf = await page.pdf({ preferCSSPageSize: true, printBackground: true });
+    writeFileSync(path.join(path.dirname(fileURLToPath(import.meta.url)), 'artifacts', 'handover-sheet.pdf'), pdf);
+    const pages = [...pdf.toString('latin1').matchAll(/\/MediaBox\s*\[\s*0 0 ([\d.]+) ([\d.]+)\s*\]/g)].map((box) => [Math.round(Number(box[1])), Math.round(Number(box[2]))]);
+    // One page, A4 landscape: 297 × 210 mm = 841.9 × 595.3 pt.
+    expect(pages).toEqual([[842, 595]]);
+    await page.setViewportSize({ width: 1366, height: 900 });
+    await page.emulateMedia({ media: 'screen' });
+  });
+});

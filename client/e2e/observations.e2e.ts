@@ -1,0 +1,222 @@
+import type { Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_PASSWORD, openBrowser, signIn, snapshot as saveSnapshot, type BrowserSession } from './support/browser.js';
+import { startServer, type RunningServer } from './support/server.js';
+
+// The demo's verified order: FALEOLO, Tavita (Harbour bed H07), HYDROmorphone 0.2 mg/mL, demand
+// 0.2 mg, lockout 10 min, basal 0.1 mg/h, 4-hour limit 6 mg, a ready 50 mL syringe HK3-7QT.
+// The demo has no running PCA, so the API starts this one (both bedside checks) before the UI.
+const PUMP = { drugId: 2, concentrationPerMl: 0.2, syringeVolumeMl: 50, loadingDose: null, demandDose: 0.2, lockoutMinutes: 10, basalRatePerHour: 0.1, oneHourLimit: null, fourHourLimit: 6 };
+
+type OrderSummary = { id: number; patientId: number; drugName: string; status: string };
+type Message = { subject: string; to: string };
+
+async function api<T>(server: RunningServer, token: string | null, method: string, path: string, body?: unknown): Promise<T> {
+  const response = await fetch(`${server.baseUrl}/api${path}`, {
+    method,
+    headers: { 'Content-Type': 'application/json', ...(token ? { Authorization: `Bearer ${token}` } : {}) },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+  const json = (await response.json()) as T;
+  if (!response.ok) throw new Error(`${method} ${path} answered ${response.status}: ${JSON.stringify(json)}`);
+  return json;
+}
+
+async function login(server: RunningServer, username: string): Promise<string> {
+  const { accessToken } = await api<{ accessToken: string }>(server, null, 'POST', '/auth/login', { username, password: DEMO_PASSWORD });
+  return accessToken;
+}
+
+/** Both bedside checks through the API: the order becomes active with its syringe in use. */
+async function startDemoPca(server: RunningServer): Promise<OrderSummary> {
+  const kai = await login(server, 'kai.mendes');
+  const verified = await api<OrderSummary[]>(server, kai, 'GET', '/orders?status=verified');
+  const order = verified.find((candidate) => candidate.drugName === 'hydromorphone');
+  if (!order) throw new Error('The demo has no verified hydromorphone order');
+  const check = await api<{ id: number }>(server, kai, 'POST', `/orders/${order.id}/bedside-checks`, {
+    patientMrn: 'KB100672',
+    patientDateOfBirth: '1979-07-28',
+    releaseCode: 'HK3-7QT',
+    settings: PUMP,
+  });
+  await api(server, kai, 'POST', `/orders/${order.id}/bedside-checks/${check.id}/second`, { username: 'rosa.adeyemi', password: DEMO_PASSWORD, settings: PUMP });
+  const started = await api<OrderSummary>(server, kai, 'GET', `/orders/${order.id}`);
+  expect(started.status).toBe('active');
+  return started;
+}
+
+type Reading = { sedation: RegExp; respiratoryRate: string; spo2: string; pain: string; attempts: string; delivered: string; volume: string; remaining: string };
+
+/** Typed in the form's own order: sedation and breathing before the pain score, then the pump. */
+async function enterObservation(page: Page, reading: Reading): Promise<void> {
+  await page.getByRole('radio', { name: reading.sedation }).check();
+  await page.getByLabel('Respiratory rate').fill(reading.respiratoryRate);
+  await page.getByLabel('SpO2').fill(reading.spo2);
+  await page.getByLabel('Pain score').fill(reading.pain);
+  await page.getByLabel('Attempts').fill(reading.attempts);
+  await page.getByLabel('Delivered').fill(reading.delivered);
+  await page.getByLabel('Volume infused').fill(reading.volume);
+  await page.getByLabel('Syringe left').fill(reading.remaining);
+}
+
+/** From the top of the page, so the full-page picture keeps the top bar in its place. */
+async function snapshot(page: Page, name: string): Promise<void> {
+  await page.evaluate(() => window.scrollTo(0, 0));
+  await saveSnapshot(page, name);
+}
+
+const SEDATION_3_ACTION = 'reduce the opioid dose by 25–50 % or notify the prescriber';
+
+describe('observations: flags, usage charts and acknowledgement', () => {
+  let server: RunningServer;
+  let kai: BrowserSession;
+  let sam: BrowserSession | undefined;
+  let order: OrderSummary;
+
+  beforeAll(async () => {
+    server = await startServer();
+    order = await startDemoPca(server);
+    kai = await openBrowser(server.baseUrl);
+    await signIn(kai.page, 'kai.mendes');
+    await kai.page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+  });
+  afterAll(async () => {
+    await sam?.close();
+    await kai?.close();
+    await server?.stop();
+  });
+
+  it('opens the PCA page from the patient page: tall-man drug, safe regimen, no flags yet', async () => {
+    const { page } = kai;
+    await page.goto(`/patients/${order.patientId}`);
+    await page.getByRole('link', { name: 'PCA page: HYDROmorphone 0.2 mg/mL' }).click();
+    await page.getByRole('heading', { name: 'PCA: FALEOLO, Tavita', level: 1 }).waitFor();
+    expect(await page.getByTestId('pca-drug').innerText()).toBe('HYDROmorphone 0.2 mg/mL');
+    const regimen = page.locator('dl[aria-label="Ordered regimen"]');
+    expect(await regimen.innerText()).toMatch(/Demand dose\s+0\.2 mg[\s\S]*Lockout\s+10 min[\s\S]*Basal rate\s+0\.1 mg\/h[\s\S]*4-hour limit\s+6 mg/);
+    await page.getByText('No open flags.').waitFor();
+    await page.getByTestId('next-observation').getByText(/^Due at \d{2}:\d{2}$/).waitFor();
+    await page.getByText(/Cross-tolerance between opioids is incomplete/).waitFor();
+    await snapshot(page, 'observations-pca-page-start');
+  });
+
+  it('records an observation with sedation 3: the urgent flag shows with its action', async () => {
+    const { page } = kai;
+    await page.getByRole('link', { name: 'Record observation' }).click();
+    await page.getByRole('heading', { name: 'Record observation', level: 1 }).waitFor();
+    await page.getByText('No observation yet for this PCA.').waitFor();
+    await enterObservation(page, { sedation: /Frequently drowsy/, respiratoryRate: '12', spo2: '95', pain: '4', attempts: '6', delivered: '4', volume: '2', remaining: '48' });
+    // Said before saving: sedation 3 is unacceptable, with the scale's action.
+    await page.getByText('Urgent: saving raises an urgent flag').waitFor();
+    await snapshot(page, 'observations-form-sedation-3');
+    await page.getByRole('button', { name: 'Save observation' }).click();
+
+    await page.getByRole('heading', { name: 'Observation saved' }).waitFor();
+    const raised = page.getByRole('alert', { name: 'Urgent flag: Sedation level 3' });
+    await raised.getByText('Urgent', { exact: true }).waitFor();
+    await raised.getByText(SEDATION_3_ACTION, { exact: false }).waitFor();
+    await snapshot(page, 'observations-urgent-flag-raised');
+
+    await page.getByRole('link', { name: 'Open the PCA page' }).click();
+    const open = page.getByRole('group', { name: 'Urgent flag: Sedation level 3' });
+    await open.getByText(SEDATION_3_ACTION, { exact: false }).waitFor();
+    await page.getByRole('heading', { name: 'Open flags (1)' }).waitFor();
+  });
+
+  it('e-mails the urgent flag', async () => {
+    const token = await login(server, 'sam.rivera');
+    await expect
+      .poll(async () => (await api<Message[]>(server, token, 'GET', '/dev/mailbox')).find((message) => message.subject.startsWith('URGENT: Sedation level 3'))?.subject, {
+        timeout: 10_000,
+      })
+      .toMatch(/^URGENT: Sedation level 3 — Harbour bed H07$/);
+  });
+
+  it('checks pump totals as they are typed, then records a second observation', async () => {
+    const { page } = kai;
+    await page.getByRole('link', { name: 'Record observation' }).click();
+    await page.getByTestId('last-observation').getByText(/sedation 3, respiratory rate 12\/min/).waitFor();
+    await page.getByLabel('Attempts').fill('5');
+    await page.getByText('At least 6: pump totals never go down within one syringe').waitFor();
+    expect(await page.getByLabel('Attempts').getAttribute('aria-invalid')).toBe('true');
+    await snapshot(page, 'observations-form-totals-check');
+    await enterObservation(page, { sedation: /Slightly drowsy/, respiratoryRate: '14', spo2: '96', pain: '3', attempts: '9', delivered: '7', volume: '2.6', remaining: '47.4' });
+    await page.getByRole('button', { name: 'Save observation' }).click();
+    await page.getByRole('heading', { name: 'Observation saved' }).waitFor();
+    await page.getByRole('link', { name: 'Open the PCA page' }).click();
+    await page.getByRole('heading', { name: 'PCA: FALEOLO, Tavita', level: 1 }).waitFor();
+  });
+
+  it('draws the usage charts with the data, each with a title, a summary and a table', async () => {
+    const { page } = kai;
+    const attempts = page.getByRole('figure', { name: 'Attempts and doses delivered per hour' });
+    const painSedation = page.getByRole('figure', { name: 'Pain score and sedation level' });
+    const cumulative = page.getByRole('figure', { name: 'Cumulative dose (mg)' });
+    for (const figure of [attempts, painSedation, cumulative]) await figure.locator('svg.recharts-surface').first().waitFor();
+    await expect.poll(() => attempts.locator('.recharts-bar-rectangle').count()).toBeGreaterThan(0);
+    await expect.poll(() => painSedation.locator('.recharts-line-dot').count()).toBe(4);
+    await expect.poll(() => cumulative.locator('.recharts-line-curve').count()).toBe(1);
+    await attempts.locator('figcaption').getByText(/9 attempts, 7 doses delivered/).waitFor();
+    await painSedation.locator('figcaption').getByText(/2 observations in the hours shown\. Latest at \d{2}:\d{2}: pain 3\/10, sedation 2/).waitFor();
+    await cumulative.locator('figcaption').getByText(/^0\.52 mg given in the 12 hours shown/).waitFor();
+
+    await painSedation.getByRole('button', { name: 'Show as table' }).click();
+    const rows = painSedation.getByRole('table').locator('tbody tr');
+    expect(await rows.count()).toBe(2);
+    expect(await rows.first().innerText()).toMatch(/4\s+3: Frequently drowsy/);
+
+    await page.getByText('8 h', { exact: true }).click();
+    await expect.poll(() => new URL(page.url()).searchParams.get('hours')).toBe('8');
+    await cumulative.locator('figcaption').getByText(/given in the 8 hours shown/).waitFor();
+    await snapshot(page, 'observations-pca-page-charts');
+  });
+
+  it('acknowledges the urgent flag with a note of what was done', async () => {
+    const { page } = kai;
+    await page.getByRole('button', { name: 'Acknowledge: Sedation level 3' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Acknowledge flag' });
+    await dialog.getByLabel('What was done').fill('ok');
+    await dialog.getByRole('button', { name: 'Acknowledge flag' }).click();
+    await dialog.getByText('Say what was done (at least 5 characters)').waitFor();
+    await dialog.getByLabel('What was done').fill('Demand dose reduced by 25 % with Dr Osei; sedation rechecked at 2');
+    await snapshot(page, 'observations-acknowledge');
+    await dialog.getByRole('button', { name: 'Acknowledge flag' }).click();
+    await dialog.waitFor({ state: 'hidden' });
+
+    expect(await page.getByRole('group', { name: 'Urgent flag: Sedation level 3' }).count()).toBe(0);
+    await page.getByRole('button', { name: /acknowledged flag/ }).click();
+    const done = page.getByRole('group', { name: 'Urgent flag: Sedation level 3' });
+    await done.getByText(/Acknowledged by Kai Mendes, .*: Demand dose reduced by 25 %/).waitFor();
+    await snapshot(page, 'observations-flag-acknowledged');
+  });
+
+  it('sam.rivera sets Harbour’s SpO2 threshold to 92 %, and an out-of-range value is refused beside the field', async () => {
+    sam = await openBrowser(server.baseUrl);
+    const { page } = sam;
+    await signIn(page, 'sam.rivera');
+    await page.getByRole('navigation').getByRole('link', { name: 'Ward policies' }).click();
+    await page.getByRole('heading', { name: 'Ward policies', level: 1 }).waitFor();
+    await page.getByRole('combobox', { name: 'Ward' }).click();
+    await page.getByRole('option', { name: 'Harbour' }).click();
+    await expect.poll(() => new URL(page.url()).searchParams.get('ward')).not.toBeNull();
+
+    const spo2 = page.getByLabel('SpO2 below');
+    expect(await spo2.inputValue()).toBe('90');
+    expect(await page.getByTestId('default-spo2Threshold').innerText()).toMatch(/^Shipped default\s+90 %$/);
+    await spo2.fill('92');
+    await page.getByRole('button', { name: 'Save' }).click();
+    await page.getByText('Ward policy saved').waitFor();
+    await page.getByTestId('default-spo2Threshold').getByText('Changed locally').waitFor();
+    const token = await login(server, 'sam.rivera');
+    const wardId = Number(new URL(page.url()).searchParams.get('ward'));
+    expect((await api<{ spo2Threshold: number }>(server, token, 'GET', `/wards/${wardId}/policy`)).spo2Threshold).toBe(92);
+
+    await spo2.fill('20');
+    await page.getByText('At least 70 %').waitFor();
+    expect(await spo2.getAttribute('aria-invalid')).toBe('true');
+    const describedBy = (await spo2.getAttribute('aria-describedby')) ?? '';
+    const messages = await Promise.all(describedBy.split(' ').filter(Boolean).map((id) => page.locator(`[id="${id}"]`).innerText()));
+    expect(messages.join(' ')).toContain('At least 70 %');
+    await snapshot(page, 'ward-policy-harbour');
+  });
+});

@@ -1,0 +1,28 @@
+import { Skeleton } from '@mantine/core';
+import { useQuery } from '@tanstack/react-query';
+import { useParams } from 'react-router-dom';
+import { useOrder } from '@/features/orders/api/get-order';
+import { OrderDetailScreen } from '@/features/orders/components/order-detail-screen';
+import { patientQueryOptions } from '@/features/patients/api/get-patient';
+import { PatientBanner } from '@/features/patients/components/patient-banner';
+import { usePageTitle } from '@/hooks/use-page-title';
+import { NotAnOrder } from './not-an-order';
+
+export function Component() {
+  usePageTitle('PCA order');
+  const id = Number(useParams().orderId);
+  const valid = Number.isInteger(id) && id > 0;
+  // The screen reads the order from the same cache; the patient comes from the patients feature.
+  const order = useOrder(valid ? id : null);
+  const patientId = order.data?.patientId ?? null;
+  const patient = useQuery({ ...patientQueryOptions(patientId ?? 0), enabled: patientId !== null });
+  if (!valid) return <NotAnOrder />;
+  return (
+    <OrderDetailScreen
+      key={id}
+      orderId={id}
+      weightKg={patient.data?.weightKg ?? null}
+      patientBanner={patient.data ? <PatientBanner patient={patient.data} /> : <Skeleton height={96} />}
+    />
+  );
+}

@@ -1,0 +1,65 @@
+import type { ReactNode } from 'react';
+import { Anchor, Group, Skeleton, Stack, Title } from '@mantine/core';
+import { IconArrowLeft } from '@tabler/icons-react';
+import { Link } from 'react-router-dom';
+import { QueryErrorAlert } from '@/components/errors/query-error-alert';
+import { paths } from '@/config/paths';
+import { isApiRequestError } from '@/lib/api-error';
+import { useBedsideOrder } from '../api/get-bedside-order';
+import type { BedsideOrder } from '../api/bedside-schemas';
+import { BedsideCaution } from './bedside-caution';
+import { OrderContext } from './order-context';
+
+export interface BedsideOrderPageProps {
+  orderId: number;
+  title: string;
+  /** Shows the ordered regimen beside the patient (never during a bedside check). */
+  showRegimen?: boolean;
+  children: (order: BedsideOrder) => ReactNode;
+}
+
+/** The frame of every bedside task: the way back, the task's name, whose order it is, the caution. */
+export function BedsideOrderPage({ orderId, title, showRegimen, children }: BedsideOrderPageProps) {
+  const orderQuery = useBedsideOrder(orderId);
+  const order = orderQuery.data;
+
+  let body: ReactNode;
+  if (order) {
+    body = (
+      <>
+        <OrderContext order={order} showRegimen={showRegimen} />
+        {children(order)}
+      </>
+    );
+  } else if (orderQuery.isError) {
+    const notFound = isApiRequestError(orderQuery.error) && orderQuery.error.status === 404;
+    body = (
+      <QueryErrorAlert
+        title={notFound ? 'Order not found' : 'The order could not be loaded'}
+        error={orderQuery.error}
+        onRetry={notFound ? undefined : () => void orderQuery.refetch()}
+      />
+    );
+  } else {
+    body = (
+      <Stack gap="md" aria-busy aria-label="Loading the order">
+        <Skeleton height={84} />
+        <Skeleton height={320} />
+      </Stack>
+    );
+  }
+
+  return (
+    <Stack gap="lg" maw={1100}>
+      <Anchor component={Link} to={paths.bedside.getHref({ wardId: order?.wardId })} size="sm">
+        <Group gap={4} component="span">
+          <IconArrowLeft size={16} aria-hidden />
+          Back to PCA orders
+        </Group>
+      </Anchor>
+      <Title order={1}>{title}</Title>
+      {body}
+      <BedsideCaution />
+    </Stack>
+  );
+}

@@ -1,0 +1,140 @@
+import type { ComponentType } from 'react';
+import { Button, Group, Skeleton, Stack, Table, Text } from '@mantine/core';
+import { IconClipboardCheck, IconDroplet, IconPlayerStop, IconReplace, type IconProps } from '@tabler/icons-react';
+import { Link } from 'react-router-dom';
+import type { OrderSummary } from '@lockstep/shared';
+import { paths } from '@/config/paths';
+import { drugAndConcentration, regimenParts } from '../utils/regimen-line';
+import { bedsideActions, bedsideHint, type BedsideAction, type SyringeState } from '../utils/syringe-state';
+import { OrderStatusBadge } from './order-status-badge';
+
+const ACTIONS: Record<BedsideAction, { label: string; icon: ComponentType<IconProps>; href: (orderId: number) => string; variant: string }> = {
+  check: { label: 'Start bedside check', icon: IconClipboardCheck, href: (id) => paths.bedsideCheck.getHref(id), variant: 'filled' },
+  bolus: { label: 'Clinician bolus', icon: IconDroplet, href: (id) => paths.bedsideBolus.getHref(id), variant: 'default' },
+  'syringe-change': { label: 'Change syringe', icon: IconReplace, href: (id) => paths.bedsideSyringeChange.getHref(id), variant: 'default' },
+  discontinue: { label: 'Discontinue', icon: IconPlayerStop, href: (id) => paths.bedsideDiscontinue.getHref(id), variant: 'default' },
+};
+
+export interface BedsideOrdersTableProps {
+  orders: readonly OrderSummary[];
+  /** Each order's syringes, once its details have loaded. */
+  syringes: ReadonlyMap<number, SyringeState>;
+  isLoading: boolean;
+  emptyMessage: string;
+}
+
+function OrderActions({ order, syringes }: { order: OrderSummary; syringes: SyringeState | undefined }) {
+  return (
+    <Group gap="xs" wrap="wrap">
+      {bedsideActions(order.status, syringes).map((action) => {
+        const { label, icon: Icon, href, variant } = ACTIONS[action];
+        // A check needs a syringe from pharmacy; without one the button would only lead to a refusal.
+        const waiting = action === 'check' && syringes === 'none';
+        const common = { variant, size: 'sm', leftSection: <Icon size={16} aria-hidden /> } as const;
+        if (waiting) {
+          return (
+            <Button key={action} {...common} disabled>
+              {label}
+            </Button>
+          );
+        }
+        return (
+          <Button key={action} {...common} component={Link} to={href(order.id)}>
+            {label}
+          </Button>
+        );
+      })}
+    </Group>
+  );
+}
+
+/** "demand 0.2 mg · lockout 10 min · …", each part kept on one line. */
+function RegimenParts({ parts }: { parts: readonly string[] }) {
+  return parts.map((part, index) => (
+    <span key={part}>
+      {index > 0 ? ' · ' : null}
+      <span style={{ whiteSpace: 'nowrap' }}>{part}</span>
+    </span>
+  ));
+}
+
+/** The ward's PCA orders at the bedside: who, where, what runs, and what to do next. */
+export function BedsideOrdersTable({ orders, syringes, isLoading, emptyMessage }: BedsideOrdersTableProps) {
+  return (
+    <Table.ScrollContainer minWidth={900}>
+      <Table aria-label="PCA orders" aria-busy={isLoading || undefined} tabularNums verticalSpacing="sm" fz="sm">
+        <Table.Thead>
+          <Table.Tr>
+            <Table.Th>Bed</Table.Th>
+            <Table.Th>Patient</Table.Th>
+            <Table.Th>PCA</Table.Th>
+            <Table.Th>Status</Table.Th>
+            <Table.Th>Actions</Table.Th>
+          </Table.Tr>
+        </Table.Thead>
+        <Table.Tbody>
+          {isLoading
+            ? Array.from({ length: 3 }, (_, index) => (
+                <Table.Tr key={`skeleton-${index}`} aria-hidden>
+                  {Array.from({ length: 5 }, (_, cell) => (
+                    <Table.Td key={cell}>
+                      <Skeleton height={14} />
+                    </Table.Td>
+                  ))}
+                </Table.Tr>
+              ))
+            : orders.map((order) => {
+                const hint = bedsideHint(order.status, syringes.get(order.id));
+                return (
+                  <Table.Tr key={order.id}>
+                    <Table.Td>
+                      <Text fw={600} size="sm">
+                        {order.bed}
+                      </Text>
+                      <Text size="xs" c="dimmed">
+                        {order.wardName}
+                      </Text>
+                    </Table.Td>
+                    <Table.Th scope="row" fw={600} style={{ whiteSpace: 'nowrap' }}>
+                      {order.patientName}
+                    </Table.Th>
+                    <Table.Td>
+                      <Stack gap={2}>
+                        <Text fw={600} size="sm">
+                          {drugAndConcentration(order)}
+                        </Text>
+                        <Text size="xs" c="dimmed">
+                          <RegimenParts parts={regimenParts(order)} />
+                        </Text>
+                      </Stack>
+                    </Table.Td>
+                    <Table.Td miw={170}>
+                      <Stack gap={4} align="flex-start">
+                        <OrderStatusBadge status={order.status} />
+                        {hint ? (
+                          <Text size="xs" c="dimmed">
+                            {hint}
+                          </Text>
+                        ) : null}
+                      </Stack>
+                    </Table.Td>
+                    <Table.Td>
+                      <OrderActions order={order} syringes={syringes.get(order.id)} />
+                    </Table.Td>
+                  </Table.Tr>
+                );
+              })}
+          {!isLoading && orders.length === 0 ? (
+            <Table.Tr>
+              <Table.Td colSpan={5}>
+                <Text c="dimmed" py="md">
+                  {emptyMessage}
+                </Text>
+              </Table.Td>
+            </Table.Tr>
+          ) : null}
+        </Table.Tbody>
+      </Table>
+    </Table.ScrollContainer>
+  );
+}

@@ -1,0 +1,53 @@
+import { Button, DataList, Group, Stack } from '@mantine/core';
+import { Link } from 'react-router-dom';
+import { formatDose, tallMan } from '@lockstep/shared';
+import { paths } from '@/config/paths';
+import { formatDateTime } from '@/utils/format-date';
+import type { BedsideOrder } from '../api/bedside-schemas';
+import type { BolusResponse } from '../api/give-bolus';
+import { DonePanel } from './done-panel';
+
+/** The recorded clinician bolus: how much, when, why, and who gave and witnessed it. */
+export function BolusGiven({ order, bolus }: { order: BedsideOrder; bolus: BolusResponse }) {
+  return (
+    <DonePanel number={3} title="Clinician bolus recorded">
+      <Stack gap="md">
+        <DataList labelWidth="10rem" className="tabular-nums">
+          <DataList.Item>
+            <DataList.ItemLabel>Bolus</DataList.ItemLabel>
+            <DataList.ItemValue>
+              {formatDose(bolus.amount, bolus.doseUnit)} {tallMan(order.drugName)}
+            </DataList.ItemValue>
+          </DataList.Item>
+          <DataList.Item>
+            <DataList.ItemLabel>Given at</DataList.ItemLabel>
+            <DataList.ItemValue>{formatDateTime(bolus.at)}</DataList.ItemValue>
+          </DataList.Item>
+          <DataList.Item>
+            <DataList.ItemLabel>Given by</DataList.ItemLabel>
+            <DataList.ItemValue>{bolus.givenByName}</DataList.ItemValue>
+          </DataList.Item>
+          <DataList.Item>
+            <DataList.ItemLabel>Witness</DataList.ItemLabel>
+            <DataList.ItemValue>{bolus.witnessName}</DataList.ItemValue>
+          </DataList.Item>
+          <DataList.Item>
+            <DataList.ItemLabel>Reason</DataList.ItemLabel>
+            <DataList.ItemValue>{bolus.reason}</DataList.ItemValue>
+          </DataList.Item>
+          {bolus.overrideReason ? (
+            <DataList.Item>
+              <DataList.ItemLabel>Soft-limit reason</DataList.ItemLabel>
+              <DataList.ItemValue>{bolus.overrideReason}</DataList.ItemValue>
+            </DataList.Item>
+          ) : null}
+        </DataList>
+        <Group>
+          <Button component={Link} to={paths.bedside.getHref({ wardId: order.wardId })} size="lg">
+            Back to PCA orders
+          </Button>
+        </Group>
+      </Stack>
+    </DonePanel>
+  );
+}

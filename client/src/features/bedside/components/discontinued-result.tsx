@@ -1,0 +1,32 @@
+import { Button, Group, Stack, Text } from '@mantine/core';
+import { Link } from 'react-router-dom';
+import { paths } from '@/config/paths';
+import { formatDateTime } from '@/utils/format-date';
+import type { DiscontinueResponse } from '../api/discontinue-order';
+import { DonePanel } from './done-panel';
+import { OrderStatusBadge } from './order-status-badge';
+import { ReconciliationSummary } from './reconciliation-summary';
+
+/** The PCA has ended: its status, the last syringe's reconciliation and any flag for pharmacy. */
+export function DiscontinuedResult({ done }: { done: DiscontinueResponse }) {
+  const { order, reconciliation } = done;
+  return (
+    <DonePanel number={3} title="PCA discontinued">
+      <Stack gap="lg">
+        <Group gap="xs">
+          <Text>Order status:</Text>
+          <OrderStatusBadge status={order.status} size="lg" />
+          <Text c="dimmed" className="tabular-nums">
+            since {formatDateTime(order.statusChangedAt)}
+          </Text>
+        </Group>
+        <ReconciliationSummary reconciliation={reconciliation} flags={order.flags} />
+        <Group>
+          <Button component={Link} to={paths.bedside.getHref({ wardId: order.wardId })} size="lg">
+            Back to PCA orders
+          </Button>
+        </Group>
+      </Stack>
+    </DonePanel>
+  );
+}

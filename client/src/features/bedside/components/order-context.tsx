@@ -1,0 +1,54 @@
+import type { ReactNode } from 'react';
+import { Group, Paper, Stack, Text } from '@mantine/core';
+import { tallMan } from '@lockstep/shared';
+import type { BedsideOrder } from '../api/bedside-schemas';
+import { drugAndConcentration, regimenParts } from '../utils/regimen-line';
+import { OrderStatusBadge } from './order-status-badge';
+
+function Fact({ label, children }: { label: string; children: ReactNode }) {
+  return (
+    <Stack gap={0}>
+      <Text size="xs" c="dimmed" tt="uppercase" fw={600}>
+        {label}
+      </Text>
+      <Text fw={600} fz="lg" className="tabular-nums">
+        {children}
+      </Text>
+    </Stack>
+  );
+}
+
+export interface OrderContextProps {
+  order: BedsideOrder;
+  /**
+   * Shows the ordered regimen. Off during a bedside check: the nurses read the pump, never the
+   * order, until both entries are compared.
+   */
+  showRegimen?: boolean;
+}
+
+/** Which patient, bed and drug this screen is about: the first thing a nurse checks. */
+export function OrderContext({ order, showRegimen = false }: OrderContextProps) {
+  return (
+    <Paper withBorder radius="md" p="md" bg="slate.0" aria-label="Patient and order" component="section">
+      <Group gap="xl" align="flex-start" wrap="wrap">
+        <Fact label="Patient">{order.patientName}</Fact>
+        <Fact label="Ward and bed">
+          {order.wardName}, bed {order.bed}
+        </Fact>
+        <Fact label="Drug">{showRegimen ? drugAndConcentration(order) : tallMan(order.drugName)}</Fact>
+        <Stack gap={4}>
+          <Text size="xs" c="dimmed" tt="uppercase" fw={600}>
+            Order status
+          </Text>
+          <OrderStatusBadge status={order.status} size="lg" />
+        </Stack>
+      </Group>
+      {showRegimen ? (
+        <Text size="sm" mt="sm" className="tabular-nums">
+          {regimenParts(order).join(' · ')}
+        </Text>
+      ) : null}
+    </Paper>
+  );
+}

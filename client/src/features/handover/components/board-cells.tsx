@@ -1,0 +1,149 @@
+import type { ReactNode } from 'react';
+import { Group, Stack, Text, VisuallyHidden } from '@mantine/core';
+import { IconAlertTriangle, IconClock, IconHourglassLow } from '@tabler/icons-react';
+import { FLAG_SEVERITY_LABELS, formatDose, isAcceptableSedation, ORDER_STATUS_LABELS, SEDATION_DESCRIPTIONS, type HandoverRow } from '@lockstep/shared';
+import { hasOpenFlags, rowSeverity } from '../utils/board-filters';
+import { drugLine, formatElapsed, formatNearTime, lastFourHours, patientFacts, regimenSummary } from '../utils/board-format';
+import { SeverityLabel } from './severity';
+
+// The board's cells, shared by the live table and the printed sheet. Each says in words what it
+// shows, so a cell read on its own (or on paper) needs no colour to be understood.
+
+const Dimmed = ({ children }: { children: ReactNode }) => (
+  <Text size="xs" c="dimmed">
+    {children}
+  </Text>
+);
+
+/** The bed, then the row's severity in words: the first thing a scanning eye meets. */
+export function BedCell({ row }: { row: HandoverRow }) {
+  return (
+    <Stack gap={2}>
+      <Text size="md" fw={700} style={{ whiteSpace: 'nowrap' }}>
+        {row.bed}
+      </Text>
+      <SeverityLabel severity={rowSeverity(row)} size="xs" />
+    </Stack>
+  );
+}
+
+export function PatientCell({ patient }: { patient: HandoverRow['patient'] }) {
+  return (
+    <Stack gap={0}>
+      <Text size="sm" fw={600}>
+        {patient.name}
+      </Text>
+      <Dimmed>
+        MRN {patient.mrn} · {patientFacts(patient)}
+      </Dimmed>
+    </Stack>
+  );
+}
+
+/** Drug, regimen, and how long it has run (or the status that keeps it from running). */
+export function PcaCell({ row, now }: { row: HandoverRow; now: Date }) {
+  const started =
+    row.status === 'active' && row.startedAt !== null && row.minutesSinceStart !== null
+      ? `Running ${formatElapsed(row.minutesSinceStart)} (from ${formatNearTime(row.startedAt, now)})`
+      : `${ORDER_STATUS_LABELS[row.status]} · not started`;
+  return (
+    <Stack gap={0}>
+      <Text size="sm" fw={600}>
+        {drugLine(row)}
+      </Text>
+      <Text size="xs">{regimenSummary(row)}</Text>
+      <Dimmed>{started}</Dimmed>
+    </Stack>
+  );
+}
+
+export function LastObservationCell({ observation, now }: { observation: HandoverRow['lastObservation']; now: Date }) {
+  if (!observation) return <Dimmed>None yet</Dimmed>;
+  const acceptable = isAcceptableSedation(observation.sedationLevel);
+  return (
+    <Stack gap={0}>
+      <Text size="sm">{formatNearTime(observation.at, now)}</Text>
+      <Text size="xs" style={{ whiteSpace: 'nowrap' }}>
+        Pain {observation.painScore} ·{' '}
+        <Text span inherit fw={acceptable ? 400 : 700} title={SEDATION_DESCRIPTIONS[observation.sedationLevel]}>
+          {acceptable ? null : <IconAlertTriangle size={12} aria-hidden style={{ verticalAlign: '-2px', marginRight: 2 }} />}
+          Sedation {observation.sedationLevel}
+          {acceptable ? null : <VisuallyHidden> (unacceptable)</VisuallyHidden>}
+        </Text>
+      </Text>
+      <Text size="xs" style={{ whiteSpace: 'nowrap' }}>
+        RR {observation.respiratoryRate} · SpO2 {observation.spo2} %
+      </Text>
+    </Stack>
+  );
+}
+
+export function NextObservationCell({ next, now }: { next: HandoverRow['nextObservation']; now: Date }) {
+  if (!next) return <Dimmed>—</Dimmed>;
+  if (next.overdueMinutes > 0) {
+    const late = formatElapsed(next.overdueMinutes);
+    return (
+      <Stack gap={0}>
+        {next.severity === 'urgent' ? <SeverityLabel severity="urgent" detail={`· ${late} overdue`} /> : <SeverityLabel severity="review" word="Overdue" detail={late} />}
+        <Dimmed>was due {formatNearTime(next.dueAt, now)}</Dimmed>
+      </Stack>
+    );
+  }
+  return (
+    <Group gap={4} wrap="nowrap">
+      <IconClock size={16} aria-hidden />
+      <Text size="sm">Due {formatNearTime(next.dueAt, now)}</Text>
+    </Group>
+  );
+}
+
+/** The last 4 hours (attempts / delivered · dose) over the rolling 24-hour total. */
+export function UsageCell({ row }: { row: HandoverRow }) {
+  return (
+    <Stack gap={0}>
+      <Text size="sm" style={{ whiteSpace: 'nowrap' }}>
+        <Text span size="xs" c="dimmed">
+          4 h{' '}
+        </Text>
+        {lastFourHours(row)}
+      </Text>
+      <Text size="sm" style={{ whiteSpace: 'nowrap' }}>
+        <Text span size="xs" c="dimmed">
+          24 h{' '}
+        </Text>
+        {formatDose(row.total24hDose, row.doseUnit)}
+      </Text>
+    </Stack>
+  );
+}
+
+export function SyringeCell({ syringe, now }: { syringe: HandoverRow['syringe']; now: Date }) {
+  if (syringe.remainingMl === null) return <Dimmed>No syringe running</Dimmed>;
+  return (
+    <Stack gap={0}>
+      <Text size="sm">{formatDose(syringe.remainingMl, 'mL')} left</Text>
+      {syringe.projectedEmptyAt ? <Dimmed>empty about {formatNearTime(syringe.projectedEmptyAt, now)}</Dimmed> : null}
+      {syringe.emptiesThisShift ? (
+        <Group gap={4} wrap="nowrap" c="orange.9">
+          <IconHourglassLow size={14} aria-hidden />
+          <Text size="xs" fw={600} c="inherit">
+            Empties this shift
+          </Text>
+        </Group>
+      ) : null}
+    </Stack>
+  );
+}
+
+export function FlagsCell({ flags }: { flags: HandoverRow['flags'] }) {
+  if (!hasOpenFlags({ flags })) return <Dimmed>None open</Dimmed>;
+  return (
+    // The messages on hover, for a reader who wants more than the counts.
+    <Stack gap={2} title={flags.open.map((flag) => `${FLAG_SEVERITY_LABELS[flag.severity]}: ${flag.message}`).join('\n')}>
+      {flags.urgent > 0 ? <SeverityLabel severity="urgent" detail={String(flags.urgent)} /> : null}
+      {flags.review > 0 ? <SeverityLabel severity="review" detail={String(flags.review)} /> : null}
+      {flags.info > 0 ? <SeverityLabel severity="info" detail={String(flags.info)} /> : null}
+    </Stack>
+  );
+}
+

@@ -1,0 +1,4 @@
+export const mailboxKeys = {
+  all: ['mailbox'] as const,
+  lists: () => [...mailboxKeys.all, 'list'] as const,
+};

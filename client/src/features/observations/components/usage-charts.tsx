@@ -1,0 +1,25 @@
+import { SimpleGrid } from '@mantine/core';
+import type { Observation, PcaUsage } from '../api/pca-schemas';
+import { bucketWindow } from '../utils/chart-data';
+import { AttemptsChart } from './attempts-chart';
+import { CumulativeDoseChart } from './cumulative-dose-chart';
+import { PainSedationChart } from './pain-sedation-chart';
+
+export interface UsageChartsProps {
+  usage: PcaUsage;
+  observations: readonly Observation[];
+}
+
+/**
+ * The PCA page's charts. Loaded on their own (the charting library is large), after the
+ * figures and flags a nurse reads first.
+ */
+export function UsageCharts({ usage, observations }: UsageChartsProps) {
+  return (
+    <SimpleGrid cols={{ base: 1, lg: 2 }} spacing="md" style={{ alignItems: 'start' }}>
+      <AttemptsChart buckets={usage.buckets} />
+      <PainSedationChart observations={observations} window={bucketWindow(usage.buckets)} />
+      <CumulativeDoseChart buckets={usage.buckets} doseUnit={usage.doseUnit} />
+    </SimpleGrid>
+  );
+}

@@ -1,0 +1,160 @@
+import { SEDATION_LEVELS, type SedationLevel } from '@lockstep/shared';
+import type { CreateObservationRequest } from '../api/record-observation';
+import type { Observation } from '../api/pca-schemas';
+
+/** A NumberInput's value: a number, or text while empty ('') or half-typed. */
+export type NumberFieldValue = number | string;
+
+export const NUMBER_FIELDS = ['painScore', 'respiratoryRate', 'spo2', 'attempts', 'delivered', 'volumeInfusedMl', 'syringeRemainingMl'] as const;
+export type NumberField = (typeof NUMBER_FIELDS)[number];
+
+export const PUMP_TOTAL_FIELDS = ['attempts', 'delivered', 'volumeInfusedMl'] as const;
+export type PumpTotalField = (typeof PUMP_TOTAL_FIELDS)[number];
+export type PumpTotals = Record<PumpTotalField, number>;
+
+/** The form's fields carry the API's names, so a 400's field errors land beside them. */
+export type ObservationFormValues = Record<NumberField, NumberFieldValue> & {
+  sedationLevel: string;
+  /** A `datetime-local` value; empty means "now". */
+  at: string;
+  note: string;
+};
+
+export type ObservationFormErrors = Partial<Record<keyof ObservationFormValues, string>>;
+
+export function emptyObservationForm(): ObservationFormValues {
+  return { painScore: '', sedationLevel: '', respiratoryRate: '', spo2: '', attempts: '', delivered: '', volumeInfusedMl: '', syringeRemainingMl: '', at: '', note: '' };
+}
+
+interface NumberRule {
+  min: number;
+  max: number;
+  integer: boolean;
+  empty: string;
+  notWhole: string;
+  below: string;
+  above: string;
+}
+
+// Plausible ranges, the same as the server's, with the same words.
+export const NUMBER_RULES: Record<NumberField, NumberRule> = {
+  painScore: { min: 0, max: 10, integer: true, empty: 'Enter the pain score', notWhole: 'Pain score is a whole number from 0 to 10', below: 'Pain score is 0 to 10', above: 'Pain score is 0 to 10' },
+  respiratoryRate: { min: 0, max: 80, integer: true, empty: 'Enter the respiratory rate', notWhole: 'Respiratory rate is a whole number per minute', below: 'Respiratory rate is 0 to 80 per minute', above: 'Respiratory rate is 0 to 80 per minute' },
+  spo2: { min: 0, max: 100, integer: true, empty: 'Enter the SpO2', notWhole: 'SpO2 is a whole number of %', below: 'SpO2 is 0 to 100 %', above: 'SpO2 is 0 to 100 %' },
+  attempts: { min: 0, max: 100_000, integer: true, empty: 'Enter the attempts from the pump', notWhole: 'Attempts is a whole number from the pump', below: 'Attempts cannot be negative', above: 'Attempts looks too large: check the pump' },
+  delivered: { min: 0, max: 100_000, integer: true, empty: 'Enter the doses delivered from the pump', notWhole: 'Delivered is a whole number from the pump', below: 'Delivered cannot be negative', above: 'Delivered looks too large: check the pump' },
+  volumeInfusedMl: { min: 0, max: 1000, integer: false, empty: 'Enter the volume infused from the pump', notWhole: '', below: 'Volume infused cannot be negative', above: 'Volume infused looks too large: check the pump' },
+  syringeRemainingMl: { min: 0, max: 1000, integer: false, empty: 'Enter the volume left in the syringe', notWhole: '', below: 'Syringe remaining cannot be negative', above: 'Syringe remaining looks too large: check the syringe' },
+};
+
+/** '' is "not entered" (null); plain decimals only ("1e2" is not read off a pump); otherwise undefined. */
+export function readNumber(value: NumberFieldValue): number | null | undefined {
+  if (typeof value === 'number') return Number.isFinite(value) ? value : undefined;
+  const text = value.trim();
+  if (text === '') return null;
+  if (!/^-?(\d+\.?\d*|\.\d+)$/.test(text)) return undefined;
+  return Number(text);
+}
+
+/** The range check of one number field, as typed. */
+export function numberFieldError(field: NumberField, value: NumberFieldValue): string | null {
+  const rule = NUMBER_RULES[field];
+  const number = readNumber(value);
+  if (number === null) return rule.empty;
+  if (number === undefined) return `${rule.empty} as a number`;
+  if (rule.integer && !Number.isInteger(number)) return rule.notWhole;
+  if (number < rule.min) return rule.below;
+  if (number > rule.max) return rule.above;
+  return null;
+}
+
+/** A `datetime-local` value ("2026-03-03T14:05") as a moment in the browser's time zone. */
+export function readLocalDateTime(value: string): Date | null {
+  if (!/^\d{4}-\d{2}-\d{2}T\d{2}:\d{2}(:\d{2})?$/.test(value)) return null;
+  const date = new Date(value);
+  return Number.isNaN(date.getTime()) ? null : date;
+}
+
+export interface PumpBounds {
+  /** Totals of the observation just before (same syringe): the new ones cannot be lower. */
+  floor: (PumpTotals & { at: string }) | null;
+  /** Totals of an observation after it (same syringe), when one is entered late: cannot be higher. */
+  ceiling: (PumpTotals & { at: string }) | null;
+}
+
+/** What the running syringe's earlier and later observations allow for pump totals at `at`. */
+export function pumpBounds(observations: readonly Observation[], releaseId: number | null, at: Date): PumpBounds {
+  const sameSyringe = observations.filter((observation) => observation.releaseId === releaseId).sort((a, b) => Date.parse(a.at) - Date.parse(b.at));
+  const time = at.getTime();
+  const before = sameSyringe.filter((observation) => Date.parse(observation.at) <= time).at(-1);
+  const after = sameSyringe.find((observation) => Date.parse(observation.at) > time);
+  const totals = (observation: Observation | undefined) =>
+    observation ? { at: observation.at, attempts: observation.attempts, delivered: observation.delivered, volumeInfusedMl: observation.volumeInfusedMl } : null;
+  return { floor: totals(before), ceiling: totals(after) };
+}
+
+export interface ObservationCheckContext {
+  observations: readonly Observation[];
+  /** The syringe running now, or null when none is. */
+  release: { id: number; volumeMl: number } | null;
+  startedAt: string | null;
+  now: Date;
+}
+
+// A device clock a little ahead of the server's is not "the future" (the server allows a minute).
+const CLOCK_SKEW_MS = 60_000;
+
+/** Every problem with the observation as typed, by field; an empty object when it can be saved. */
+export function validateObservationForm(values: ObservationFormValues, context: ObservationCheckContext): ObservationFormErrors {
+  const errors: ObservationFormErrors = {};
+  for (const field of NUMBER_FIELDS) {
+    const error = numberFieldError(field, values[field]);
+    if (error) errors[field] = error;
+  }
+  if (!(SEDATION_LEVELS as readonly string[]).includes(values.sedationLevel)) errors.sedationLevel = 'Choose the sedation level';
+
+  let at = context.now;
+  if (values.at.trim() !== '') {
+    const typed = readLocalDateTime(values.at.trim());
+    if (!typed) errors.at = 'Enter the date and time of the observation';
+    else if (typed.getTime() > context.now.getTime() + CLOCK_SKEW_MS) errors.at = 'An observation cannot be in the future';
+    else if (context.startedAt && typed.getTime() < Date.parse(context.startedAt)) errors.at = 'An observation cannot be before the PCA started';
+    else at = typed;
+  }
+
+  const { floor, ceiling } = pumpBounds(context.observations, context.release?.id ?? null, at);
+  for (const field of PUMP_TOTAL_FIELDS) {
+    const value = readNumber(values[field]);
+    if (errors[field] || typeof value !== 'number') continue;
+    if (floor && value < floor[field]) errors[field] = `At least ${floor[field]}: pump totals never go down within one syringe`;
+    else if (ceiling && value > ceiling[field]) errors[field] = `At most ${ceiling[field]}: a later observation of this syringe has ${ceiling[field]}`;
+  }
+  const syringeMl = context.release?.volumeMl;
+  for (const field of ['volumeInfusedMl', 'syringeRemainingMl'] as const) {
+    const value = readNumber(values[field]);
+    if (!errors[field] && syringeMl !== undefined && typeof value === 'number' && value > syringeMl) {
+      errors[field] = `More than the ${syringeMl} mL the syringe held: check the ${field === 'volumeInfusedMl' ? 'pump' : 'syringe'}`;
+    }
+  }
+  if (values.note.length > 2000) errors.note = 'The note is at most 2,000 characters';
+  return errors;
+}
+
+/** The checked form as the API's request: numbers, the time as ISO (left out for "now"), no empty note. */
+export function toObservationRequest(values: ObservationFormValues): CreateObservationRequest {
+  const number = (field: NumberField) => readNumber(values[field]) as number;
+  const at = values.at.trim() === '' ? null : readLocalDateTime(values.at.trim());
+  const note = values.note.trim();
+  return {
+    ...(at ? { at: at.toISOString() } : {}),
+    painScore: number('painScore'),
+    sedationLevel: values.sedationLevel as SedationLevel,
+    respiratoryRate: number('respiratoryRate'),
+    spo2: number('spo2'),
+    attempts: number('attempts'),
+    delivered: number('delivered'),
+    volumeInfusedMl: number('volumeInfusedMl'),
+    syringeRemainingMl: number('syringeRemainingMl'),
+    ...(note ? { note } : {}),
+  };
+}

@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { CreateOrderRequest, OrderDetail } from '@lockstep/shared';
+import { apiRequest } from '@/lib/api-client';
+import { orderKeys } from './order-keys';
+import { orderDetailSchema } from './order-schemas';
+
+/**
+ * Signs a new order. 401 on `signature.password` for a wrong password; 400 naming each field
+ * with a blocking finding or a soft finding without a reason.
+ */
+export function createOrder(request: CreateOrderRequest): Promise<OrderDetail> {
+  return apiRequest('/orders', { method: 'POST', body: request, schema: orderDetailSchema, signed: true });
+}
+
+export function useCreateOrder() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createOrder,
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: orderKeys.lists() }),
+  });
+}

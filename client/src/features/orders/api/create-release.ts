@@ -1,0 +1,26 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { CreateReleaseRequest, SyringeReleaseResponse } from '@lockstep/shared';
+import { apiRequest } from '@/lib/api-client';
+import { orderKeys } from './order-keys';
+import { releaseSchema } from './order-schemas';
+
+export interface CreateReleaseVariables {
+  orderId: number;
+  request: CreateReleaseRequest;
+}
+
+/**
+ * Pharmacy releases a labelled syringe for a verified or active order. 400 names the field (the
+ * concentration must be the order's; outside 20–60 mL needs a reason; expiry in the future).
+ */
+export function createRelease({ orderId, request }: CreateReleaseVariables): Promise<SyringeReleaseResponse> {
+  return apiRequest(`/orders/${orderId}/releases`, { method: 'POST', body: request, schema: releaseSchema });
+}
+
+export function useCreateRelease() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: createRelease,
+    onSuccess: (_release, { orderId }) => queryClient.invalidateQueries({ queryKey: orderKeys.detail(orderId) }),
+  });
+}

@@ -1,0 +1,35 @@
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import type { OrderSummary } from '@lockstep/shared';
+import { apiRequest } from '@/lib/api-client';
+import { orderKeys, type OrderListFilters } from './order-keys';
+import { orderSummarySchema } from './order-schemas';
+
+export function getOrders(filters: OrderListFilters, signal?: AbortSignal): Promise<OrderSummary[]> {
+  return apiRequest('/orders', {
+    schema: orderSummarySchema.array(),
+    params: {
+      wardId: filters.wardId,
+      patientId: filters.patientId,
+      status: filters.status && filters.status.length > 0 ? filters.status.join(',') : undefined,
+      mine: filters.mine ? true : undefined,
+    },
+    signal,
+  });
+}
+
+export function ordersQueryOptions(filters: OrderListFilters) {
+  return queryOptions({
+    queryKey: orderKeys.list(filters),
+    queryFn: ({ signal }) => getOrders(filters, signal),
+  });
+}
+
+export interface UseOrdersOptions {
+  /** Polls the list, for a queue that others add to. */
+  refetchInterval?: number;
+}
+
+export function useOrders(filters: OrderListFilters, options: UseOrdersOptions = {}) {
+  // Keep the current rows on screen while another ward's list loads.
+  return useQuery({ ...ordersQueryOptions(filters), placeholderData: keepPreviousData, refetchInterval: options.refetchInterval });
+}

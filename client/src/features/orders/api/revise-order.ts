@@ -1,0 +1,29 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { CreateOrderRequest, OrderDetail } from '@lockstep/shared';
+import { apiRequest } from '@/lib/api-client';
+import { orderKeys } from './order-keys';
+import { orderDetailSchema } from './order-schemas';
+
+export interface ReviseOrderVariables {
+  /** The returned order; the new version supersedes it. */
+  orderId: number;
+  request: CreateOrderRequest;
+}
+
+/** Signs a new version of a returned order (409 when it is no longer returned). */
+export function reviseOrder({ orderId, request }: ReviseOrderVariables): Promise<OrderDetail> {
+  return apiRequest(`/orders/${orderId}/revise`, { method: 'POST', body: request, schema: orderDetailSchema, signed: true });
+}
+
+export function useReviseOrder() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: reviseOrder,
+    // The old version is now superseded and the new one is awaiting verification.
+    onSuccess: (_order, { orderId }) =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: orderKeys.lists() }),
+        queryClient.invalidateQueries({ queryKey: orderKeys.detail(orderId) }),
+      ]),
+  });
+}

@@ -1,0 +1,44 @@
+import { useState } from 'react';
+import { Text } from '@mantine/core';
+import type { OrderSummary } from '@lockstep/shared';
+import { errorMessage } from '@/lib/api-error';
+import { notifySuccess } from '@/lib/notify';
+import { useCancelOrder } from '../api/cancel-order';
+import { regimenSummary } from '../utils/regimen-format';
+import { ReasonModal } from './reason-modal';
+
+/** The prescriber cancels an order that has not started, saying why. */
+export function CancelOrderModal({ order, onClose }: { order: OrderSummary; onClose: () => void }) {
+  const cancel = useCancelOrder();
+  const [refusal, setRefusal] = useState<string | null>(null);
+  return (
+    <ReasonModal
+      title={`Cancel order ${order.id}`}
+      label="Reason for cancelling"
+      confirmLabel="Cancel the order"
+      confirmColor="red"
+      pending={cancel.isPending}
+      refusal={refusal}
+      onClose={onClose}
+      onConfirm={(reason) =>
+        cancel.mutate(
+          { orderId: order.id, reason },
+          {
+            onSuccess: () => {
+              notifySuccess('Order cancelled', `Order ${order.id} for ${order.patientName} is cancelled.`);
+              onClose();
+            },
+            onError: (error) => setRefusal(errorMessage(error)),
+          },
+        )
+      }
+    >
+      <Text size="sm">
+        {order.patientName}, {order.wardName} bed {order.bed}
+      </Text>
+      <Text size="sm" fw={600} className="tabular-nums">
+        {regimenSummary(order)}
+      </Text>
+    </ReasonModal>
+  );
+}

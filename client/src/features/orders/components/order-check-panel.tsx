@@ -1,0 +1,58 @@
+import { Alert, Divider, Paper, Stack, Text, Title } from '@mantine/core';
+import { IconInfoCircle } from '@tabler/icons-react';
+import { DECISION_SUPPORT_CAUTION, type DoseUnit, type Finding } from '@lockstep/shared';
+import type { OrderCheck } from '../hooks/use-order-check';
+import { countBySeverity } from '../utils/findings';
+import { DerivedValues } from './derived-values';
+import { FindingLine } from './finding-line';
+import { ServerCheckStatus } from './server-check-status';
+
+function findingsSummary(findings: readonly Finding[]): string {
+  if (findings.length === 0) return 'No findings: every value is inside its limits.';
+  const counts = countBySeverity(findings);
+  const parts = [
+    counts.error + counts.hard > 0 ? `${counts.error + counts.hard} blocking` : null,
+    counts.soft > 0 ? `${counts.soft} outside a soft limit` : null,
+    counts.caution > 0 ? `${counts.caution} ${counts.caution === 1 ? 'caution' : 'cautions'}` : null,
+  ].filter(Boolean);
+  return `${findings.length} ${findings.length === 1 ? 'finding' : 'findings'}: ${parts.join(', ')}.`;
+}
+
+export interface OrderCheckPanelProps {
+  check: OrderCheck;
+  doseUnit: DoseUnit | null;
+}
+
+/** The side panel of the order form: what the regimen means, and every finding, as it is typed. */
+export function OrderCheckPanel({ check, doseUnit }: OrderCheckPanelProps) {
+  return (
+    <Paper withBorder radius="md" p="md" component="aside" aria-labelledby="order-check-title">
+      <Stack gap="sm">
+        <Title order={2} id="order-check-title">
+          Live check
+        </Title>
+        <ServerCheckStatus status={check.server} />
+        {check.derived && doseUnit ? (
+          <DerivedValues derived={check.derived} doseUnit={doseUnit} />
+        ) : (
+          <Text size="sm" c="dimmed">
+            Choose the drug and concentration, or a standard order set, to see the volumes and maximum doses.
+          </Text>
+        )}
+        <Divider />
+        <Title order={3}>Findings</Title>
+        <Text size="sm" aria-live="polite" data-testid="findings-summary">
+          {check.derived ? findingsSummary(check.findings) : 'Nothing to check yet.'}
+        </Text>
+        <Stack gap={8}>
+          {check.findings.map((finding) => (
+            <FindingLine key={`${finding.field}-${finding.code}`} finding={finding} withEffect />
+          ))}
+        </Stack>
+        <Alert color="blue" variant="light" icon={<IconInfoCircle aria-hidden />} p="xs">
+          <Text size="xs">{DECISION_SUPPORT_CAUTION}</Text>
+        </Alert>
+      </Stack>
+    </Paper>
+  );
+}

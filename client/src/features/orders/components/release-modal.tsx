@@ -1,0 +1,120 @@
+import { useState } from 'react';
+import { Alert, Button, Group, Modal, SimpleGrid, Stack, Text, Textarea, TextInput } from '@mantine/core';
+import { useForm } from '@mantine/form';
+import { IconAlertCircle, IconPackageExport } from '@tabler/icons-react';
+import { formatDose, MIN_REASON_LENGTH, USUAL_SYRINGE_ML, type OrderSummary, type SyringeReleaseResponse } from '@lockstep/shared';
+import { errorMessage, isApiRequestError } from '@/lib/api-error';
+import { applyServerErrors } from '@/lib/form-errors';
+import { useCreateRelease } from '../api/create-release';
+import { readAmount } from '../utils/order-form';
+import { regimenSummary } from '../utils/regimen-format';
+import { isUnusualVolume, readReleaseForm, releaseFormValues, type ReleaseFormValues } from '../utils/release-form';
+import { ReleaseResult } from './release-result';
+
+export interface ReleaseModalProps {
+  order: OrderSummary;
+  onClose: () => void;
+}
+
+/** Pharmacy releases a labelled syringe of the order's concentration, then prints its label. */
+export function ReleaseModal({ order, onClose }: ReleaseModalProps) {
+  const release = useCreateRelease();
+  const [released, setReleased] = useState<SyringeReleaseResponse | null>(null);
+  const [formAlert, setFormAlert] = useState<string[]>([]);
+  const form = useForm<ReleaseFormValues>({ initialValues: releaseFormValues(order) });
+  const unit = order.doseUnit;
+  const volume = readAmount(form.values.volumeMl);
+  const concentration = readAmount(form.values.concentrationPerMl);
+  const unusual = isUnusualVolume(volume);
+  const total = volume !== null && concentration !== null ? formatDose(volume * concentration, unit) : null;
+
+  const submit = form.onSubmit((values) => {
+    setFormAlert([]);
+    const { request, errors } = readReleaseForm(values, new Date());
+    if (!request) {
+      form.setErrors(errors);
+      return;
+    }
+    release.mutate(
+      { orderId: order.id, request },
+      {
+        onSuccess: setReleased,
+        onError: (error) => setFormAlert(isApiRequestError(error) && error.status === 400 ? applyServerErrors(form, error) : [errorMessage(error)]),
+      },
+    );
+  });
+
+  if (released) {
+    return (
+      <Modal opened onClose={onClose} title="Syringe released" size="lg">
+        <ReleaseResult release={released} onDone={onClose} />
+      </Modal>
+    );
+  }
+
+  return (
+    <Modal opened onClose={onClose} title={`Release a syringe for order ${order.id}`} size="lg">
+      <form onSubmit={submit} noValidate>
+        <Stack gap="md">
+          <div>
+            <Text size="sm">
+              {order.patientName}, MRN {order.patientMrn}, {order.wardName} bed {order.bed}
+            </Text>
+            <Text size="sm" fw={600} className="tabular-nums">
+              {regimenSummary(order)}
+            </Text>
+          </div>
+          {formAlert.length > 0 ? (
+            <Alert color="red" variant="light" icon={<IconAlertCircle aria-hidden />} title="Not released" role="alert">
+              {formAlert.join(' ')}
+            </Alert>
+          ) : null}
+          <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="md">
+            <TextInput
+              label="Concentration"
+              description={`Must match the order: ${formatDose(order.concentrationPerMl, `${unit}/mL`)}`}
+              rightSection={<Text size="sm" c="dimmed">{`${unit}/mL`}</Text>}
+              rightSectionWidth={70}
+              inputMode="decimal"
+              size="md"
+              withAsterisk
+              {...form.getInputProps('concentrationPerMl')}
+            />
+            <TextInput
+              label="Volume"
+              description={total ? `Holds ${total} in ${formatDose(volume ?? Number.NaN, 'mL')}` : `Usually ${USUAL_SYRINGE_ML.min}–${USUAL_SYRINGE_ML.max} mL`}
+              rightSection={<Text size="sm" c="dimmed">mL</Text>}
+              inputMode="decimal"
+              size="md"
+              withAsterisk
+              {...form.getInputProps('volumeMl')}
+            />
+            <TextInput label="Batch" size="md" withAsterisk autoComplete="off" {...form.getInputProps('batch')} />
+            <TextInput label="Expiry" description="Date and time" type="datetime-local" size="md" withAsterisk {...form.getInputProps('expiresAt')} />
+            <TextInput label="Prepared by" size="md" withAsterisk autoComplete="off" {...form.getInputProps('preparedBy')} />
+            <TextInput label="Checked by" size="md" withAsterisk autoComplete="off" {...form.getInputProps('checkedBy')} />
+          </SimpleGrid>
+          {unusual ? (
+            <Textarea
+              label="Reason for the unusual volume"
+              description={`Outside the usual ${USUAL_SYRINGE_ML.min}–${USUAL_SYRINGE_ML.max} mL; at least ${MIN_REASON_LENGTH} characters`}
+              autosize
+              minRows={2}
+              size="md"
+              withAsterisk
+              {...form.getInputProps('overrideReason')}
+            />
+          ) : null}
+          <Group justify="flex-end">
+            <Button variant="default" onClick={onClose}>
+              Back
+            </Button>
+            <Button type="submit" leftSection={<IconPackageExport size={16} aria-hidden />} loading={release.isPending}>
+              Release syringe
+            </Button>
+          </Group>
+        </Stack>
+      </form>
+    </Modal>
+  );
+}

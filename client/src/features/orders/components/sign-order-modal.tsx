@@ -1,0 +1,86 @@
+import { useState } from 'react';
+import { List, Stack, Text } from '@mantine/core';
+import { REGIMEN_FIELD_LABELS, type CreateOrderRequest, type OrderDetail, type RegimenField } from '@lockstep/shared';
+import { errorMessage, isApiRequestError, isSignatureError } from '@/lib/api-error';
+import { useCreateOrder } from '../api/create-order';
+import { useReviseOrder } from '../api/revise-order';
+import { regimenSummary } from '../utils/regimen-format';
+import { SignatureModal } from './signature-modal';
+
+export interface SignOrderModalProps {
+  /** The order as it will be sent, short of the password. */
+  unsigned: Omit<CreateOrderRequest, 'signature'>;
+  drugName: string;
+  /** The returned order this signs a new version of. */
+  revisingId?: number;
+  onSigned: (order: OrderDetail) => void;
+  /** A 400: the form puts its field errors beside the inputs. */
+  onRefusedFields: (error: unknown) => void;
+  onClose: () => void;
+}
+
+/** The signing step: what is being signed, the reasons given, and the password typed again. */
+export function SignOrderModal({ unsigned, drugName, revisingId, onSigned, onRefusedFields, onClose }: SignOrderModalProps) {
+  const create = useCreateOrder();
+  const revise = useReviseOrder();
+  const [refusal, setRefusal] = useState<string | null>(null);
+  const pending = create.isPending || revise.isPending;
+
+  const sign = (password: string, { wrongPassword }: { wrongPassword: (message: string) => void }) => {
+    setRefusal(null);
+    const request: CreateOrderRequest = { ...unsigned, signature: { password } };
+    const handlers = {
+      onSuccess: onSigned,
+      onError: (error: unknown) => {
+        if (isSignatureError(error) && isApiRequestError(error)) wrongPassword(error.message);
+        else if (isApiRequestError(error) && error.status === 400) onRefusedFields(error);
+        else setRefusal(errorMessage(error));
+      },
+    };
+    if (revisingId === undefined) create.mutate(request, handlers);
+    else revise.mutate({ orderId: revisingId, request }, handlers);
+  };
+
+  const regimen = {
+    drugName,
+    concentrationPerMl: unsigned.concentrationPerMl,
+    doseUnit: unsigned.doseUnit,
+    demandDose: unsigned.demandDose,
+    lockoutMinutes: unsigned.lockoutMinutes,
+    basalRatePerHour: unsigned.basalRatePerHour,
+    oneHourLimit: unsigned.oneHourLimit ?? null,
+    fourHourLimit: unsigned.fourHourLimit ?? null,
+  };
+
+  return (
+    <SignatureModal
+      title={revisingId === undefined ? 'Sign PCA order' : `Sign the revision of order ${revisingId}`}
+      confirmLabel="Sign and send to pharmacy"
+      pending={pending}
+      refusal={refusal}
+      onSign={sign}
+      onClose={onClose}
+    >
+      <Stack gap="xs">
+        <Text size="sm">You are signing this regimen; pharmacy verifies it before a syringe is released.</Text>
+        <Text fw={600} className="tabular-nums" data-testid="signing-regimen">
+          {regimenSummary(regimen)}
+        </Text>
+        {unsigned.overrides.length > 0 ? (
+          <>
+            <Text size="sm" fw={500}>
+              Outside a soft limit, with your reasons:
+            </Text>
+            <List size="sm" spacing={4}>
+              {unsigned.overrides.map((override) => (
+                <List.Item key={override.field}>
+                  {REGIMEN_FIELD_LABELS[override.field as RegimenField] ?? override.field}: {override.reason}
+                </List.Item>
+              ))}
+            </List>
+          </>
+        ) : null}
+      </Stack>
+    </SignatureModal>
+  );
+}

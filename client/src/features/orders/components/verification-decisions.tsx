@@ -1,0 +1,106 @@
+import { useState } from 'react';
+import { Text } from '@mantine/core';
+import type { OrderDetail } from '@lockstep/shared';
+import { errorMessage, isApiRequestError, isSignatureError } from '@/lib/api-error';
+import { notifySuccess } from '@/lib/notify';
+import { useRejectOrder } from '../api/reject-order';
+import { useReturnOrder } from '../api/return-order';
+import { useVerifyOrder } from '../api/verify-order';
+import { regimenSummary } from '../utils/regimen-format';
+import { ReasonModal } from './reason-modal';
+import { SignatureModal } from './signature-modal';
+
+export type Decision = 'verify' | 'return' | 'reject';
+
+export interface VerificationDecisionProps {
+  order: OrderDetail;
+  decision: Decision;
+  onDone: (decision: Decision) => void;
+  /** Someone else decided first (409): the screen says so with the status it has now. */
+  onConflict: () => void;
+  onClose: () => void;
+}
+
+function isConflict(error: unknown): boolean {
+  return isApiRequestError(error) && error.status === 409;
+}
+
+/** The three pharmacy decisions: verify (signed), return with a query, reject. */
+export function VerificationDecision({ order, decision, onDone, onConflict, onClose }: VerificationDecisionProps) {
+  const verify = useVerifyOrder();
+  const returnOrder = useReturnOrder();
+  const reject = useRejectOrder();
+  const [refusal, setRefusal] = useState<string | null>(null);
+  const summary = (
+    <>
+      <Text size="sm">
+        {order.patientName}, MRN {order.patientMrn}, {order.wardName} bed {order.bed}
+      </Text>
+      <Text size="sm" fw={600} className="tabular-nums">
+        {regimenSummary(order)}
+      </Text>
+    </>
+  );
+  const onError = (error: unknown) => {
+    if (isConflict(error)) onConflict();
+    else setRefusal(errorMessage(error));
+  };
+
+  if (decision === 'verify') {
+    return (
+      <SignatureModal
+        title={`Verify order ${order.id}`}
+        confirmLabel="Sign and verify"
+        pending={verify.isPending}
+        refusal={refusal}
+        onClose={onClose}
+        onSign={(password, { wrongPassword }) => {
+          setRefusal(null);
+          verify.mutate(
+            { orderId: order.id, password },
+            {
+              onSuccess: () => {
+                notifySuccess('Order verified', `Order ${order.id} is verified: a syringe can be released.`);
+                onDone('verify');
+              },
+              onError: (error) => (isSignatureError(error) && isApiRequestError(error) ? wrongPassword(error.message) : onError(error)),
+            },
+          );
+        }}
+      >
+        {summary}
+        <Text size="sm">You have checked the order against the limit rule and the patient.</Text>
+      </SignatureModal>
+    );
+  }
+
+  const returning = decision === 'return';
+  const mutation = returning ? returnOrder : reject;
+  return (
+    <ReasonModal
+      title={returning ? `Return order ${order.id} with a query` : `Reject order ${order.id}`}
+      label={returning ? 'Query for the prescriber' : 'Reason for rejecting'}
+      description={returning ? 'The prescriber reads this, revises the order and signs it again. At least 10 characters.' : 'The prescriber reads this. At least 10 characters.'}
+      confirmLabel={returning ? 'Return to prescriber' : 'Reject order'}
+      confirmColor={returning ? undefined : 'red'}
+      pending={mutation.isPending}
+      refusal={refusal}
+      onClose={onClose}
+      onConfirm={(reason) => {
+        setRefusal(null);
+        mutation.mutate(
+          { orderId: order.id, reason },
+          {
+            onSuccess: () => {
+              notifySuccess(returning ? 'Order returned' : 'Order rejected', `${order.prescriberName} has been told by e-mail.`);
+              onDone(decision);
+            },
+            onError,
+          },
+        );
+      }}
+    >
+      {summary}
+    </ReasonModal>
+  );
+}

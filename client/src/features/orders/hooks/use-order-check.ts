@@ -1,0 +1,59 @@
+import { useMemo } from 'react';
+import { useDebouncedValue } from '@mantine/hooks';
+import { deriveOrderValues, type Finding, type LimitRuleResponse, type OrderDerivedValues, type OrderFields, type Patient } from '@lockstep/shared';
+import { useOrderPreview } from '../api/preview-order';
+import { sameFindings } from '../utils/findings';
+import { localFindings, patientFactors, readOrderForm, type OrderFormValues } from '../utils/order-form';
+
+/** Where the server's confirmation of the local check stands. */
+export type ServerCheck = 'waiting' | 'checking' | 'agrees' | 'differs' | 'failed';
+
+export interface OrderCheck {
+  /** What the API takes; null until a rule is chosen and every number reads. */
+  fields: OrderFields | null;
+  derived: OrderDerivedValues | null;
+  /** The findings to act on: the local check, or the server's where it differs. */
+  findings: Finding[];
+  server: ServerCheck;
+}
+
+// Long enough not to ask on every keystroke, short enough to answer before the hand leaves the keys.
+const SERVER_CHECK_DELAY_MS = 400;
+
+function sameFields(a: OrderFields | null, b: OrderFields | null): boolean {
+  return JSON.stringify(a) === JSON.stringify(b);
+}
+
+/**
+ * The live check beside the order form: `checkOrder` and `deriveOrderValues` from shared on every
+ * keystroke, confirmed by the server's preview once typing pauses. The server runs the same
+ * functions on the same library; if it ever disagrees, its answer is the one shown.
+ */
+export function useOrderCheck(values: OrderFormValues, rule: LimitRuleResponse | null, patient: Patient): OrderCheck {
+  const read = useMemo(() => readOrderForm(values, rule, patient.id), [values, rule, patient.id]);
+  const local = useMemo(() => {
+    if (!rule) return null;
+    const today = new Date();
+    return { derived: deriveOrderValues(read.regimen), findings: localFindings(read, rule, patientFactors(patient, today)) };
+  }, [read, rule, patient]);
+
+  const [settledFields] = useDebouncedValue(read.fields, SERVER_CHECK_DELAY_MS);
+  const preview = useOrderPreview(settledFields);
+
+  if (!local) return { fields: null, derived: null, findings: [], server: 'waiting' };
+
+  const current = read.fields !== null && sameFields(settledFields, read.fields) && !preview.isPlaceholderData;
+  let server: ServerCheck = 'waiting';
+  let findings = local.findings;
+  if (read.fields === null) server = 'waiting';
+  else if (!current || preview.isFetching) server = 'checking';
+  else if (preview.isError) server = 'failed';
+  else if (preview.data) {
+    if (sameFindings(local.findings, preview.data.findings)) server = 'agrees';
+    else {
+      server = 'differs';
+      findings = preview.data.findings;
+    }
+  }
+  return { fields: read.fields, derived: local.derived, findings, server };
+}

@@ -1,0 +1,61 @@
+import { describe, expect, it } from 'vitest';
+import type { LimitRuleResponse } from '@lockstep/shared';
+import { availableOrderSets, ORDER_SETS, prefillFromSet } from './order-sets';
+
+const rule = (id: number, drugName: string, concentrationPerMl: number, doseUnit: 'mg' | 'mcg', perKg = false): LimitRuleResponse => ({
+  id,
+  drugId: id * 10,
+  drugName,
+  concentrationPerMl,
+  doseUnit,
+  perKg,
+  limits: {},
+});
+
+const adultLibrary = [rule(1, 'Morphine', 1, 'mg'), rule(2, 'hydromorphone', 0.2, 'mg'), rule(3, 'fentanyl', 10, 'mcg')];
+const set = (id: string) => ORDER_SETS.find((candidate) => candidate.id === id)!;
+
+describe('order sets', () => {
+  it('offers an adult ward every adult set its library holds, matched by drug, concentration and unit', () => {
+    const ids = availableOrderSets(adultLibrary, false).map(({ set: offered }) => offered.id);
+    expect(ids).toEqual(['adult-morphine', 'adult-hydromorphone', 'adult-fentanyl']);
+    // morphine 2 mg/mL is a different concentration: no morphine set.
+    const other = availableOrderSets([rule(1, 'morphine', 2, 'mg')], false);
+    expect(other).toEqual([]);
+  });
+
+  it('offers per-kg sets on weight-based wards only', () => {
+    const paediatric = [rule(7, 'morphine', 1, 'mg', true)];
+    expect(availableOrderSets(paediatric, true).map(({ set: offered }) => offered.id)).toEqual(['paediatric-morphine']);
+    expect(availableOrderSets(adultLibrary, true)).toEqual([]);
+  });
+
+  it('prefills the adult morphine starting regimen as typed text', () => {
+    // ASHP Standardize 4 Safety, PCA standards (2023): 1 mg demand, lockout 10 min, 4-hour 30 mg.
+    expect(prefillFromSet(set('adult-morphine'), adultLibrary[0], 82)).toEqual({
+      ruleId: '1',
+      loadingDose: '',
+      demandDose: '1',
+      lockoutMinutes: '10',
+      basalRatePerHour: '0',
+      oneHourLimit: '',
+      fourHourLimit: '30',
+      clinicianBolusDose: '',
+    });
+  });
+
+  it('multiplies per-kg doses by the weight without binary noise', () => {
+    // APAGBI Good Practice in Postoperative and Procedural Pain Management: 10–20 mcg/kg bolus;
+    // 0.02 mg/kg × 24.5 kg = 0.49 mg (plain arithmetic; 0.02 × 24.5 in binary is 0.49000000000000005).
+    const prefill = prefillFromSet(set('paediatric-morphine'), rule(7, 'morphine', 1, 'mg', true), 24.5);
+    expect(prefill?.demandDose).toBe('0.49');
+    expect(prefill?.lockoutMinutes).toBe('10');
+    expect(prefill?.fourHourLimit).toBe('');
+    expect(prefillFromSet(set('paediatric-morphine'), rule(7, 'morphine', 1, 'mg', true), 38)?.demandDose).toBe('0.76');
+  });
+
+  it('refuses a per-kg set for a patient with no weight', () => {
+    expect(prefillFromSet(set('paediatric-morphine'), rule(7, 'morphine', 1, 'mg', true), null)).toBeNull();
+    expect(prefillFromSet(set('paediatric-morphine'), rule(7, 'morphine', 1, 'mg', true), 0)).toBeNull();
+  });
+});

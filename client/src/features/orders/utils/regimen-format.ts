@@ -1,0 +1,72 @@
+import { formatDose, regimenFieldUnit, tallMan, type DoseUnit, type LimitRuleResponse, type Limits, type OrderSummary, type RegimenField } from '@lockstep/shared';
+
+/** "HYDROmorphone 0.2 mg/mL": tall-man name and safe concentration. */
+export function drugWithConcentration(drugName: string, concentrationPerMl: number, doseUnit: DoseUnit): string {
+  return `${tallMan(drugName)} ${formatDose(concentrationPerMl, `${doseUnit}/mL`)}`;
+}
+
+export function ruleLabel(rule: LimitRuleResponse): string {
+  const label = drugWithConcentration(rule.drugName, rule.concentrationPerMl, rule.doseUnit);
+  return rule.perKg ? `${label} (limits per kg)` : label;
+}
+
+/** A regimen field's value with its unit, or "Not set" for an optional field left empty. */
+export function fieldValueText(field: RegimenField, value: number | null | undefined, doseUnit: DoseUnit): string {
+  if (value === null || value === undefined) return 'Not set';
+  return formatDose(value, regimenFieldUnit(field, doseUnit, false));
+}
+
+type RegimenLine = Pick<
+  OrderSummary,
+  'drugName' | 'concentrationPerMl' | 'doseUnit' | 'demandDose' | 'lockoutMinutes' | 'basalRatePerHour' | 'oneHourLimit' | 'fourHourLimit'
+>;
+
+/** One line for a list: "morphine 1 mg/mL · demand 1 mg · lockout 10 min · 4-hour limit 30 mg". */
+export function regimenSummary(order: RegimenLine): string {
+  const unit = order.doseUnit;
+  const parts = [
+    drugWithConcentration(order.drugName, order.concentrationPerMl, unit),
+    `demand ${formatDose(order.demandDose, unit)}`,
+    `lockout ${formatDose(order.lockoutMinutes, 'min')}`,
+  ];
+  if (order.basalRatePerHour > 0) parts.push(`basal ${formatDose(order.basalRatePerHour, `${unit}/h`)}`);
+  if (order.oneHourLimit !== null) parts.push(`1-hour limit ${formatDose(order.oneHourLimit, unit)}`);
+  if (order.fourHourLimit !== null) parts.push(`4-hour limit ${formatDose(order.fourHourLimit, unit)}`);
+  return parts.join(' · ');
+}
+
+/** "0.5–2 mg", "up to 30 mg", "from 5 min"; null when neither end is set. */
+export function formatRange(low: number | null | undefined, high: number | null | undefined, unit: string): string | null {
+  const hasLow = low !== null && low !== undefined;
+  const hasHigh = high !== null && high !== undefined;
+  if (hasLow && hasHigh) return `${formatDose(low, '')}–${formatDose(high, unit)}`;
+  if (hasHigh) return `up to ${formatDose(high, unit)}`;
+  if (hasLow) return `from ${formatDose(low, unit)}`;
+  return null;
+}
+
+/**
+ * The limits as a prescriber reads them beside the input: "Soft 0.5–2 mg · hard 0.2–3 mg". With a
+ * per-kg rule and a weight, the soft range is also worked out for this patient.
+ */
+export function limitRangeText(field: RegimenField, limits: Limits | undefined, doseUnit: DoseUnit, perKg: boolean, weightKg: number | null): string | null {
+  if (!limits) return null;
+  const isPerKg = perKg && field !== 'lockoutMinutes';
+  const unit = regimenFieldUnit(field, doseUnit, isPerKg);
+  const soft = formatRange(limits.softMin, limits.softMax, unit);
+  const hard = formatRange(limits.hardMin, limits.hardMax, unit);
+  const parts: string[] = [];
+  if (soft) parts.push(`Soft ${soft}`);
+  if (hard) parts.push(`hard ${hard}`);
+  if (parts.length === 0) return null;
+  let text = parts.join(' · ');
+  if (isPerKg && weightKg !== null && weightKg > 0 && soft) {
+    const forPatient = formatRange(
+      limits.softMin === null || limits.softMin === undefined ? null : limits.softMin * weightKg,
+      limits.softMax === null || limits.softMax === undefined ? null : limits.softMax * weightKg,
+      regimenFieldUnit(field, doseUnit, false),
+    );
+    text += ` (soft ${forPatient} for ${formatDose(weightKg, 'kg')})`;
+  }
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}

@@ -1,0 +1,22 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiRequest } from '@/lib/api-client';
+import { wardPolicyKeys } from './ward-policy-keys';
+import { wardPolicySettingsSchema, type WardPolicySettings, type WardPolicyUpdate } from './ward-policy-schemas';
+
+export interface UpdateWardPolicyVariables {
+  wardId: number;
+  changes: WardPolicyUpdate;
+}
+
+/** Admin only. Any subset of the values; a 400 names each field out of range. */
+export function updateWardPolicy({ wardId, changes }: UpdateWardPolicyVariables): Promise<WardPolicySettings> {
+  return apiRequest(`/wards/${wardId}/policy`, { method: 'PATCH', body: changes, schema: wardPolicySettingsSchema });
+}
+
+export function useUpdateWardPolicy() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: updateWardPolicy,
+    onSuccess: (policy, { wardId }) => queryClient.setQueryData(wardPolicyKeys.detail(wardId), policy),
+  });
+}

@@ -1,0 +1,56 @@
+import { describe, expect, it } from 'vitest';
+import { DEFAULT_WARD_POLICY } from '@lockstep/shared';
+import type { WardPolicySettings } from '../api/ward-policy-schemas';
+import { emailError, formatPolicyValue, POLICY_NUMBER_FIELDS, policyChanges, policyNumberError, policyToForm, shippedDefault, validatePolicyForm } from './policy-form';
+
+const SAVED: WardPolicySettings = { ...DEFAULT_WARD_POLICY, pharmacyEmail: 'pharmacy.harbour@kestrelbay.example', nurseInChargeEmail: '' };
+const field = (key: string) => {
+  const found = POLICY_NUMBER_FIELDS.find((f) => f.key === key);
+  if (!found) throw new Error(key);
+  return found;
+};
+
+describe('policy fields', () => {
+  it('cover every value of the ward policy', () => {
+    expect(POLICY_NUMBER_FIELDS.map((f) => f.key).sort()).toEqual(Object.keys(DEFAULT_WARD_POLICY).sort());
+  });
+
+  it('show the shipped defaults with their units', () => {
+    expect(POLICY_NUMBER_FIELDS.map(shippedDefault)).toEqual(['60 min', '120 min', '8/min', '90 %', '7/10', '2 attempts per dose', '2 h', '0.5 mL']);
+    expect(formatPolicyValue(field('syringeLowThresholdHours'), 1.5)).toBe('1.5 h');
+  });
+});
+
+describe('range checks, in the server’s words', () => {
+  it('holds each value to its range', () => {
+    expect(policyNumberError(field('spo2Threshold'), 20)).toBe('At least 70 %');
+    expect(policyNumberError(field('spo2Threshold'), 101)).toBe('At most 100 %');
+    expect(policyNumberError(field('spo2Threshold'), 92.5)).toBe('A whole number of %');
+    expect(policyNumberError(field('spo2Threshold'), 92)).toBeNull();
+    expect(policyNumberError(field('observationIntervalFirst24hMinutes'), 241)).toBe('At most 240 minutes');
+    expect(policyNumberError(field('observationIntervalMinutes'), 480)).toBeNull();
+    expect(policyNumberError(field('respiratoryRateThreshold'), 3)).toBe('At least 4 per minute');
+    expect(policyNumberError(field('syringeLowThresholdHours'), 0.25)).toBe('At least 0.5 hours');
+    expect(policyNumberError(field('reconciliationToleranceMl'), -1)).toBe('Cannot be negative');
+    expect(policyNumberError(field('painNotControlledRatio'), 1.5)).toBeNull();
+    expect(policyNumberError(field('painNotControlledScore'), '')).toBe('Enter a value');
+  });
+
+  it('takes an e-mail address or nothing', () => {
+    expect(emailError('')).toBeNull();
+    expect(emailError('nic.harbour@kestrelbay.example')).toBeNull();
+    expect(emailError('harbour ward')).toBe('Enter an e-mail address (or leave empty)');
+  });
+
+  it('checks the whole form', () => {
+    expect(validatePolicyForm(policyToForm(SAVED))).toEqual({});
+    expect(validatePolicyForm({ ...policyToForm(SAVED), spo2Threshold: 20, pharmacyEmail: 'x' })).toEqual({ spo2Threshold: 'At least 70 %', pharmacyEmail: 'Enter an e-mail address (or leave empty)' });
+  });
+});
+
+describe('policyChanges', () => {
+  it('sends only what changed, numbers as numbers and e-mails trimmed', () => {
+    expect(policyChanges(policyToForm(SAVED), SAVED)).toEqual({});
+    expect(policyChanges({ ...policyToForm(SAVED), spo2Threshold: '92', nurseInChargeEmail: ' nic@kestrelbay.example ' }, SAVED)).toEqual({ spo2Threshold: 92, nurseInChargeEmail: 'nic@kestrelbay.example' });
+  });
+});
