@@ -98,12 +98,14 @@ describe('observations, flags, usage and ward policy', () => {
   });
 
   it('flags a syringe running low once per syringe and asks pharmacy for the next one', async () => {
-    const order = await start();
-    const low = { ...CALM, attempts: 40, delivered: 40, volumeInfusedMl: 48, syringeRemainingMl: 2 };
+    // A 1 mg/h basal at 1 mg/mL runs 1 mL/h: 1.5 mL left is 1.5 h, within the 2-hour threshold.
+    // (Demand rates from readings minutes apart are not projected, so the basal carries the test.)
+    const order = await start({ ...ORDER, basalRatePerHour: 1 }, { ...SETTINGS, basalRatePerHour: 1 });
+    const low = { ...CALM, attempts: 40, delivered: 40, volumeInfusedMl: 48.5, syringeRemainingMl: 1.5 };
     await observe(order.id, CALM).expect(201);
     const first = await observe(order.id, low).expect(201);
     expect(first.body.flags.map((f: { code: string }) => f.code)).toContain('syringe.low');
-    const again = await observe(order.id, { ...low, attempts: 41, delivered: 41, volumeInfusedMl: 48.5, syringeRemainingMl: 1.5 }).expect(201);
+    const again = await observe(order.id, { ...low, attempts: 41, delivered: 41, volumeInfusedMl: 49, syringeRemainingMl: 1 }).expect(201);
     expect(again.body.flags.map((f: { code: string }) => f.code)).not.toContain('syringe.low');
     await waitForMail(t.http, token.sam, (m) => m.subject.startsWith('PCA syringe running low') && m.to === 'pharmacy.harbour@kestrelbay.example');
   });

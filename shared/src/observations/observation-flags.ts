@@ -1,6 +1,7 @@
 import { formatDose } from '../dose/format-dose.js';
 import { hoursUntilEmpty } from '../dose/hours-until-empty.js';
 import type { FlagSeverity } from '../orders/order.schema.js';
+import { MIN_RATE_WINDOW_HOURS } from './projected-empty-at.js';
 import { SEDATION_ACTIONS, type SedationLevel } from './sedation-scale.js';
 import type { WardPolicy } from './ward-policy.js';
 
@@ -59,7 +60,7 @@ export function observationFlags(current: ObservationValues, previous: Observati
     }
     const hours = (Date.parse(current.at) - Date.parse(previous.at)) / MS_PER_HOUR;
     const usedMl = current.volumeInfusedMl - previous.volumeInfusedMl;
-    const demandMlPerHour = hours > 0 ? Math.max(0, usedMl / hours - basalMlPerHour) : 0;
+    const demandMlPerHour = hours >= MIN_RATE_WINDOW_HOURS ? Math.max(0, usedMl / hours - basalMlPerHour) : 0;
     const left = hoursUntilEmpty(current.syringeRemainingMl, basalMlPerHour, demandMlPerHour);
     if (left <= policy.syringeLowThresholdHours) {
       const emptyAt = new Date(Date.parse(current.at) + left * MS_PER_HOUR).toISOString();

@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Alert, Button, Group, Modal, SimpleGrid, Stack, Text, Textarea, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconAlertCircle, IconPackageExport } from '@tabler/icons-react';
-import { formatDose, MIN_REASON_LENGTH, USUAL_SYRINGE_ML, type OrderSummary, type SyringeReleaseResponse } from '@lockstep/shared';
+import { DECISION_SUPPORT_CAUTION, formatDose, MIN_REASON_LENGTH, USUAL_SYRINGE_ML, type OrderSummary, type SyringeReleaseResponse } from '@lockstep/shared';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateRelease } from '../api/create-release';
@@ -105,6 +105,9 @@ export function ReleaseModal({ order, onClose }: ReleaseModalProps) {
               {...form.getInputProps('overrideReason')}
             />
           ) : null}
+          <Text size="xs" c="dimmed">
+            {DECISION_SUPPORT_CAUTION}
+          </Text>
           <Group justify="flex-end">
             <Button variant="default" onClick={onClose}>
               Back
