@@ -8,5 +8,7 @@ export default defineConfig({
     fileParallelism: false,
     testTimeout: 60_000,
     hookTimeout: 60_000,
+    // A page that redirects or refetches on a loaded two-core machine can take seconds, not one.
+    expect: { poll: { timeout: 10_000, interval: 50 } },
   },
 });

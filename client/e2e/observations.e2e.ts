@@ -89,7 +89,10 @@ describe('observations: flags, usage charts and acknowledgement', () => {
   it('opens the PCA page from the patient page: tall-man drug, safe regimen, no flags yet', async () => {
     const { page } = kai;
     await page.goto(`/patients/${order.patientId}`);
-    await page.getByRole('link', { name: 'PCA page: HYDROmorphone 0.2 mg/mL' }).click();
+    const link = page.getByRole('link', { name: 'PCA page: HYDROmorphone 0.2 mg/mL' });
+    await link.waitFor();
+    await snapshot(page, 'observations-patient-page');
+    await link.click();
     await page.getByRole('heading', { name: 'PCA: FALEOLO, Tavita', level: 1 }).waitFor();
     expect(await page.getByTestId('pca-drug').innerText()).toBe('HYDROmorphone 0.2 mg/mL');
     const regimen = page.locator('dl[aria-label="Ordered regimen"]');

@@ -1,3 +1,4 @@
+import { memo } from 'react';
 import { SimpleGrid } from '@mantine/core';
 import type { Observation, PcaUsage } from '../api/pca-schemas';
 import { bucketWindow } from '../utils/chart-data';
@@ -12,9 +13,10 @@ export interface UsageChartsProps {
 
 /**
  * The PCA page's charts. Loaded on their own (the charting library is large), after the
- * figures and flags a nurse reads first.
+ * figures and flags a nurse reads first. Memoised: an acknowledged flag or the clock ticking
+ * re-renders the page, and drawing the charts again is the slowest part of it.
  */
-export function UsageCharts({ usage, observations }: UsageChartsProps) {
+export const UsageCharts = memo(function UsageCharts({ usage, observations }: UsageChartsProps) {
   return (
     <SimpleGrid cols={{ base: 1, lg: 2 }} spacing="md" style={{ alignItems: 'start' }}>
       <AttemptsChart buckets={usage.buckets} />
@@ -22,4 +24,4 @@ export function UsageCharts({ usage, observations }: UsageChartsProps) {
       <CumulativeDoseChart buckets={usage.buckets} doseUnit={usage.doseUnit} />
     </SimpleGrid>
   );
-}
+});
