@@ -1,4 +1,4 @@
-import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
 import { shiftWindow, type HandoverSignoffResponse } from '@lockstep/shared';
@@ -9,6 +9,7 @@ import type { CreateSignoffDto } from './dto/create-signoff.dto.js';
 import { toSignoffResponse } from './dto/signoff-response.js';
 import { HandoverSignoff } from './entities/handover-signoff.entity.js';
 import { WardEventsService } from './ward-events.service.js';
+import { fieldError } from '../common/errors/field-error.js';
 
 /** Each PCA is confirmed at handover by the outgoing nurse and by a different, incoming nurse. */
 @Injectable()
@@ -24,15 +25,15 @@ export class HandoverSignoffsService {
       if (!ward) throw new NotFoundException(`No ward with id ${wardId}`);
       const order = await manager.findOne(PcaOrder, { where: { id: dto.orderId }, relations: { patient: true } });
       if (!order || order.patient.wardId !== wardId || order.status !== 'active') {
-        throw badRequest('orderId', 'Only an active PCA on this ward is confirmed at handover');
+        throw fieldError('orderId', 'Only an active PCA on this ward is confirmed at handover');
       }
       if (dto.role === 'incoming' && dto.pumpSettingsMatch !== true) {
-        throw badRequest('pumpSettingsMatch', 'Confirm the pump settings match the order; if they do not, stop and escalate before taking over');
+        throw fieldError('pumpSettingsMatch', 'Confirm the pump settings match the order; if they do not, stop and escalate before taking over');
       }
       const { shift, shiftDate } = shiftWindow(now, ward.dayShiftStart, ward.nightShiftStart);
       const existing = await manager.find(HandoverSignoff, { where: { orderId: dto.orderId, shiftDate, shift } });
       if (existing.some((signoff) => signoff.role === dto.role)) throw new ConflictException(`The ${dto.role} nurse has already confirmed this PCA for this shift`);
-      if (existing.some((signoff) => signoff.nurseId === nurse.id)) throw badRequest('role', 'The outgoing and incoming nurse are two different people');
+      if (existing.some((signoff) => signoff.nurseId === nurse.id)) throw fieldError('role', 'The outgoing and incoming nurse are two different people');
       const created = await manager.save(
         manager.create(HandoverSignoff, { wardId, orderId: dto.orderId, shiftDate, shift, role: dto.role, nurseId: nurse.id, pumpSettingsMatch: dto.role === 'incoming' ? true : null, at: now }),
       );
@@ -49,8 +50,4 @@ export class HandoverSignoffsService {
     const signoffs = await this.dataSource.manager.find(HandoverSignoff, { where: { wardId, shiftDate, shift }, relations: { nurse: true }, order: { id: 'ASC' } });
     return signoffs.map(toSignoffResponse);
   }
-}
-
-function badRequest(field: string, message: string): BadRequestException {
-  return new BadRequestException({ statusCode: 400, message, errors: [{ field, message }] });
 }

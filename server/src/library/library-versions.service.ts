@@ -10,6 +10,7 @@ import { toLibraryVersionDetail } from './dto/library-response.js';
 import { LibraryVersion } from './entities/library-version.entity.js';
 import { LimitRule } from './entities/limit-rule.entity.js';
 import { LibraryService } from './library.service.js';
+import { fieldError } from '../common/errors/field-error.js';
 
 /**
  * The library's life: draft → pending_approval → active → retired. Every change is one
@@ -27,7 +28,7 @@ export class LibraryVersionsService {
   async createDraft(wardId: number, note: string | undefined, author: AuthUser, rules?: LimitRuleInput[]): Promise<LibraryVersionDetail> {
     return this.dataSource.transaction(async (manager) => {
       if (!(await manager.existsBy(Ward, { id: wardId }))) {
-        throw badRequest('wardId', `No ward with id ${wardId}`);
+        throw fieldError('wardId', `No ward with id ${wardId}`);
       }
       const open = await manager.findOneBy(LibraryVersion, { wardId, status: In(['draft', 'pending_approval']) });
       if (open) {
@@ -59,7 +60,7 @@ export class LibraryVersionsService {
     return this.dataSource.transaction(async (manager) => {
       const version = await this.lockedVersion(manager, id, ['draft'], 'submit it');
       if ((await manager.countBy(LimitRule, { versionId: id })) === 0) {
-        throw badRequest('rules', 'A library version needs at least one rule before it is submitted');
+        throw fieldError('rules', 'A library version needs at least one rule before it is submitted');
       }
       await manager.update(LibraryVersion, { id }, { status: 'pending_approval', submittedAt: new Date(), ...(note?.trim() ? { note: note.trim() } : {}) });
       return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
@@ -129,8 +130,4 @@ export class LibraryVersionsService {
       );
     }
   }
-}
-
-function badRequest(field: string, message: string): BadRequestException {
-  return new BadRequestException({ statusCode: 400, message, errors: [{ field, message }] });
 }

@@ -1,4 +1,4 @@
-import { BadRequestException, Injectable } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
 import { ageInYears, checkOrder, deriveOrderValues, formatDose, tallMan, type Finding, type OrderDerivedValues, type OrderPreview, type Regimen } from '@lockstep/shared';
@@ -8,6 +8,7 @@ import type { LimitRule } from '../library/entities/limit-rule.entity.js';
 import { LibraryService } from '../library/library.service.js';
 import { Patient } from '../patients/entities/patient.entity.js';
 import type { OrderFieldsDto } from './dto/order-fields.dto.js';
+import { fieldError } from '../common/errors/field-error.js';
 
 /** Derived values and findings for an order against its ward's active library. Writes nothing. */
 @Injectable()
@@ -25,9 +26,9 @@ export class OrderPreviewService {
   /** Everything signing needs: the patient, drug, active rule, findings and derived values. */
   async evaluate(fields: OrderFieldsDto): Promise<OrderEvaluation> {
     const patient = await this.dataSource.manager.findOneBy(Patient, { id: fields.patientId });
-    if (!patient) throw badRequest('patientId', `No patient with id ${fields.patientId}`);
+    if (!patient) throw fieldError('patientId', `No patient with id ${fields.patientId}`);
     const drug = await this.dataSource.manager.findOneBy(Drug, { id: fields.drugId });
-    if (!drug) throw badRequest('drugId', `No drug with id ${fields.drugId}`);
+    if (!drug) throw fieldError('drugId', `No drug with id ${fields.drugId}`);
 
     const regimen: Regimen = { ...fields };
     const factors = {
@@ -61,8 +62,4 @@ function missingRuleFinding(drug: Drug, fields: OrderFieldsDto): Finding {
     code: 'library.no-rule',
     message: `The ward's dose-limit library has no rule for ${tallMan(drug.genericName)} ${concentration}: choose a listed concentration`,
   };
-}
-
-function badRequest(field: string, message: string): BadRequestException {
-  return new BadRequestException({ statusCode: 400, message, errors: [{ field, message }] });
 }

@@ -72,11 +72,10 @@ export class OrdersService {
       return orderId;
     });
 
-    const order = await this.get(id);
     const entity = await this.load(this.dataSource.manager, id);
     this.mail.send(orderAwaitingVerificationMail(entity));
     this.events.publishForOrder(id, 'order');
-    return order;
+    return this.detail(entity);
   }
 
   async cancel(id: number, reason: string, user: AuthUser): Promise<OrderDetail> {
@@ -104,8 +103,13 @@ export class OrdersService {
   }
 
   async get(id: number): Promise<OrderDetail> {
+    return this.detail(await this.load(this.dataSource.manager, id));
+  }
+
+  /** The detail answer for an order already loaded with its relations. */
+  private async detail(order: PcaOrder): Promise<OrderDetail> {
     const manager = this.dataSource.manager;
-    const order = await this.load(manager, id);
+    const id = order.id;
     const events = await manager.find(OrderEvent, { where: { orderId: id }, relations: { user: true }, order: { id: 'ASC' } });
     const releases = await manager.find(SyringeRelease, { where: { orderId: id }, relations: { releasedBy: true }, order: { id: 'ASC' } });
     const flags = await manager.find(Flag, { where: { orderId: id }, relations: { acknowledgedBy: true }, order: { id: 'DESC' } });
