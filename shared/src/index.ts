@@ -47,3 +47,4 @@ export * from './handover/handover.schema.js';
 export * from './handover/handover-risk.js';
 export * from './handover/shift-window.js';
 export * from './observations/projected-empty-at.js';
+export * from './audit/audit.schema.js';

@@ -3,9 +3,11 @@ import path from 'node:path';
 import { Module } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import { TypeOrmModule } from '@nestjs/typeorm';
+import { DataSource } from 'typeorm';
 import type { Env } from '../config/env.validation.js';
 import { fromRepoRoot } from '../config/paths.js';
 import { dataSourceOptions } from './data-source-options.js';
+import { serialiseTransactions } from './serial-transactions.js';
 import { DemoSeeder } from './seed/demo-seeder.js';
 
 @Module({
@@ -17,6 +19,7 @@ import { DemoSeeder } from './seed/demo-seeder.js';
         mkdirSync(path.dirname(fromRepoRoot(databasePath)), { recursive: true });
         return { ...dataSourceOptions(databasePath), autoLoadEntities: true };
       },
+      dataSourceFactory: async (options) => serialiseTransactions(await new DataSource(options!).initialize()),
     }),
   ],
   providers: [DemoSeeder],

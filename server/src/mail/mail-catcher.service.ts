@@ -54,7 +54,8 @@ export class MailCatcherService implements OnModuleDestroy {
       .map((value) => value.address ?? '')
       .filter(Boolean)
       .join(', ');
-    await this.dataSource.manager.insert(MailboxMessage, { to: addresses, subject, text: text.trim(), at: new Date() });
+    // Through the transaction queue, so it never lands inside (or is rolled back with) a request’s transaction.
+    await this.dataSource.transaction((manager) => manager.insert(MailboxMessage, { to: addresses, subject, text: text.trim(), at: new Date() }));
   }
 
   onModuleDestroy(): Promise<void> {
