@@ -2,6 +2,7 @@ import { type DynamicModule, Module } from '@nestjs/common';
 import { ConfigModule } from '@nestjs/config';
 import { APP_FILTER } from '@nestjs/core';
 import { ServeStaticModule } from '@nestjs/serve-static';
+import { AuditModule } from './audit/audit.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { BedsideModule } from './bedside/bedside.module.js';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter.js';
@@ -45,6 +46,7 @@ function clientModules(): DynamicModule[] {
     BedsideModule,
     ObservationsModule,
     HandoverModule,
+    AuditModule,
     HealthModule,
     ...clientModules(),
   ],

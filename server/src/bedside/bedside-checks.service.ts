@@ -12,6 +12,7 @@ import type { FirstCheckDto, SecondCheckDto } from './dto/bedside-check.dto.js';
 import { BedsideCheck } from './entities/bedside-check.entity.js';
 import { BEDSIDE_ROLES } from './nurse-roles.js';
 import { WardEventsService } from '../handover/ward-events.service.js';
+import { recordAudit } from '../audit/record-audit.js';
 
 /**
  * The independent double-check. The first nurse identifies the patient and syringe and enters the
@@ -39,6 +40,7 @@ export class BedsideChecksService {
       const check = await manager.save(
         manager.create(BedsideCheck, { orderId, releaseId: release.id, status: 'awaiting_second', firstNurseId: nurse.id, firstSettings: { ...dto.settings }, firstAt: new Date() }),
       );
+      await recordAudit(manager, nurse, { action: 'order.bedside-first-check', entityType: 'order', entityId: orderId, summary: { checkId: check.id, releaseCode: release.releaseCode, settings: dto.settings } });
       return { id: check.id, status: 'awaiting_second' };
     });
   }
@@ -63,6 +65,18 @@ export class BedsideChecksService {
       );
       if (saved.affected !== 1) throw new ConflictException('This check was completed by someone else a moment ago');
       if (status === 'matched') await this.start(manager, order, release, check.firstNurseId, colleague.displayName);
+      await recordAudit(manager, colleague, {
+        action: 'order.bedside-second-check',
+        entityType: 'order',
+        entityId: orderId,
+        summary: {
+          checkId,
+          result: status,
+          releaseCode: release.releaseCode,
+          ...(differences.length > 0 ? { differences } : {}),
+          ...(status === 'matched' && order.status === 'verified' ? { status: { from: 'verified', to: 'active' } } : {}),
+        },
+      });
       return { id: checkId, status, differences };
     });
     if (result.status === 'matched') this.events.publishForOrder(orderId, 'order');

@@ -9,6 +9,7 @@ import { UsersService } from '../users/users.service.js';
 import type { BolusDto } from './dto/bedside-actions.dto.js';
 import { ClinicianBolus } from './entities/clinician-bolus.entity.js';
 import { BEDSIDE_ROLES } from './nurse-roles.js';
+import { recordAudit } from '../audit/record-audit.js';
 
 export type BolusResponse = { id: number; orderId: number; amount: number; doseUnit: string; reason: string; overrideReason: string | null; givenByName: string; witnessName: string; at: string };
 
@@ -46,6 +47,12 @@ export class BolusesService {
       const bolus = await manager.save(
         manager.create(ClinicianBolus, { orderId, amount: dto.amount, reason: dto.reason.trim(), overrideReason: dto.overrideReason?.trim() ?? null, givenById: nurse.id, witnessId: witness.id, at: new Date() }),
       );
+      await recordAudit(manager, nurse, {
+        action: 'order.bolus',
+        entityType: 'order',
+        entityId: orderId,
+        summary: { bolusId: bolus.id, amount: bolus.amount, doseUnit: unit, reason: bolus.reason, overrideReason: bolus.overrideReason, witness: witness.displayName },
+      });
       return { id: bolus.id, orderId, amount: bolus.amount, doseUnit: unit, reason: bolus.reason, overrideReason: bolus.overrideReason, givenByName: nurse.displayName, witnessName: witness.displayName, at: bolus.at.toISOString() };
     });
   }

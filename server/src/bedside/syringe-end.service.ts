@@ -14,6 +14,7 @@ import type { DiscontinueDto, SyringeChangeDto } from './dto/bedside-actions.dto
 import { BEDSIDE_ROLES } from './nurse-roles.js';
 import { finishRunningSyringe } from './reconcile-release.js';
 import { WardEventsService } from '../handover/ward-events.service.js';
+import { recordAudit } from '../audit/record-audit.js';
 
 export type SyringeChangeResponse = { reconciliation: ReconciliationResponse; newReleaseCode: string; nextStep: string };
 export type DiscontinueResponse = { order: OrderDetail; reconciliation: ReconciliationResponse };
@@ -37,6 +38,7 @@ export class SyringeEndService {
       if (found.status !== 'active') throw statusConflict(found.status, 'active');
       const next = await readyRelease(manager, found, dto.newReleaseCode, 'newReleaseCode');
       const result = await this.finish(manager, found, dto, nurse.id, witness.id);
+      await recordAudit(manager, nurse, { action: 'order.syringe-change', entityType: 'order', entityId: orderId, summary: { ...reconciliationSummary(result), newReleaseCode: next.releaseCode, witness: witness.displayName } });
       return { order: found, reconciliation: result, newReleaseCode: next.releaseCode };
     });
     this.reportDiscrepancy(order, reconciliation);
@@ -51,6 +53,12 @@ export class SyringeEndService {
       if (found.status !== 'active') throw statusConflict(found.status, 'discontinued');
       const result = await this.finish(manager, found, dto, nurse.id, witness.id);
       await transitionOrder(manager, found, 'discontinued', nurse.id, dto.reason.trim());
+      await recordAudit(manager, nurse, {
+        action: 'order.discontinue',
+        entityType: 'order',
+        entityId: orderId,
+        summary: { status: { from: found.status, to: 'discontinued' }, reason: dto.reason.trim(), ...reconciliationSummary(result), witness: witness.displayName },
+      });
       return { order: found, reconciliation: result };
     });
     this.reportDiscrepancy(order, reconciliation);
@@ -86,4 +94,9 @@ export class SyringeEndService {
       text: `A PCA syringe for ${order.patient.ward.name} bed ${order.patient.bed} (MRN ${order.patient.mrn}) does not reconcile.\n\nDispensed ${formatDose(reconciliation.dispensedMl, 'mL')}, infused ${formatDose(reconciliation.infusedMl, 'mL')}, wasted ${formatDose(reconciliation.wastedMl, 'mL')}: ${formatDose(reconciliation.discrepancyMl, 'mL')} unaccounted for.\n\nReview the controlled-drug record with the ward.`,
     });
   }
+}
+
+function reconciliationSummary(result: ReconciliationResponse & { releaseCode?: string }): Record<string, unknown> {
+  const { releaseCode, dispensedMl, infusedMl, wastedMl, discrepancyMl, mustReport } = result;
+  return { releaseCode, dispensedMl, infusedMl, wastedMl, discrepancyMl, mustReport };
 }

@@ -3,7 +3,7 @@ import { mkdtempSync, rmSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DataSource, EntitySchema } from 'typeorm';
+import { DataSource, type DataSourceOptions, EntitySchema } from 'typeorm';
 import { serialiseTransactions } from './serial-transactions.js';
 
 const Item = new EntitySchema<{ id: number; name: string }>({
@@ -17,7 +17,7 @@ describe('serialiseTransactions', () => {
   let dataSource: DataSource;
 
   beforeAll(async () => {
-    const options = { type: 'better-sqlite3', database: path.join(directory, 'tx.sqlite'), entities: [Item], synchronize: true } as const;
+    const options: DataSourceOptions = { type: 'better-sqlite3', database: path.join(directory, 'tx.sqlite'), entities: [Item], synchronize: true };
     dataSource = serialiseTransactions(await new DataSource(options).initialize());
   });
   afterAll(async () => {

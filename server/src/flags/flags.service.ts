@@ -5,6 +5,7 @@ import type { FlagResponse, FlagSeverity } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { Flag } from './entities/flag.entity.js';
 import { WardEventsService } from '../handover/ward-events.service.js';
+import { recordAudit } from '../audit/record-audit.js';
 
 export type NewFlag = { orderId: number; releaseId?: number | null; severity: FlagSeverity; code: string; message: string; action: string };
 
@@ -26,6 +27,7 @@ export class FlagsService {
       if (!flag) throw new NotFoundException(`No flag with id ${id}`);
       const done = await manager.update(Flag, { id, acknowledgedAt: IsNull() }, { acknowledgedAt: new Date(), acknowledgedById: user.id, acknowledgeNote: note.trim() });
       if (done.affected !== 1) throw new ConflictException('This flag was already acknowledged');
+      await recordAudit(manager, user, { action: 'order.flag-acknowledge', entityType: 'order', entityId: flag.orderId, summary: { flagId: id, code: flag.code, severity: flag.severity, note: note.trim() } });
       return manager.findOneOrFail(Flag, { where: { id }, relations: { acknowledgedBy: true } });
     });
     this.events.publishForOrder(flag.orderId, 'flag');

@@ -10,6 +10,7 @@ import { toSignoffResponse } from './dto/signoff-response.js';
 import { HandoverSignoff } from './entities/handover-signoff.entity.js';
 import { WardEventsService } from './ward-events.service.js';
 import { fieldError } from '../common/errors/field-error.js';
+import { recordAudit } from '../audit/record-audit.js';
 
 /** Each PCA is confirmed at handover by the outgoing nurse and by a different, incoming nurse. */
 @Injectable()
@@ -37,6 +38,12 @@ export class HandoverSignoffsService {
       const created = await manager.save(
         manager.create(HandoverSignoff, { wardId, orderId: dto.orderId, shiftDate, shift, role: dto.role, nurseId: nurse.id, pumpSettingsMatch: dto.role === 'incoming' ? true : null, at: now }),
       );
+      await recordAudit(manager, nurse, {
+        action: 'order.handover-signoff',
+        entityType: 'order',
+        entityId: dto.orderId,
+        summary: { signoffId: created.id, wardId, shiftDate, shift, role: dto.role, ...(dto.role === 'incoming' ? { pumpSettingsMatch: true } : {}) },
+      });
       return manager.findOneOrFail(HandoverSignoff, { where: { id: created.id }, relations: { nurse: true } });
     });
     this.events.publishForOrder(dto.orderId, 'signoff');

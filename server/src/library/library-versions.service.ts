@@ -11,6 +11,7 @@ import { LibraryVersion } from './entities/library-version.entity.js';
 import { LimitRule } from './entities/limit-rule.entity.js';
 import { LibraryService } from './library.service.js';
 import { fieldError } from '../common/errors/field-error.js';
+import { recordAudit } from '../audit/record-audit.js';
 
 /**
  * The library's life: draft → pending_approval → active → retired. Every change is one
@@ -43,44 +44,54 @@ export class LibraryVersionsService {
       );
       const startingRules = rules ?? active?.rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }) => ({ drugId, concentrationPerMl, doseUnit, perKg, limits })) ?? [];
       await this.writeRules(manager, draft.id, startingRules);
+      await recordAudit(manager, author, {
+        action: rules ? 'library-version.import' : 'library-version.create',
+        entityType: 'library-version',
+        entityId: draft.id,
+        summary: { wardId, number: draft.number, note: draft.note, rules: startingRules.length, ...(rules ? {} : { copiedFromVersion: active?.number ?? null }) },
+      });
       return toLibraryVersionDetail(await this.library.loadVersion(manager, draft.id));
     });
   }
 
-  async replaceRules(id: number, rules: LimitRuleInput[]): Promise<LibraryVersionDetail> {
+  async replaceRules(id: number, rules: LimitRuleInput[], author: AuthUser): Promise<LibraryVersionDetail> {
     return this.dataSource.transaction(async (manager) => {
       const version = await this.lockedVersion(manager, id, ['draft'], 'change its rules');
       await manager.delete(LimitRule, { versionId: version.id });
       await this.writeRules(manager, version.id, rules);
+      await recordAudit(manager, author, { action: 'library-version.rules-replace', entityType: 'library-version', entityId: id, summary: { rules: { from: version.rules.length, to: rules.length } } });
       return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
     });
   }
 
-  async submit(id: number, note: string | undefined): Promise<LibraryVersionDetail> {
+  async submit(id: number, note: string | undefined, author: AuthUser): Promise<LibraryVersionDetail> {
     return this.dataSource.transaction(async (manager) => {
       const version = await this.lockedVersion(manager, id, ['draft'], 'submit it');
       if ((await manager.countBy(LimitRule, { versionId: id })) === 0) {
         throw fieldError('rules', 'A library version needs at least one rule before it is submitted');
       }
       await manager.update(LibraryVersion, { id }, { status: 'pending_approval', submittedAt: new Date(), ...(note?.trim() ? { note: note.trim() } : {}) });
+      await recordAudit(manager, author, { action: 'library-version.submit', entityType: 'library-version', entityId: id, summary: { status: { from: version.status, to: 'pending_approval' }, ...(note?.trim() ? { note: note.trim() } : {}) } });
       return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
     });
   }
 
   /** Back to draft, for changes after a colleague's query. */
-  async withdraw(id: number): Promise<LibraryVersionDetail> {
+  async withdraw(id: number, user: AuthUser): Promise<LibraryVersionDetail> {
     return this.dataSource.transaction(async (manager) => {
       await this.lockedVersion(manager, id, ['pending_approval'], 'withdraw it');
       await manager.update(LibraryVersion, { id }, { status: 'draft', submittedAt: null });
+      await recordAudit(manager, user, { action: 'library-version.withdraw', entityType: 'library-version', entityId: id, summary: { status: { from: 'pending_approval', to: 'draft' } } });
       return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
     });
   }
 
   /** A draft that is not wanted is removed; versions that were ever active are kept for the record. */
-  async discard(id: number): Promise<void> {
+  async discard(id: number, user: AuthUser): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
-      await this.lockedVersion(manager, id, ['draft'], 'discard it');
+      const version = await this.lockedVersion(manager, id, ['draft'], 'discard it');
       await manager.delete(LibraryVersion, { id });
+      await recordAudit(manager, user, { action: 'library-version.delete', entityType: 'library-version', entityId: id, summary: { wardId: version.wardId, number: version.number, rules: version.rules.length } });
     });
   }
 
@@ -94,6 +105,7 @@ export class LibraryVersionsService {
       const now = new Date();
       await manager.update(LibraryVersion, { wardId: version.wardId, status: 'active' }, { status: 'retired', retiredAt: now });
       await manager.update(LibraryVersion, { id }, { status: 'active', approverId: approver.id, approvedAt: now });
+      await recordAudit(manager, approver, { action: 'library-version.approve', entityType: 'library-version', entityId: id, summary: { wardId: version.wardId, number: version.number, status: { from: version.status, to: 'active' }, signed: true } });
       return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
     });
   }

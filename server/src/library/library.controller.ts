@@ -57,22 +57,22 @@ export class LibraryController {
 
   @Put('versions/:id/rules')
   @Roles('pharmacist')
-  replaceRules(@Param('id', ParseIdPipe) id: number, @Body() body: ReplaceRulesDto): Promise<LibraryVersionDetail> {
-    return this.versions.replaceRules(id, body.rules);
+  replaceRules(@Param('id', ParseIdPipe) id: number, @Body() body: ReplaceRulesDto, @CurrentUser() user: AuthUser): Promise<LibraryVersionDetail> {
+    return this.versions.replaceRules(id, body.rules, user);
   }
 
   @Post('versions/:id/submit')
   @HttpCode(200)
   @Roles('pharmacist')
-  submit(@Param('id', ParseIdPipe) id: number, @Body() body: SubmitVersionDto): Promise<LibraryVersionDetail> {
-    return this.versions.submit(id, body.note);
+  submit(@Param('id', ParseIdPipe) id: number, @Body() body: SubmitVersionDto, @CurrentUser() user: AuthUser): Promise<LibraryVersionDetail> {
+    return this.versions.submit(id, body.note, user);
   }
 
   @Post('versions/:id/withdraw')
   @HttpCode(200)
   @Roles('pharmacist')
-  withdraw(@Param('id', ParseIdPipe) id: number): Promise<LibraryVersionDetail> {
-    return this.versions.withdraw(id);
+  withdraw(@Param('id', ParseIdPipe) id: number, @CurrentUser() user: AuthUser): Promise<LibraryVersionDetail> {
+    return this.versions.withdraw(id, user);
   }
 
   @Post('versions/:id/approve')
@@ -85,8 +85,8 @@ export class LibraryController {
   @Delete('versions/:id')
   @HttpCode(204)
   @Roles('pharmacist')
-  discard(@Param('id', ParseIdPipe) id: number): Promise<void> {
-    return this.versions.discard(id);
+  discard(@Param('id', ParseIdPipe) id: number, @CurrentUser() user: AuthUser): Promise<void> {
+    return this.versions.discard(id, user);
   }
 
   /** Multipart: `file` (CSV), `wardId`, optional `note`; `dryRun=true` previews without writing. */

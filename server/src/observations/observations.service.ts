@@ -15,6 +15,7 @@ import { type ObservationResponse, toObservationResponse } from './dto/observati
 import { Observation } from './entities/observation.entity.js';
 import { syringeLowMail, urgentFlagsMail } from './observation-notifications.js';
 import { WardEventsService } from '../handover/ward-events.service.js';
+import { recordAudit } from '../audit/record-audit.js';
 
 // A device clock a little ahead of the server's is not "the future".
 const CLOCK_SKEW_MS = 60_000;
@@ -55,6 +56,13 @@ export class ObservationsService {
         const flag = await this.flags.raise(manager, { ...draft, orderId, releaseId: oncePerSyringe ? release.id : null });
         flags.push({ ...draft, id: flag.id });
       }
+      const { painScore, sedationLevel, respiratoryRate, spo2, attempts, delivered, volumeInfusedMl, syringeRemainingMl } = dto;
+      await recordAudit(manager, nurse, {
+        action: 'order.observation',
+        entityType: 'order',
+        entityId: orderId,
+        summary: { observationId: saved.id, at, painScore, sedationLevel, respiratoryRate, spo2, attempts, delivered, volumeInfusedMl, syringeRemainingMl, flagsRaised: flags.map((flag) => flag.code) },
+      });
       const withUser = await manager.findOneOrFail(Observation, { where: { id: saved.id }, relations: { recordedBy: true } });
       return { order: found, observation: withUser, raised: flags };
     });

@@ -7,6 +7,7 @@ import { MailService } from '../mail/mail.service.js';
 import { UsersService } from '../users/users.service.js';
 import { orderRejectedMail, orderReturnedMail } from './order-notifications.js';
 import { transitionOrder } from './order-transitions.js';
+import { recordAudit } from '../audit/record-audit.js';
 import { OrdersService } from './orders.service.js';
 import { WardEventsService } from '../handover/ward-events.service.js';
 
@@ -27,6 +28,7 @@ export class OrderReviewService {
       const order = await this.orders.load(manager, id);
       if (order.prescriberId === pharmacist.id) throw new ForbiddenException('You wrote this order: another pharmacist verifies it');
       await transitionOrder(manager, order, 'verified', pharmacist.id, null, { verifiedById: pharmacist.id, verifiedAt: new Date() });
+      await recordAudit(manager, pharmacist, { action: 'order.verify', entityType: 'order', entityId: id, summary: { status: { from: order.status, to: 'verified' }, signed: true } });
     });
     this.events.publishForOrder(id, 'order');
     return this.orders.get(id);
@@ -36,6 +38,7 @@ export class OrderReviewService {
     const order = await this.dataSource.transaction(async (manager) => {
       const found = await this.orders.load(manager, id);
       await transitionOrder(manager, found, 'returned', pharmacist.id, reason.trim());
+      await recordAudit(manager, pharmacist, { action: 'order.return', entityType: 'order', entityId: id, summary: { status: { from: found.status, to: 'returned' }, reason: reason.trim() } });
       return found;
     });
     this.mail.send(orderReturnedMail(order, reason.trim(), pharmacist.displayName));
@@ -47,6 +50,7 @@ export class OrderReviewService {
     const order = await this.dataSource.transaction(async (manager) => {
       const found = await this.orders.load(manager, id);
       await transitionOrder(manager, found, 'rejected', pharmacist.id, reason.trim());
+      await recordAudit(manager, pharmacist, { action: 'order.reject', entityType: 'order', entityId: id, summary: { status: { from: found.status, to: 'rejected' }, reason: reason.trim() } });
       return found;
     });
     this.mail.send(orderRejectedMail(order, reason.trim(), pharmacist.displayName));

@@ -16,6 +16,8 @@ import { PcaOrder } from './entities/pca-order.entity.js';
 import { orderAwaitingVerificationMail } from './order-notifications.js';
 import { OrderPreviewService } from './order-preview.service.js';
 import { statusConflict, transitionOrder } from './order-transitions.js';
+import { orderAuditSummary } from './order-audit.js';
+import { recordAudit } from '../audit/record-audit.js';
 import { WardEventsService } from '../handover/ward-events.service.js';
 
 const DETAIL_RELATIONS = { ...ORDER_SUMMARY_RELATIONS, verifiedBy: true } as const;
@@ -68,7 +70,11 @@ export class OrdersService {
       });
       const orderId = identifiers[0].id as number;
       await manager.insert(OrderEvent, { orderId, fromStatus: null, toStatus: 'awaiting_verification', userId: prescriber.id, at: now, reason: previous ? `Revision of order ${previous.id}` : null });
-      if (previous) await transitionOrder(manager, previous, 'superseded', prescriber.id, `Revised as order ${orderId}`);
+      await recordAudit(manager, prescriber, { action: previous ? 'order.revise' : 'order.create', entityType: 'order', entityId: orderId, summary: orderAuditSummary(dto, previous?.id) });
+      if (previous) {
+        await transitionOrder(manager, previous, 'superseded', prescriber.id, `Revised as order ${orderId}`);
+        await recordAudit(manager, prescriber, { action: 'order.revise', entityType: 'order', entityId: previous.id, summary: { status: { from: previous.status, to: 'superseded' }, revisedAs: orderId } });
+      }
       return orderId;
     });
 
@@ -82,6 +88,7 @@ export class OrdersService {
     await this.dataSource.transaction(async (manager) => {
       const order = await this.load(manager, id);
       await transitionOrder(manager, order, 'cancelled', user.id, reason);
+      await recordAudit(manager, user, { action: 'order.cancel', entityType: 'order', entityId: id, summary: { status: { from: order.status, to: 'cancelled' }, reason } });
     });
     this.events.publishForOrder(id, 'order');
     return this.get(id);

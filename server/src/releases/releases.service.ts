@@ -11,6 +11,7 @@ import { toReleaseResponse } from './dto/release-response.js';
 import type { CreateReleaseDto } from './dto/create-release.dto.js';
 import { SyringeRelease } from './entities/syringe-release.entity.js';
 import { WardEventsService } from '../handover/ward-events.service.js';
+import { recordAudit } from '../audit/record-audit.js';
 
 // Concentrations are decimals; compare them with a tolerance, never bit for bit.
 const SAME_CONCENTRATION = 1e-9;
@@ -48,6 +49,12 @@ export class ReleasesService {
           releasedAt: new Date(),
         }),
       );
+      await recordAudit(manager, pharmacist, {
+        action: 'order.release',
+        entityType: 'order',
+        entityId: orderId,
+        summary: { releaseId: saved.id, releaseCode: saved.releaseCode, concentrationPerMl: saved.concentrationPerMl, volumeMl: saved.volumeMl, batch: saved.batch, expiresAt: saved.expiresAt, preparedBy: saved.preparedBy, checkedBy: saved.checkedBy, overrideReason: saved.overrideReason },
+      });
       return { order: found, release: await manager.findOneOrFail(SyringeRelease, { where: { id: saved.id }, relations: { releasedBy: true } }) };
     });
     this.mail.send(syringeReleasedMail(order, release));

@@ -5,6 +5,8 @@ import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
 import { CreateUserDto } from './dto/create-user.dto.js';
 import { UpdateUserDto } from './dto/update-user.dto.js';
 import { UsersService } from './users.service.js';
+import type { AuthUser } from '../auth/auth-user.js';
+import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 
 @Controller('users')
 @Roles('admin')
@@ -17,12 +19,12 @@ export class UsersController {
   }
 
   @Post()
-  create(@Body() body: CreateUserDto): Promise<User> {
-    return this.users.create(body);
+  create(@Body() body: CreateUserDto, @CurrentUser() admin: AuthUser): Promise<User> {
+    return this.users.create(body, admin);
   }
 
   @Patch(':id')
-  update(@Param('id', ParseIdPipe) id: number, @Body() body: UpdateUserDto): Promise<User> {
-    return this.users.update(id, body);
+  update(@Param('id', ParseIdPipe) id: number, @Body() body: UpdateUserDto, @CurrentUser() admin: AuthUser): Promise<User> {
+    return this.users.update(id, body, admin);
   }
 }

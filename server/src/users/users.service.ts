@@ -8,6 +8,8 @@ import type { UpdateUserDto } from './dto/update-user.dto.js';
 import { toSessionUser, toUserResponse } from './dto/user-response.js';
 import { User } from './entities/user.entity.js';
 import { hashPassword, passwordMatches } from './passwords.js';
+import type { AuthUser } from '../auth/auth-user.js';
+import { changedFields, recordAudit } from '../audit/record-audit.js';
 
 @Injectable()
 export class UsersService {
@@ -64,7 +66,9 @@ export class UsersService {
     return users.map(toUserResponse);
   }
 
-  async create(dto: CreateUserDto): Promise<UserResponse> {
+  async create(dto: CreateUserDto, admin: AuthUser): Promise<UserResponse> {
+    // Hashing takes ~100 ms: do it before the transaction, which holds the database's one writer.
+    const passwordHash = await hashPassword(dto.password);
     return this.dataSource.transaction(async (manager) => {
       if (await manager.existsBy(User, { username: dto.username })) {
         throw new ConflictException({
@@ -78,23 +82,39 @@ export class UsersService {
         displayName: dto.displayName.trim(),
         role: dto.role,
         active: true,
-        passwordHash: await hashPassword(dto.password),
+        passwordHash,
         wards: await findWards(manager.getRepository(Ward), dto.wardIds),
       });
-      return toUserResponse(await manager.save(user));
+      const created = toUserResponse(await manager.save(user));
+      await recordAudit(manager, admin, {
+        action: 'user.create',
+        entityType: 'user',
+        entityId: created.id,
+        summary: { username: created.username, displayName: created.displayName, role: created.role, wardIds: created.wardIds },
+      });
+      return created;
     });
   }
 
-  async update(id: number, dto: UpdateUserDto): Promise<UserResponse> {
+  async update(id: number, dto: UpdateUserDto, admin: AuthUser): Promise<UserResponse> {
+    const passwordHash = dto.password === undefined ? undefined : await hashPassword(dto.password);
     return this.dataSource.transaction(async (manager) => {
       const user = await manager.findOne(User, { where: { id }, relations: { wards: true } });
       if (!user) throw new NotFoundException(`No user with id ${id}`);
+      const before = toUserResponse(user);
       if (dto.displayName !== undefined) user.displayName = dto.displayName.trim();
       if (dto.role !== undefined) user.role = dto.role;
       if (dto.active !== undefined) user.active = dto.active;
-      if (dto.password !== undefined) user.passwordHash = await hashPassword(dto.password);
+      if (passwordHash !== undefined) user.passwordHash = passwordHash;
       if (dto.wardIds !== undefined) user.wards = await findWards(manager.getRepository(Ward), dto.wardIds);
-      return toUserResponse(await manager.save(user));
+      const after = toUserResponse(await manager.save(user));
+      await recordAudit(manager, admin, {
+        action: 'user.update',
+        entityType: 'user',
+        entityId: id,
+        summary: { ...changedFields(before, after, ['displayName', 'role', 'active', 'wardIds']), ...(passwordHash ? { passwordReset: true } : {}) },
+      });
+      return after;
     });
   }
 }

@@ -4,6 +4,8 @@ import { Roles } from '../auth/decorators/roles.decorator.js';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
 import { UpdateWardPolicyDto } from './dto/update-ward-policy.dto.js';
 import { type WardPolicySettings, WardsService } from './wards.service.js';
+import type { AuthUser } from '../auth/auth-user.js';
+import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 
 @Controller('wards')
 export class WardsController {
@@ -22,7 +24,7 @@ export class WardsController {
 
   @Patch(':wardId/policy')
   @Roles('admin')
-  updatePolicy(@Param('wardId', ParseIdPipe) wardId: number, @Body() body: UpdateWardPolicyDto): Promise<WardPolicySettings> {
-    return this.wards.updatePolicy(wardId, body);
+  updatePolicy(@Param('wardId', ParseIdPipe) wardId: number, @Body() body: UpdateWardPolicyDto, @CurrentUser() admin: AuthUser): Promise<WardPolicySettings> {
+    return this.wards.updatePolicy(wardId, body, admin);
   }
 }

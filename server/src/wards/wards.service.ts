@@ -6,6 +6,8 @@ import type { UpdateWardPolicyDto } from './dto/update-ward-policy.dto.js';
 import { wardPolicy } from './ward-policy.js';
 import { toWardResponse } from './dto/ward-response.js';
 import { Ward } from './entities/ward.entity.js';
+import type { AuthUser } from '../auth/auth-user.js';
+import { changedFields, recordAudit } from '../audit/record-audit.js';
 
 @Injectable()
 export class WardsService {
@@ -22,9 +24,15 @@ export class WardsService {
     return { ...wardPolicy(ward), pharmacyEmail: ward.pharmacyEmail, nurseInChargeEmail: ward.nurseInChargeEmail };
   }
 
-  async updatePolicy(wardId: number, changes: UpdateWardPolicyDto): Promise<WardPolicySettings> {
-    await this.policy(wardId);
-    await this.wards.update({ id: wardId }, changes);
+  async updatePolicy(wardId: number, changes: UpdateWardPolicyDto, admin: AuthUser): Promise<WardPolicySettings> {
+    await this.wards.manager.transaction(async (manager) => {
+      const ward = await manager.findOneBy(Ward, { id: wardId });
+      if (!ward) throw new NotFoundException(`No ward with id ${wardId}`);
+      const changed = changedFields(ward, { ...changes });
+      if (Object.keys(changed).length === 0) return;
+      await manager.update(Ward, { id: wardId }, changes);
+      await recordAudit(manager, admin, { action: 'ward.policy-update', entityType: 'ward', entityId: wardId, summary: changed });
+    });
     return this.policy(wardId);
   }
 }

@@ -12,7 +12,6 @@ export const AUDIT_ACTION_LABELS = {
   'user.create': 'User created',
   'user.update': 'User changed',
   'ward.policy-update': 'Ward policy changed',
-  'ward.handover-signoff': 'Handover signed',
   'library-version.create': 'Library draft created',
   'library-version.import': 'Library draft imported from CSV',
   'library-version.rules-replace': 'Library draft rules saved',
@@ -34,6 +33,7 @@ export const AUDIT_ACTION_LABELS = {
   'order.discontinue': 'PCA discontinued',
   'order.observation': 'Observation recorded',
   'order.flag-acknowledge': 'Flag acknowledged',
+  'order.handover-signoff': 'Confirmed at handover',
 } as const;
 export type AuditAction = keyof typeof AUDIT_ACTION_LABELS;
 export const AUDIT_ACTIONS = Object.keys(AUDIT_ACTION_LABELS) as AuditAction[];

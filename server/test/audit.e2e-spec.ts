@@ -1,0 +1,141 @@
+import Database from 'better-sqlite3';
+import request from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { AuditEvent, AuditPage } from '@lockstep/shared';
+import { activeOrder, type PcaTokens } from './support/pca.js';
+import { createTestApp, DEMO_PASSWORD, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
+
+describe('audit trail', () => {
+  let t: TestApp;
+  let admin: string;
+  let pharmacist: string;
+  let nurse: string;
+  let tokens: PcaTokens;
+  const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
+  const search = async (query: string, token = admin) => (await request(t.http).get(`/api/audit${query}`).set(bearer(token)).expect(200)).body as AuditPage;
+  const auditCount = async () => (await search('?limit=1')).total;
+
+  beforeAll(async () => {
+    t = await createTestApp();
+    admin = await t.tokenFor(DEMO_USER_BY_ROLE.admin);
+    pharmacist = await t.tokenFor(DEMO_USER_BY_ROLE.pharmacist);
+    nurse = await t.tokenFor(DEMO_USER_BY_ROLE.nurse);
+    tokens = { prescriber: await t.tokenFor(DEMO_USER_BY_ROLE.prescriber), pharmacist, nurse };
+  });
+  afterAll(() => t.close());
+
+  it('records a ward policy change with who, when and each field’s old and new value; a no-op writes nothing', async () => {
+    await request(t.http).patch('/api/wards/1/policy').set(bearer(admin)).send({ respiratoryRateThreshold: 10, syringeLowThresholdHours: 2 }).expect(200);
+    const { events } = await search('?entityType=ward&entityId=1');
+    expect(events).toHaveLength(1);
+    expect(events[0]).toMatchObject({ action: 'ward.policy-update', actorName: 'Sam Rivera', entityType: 'ward', entityId: '1', summary: { respiratoryRateThreshold: { from: 8, to: 10 } } });
+    expect(events[0].summary).not.toHaveProperty('syringeLowThresholdHours');
+    expect(Date.now() - Date.parse(events[0].at)).toBeLessThan(60_000);
+
+    const before = await auditCount();
+    await request(t.http).patch('/api/wards/1/policy').set(bearer(admin)).send({ respiratoryRateThreshold: 10 }).expect(200);
+    await request(t.http).patch('/api/wards/1/policy').set(bearer(admin)).send({ respiratoryRateThreshold: -3 }).expect(400);
+    expect(await auditCount()).toBe(before);
+  });
+
+  it('tells an order’s whole story to every role, oldest first, each event chained to the one before', async () => {
+    const { id } = await activeOrder(t.http, tokens);
+    await request(t.http)
+      .post(`/api/orders/${id}/observations`)
+      .set(bearer(nurse))
+      .send({ painScore: 4, sedationLevel: '1', respiratoryRate: 14, spo2: 97, attempts: 3, delivered: 2, volumeInfusedMl: 2, syringeRemainingMl: 48 })
+      .expect(201);
+
+    const story = (await request(t.http).get(`/api/orders/${id}/audit`).set(bearer(nurse)).expect(200)).body as AuditEvent[];
+    expect(story.map((event) => [event.action, event.actorName])).toEqual([
+      ['order.create', 'Dr Amara Osei'],
+      ['order.verify', 'Lin Park'],
+      ['order.release', 'Lin Park'],
+      ['order.bedside-first-check', 'Kai Mendes'],
+      ['order.bedside-second-check', 'Rosa Adeyemi'],
+      ['order.observation', 'Kai Mendes'],
+    ]);
+    expect(story[1].summary).toMatchObject({ status: { from: 'awaiting_verification', to: 'verified' } });
+    expect(story[4].summary).toMatchObject({ result: 'matched', status: { from: 'verified', to: 'active' } });
+    expect(story[5].summary).toMatchObject({ painScore: 4, sedationLevel: '1', flagsRaised: [] });
+    expect(JSON.stringify(story)).not.toContain(DEMO_PASSWORD);
+
+    const all = (await search('?limit=200')).events.reverse();
+    all.slice(1).forEach((event, index) => expect(event.prevHash).toBe(all[index].hash));
+
+    await request(t.http).get(`/api/orders/${id}/audit`).expect(401);
+    await request(t.http).get('/api/orders/99999/audit').set(bearer(nurse)).expect(404);
+  });
+
+  it('writes nothing when a change is refused', async () => {
+    const before = await auditCount();
+    // Demo order 2 is already verified: a second verify is a 409 and its transaction rolls back.
+    await request(t.http).post('/api/orders/2/verify').set(bearer(pharmacist)).send({ signature: { password: DEMO_PASSWORD } }).expect(409);
+    await request(t.http).post('/api/users').set(bearer(admin)).send({ username: 'kai.mendes', displayName: 'Copy', role: 'nurse', wardIds: [1], password: 'long-enough-password' }).expect(409);
+    expect(await auditCount()).toBe(before);
+  });
+
+  it('records user changes without the password', async () => {
+    const { body: user } = await request(t.http)
+      .post('/api/users')
+      .set(bearer(admin))
+      .send({ username: 'ivo.lund', displayName: 'Ivo Lund', role: 'nurse', wardIds: [1], password: 'a-long-password-1' })
+      .expect(201);
+    await request(t.http).patch(`/api/users/${user.id}`).set(bearer(admin)).send({ role: 'charge_nurse', password: 'another-long-password' }).expect(200);
+    const { events } = await search(`?entityType=user&entityId=${user.id}`);
+    expect(events.map((event) => [event.action, event.summary])).toEqual([
+      ['user.update', { role: { from: 'nurse', to: 'charge_nurse' }, passwordReset: true }],
+      ['user.create', { username: 'ivo.lund', displayName: 'Ivo Lund', role: 'nurse', wardIds: [1] }],
+    ]);
+    expect(JSON.stringify(events)).not.toMatch(/long-password|\$2[aby]\$/);
+  });
+
+  it('filters by user, action and time, and pages newest first', async () => {
+    const lin = (await search('?action=order.verify')).events[0].userId;
+    const byLin = await search(`?userId=${lin}`);
+    expect(byLin.total).toBeGreaterThan(0);
+    expect(byLin.events.every((event) => event.userId === lin)).toBe(true);
+
+    const page1 = await search('?limit=2');
+    const page2 = await search('?limit=2&offset=2');
+    expect(page1.events).toHaveLength(2);
+    expect(page1.events[0].id).toBeGreaterThan(page1.events[1].id);
+    expect(page2.events[0].id).toBeLessThan(page1.events[1].id);
+    expect(page2.total).toBe(page1.total);
+
+    expect((await search(`?from=${encodeURIComponent(new Date(Date.now() + 60_000).toISOString())}`)).total).toBe(0);
+    expect((await search(`?to=${encodeURIComponent(new Date(Date.now() + 60_000).toISOString())}`)).total).toBe(page1.total);
+
+    const bad = await request(t.http).get('/api/audit?limit=500&entityType=patient').set(bearer(admin)).expect(400);
+    expect(bad.body.errors.map((error: { field: string }) => error.field).sort()).toEqual(['entityType', 'limit']);
+  });
+
+  it('lets pharmacists read order and library events only; other roles none; only admins verify', async () => {
+    const mine = await search('', pharmacist);
+    expect(mine.total).toBeGreaterThan(0);
+    expect(new Set(mine.events.map((event) => event.entityType))).toEqual(new Set(['order']));
+    await request(t.http).get('/api/audit?entityType=user').set(bearer(pharmacist)).expect(403);
+    await request(t.http).get('/api/audit?entityType=order').set(bearer(pharmacist)).expect(200);
+    await request(t.http).get('/api/audit').set(bearer(nurse)).expect(403);
+    await request(t.http).get('/api/audit').expect(401);
+    await request(t.http).get('/api/audit/verify').set(bearer(pharmacist)).expect(403);
+  });
+
+  it('refuses to update or delete audit rows in the database, and the verify endpoint names a row changed behind its back', async () => {
+    const intact = (await request(t.http).get('/api/audit/verify').set(bearer(admin)).expect(200)).body;
+    expect(intact).toEqual({ ok: true, checked: await auditCount(), firstBadId: null });
+
+    const db = new Database(t.databasePath);
+    try {
+      expect(() => db.prepare('UPDATE audit_event SET summary = ? WHERE id = 2').run('{}')).toThrow(/append-only/);
+      expect(() => db.prepare('DELETE FROM audit_event WHERE id = 2').run()).toThrow(/append-only/);
+      // Someone with the database file drops the guard and edits history.
+      db.exec('DROP TRIGGER audit_event_no_update');
+      db.prepare(`UPDATE audit_event SET summary = json_set(summary, '$.respiratoryRateThreshold.to', 20) WHERE id = 1`).run();
+    } finally {
+      db.close();
+    }
+    const broken = (await request(t.http).get('/api/audit/verify').set(bearer(admin)).expect(200)).body;
+    expect(broken).toEqual({ ok: false, checked: 0, firstBadId: 1 });
+  });
+});
