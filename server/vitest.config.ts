@@ -22,6 +22,17 @@ export default defineConfig({
           hookTimeout: 60_000,
         },
       },
+      {
+        extends: true,
+        test: {
+          // Kills and restarts the built server (server/dist): run by `npm run test:crash` at the
+          // root, which builds first.
+          name: 'crash',
+          include: ['test/**/*.crash-spec.ts'],
+          testTimeout: 240_000,
+          hookTimeout: 60_000,
+        },
+      },
     ],
   },
 });
