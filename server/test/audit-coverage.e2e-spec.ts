@@ -102,6 +102,12 @@ describe('every state-changing route writes its audit event', () => {
     const draft = await step('post', '/api/library/versions', '/api/library/versions', 'pharmacist', { wardId: 3, note: 'Trial' }, 201, 'library-version.create');
     await step('delete', '/api/library/versions/:id', `/api/library/versions/${draft.id}`, 'pharmacist', undefined, 204, 'library-version.delete');
 
+    // An admin clears the lock left by five wrong passwords.
+    for (let attempt = 0; attempt < 5; attempt++) await request(t.http).post('/api/auth/login').send({ username: 'no.such.user', password: 'not-the-password' }).expect(401);
+    await step('delete', '/api/auth/lockouts/usernames/:username', '/api/auth/lockouts/usernames/no.such.user', 'admin', undefined, 204, 'sign-in.unlock');
+    for (let attempt = 0; attempt < 5; attempt++) await request(t.http).post('/api/auth/login').send({ username: 'no.such.user', password: 'not-the-password' });
+    await step('delete', '/api/auth/lockouts/addresses/:address', '/api/auth/lockouts/addresses/127.0.0.1', 'admin', undefined, 204, 'sign-in.unlock');
+
     const writeRoutes = appRoutes(t.app).filter((key) => WRITE_METHODS.has(key.split(' ')[0]) && !NOT_STATE_CHANGING.has(key));
     expect(writeRoutes.filter((key) => !exercised.has(key)), 'write routes this walk does not call').toEqual([]);
 

@@ -9,8 +9,10 @@ export function RequireSession() {
   const { user } = useSession();
   const location = useLocation();
   if (!user) {
-    // After "Sign out" the next person starts from their own home, not the last screen.
-    const comeBackTo = getLastEndReason() === 'signed-out' ? undefined : `${location.pathname}${location.search}`;
+    // After "Sign out", or an idle sign-out on a shared computer (most likely someone else signs
+    // in next), the next person starts from their own home, not the last patient's screen.
+    const reason = getLastEndReason();
+    const comeBackTo = reason === 'signed-out' || reason === 'idle' ? undefined : `${location.pathname}${location.search}`;
     return <Navigate to={paths.signIn.getHref(comeBackTo)} replace />;
   }
   return <Outlet />;

@@ -70,6 +70,10 @@ const router = createBrowserRouter([
               { path: paths.adminMailbox.path, lazy: () => import('./routes/admin-mailbox') },
             ],
           },
+          {
+            element: <RequireArea area="audit" />,
+            children: [{ path: paths.adminAudit.path, lazy: () => import('./routes/admin-audit') }],
+          },
           { path: '*', lazy: () => import('./routes/not-found') },
         ],
       },

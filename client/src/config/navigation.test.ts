@@ -4,8 +4,8 @@ import { canAccess, homePathFor, landingPathFor, navItemsFor } from './navigatio
 import { isSafeRedirect, paths } from './paths';
 
 const NAV_LABELS: Partial<Record<Role, string[]>> = {
-  admin: ['Users', 'Ward policies', 'Mailbox'],
-  pharmacist: ['Patients', 'Verification', 'Library'],
+  admin: ['Users', 'Ward policies', 'Mailbox', 'Audit'],
+  pharmacist: ['Patients', 'Verification', 'Library', 'Audit'],
   prescriber: ['Patients', 'My orders'],
   nurse: ['Patients', 'PCA orders', 'Handover'],
   charge_nurse: ['Patients', 'PCA orders', 'Handover'],
@@ -154,5 +154,22 @@ describe('PCA and ward policy routes', () => {
     expect(landingPathFor('admin', '/pca/14')).toBe('/admin/users');
     expect(landingPathFor('admin', '/admin/ward-policies?ward=2')).toBe('/admin/ward-policies?ward=2');
     expect(landingPathFor('charge_nurse', '/admin/ward-policies')).toBe('/patients');
+  });
+});
+
+describe('audit route', () => {
+  it('builds its href from the filters, leaving out empty ones', () => {
+    expect(paths.adminAudit.getHref()).toBe('/admin/audit');
+    expect(paths.adminAudit.getHref({ entityType: 'order', entityId: '14', action: '', page: 2, userId: undefined })).toBe(
+      '/admin/audit?entityType=order&entityId=14&page=2',
+    );
+  });
+
+  it('is open to the admin and to pharmacists, and to nobody else', () => {
+    expect(landingPathFor('admin', '/admin/audit?entityType=ward')).toBe('/admin/audit?entityType=ward');
+    expect(landingPathFor('pharmacist', '/admin/audit')).toBe('/admin/audit');
+    expect(landingPathFor('pharmacist', '/admin/users')).toBe('/patients');
+    expect(landingPathFor('nurse', '/admin/audit')).toBe('/patients');
+    expect(landingPathFor('prescriber', '/admin/audit')).toBe('/patients');
   });
 });

@@ -2,7 +2,7 @@ import { CLINICAL_ROLES, type Role } from '@lockstep/shared';
 import { isSafeRedirect, paths } from './paths';
 
 /** Groups of screens; each route is guarded by one of these. */
-export type Area = 'clinical' | 'prescribing' | 'bedside' | 'pharmacy' | 'admin';
+export type Area = 'clinical' | 'prescribing' | 'bedside' | 'pharmacy' | 'admin' | 'audit';
 
 export const AREA_ROLES: Record<Area, readonly Role[]> = {
   clinical: CLINICAL_ROLES,
@@ -10,9 +10,11 @@ export const AREA_ROLES: Record<Area, readonly Role[]> = {
   bedside: ['nurse', 'charge_nurse'],
   pharmacy: ['pharmacist'],
   admin: ['admin'],
+  // The server narrows what a pharmacist may read to orders and library versions.
+  audit: ['admin', 'pharmacist'],
 };
 
-export type NavIcon = 'patients' | 'library' | 'users' | 'orders' | 'verification' | 'mailbox' | 'bedside' | 'handover' | 'policy';
+export type NavIcon = 'patients' | 'library' | 'users' | 'orders' | 'verification' | 'mailbox' | 'bedside' | 'handover' | 'policy' | 'audit';
 
 export interface NavItem {
   label: string;
@@ -33,6 +35,7 @@ const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Users', href: paths.adminUsers.getHref(), icon: 'users', area: 'admin' },
   { label: 'Ward policies', href: paths.adminWardPolicies.getHref(), icon: 'policy', area: 'admin' },
   { label: 'Mailbox', href: paths.adminMailbox.getHref(), icon: 'mailbox', area: 'admin' },
+  { label: 'Audit', href: paths.adminAudit.getHref(), icon: 'audit', area: 'audit' },
 ];
 
 export function canAccess(role: Role, area: Area): boolean {
@@ -58,6 +61,7 @@ const ROUTE_AREAS: ReadonlyArray<{ prefix: string; area: Area }> = [
   { prefix: paths.bedside.path, area: 'bedside' },
   { prefix: paths.handover.path, area: 'clinical' },
   { prefix: '/pca', area: 'clinical' },
+  { prefix: paths.adminAudit.path, area: 'audit' },
   { prefix: '/admin', area: 'admin' },
 ];
 

@@ -113,6 +113,18 @@ export const paths = {
     path: '/pca/:orderId/observe',
     getHref: (orderId: number) => `/pca/${orderId}/observe`,
   },
+  adminAudit: {
+    path: '/admin/audit',
+    /** The filters and the page live in the address, so a reload or a shared link keeps them. */
+    getHref: (search: Readonly<Record<string, string | number | undefined>> = {}) => {
+      const query = new URLSearchParams();
+      for (const [key, value] of Object.entries(search)) {
+        if (value !== undefined && value !== '') query.set(key, String(value));
+      }
+      const text = query.toString();
+      return text ? `/admin/audit?${text}` : '/admin/audit';
+    },
+  },
   adminWardPolicies: {
     path: '/admin/ward-policies',
     /** `ward` picks the ward, so a reload keeps it. */

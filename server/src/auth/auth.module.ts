@@ -3,6 +3,8 @@ import { ConfigService } from '@nestjs/config';
 import { APP_GUARD } from '@nestjs/core';
 import { JwtModule } from '@nestjs/jwt';
 import { PassportModule } from '@nestjs/passport';
+import { PasswordRateGuard } from '../common/throttling/password-rate.guard.js';
+import { ThrottlingModule } from '../common/throttling/throttling.module.js';
 import type { Env } from '../config/env.validation.js';
 import { UsersModule } from '../users/users.module.js';
 import { AuthController } from './auth.controller.js';
@@ -10,10 +12,13 @@ import { AuthService } from './auth.service.js';
 import { JwtAuthGuard } from './guards/jwt-auth.guard.js';
 import { RolesGuard } from './guards/roles.guard.js';
 import { JwtStrategy } from './jwt.strategy.js';
+import { LockoutsController } from './lockouts.controller.js';
+import { LockoutsService } from './lockouts.service.js';
 
 @Module({
   imports: [
     UsersModule,
+    ThrottlingModule,
     PassportModule,
     JwtModule.registerAsync({
       inject: [ConfigService],
@@ -23,11 +28,13 @@ import { JwtStrategy } from './jwt.strategy.js';
       }),
     }),
   ],
-  controllers: [AuthController],
+  controllers: [AuthController, LockoutsController],
   providers: [
     AuthService,
+    LockoutsService,
     JwtStrategy,
-    // Order matters: authenticate first, then check the role.
+    // Order matters: limit password-carrying requests before any work, authenticate, then check the role.
+    { provide: APP_GUARD, useClass: PasswordRateGuard },
     { provide: APP_GUARD, useClass: JwtAuthGuard },
     { provide: APP_GUARD, useClass: RolesGuard },
   ],

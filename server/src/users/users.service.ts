@@ -1,4 +1,4 @@
-import { BadRequestException, ConflictException, ForbiddenException, Injectable, NotFoundException, UnauthorizedException } from '@nestjs/common';
+import { BadRequestException, ConflictException, ForbiddenException, Inject, Injectable, NotFoundException, UnauthorizedException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { DataSource, In, type Repository } from 'typeorm';
 import { ROLE_LABELS, type Role, type SessionUser, type User as UserResponse } from '@lockstep/shared';
@@ -8,6 +8,7 @@ import type { UpdateUserDto } from './dto/update-user.dto.js';
 import { toSessionUser, toUserResponse } from './dto/user-response.js';
 import { User } from './entities/user.entity.js';
 import { hashPassword, passwordMatches } from './passwords.js';
+import { PasswordAttemptsService } from '../common/throttling/password-attempts.service.js';
 import type { AuthUser } from '../auth/auth-user.js';
 import { changedFields, recordAudit } from '../audit/record-audit.js';
 
@@ -17,6 +18,9 @@ export class UsersService {
     @InjectRepository(User) private readonly users: Repository<User>,
     @InjectDataSource() private readonly dataSource: DataSource,
   ) {}
+
+  // Injected as a property so the constructor stays as it was; counts wrong signature passwords.
+  @Inject(PasswordAttemptsService) private readonly attempts: PasswordAttemptsService;
 
   /** The signed-in person if the credentials are right and the account is active. */
   async verifyCredentials(username: string, password: string): Promise<SessionUser | null> {
@@ -28,7 +32,8 @@ export class UsersService {
   /** A signature is the caller's own password typed again; a wrong one is a 401 and nothing is signed. */
   async verifySignature(userId: number, password: string): Promise<void> {
     const user = await this.users.findOneBy({ id: userId, active: true });
-    if (!user || !(await passwordMatches(password, user.passwordHash))) {
+    const matches = await this.attempts.check(user?.username, async () => user !== null && (await passwordMatches(password, user.passwordHash)));
+    if (!matches) {
       throw new UnauthorizedException({
         statusCode: 401,
         message: 'The password you signed with is not correct',
@@ -43,7 +48,7 @@ export class UsersService {
    */
   async verifyColleague(username: string, password: string, roles: readonly Role[], notUserId: number, field = ''): Promise<SessionUser> {
     const at = (name: string) => (field ? `${field}.${name}` : name);
-    const colleague = await this.verifyCredentials(username.trim(), password);
+    const colleague = await this.attempts.check(username, () => this.verifyCredentials(username.trim(), password));
     if (!colleague) {
       throw new UnauthorizedException({ statusCode: 401, message: 'The second person’s username or password is incorrect', errors: [{ field: at('password'), message: 'Username or password is incorrect' }] });
     }

@@ -1,7 +1,10 @@
 import { z } from 'zod';
 
-/** What an audit event is about. Order-related work (releases, checks, observations, flags) is filed under its order. */
-export const AUDIT_ENTITY_TYPES = ['order', 'library-version', 'user', 'ward'] as const;
+/**
+ * What an audit event is about. Order-related work (releases, checks, observations, flags) is filed
+ * under its order; `sign-in` events are about a username or network address locked after wrong passwords.
+ */
+export const AUDIT_ENTITY_TYPES = ['order', 'library-version', 'user', 'ward', 'sign-in'] as const;
 export const auditEntityTypeSchema = z.enum(AUDIT_ENTITY_TYPES);
 export type AuditEntityType = z.infer<typeof auditEntityTypeSchema>;
 
@@ -12,6 +15,7 @@ export const AUDIT_ACTION_LABELS = {
   'user.create': 'User created',
   'user.update': 'User changed',
   'ward.policy-update': 'Ward policy changed',
+  'sign-in.unlock': 'Sign-in lock cleared',
   'library-version.create': 'Library draft created',
   'library-version.import': 'Library draft imported from CSV',
   'library-version.rules-replace': 'Library draft rules saved',

@@ -2,6 +2,7 @@ import { useEffect } from 'react';
 import { Outlet } from 'react-router-dom';
 import { AppShellLayout } from '@/components/layouts/app-shell-layout';
 import { useMe } from '@/features/auth/api/get-me';
+import { IdleSignOut } from '@/features/auth/components/idle-sign-out';
 import { updateSessionUser } from '@/lib/auth/session-store';
 
 export function Component() {
@@ -15,6 +16,7 @@ export function Component() {
   return (
     <AppShellLayout>
       <Outlet />
+      <IdleSignOut />
     </AppShellLayout>
   );
 }

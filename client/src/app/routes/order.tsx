@@ -1,6 +1,7 @@
 import { Skeleton } from '@mantine/core';
 import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
+import { OrderStory } from '@/features/audit/components/order-story';
 import { useOrder } from '@/features/orders/api/get-order';
 import { OrderDetailScreen } from '@/features/orders/components/order-detail-screen';
 import { patientQueryOptions } from '@/features/patients/api/get-patient';
@@ -23,6 +24,7 @@ export function Component() {
       orderId={id}
       weightKg={patient.data?.weightKg ?? null}
       patientBanner={patient.data ? <PatientBanner patient={patient.data} /> : <Skeleton height={96} />}
+      story={<OrderStory orderId={id} orderUpdatedAt={order.dataUpdatedAt} />}
     />
   );
 }

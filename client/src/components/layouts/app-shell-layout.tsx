@@ -1,7 +1,7 @@
 import type { ComponentType, ReactNode } from 'react';
 import { AppShell, Burger, Button, Group, NavLink, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
-import { IconAdjustments, IconArrowsExchange, IconBooks, IconClipboardCheck, IconClipboardList, IconHeartbeat, IconLogout, IconMail, IconUsers, IconUsersGroup, type IconProps } from '@tabler/icons-react';
+import { IconAdjustments, IconArrowsExchange, IconBooks, IconClipboardCheck, IconClipboardList, IconHeartbeat, IconHistory, IconLogout, IconMail, IconUsers, IconUsersGroup, type IconProps } from '@tabler/icons-react';
 import { Link, useLocation } from 'react-router-dom';
 import { ROLE_LABELS } from '@lockstep/shared';
 import { navItemsFor, type NavIcon } from '@/config/navigation';
@@ -19,6 +19,7 @@ const NAV_ICONS: Record<NavIcon, ComponentType<IconProps>> = {
   bedside: IconHeartbeat,
   handover: IconArrowsExchange,
   policy: IconAdjustments,
+  audit: IconHistory,
 };
 
 export function AppShellLayout({ children }: { children: ReactNode }) {

@@ -3,7 +3,8 @@ import { loginResponseSchema, type LoginResponse } from '@lockstep/shared';
 /** What a signed-in browser tab holds: the bearer token and who it belongs to. */
 export type Session = LoginResponse;
 
-export type SessionEndReason = 'signed-out' | 'expired';
+/** `idle`: nobody used the tab for the idle sign-out time (config/env.ts). */
+export type SessionEndReason = 'signed-out' | 'expired' | 'idle';
 
 // sessionStorage, not localStorage: ward computers are shared, and closing the tab or browser
 // must end the session.

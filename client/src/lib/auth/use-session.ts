@@ -1,13 +1,19 @@
 import { useCallback, useSyncExternalStore } from 'react';
 import type { SessionUser } from '@lockstep/shared';
 import { queryClient } from '../query-client';
-import { endSession, getSession, startSession, subscribeSession, type Session } from './session-store';
+import { endSession, getSession, startSession, subscribeSession, type Session, type SessionEndReason } from './session-store';
 
 export interface SessionState {
   session: Session | null;
   user: SessionUser | null;
   signIn: (session: Session) => void;
   signOut: () => void;
+}
+
+/** Ends the session and forgets everything cached for this person. */
+export function signOutFor(reason: SessionEndReason): void {
+  endSession(reason);
+  queryClient.clear();
 }
 
 /**
@@ -23,10 +29,7 @@ export function useSession(): SessionState {
     startSession(next);
   }, []);
 
-  const signOut = useCallback(() => {
-    endSession('signed-out');
-    queryClient.clear();
-  }, []);
+  const signOut = useCallback(() => signOutFor('signed-out'), []);
 
   return { session, user: session?.user ?? null, signIn, signOut };
 }

@@ -7,7 +7,7 @@ export class AuditQueryDto implements AuditQuery {
   @IsOptional()
   entityType?: AuditEntityType;
 
-  @Length(1, 40, { message: 'entityId is 1 to 40 characters' })
+  @Length(1, 64, { message: 'entityId is 1 to 64 characters' })
   @IsOptional()
   entityId?: string;
 

@@ -30,7 +30,7 @@ export class AuditEvent {
   @Column('varchar', { length: 30 })
   entityType!: AuditEntityType;
 
-  @Column('varchar', { length: 40 })
+  @Column('varchar', { length: 64 })
   entityId!: string;
 
   /** Canonical JSON (RFC 8785) of what changed. */

@@ -8,6 +8,7 @@ import {
 } from '@nestjs/common';
 import type { Response } from 'express';
 import type { ApiError, FieldError } from '@lockstep/shared';
+import { TooManyAttemptsException } from '../throttling/too-many-attempts.exception.js';
 
 /**
  * Every error answer has one shape, `{statusCode, message, errors?}`. Anything that is not an
@@ -24,10 +25,16 @@ export class AllExceptionsFilter implements ExceptionFilter {
     if (body.statusCode >= 500) {
       this.logger.error(exception instanceof Error ? (exception.stack ?? exception.message) : String(exception));
     }
+    if (exception instanceof TooManyAttemptsException) response.setHeader('Retry-After', String(exception.retryAfterSeconds));
     response.status(body.statusCode).json(body);
   }
 
   private toApiError(exception: unknown): ApiError {
+    // Nest wraps the body parser's errors (bad JSON, too large) in an HttpException whose message
+    // is the parser's own wording; say it plainly instead.
+    if (exception instanceof HttpException && isBodyParserError(exception.cause)) {
+      return { statusCode: exception.getStatus(), message: describeClientError(exception.cause) };
+    }
     if (exception instanceof HttpException) {
       const statusCode = exception.getStatus();
       const raw = exception.getResponse();
@@ -44,18 +51,24 @@ export class AllExceptionsFilter implements ExceptionFilter {
     }
     const status = (exception as { status?: unknown; type?: unknown })?.status;
     if (typeof status === 'number' && status >= 400 && status < 500) {
-      return { statusCode: status, message: describeClientError(exception as { type?: unknown }) };
+      return { statusCode: status, message: describeClientError(exception as { type?: unknown; limit?: unknown }) };
     }
     return { statusCode: HttpStatus.INTERNAL_SERVER_ERROR, message: 'Something went wrong on the server. Please try again.' };
   }
 }
 
-function describeClientError(error: { type?: unknown }): string {
+function isBodyParserError(error: unknown): error is { type: string; limit?: unknown } {
+  return error instanceof Error && typeof (error as { type?: unknown }).type === 'string';
+}
+
+function describeClientError(error: { type?: unknown; limit?: unknown }): string {
   switch (error.type) {
     case 'entity.parse.failed':
       return 'The request body is not valid JSON';
     case 'entity.too.large':
-      return 'The request body is too large';
+      return typeof error.limit === 'number'
+        ? `The request body is too large: the limit is ${Math.round(error.limit / 1024)} kB`
+        : 'The request body is too large';
     default:
       return 'The request could not be read';
   }

@@ -6,7 +6,7 @@ export class AuditTrail1764710000000 implements MigrationInterface {
 
   async up(queryRunner: QueryRunner): Promise<void> {
     await queryRunner.query(
-      `CREATE TABLE "audit_event" ("id" integer PRIMARY KEY NOT NULL, "at" varchar(30) NOT NULL, "userId" integer, "actorName" varchar(120), "action" varchar(60) NOT NULL, "entityType" varchar(30) NOT NULL, "entityId" varchar(40) NOT NULL, "summary" text NOT NULL, "prevHash" varchar(64) NOT NULL, "hash" varchar(64) NOT NULL)`,
+      `CREATE TABLE "audit_event" ("id" integer PRIMARY KEY NOT NULL, "at" varchar(30) NOT NULL, "userId" integer, "actorName" varchar(120), "action" varchar(60) NOT NULL, "entityType" varchar(30) NOT NULL, "entityId" varchar(64) NOT NULL, "summary" text NOT NULL, "prevHash" varchar(64) NOT NULL, "hash" varchar(64) NOT NULL)`,
     );
     await queryRunner.query(`CREATE INDEX "IDX_06d570d7d1b40fbc994b5955be" ON "audit_event" ("at")`);
     await queryRunner.query(`CREATE INDEX "IDX_33c3131edaf1292ed22c59cd88" ON "audit_event" ("userId")`);

@@ -19,6 +19,8 @@ export interface OrderDetailScreenProps {
   /** The patient's weight, for amounts per kg; null while unknown. */
   weightKg: number | null;
   patientBanner: ReactNode;
+  /** Everything that happened to the order, from the audit feature. */
+  story?: ReactNode;
 }
 
 /** Releases are for verified or active orders (the server says the same). */
@@ -37,7 +39,7 @@ export function OrderLoading() {
 }
 
 /** One order for any clinical role, with the actions the signed-in role may take on it. */
-export function OrderDetailScreen({ orderId, weightKg, patientBanner }: OrderDetailScreenProps) {
+export function OrderDetailScreen({ orderId, weightKg, patientBanner, story }: OrderDetailScreenProps) {
   const user = useCurrentUser();
   const orderQuery = useOrder(orderId);
   const previousQuery = useOrder(orderQuery.data?.supersedesId ?? null);
@@ -85,7 +87,7 @@ export function OrderDetailScreen({ orderId, weightKg, patientBanner }: OrderDet
     <Stack gap="md">
       <OrderHeader order={order} title={`PCA order ${order.id}`} actions={actions.length > 0 ? actions : undefined} />
       {patientBanner}
-      <OrderReview order={order} previous={previousQuery.data ?? null} weightKg={weightKg} canPrint={pharmacist} releaseAction={releaseAction} />
+      <OrderReview order={order} previous={previousQuery.data ?? null} weightKg={weightKg} canPrint={pharmacist} releaseAction={releaseAction} story={story} />
       {modal === 'cancel' ? <CancelOrderModal order={order} onClose={() => setModal(null)} /> : null}
       {modal === 'release' ? <ReleaseModal order={order} onClose={() => setModal(null)} /> : null}
     </Stack>

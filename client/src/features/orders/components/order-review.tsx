@@ -17,6 +17,11 @@ export interface OrderReviewProps {
   canPrint: boolean;
   /** A "Release syringe" button beside the releases, for pharmacy. */
   releaseAction?: ReactNode;
+  /**
+   * The order's whole story (from the audit trail), shown in place of the status history: it
+   * holds every status change and more, so the page never shows two histories.
+   */
+  story?: ReactNode;
 }
 
 function Section({ title, children, aside }: { title: string; children: ReactNode; aside?: ReactNode }) {
@@ -37,7 +42,7 @@ function Section({ title, children, aside }: { title: string; children: ReactNod
 }
 
 /** An order read in full: against its limit rule, what it means, what was found, its history. */
-export function OrderReview({ order, previous, weightKg, canPrint, releaseAction }: OrderReviewProps) {
+export function OrderReview({ order, previous, weightKg, canPrint, releaseAction, story }: OrderReviewProps) {
   const ruleText = order.rule
     ? `Limits of ${ruleLabel(order.rule)}, from the ward's library when the order was signed.`
     : 'No limit rule: the ward library had none for this drug and concentration.';
@@ -71,9 +76,13 @@ export function OrderReview({ order, previous, weightKg, canPrint, releaseAction
       <Section title="Syringe releases" aside={releaseAction}>
         <ReleasesTable releases={order.releases} canPrint={canPrint} />
       </Section>
-      <Section title="Status history">
-        <OrderHistory events={order.events} />
-      </Section>
+      {story ? (
+        <Section title="Order story">{story}</Section>
+      ) : (
+        <Section title="Status history">
+          <OrderHistory events={order.events} />
+        </Section>
+      )}
     </Stack>
   );
 }

@@ -1,0 +1,30 @@
+import { Controller, Delete, Get, HttpCode, Param } from '@nestjs/common';
+import type { Lockout } from '../common/throttling/password-attempts.service.js';
+import type { AuthUser } from './auth-user.js';
+import { CurrentUser } from './decorators/current-user.decorator.js';
+import { Roles } from './decorators/roles.decorator.js';
+import { LockoutsService } from './lockouts.service.js';
+
+/** Usernames and addresses locked after wrong passwords, and the admin's unlock. */
+@Controller('auth/lockouts')
+@Roles('admin')
+export class LockoutsController {
+  constructor(private readonly lockouts: LockoutsService) {}
+
+  @Get()
+  list(): Lockout[] {
+    return this.lockouts.list();
+  }
+
+  @Delete('usernames/:username')
+  @HttpCode(204)
+  unlockUsername(@Param('username') username: string, @CurrentUser() admin: AuthUser): Promise<void> {
+    return this.lockouts.unlock('username', username, admin);
+  }
+
+  @Delete('addresses/:address')
+  @HttpCode(204)
+  unlockAddress(@Param('address') address: string, @CurrentUser() admin: AuthUser): Promise<void> {
+    return this.lockouts.unlock('address', address, admin);
+  }
+}
