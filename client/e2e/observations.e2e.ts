@@ -213,6 +213,10 @@ describe('observations: flags, usage charts and acknowledgement', () => {
     const token = await login(server, 'sam.rivera');
     const wardId = Number(new URL(page.url()).searchParams.get('ward'));
     expect((await api<{ spo2Threshold: number }>(server, token, 'GET', `/wards/${wardId}/policy`)).spo2Threshold).toBe(92);
+    // The change is audited, and the screen shows who changed what beneath the form.
+    const recent = page.getByRole('region', { name: 'Recent changes' });
+    await recent.getByText('90 → 92').waitFor();
+    expect(await recent.innerText()).toContain('Sam Rivera');
 
     await spo2.fill('20');
     await page.getByText('At least 70 %').waitFor();

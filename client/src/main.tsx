@@ -9,8 +9,12 @@ import '@mantine/dropzone/styles.css';
 import '@mantine/charts/styles.css';
 import './app/global.css';
 import { StrictMode } from 'react';
+import { z } from 'zod';
 import { createRoot } from 'react-dom/client';
 import { App } from './app/app';
+
+// zod otherwise probes for eval-based speed-ups, which the Content-Security-Policy rightly refuses.
+z.config({ jitless: true });
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');

@@ -24,6 +24,15 @@ describe('audit trail', () => {
   });
   afterAll(() => t.close());
 
+  it('starts from the demo data’s own story: library approvals and the demo orders, oldest first', async () => {
+    const { events } = await search('?limit=200');
+    const oldestFirst = [...events].reverse();
+    expect(oldestFirst.slice(0, 4).map((event) => event.action)).toEqual(Array(4).fill('library-version.approve'));
+    expect(oldestFirst.map((event) => event.at)).toEqual([...oldestFirst.map((event) => event.at)].sort());
+    const verifiedDemo = (await request(t.http).get('/api/orders/2/audit').set(bearer(nurse)).expect(200)).body as AuditEvent[];
+    expect(verifiedDemo.map((event) => event.action)).toEqual(['order.create', 'order.verify', 'order.release']);
+  });
+
   it('records a ward policy change with who, when and each field’s old and new value; a no-op writes nothing', async () => {
     await request(t.http).patch('/api/wards/1/policy').set(bearer(admin)).send({ respiratoryRateThreshold: 10, syringeLowThresholdHours: 2 }).expect(200);
     const { events } = await search('?entityType=ward&entityId=1');
@@ -113,7 +122,7 @@ describe('audit trail', () => {
   it('lets pharmacists read order and library events only; other roles none; only admins verify', async () => {
     const mine = await search('', pharmacist);
     expect(mine.total).toBeGreaterThan(0);
-    expect(new Set(mine.events.map((event) => event.entityType))).toEqual(new Set(['order']));
+    expect(new Set(mine.events.map((event) => event.entityType))).toEqual(new Set(['order', 'library-version']));
     await request(t.http).get('/api/audit?entityType=user').set(bearer(pharmacist)).expect(403);
     await request(t.http).get('/api/audit?entityType=order').set(bearer(pharmacist)).expect(200);
     await request(t.http).get('/api/audit').set(bearer(nurse)).expect(403);
@@ -125,17 +134,18 @@ describe('audit trail', () => {
     const intact = (await request(t.http).get('/api/audit/verify').set(bearer(admin)).expect(200)).body;
     expect(intact).toEqual({ ok: true, checked: await auditCount(), firstBadId: null });
 
+    const policyChange = (await search('?action=ward.policy-update')).events[0];
     const db = new Database(t.databasePath);
     try {
-      expect(() => db.prepare('UPDATE audit_event SET summary = ? WHERE id = 2').run('{}')).toThrow(/append-only/);
-      expect(() => db.prepare('DELETE FROM audit_event WHERE id = 2').run()).toThrow(/append-only/);
+      expect(() => db.prepare('UPDATE audit_event SET summary = ? WHERE id = ?').run('{}', policyChange.id)).toThrow(/append-only/);
+      expect(() => db.prepare('DELETE FROM audit_event WHERE id = ?').run(policyChange.id)).toThrow(/append-only/);
       // Someone with the database file drops the guard and edits history.
       db.exec('DROP TRIGGER audit_event_no_update');
-      db.prepare(`UPDATE audit_event SET summary = json_set(summary, '$.respiratoryRateThreshold.to', 20) WHERE id = 1`).run();
+      db.prepare(`UPDATE audit_event SET summary = json_set(summary, '$.respiratoryRateThreshold.to', 20) WHERE id = ?`).run(policyChange.id);
     } finally {
       db.close();
     }
     const broken = (await request(t.http).get('/api/audit/verify').set(bearer(admin)).expect(200)).body;
-    expect(broken).toEqual({ ok: false, checked: 0, firstBadId: 1 });
+    expect(broken).toEqual({ ok: false, checked: policyChange.id - 1, firstBadId: policyChange.id });
   });
 });

@@ -10,6 +10,8 @@ export type AuditEntry = {
   entityId: number | string;
   /** What changed: `{ field: { from, to } }` for edits, key values for new records. Never secrets. */
   summary: Record<string, unknown>;
+  /** When it happened; now unless given. Only the demo seed tells an earlier story. */
+  at?: Date;
 };
 
 /**
@@ -21,7 +23,7 @@ export async function recordAudit(manager: EntityManager, actor: Pick<AuthUser, 
   const tail = await manager.findOne(AuditEvent, { where: {}, order: { id: 'DESC' }, select: { id: true, hash: true } });
   const content = {
     id: (tail?.id ?? 0) + 1,
-    at: new Date().toISOString(),
+    at: (entry.at ?? new Date()).toISOString(),
     userId: actor?.id ?? null,
     actorName: actor?.displayName ?? null,
     action: entry.action,

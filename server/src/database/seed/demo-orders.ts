@@ -2,6 +2,7 @@ import type { EntityManager } from 'typeorm';
 import { ageInYears, checkOrder, type OrderStatus, type Regimen } from '@lockstep/shared';
 import { toLimitRuleResponse } from '../../library/dto/library-response.js';
 import { LimitRule } from '../../library/entities/limit-rule.entity.js';
+import type { DemoAuditEntry } from './demo-audit.js';
 import { OrderEvent } from '../../orders/entities/order-event.entity.js';
 import { PcaOrder } from '../../orders/entities/pca-order.entity.js';
 import { Patient } from '../../patients/entities/patient.entity.js';
@@ -49,7 +50,9 @@ const DEMO_ORDERS: DemoOrder[] = [
   },
 ];
 
-export async function seedDemoOrders(manager: EntityManager, users: User[]): Promise<void> {
+/** Seeds the demo orders; answers the audit entries of their story, for the caller to record in time order. */
+export async function seedDemoOrders(manager: EntityManager, users: User[]): Promise<DemoAuditEntry[]> {
+  const story: DemoAuditEntry[] = [];
   const person = (username: string) => users.find((user) => user.username === username)!;
   const prescriber = person('amara.osei');
   const pharmacist = person('lin.park');
@@ -95,10 +98,29 @@ export async function seedDemoOrders(manager: EntityManager, users: User[]): Pro
       }),
     );
     await manager.insert(OrderEvent, { orderId: order.id, fromStatus: null, toStatus: 'awaiting_verification', userId: prescriber.id, at: signedAt, reason: null });
+    const { concentrationPerMl, doseUnit, demandDose, lockoutMinutes, basalRatePerHour, fourHourLimit } = demo.regimen;
+    story.push({
+      actor: prescriber,
+      action: 'order.create',
+      entityType: 'order',
+      entityId: order.id,
+      at: signedAt,
+      summary: { patientId: patient.id, drugId: rule.drugId, concentrationPerMl, doseUnit, demandDose, lockoutMinutes, basalRatePerHour, fourHourLimit, reviewDate: order.reviewDate },
+    });
     if (demo.status !== 'awaiting_verification') {
       await manager.insert(OrderEvent, { orderId: order.id, fromStatus: 'awaiting_verification', toStatus: demo.status, userId: pharmacist.id, at: decidedAt, reason: demo.reason ?? null });
+      story.push({
+        actor: pharmacist,
+        action: demo.status === 'verified' ? 'order.verify' : 'order.return',
+        entityType: 'order',
+        entityId: order.id,
+        at: decidedAt,
+        summary: { status: { from: 'awaiting_verification', to: demo.status }, ...(demo.reason ? { reason: demo.reason } : { signed: true }) },
+      });
     }
     if (demo.releaseCode) {
+      const releasedAt = new Date(decidedAt.getTime() + 15 * 60_000);
+      story.push({ actor: pharmacist, action: 'order.release', entityType: 'order', entityId: order.id, at: releasedAt, summary: { releaseCode: demo.releaseCode, concentrationPerMl, volumeMl: 50, batch: 'DEMO-0412' } });
       await manager.insert(SyringeRelease, {
         orderId: order.id,
         releaseCode: demo.releaseCode,
@@ -111,8 +133,9 @@ export async function seedDemoOrders(manager: EntityManager, users: User[]): Pro
         checkedBy: 'Tomas Ortiz',
         overrideReason: null,
         releasedById: pharmacist.id,
-        releasedAt: new Date(decidedAt.getTime() + 15 * 60_000),
+        releasedAt,
       });
     }
   }
+  return story;
 }

@@ -8,6 +8,7 @@ import { hashPassword } from '../../users/passwords.js';
 import { Ward } from '../../wards/entities/ward.entity.js';
 import { DEMO_DRUGS, DEMO_PATIENTS, DEMO_WARDS } from './demo-data.js';
 import { DEMO_LIBRARIES, DEMO_PENDING_CHANGE } from './demo-library.js';
+import { type DemoAuditEntry, recordDemoStory } from './demo-audit.js';
 import { seedDemoOrders } from './demo-orders.js';
 import { DEMO_PASSWORD, DEMO_STAFF } from './demo-staff.js';
 
@@ -43,7 +44,7 @@ async function seedDemoData(manager: EntityManager): Promise<void> {
     ),
   );
 
-  await seedDemoLibraries(manager, wards, drugs, users);
+  const libraryStory = await seedDemoLibraries(manager, wards, drugs, users);
 
   await manager.save(
     Patient,
@@ -52,10 +53,12 @@ async function seedDemoData(manager: EntityManager): Promise<void> {
     ),
   );
 
-  await seedDemoOrders(manager, users);
+  const orderStory = await seedDemoOrders(manager, users);
+  await recordDemoStory(manager, [...libraryStory, ...orderStory]);
 }
 
-async function seedDemoLibraries(manager: EntityManager, wards: Ward[], drugs: Drug[], users: User[]): Promise<void> {
+async function seedDemoLibraries(manager: EntityManager, wards: Ward[], drugs: Drug[], users: User[]): Promise<DemoAuditEntry[]> {
+  const story: DemoAuditEntry[] = [];
   const wardId = (code: string) => wards.find((ward) => ward.code === code)!.id;
   const drugId = (name: string) => drugs.find((drug) => drug.genericName === name)!.id;
   const author = users.find((user) => user.username === 'lin.park')!;
@@ -80,6 +83,14 @@ async function seedDemoLibraries(manager: EntityManager, wards: Ward[], drugs: D
       LimitRule,
       library.rules.map(({ drug, ...rule }) => ({ ...rule, versionId: version.id, drugId: drugId(drug) })),
     );
+    story.push({
+      actor: approver,
+      action: 'library-version.approve',
+      entityType: 'library-version',
+      entityId: version.id,
+      at: approvedAt,
+      summary: { wardId: version.wardId, number: 1, status: { from: 'pending_approval', to: 'active' }, signed: true },
+    });
   }
 
   const pending = DEMO_PENDING_CHANGE;
@@ -104,4 +115,13 @@ async function seedDemoLibraries(manager: EntityManager, wards: Ward[], drugs: D
       drugId: drugId(drug),
     })),
   );
+  story.push({
+    actor: author,
+    action: 'library-version.submit',
+    entityType: 'library-version',
+    entityId: draft.id,
+    at: draft.submittedAt!,
+    summary: { status: { from: 'draft', to: 'pending_approval' }, note: pending.note },
+  });
+  return story;
 }

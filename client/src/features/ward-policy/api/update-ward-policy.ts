@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
+import { auditKeys } from '@/features/audit/api/audit-keys';
 import { wardPolicyKeys } from './ward-policy-keys';
 import { wardPolicySettingsSchema, type WardPolicySettings, type WardPolicyUpdate } from './ward-policy-schemas';
 
@@ -17,6 +18,10 @@ export function useUpdateWardPolicy() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: updateWardPolicy,
-    onSuccess: (policy, { wardId }) => queryClient.setQueryData(wardPolicyKeys.detail(wardId), policy),
+    onSuccess: (policy, { wardId }) => {
+      queryClient.setQueryData(wardPolicyKeys.detail(wardId), policy);
+      // The change is now in the audit trail ("Recent changes" below the form).
+      void queryClient.invalidateQueries({ queryKey: auditKeys.all });
+    },
   });
 }

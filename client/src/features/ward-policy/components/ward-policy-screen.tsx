@@ -3,6 +3,7 @@ import { IconAdjustments } from '@tabler/icons-react';
 import { LOCAL_POLICY_CAUTION, type Ward } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { useWardPolicy } from '../api/get-ward-policy';
+import { WardPolicyChanges } from './ward-policy-changes';
 import { WardPolicyForm } from './ward-policy-form';
 
 export interface WardPolicyScreenProps {
@@ -24,7 +25,14 @@ export function WardPolicyScreen({ wards, wardsLoading, wardId, onWardChange }: 
   else if (policy.isError) body = <QueryErrorAlert title="The policy could not be loaded" error={policy.error} onRetry={() => void policy.refetch()} />;
   else if (!policy.data) body = <Skeleton height={480} aria-label="Loading the policy" />;
   // Keyed by ward so that moving to another ward starts from that ward's saved values.
-  else body = <WardPolicyForm key={ward.id} wardId={ward.id} wardName={ward.name} policy={policy.data} />;
+  else {
+    body = (
+      <>
+        <WardPolicyForm key={ward.id} wardId={ward.id} wardName={ward.name} policy={policy.data} />
+        <WardPolicyChanges wardId={ward.id} />
+      </>
+    );
+  }
 
   return (
     <Stack gap="lg" maw={760}>

@@ -1,0 +1,50 @@
+import { Anchor, Card, Group, Skeleton, Stack, Text, Title } from '@mantine/core';
+import { Link } from 'react-router-dom';
+import { useAuditEvents } from '@/features/audit/api/get-audit-events';
+import { AuditSummaryList } from '@/features/audit/components/audit-summary-list';
+import { actorText } from '@/features/audit/utils/audit-actor';
+import { QueryErrorAlert } from '@/components/errors/query-error-alert';
+import { paths } from '@/config/paths';
+import { formatDateTime } from '@/utils/format-date';
+
+const SHOWN = 5;
+
+/** The last changes to this ward's policy, from the audit trail: who changed what, from and to. */
+export function WardPolicyChanges({ wardId }: { wardId: number }) {
+  const changes = useAuditEvents({ entityType: 'ward', entityId: String(wardId), action: 'ward.policy-update', limit: SHOWN });
+
+  let body;
+  if (changes.isError) body = <QueryErrorAlert title="The changes could not be loaded" error={changes.error} onRetry={() => void changes.refetch()} />;
+  else if (!changes.data) body = <Skeleton height={120} aria-label="Loading the changes" />;
+  else if (changes.data.events.length === 0) body = <Text c="dimmed">No changes since the ward was set up: every value is as shipped or as first loaded.</Text>;
+  else {
+    body = (
+      <Stack gap="sm">
+        {changes.data.events.map((event) => (
+          <Card key={event.id} withBorder padding="sm">
+            <Text size="sm" fw={500} mb={4}>
+              {actorText(event)} · <time dateTime={event.at}>{formatDateTime(event.at)}</time>
+            </Text>
+            <AuditSummaryList summary={event.summary} />
+          </Card>
+        ))}
+      </Stack>
+    );
+  }
+
+  return (
+    <Stack gap="xs" component="section" aria-labelledby="ward-policy-changes">
+      <Group justify="space-between" align="baseline">
+        <Title order={2} size="h3" id="ward-policy-changes">
+          Recent changes
+        </Title>
+        {changes.data && changes.data.total > SHOWN && (
+          <Anchor component={Link} to={paths.adminAudit.getHref({ entityType: 'ward', entityId: String(wardId) })} size="sm">
+            All {changes.data.total} changes
+          </Anchor>
+        )}
+      </Group>
+      {body}
+    </Stack>
+  );
+}
