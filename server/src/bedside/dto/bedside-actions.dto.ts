@@ -1,6 +1,7 @@
 import { Type } from 'class-transformer';
 import { IsDefined, IsNumber, IsObject, IsOptional, IsPositive, IsString, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
 import { MIN_REASON_LENGTH } from '@lockstep/shared';
+import { Trim } from '../../common/validation/trim.decorator.js';
 import { ColleagueDto } from './bedside-check.dto.js';
 
 const finite = { allowNaN: false, allowInfinity: false };
@@ -19,12 +20,14 @@ export class BolusDto extends WitnessedDto {
   @IsDefined({ message: 'Enter the bolus amount' })
   amount: number;
 
+  @Trim()
   @MaxLength(1000, { message: 'At most 1,000 characters' })
   @MinLength(MIN_REASON_LENGTH, { message: `Give a reason of at least ${MIN_REASON_LENGTH} characters` })
   @IsString({ message: 'Give the reason for the bolus' })
   @IsDefined({ message: 'Give the reason for the bolus (e.g. breakthrough pain)' })
   reason: string;
 
+  @Trim()
   @MaxLength(1000, { message: 'At most 1,000 characters' })
   @MinLength(MIN_REASON_LENGTH, { message: `Give a reason of at least ${MIN_REASON_LENGTH} characters` })
   @IsString({ message: 'overrideReason must be text' })
@@ -53,6 +56,7 @@ export class SyringeChangeDto extends WitnessedDto {
 }
 
 export class DiscontinueDto extends WitnessedDto {
+  @Trim()
   @MaxLength(1000, { message: 'At most 1,000 characters' })
   @MinLength(MIN_REASON_LENGTH, { message: `Give a reason of at least ${MIN_REASON_LENGTH} characters` })
   @IsString({ message: 'Give the reason (the prescriber’s decision)' })

@@ -1,6 +1,8 @@
 import { IsDefined, IsString, MaxLength, MinLength } from 'class-validator';
+import { Trim } from '../../common/validation/trim.decorator.js';
 
 export class AcknowledgeFlagDto {
+  @Trim()
   @MaxLength(1000, { message: 'The note is at most 1,000 characters' })
   @MinLength(5, { message: 'Say what was done (at least 5 characters)' })
   @IsString({ message: 'The note must be text' })

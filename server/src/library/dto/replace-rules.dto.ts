@@ -1,10 +1,12 @@
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, IsArray, IsDefined, ValidateNested } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsDefined, IsObject, ValidateNested } from 'class-validator';
 import { LimitRuleInputDto } from './limit-rule-input.dto.js';
 
 export class ReplaceRulesDto {
   @ValidateNested({ each: true })
   @Type(() => LimitRuleInputDto)
+  // ValidateNested alone walks into a nested list ([[]]) and finds nothing wrong with it.
+  @IsObject({ each: true, message: 'Each rule must be an object' })
   @ArrayMaxSize(500, { message: 'A library version holds at most 500 rules' })
   @IsArray({ message: 'rules must be a list' })
   @IsDefined({ message: 'rules is required' })

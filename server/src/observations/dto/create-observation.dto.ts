@@ -1,10 +1,12 @@
-import { IsDefined, IsIn, IsInt, IsISO8601, IsNumber, IsOptional, IsString, Max, MaxLength, Min } from 'class-validator';
+import { IsDefined, IsIn, IsInt, IsISO8601, IsNumber, IsOptional, IsRFC3339, IsString, Max, MaxLength, Min } from 'class-validator';
 import { SEDATION_LEVELS, type SedationLevel } from '@lockstep/shared';
 
 const finite = { allowNaN: false, allowInfinity: false };
 
 export class CreateObservationDto {
   /** Defaults to now; never in the future, never before the PCA started. */
+  // ISO 8601 alone lets through week dates (2030-W01-1) and compact forms that Date cannot read.
+  @IsRFC3339({ message: 'Enter the time of the observation' })
   @IsISO8601({ strict: true }, { message: 'Enter the time of the observation' })
   @IsOptional()
   at?: string;

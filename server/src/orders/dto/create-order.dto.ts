@@ -1,7 +1,8 @@
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, IsArray, IsDefined, IsISO8601, IsObject, IsString, MaxLength, MinLength, ValidateNested } from 'class-validator';
+import { ArrayMaxSize, IsArray, IsDefined, IsISO8601, IsObject, IsString, Matches, MaxLength, MinLength, ValidateNested } from 'class-validator';
 import { MIN_REASON_LENGTH, type CreateOrderRequest, type Override } from '@lockstep/shared';
 import { SignatureDto } from '../../common/dto/signature.dto.js';
+import { Trim } from '../../common/validation/trim.decorator.js';
 import { OrderFieldsDto } from './order-fields.dto.js';
 
 export class OverrideDto implements Override {
@@ -10,6 +11,7 @@ export class OverrideDto implements Override {
   @IsDefined({ message: 'field is required' })
   field: string;
 
+  @Trim()
   @MaxLength(1000, { message: 'The reason is at most 1,000 characters' })
   @MinLength(MIN_REASON_LENGTH, { message: `Give a reason of at least ${MIN_REASON_LENGTH} characters` })
   @IsString({ message: 'reason must be text' })
@@ -18,12 +20,16 @@ export class OverrideDto implements Override {
 }
 
 export class CreateOrderDto extends OrderFieldsDto implements CreateOrderRequest {
+  // ISO 8601 alone also takes 2030, 2030-W01-1 or a date and time.
+  @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'Enter the review date (yyyy-mm-dd)' })
   @IsISO8601({ strict: true }, { message: 'Enter the review date (yyyy-mm-dd)' })
   @IsDefined({ message: 'Enter the review date' })
   reviewDate: string;
 
   @ValidateNested({ each: true })
   @Type(() => OverrideDto)
+  // ValidateNested alone walks into a nested list ([[]]) and finds nothing wrong with it.
+  @IsObject({ each: true, message: 'Each override is {field, reason}' })
   @ArrayMaxSize(20, { message: 'At most 20 overrides' })
   @IsArray({ message: 'overrides must be a list of {field, reason}' })
   @IsDefined({ message: 'overrides is required (an empty list when there are no soft findings)' })

@@ -1,5 +1,6 @@
-import { IsDefined, IsISO8601, IsNumber, IsOptional, IsPositive, IsString, Max, MaxLength, MinLength } from 'class-validator';
+import { IsDefined, IsISO8601, IsNumber, IsOptional, IsPositive, IsRFC3339, IsString, Max, MaxLength, MinLength } from 'class-validator';
 import { MIN_REASON_LENGTH, type CreateReleaseRequest } from '@lockstep/shared';
+import { Trim } from '../../common/validation/trim.decorator.js';
 
 const finite = { allowNaN: false, allowInfinity: false };
 
@@ -15,28 +16,34 @@ export class CreateReleaseDto implements CreateReleaseRequest {
   @IsDefined({ message: 'Enter the syringe volume in mL' })
   volumeMl: number;
 
+  @Trim()
   @MaxLength(40, { message: 'Batch is at most 40 characters' })
   @MinLength(1, { message: 'Enter the batch' })
   @IsString({ message: 'Batch must be text' })
   @IsDefined({ message: 'Enter the batch' })
   batch: string;
 
+  // ISO 8601 alone lets through week dates (2030-W01-1) and compact forms that Date cannot read.
+  @IsRFC3339({ message: 'Enter the expiry as a date and time' })
   @IsISO8601({ strict: true }, { message: 'Enter the expiry as a date and time' })
   @IsDefined({ message: 'Enter the expiry' })
   expiresAt: string;
 
+  @Trim()
   @MaxLength(120, { message: 'At most 120 characters' })
   @MinLength(1, { message: 'Enter who prepared the syringe' })
   @IsString({ message: 'preparedBy must be text' })
   @IsDefined({ message: 'Enter who prepared the syringe' })
   preparedBy: string;
 
+  @Trim()
   @MaxLength(120, { message: 'At most 120 characters' })
   @MinLength(1, { message: 'Enter who checked the syringe' })
   @IsString({ message: 'checkedBy must be text' })
   @IsDefined({ message: 'Enter who checked the syringe' })
   checkedBy: string;
 
+  @Trim()
   @MaxLength(1000, { message: 'The reason is at most 1,000 characters' })
   @MinLength(MIN_REASON_LENGTH, { message: `Give a reason of at least ${MIN_REASON_LENGTH} characters` })
   @IsString({ message: 'overrideReason must be text' })

@@ -1,5 +1,6 @@
 import { ArrayMaxSize, IsArray, IsDefined, IsIn, IsInt, IsPositive, IsString, Matches, MaxLength, MinLength } from 'class-validator';
 import { PASSWORD_MIN_LENGTH, ROLES, type CreateUserRequest, type Role } from '@lockstep/shared';
+import { Trim } from '../../common/validation/trim.decorator.js';
 
 // The decorator nearest the property runs first (see login.dto.ts).
 export class CreateUserDto implements CreateUserRequest {
@@ -12,6 +13,7 @@ export class CreateUserDto implements CreateUserRequest {
   @IsDefined({ message: 'username is required' })
   username: string;
 
+  @Trim()
   @MaxLength(120, { message: 'Display name is at most 120 characters' })
   @MinLength(1, { message: 'Enter a display name' })
   @IsString({ message: 'displayName must be text' })

@@ -1,0 +1,103 @@
+import 'reflect-metadata';
+import request from 'supertest';
+import { afterAll, describe, expect, it, vi } from 'vitest';
+import { LoginDto } from '../src/auth/dto/login.dto.js';
+import { SignedRequestDto } from '../src/common/dto/signature.dto.js';
+import { CreateDraftDto } from '../src/library/dto/create-draft.dto.js';
+import { ReplaceRulesDto } from '../src/library/dto/replace-rules.dto.js';
+import { SubmitVersionDto } from '../src/library/dto/submit-version.dto.js';
+import { CreateUserDto } from '../src/users/dto/create-user.dto.js';
+import { UpdateUserDto } from '../src/users/dto/update-user.dto.js';
+import { UpdateWardPolicyDto } from '../src/wards/dto/update-ward-policy.dto.js';
+import { appRoutes } from './support/app-routes.js';
+import { type BadInputApp, badInputSuite, type BadInputRoute } from './support/bad-input-harness.js';
+import { BAD_INPUT_COVERAGE, CREATE_DRAFT, CREATE_USER, LOGIN, REPLACE_RULES, SIGNED, SUBMIT_VERSION, UPDATE_USER, WARD_POLICY } from './support/bad-input-specs.js';
+import { DEMO_PASSWORD } from './support/test-app.js';
+
+// Sign-in, signatures and new passwords are bodies with a password, and the app allows only so
+// many of those a minute from one address; this file is about validation, so the limit is lifted.
+const previousPasswordLimit = vi.hoisted(() => {
+  const previous = process.env.PASSWORD_REQUESTS_PER_MINUTE;
+  process.env.PASSWORD_REQUESTS_PER_MINUTE = '100000';
+  return previous;
+});
+afterAll(() => {
+  if (previousPasswordLimit === undefined) delete process.env.PASSWORD_REQUESTS_PER_MINUTE;
+  else process.env.PASSWORD_REQUESTS_PER_MINUTE = previousPasswordLimit;
+});
+
+// Demo data: user 4 is the nurse kai.mendes; library version 5 is Harbour's draft awaiting
+// approval; Cedar (2) has no open version, so a new draft for it is valid.
+const KAI = 4;
+const HARBOUR = 1;
+const CEDAR = 2;
+const SUMMIT = 4;
+const PENDING_VERSION = 5;
+const state = { draftId: 0 };
+
+async function setUp({ t, tokens }: BadInputApp): Promise<void> {
+  const draft = await request(t.http).post('/api/library/versions').set({ Authorization: `Bearer ${tokens.pharmacist}` }).send({ wardId: SUMMIT, note: 'Bad-input target' }).expect(201);
+  state.draftId = draft.body.id;
+}
+
+const RULES = [
+  { drugId: 1, concentrationPerMl: 1, doseUnit: 'mg', perKg: false, limits: { demandDose: { hardMin: 0.2, softMin: 0.5, softMax: 2, hardMax: 3 }, lockoutMinutes: { hardMin: 5, softMax: 20 } } },
+  { drugId: 3, concentrationPerMl: 10, doseUnit: 'mcg', perKg: false, limits: { demandDose: { softMax: 20, hardMax: 30 } } },
+];
+const POLICY = {
+  observationIntervalFirst24hMinutes: 60,
+  observationIntervalMinutes: 120,
+  respiratoryRateThreshold: 8,
+  spo2Threshold: 92,
+  syringeLowThresholdHours: 2,
+  reconciliationToleranceMl: 0.5,
+  painNotControlledScore: 7,
+  painNotControlledRatio: 2,
+  pharmacyEmail: 'pharmacy.harbour@kestrelbay.example',
+  nurseInChargeEmail: '',
+};
+
+const ROUTES: BadInputRoute[] = [
+  { method: 'POST', path: '/api/auth/login', url: () => '/api/auth/login', role: 'anonymous', spec: LOGIN, dto: LoginDto, valid: () => ({ username: 'kai.mendes', password: DEMO_PASSWORD }) },
+  {
+    method: 'POST',
+    path: '/api/users',
+    url: () => '/api/users',
+    role: 'admin',
+    spec: CREATE_USER,
+    dto: CreateUserDto,
+    valid: () => ({ username: 'new.nurse', displayName: 'New Nurse', role: 'nurse', wardIds: [HARBOUR, CEDAR], password: 'a-long-enough-password' }),
+  },
+  {
+    method: 'PATCH',
+    path: '/api/users/:id',
+    url: () => `/api/users/${KAI}`,
+    role: 'admin',
+    spec: UPDATE_USER,
+    dto: UpdateUserDto,
+    valid: () => ({ displayName: 'Kai Mendes', role: 'nurse', wardIds: [HARBOUR, SUMMIT], active: true, password: 'a-new-long-password' }),
+  },
+  { method: 'PATCH', path: '/api/wards/:wardId/policy', url: () => `/api/wards/${HARBOUR}/policy`, role: 'admin', spec: WARD_POLICY, dto: UpdateWardPolicyDto, valid: () => POLICY },
+  { method: 'POST', path: '/api/library/versions', url: () => '/api/library/versions', role: 'pharmacist', spec: CREATE_DRAFT, dto: CreateDraftDto, valid: () => ({ wardId: CEDAR, note: 'Tighter demand limits' }) },
+  { method: 'PUT', path: '/api/library/versions/:id/rules', url: () => `/api/library/versions/${state.draftId}/rules`, role: 'pharmacist', spec: REPLACE_RULES, dto: ReplaceRulesDto, valid: () => ({ rules: RULES }) },
+  { method: 'POST', path: '/api/library/versions/:id/submit', url: () => `/api/library/versions/${state.draftId}/submit`, role: 'pharmacist', spec: SUBMIT_VERSION, dto: SubmitVersionDto, valid: () => ({ note: 'Ready for a second pharmacist' }) },
+  {
+    method: 'POST',
+    path: '/api/library/versions/:id/approve',
+    url: () => `/api/library/versions/${PENDING_VERSION}/approve`,
+    role: 'pharmacist',
+    spec: SIGNED,
+    dto: SignedRequestDto,
+    valid: () => ({ signature: { password: DEMO_PASSWORD } }),
+  },
+];
+
+describe('bad input: sign-in, users, ward policy and the dose-limit library', () => {
+  const suite = badInputSuite('bad-input-admin', ROUTES, setUp);
+
+  it('has bad-input tests (or no body) for every write route the app serves', () => {
+    const writes = appRoutes(suite.t.app).filter((key) => /^(POST|PUT|PATCH|DELETE) \/api\//.test(key));
+    expect(writes.filter((key) => !(key in BAD_INPUT_COVERAGE)), 'write routes missing from BAD_INPUT_COVERAGE').toEqual([]);
+    expect(Object.keys(BAD_INPUT_COVERAGE).filter((key) => !writes.includes(key)), 'BAD_INPUT_COVERAGE rows for routes that do not exist').toEqual([]);
+  });
+});

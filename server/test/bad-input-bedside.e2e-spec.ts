@@ -1,0 +1,123 @@
+import 'reflect-metadata';
+import request from 'supertest';
+import { afterAll, describe, vi } from 'vitest';
+import { BolusDto, DiscontinueDto, SyringeChangeDto } from '../src/bedside/dto/bedside-actions.dto.js';
+import { FirstCheckDto, SecondCheckDto } from '../src/bedside/dto/bedside-check.dto.js';
+import { AcknowledgeFlagDto } from '../src/flags/dto/acknowledge-flag.dto.js';
+import { CreateSignoffDto } from '../src/handover/dto/create-signoff.dto.js';
+import { CreateObservationDto } from '../src/observations/dto/create-observation.dto.js';
+import { ACKNOWLEDGE_FLAG, BOLUS, DISCONTINUE, FIRST_CHECK, OBSERVATION, SECOND_CHECK, SIGNOFF, SYRINGE_CHANGE } from './support/bad-input-specs.js';
+import { type BadInputApp, badInputSuite, type BadInputRoute } from './support/bad-input-harness.js';
+import { activeOrder, IDENTITY, RELEASE, ROSA, SETTINGS, verifiedOrderWithSyringe } from './support/pca.js';
+
+// Most bodies here carry a colleague's password, and the app allows only so many of those a
+// minute from one address; this file is about validation, so the limit is lifted for it alone.
+const previousPasswordLimit = vi.hoisted(() => {
+  const previous = process.env.PASSWORD_REQUESTS_PER_MINUTE;
+  process.env.PASSWORD_REQUESTS_PER_MINUTE = '100000';
+  return previous;
+});
+afterAll(() => {
+  if (previousPasswordLimit === undefined) delete process.env.PASSWORD_REQUESTS_PER_MINUTE;
+  else process.env.PASSWORD_REQUESTS_PER_MINUTE = previousPasswordLimit;
+});
+
+const HARBOUR = 1; // the ward of patient 1, whose orders support/pca.ts writes
+
+/** Entities in the state each route expects, made through the API in setup. */
+const state = { released: { id: 0, code: '' }, checkPending: { id: 0, checkId: 0 }, active: { id: 0, code: '' }, spareCode: '', flagId: 0 };
+
+async function setUp({ t, tokens }: BadInputApp): Promise<void> {
+  const pca = { prescriber: tokens.prescriber, pharmacist: tokens.pharmacist, nurse: tokens.nurse };
+  const nurse = { Authorization: `Bearer ${tokens.nurse}` };
+  state.released = await verifiedOrderWithSyringe(t.http, pca);
+  const pending = await verifiedOrderWithSyringe(t.http, pca);
+  const first = await request(t.http).post(`/api/orders/${pending.id}/bedside-checks`).set(nurse).send({ ...IDENTITY, releaseCode: pending.code, settings: SETTINGS }).expect(201);
+  state.checkPending = { id: pending.id, checkId: first.body.id };
+  state.active = await activeOrder(t.http, pca);
+  const spare = await request(t.http).post(`/api/orders/${state.active.id}/releases`).set({ Authorization: `Bearer ${tokens.pharmacist}` }).send(RELEASE).expect(201);
+  state.spareCode = spare.body.releaseCode;
+  const sedated = await request(t.http).post(`/api/orders/${state.active.id}/observations`).set(nurse).send({ ...OBSERVATION_BODY, sedationLevel: '3' }).expect(201);
+  state.flagId = sedated.body.flags[0].id;
+}
+
+const OBSERVATION_BODY = { painScore: 3, sedationLevel: '1', respiratoryRate: 14, spo2: 97, attempts: 4, delivered: 3, volumeInfusedMl: 3, syringeRemainingMl: 47, note: 'Comfortable, settled' };
+
+const ROUTES: BadInputRoute[] = [
+  {
+    method: 'POST',
+    path: '/api/orders/:orderId/bedside-checks',
+    url: () => `/api/orders/${state.released.id}/bedside-checks`,
+    role: 'nurse',
+    spec: FIRST_CHECK,
+    dto: FirstCheckDto,
+    valid: () => ({ ...IDENTITY, releaseCode: state.released.code, settings: SETTINGS }),
+  },
+  {
+    method: 'POST',
+    path: '/api/orders/:orderId/bedside-checks/:checkId/second',
+    url: () => `/api/orders/${state.checkPending.id}/bedside-checks/${state.checkPending.checkId}/second`,
+    role: 'nurse',
+    spec: SECOND_CHECK,
+    dto: SecondCheckDto,
+    valid: () => ({ ...ROSA, settings: SETTINGS }),
+  },
+  {
+    method: 'POST',
+    path: '/api/orders/:orderId/boluses',
+    url: () => `/api/orders/${state.active.id}/boluses`,
+    role: 'nurse',
+    spec: BOLUS,
+    dto: BolusDto,
+    valid: () => ({ amount: 2, reason: 'Breakthrough pain on mobilising', overrideReason: 'Pain team agreed a larger bolus', witness: ROSA }),
+  },
+  {
+    method: 'POST',
+    path: '/api/orders/:orderId/syringe-changes',
+    url: () => `/api/orders/${state.active.id}/syringe-changes`,
+    role: 'charge_nurse',
+    spec: SYRINGE_CHANGE,
+    dto: SyringeChangeDto,
+    valid: () => ({ volumeInfusedMl: 45, wastedMl: 5, newReleaseCode: state.spareCode, witness: ROSA }),
+  },
+  {
+    method: 'POST',
+    path: '/api/orders/:orderId/discontinue',
+    url: () => `/api/orders/${state.active.id}/discontinue`,
+    role: 'nurse',
+    spec: DISCONTINUE,
+    dto: DiscontinueDto,
+    valid: () => ({ reason: 'Prescriber stopped the PCA for oral analgesia', volumeInfusedMl: 48, wastedMl: 2, witness: ROSA }),
+  },
+  {
+    method: 'POST',
+    path: '/api/orders/:orderId/observations',
+    url: () => `/api/orders/${state.active.id}/observations`,
+    role: 'nurse',
+    spec: OBSERVATION,
+    dto: CreateObservationDto,
+    valid: () => ({ ...OBSERVATION_BODY, at: new Date().toISOString() }),
+  },
+  {
+    method: 'POST',
+    path: '/api/flags/:id/acknowledge',
+    url: () => `/api/flags/${state.flagId}/acknowledge`,
+    role: 'nurse',
+    spec: ACKNOWLEDGE_FLAG,
+    dto: AcknowledgeFlagDto,
+    valid: () => ({ note: 'PCA paused, prescriber called, dose reduced' }),
+  },
+  {
+    method: 'POST',
+    path: '/api/wards/:wardId/handover/signoffs',
+    url: () => `/api/wards/${HARBOUR}/handover/signoffs`,
+    role: 'charge_nurse',
+    spec: SIGNOFF,
+    dto: CreateSignoffDto,
+    valid: () => ({ orderId: state.active.id, role: 'incoming', pumpSettingsMatch: true }),
+  },
+];
+
+describe('bad input: bedside, observations, flags and handover', () => {
+  badInputSuite('bad-input-bedside', ROUTES, setUp);
+});
