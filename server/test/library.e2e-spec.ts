@@ -89,6 +89,8 @@ describe('dose-limit library', () => {
     ['a file that is not CSV', Buffer.from(GOOD_CSV), 'limits.xlsx', 'Only CSV files'],
     ['a file with the wrong columns', Buffer.from('drug,dose\nmorphine,1'), 'limits.csv', 'The file has'],
     ['a file over 1 MB', Buffer.alloc(1024 * 1024 + 10, 'a'), 'big.csv', 'over 1 MB'],
+    // Which hard_max would count is a guess about a limit: refused, not picked.
+    ['a file with a column twice', Buffer.from(`${HEADER},hard_max\nmorphine,1,mg,no,demand_dose,0.2,0.5,1.8,3,30`), 'limits.csv', 'The file has 1 problem'],
   ])('refuses %s with a clear 400', async (_label, content, filename, message) => {
     const response = await request(t.http)
       .post('/api/library/import')
@@ -97,6 +99,27 @@ describe('dose-limit library', () => {
       .attach('file', content, { filename, contentType: filename.endsWith('.csv') ? 'text/csv' : 'application/octet-stream' })
       .expect(400);
     expect(response.body.message).toContain(message);
+  });
+
+  it('lists at most 200 row problems, and refuses a dry run for a ward that does not exist', async () => {
+    const badRows = Array.from({ length: 300 }, () => 'morfine,1,mg,no,demand_dose,0.2,0.5,1.8,3');
+    const many = await request(t.http)
+      .post('/api/library/import')
+      .set(as(tokens.pharmacist))
+      .field('wardId', String(CEDAR))
+      .attach('file', Buffer.from([HEADER, ...badRows].join('\n')), { filename: 'cedar.csv', contentType: 'text/csv' })
+      .expect(400);
+    expect(many.body.message).toBe('The file has 300 problems in 300 rows; nothing was imported (the first 200 are listed)');
+    expect(many.body.errors).toHaveLength(200);
+
+    const nowhere = await request(t.http)
+      .post('/api/library/import')
+      .set(as(tokens.pharmacist))
+      .field('wardId', '9999')
+      .field('dryRun', 'true')
+      .attach('file', Buffer.from(GOOD_CSV), { filename: 'cedar.csv', contentType: 'text/csv' })
+      .expect(400);
+    expect(nowhere.body.errors).toEqual([{ field: 'wardId', message: 'No ward with id 9999' }]);
   });
 
   it('previews an import without writing (dryRun)', async () => {

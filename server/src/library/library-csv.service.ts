@@ -15,7 +15,9 @@ import {
   type NamedRule,
 } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
+import { fieldError } from '../common/errors/field-error.js';
 import { Drug } from '../drugs/entities/drug.entity.js';
+import { Ward } from '../wards/entities/ward.entity.js';
 import { LibraryVersion } from './entities/library-version.entity.js';
 import { LibraryVersionsService } from './library-versions.service.js';
 import { LibraryService, toNamedRule } from './library.service.js';
@@ -36,6 +38,7 @@ export class LibraryCsvService {
 
   /** Checks every row first; any problem is a 400 listing them all, and nothing is written. */
   async preview(wardId: number, file: UploadedCsv | undefined): Promise<ImportPreview> {
+    if (!(await this.dataSource.manager.existsBy(Ward, { id: wardId }))) throw fieldError('wardId', `No ward with id ${wardId}`);
     const rules = await this.readRules(file);
     const active = await this.dataSource.manager.findOne(LibraryVersion, { where: { wardId, status: 'active' }, relations: { rules: { drug: true } } });
     return { rules, diff: diffLibrary(active?.rules.map(toNamedRule) ?? [], rules) };
@@ -92,11 +95,17 @@ function fileProblem(message: string): BadRequestException {
   return new BadRequestException({ statusCode: 400, message, errors: [{ field: 'file', message }] });
 }
 
+// A file that is wrong throughout would otherwise answer megabytes of the same few mistakes.
+const PROBLEMS_LISTED = 200;
+
 function rowProblems(problems: CsvProblem[]): BadRequestException {
   const rows = new Set(problems.map((problem) => problem.row)).size;
+  const more = problems.length - PROBLEMS_LISTED;
   return new BadRequestException({
     statusCode: 400,
-    message: `The file has ${problems.length} problem${problems.length === 1 ? '' : 's'} in ${rows} row${rows === 1 ? '' : 's'}; nothing was imported`,
-    errors: problems.map(({ row, column, message }) => ({ field: 'file', row, column, message: `Row ${row}, ${column}: ${message}` })),
+    message:
+      `The file has ${problems.length} problem${problems.length === 1 ? '' : 's'} in ${rows} row${rows === 1 ? '' : 's'}; nothing was imported` +
+      (more > 0 ? ` (the first ${PROBLEMS_LISTED} are listed)` : ''),
+    errors: problems.slice(0, PROBLEMS_LISTED).map(({ row, column, message }) => ({ field: 'file', row, column, message: `Row ${row}, ${column}: ${message}` })),
   });
 }

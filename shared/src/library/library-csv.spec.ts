@@ -58,6 +58,7 @@ describe('library CSV', () => {
 
   it('checks the header for missing and unknown columns', () => {
     expect(checkCsvHeader([...LIBRARY_CSV_COLUMNS])).toEqual([]);
+    expect(checkCsvHeader([...LIBRARY_CSV_COLUMNS, 'hard_max'])).toEqual([{ row: 1, column: 'hard_max', message: 'The column hard_max appears more than once; keep one' }]);
     const problems = checkCsvHeader(['drug', 'concentration', 'dose_unit', 'per_kg', 'parameter', 'hard_min', 'soft_min', 'soft_max', 'hard_max']);
     expect(problems.map((p) => p.column)).toEqual(['concentration_per_ml', 'concentration']);
   });

@@ -43,10 +43,15 @@ export function checkCsvHeader(header: readonly string[]): CsvProblem[] {
   for (const column of LIBRARY_CSV_COLUMNS) {
     if (!header.includes(column)) problems.push({ row: 1, column, message: `The column ${column} is missing` });
   }
+  const seen = new Set<string>();
   for (const column of header) {
     if (!(LIBRARY_CSV_COLUMNS as readonly string[]).includes(column)) {
       problems.push({ row: 1, column, message: `Unknown column ${column}; the columns are ${LIBRARY_CSV_COLUMNS.join(', ')}` });
+    } else if (seen.has(column)) {
+      // Which copy would win is a guess about a limit: refuse rather than pick one.
+      problems.push({ row: 1, column, message: `The column ${column} appears more than once; keep one` });
     }
+    seen.add(column);
   }
   return problems;
 }

@@ -1,9 +1,11 @@
 import { IsDefined, IsString, MaxLength, MinLength } from 'class-validator';
 import type { LoginRequest } from '@lockstep/shared';
+import { Trim } from '../../common/validation/trim.decorator.js';
 
 // class-validator runs the decorator nearest the property first; with stopAtFirstError the
 // basic checks (present, right type) sit nearest so their message is the one shown.
 export class LoginDto implements LoginRequest {
+  @Trim()
   @MaxLength(64, { message: 'Username is at most 64 characters' })
   @MinLength(1, { message: 'Enter your username' })
   @IsString({ message: 'username must be text' })

@@ -1,5 +1,6 @@
 import { Type } from 'class-transformer';
 import { IsDefined, IsISO8601, IsObject, IsString, MaxLength, MinLength, ValidateNested } from 'class-validator';
+import { Trim } from '../../common/validation/trim.decorator.js';
 import { PumpSettingsDto } from './pump-settings.dto.js';
 
 export class FirstCheckDto {
@@ -28,6 +29,7 @@ export class FirstCheckDto {
 
 /** A colleague signs in on the same screen: username and password. */
 export class ColleagueDto {
+  @Trim()
   @MaxLength(64, { message: 'Username is at most 64 characters' })
   @MinLength(1, { message: 'Enter the username' })
   @IsString({ message: 'Enter the username' })
