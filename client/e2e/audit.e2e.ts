@@ -4,8 +4,8 @@ import { DEMO_PASSWORD, openBrowser, signIn, snapshot, type BrowserSession } fro
 import { startServer, type RunningServer } from './support/server.js';
 
 // The demo's Harbour ward (id 1) keeps SpO2 below 90 % as its shipped threshold; the demo order
-// for NOAH ACHTERBERG (H02) waits for verification. The demo seed writes no audit events, so the
-// API makes two here: Lin Park verifies that order, Sam Rivera raises Harbour's SpO2 threshold.
+// for NOAH ACHTERBERG (H02) waits for verification. Besides the demo's own back-story, the API
+// makes two events here: Lin Park verifies that order, Sam Rivera raises Harbour's SpO2 threshold.
 const HARBOUR = 1;
 
 type OrderSummary = { id: number; status: string };
@@ -95,6 +95,8 @@ describe('audit trail', () => {
     await page.getByLabel('Record number').fill(String(verifiedId));
     await page.getByRole('button', { name: 'Search' }).click();
     await expect.poll(() => new URL(page.url()).searchParams.get('entityId')).toBe(String(verifiedId));
+    // The previous page stays on screen until the filtered one arrives: wait for only this order's rows.
+    await expect.poll(async () => (await auditRows(page).allInnerTexts()).every((text) => text.includes(`Order ${verifiedId}`))).toBe(true);
     const verifyRow = auditRows(page).filter({ hasText: 'Order verified by pharmacy' });
     await verifyRow.waitFor();
     expect(await verifyRow.innerText()).toContain('Lin Park');
