@@ -3,6 +3,7 @@ import { ConfigService } from '@nestjs/config';
 import type { NestExpressApplication } from '@nestjs/platform-express';
 import type { NextFunction, Request, Response } from 'express';
 import { requestLoggerMiddleware } from './common/logging/request-logger.middleware.js';
+import { setupOpenApi } from './common/openapi/openapi.setup.js';
 import { requestContextMiddleware } from './common/request-context/request-context.js';
 import { securityHeaders } from './common/security/security-headers.js';
 import { serverTimingMiddleware } from './common/timing/server-timing.middleware.js';
@@ -29,6 +30,7 @@ export function configureApp(app: INestApplication): INestApplication {
   // No enableCors(): the client is served from this origin, so no other origin is let in.
 
   app.setGlobalPrefix('api');
+  setupOpenApi(app);
   app.useGlobalPipes(createValidationPipe());
   app.enableShutdownHooks();
   return app;

@@ -102,6 +102,19 @@ export const ACCESS_MATRIX: MatrixRow[] = [
 
   { method: 'GET', path: '/api/audit', url: '/api/audit', access: ['admin', 'pharmacist'], ok: 200 },
   { method: 'GET', path: '/api/audit/verify', url: '/api/audit/verify', access: ['admin'], ok: 200 },
+
+  { method: 'GET', path: '/api/fhir/MedicationRequest/:orderId', url: '/api/fhir/MedicationRequest/1', access: [...CLINICAL, 'admin'], ok: 200 },
+  { method: 'GET', path: '/api/fhir/Patient/:id/pca-bundle', url: '/api/fhir/Patient/1/pca-bundle', access: [...CLINICAL, 'admin'], ok: 200 },
+
+  // The OpenAPI documentation: SwaggerModule's own routes, public (docs/security.md). It registers
+  // the UI page under several names, its start script twice, and refuses its LICENSE file (404).
+  { method: 'GET', path: '/api/docs', url: '/api/docs', access: 'public', ok: 200 },
+  { method: 'GET', path: '/api/docs/', url: '/api/docs/', access: 'public', ok: 200 },
+  { method: 'GET', path: '/api/docs/index.html', url: '/api/docs/index.html', access: 'public', ok: 200 },
+  { method: 'GET', path: '/api/docs/swagger-ui-init.js', url: '/api/docs/swagger-ui-init.js', access: 'public', ok: 200 },
+  { method: 'GET', path: '/api/docs/docs/swagger-ui-init.js', url: '/api/docs/docs/swagger-ui-init.js', access: 'public', ok: 200 },
+  { method: 'GET', path: '/api/docs/LICENSE', url: '/api/docs/LICENSE', access: 'public', ok: 404 },
+  { method: 'GET', path: '/api/docs-json', url: '/api/docs-json', access: 'public', ok: 200 },
 ];
 
 function expectedStatus(row: MatrixRow, caller: Caller): number {

@@ -48,3 +48,4 @@ export * from './handover/handover-risk.js';
 export * from './handover/shift-window.js';
 export * from './observations/projected-empty-at.js';
 export * from './audit/audit.schema.js';
+export * from './fhir/index.js';

@@ -1,6 +1,8 @@
 import { Body, Controller, Get, HttpCode, Post } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { DemoAccounts, LoginResponse } from '@lockstep/shared';
+import { ApiOperation } from '@nestjs/swagger';
+import { ApiError } from '../common/openapi/api-errors.decorator.js';
 import type { Env } from '../config/env.validation.js';
 import { DEMO_ACCOUNTS, DEMO_PASSWORD } from '../database/seed/demo-staff.js';
 import type { AuthUser } from './auth-user.js';
@@ -16,6 +18,8 @@ export class AuthController {
     private readonly config: ConfigService<Env, true>,
   ) {}
 
+  @ApiOperation({ summary: 'Sign in: a bearer token for every other route' })
+  @ApiError(401, 'The username or password is wrong')
   @Public()
   @Post('login')
   @HttpCode(200)
@@ -23,12 +27,14 @@ export class AuthController {
     return this.auth.login(body);
   }
 
+  @ApiOperation({ summary: 'The signed-in user' })
   @Get('me')
   me(@CurrentUser() user: AuthUser): AuthUser {
     return user;
   }
 
   /** Lets the sign-in page offer the demo accounts; empty outside demo mode. */
+  @ApiOperation({ summary: 'The demo accounts and their password for the sign-in page; empty unless DEMO=true' })
   @Public()
   @Get('demo-accounts')
   demoAccounts(): DemoAccounts {

@@ -1,8 +1,10 @@
 import { Body, Controller, HttpCode, Param, Post } from '@nestjs/common';
 import type { FlagResponse } from '@lockstep/shared';
+import { ApiOperation } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 import { Roles } from '../auth/decorators/roles.decorator.js';
+import { ApiErrors } from '../common/openapi/api-errors.decorator.js';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
 import { AcknowledgeFlagDto } from './dto/acknowledge-flag.dto.js';
 import { FlagsService } from './flags.service.js';
@@ -12,6 +14,8 @@ export class FlagsController {
   constructor(private readonly flags: FlagsService) {}
 
   /** A flag stays open until someone caring for the patient says what was done. */
+  @ApiOperation({ summary: 'Acknowledge a flag, saying what was done' })
+  @ApiErrors(404, 409)
   @Post(':id/acknowledge')
   @HttpCode(200)
   @Roles('nurse', 'charge_nurse', 'prescriber', 'pharmacist')

@@ -2,12 +2,15 @@ import { Body, Controller, Delete, Get, Header, HttpCode, Param, Post, Put, Quer
 import { FileInterceptor } from '@nestjs/platform-express';
 import type { Response } from 'express';
 import type { LibraryDiff, LibraryVersion, LibraryVersionDetail } from '@lockstep/shared';
+import { ApiBody, ApiConsumes, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiProduces } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 import { Roles } from '../auth/decorators/roles.decorator.js';
 import { SignedRequestDto } from '../common/dto/signature.dto.js';
+import { ApiErrors } from '../common/openapi/api-errors.decorator.js';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
 import { CreateDraftDto } from './dto/create-draft.dto.js';
+import { ImportLibraryUploadModel } from './dto/import-library-upload.model.js';
 import { ImportLibraryDto } from './dto/import-library.dto.js';
 import { LibraryQueryDto } from './dto/library-query.dto.js';
 import { ReplaceRulesDto } from './dto/replace-rules.dto.js';
@@ -26,21 +29,29 @@ export class LibraryController {
     private readonly csv: LibraryCsvService,
   ) {}
 
+  @ApiOperation({ summary: 'Dose-limit library versions' })
   @Get('versions')
   list(@Query() query: LibraryQueryDto): Promise<LibraryVersion[]> {
     return this.library.list(query.wardId);
   }
 
+  @ApiOperation({ summary: 'One library version with its rules' })
+  @ApiErrors(404)
   @Get('versions/:id')
   get(@Param('id', ParseIdPipe) id: number): Promise<LibraryVersionDetail> {
     return this.library.getVersion(id);
   }
 
+  @ApiOperation({ summary: 'A version’s changes against the ward’s active version' })
+  @ApiErrors(404)
   @Get('versions/:id/diff')
   diff(@Param('id', ParseIdPipe) id: number): Promise<LibraryDiff & { againstVersionId: number | null }> {
     return this.library.diff(id);
   }
 
+  @ApiOperation({ summary: 'A version’s rules as CSV (docs/library-csv.md)' })
+  @ApiProduces('text/csv')
+  @ApiErrors(404)
   @Get('versions/:id/export')
   @Header('Content-Type', 'text/csv; charset=utf-8')
   async export(@Param('id', ParseIdPipe) id: number, @Res({ passthrough: true }) response: Response): Promise<string> {
@@ -49,18 +60,24 @@ export class LibraryController {
     return csv;
   }
 
+  @ApiOperation({ summary: 'Start a draft from the ward’s active version' })
+  @ApiErrors(409)
   @Post('versions')
   @Roles('pharmacist')
   createDraft(@Body() body: CreateDraftDto, @CurrentUser() user: AuthUser): Promise<LibraryVersionDetail> {
     return this.versions.createDraft(body.wardId, body.note, user);
   }
 
+  @ApiOperation({ summary: 'Replace a draft’s rules' })
+  @ApiErrors(404, 409)
   @Put('versions/:id/rules')
   @Roles('pharmacist')
   replaceRules(@Param('id', ParseIdPipe) id: number, @Body() body: ReplaceRulesDto, @CurrentUser() user: AuthUser): Promise<LibraryVersionDetail> {
     return this.versions.replaceRules(id, body.rules, user);
   }
 
+  @ApiOperation({ summary: 'Submit a draft for a second pharmacist’s approval' })
+  @ApiErrors(404, 409)
   @Post('versions/:id/submit')
   @HttpCode(200)
   @Roles('pharmacist')
@@ -68,6 +85,8 @@ export class LibraryController {
     return this.versions.submit(id, body.note, user);
   }
 
+  @ApiOperation({ summary: 'Withdraw a submitted version back to draft' })
+  @ApiErrors(404, 409)
   @Post('versions/:id/withdraw')
   @HttpCode(200)
   @Roles('pharmacist')
@@ -75,6 +94,8 @@ export class LibraryController {
     return this.versions.withdraw(id, user);
   }
 
+  @ApiOperation({ summary: 'Approve a submitted version (signed; a pharmacist other than its author); it becomes active' })
+  @ApiErrors(404, 409)
   @Post('versions/:id/approve')
   @HttpCode(200)
   @Roles('pharmacist')
@@ -82,6 +103,8 @@ export class LibraryController {
     return this.versions.approve(id, user, body.signature.password);
   }
 
+  @ApiOperation({ summary: 'Delete a draft' })
+  @ApiErrors(404, 409)
   @Delete('versions/:id')
   @HttpCode(204)
   @Roles('pharmacist')
@@ -90,6 +113,12 @@ export class LibraryController {
   }
 
   /** Multipart: `file` (CSV), `wardId`, optional `note`; `dryRun=true` previews without writing. */
+  @ApiOperation({ summary: 'Import a CSV as a new draft, or check it without writing (dryRun=true)' })
+  @ApiConsumes('multipart/form-data')
+  @ApiBody({ type: ImportLibraryUploadModel })
+  @ApiCreatedResponse({ description: 'The new draft version' })
+  @ApiOkResponse({ description: 'With dryRun: the rules the file holds and its problems; nothing written' })
+  @ApiErrors(409)
   @Post('import')
   @Roles('pharmacist')
   @UseFilters(UploadTooLargeFilter)

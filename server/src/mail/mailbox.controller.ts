@@ -1,6 +1,7 @@
 import { Controller, Get } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
+import { ApiOperation } from '@nestjs/swagger';
 import { Roles } from '../auth/decorators/roles.decorator.js';
 import { MailboxMessage } from './entities/mailbox-message.entity.js';
 
@@ -12,6 +13,7 @@ export type MailboxMessageResponse = { id: number; to: string; subject: string; 
 export class MailboxController {
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
 
+  @ApiOperation({ summary: 'E-mail the embedded SMTP catcher received, newest first' })
   @Get()
   async list(): Promise<MailboxMessageResponse[]> {
     const messages = await this.dataSource.manager.find(MailboxMessage, { order: { id: 'DESC' }, take: 500 });

@@ -1,6 +1,8 @@
 import { Body, Controller, Get, Param, Patch } from '@nestjs/common';
 import type { Ward } from '@lockstep/shared';
+import { ApiOperation } from '@nestjs/swagger';
 import { Roles } from '../auth/decorators/roles.decorator.js';
+import { ApiErrors } from '../common/openapi/api-errors.decorator.js';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
 import { UpdateWardPolicyDto } from './dto/update-ward-policy.dto.js';
 import { type WardPolicySettings, WardsService } from './wards.service.js';
@@ -11,17 +13,22 @@ import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 export class WardsController {
   constructor(private readonly wards: WardsService) {}
 
+  @ApiOperation({ summary: 'Every ward' })
   @Get()
   list(): Promise<Ward[]> {
     return this.wards.list();
   }
 
   /** Observation intervals, escalation thresholds, syringe-low and reconciliation settings, e-mail addresses. */
+  @ApiOperation({ summary: 'A ward’s monitoring and escalation settings and e-mail addresses' })
+  @ApiErrors(404)
   @Get(':wardId/policy')
   policy(@Param('wardId', ParseIdPipe) wardId: number): Promise<WardPolicySettings> {
     return this.wards.policy(wardId);
   }
 
+  @ApiOperation({ summary: 'Change a ward’s policy' })
+  @ApiErrors(404)
   @Patch(':wardId/policy')
   @Roles('admin')
   updatePolicy(@Param('wardId', ParseIdPipe) wardId: number, @Body() body: UpdateWardPolicyDto, @CurrentUser() admin: AuthUser): Promise<WardPolicySettings> {

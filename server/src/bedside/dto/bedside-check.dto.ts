@@ -1,25 +1,30 @@
 import { Type } from 'class-transformer';
 import { IsDefined, IsISO8601, IsObject, IsString, MaxLength, MinLength, ValidateNested } from 'class-validator';
+import { ApiProperty } from '@nestjs/swagger';
 import { Trim } from '../../common/validation/trim.decorator.js';
 import { PumpSettingsDto } from './pump-settings.dto.js';
 
 export class FirstCheckDto {
+  @ApiProperty({ minLength: 1, maxLength: 32, example: 'KB100231', description: 'MRN from the patient’s wristband' })
   @MaxLength(32, { message: 'MRN is at most 32 characters' })
   @MinLength(1, { message: 'Enter the MRN from the wristband' })
   @IsString({ message: 'Enter the MRN from the wristband' })
   @IsDefined({ message: 'Enter the MRN from the wristband' })
   patientMrn: string;
 
+  @ApiProperty({ format: 'date', example: '1968-03-14', description: 'Date of birth from the wristband (yyyy-mm-dd)' })
   @IsISO8601({ strict: true }, { message: 'Enter the date of birth from the wristband (yyyy-mm-dd)' })
   @IsDefined({ message: 'Enter the date of birth from the wristband' })
   patientDateOfBirth: string;
 
+  @ApiProperty({ minLength: 1, maxLength: 16, example: 'HK3-7QT', description: 'The release code on the syringe label' })
   @MaxLength(16, { message: 'A release code is 6 characters' })
   @MinLength(1, { message: 'Enter the release code from the syringe label' })
   @IsString({ message: 'Enter the release code from the syringe label' })
   @IsDefined({ message: 'Enter the release code from the syringe label' })
   releaseCode: string;
 
+  @ApiProperty({ type: () => PumpSettingsDto, description: 'What the first nurse reads off the pump' })
   @ValidateNested()
   @Type(() => PumpSettingsDto)
   @IsObject({ message: 'Enter the pump settings' })
@@ -29,6 +34,7 @@ export class FirstCheckDto {
 
 /** A colleague signs in on the same screen: username and password. */
 export class ColleagueDto {
+  @ApiProperty({ minLength: 1, maxLength: 64, example: 'rosa.adeyemi', description: 'The colleague’s username' })
   @Trim()
   @MaxLength(64, { message: 'Username is at most 64 characters' })
   @MinLength(1, { message: 'Enter the username' })
@@ -36,6 +42,7 @@ export class ColleagueDto {
   @IsDefined({ message: 'Enter the username' })
   username: string;
 
+  @ApiProperty({ format: 'password', minLength: 1, maxLength: 256, description: 'The colleague’s own password' })
   @MaxLength(256, { message: 'Password is at most 256 characters' })
   @MinLength(1, { message: 'Enter the password' })
   @IsString({ message: 'Enter the password' })
@@ -44,6 +51,7 @@ export class ColleagueDto {
 }
 
 export class SecondCheckDto extends ColleagueDto {
+  @ApiProperty({ type: () => PumpSettingsDto, description: 'What the second nurse reads off the pump, independently' })
   @ValidateNested()
   @Type(() => PumpSettingsDto)
   @IsObject({ message: 'Enter the pump settings' })

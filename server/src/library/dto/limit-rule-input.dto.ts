@@ -1,60 +1,72 @@
 import { Type } from 'class-transformer';
 import { IsBoolean, IsDefined, IsIn, IsInt, IsNumber, IsObject, IsOptional, IsPositive, Min, ValidateNested } from 'class-validator';
 import { DOSE_UNITS, type DoseUnit, type LimitRuleInput } from '@lockstep/shared';
+import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 
 const finiteNumber = { allowNaN: false, allowInfinity: false };
 
 export class LimitsDto {
+  @ApiPropertyOptional({ type: 'number', nullable: true, minimum: 0, description: 'Below this the order is refused' })
   @Min(0, { message: 'hardMin must be 0 or more' })
   @IsNumber(finiteNumber, { message: 'hardMin must be a number' })
   @IsOptional()
   hardMin?: number | null;
 
+  @ApiPropertyOptional({ type: 'number', nullable: true, minimum: 0, description: 'Below this the prescriber gives a reason' })
   @Min(0, { message: 'softMin must be 0 or more' })
   @IsNumber(finiteNumber, { message: 'softMin must be a number' })
   @IsOptional()
   softMin?: number | null;
 
+  @ApiPropertyOptional({ type: 'number', nullable: true, minimum: 0, description: 'Above this the prescriber gives a reason' })
   @Min(0, { message: 'softMax must be 0 or more' })
   @IsNumber(finiteNumber, { message: 'softMax must be a number' })
   @IsOptional()
   softMax?: number | null;
 
+  @ApiPropertyOptional({ type: 'number', nullable: true, minimum: 0, description: 'Above this the order is refused' })
   @Min(0, { message: 'hardMax must be 0 or more' })
   @IsNumber(finiteNumber, { message: 'hardMax must be a number' })
   @IsOptional()
   hardMax?: number | null;
 }
 
+const limits = ApiPropertyOptional({ type: () => LimitsDto });
+
 export class RuleLimitsDto {
-  @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() loadingDose?: LimitsDto;
-  @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() demandDose?: LimitsDto;
-  @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() lockoutMinutes?: LimitsDto;
-  @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() basalRatePerHour?: LimitsDto;
-  @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() oneHourLimit?: LimitsDto;
-  @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() fourHourLimit?: LimitsDto;
-  @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() clinicianBolusDose?: LimitsDto;
+  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() loadingDose?: LimitsDto;
+  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() demandDose?: LimitsDto;
+  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() lockoutMinutes?: LimitsDto;
+  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() basalRatePerHour?: LimitsDto;
+  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() oneHourLimit?: LimitsDto;
+  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() fourHourLimit?: LimitsDto;
+  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() clinicianBolusDose?: LimitsDto;
 }
 
 export class LimitRuleInputDto implements LimitRuleInput {
+  @ApiProperty({ type: 'integer', minimum: 1, example: 1 })
   @IsPositive({ message: 'drugId must be positive' })
   @IsInt({ message: 'drugId must be a whole number' })
   @IsDefined({ message: 'drugId is required' })
   drugId: number;
 
+  @ApiProperty({ minimum: 0, exclusiveMinimum: true, example: 1 })
   @IsPositive({ message: 'Concentration must be more than 0' })
   @IsNumber(finiteNumber, { message: 'concentrationPerMl must be a number' })
   @IsDefined({ message: 'concentrationPerMl is required' })
   concentrationPerMl: number;
 
+  @ApiProperty({ enum: DOSE_UNITS, example: 'mg' })
   @IsIn(DOSE_UNITS, { message: 'doseUnit must be mg or mcg' })
   @IsDefined({ message: 'doseUnit is required' })
   doseUnit: DoseUnit;
 
+  @ApiProperty({ type: 'boolean', example: false, description: 'Dose limits are per kg of body weight' })
   @IsBoolean({ message: 'perKg must be true or false' })
   @IsDefined({ message: 'perKg is required' })
   perKg: boolean;
 
+  @ApiProperty({ type: () => RuleLimitsDto, description: 'Limits per order field; a field left out is not checked' })
   @ValidateNested()
   @Type(() => RuleLimitsDto)
   @IsObject({ message: 'limits must be an object of parameter limits' })

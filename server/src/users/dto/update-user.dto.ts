@@ -1,6 +1,8 @@
-import { OmitType, PartialType } from '@nestjs/mapped-types';
 import { IsBoolean, ValidateIf } from 'class-validator';
 import type { UpdateUserRequest } from '@lockstep/shared';
+// @nestjs/swagger's mapped types copy the validation rules exactly as @nestjs/mapped-types does,
+// and the OpenAPI properties too.
+import { ApiPropertyOptional, OmitType, PartialType } from '@nestjs/swagger';
 import { CreateUserDto } from './create-user.dto.js';
 
 /**
@@ -11,6 +13,7 @@ export class UpdateUserDto
   extends PartialType(OmitType(CreateUserDto, ['username'] as const), { skipNullProperties: false })
   implements UpdateUserRequest
 {
+  @ApiPropertyOptional({ type: 'boolean', example: false, description: 'false deactivates the user: their sessions end at once' })
   @IsBoolean({ message: 'active must be true or false' })
   @ValidateIf((_, value) => value !== undefined)
   active?: boolean;
