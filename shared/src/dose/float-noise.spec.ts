@@ -1,3 +1,4 @@
+import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { roundTo, withoutFloatNoise } from './float-noise.js';
 
@@ -14,6 +15,11 @@ describe('withoutFloatNoise', () => {
     expect(withoutFloatNoise(Infinity)).toBe(Infinity);
     expect(withoutFloatNoise(Number.NaN)).toBeNaN();
     expect(Object.is(withoutFloatNoise(-0), 0)).toBe(true);
+  });
+  it('gives whole numbers the same answer by its short path as by the string round trip', () => {
+    const slow = (value: number) => Number(value.toPrecision(12)) + 0;
+    fc.assert(fc.property(fc.integer({ min: -999_999_999_999, max: 999_999_999_999 }), (value) => Object.is(withoutFloatNoise(value), slow(value))));
+    expect(withoutFloatNoise(1e13 + 1)).toBe(1e13); // beyond 12 digits the rounding still applies
   });
 });
 

@@ -8,6 +8,7 @@ import { OrderEvent } from './order-event.entity.js';
 /** A signed PCA order. A changed regimen is a new row (version + 1) that supersedes the old one. */
 @Entity('pca_orders')
 @Index('IDX_pca_orders_status', ['status'])
+@Index('IDX_pca_orders_prescriber', ['prescriberId'])
 export class PcaOrder {
   @PrimaryGeneratedColumn()
   id: number;

@@ -1,0 +1,56 @@
+import { ageInYears, compareHandoverRows, riskTier, type HandoverRow, type PendingTask, type WardPolicy } from '@lockstep/shared';
+import { toFlagResponse } from '../flags/flags.service.js';
+import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
+import { toSignoffResponse } from './dto/signoff-response.js';
+import { type BoardInputs, rowFigures } from './row-figures.js';
+
+/**
+ * The board's rows, sorted by risk, from what was fetched for the ward's orders. Pure: the
+ * benchmark's bare baseline server builds its answer with this too, from its own queries.
+ */
+export function boardRows(orders: PcaOrder[], inputs: BoardInputs, policy: WardPolicy, shift: { endsAt: string }, now: Date): HandoverRow[] {
+  const rows = orders.map((order) => {
+    const figures = rowFigures(order, inputs, policy, now, Date.parse(shift.endsAt));
+    const openFlags = inputs.flags.filter((flag) => flag.orderId === order.id);
+    const flags = {
+      urgent: openFlags.filter((flag) => flag.severity === 'urgent').length,
+      review: openFlags.filter((flag) => flag.severity === 'review').length,
+      info: openFlags.filter((flag) => flag.severity === 'info').length,
+      open: openFlags.map(toFlagResponse),
+    };
+    const row: Omit<HandoverRow, 'riskTier'> = {
+      orderId: order.id,
+      status: order.status,
+      bed: order.patient.bed,
+      patient: {
+        id: order.patientId,
+        name: `${order.patient.familyName.toUpperCase()}, ${order.patient.givenName}`,
+        mrn: order.patient.mrn,
+        ageYears: ageInYears(order.patient.dateOfBirth, now),
+        weightKg: order.patient.weightKg,
+      },
+      drugName: order.drug.genericName,
+      doseUnit: order.doseUnit,
+      concentrationPerMl: order.concentrationPerMl,
+      regimen: { demandDose: order.demandDose, lockoutMinutes: order.lockoutMinutes, basalRatePerHour: order.basalRatePerHour, oneHourLimit: order.oneHourLimit, fourHourLimit: order.fourHourLimit },
+      startedAt: order.startedAt?.toISOString() ?? null,
+      minutesSinceStart: order.startedAt ? Math.floor((now.getTime() - order.startedAt.getTime()) / 60_000) : null,
+      ...figures,
+      flags,
+      pendingTasks: pendingTasks(order, inputs, now),
+      signoffs: inputs.signoffs.filter((signoff) => signoff.orderId === order.id).map(toSignoffResponse),
+    };
+    return { ...row, riskTier: riskTier(row) };
+  });
+  return rows.sort(compareHandoverRows);
+}
+
+function pendingTasks(order: PcaOrder, inputs: BoardInputs, now: Date): PendingTask[] {
+  const tasks: PendingTask[] = [];
+  if (order.status === 'awaiting_verification') tasks.push({ code: 'awaiting_verification', since: order.signedAt.toISOString() });
+  if (order.status === 'verified') tasks.push({ code: 'awaiting_bedside_check', since: order.statusChangedAt.toISOString() });
+  const discrepancy = inputs.discrepancies.find((reconciliation) => reconciliation.release.orderId === order.id);
+  if (discrepancy) tasks.push({ code: 'reconciliation_discrepancy', since: discrepancy.at.toISOString() });
+  if (order.reviewDate < now.toISOString().slice(0, 10)) tasks.push({ code: 'review_date_passed', since: order.reviewDate });
+  return tasks;
+}
