@@ -165,7 +165,8 @@ describe('observations: flags, usage charts and acknowledgement', () => {
 
     await painSedation.getByRole('button', { name: 'Show as table' }).click();
     const rows = painSedation.getByRole('table').locator('tbody tr');
-    expect(await rows.count()).toBe(2);
+    // The table renders on the click: wait for it rather than counting at once.
+    await expect.poll(() => rows.count()).toBe(2);
     expect(await rows.first().innerText()).toMatch(/4\s+3: Frequently drowsy/);
 
     await page.getByText('8 h', { exact: true }).click();
