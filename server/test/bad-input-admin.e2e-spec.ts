@@ -1,6 +1,7 @@
 import 'reflect-metadata';
+import './support/lift-password-rate-limit.js';
 import request from 'supertest';
-import { afterAll, describe, expect, it, vi } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { LoginDto } from '../src/auth/dto/login.dto.js';
 import { SignedRequestDto } from '../src/common/dto/signature.dto.js';
 import { CreateDraftDto } from '../src/library/dto/create-draft.dto.js';
@@ -14,17 +15,6 @@ import { type BadInputApp, badInputSuite, type BadInputRoute } from './support/b
 import { BAD_INPUT_COVERAGE, CREATE_DRAFT, CREATE_USER, LOGIN, REPLACE_RULES, SIGNED, SUBMIT_VERSION, UPDATE_USER, WARD_POLICY } from './support/bad-input-specs.js';
 import { DEMO_PASSWORD } from './support/test-app.js';
 
-// Sign-in, signatures and new passwords are bodies with a password, and the app allows only so
-// many of those a minute from one address; this file is about validation, so the limit is lifted.
-const previousPasswordLimit = vi.hoisted(() => {
-  const previous = process.env.PASSWORD_REQUESTS_PER_MINUTE;
-  process.env.PASSWORD_REQUESTS_PER_MINUTE = '100000';
-  return previous;
-});
-afterAll(() => {
-  if (previousPasswordLimit === undefined) delete process.env.PASSWORD_REQUESTS_PER_MINUTE;
-  else process.env.PASSWORD_REQUESTS_PER_MINUTE = previousPasswordLimit;
-});
 
 // Demo data: user 4 is the nurse kai.mendes; library version 5 is Harbour's draft awaiting
 // approval; Cedar (2) has no open version, so a new draft for it is valid.

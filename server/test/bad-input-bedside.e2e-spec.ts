@@ -1,6 +1,7 @@
 import 'reflect-metadata';
+import './support/lift-password-rate-limit.js';
 import request from 'supertest';
-import { afterAll, describe, vi } from 'vitest';
+import { describe } from 'vitest';
 import { BolusDto, DiscontinueDto, SyringeChangeDto } from '../src/bedside/dto/bedside-actions.dto.js';
 import { FirstCheckDto, SecondCheckDto } from '../src/bedside/dto/bedside-check.dto.js';
 import { AcknowledgeFlagDto } from '../src/flags/dto/acknowledge-flag.dto.js';
@@ -10,17 +11,6 @@ import { ACKNOWLEDGE_FLAG, BOLUS, DISCONTINUE, FIRST_CHECK, OBSERVATION, SECOND_
 import { type BadInputApp, badInputSuite, type BadInputRoute } from './support/bad-input-harness.js';
 import { activeOrder, IDENTITY, RELEASE, ROSA, SETTINGS, verifiedOrderWithSyringe } from './support/pca.js';
 
-// Most bodies here carry a colleague's password, and the app allows only so many of those a
-// minute from one address; this file is about validation, so the limit is lifted for it alone.
-const previousPasswordLimit = vi.hoisted(() => {
-  const previous = process.env.PASSWORD_REQUESTS_PER_MINUTE;
-  process.env.PASSWORD_REQUESTS_PER_MINUTE = '100000';
-  return previous;
-});
-afterAll(() => {
-  if (previousPasswordLimit === undefined) delete process.env.PASSWORD_REQUESTS_PER_MINUTE;
-  else process.env.PASSWORD_REQUESTS_PER_MINUTE = previousPasswordLimit;
-});
 
 const HARBOUR = 1; // the ward of patient 1, whose orders support/pca.ts writes
 

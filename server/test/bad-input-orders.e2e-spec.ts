@@ -1,5 +1,6 @@
 import 'reflect-metadata';
-import { afterAll, describe, vi } from 'vitest';
+import './support/lift-password-rate-limit.js';
+import { describe } from 'vitest';
 import { SignedRequestDto } from '../src/common/dto/signature.dto.js';
 import { CreateReleaseDto } from '../src/releases/dto/create-release.dto.js';
 import { CreateOrderDto } from '../src/orders/dto/create-order.dto.js';
@@ -10,17 +11,6 @@ import { badInputSuite, type BadInputRoute } from './support/bad-input-harness.j
 import { ORDER, RELEASE as VALID_RELEASE } from './support/pca.js';
 import { DEMO_PASSWORD } from './support/test-app.js';
 
-// Every bad body below carries a password field, and the app allows only so many of those a
-// minute from one address; this file is about validation, so the limit is lifted for it alone.
-const previousPasswordLimit = vi.hoisted(() => {
-  const previous = process.env.PASSWORD_REQUESTS_PER_MINUTE;
-  process.env.PASSWORD_REQUESTS_PER_MINUTE = '100000';
-  return previous;
-});
-afterAll(() => {
-  if (previousPasswordLimit === undefined) delete process.env.PASSWORD_REQUESTS_PER_MINUTE;
-  else process.env.PASSWORD_REQUESTS_PER_MINUTE = previousPasswordLimit;
-});
 
 // Demo orders (database/seed/demo-orders.ts): 1 awaiting verification, 2 verified with a ready
 // syringe, 3 returned to the prescriber (patient 5, fentanyl).

@@ -3,9 +3,8 @@ import { EmptyState, Group, SegmentedControl, Skeleton, Stack, Text, Timeline } 
 import { IconHistoryOff } from '@tabler/icons-react';
 import { auditActionLabel } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
-import { formatDateTime } from '@/utils/format-date';
 import { useOrderAudit } from '../api/get-order-audit';
-import { actorText } from '../utils/audit-actor';
+import { AuditEventByline } from './audit-event-byline';
 import { AuditSummaryList } from './audit-summary-list';
 
 type Order = 'oldest' | 'newest';
@@ -73,9 +72,7 @@ export function OrderStory({ orderId, orderUpdatedAt }: OrderStoryProps) {
         {events.map((event) => (
           <Timeline.Item key={event.id} role="listitem" title={auditActionLabel(event.action)} data-testid="order-story-event">
             <Stack gap={4}>
-              <Text size="sm" c="dimmed" className="tabular-nums">
-                {actorText(event)} · <time dateTime={event.at}>{formatDateTime(event.at)}</time>
-              </Text>
+              <AuditEventByline event={event} c="dimmed" className="tabular-nums" />
               <AuditSummaryList summary={event.summary} />
             </Stack>
           </Timeline.Item>

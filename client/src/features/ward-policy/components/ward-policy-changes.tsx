@@ -1,11 +1,10 @@
 import { Anchor, Card, Group, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { Link } from 'react-router-dom';
 import { useAuditEvents } from '@/features/audit/api/get-audit-events';
+import { AuditEventByline } from '@/features/audit/components/audit-event-byline';
 import { AuditSummaryList } from '@/features/audit/components/audit-summary-list';
-import { actorText } from '@/features/audit/utils/audit-actor';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
-import { formatDateTime } from '@/utils/format-date';
 
 const SHOWN = 5;
 
@@ -22,9 +21,7 @@ export function WardPolicyChanges({ wardId }: { wardId: number }) {
       <Stack gap="sm">
         {changes.data.events.map((event) => (
           <Card key={event.id} withBorder padding="sm">
-            <Text size="sm" fw={500} mb={4}>
-              {actorText(event)} · <time dateTime={event.at}>{formatDateTime(event.at)}</time>
-            </Text>
+            <AuditEventByline event={event} fw={500} mb={4} />
             <AuditSummaryList summary={event.summary} />
           </Card>
         ))}
