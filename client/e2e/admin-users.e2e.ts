@@ -1,6 +1,7 @@
 import { afterAll, beforeAll, describe, it } from 'vitest';
 import { openBrowser, signIn, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
+import { readyDialog } from './support/dialog.js';
 
 describe('admin user management', () => {
   let server: RunningServer;
@@ -20,7 +21,7 @@ describe('admin user management', () => {
   it('shows the error beside the password, then creates the user who can sign in', async () => {
     const { page } = browser;
     await page.getByRole('button', { name: 'New user' }).click();
-    const dialog = page.getByRole('dialog');
+    const dialog = await readyDialog(page);
     await dialog.getByLabel('Username').fill('noor.haddad');
     await dialog.getByLabel('Display name').fill('Noor Haddad');
     await dialog.getByRole('combobox', { name: 'Role' }).click();

@@ -5,6 +5,7 @@ import type { Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openBrowser, signIn, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
+import { readyDialog } from './support/dialog.js';
 
 // Cedar's demo library (invented values) with one change: morphine demand soft max 2 → 1.8 mg.
 const HEADER = 'drug,concentration_per_ml,dose_unit,per_kg,parameter,hard_min,soft_min,soft_max,hard_max';
@@ -138,7 +139,7 @@ describe('dose-limit library: import a CSV, submit, and a second pharmacist appr
   it('refuses a file with a bad row, naming its row and column, and imports nothing', async () => {
     const { page } = lin;
     await page.getByRole('button', { name: 'Import CSV' }).click();
-    const dialog = page.getByRole('dialog', { name: 'Import dose limits from CSV' });
+    const dialog = await readyDialog(page, 'Import dose limits from CSV');
     expect(await dialog.getByRole('combobox', { name: 'Ward' }).inputValue()).toBe('Cedar');
     await dialog.getByLabel('Note').fill('Lower the morphine demand soft maximum to 1.8 mg (demo)');
     await dialog.getByLabel('CSV file to import').setInputFiles(badFile);
@@ -214,7 +215,7 @@ describe('dose-limit library: import a CSV, submit, and a second pharmacist appr
     await page.getByRole('table', { name: 'Changed limits' }).getByRole('row', { name: /soft max 2 mg to 1.8 mg/ }).waitFor();
 
     await page.getByRole('button', { name: 'Approve' }).click();
-    const dialog = page.getByRole('dialog', { name: 'Approve version 2' });
+    const dialog = await readyDialog(page, 'Approve version 2');
     await dialog.getByLabel('Your password').fill('not-my-password');
     await dialog.getByRole('button', { name: 'Sign and approve' }).click();
     await dialog.getByText('The password you signed with is not correct').waitFor();

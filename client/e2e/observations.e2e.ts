@@ -2,6 +2,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD, openBrowser, signIn, snapshot as saveSnapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
+import { readyDialog } from './support/dialog.js';
 
 // The demo's verified order: FALEOLO, Tavita (Harbour bed H07), HYDROmorphone 0.2 mg/mL, demand
 // 0.2 mg, lockout 10 min, basal 0.1 mg/h, 4-hour limit 6 mg, a ready 50 mL syringe HK3-7QT.
@@ -178,8 +179,10 @@ describe('observations: flags, usage charts and acknowledgement', () => {
   it('acknowledges the urgent flag with a note of what was done', async () => {
     const { page } = kai;
     await page.getByRole('button', { name: 'Acknowledge: Sedation level 3' }).click();
-    const dialog = page.getByRole('dialog', { name: 'Acknowledge flag' });
-    await dialog.getByLabel('What was done').fill('ok');
+    const dialog = await readyDialog(page, 'Acknowledge flag');
+    const note = dialog.getByLabel('What was done');
+    await note.fill('ok');
+    await expect.poll(() => note.inputValue()).toBe('ok');
     await dialog.getByRole('button', { name: 'Acknowledge flag' }).click();
     await dialog.getByText('Say what was done (at least 5 characters)').waitFor();
     await dialog.getByLabel('What was done').fill('Demand dose reduced by 25 % with Dr Osei; sedation rechecked at 2');

@@ -2,6 +2,7 @@ import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD, openBrowser, signIn, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
+import { readyDialog } from './support/dialog.js';
 
 // The demo Harbour morphine 1 mg/mL rule (invented demo values): demand soft 0.5–2 mg, hard 0.2–3 mg.
 const SOFT_FINDING = 'Demand dose 2.5 mg is above the soft maximum 2 mg';
@@ -19,7 +20,7 @@ async function openNav(page: Page, name: string, heading: string): Promise<void>
 
 /** Types the password again in the open signing dialog and signs. */
 async function signInDialog(page: Page, button: string): Promise<void> {
-  const dialog = page.getByRole('dialog');
+  const dialog = await readyDialog(page);
   await dialog.getByLabel('Your password').fill(DEMO_PASSWORD);
   await dialog.getByRole('button', { name: button }).click();
   await dialog.waitFor({ state: 'detached' });
@@ -96,7 +97,7 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
     await page.getByRole('button', { name: 'Sign order' }).click();
     await page.getByRole('dialog').getByText('morphine 1 mg/mL · demand 2.5 mg · lockout 10 min · 4-hour limit 30 mg').waitFor();
     await shot(page, 'order-sign-dialog');
-    const dialog = page.getByRole('dialog');
+    const dialog = await readyDialog(page);
     await dialog.getByLabel('Your password').fill('not-my-password');
     await dialog.getByRole('button', { name: 'Sign and send to pharmacy' }).click();
     await dialog.getByText('The password you signed with is not correct').waitFor();
@@ -128,8 +129,9 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
     await shot(page, 'verification-detail');
 
     await page.getByRole('button', { name: 'Return with query' }).click();
-    await page.getByRole('dialog').getByLabel('Query for the prescriber').fill(QUERY);
-    await page.getByRole('dialog').getByRole('button', { name: 'Return to prescriber' }).click();
+    const returnDialog = await readyDialog(page);
+    await returnDialog.getByLabel('Query for the prescriber').fill(QUERY);
+    await returnDialog.getByRole('button', { name: 'Return to prescriber' }).click();
     await page.getByRole('heading', { name: 'Verification', level: 1 }).waitFor();
     await expect.poll(() => rows.count()).toBe(1);
     await signOut(page);
@@ -188,7 +190,7 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
     await page.getByText('Verified').first().waitFor();
 
     await page.getByRole('button', { name: 'Release syringe' }).click();
-    const dialog = page.getByRole('dialog');
+    const dialog = await readyDialog(page);
     const volume = dialog.getByRole('textbox', { name: 'Volume', exact: true });
     expect(await dialog.getByLabel('Concentration').inputValue()).toBe('1');
     expect(await volume.inputValue()).toBe('50');
