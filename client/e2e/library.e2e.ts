@@ -51,6 +51,16 @@ async function chooseWard(page: Page, name: string): Promise<void> {
   await page.getByRole('option', { name }).click();
 }
 
+/** The author withdraws the open pending version to draft and submits it again, unchanged. */
+async function resubmit(page: Page): Promise<void> {
+  await page.getByRole('button', { name: 'Withdraw to draft' }).click();
+  await page.getByRole('button', { name: 'Submit for approval' }).click();
+  const dialog = await readyDialog(page, /^Submit version \d+ for approval$/);
+  await dialog.getByRole('button', { name: 'Submit for approval' }).click();
+  await dialog.waitFor({ state: 'detached' });
+  await page.getByRole('table', { name: 'Library versions' }).getByRole('row', { name: /Awaiting approval Lin Park/ }).waitFor();
+}
+
 describe('dose-limit library: import a CSV, submit, and a second pharmacist approves', () => {
   let server: RunningServer;
   let lin: BrowserSession;
@@ -221,9 +231,23 @@ describe('dose-limit library: import a CSV, submit, and a second pharmacist appr
     await dialog.getByText('The password you signed with is not correct').waitFor();
     await snapshot(page, 'library-approve-wrong-password');
 
+    // Meanwhile lin.park takes the version back and submits it again: Tomas's signature is for
+    // the submission he reviewed, so it is refused and the page shows the version as it is now.
+    await resubmit(lin.page);
     await dialog.getByLabel('Your password').fill('lockstep-demo');
     await dialog.getByRole('button', { name: 'Sign and approve' }).click();
+    await dialog.getByRole('alert').getByText(/withdrawn and submitted again after you opened it: review its changes again/).waitFor();
+    await snapshot(page, 'library-approve-resubmitted');
+    expect(await dialog.getByLabel('Your password').count()).toBe(0);
+    await dialog.getByRole('button', { name: 'Close and review the changes' }).click();
     await dialog.waitFor({ state: 'detached' });
+    await page.getByRole('table', { name: 'Changed limits' }).getByRole('row', { name: /soft max 2 mg to 1.8 mg/ }).waitFor();
+
+    await page.getByRole('button', { name: 'Approve' }).click();
+    const again = await readyDialog(page, 'Approve version 2');
+    await again.getByLabel('Your password').fill('lockstep-demo');
+    await again.getByRole('button', { name: 'Sign and approve' }).click();
+    await again.waitFor({ state: 'detached' });
     const versions = page.getByRole('table', { name: 'Library versions' });
     await versions.getByRole('row', { name: /Version 2 Active Lin Park .* Tomas Ortiz/ }).waitFor();
     await versions.getByRole('row', { name: /Version 1 Retired/ }).waitFor();

@@ -97,8 +97,8 @@ describe('every state-changing route writes its audit event', () => {
     await step('put', '/api/library/versions/:id/rules', `${version}/rules`, 'pharmacist', { rules }, 200, 'library-version.rules-replace');
     await step('post', '/api/library/versions/:id/submit', `${version}/submit`, 'pharmacist', {}, 200, 'library-version.submit');
     await step('post', '/api/library/versions/:id/withdraw', `${version}/withdraw`, 'pharmacist', undefined, 200, 'library-version.withdraw');
-    await step('post', '/api/library/versions/:id/submit', `${version}/submit`, 'pharmacist', {}, 200, 'library-version.submit');
-    await step('post', '/api/library/versions/:id/approve', `${version}/approve`, 'secondPharmacist', { signature: { password: DEMO_PASSWORD } }, 200, 'library-version.approve');
+    const { submittedAt } = await step('post', '/api/library/versions/:id/submit', `${version}/submit`, 'pharmacist', {}, 200, 'library-version.submit');
+    await step('post', '/api/library/versions/:id/approve', `${version}/approve`, 'secondPharmacist', { signature: { password: DEMO_PASSWORD }, submittedAt }, 200, 'library-version.approve');
     const draft = await step('post', '/api/library/versions', '/api/library/versions', 'pharmacist', { wardId: 3, note: 'Trial' }, 201, 'library-version.create');
     await step('delete', '/api/library/versions/:id', `/api/library/versions/${draft.id}`, 'pharmacist', undefined, 204, 'library-version.delete');
 

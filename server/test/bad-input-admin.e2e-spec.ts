@@ -3,7 +3,7 @@ import './support/lift-password-rate-limit.js';
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { LoginDto } from '../src/auth/dto/login.dto.js';
-import { SignedRequestDto } from '../src/common/dto/signature.dto.js';
+import { ApproveVersionDto } from '../src/library/dto/approve-version.dto.js';
 import { CreateDraftDto } from '../src/library/dto/create-draft.dto.js';
 import { ReplaceRulesDto } from '../src/library/dto/replace-rules.dto.js';
 import { SubmitVersionDto } from '../src/library/dto/submit-version.dto.js';
@@ -12,7 +12,7 @@ import { UpdateUserDto } from '../src/users/dto/update-user.dto.js';
 import { UpdateWardPolicyDto } from '../src/wards/dto/update-ward-policy.dto.js';
 import { appRoutes } from './support/app-routes.js';
 import { type BadInputApp, badInputSuite, type BadInputRoute } from './support/bad-input-harness.js';
-import { BAD_INPUT_COVERAGE, CREATE_DRAFT, CREATE_USER, LOGIN, REPLACE_RULES, SIGNED, SUBMIT_VERSION, UPDATE_USER, WARD_POLICY } from './support/bad-input-specs.js';
+import { APPROVE_VERSION, BAD_INPUT_COVERAGE, CREATE_DRAFT, CREATE_USER, LOGIN, REPLACE_RULES, SUBMIT_VERSION, UPDATE_USER, WARD_POLICY } from './support/bad-input-specs.js';
 import { DEMO_PASSWORD } from './support/test-app.js';
 
 
@@ -23,11 +23,13 @@ const HARBOUR = 1;
 const CEDAR = 2;
 const SUMMIT = 4;
 const PENDING_VERSION = 5;
-const state = { draftId: 0 };
+const state = { draftId: 0, pendingSubmittedAt: '' };
 
 async function setUp({ t, tokens }: BadInputApp): Promise<void> {
   const draft = await request(t.http).post('/api/library/versions').set({ Authorization: `Bearer ${tokens.pharmacist}` }).send({ wardId: SUMMIT, note: 'Bad-input target' }).expect(201);
   state.draftId = draft.body.id;
+  const pending = await request(t.http).get(`/api/library/versions/${PENDING_VERSION}`).set({ Authorization: `Bearer ${tokens.pharmacist}` }).expect(200);
+  state.pendingSubmittedAt = pending.body.submittedAt;
 }
 
 const RULES = [
@@ -76,9 +78,9 @@ const ROUTES: BadInputRoute[] = [
     path: '/api/library/versions/:id/approve',
     url: () => `/api/library/versions/${PENDING_VERSION}/approve`,
     role: 'pharmacist',
-    spec: SIGNED,
-    dto: SignedRequestDto,
-    valid: () => ({ signature: { password: DEMO_PASSWORD } }),
+    spec: APPROVE_VERSION,
+    dto: ApproveVersionDto,
+    valid: () => ({ signature: { password: DEMO_PASSWORD }, submittedAt: state.pendingSubmittedAt }),
   },
 ];
 

@@ -118,8 +118,8 @@ describe('concurrency: simultaneous requests on one record', { timeout: 120_000 
     for (let round = 0; round < ROUNDS; round++) {
       const draft = await ok('POST', '/api/library/versions', token.lin, { wardId: SUMMIT, note: `Race round ${round}` }, 201);
       const id = draft.id as number;
-      await ok('POST', `/api/library/versions/${id}/submit`, token.lin, {}, 200);
-      const replies = await Promise.all([0, 1].map(() => call('POST', `/api/library/versions/${id}/approve`, token.tomas, SIGNED)));
+      const { submittedAt } = await ok('POST', `/api/library/versions/${id}/submit`, token.lin, {}, 200);
+      const replies = await Promise.all([0, 1].map(() => call('POST', `/api/library/versions/${id}/approve`, token.tomas, { ...SIGNED, submittedAt })));
       expect(statuses(replies), JSON.stringify(replies)).toEqual([200, 409]);
       const active = await db.query(`SELECT id FROM library_versions WHERE wardId = ? AND status = 'active'`, [SUMMIT]);
       expect(active).toEqual([{ id }]);
@@ -142,9 +142,9 @@ describe('concurrency: simultaneous requests on one record', { timeout: 120_000 
     for (let round = 0; round < ROUNDS; round++) {
       const draft = await ok('POST', '/api/library/versions', token.lin, { wardId: SUMMIT }, 201);
       const id = draft.id as number;
-      await ok('POST', `/api/library/versions/${id}/submit`, token.lin, {}, 200);
+      const { submittedAt } = await ok('POST', `/api/library/versions/${id}/submit`, token.lin, {}, 200);
       const [approve, withdraw] = await Promise.all([
-        call('POST', `/api/library/versions/${id}/approve`, token.tomas, SIGNED),
+        call('POST', `/api/library/versions/${id}/approve`, token.tomas, { ...SIGNED, submittedAt }),
         call('POST', `/api/library/versions/${id}/withdraw`, token.lin, {}),
       ]);
       expect([approve.status, withdraw.status].sort()).toEqual([200, 409]);

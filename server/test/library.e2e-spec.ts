@@ -150,19 +150,23 @@ describe('dose-limit library', () => {
     // A second open version for the same ward is a conflict.
     await request(t.http).post('/api/library/versions').set(as(tomas)).send({ wardId: CEDAR }).expect(409);
 
-    await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tomas)).send({ signature: { password: DEMO_PASSWORD } }).expect(409);
-    await request(t.http).post(`/api/library/versions/${id}/submit`).set(as(tokens.pharmacist)).send({}).expect(200);
+    const signed = (submittedAt: string, password = DEMO_PASSWORD) => ({ signature: { password }, submittedAt });
+    await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tomas)).send(signed(new Date().toISOString())).expect(409);
+    const submitted = await request(t.http).post(`/api/library/versions/${id}/submit`).set(as(tokens.pharmacist)).send({}).expect(200);
+    const { submittedAt } = submitted.body;
     await request(t.http).put(`/api/library/versions/${id}/rules`).set(as(tokens.pharmacist)).send({ rules: [] }).expect(409);
 
-    const self = await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tokens.pharmacist)).send({ signature: { password: DEMO_PASSWORD } }).expect(403);
+    const self = await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tokens.pharmacist)).send(signed(submittedAt)).expect(403);
     expect(self.body.message).toContain('second pharmacist');
-    const wrongPassword = await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tomas)).send({ signature: { password: 'not-it' } }).expect(401);
+    const wrongPassword = await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tomas)).send(signed(submittedAt, 'not-it')).expect(401);
     expect(wrongPassword.body.errors[0].field).toBe('signature.password');
     await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tomas)).send({}).expect(400);
+    const unnamed = await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tomas)).send({ signature: { password: DEMO_PASSWORD } }).expect(400);
+    expect(unnamed.body.errors).toEqual([{ field: 'submittedAt', message: 'submittedAt is required: the submission you reviewed' }]);
 
-    const approved = await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tomas)).send({ signature: { password: DEMO_PASSWORD } }).expect(200);
+    const approved = await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tomas)).send(signed(submittedAt)).expect(200);
     expect(approved.body).toMatchObject({ status: 'active', approverName: 'Tomas Ortiz' });
-    await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tomas)).send({ signature: { password: DEMO_PASSWORD } }).expect(409);
+    await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tomas)).send(signed(submittedAt)).expect(409);
 
     const versions = await request(t.http).get(`/api/library/versions?wardId=${CEDAR}`).set(as(tokens.nurse));
     expect(versions.body.map((v: { number: number; status: string }) => [v.number, v.status])).toEqual([
@@ -172,6 +176,35 @@ describe('dose-limit library', () => {
     const active = await request(t.http).get(`/api/wards/${CEDAR}/library`).set(as(tokens.nurse)).expect(200);
     expect(active.body.id).toBe(id);
     expect(active.body.rules.find((rule: { drugName: string }) => rule.drugName === 'morphine').limits.demandDose.softMax).toBe(1.8);
+  });
+
+  it('refuses an approval of a version withdrawn, edited and submitted again after the approver opened it', async () => {
+    const draft = await request(t.http).post('/api/library/versions').set(as(tokens.pharmacist)).send({ wardId: CEDAR, note: 'Second look' }).expect(201);
+    const id = draft.body.id;
+    const reviewed = await request(t.http).post(`/api/library/versions/${id}/submit`).set(as(tokens.pharmacist)).send({}).expect(200);
+
+    // The author takes it back, drops a rule and submits again while Tomas has it open.
+    await request(t.http).post(`/api/library/versions/${id}/withdraw`).set(as(tokens.pharmacist)).expect(200);
+    const rules = draft.body.rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }: Record<string, unknown>) => ({ drugId, concentrationPerMl, doseUnit, perKg, limits }));
+    expect(rules.length).toBeGreaterThan(1);
+    await request(t.http).put(`/api/library/versions/${id}/rules`).set(as(tokens.pharmacist)).send({ rules: rules.slice(1) }).expect(200);
+    const resubmitted = await request(t.http).post(`/api/library/versions/${id}/submit`).set(as(tokens.pharmacist)).send({}).expect(200);
+    expect(resubmitted.body.submittedAt).not.toBe(reviewed.body.submittedAt);
+
+    const stale = await request(t.http)
+      .post(`/api/library/versions/${id}/approve`)
+      .set(as(tomas))
+      .send({ signature: { password: DEMO_PASSWORD }, submittedAt: reviewed.body.submittedAt })
+      .expect(409);
+    expect(stale.body.message).toMatch(/withdrawn and submitted again after you opened it: review its changes again/);
+    const unchanged = await request(t.http).get(`/api/library/versions/${id}`).set(as(tomas)).expect(200);
+    expect(unchanged.body).toMatchObject({ status: 'pending_approval', approverId: null });
+
+    await request(t.http)
+      .post(`/api/library/versions/${id}/approve`)
+      .set(as(tomas))
+      .send({ signature: { password: DEMO_PASSWORD }, submittedAt: resubmitted.body.submittedAt })
+      .expect(200);
   });
 
   it('exports a version as CSV that imports back to the same rules', async () => {

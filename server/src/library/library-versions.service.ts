@@ -95,12 +95,16 @@ export class LibraryVersionsService {
     });
   }
 
-  async approve(id: number, approver: AuthUser, password: string): Promise<LibraryVersionDetail> {
+  /** `reviewedSubmission` is the version's `submittedAt` as the approver saw it. */
+  async approve(id: number, approver: AuthUser, password: string, reviewedSubmission: string): Promise<LibraryVersionDetail> {
     await this.users.verifySignature(approver.id, password);
     return this.dataSource.transaction(async (manager) => {
       const version = await this.lockedVersion(manager, id, ['pending_approval'], 'approve it');
       if (version.authorId === approver.id) {
         throw new ForbiddenException('A second pharmacist must approve: you wrote this version');
+      }
+      if (version.submittedAt?.getTime() !== Date.parse(reviewedSubmission)) {
+        throw new ConflictException(`Version ${version.number} was withdrawn and submitted again after you opened it: review its changes again, then approve`);
       }
       const now = new Date();
       await manager.update(LibraryVersion, { wardId: version.wardId, status: 'active' }, { status: 'retired', retiredAt: now });

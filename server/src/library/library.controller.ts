@@ -6,9 +6,9 @@ import { ApiBody, ApiConsumes, ApiCreatedResponse, ApiOkResponse, ApiOperation, 
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 import { Roles } from '../auth/decorators/roles.decorator.js';
-import { SignedRequestDto } from '../common/dto/signature.dto.js';
 import { ApiErrors } from '../common/openapi/api-errors.decorator.js';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
+import { ApproveVersionDto } from './dto/approve-version.dto.js';
 import { CreateDraftDto } from './dto/create-draft.dto.js';
 import { ImportLibraryUploadModel } from './dto/import-library-upload.model.js';
 import { ImportLibraryDto } from './dto/import-library.dto.js';
@@ -99,8 +99,8 @@ export class LibraryController {
   @Post('versions/:id/approve')
   @HttpCode(200)
   @Roles('pharmacist')
-  approve(@Param('id', ParseIdPipe) id: number, @Body() body: SignedRequestDto, @CurrentUser() user: AuthUser): Promise<LibraryVersionDetail> {
-    return this.versions.approve(id, user, body.signature.password);
+  approve(@Param('id', ParseIdPipe) id: number, @Body() body: ApproveVersionDto, @CurrentUser() user: AuthUser): Promise<LibraryVersionDetail> {
+    return this.versions.approve(id, user, body.signature.password, body.submittedAt);
   }
 
   @ApiOperation({ summary: 'Delete a draft' })

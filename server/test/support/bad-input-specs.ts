@@ -44,6 +44,7 @@ export const CREATE_ORDER: BodySpec = {
 
 export const REASON: BodySpec = { reason };
 export const SIGNED: BodySpec = { signature: { type: 'object', fields: SIGNATURE } };
+export const APPROVE_VERSION: BodySpec = { ...SIGNED, submittedAt: { type: 'datetime' } };
 
 export const RELEASE: BodySpec = {
   concentrationPerMl: positive,

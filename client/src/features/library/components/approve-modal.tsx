@@ -15,7 +15,12 @@ export interface ApproveModalProps {
 /** The second pharmacist's approval, signed with their password typed again. */
 export function ApproveModal({ version, onClose }: ApproveModalProps) {
   const approve = useApproveVersion();
+  // The submission on screen when the dialog opened is the one signed, even if a refetch behind
+  // the dialog brings a newer one.
+  const [reviewedSubmission] = useState(version.submittedAt);
   const [refusal, setRefusal] = useState<string | null>(null);
+  // After a 409 the version on screen is not the one this dialog would sign: review it first.
+  const [mustReview, setMustReview] = useState(false);
   const form = useForm({
     initialValues: { password: '' },
     validate: { password: (value) => (value ? null : 'Enter your password to sign') },
@@ -24,7 +29,7 @@ export function ApproveModal({ version, onClose }: ApproveModalProps) {
   const submit = form.onSubmit(({ password }) => {
     setRefusal(null);
     approve.mutate(
-      { versionId: version.id, password },
+      { versionId: version.id, submittedAt: reviewedSubmission ?? '', password },
       {
         onSuccess: (approved) => {
           notifySuccess('Version approved', `Version ${approved.number} is now ${approved.wardName}'s active dose-limit library.`);
@@ -34,6 +39,7 @@ export function ApproveModal({ version, onClose }: ApproveModalProps) {
           form.setFieldValue('password', '');
           if (isSignatureError(error) && isApiRequestError(error)) form.setFieldError('password', error.message);
           else setRefusal(errorMessage(error));
+          if (isApiRequestError(error) && error.status === 409) setMustReview(true);
         },
       },
     );
@@ -52,21 +58,31 @@ export function ApproveModal({ version, onClose }: ApproveModalProps) {
               {refusal}
             </Alert>
           ) : null}
-          <PasswordInput
-            label="Your password"
-            description="Type your password again to sign the approval"
-            autoComplete="current-password"
-            data-autofocus
-            {...form.getInputProps('password')}
-          />
-          <Group justify="flex-end">
-            <Button variant="default" onClick={onClose}>
-              Cancel
-            </Button>
-            <Button type="submit" leftSection={<IconSignature size={16} aria-hidden />} loading={approve.isPending}>
-              Sign and approve
-            </Button>
-          </Group>
+          {mustReview ? (
+            <Group justify="flex-end">
+              <Button onClick={onClose} data-autofocus>
+                Close and review the changes
+              </Button>
+            </Group>
+          ) : (
+            <>
+              <PasswordInput
+                label="Your password"
+                description="Type your password again to sign the approval"
+                autoComplete="current-password"
+                data-autofocus
+                {...form.getInputProps('password')}
+              />
+              <Group justify="flex-end">
+                <Button variant="default" onClick={onClose}>
+                  Cancel
+                </Button>
+                <Button type="submit" leftSection={<IconSignature size={16} aria-hidden />} loading={approve.isPending}>
+                  Sign and approve
+                </Button>
+              </Group>
+            </>
+          )}
         </Stack>
       </form>
     </Modal>
