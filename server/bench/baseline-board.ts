@@ -17,7 +17,7 @@ const SQL = {
       o.reviewDate, o.signedAt, o.statusChangedAt, o.startedAt, p.bed, p.familyName, p.givenName, p.mrn, p.dateOfBirth, p.weightKg, d.genericName
     FROM pca_orders o LEFT JOIN patients p ON p.id = o.patientId LEFT JOIN drugs d ON d.id = o.drugId
     WHERE o.status IN ('awaiting_verification', 'verified', 'active') AND p.wardId = ?`,
-  observations: (n: number) => `SELECT id, orderId, releaseId, at, attempts, delivered, volumeInfusedMl FROM observations WHERE orderId IN (${marks(n)}) AND at >= ? ORDER BY at ASC, id ASC`,
+  observations: (n: number) => `SELECT id, orderId, releaseId, at, attempts, delivered, volumeInfusedMl FROM observations WHERE orderId IN (${marks(n)}) AND at >= ? ORDER BY orderId ASC, at ASC, id ASC`,
   latest: (n: number) => `SELECT id, orderId, releaseId, at, painScore, sedationLevel, respiratoryRate, spo2, syringeRemainingMl FROM observations
     WHERE id IN (SELECT max(id) FROM observations WHERE orderId IN (${marks(n)}) GROUP BY orderId)`,
   flags: (n: number) => `SELECT * FROM flags WHERE orderId IN (${marks(n)}) AND acknowledgedAt IS NULL ORDER BY raisedAt DESC`,

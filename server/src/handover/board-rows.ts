@@ -2,16 +2,18 @@ import { ageInYears, compareHandoverRows, riskTier, type HandoverRow, type Pendi
 import { toFlagResponse } from '../flags/flags.service.js';
 import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { toSignoffResponse } from './dto/signoff-response.js';
-import { type BoardInputs, rowFigures } from './row-figures.js';
+import { type BoardInputs, inputsByOrder, type OrderInputs, rowFigures } from './row-figures.js';
 
 /**
  * The board's rows, sorted by risk, from what was fetched for the ward's orders. Pure: the
  * benchmark's bare baseline server builds its answer with this too, from its own queries.
  */
 export function boardRows(orders: PcaOrder[], inputs: BoardInputs, policy: WardPolicy, shift: { endsAt: string }, now: Date): HandoverRow[] {
+  const byOrder = inputsByOrder(inputs);
   const rows = orders.map((order) => {
-    const figures = rowFigures(order, inputs, policy, now, Date.parse(shift.endsAt));
-    const openFlags = inputs.flags.filter((flag) => flag.orderId === order.id);
+    const mine = byOrder.get(order.id) ?? NO_INPUTS;
+    const figures = rowFigures(order, mine, policy, now, Date.parse(shift.endsAt));
+    const openFlags = mine.flags;
     const flags = {
       urgent: openFlags.filter((flag) => flag.severity === 'urgent').length,
       review: openFlags.filter((flag) => flag.severity === 'review').length,
@@ -37,19 +39,21 @@ export function boardRows(orders: PcaOrder[], inputs: BoardInputs, policy: WardP
       minutesSinceStart: order.startedAt ? Math.floor((now.getTime() - order.startedAt.getTime()) / 60_000) : null,
       ...figures,
       flags,
-      pendingTasks: pendingTasks(order, inputs, now),
-      signoffs: inputs.signoffs.filter((signoff) => signoff.orderId === order.id).map(toSignoffResponse),
+      pendingTasks: pendingTasks(order, mine, now),
+      signoffs: mine.signoffs.map(toSignoffResponse),
     };
     return { ...row, riskTier: riskTier(row) };
   });
   return rows.sort(compareHandoverRows);
 }
 
-function pendingTasks(order: PcaOrder, inputs: BoardInputs, now: Date): PendingTask[] {
+const NO_INPUTS: OrderInputs = { observations: [], latest: [], flags: [], releases: [], starts: [], boluses: [], discrepancies: [], signoffs: [] };
+
+function pendingTasks(order: PcaOrder, mine: OrderInputs, now: Date): PendingTask[] {
   const tasks: PendingTask[] = [];
   if (order.status === 'awaiting_verification') tasks.push({ code: 'awaiting_verification', since: order.signedAt.toISOString() });
   if (order.status === 'verified') tasks.push({ code: 'awaiting_bedside_check', since: order.statusChangedAt.toISOString() });
-  const discrepancy = inputs.discrepancies.find((reconciliation) => reconciliation.release.orderId === order.id);
+  const discrepancy = mine.discrepancies[0];
   if (discrepancy) tasks.push({ code: 'reconciliation_discrepancy', since: discrepancy.at.toISOString() });
   if (order.reviewDate < now.toISOString().slice(0, 10)) tasks.push({ code: 'review_date_passed', since: order.reviewDate });
   return tasks;
