@@ -4,6 +4,7 @@ import { startServer, type RunningServer } from './support/server.js';
 
 describe('roles are enforced by the API, not only by the screens', () => {
   let server: RunningServer;
+  const statusWith = (token: string, path: string) => fetch(`${server.baseUrl}${path}`, { headers: { Authorization: `Bearer ${token}` } });
   let browser: BrowserSession;
 
   beforeAll(async () => {
@@ -15,19 +16,20 @@ describe('roles are enforced by the API, not only by the screens', () => {
     await server?.stop();
   });
 
+  let kaiToken = '';
+
   it('a nurse calling an admin route with her own token gets 403', async () => {
     const { page } = browser;
     await signIn(page, 'kai.mendes');
     await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
-    const status = await page.evaluate(async () => {
-      const token = Object.keys(sessionStorage)
-        .map((key) => sessionStorage.getItem(key) ?? '')
-        .map((value) => value.match(/eyJ[\w-]+\.[\w-]+\.[\w-]+/)?.[0])
-        .find(Boolean);
-      const response = await fetch('/api/users', { headers: { Authorization: `Bearer ${token}` } });
-      return response.status;
-    });
-    expect(status).toBe(403);
+    kaiToken = await page.evaluate(
+      () =>
+        Object.keys(sessionStorage)
+          .map((key) => sessionStorage.getItem(key) ?? '')
+          .map((value) => value.match(/eyJ[\w-]+\.[\w-]+\.[\w-]+/)?.[0])
+          .find(Boolean) ?? '',
+    );
+    expect((await statusWith(kaiToken, '/api/users')).status).toBe(403);
   });
 
   it('a nurse who types the admin address is not shown the users screen', async () => {
@@ -42,5 +44,9 @@ describe('roles are enforced by the API, not only by the screens', () => {
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.goto('/patients');
     await expect.poll(() => page.url()).toContain('/sign-in');
+  });
+
+  it('after "Sign out" the session’s token is refused by the server too', async () => {
+    await expect.poll(async () => (await statusWith(kaiToken, '/api/auth/me')).status).toBe(401);
   });
 });

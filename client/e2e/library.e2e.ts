@@ -190,7 +190,7 @@ describe('dose-limit library: import a CSV, submit, and a second pharmacist appr
   it('checks limit order in the rules editor before saving', async () => {
     const { page } = lin;
     await page.getByRole('button', { name: 'Edit rules' }).click();
-    const drawer = page.getByRole('dialog', { name: /Edit rules: Cedar version 2/ });
+    const drawer = await readyDialog(page, /Edit rules: Cedar version 2/);
     // Rules are in drug-name order: fentaNYL, HYDROmorphone, morphine.
     const morphine = drawer.getByRole('group', { name: 'Rule 3: morphine 1 mg/mL' });
     await morphine.getByLabel('Demand dose hard max').fill('1');

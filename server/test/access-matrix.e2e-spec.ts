@@ -25,6 +25,8 @@ type MatrixRow = {
   body?: object;
   /** Server-sent events: check the status and headers, then hang up. */
   stream?: true;
+  /** Ends the caller's session: sent with a fresh sign-in of their own, so the shared tokens live on. */
+  endsSession?: true;
 };
 
 // Demo data: wards 1–4 (Harbour, Cedar, Wren, Summit), patients 1–12, drugs 1–3; library versions
@@ -42,6 +44,7 @@ export const ACCESS_MATRIX: MatrixRow[] = [
   { method: 'GET', path: '/api/health', url: '/api/health', access: 'public', ok: 200 },
   { method: 'POST', path: '/api/auth/login', url: '/api/auth/login', access: 'public', ok: 400, body: EMPTY },
   { method: 'GET', path: '/api/auth/me', url: '/api/auth/me', access: 'signed-in', ok: 200 },
+  { method: 'POST', path: '/api/auth/logout', url: '/api/auth/logout', access: 'signed-in', ok: 204, endsSession: true },
   { method: 'GET', path: '/api/auth/demo-accounts', url: '/api/auth/demo-accounts', access: 'public', ok: 200 },
   { method: 'GET', path: '/api/auth/lockouts', url: '/api/auth/lockouts', access: ['admin'], ok: 200 },
   // Nothing is locked in a fresh app, so an admin's unlock finds nothing (404) and changes nothing.
@@ -157,7 +160,7 @@ describe('access matrix: every route × every role and anonymous', () => {
   });
 
   const call = async (row: MatrixRow, caller: Caller): Promise<number> => {
-    const token = caller === 'anonymous' ? undefined : tokens[caller];
+    const token = caller === 'anonymous' ? undefined : row.endsSession ? await t.tokenFor(DEMO_USER_BY_ROLE[caller]) : tokens[caller];
     if (!row.stream) return (await api.call(row.method, row.url, { token, body: row.body })).status;
     const abort = new AbortController();
     const response = await fetch(`${api.baseUrl}${row.url}`, { headers: token ? { Authorization: `Bearer ${token}` } : {}, signal: abort.signal });

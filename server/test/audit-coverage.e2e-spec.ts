@@ -108,6 +108,9 @@ describe('every state-changing route writes its audit event', () => {
     for (let attempt = 0; attempt < 5; attempt++) await request(t.http).post('/api/auth/login').send({ username: 'no.such.user', password: 'not-the-password' });
     await step('delete', '/api/auth/lockouts/addresses/:address', '/api/auth/lockouts/addresses/127.0.0.1', 'admin', undefined, 204, 'sign-in.unlock');
 
+    // Last: it ends the nurse's session.
+    await step('post', '/api/auth/logout', '/api/auth/logout', 'nurse', undefined, 204, 'user.sign-out');
+
     const writeRoutes = appRoutes(t.app).filter((key) => WRITE_METHODS.has(key.split(' ')[0]) && !NOT_STATE_CHANGING.has(key));
     expect(writeRoutes.filter((key) => !exercised.has(key)), 'write routes this walk does not call').toEqual([]);
 

@@ -1,6 +1,7 @@
 import type { LoggerService } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import request from 'supertest';
+import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 import { IDENTITY, ROSA, SETTINGS, verifiedOrderWithSyringe, ORDER as PCA_ORDER } from './support/pca.js';
 import { createTestApp, DEMO_PASSWORD, type TestApp } from './support/test-app.js';
@@ -143,6 +144,35 @@ describe('hardening', () => {
       const expired = t.app.get(JwtService).sign({ sub: 5, username: 'sam.rivera', role: 'admin' }, { expiresIn: -60 });
       const response = await request(t.http).get('/api/auth/me').set(bearer(expired)).expect(401);
       expect(response.body).toEqual({ statusCode: 401, message: 'Please sign in again: your session is missing or has expired' });
+    });
+
+    it('signing out ends that session on the server: its token is refused, other sessions go on', async () => {
+      const here = await t.tokenFor('mei.tan');
+      const elsewhere = await t.tokenFor('mei.tan');
+      const jwt = t.app.get(JwtService);
+      expect(jwt.decode<{ jti: string }>(here).jti).not.toBe(jwt.decode<{ jti: string }>(elsewhere).jti);
+
+      await request(t.http).post('/api/auth/logout').set(bearer(here)).expect(204);
+      const refused = await request(t.http).get('/api/auth/me').set(bearer(here)).expect(401);
+      expect(refused.body.message).toBe('Please sign in again: your session is missing or has expired');
+      await request(t.http).post('/api/auth/logout').set(bearer(here)).expect(401);
+      await request(t.http).get('/api/auth/me').set(bearer(elsewhere)).expect(200);
+
+      const [row] = await t.app.get(DataSource).query('SELECT userId, expiresAt FROM revoked_tokens WHERE jti = ?', [jwt.decode<{ jti: string }>(here).jti]);
+      expect(row.userId).toBe(6);
+      const audit = await request(t.http).get('/api/audit?action=user.sign-out&limit=1').set(bearer(admin)).expect(200);
+      expect(audit.body.events[0]).toMatchObject({ action: 'user.sign-out', entityType: 'user', entityId: '6', actorName: 'Mei Tan' });
+    });
+
+    it('clears revoked tokens once they would have expired anyway', async () => {
+      await t.app.get(DataSource).query(`INSERT INTO revoked_tokens (jti, userId, expiresAt) VALUES ('00000000-0000-4000-8000-000000000000', 4, '2020-01-01 00:00:00.000')`);
+      await request(t.http).post('/api/auth/logout').set(bearer(await t.tokenFor('kai.mendes'))).expect(204);
+      expect(await t.app.get(DataSource).query(`SELECT jti FROM revoked_tokens WHERE expiresAt < '2026-01-01'`)).toEqual([]);
+    });
+
+    it('refuses a token without a session id, which Lockstep never issues', async () => {
+      const bare = t.app.get(JwtService).sign({ sub: 5, username: 'sam.rivera', role: 'admin' });
+      await request(t.http).get('/api/auth/me').set(bearer(bare)).expect(401);
     });
   });
 

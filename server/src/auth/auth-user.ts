@@ -7,4 +7,8 @@ export interface JwtPayload {
   sub: number;
   username: string;
   role: string;
+  /** The session's id, so signing out can revoke this one token (set by jsonwebtoken from `jwtid`). */
+  jti?: string;
+  /** Expiry in seconds since the epoch (set by jsonwebtoken). */
+  exp?: number;
 }

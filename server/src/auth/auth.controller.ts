@@ -1,5 +1,7 @@
-import { Body, Controller, Get, HttpCode, Post } from '@nestjs/common';
+import { Body, Controller, Get, HttpCode, Post, Req } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
+import type { Request } from 'express';
+import { ExtractJwt } from 'passport-jwt';
 import type { DemoAccounts, LoginResponse } from '@lockstep/shared';
 import { ApiOperation } from '@nestjs/swagger';
 import { ApiError } from '../common/openapi/api-errors.decorator.js';
@@ -25,6 +27,13 @@ export class AuthController {
   @HttpCode(200)
   login(@Body() body: LoginDto): Promise<LoginResponse> {
     return this.auth.login(body);
+  }
+
+  @ApiOperation({ summary: 'Sign out: this session’s token is refused from now on' })
+  @Post('logout')
+  @HttpCode(204)
+  async logout(@CurrentUser() user: AuthUser, @Req() request: Request): Promise<void> {
+    await this.auth.logout(user, ExtractJwt.fromAuthHeaderAsBearerToken()(request) ?? '');
   }
 
   @ApiOperation({ summary: 'The signed-in user' })

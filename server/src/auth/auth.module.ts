@@ -12,6 +12,7 @@ import { AuthService } from './auth.service.js';
 import { JwtAuthGuard } from './guards/jwt-auth.guard.js';
 import { RolesGuard } from './guards/roles.guard.js';
 import { JwtStrategy } from './jwt.strategy.js';
+import { TokenRevocationService } from './token-revocation.service.js';
 import { LockoutsController } from './lockouts.controller.js';
 import { LockoutsService } from './lockouts.service.js';
 
@@ -32,6 +33,7 @@ import { LockoutsService } from './lockouts.service.js';
   providers: [
     AuthService,
     LockoutsService,
+    TokenRevocationService,
     JwtStrategy,
     // Order matters: limit password-carrying requests before any work, authenticate, then check the role.
     { provide: APP_GUARD, useClass: PasswordRateGuard },

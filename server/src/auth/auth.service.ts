@@ -1,10 +1,12 @@
+import { randomUUID } from 'node:crypto';
 import { Injectable, UnauthorizedException } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
 import type { LoginResponse } from '@lockstep/shared';
 import { PasswordAttemptsService } from '../common/throttling/password-attempts.service.js';
 import { UsersService } from '../users/users.service.js';
-import type { JwtPayload } from './auth-user.js';
+import type { AuthUser, JwtPayload } from './auth-user.js';
 import type { LoginDto } from './dto/login.dto.js';
+import { TokenRevocationService } from './token-revocation.service.js';
 
 /** One message for every failed sign-in, so nobody can learn which usernames exist. */
 export const BAD_CREDENTIALS = 'Username or password is incorrect';
@@ -15,6 +17,7 @@ export class AuthService {
     private readonly users: UsersService,
     private readonly jwt: JwtService,
     private readonly attempts: PasswordAttemptsService,
+    private readonly revocations: TokenRevocationService,
   ) {}
 
   async login({ username, password }: LoginDto): Promise<LoginResponse> {
@@ -22,6 +25,13 @@ export class AuthService {
     const user = await this.attempts.check(name, () => this.users.verifyCredentials(name, password));
     if (!user) throw new UnauthorizedException(BAD_CREDENTIALS);
     const payload: JwtPayload = { sub: user.id, username: user.username, role: user.role };
-    return { accessToken: await this.jwt.signAsync(payload), user };
+    return { accessToken: await this.jwt.signAsync(payload, { jwtid: randomUUID() }), user };
+  }
+
+  /** `token` is the caller's own, already verified by the guard (so it has a `jti` and an `exp`). */
+  async logout(user: AuthUser, token: string): Promise<void> {
+    const { jti, exp } = this.jwt.decode<JwtPayload>(token);
+    if (!jti || !exp) throw new UnauthorizedException('This session cannot be signed out');
+    await this.revocations.revoke(user, { jti, expiresAt: new Date(exp * 1000) });
   }
 }

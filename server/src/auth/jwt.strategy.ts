@@ -6,12 +6,14 @@ import { ExtractJwt, Strategy } from 'passport-jwt';
 import type { Env } from '../config/env.validation.js';
 import { UsersService } from '../users/users.service.js';
 import type { AuthUser, JwtPayload } from './auth-user.js';
+import { TokenRevocationService } from './token-revocation.service.js';
 
 @Injectable()
 export class JwtStrategy extends PassportStrategy(Strategy) {
   constructor(
     config: ConfigService<Env, true>,
     private readonly users: UsersService,
+    private readonly revocations: TokenRevocationService,
   ) {
     super({
       jwtFromRequest: ExtractJwt.fromAuthHeaderAsBearerToken(),
@@ -23,8 +25,12 @@ export class JwtStrategy extends PassportStrategy(Strategy) {
     });
   }
 
-  /** Reads the live row so a deactivated user or changed role takes effect at once. */
+  /**
+   * Refuses a session signed out of (and a token without a session id, which Lockstep never
+   * issues), then reads the live row so a deactivated user or changed role takes effect at once.
+   */
   async validate(payload: JwtPayload): Promise<AuthUser | null> {
+    if (!payload.jti || (await this.revocations.isRevoked(payload.jti))) return null;
     const user = await this.users.findActiveSessionUser(payload.sub);
     return user ?? null;
   }

@@ -1,4 +1,5 @@
 import { AuditEvent } from '../audit/entities/audit-event.entity.js';
+import { RevokedToken } from '../auth/entities/revoked-token.entity.js';
 import { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
 import { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
 import { ReleaseReconciliation } from '../bedside/entities/release-reconciliation.entity.js';
@@ -17,4 +18,4 @@ import { User } from '../users/entities/user.entity.js';
 import { Ward } from '../wards/entities/ward.entity.js';
 
 /** Every entity, for the data source used outside Nest (migrations, reset, schema check). */
-export const ENTITIES = [Ward, User, Patient, Drug, LibraryVersion, LimitRule, PcaOrder, OrderEvent, SyringeRelease, MailboxMessage, BedsideCheck, ClinicianBolus, ReleaseReconciliation, Flag, Observation, HandoverSignoff, AuditEvent];
+export const ENTITIES = [Ward, User, Patient, Drug, LibraryVersion, LimitRule, PcaOrder, OrderEvent, SyringeRelease, MailboxMessage, BedsideCheck, ClinicianBolus, ReleaseReconciliation, Flag, Observation, HandoverSignoff, AuditEvent, RevokedToken];

@@ -179,4 +179,5 @@ export const BAD_INPUT_COVERAGE: Record<string, string> = {
   'DELETE /api/library/versions/:param': 'no body',
   'DELETE /api/auth/lockouts/usernames/:param': 'no body',
   'DELETE /api/auth/lockouts/addresses/:param': 'no body',
+  'POST /api/auth/logout': 'no body',
 };

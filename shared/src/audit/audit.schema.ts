@@ -14,6 +14,7 @@ export const PHARMACY_AUDIT_ENTITY_TYPES: readonly AuditEntityType[] = ['order',
 export const AUDIT_ACTION_LABELS = {
   'user.create': 'User created',
   'user.update': 'User changed',
+  'user.sign-out': 'Signed out',
   'ward.policy-update': 'Ward policy changed',
   'sign-in.unlock': 'Sign-in lock cleared',
   'library-version.create': 'Library draft created',

@@ -1,6 +1,7 @@
 import { useCallback, useSyncExternalStore } from 'react';
 import type { SessionUser } from '@lockstep/shared';
 import { queryClient } from '../query-client';
+import { revokeToken } from './revoke-token';
 import { endSession, getSession, startSession, subscribeSession, type Session, type SessionEndReason } from './session-store';
 
 export interface SessionState {
@@ -10,8 +11,10 @@ export interface SessionState {
   signOut: () => void;
 }
 
-/** Ends the session and forgets everything cached for this person. */
+/** Ends the session, on the server too, and forgets everything cached for this person. */
 export function signOutFor(reason: SessionEndReason): void {
+  const token = getSession()?.accessToken;
+  if (token) revokeToken(token);
   endSession(reason);
   queryClient.clear();
 }
