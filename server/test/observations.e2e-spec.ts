@@ -1,4 +1,5 @@
 import request from 'supertest';
+import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { waitForMail } from './support/mailbox.js';
 import { activeOrder, ORDER, SETTINGS } from './support/pca.js';
@@ -95,6 +96,28 @@ describe('observations, flags, usage and ward policy', () => {
     await request(t.http).get(`/api/orders/${order.id}/usage?hours=100`).set(as('kai')).expect(400);
     const list = await request(t.http).get(`/api/orders/${order.id}/observations`).set(as('amara')).expect(200);
     expect(list.body).toHaveLength(1);
+  });
+
+  it('reads only the days its figures use, and still finds an older last observation for what is due', async () => {
+    const order = await start();
+    await observe(order.id, { ...CALM, attempts: 6, delivered: 4, volumeInfusedMl: 4, syringeRemainingMl: 46 }).expect(201);
+    // Move the PCA back: started four days ago, last observed three days ago. Nothing is left
+    // inside the window or the last 24 hours.
+    const db = t.app.get(DataSource);
+    const back = (column: string, days: number) => `${column} = strftime('%Y-%m-%d %H:%M:%f', ${column}, '-${days} days')`;
+    await db.query(`UPDATE observations SET ${back('at', 3)} WHERE orderId = ?`, [order.id]);
+    await db.query(`UPDATE bedside_checks SET ${back('firstAt', 4)}, ${back('secondAt', 4)} WHERE orderId = ?`, [order.id]);
+    await db.query(`UPDATE pca_orders SET ${back('startedAt', 4)} WHERE id = ?`, [order.id]);
+
+    const usage = await request(t.http).get(`/api/orders/${order.id}/usage?hours=8`).set(as('kai')).expect(200);
+    expect(usage.body.totals).toMatchObject({ attempts: 0, delivered: 0, dose: 0 });
+    expect(usage.body.rolling24hDose).toBe(0);
+    // Due an hour or two (the ward's intervals) after that observation three days ago, not after
+    // the start four days ago.
+    const overdueHours = usage.body.nextObservation.overdueMinutes / 60;
+    expect(overdueHours).toBeGreaterThan(3 * 24 - 2.1);
+    expect(overdueHours).toBeLessThan(3 * 24);
+    expect(usage.body.nextObservation.severity).not.toBeNull();
   });
 
   it('flags a syringe running low once per syringe and asks pharmacy for the next one', async () => {

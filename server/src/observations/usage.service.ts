@@ -1,6 +1,6 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { type DataSource, In } from 'typeorm';
+import { type DataSource, In, MoreThanOrEqual } from 'typeorm';
 import { observationDue, projectedEmptyAt, usageSummary, type ObservationDue, type SyringeReading, type UsageSummary } from '@lockstep/shared';
 import { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
 import { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
@@ -25,9 +25,11 @@ export class UsageService {
   async usage(orderId: number, hours: number, now = new Date()): Promise<UsageResponse> {
     const manager = this.dataSource.manager;
     const order = await this.orders.load(manager, orderId);
+    // Only the readings the figures can use (the window, the rolling 24 hours, and a day before
+    // them for the first differences), by index: a PCA running for weeks reads no more than a new one.
     const since = new Date(now.getTime() - Math.max(hours, 24) * 3_600_000 - 24 * 3_600_000);
-    const observations = await manager.find(Observation, { where: { orderId }, order: { at: 'ASC', id: 'ASC' } });
-    const recent = observations.filter((observation) => observation.at >= since);
+    const recent = await manager.find(Observation, { where: { orderId, at: MoreThanOrEqual(since) }, order: { at: 'ASC', id: 'ASC' } });
+    const last = recent.at(-1) ?? (await manager.findOne(Observation, { where: { orderId }, order: { at: 'DESC', id: 'DESC' } }));
     const releaseIds = [...new Set(recent.map((observation) => observation.releaseId))];
     // Each syringe's counters start at zero when its bedside check matched.
     const starts = releaseIds.length === 0 ? [] : await manager.find(BedsideCheck, { where: { orderId, status: 'matched', releaseId: In(releaseIds) } });
@@ -35,10 +37,9 @@ export class UsageService {
       ...starts.map((check) => ({ syringeId: check.releaseId, at: (check.secondAt ?? check.firstAt).toISOString(), attempts: 0, delivered: 0, volumeInfusedMl: 0 })),
       ...recent.map((o) => ({ syringeId: o.releaseId, at: o.at.toISOString(), attempts: o.attempts, delivered: o.delivered, volumeInfusedMl: o.volumeInfusedMl })),
     ];
-    const boluses = await manager.find(ClinicianBolus, { where: { orderId } });
+    const boluses = await manager.find(ClinicianBolus, { where: { orderId, at: MoreThanOrEqual(since) } });
     const summary = usageSummary(readings, boluses.map((bolus) => ({ at: bolus.at.toISOString(), amount: bolus.amount })), { concentrationPerMl: order.concentrationPerMl, doseUnit: order.doseUnit, drug: order.drug.genericName }, now, hours);
 
-    const last = observations.at(-1);
     const syringeReadings = last ? readings.filter((reading) => reading.syringeId === last.releaseId).sort((x, y) => Date.parse(x.at) - Date.parse(y.at)) : [];
     const projected = last && order.status === 'active' ? projectedEmptyAt(syringeReadings, last.syringeRemainingMl, order.basalRatePerHour / order.concentrationPerMl) : null;
     const nextObservation = order.status === 'active' && order.startedAt ? observationDue(order.startedAt.toISOString(), last?.at.toISOString() ?? null, now, wardPolicy(order.patient.ward)) : null;
