@@ -4,11 +4,11 @@ import { startServer, type RunningServer } from './support/server.js';
 
 // Each demo account, the heading of the home screen it lands on, and the nav links it must (not) see.
 const ROLE_HOMES = [
-  { username: 'amara.osei', displayName: 'Dr Amara Osei', role: 'Prescriber', home: 'Patients', path: '/patients' },
-  { username: 'lin.park', displayName: 'Lin Park', role: 'Pharmacist', home: 'Patients', path: '/patients' },
-  { username: 'kai.mendes', displayName: 'Kai Mendes', role: 'Nurse', home: 'Patients', path: '/patients' },
-  { username: 'mei.tan', displayName: 'Mei Tan', role: 'Charge nurse', home: 'Patients', path: '/patients' },
-  { username: 'sam.rivera', displayName: 'Sam Rivera', role: 'Admin', home: 'Users', path: '/admin/users' },
+  { username: 'amara.osei', displayName: 'Dr Amara Osei', role: 'Prescriber', home: 'Patients', path: '/patients', wards: 'Your wards: Cedar, Harbour, Summit, Wren4 wards' },
+  { username: 'lin.park', displayName: 'Lin Park', role: 'Pharmacist', home: 'Patients', path: '/patients', wards: 'Your wards: Cedar, Harbour, Summit, Wren4 wards' },
+  { username: 'kai.mendes', displayName: 'Kai Mendes', role: 'Nurse', home: 'Patients', path: '/patients', wards: 'Your wards: Harbour, SummitHarbour · Summit' },
+  { username: 'mei.tan', displayName: 'Mei Tan', role: 'Charge nurse', home: 'Patients', path: '/patients', wards: 'Your wards: HarbourHarbour' },
+  { username: 'sam.rivera', displayName: 'Sam Rivera', role: 'Admin', home: 'Users', path: '/admin/users', wards: null },
 ];
 
 describe('sign-in and each role’s home', () => {
@@ -58,6 +58,10 @@ describe('sign-in and each role’s home', () => {
       const banner = page.getByRole('banner');
       await banner.getByText(account.displayName).waitFor();
       await banner.getByText(account.role, { exact: true }).waitFor();
+      // The top bar names the person's wards (read in full by a screen reader); an admin has none.
+      const wards = banner.getByTestId('current-user-wards');
+      if (account.wards) expect(await wards.textContent()).toBe(account.wards);
+      else expect(await wards.count()).toBe(0);
 
       const nav = page.getByRole('navigation');
       const otherHome = account.home === 'Users' ? 'Patients' : 'Users';

@@ -15,17 +15,18 @@ describe('sign-in and sessions', () => {
   });
 
   it.each([
-    ['amara.osei', 'prescriber'],
-    ['lin.park', 'pharmacist'],
-    ['tomas.ortiz', 'pharmacist'],
-    ['kai.mendes', 'nurse'],
-    ['rosa.adeyemi', 'nurse'],
-    ['mei.tan', 'charge_nurse'],
-    ['sam.rivera', 'admin'],
-  ])('signs in %s as %s and returns the token and user', async (username, role) => {
+    ['amara.osei', 'prescriber', ['Cedar', 'Harbour', 'Summit', 'Wren']],
+    ['lin.park', 'pharmacist', ['Cedar', 'Harbour', 'Summit', 'Wren']],
+    ['tomas.ortiz', 'pharmacist', ['Cedar', 'Harbour', 'Summit', 'Wren']],
+    ['kai.mendes', 'nurse', ['Harbour', 'Summit']],
+    ['rosa.adeyemi', 'nurse', ['Cedar', 'Harbour']],
+    ['mei.tan', 'charge_nurse', ['Harbour']],
+    ['sam.rivera', 'admin', []],
+  ])('signs in %s as %s and returns the token and user with their wards', async (username, role, wards) => {
     const response = await request(t.http).post('/api/auth/login').send({ username, password: DEMO_PASSWORD }).expect(200);
     expect(response.body.accessToken).toEqual(expect.any(String));
-    expect(response.body.user).toEqual({ id: expect.any(Number), username, displayName: expect.any(String), role });
+    expect(response.body.user).toEqual({ id: expect.any(Number), username, displayName: expect.any(String), role, wards: expect.any(Array) });
+    expect(response.body.user.wards.map((ward: { name: string }) => ward.name)).toEqual(wards);
     const me = await request(t.http).get('/api/auth/me').auth(response.body.accessToken, { type: 'bearer' }).expect(200);
     expect(me.body).toEqual(response.body.user);
   });

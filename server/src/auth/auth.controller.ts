@@ -2,7 +2,7 @@ import { Body, Controller, Get, HttpCode, Post, Req } from '@nestjs/common';
 import { ConfigService } from '@nestjs/config';
 import type { Request } from 'express';
 import { ExtractJwt } from 'passport-jwt';
-import type { DemoAccounts, LoginResponse } from '@lockstep/shared';
+import type { DemoAccounts, LoginResponse, SessionProfile } from '@lockstep/shared';
 import { ApiOperation } from '@nestjs/swagger';
 import { ApiError } from '../common/openapi/api-errors.decorator.js';
 import type { Env } from '../config/env.validation.js';
@@ -36,10 +36,10 @@ export class AuthController {
     await this.auth.logout(user, ExtractJwt.fromAuthHeaderAsBearerToken()(request) ?? '');
   }
 
-  @ApiOperation({ summary: 'The signed-in user' })
+  @ApiOperation({ summary: 'The signed-in user, with the wards they are assigned to' })
   @Get('me')
-  me(@CurrentUser() user: AuthUser): AuthUser {
-    return user;
+  me(@CurrentUser() user: AuthUser): Promise<SessionProfile> {
+    return this.auth.profile(user);
   }
 
   /** Lets the sign-in page offer the demo accounts; empty outside demo mode. */

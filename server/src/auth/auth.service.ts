@@ -1,7 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { Injectable, UnauthorizedException } from '@nestjs/common';
 import { JwtService } from '@nestjs/jwt';
-import type { LoginResponse } from '@lockstep/shared';
+import type { LoginResponse, SessionProfile } from '@lockstep/shared';
 import { PasswordAttemptsService } from '../common/throttling/password-attempts.service.js';
 import { UsersService } from '../users/users.service.js';
 import type { AuthUser, JwtPayload } from './auth-user.js';
@@ -25,7 +25,11 @@ export class AuthService {
     const user = await this.attempts.check(name, () => this.users.verifyCredentials(name, password));
     if (!user) throw new UnauthorizedException(BAD_CREDENTIALS);
     const payload: JwtPayload = { sub: user.id, username: user.username, role: user.role };
-    return { accessToken: await this.jwt.signAsync(payload, { jwtid: randomUUID() }), user };
+    return { accessToken: await this.jwt.signAsync(payload, { jwtid: randomUUID() }), user: await this.users.profile(user.id) };
+  }
+
+  profile(user: AuthUser): Promise<SessionProfile> {
+    return this.users.profile(user.id);
   }
 
   /** `token` is the caller's own, already verified by the guard (so it has a `jti` and an `exp`). */

@@ -1,11 +1,11 @@
 import { BadRequestException, ConflictException, ForbiddenException, Inject, Injectable, NotFoundException, UnauthorizedException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { DataSource, In, type Repository } from 'typeorm';
-import { ROLE_LABELS, type Role, type SessionUser, type User as UserResponse } from '@lockstep/shared';
+import { ROLE_LABELS, type Role, type SessionProfile, type SessionUser, type User as UserResponse } from '@lockstep/shared';
 import { Ward } from '../wards/entities/ward.entity.js';
 import type { CreateUserDto } from './dto/create-user.dto.js';
 import type { UpdateUserDto } from './dto/update-user.dto.js';
-import { toSessionUser, toUserResponse } from './dto/user-response.js';
+import { toSessionProfile, toSessionUser, toUserResponse } from './dto/user-response.js';
 import { User } from './entities/user.entity.js';
 import { hashPassword, passwordMatches } from './passwords.js';
 import { PasswordAttemptsService } from '../common/throttling/password-attempts.service.js';
@@ -64,6 +64,12 @@ export class UsersService {
   async findActiveSessionUser(id: number): Promise<SessionUser | null> {
     const user = await this.users.findOneBy({ id, active: true });
     return user ? toSessionUser(user) : null;
+  }
+
+  /** For the signed-in person's own screens (sign-in and `/auth/me`), with their wards. */
+  async profile(id: number): Promise<SessionProfile> {
+    const user = await this.users.findOneOrFail({ where: { id }, relations: { wards: true } });
+    return toSessionProfile(user);
   }
 
   async list(): Promise<UserResponse[]> {

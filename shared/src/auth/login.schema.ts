@@ -15,8 +15,14 @@ export const sessionUserSchema = z.object({
 });
 export type SessionUser = z.infer<typeof sessionUserSchema>;
 
+/** The signed-in person as the screens show them: who, and the wards they are assigned to. */
+export const sessionProfileSchema = sessionUserSchema.extend({
+  wards: z.array(z.object({ id: z.number().int(), name: z.string() })),
+});
+export type SessionProfile = z.infer<typeof sessionProfileSchema>;
+
 export const loginResponseSchema = z.object({
   accessToken: z.string(),
-  user: sessionUserSchema,
+  user: sessionProfileSchema,
 });
 export type LoginResponse = z.infer<typeof loginResponseSchema>;

@@ -48,7 +48,7 @@ export function startSession(session: Session): void {
   emit();
 }
 
-/** Keeps the stored user in step with the server's answer to /auth/me. */
+/** Keeps the stored user in step with the server's answer to /auth/me (name, role, wards). */
 export function updateSessionUser(user: Session['user']): void {
   const session = getSession();
   if (!session) return;
@@ -56,7 +56,8 @@ export function updateSessionUser(user: Session['user']): void {
     session.user.id === user.id &&
     session.user.displayName === user.displayName &&
     session.user.role === user.role &&
-    session.user.username === user.username;
+    session.user.username === user.username &&
+    JSON.stringify(session.user.wards) === JSON.stringify(user.wards);
   if (!same) startSession({ ...session, user });
 }
 

@@ -1,12 +1,12 @@
 import { useCallback, useSyncExternalStore } from 'react';
-import type { SessionUser } from '@lockstep/shared';
+import type { SessionProfile } from '@lockstep/shared';
 import { queryClient } from '../query-client';
 import { revokeToken } from './revoke-token';
 import { endSession, getSession, startSession, subscribeSession, type Session, type SessionEndReason } from './session-store';
 
 export interface SessionState {
   session: Session | null;
-  user: SessionUser | null;
+  user: SessionProfile | null;
   signIn: (session: Session) => void;
   signOut: () => void;
 }
@@ -38,7 +38,7 @@ export function useSession(): SessionState {
 }
 
 /** For screens inside the signed-in layout, where a user is guaranteed by the route guard. */
-export function useCurrentUser(): SessionUser {
+export function useCurrentUser(): SessionProfile {
   const { user } = useSession();
   if (!user) throw new Error('useCurrentUser needs a signed-in user');
   return user;

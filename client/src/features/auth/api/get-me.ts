@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { sessionUserSchema, type SessionUser } from '@lockstep/shared';
+import { sessionProfileSchema, type SessionProfile } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { authKeys } from './auth-keys';
 
-export function getMe(signal?: AbortSignal): Promise<SessionUser> {
-  return apiRequest('/auth/me', { schema: sessionUserSchema, signal });
+export function getMe(signal?: AbortSignal): Promise<SessionProfile> {
+  return apiRequest('/auth/me', { schema: sessionProfileSchema, signal });
 }
 
 export function meQueryOptions() {
