@@ -3,7 +3,9 @@ import type { Locator, Page } from 'playwright-core';
 /**
  * The dialog once it is ready for typing. A Mantine modal fades in and then moves focus inside
  * (to its `data-autofocus` field, else the first control); typing before that can land while the
- * focus trap is still settling, and on a loaded machine the keystrokes were lost. So wait for focus.
+ * focus trap is still settling, and on a loaded machine the keystrokes were lost. Ready means
+ * focus is inside, or (for a dialog already open, whose focused button a request disabled) its
+ * transitions have ended and the trap has had a moment more.
  */
 export async function readyDialog(page: Page, name?: string | RegExp): Promise<Locator> {
   const dialog = page.getByRole('dialog', name === undefined ? {} : { name });
@@ -11,11 +13,15 @@ export async function readyDialog(page: Page, name?: string | RegExp): Promise<L
   await dialog.evaluate(
     (element) =>
       new Promise<void>((resolve, reject) => {
-        const deadline = Date.now() + 10_000;
+        const started = Date.now();
+        let stillSince: number | null = null;
         const check = () => {
-          if (element.contains(document.activeElement)) resolve();
-          else if (Date.now() > deadline) reject(new Error('Focus never moved into the dialog'));
-          else setTimeout(check, 25);
+          if (element.contains(document.activeElement)) return resolve();
+          const moving = element.getAnimations({ subtree: true }).some((animation) => animation.playState === 'running');
+          stillSince = moving ? null : (stillSince ?? Date.now());
+          if (stillSince !== null && Date.now() - stillSince >= 300) return resolve();
+          if (Date.now() - started > 10_000) return reject(new Error('The dialog never settled'));
+          setTimeout(check, 25);
         };
         check();
       }),
