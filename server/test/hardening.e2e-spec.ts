@@ -164,6 +164,15 @@ describe('hardening', () => {
       expect(audit.body.events[0]).toMatchObject({ action: 'user.sign-out', entityType: 'user', entityId: '6', actorName: 'Mei Tan' });
     });
 
+    it('signs a session out once when two sign-outs of it race', async () => {
+      const session = await t.tokenFor('rosa.adeyemi');
+      const replies = await Promise.all([0, 1].map(() => request(t.http).post('/api/auth/logout').set(bearer(session))));
+      expect(replies.map((reply) => reply.status).sort()).toEqual(expect.arrayContaining([204]));
+      expect(replies.every((reply) => reply.status === 204 || reply.status === 401)).toBe(true);
+      const jti = t.app.get(JwtService).decode<{ jti: string }>(session).jti;
+      expect(await t.app.get(DataSource).query('SELECT COUNT(*) AS n FROM revoked_tokens WHERE jti = ?', [jti])).toEqual([{ n: 1 }]);
+    });
+
     it('clears revoked tokens once they would have expired anyway', async () => {
       await t.app.get(DataSource).query(`INSERT INTO revoked_tokens (jti, userId, expiresAt) VALUES ('00000000-0000-4000-8000-000000000000', 4, '2020-01-01 00:00:00.000')`);
       await request(t.http).post('/api/auth/logout').set(bearer(await t.tokenFor('kai.mendes'))).expect(204);

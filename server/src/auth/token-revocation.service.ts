@@ -12,6 +12,9 @@ export class TokenRevocationService {
 
   async revoke(user: AuthUser, session: { jti: string; expiresAt: Date }): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
+      // Two sign-outs of one session can both pass the guard; transactions run one at a time, so
+      // the second finds the first's row and has nothing to do.
+      if (await manager.existsBy(RevokedToken, { jti: session.jti })) return;
       // Rows of tokens that have expired anyway are of no more use.
       await manager.delete(RevokedToken, { expiresAt: LessThan(new Date()) });
       await manager.insert(RevokedToken, { jti: session.jti, userId: user.id, expiresAt: session.expiresAt });
