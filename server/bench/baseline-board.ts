@@ -2,7 +2,7 @@ import type { Database, Statement } from 'better-sqlite3';
 import { shiftWindow, type HandoverBoard } from '@lockstep/shared';
 import { storedDate as date } from '../src/database/stored-date.js';
 import { boardRows } from '../src/handover/board-rows.js';
-import type { BoardInputs } from '../src/handover/row-figures.js';
+import { type BoardInputs, emptyInputs } from '../src/handover/row-figures.js';
 import type { PcaOrder } from '../src/orders/entities/pca-order.entity.js';
 import type { Ward } from '../src/wards/entities/ward.entity.js';
 import { wardPolicy } from '../src/wards/ward-policy.js';
@@ -92,10 +92,6 @@ function toOrder(row: Row): PcaOrder {
     patient: { bed: row.bed, familyName: row.familyName, givenName: row.givenName, mrn: row.mrn, dateOfBirth: row.dateOfBirth, weightKg: row.weightKg },
     drug: { genericName: row.genericName },
   } as unknown as PcaOrder;
-}
-
-function emptyInputs(): BoardInputs {
-  return { observations: [], latest: [], flags: [], releases: [], starts: [], boluses: [], discrepancies: [], signoffs: [] };
 }
 
 function sqlTime(at: Date): string {

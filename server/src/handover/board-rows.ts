@@ -2,7 +2,7 @@ import { ageInYears, compareHandoverRows, riskTier, type HandoverRow, type Pendi
 import { toFlagResponse } from '../flags/flags.service.js';
 import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { toSignoffResponse } from './dto/signoff-response.js';
-import { type BoardInputs, inputsByOrder, type OrderInputs, rowFigures } from './row-figures.js';
+import { type BoardInputs, emptyInputs, inputsByOrder, type OrderInputs, rowFigures } from './row-figures.js';
 
 /**
  * The board's rows, sorted by risk, from what was fetched for the ward's orders. Pure: the
@@ -11,7 +11,7 @@ import { type BoardInputs, inputsByOrder, type OrderInputs, rowFigures } from '.
 export function boardRows(orders: PcaOrder[], inputs: BoardInputs, policy: WardPolicy, shift: { endsAt: string }, now: Date): HandoverRow[] {
   const byOrder = inputsByOrder(inputs);
   const rows = orders.map((order) => {
-    const mine = byOrder.get(order.id) ?? NO_INPUTS;
+    const mine = byOrder.get(order.id) ?? emptyInputs();
     const figures = rowFigures(order, mine, policy, now, Date.parse(shift.endsAt));
     const openFlags = mine.flags;
     const flags = {
@@ -46,8 +46,6 @@ export function boardRows(orders: PcaOrder[], inputs: BoardInputs, policy: WardP
   });
   return rows.sort(compareHandoverRows);
 }
-
-const NO_INPUTS: OrderInputs = { observations: [], latest: [], flags: [], releases: [], starts: [], boluses: [], discrepancies: [], signoffs: [] };
 
 function pendingTasks(order: PcaOrder, mine: OrderInputs, now: Date): PendingTask[] {
   const tasks: PendingTask[] = [];

@@ -14,7 +14,7 @@ import { Ward } from '../wards/entities/ward.entity.js';
 import { wardPolicy } from '../wards/ward-policy.js';
 import { HandoverSignoff } from './entities/handover-signoff.entity.js';
 import { boardRows } from './board-rows.js';
-import type { BoardInputs, BoardReading } from './row-figures.js';
+import { type BoardInputs, type BoardReading, emptyInputs } from './row-figures.js';
 
 const ON_BOARD = ['awaiting_verification', 'verified', 'active'] as const;
 const HOUR = 3_600_000;
@@ -88,8 +88,4 @@ export class HandoverBoardService {
     ]);
     return { observations, latest, flags, releases, starts, boluses, discrepancies, signoffs };
   }
-}
-
-function emptyInputs(): BoardInputs {
-  return { observations: [], latest: [], flags: [], releases: [], starts: [], boluses: [], discrepancies: [], signoffs: [] };
 }

@@ -26,6 +26,11 @@ export type BoardInputs = {
 /** The same facts for one order: its share of each list. */
 export type OrderInputs = BoardInputs;
 
+/** Every list empty: a ward with no orders, or an order with nothing fetched for it. */
+export function emptyInputs(): BoardInputs {
+  return { observations: [], latest: [], flags: [], releases: [], starts: [], boluses: [], discrepancies: [], signoffs: [] };
+}
+
 /**
  * Each list split by order once, so building a row reads only its own order's facts rather than
  * scanning the ward's lists (a day of readings is hundreds of rows) again for every row.
@@ -34,7 +39,7 @@ export function inputsByOrder(inputs: BoardInputs): Map<number, OrderInputs> {
   const byOrder = new Map<number, OrderInputs>();
   const share = (orderId: number) => {
     let mine = byOrder.get(orderId);
-    if (!mine) byOrder.set(orderId, (mine = { observations: [], latest: [], flags: [], releases: [], starts: [], boluses: [], discrepancies: [], signoffs: [] }));
+    if (!mine) byOrder.set(orderId, (mine = emptyInputs()));
     return mine;
   };
   for (const key of Object.keys(inputs) as (keyof BoardInputs)[]) {

@@ -20,7 +20,7 @@ export function ApproveModal({ version, onClose }: ApproveModalProps) {
   const [reviewedSubmission] = useState(version.submittedAt);
   const [refusal, setRefusal] = useState<string | null>(null);
   // After a 409 the version on screen is not the one this dialog would sign: review it first.
-  const [mustReview, setMustReview] = useState(false);
+  const mustReview = isApiRequestError(approve.error) && approve.error.status === 409;
   const form = useForm({
     initialValues: { password: '' },
     validate: { password: (value) => (value ? null : 'Enter your password to sign') },
@@ -39,7 +39,6 @@ export function ApproveModal({ version, onClose }: ApproveModalProps) {
           form.setFieldValue('password', '');
           if (isSignatureError(error) && isApiRequestError(error)) form.setFieldError('password', error.message);
           else setRefusal(errorMessage(error));
-          if (isApiRequestError(error) && error.status === 409) setMustReview(true);
         },
       },
     );
