@@ -2,7 +2,7 @@ import type { Database, Statement } from 'better-sqlite3';
 import { shiftWindow, type HandoverBoard } from '@lockstep/shared';
 import { storedDate as date } from '../src/database/stored-date.js';
 import { boardRows } from '../src/handover/board-rows.js';
-import { type BoardInputs, emptyInputs } from '../src/handover/row-figures.js';
+import { type BoardInputs, boardReadingsFrom, emptyInputs } from '../src/handover/row-figures.js';
 import type { PcaOrder } from '../src/orders/entities/pca-order.entity.js';
 import type { Ward } from '../src/wards/entities/ward.entity.js';
 import { wardPolicy } from '../src/wards/ward-policy.js';
@@ -54,10 +54,11 @@ export class BaselineBoard {
 
   private inputs(ids: number[], wardId: number, shift: { shift: string; shiftDate: string }, now: Date): BoardInputs {
     const since = sqlTime(new Date(now.getTime() - 24 * HOUR));
+    const readFrom = sqlTime(boardReadingsFrom(now));
     const n = ids.length;
     const list = (name: ListQuery) => this.statement(`${name}:${n}`, SQL[name](n));
     return {
-      observations: (list('observations').all(...ids, since) as Reading[]).map((row) => ({ ...row, at: date(row.at) })),
+      observations: (list('observations').all(...ids, readFrom) as Reading[]).map((row) => ({ ...row, at: date(row.at) })),
       latest: (list('latest').all(...ids) as Row[]).map((row) => ({ ...row, at: date(row.at as string) })) as unknown as BoardInputs['latest'],
       flags: (list('flags').all(...ids) as Row[]).map((row) => ({ ...row, raisedAt: date(row.raisedAt as string), acknowledgedAt: row.acknowledgedAt === null ? null : date(row.acknowledgedAt as string) })) as unknown as BoardInputs['flags'],
       releases: list('releases').all(...ids) as unknown as BoardInputs['releases'],

@@ -5,6 +5,7 @@ import path from 'node:path';
 import { DataSource } from 'typeorm';
 import { afterEach, describe, expect, it } from 'vitest';
 import { dataSourceOptions } from '../src/database/data-source-options.js';
+import { DEMO_PATIENTS } from '../src/database/seed/demo-data.js';
 import { seedDemoDataIfEmpty } from '../src/database/seed/demo-seed.js';
 
 describe('database', () => {
@@ -40,7 +41,7 @@ describe('database', () => {
       `SELECT (SELECT count(*) FROM wards) AS wards, (SELECT count(*) FROM users) AS users,
               (SELECT count(*) FROM patients) AS patients, (SELECT count(*) FROM drugs) AS drugs`,
     );
-    expect(counts).toEqual({ wards: 4, users: 7, patients: 12, drugs: 3 });
+    expect(counts).toEqual({ wards: 4, users: 7, patients: DEMO_PATIENTS.length, drugs: 3 });
     await dataSource.destroy();
   });
 

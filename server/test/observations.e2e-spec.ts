@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { waitForMail } from './support/mailbox.js';
+import { type MailboxMessage, waitForMail } from './support/mailbox.js';
 import { activeOrder, ORDER, SETTINGS } from './support/pca.js';
 import { createTestApp, type TestApp } from './support/test-app.js';
 
@@ -57,9 +57,11 @@ describe('observations, flags, usage and ward policy', () => {
     const order = await start();
     const response = await observe(order.id, { ...CALM, sedationLevel: '3' }).expect(201);
     expect(response.body.flags).toMatchObject([{ severity: 'urgent', code: 'sedation.3', action: expect.stringContaining('25–50 %') }]);
-    const toPrescriber = await waitForMail(t.http, token.sam, (m) => m.subject.startsWith('URGENT: Sedation level 3') && m.to === 'amara.osei@kestrelbay.example');
+    // The demo's own story already holds a sedation-3 e-mail (another bed); this one names bed H02.
+    const thisBed = (to: string) => (m: MailboxMessage) => m.subject === 'URGENT: Sedation level 3 — Harbour bed H02' && m.to === to;
+    const toPrescriber = await waitForMail(t.http, token.sam, thisBed('amara.osei@kestrelbay.example'));
     expect(toPrescriber.text).toContain('Harbour bed H02');
-    await waitForMail(t.http, token.sam, (m) => m.subject.startsWith('URGENT: Sedation level 3') && m.to === 'nurse-in-charge.harbour@kestrelbay.example');
+    await waitForMail(t.http, token.sam, thisBed('nurse-in-charge.harbour@kestrelbay.example'));
 
     const flagId = response.body.flags[0].id;
     await request(t.http).post(`/api/flags/${flagId}/acknowledge`).set(as('kai')).send({ note: 'no' }).expect(400);

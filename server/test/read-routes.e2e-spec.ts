@@ -1,5 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_PATIENTS } from '../src/database/seed/demo-data.js';
 import { createTestApp, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
 
 type Role = keyof typeof DEMO_USER_BY_ROLE;
@@ -36,7 +37,7 @@ describe('read routes', () => {
 
   it('lists patients, and filters them by ward', async () => {
     const all = await request(t.http).get('/api/patients').set(as('nurse')).expect(200);
-    expect(all.body).toHaveLength(12);
+    expect(all.body).toHaveLength(DEMO_PATIENTS.length);
     const harbour = await request(t.http).get('/api/patients?wardId=1').set(as('nurse')).expect(200);
     expect(harbour.body.length).toBeGreaterThan(0);
     expect(harbour.body.every((patient: { wardId: number; wardName: string }) => patient.wardId === 1 && patient.wardName === 'Harbour')).toBe(true);

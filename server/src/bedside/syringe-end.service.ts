@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource, EntityManager } from 'typeorm';
-import { formatDose, type OrderDetail, type ReconciliationResponse } from '@lockstep/shared';
+import type { OrderDetail, ReconciliationResponse } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { FlagsService } from '../flags/flags.service.js';
 import { MailService } from '../mail/mail.service.js';
@@ -13,6 +13,7 @@ import { readyRelease } from './bedside-checks.service.js';
 import type { DiscontinueDto, SyringeChangeDto } from './dto/bedside-actions.dto.js';
 import { BEDSIDE_ROLES } from './nurse-roles.js';
 import { finishRunningSyringe } from './reconcile-release.js';
+import { discrepancyFlag, discrepancyMail, reconciliationAuditSummary } from './reconciliation-records.js';
 import { WardEventsService } from '../handover/ward-events.service.js';
 import { recordAudit } from '../audit/record-audit.js';
 
@@ -38,7 +39,7 @@ export class SyringeEndService {
       if (found.status !== 'active') throw statusConflict(found.status, 'active');
       const next = await readyRelease(manager, found, dto.newReleaseCode, 'newReleaseCode');
       const result = await this.finish(manager, found, dto, nurse.id, witness.id);
-      await recordAudit(manager, nurse, { action: 'order.syringe-change', entityType: 'order', entityId: orderId, summary: { ...reconciliationSummary(result), newReleaseCode: next.releaseCode, witness: witness.displayName } });
+      await recordAudit(manager, nurse, { action: 'order.syringe-change', entityType: 'order', entityId: orderId, summary: { ...reconciliationAuditSummary(result), newReleaseCode: next.releaseCode, witness: witness.displayName } });
       return { order: found, reconciliation: result, newReleaseCode: next.releaseCode };
     });
     this.reportDiscrepancy(order, reconciliation);
@@ -57,7 +58,7 @@ export class SyringeEndService {
         action: 'order.discontinue',
         entityType: 'order',
         entityId: orderId,
-        summary: { status: { from: found.status, to: 'discontinued' }, reason: dto.reason.trim(), ...reconciliationSummary(result), witness: witness.displayName },
+        summary: { status: { from: found.status, to: 'discontinued' }, reason: dto.reason.trim(), ...reconciliationAuditSummary(result), witness: witness.displayName },
       });
       return { order: found, reconciliation: result };
     });
@@ -74,29 +75,12 @@ export class SyringeEndService {
       { recordedById: nurseId, witnessId },
       order.patient.ward.reconciliationToleranceMl,
     );
-    if (result.mustReport) {
-      await this.flags.raise(manager, {
-        orderId: order.id,
-        severity: 'review',
-        code: 'reconciliation.discrepancy',
-        message: `Syringe ${result.releaseCode}: ${formatDose(result.discrepancyMl, 'mL')} unaccounted for (dispensed ${formatDose(result.dispensedMl, 'mL')}, infused ${formatDose(result.infusedMl, 'mL')}, wasted ${formatDose(result.wastedMl, 'mL')})`,
-        action: 'Pharmacy to review the controlled-drug record with the ward and report per local policy',
-      });
-    }
+    if (result.mustReport) await this.flags.raise(manager, { orderId: order.id, ...discrepancyFlag(result, result.releaseCode) });
     return result;
   }
 
   private reportDiscrepancy(order: PcaOrder, reconciliation: ReconciliationResponse & { releaseCode?: string }): void {
     if (!reconciliation.mustReport) return;
-    this.mail.send({
-      to: order.patient.ward.pharmacyEmail,
-      subject: `Reconciliation discrepancy: PCA order ${order.id}, ${order.patient.ward.name} bed ${order.patient.bed}`,
-      text: `A PCA syringe for ${order.patient.ward.name} bed ${order.patient.bed} (MRN ${order.patient.mrn}) does not reconcile.\n\nDispensed ${formatDose(reconciliation.dispensedMl, 'mL')}, infused ${formatDose(reconciliation.infusedMl, 'mL')}, wasted ${formatDose(reconciliation.wastedMl, 'mL')}: ${formatDose(reconciliation.discrepancyMl, 'mL')} unaccounted for.\n\nReview the controlled-drug record with the ward.`,
-    });
+    this.mail.send(discrepancyMail(order, reconciliation));
   }
-}
-
-function reconciliationSummary(result: ReconciliationResponse & { releaseCode?: string }): Record<string, unknown> {
-  const { releaseCode, dispensedMl, infusedMl, wastedMl, discrepancyMl, mustReport } = result;
-  return { releaseCode, dispensedMl, infusedMl, wastedMl, discrepancyMl, mustReport };
 }

@@ -14,7 +14,7 @@ import { Ward } from '../wards/entities/ward.entity.js';
 import { wardPolicy } from '../wards/ward-policy.js';
 import { HandoverSignoff } from './entities/handover-signoff.entity.js';
 import { boardRows } from './board-rows.js';
-import { type BoardInputs, type BoardReading, emptyInputs } from './row-figures.js';
+import { type BoardInputs, type BoardReading, boardReadingsFrom, emptyInputs } from './row-figures.js';
 
 const ON_BOARD = ['awaiting_verification', 'verified', 'active'] as const;
 const HOUR = 3_600_000;
@@ -56,13 +56,14 @@ export class HandoverBoardService {
   private async inputs(ids: number[], wardId: number, shift: { shift: string; shiftDate: string }, now: Date): Promise<BoardInputs> {
     const manager = this.dataSource.manager;
     const since = new Date(now.getTime() - 24 * HOUR);
+    const readFrom = boardReadingsFrom(now);
     const [observations, latest, flags, releases, starts, boluses, discrepancies, signoffs] = await Promise.all([
       // Raw rows: a ward's day of readings is hundreds of rows, and making entities of them cost
       // more than the query.
       manager
         .createQueryBuilder(Observation, 'o')
         .select(READING_COLUMNS.map((column) => `o.${column} AS "${column}"`))
-        .where('o.orderId IN (:...ids) AND o.at >= :since', { ids, since })
+        .where('o.orderId IN (:...ids) AND o.at >= :readFrom', { ids, readFrom })
         // The index's own order (orderId, at): each order's readings in time order, no sort step.
         .orderBy('o.orderId', 'ASC')
         .addOrderBy('o.at', 'ASC')

@@ -8,7 +8,19 @@ import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import type { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
 import type { HandoverSignoff } from './entities/handover-signoff.entity.js';
 
-/** A pump reading of the last 24 hours: the only columns the usage figures need. */
+/**
+ * How far back the board reads pump readings: the rolling 24 hours, and a little before them so
+ * that the first reading inside the window has the reading before it to count from (readings are
+ * hourly or two-hourly).
+ */
+export const BOARD_READINGS_HOURS = 26;
+
+/** When the board's pump readings start for a board answered at `now`. */
+export function boardReadingsFrom(now: Date): Date {
+  return new Date(now.getTime() - BOARD_READINGS_HOURS * 3_600_000);
+}
+
+/** A pump reading of the last 26 hours: the only columns the usage figures need. */
 export type BoardReading = Pick<Observation, 'orderId' | 'releaseId' | 'at' | 'attempts' | 'delivered' | 'volumeInfusedMl'>;
 
 /** Everything the board fetched for a ward's orders, one list per kind. */
@@ -57,8 +69,11 @@ type Figures = Pick<HandoverRow, 'lastObservation' | 'nextObservation' | 'last4h
 export function rowFigures(order: PcaOrder, mine: OrderInputs, policy: WardPolicy, now: Date, shiftEndsAt: number): Figures {
   const last = mine.latest[0] ?? null;
   // In time order once here, so usageSummary's own sort has nothing to do.
+  // A syringe's zero start counts only when no reading of it can be missing between the start and
+  // the first reading fetched: otherwise its whole use before the window would count inside it.
+  const readFrom = boardReadingsFrom(now).getTime();
   const readings: SyringeReading[] = [
-    ...mine.starts.map((check) => ({ syringeId: check.releaseId, at: (check.secondAt ?? check.firstAt).toISOString(), attempts: 0, delivered: 0, volumeInfusedMl: 0 })),
+    ...mine.starts.filter((check) => (check.secondAt ?? check.firstAt).getTime() >= readFrom).map((check) => ({ syringeId: check.releaseId, at: (check.secondAt ?? check.firstAt).toISOString(), attempts: 0, delivered: 0, volumeInfusedMl: 0 })),
     ...mine.observations.map((o) => ({ syringeId: o.releaseId, at: o.at.toISOString(), attempts: o.attempts, delivered: o.delivered, volumeInfusedMl: o.volumeInfusedMl })),
   ]
     .map((reading) => ({ reading, time: Date.parse(reading.at) }))

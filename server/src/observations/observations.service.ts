@@ -13,6 +13,7 @@ import { wardPolicy } from '../wards/ward-policy.js';
 import type { CreateObservationDto } from './dto/create-observation.dto.js';
 import { type ObservationResponse, toObservationResponse } from './dto/observation-response.js';
 import { Observation } from './entities/observation.entity.js';
+import { observationAuditSummary } from './observation-audit.js';
 import { syringeLowMail, urgentFlagsMail } from './observation-notifications.js';
 import { WardEventsService } from '../handover/ward-events.service.js';
 import { recordAudit } from '../audit/record-audit.js';
@@ -56,12 +57,11 @@ export class ObservationsService {
         const flag = await this.flags.raise(manager, { ...draft, orderId, releaseId: oncePerSyringe ? release.id : null });
         flags.push({ ...draft, id: flag.id });
       }
-      const { painScore, sedationLevel, respiratoryRate, spo2, attempts, delivered, volumeInfusedMl, syringeRemainingMl } = dto;
       await recordAudit(manager, nurse, {
         action: 'order.observation',
         entityType: 'order',
         entityId: orderId,
-        summary: { observationId: saved.id, at, painScore, sedationLevel, respiratoryRate, spo2, attempts, delivered, volumeInfusedMl, syringeRemainingMl, flagsRaised: flags.map((flag) => flag.code) },
+        summary: observationAuditSummary({ ...dto, id: saved.id, at }, flags.map((flag) => flag.code)),
       });
       const withUser = await manager.findOneOrFail(Observation, { where: { id: saved.id }, relations: { recordedBy: true } });
       return { order: found, observation: withUser, raised: flags };

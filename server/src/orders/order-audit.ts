@@ -1,7 +1,7 @@
 import type { CreateOrderDto } from './dto/create-order.dto.js';
 
 /** The key values of a signed order for its audit record (the signature password is never kept). */
-export function orderAuditSummary(dto: CreateOrderDto, revises?: number): Record<string, unknown> {
+export function orderAuditSummary(dto: Omit<CreateOrderDto, 'signature' | 'indication'>, revises?: number): Record<string, unknown> {
   return {
     patientId: dto.patientId,
     drugId: dto.drugId,

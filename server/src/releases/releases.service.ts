@@ -8,6 +8,7 @@ import { MailService } from '../mail/mail.service.js';
 import { syringeReleasedMail } from '../orders/order-notifications.js';
 import { OrdersService } from '../orders/orders.service.js';
 import { toReleaseResponse } from './dto/release-response.js';
+import { releaseAuditSummary } from './release-audit.js';
 import type { CreateReleaseDto } from './dto/create-release.dto.js';
 import { SyringeRelease } from './entities/syringe-release.entity.js';
 import { WardEventsService } from '../handover/ward-events.service.js';
@@ -53,7 +54,7 @@ export class ReleasesService {
         action: 'order.release',
         entityType: 'order',
         entityId: orderId,
-        summary: { releaseId: saved.id, releaseCode: saved.releaseCode, concentrationPerMl: saved.concentrationPerMl, volumeMl: saved.volumeMl, batch: saved.batch, expiresAt: saved.expiresAt, preparedBy: saved.preparedBy, checkedBy: saved.checkedBy, overrideReason: saved.overrideReason },
+        summary: releaseAuditSummary(saved),
       });
       return { order: found, release: await manager.findOneOrFail(SyringeRelease, { where: { id: saved.id }, relations: { releasedBy: true } }) };
     });

@@ -2,12 +2,14 @@ import { shiftWindow, type OrderStatus, type PatientFactors } from '@lockstep/sh
 import type { Random } from './random.js';
 import type { Drugs, Staff, WrittenWard } from './scale-reference.js';
 import { pickRegimen, signingRecord, type ScaleRegimen } from './scale-regimen.js';
+import { RandomScript, type ObservationScript } from './observation-script.js';
 import { type ReleaseCodes, writeSyringes } from './scale-syringes.js';
 import { type ScaleWriter, sqlTime } from './scale-writer.js';
 
 const MINUTE = 60_000;
 const HOUR = 60 * MINUTE;
 const DAY = 24 * HOUR;
+const DISCONTINUE_REASON = 'Stepped down to oral analgesia';
 
 export type OrderContext = { writer: ScaleWriter; random: Random; staff: Staff; drugs: Drugs; codes: ReleaseCodes; now: number };
 export type ScalePatient = PatientFactors & { id: number; weightKg: number };
@@ -25,53 +27,118 @@ export type PcaStory = {
 
 /** A PCA from signing to now or to its discontinuation, with everything recorded along the way. */
 export function writePcaStory(ctx: OrderContext, story: PcaStory): void {
-  const { random: r, staff, now } = ctx;
+  const { random: r, now } = ctx;
   const regimen = pickRegimen(r, story.ward.paediatric, story.patient.weightKg);
-  const signedAt = story.start - r.int(60, 180) * MINUTE;
-  const verifiedAt = signedAt + r.int(15, 45) * MINUTE;
-  const events: Event[] = [
-    { from: null, to: 'awaiting_verification', userId: staff.prescriber, at: signedAt, reason: null },
-    { from: 'awaiting_verification', to: 'verified', userId: staff.pharmacist, at: verifiedAt, reason: null },
-    { from: 'verified', to: 'active', userId: staff.nurse, at: story.start, reason: null },
-  ];
-  if (story.end !== null) events.push({ from: 'active', to: 'discontinued', userId: staff.nurse, at: story.end, reason: 'Stepped down to oral analgesia' });
-  const orderId = writeOrder(ctx, story.ward, story.patient, regimen, events, story.start);
-
+  // Verified before pharmacy releases the first syringe (20 to 60 minutes before the start).
+  const signedAt = story.start - r.int(90, 180) * MINUTE;
+  const verifiedAt = signedAt + r.int(15, 30) * MINUTE;
   const stopAt = story.end ?? (story.overdue ? now - r.int(150, 240) * MINUTE : now);
-  writeSyringes({ ...ctx, toleranceMl: 0.5 }, { orderId, drugId: ctx.drugs.get(regimen.drug)!.id, regimen, start: story.start, stopAt, end: story.end, sedatedAtLast: story.sedatedAtLast });
+  const bolusAt = r.chance(0.3) ? story.start + r.int(30, 360) * MINUTE : null;
+  writePca(ctx, {
+    ...story,
+    regimen,
+    signedAt,
+    verifiedAt,
+    stopAt,
+    script: new RandomScript(r, story.sedatedAtLast),
+    bolusAt: bolusAt !== null && bolusAt < (story.end ?? now) ? bolusAt : null,
+    currentShift: 'both',
+  });
+}
 
-  if (r.chance(0.3)) {
-    const at = story.start + r.int(30, 360) * MINUTE;
-    if (at < (story.end ?? now)) {
-      ctx.writer.insert('clinician_boluses', { orderId, amount: regimen.clinicianBolusDose, reason: 'Breakthrough pain on moving', givenById: staff.nurse, witnessId: staff.secondNurse, at: sqlTime(at) });
-    }
+/** How far this shift's handover got for a running PCA: both nurses, only the outgoing one, or neither yet. */
+export type HandoverProgress = 'both' | 'outgoing' | 'none';
+
+/** One PCA's whole course with every choice made: the scale seed draws them, the demo scripts them. */
+export type PcaCourse = {
+  ward: WrittenWard;
+  patient: ScalePatient;
+  regimen: ScaleRegimen;
+  signedAt: number;
+  verifiedAt: number;
+  start: number;
+  /** Discontinued then; null while it runs. */
+  end: number | null;
+  /** Observations stop before this time: the end, now, or earlier for one that is overdue. */
+  stopAt: number;
+  script: ObservationScript;
+  /** False when the next syringe has not come from pharmacy: the running one is left to run low. */
+  changeSyringes?: boolean;
+  bolusAt: number | null;
+  currentShift: HandoverProgress;
+  /** The prescriber's reason for each soft finding; a generic one when not given. */
+  overrideReason?: string;
+};
+
+/** Writes the order, its syringes and observations, a clinician bolus and the handover sign-offs; answers the order id. */
+export function writePca(ctx: OrderContext, course: PcaCourse): number {
+  const { staff, now } = ctx;
+  const events: Event[] = [
+    { from: null, to: 'awaiting_verification', userId: staff.prescriber, at: course.signedAt, reason: null },
+    { from: 'awaiting_verification', to: 'verified', userId: staff.pharmacist, at: course.verifiedAt, reason: null },
+    { from: 'verified', to: 'active', userId: staff.nurse, at: course.start, reason: `Bedside check matched; second check by ${staff.secondNurseName}` },
+  ];
+  if (course.end !== null) events.push({ from: 'active', to: 'discontinued', userId: staff.nurse, at: course.end, reason: DISCONTINUE_REASON });
+  const { regimen } = course;
+  const orderId = writeOrder(ctx, course.ward, course.patient, regimen, events, course.start, course.overrideReason);
+  writeSyringes(
+    { ...ctx, policy: course.ward.policy },
+    { orderId, drugId: ctx.drugs.get(regimen.drug)!.id, regimen, start: course.start, stopAt: course.stopAt, end: course.end, script: course.script, changeSyringes: course.changeSyringes },
+  );
+  if (course.bolusAt !== null) {
+    ctx.writer.insert('clinician_boluses', { orderId, amount: regimen.clinicianBolusDose, reason: 'Breakthrough pain on moving', givenById: staff.nurse, witnessId: staff.secondNurse, at: sqlTime(course.bolusAt) });
   }
-  writeSignoffs(ctx, story.ward.id, orderId, story.start, story.end ?? now);
+  writeSignoffs(ctx, course.ward.id, orderId, course.start, course.end ?? now, course.currentShift);
+  return orderId;
 }
 
 /** An order still with pharmacy, or verified with its syringe waiting for the bedside check. */
 export function writeWaitingOrder(ctx: OrderContext, ward: WrittenWard, patient: ScalePatient, status: 'awaiting_verification' | 'verified'): void {
-  const { random: r, staff, now } = ctx;
+  const { random: r, now } = ctx;
   const regimen = pickRegimen(r, ward.paediatric, patient.weightKg);
   const signedAt = now - r.int(20, 240) * MINUTE;
-  const events: Event[] = [{ from: null, to: 'awaiting_verification', userId: staff.prescriber, at: signedAt, reason: null }];
-  if (status === 'verified') events.push({ from: 'awaiting_verification', to: 'verified', userId: staff.pharmacist, at: signedAt + 15 * MINUTE, reason: null });
-  const orderId = writeOrder(ctx, ward, patient, regimen, events, null);
-  if (status === 'verified') {
-    const releasedAt = signedAt + 30 * MINUTE;
+  writeUnstartedOrder(ctx, { ward, patient, regimen, status, signedAt, decidedAt: signedAt + 15 * MINUTE, releaseCode: status === 'verified' ? ctx.codes.next() : null });
+}
+
+export type UnstartedOrder = {
+  ward: WrittenWard;
+  patient: ScalePatient;
+  regimen: ScaleRegimen;
+  status: 'awaiting_verification' | 'verified' | 'returned';
+  signedAt: number;
+  /** When pharmacy verified or returned it. */
+  decidedAt: number;
+  /** Pharmacy's query, for a returned order. */
+  reason?: string;
+  overrideReason?: string;
+  /** A ready syringe for a verified order: its release code. */
+  releaseCode: string | null;
+  batch?: string;
+};
+
+/** An order not yet started: with pharmacy, returned to the prescriber, or verified with a ready syringe. Answers its id. */
+export function writeUnstartedOrder(ctx: OrderContext, order: UnstartedOrder): number {
+  const { staff } = ctx;
+  const { regimen, status } = order;
+  const events: Event[] = [{ from: null, to: 'awaiting_verification', userId: staff.prescriber, at: order.signedAt, reason: null }];
+  if (status !== 'awaiting_verification') events.push({ from: 'awaiting_verification', to: status, userId: staff.pharmacist, at: order.decidedAt, reason: order.reason ?? null });
+  const orderId = writeOrder(ctx, order.ward, order.patient, regimen, events, null, order.overrideReason);
+  if (order.releaseCode !== null) {
+    const releasedAt = order.decidedAt + 15 * MINUTE;
     ctx.writer.insert('syringe_releases', {
-      orderId, releaseCode: ctx.codes.next(), status: 'ready', concentrationPerMl: regimen.concentrationPerMl, volumeMl: regimen.syringeMl, batch: 'KB-WAITING',
+      orderId, releaseCode: order.releaseCode, status: 'ready', concentrationPerMl: regimen.concentrationPerMl, volumeMl: regimen.syringeMl, batch: order.batch ?? 'KB-WAITING',
       expiresAt: sqlTime(releasedAt + 7 * DAY), preparedBy: 'Lin Park', checkedBy: 'Tomas Ortiz', releasedById: staff.pharmacist, releasedAt: sqlTime(releasedAt), rowVersion: 1,
     });
   }
+  return orderId;
 }
 
 type Event = { from: OrderStatus | null; to: OrderStatus; userId: number; at: number; reason: string | null };
 
-function writeOrder(ctx: OrderContext, ward: WrittenWard, patient: ScalePatient, regimen: ScaleRegimen, events: Event[], startedAt: number | null): number {
+function writeOrder(ctx: OrderContext, ward: WrittenWard, patient: ScalePatient, regimen: ScaleRegimen, events: Event[], startedAt: number | null, overrideReason?: string): number {
   const { writer, staff } = ctx;
   const rule = ward.rules.get(regimen.drug)!;
-  const { findings, overrides } = signingRecord(regimen, rule, patient);
+  const { findings, overrides } = signingRecord(regimen, rule, patient, overrideReason);
   const last = events[events.length - 1];
   const verified = events.find((event) => event.to === 'verified');
   const orderId = writer.insert('pca_orders', {
@@ -107,17 +174,24 @@ function writeOrder(ctx: OrderContext, ward: WrittenWard, patient: ScalePatient,
   return orderId;
 }
 
-/** At every shift change while the PCA ran, the outgoing and the incoming nurse confirmed it. */
-function writeSignoffs(ctx: OrderContext, wardId: number, orderId: number, start: number, until: number): void {
+/**
+ * At every shift change while the PCA ran, the outgoing and the incoming nurse confirmed it; at
+ * the change that began the shift still running at `until`, only as far as `current` says.
+ */
+function writeSignoffs(ctx: OrderContext, wardId: number, orderId: number, start: number, until: number, current: HandoverProgress): void {
+  const { random: r, staff, writer } = ctx;
   let boundary = Date.parse(shiftWindow(new Date(start), '07:00', '19:00').endsAt);
   while (boundary < until) {
     const shift = shiftWindow(new Date(boundary + MINUTE), '07:00', '19:00');
-    const outgoingAt = boundary + ctx.random.int(2, 15) * MINUTE;
-    const incomingAt = outgoingAt + ctx.random.int(1, 5) * MINUTE;
-    if (incomingAt < until) {
-      ctx.writer.insert('handover_signoffs', { wardId, orderId, shiftDate: shift.shiftDate, shift: shift.shift, role: 'outgoing', nurseId: ctx.staff.nurse, pumpSettingsMatch: null, at: sqlTime(outgoingAt) });
-      ctx.writer.insert('handover_signoffs', { wardId, orderId, shiftDate: shift.shiftDate, shift: shift.shift, role: 'incoming', nurseId: ctx.staff.secondNurse, pumpSettingsMatch: 1, at: sqlTime(incomingAt) });
-    }
+    const ongoing = Date.parse(shift.endsAt) > until;
+    const progress = ongoing ? current : 'both';
+    // Minutes into the shift, but never after `until` however soon after the change that is.
+    const room = until - boundary;
+    const outgoingAt = boundary + Math.min(r.int(2, 15) * MINUTE, room / 3);
+    const incomingAt = outgoingAt + Math.min(r.int(1, 5) * MINUTE, room / 3);
+    const signoff = { wardId, orderId, shiftDate: shift.shiftDate, shift: shift.shift };
+    if (progress !== 'none') writer.insert('handover_signoffs', { ...signoff, role: 'outgoing', nurseId: staff.nurse, pumpSettingsMatch: null, at: sqlTime(outgoingAt) });
+    if (progress === 'both') writer.insert('handover_signoffs', { ...signoff, role: 'incoming', nurseId: staff.secondNurse, pumpSettingsMatch: 1, at: sqlTime(incomingAt) });
     boundary = Date.parse(shift.endsAt);
   }
 }

@@ -1,13 +1,14 @@
-import type { LimitRuleResponse } from '@lockstep/shared';
+import { DEFAULT_WARD_POLICY, type LimitRuleResponse, type WardPolicy } from '@lockstep/shared';
 import { DEMO_DRUGS } from '../seed/demo-data.js';
 import { DEMO_LIBRARIES } from '../seed/demo-library.js';
 import { DEMO_STAFF } from '../seed/demo-staff.js';
 import type { PlannedWard } from './scale-plan.js';
 import { type ScaleWriter, sqlTime } from './scale-writer.js';
 
-export type Staff = { prescriber: number; pharmacist: number; approver: number; nurse: number; secondNurse: number; chargeNurse: number };
+export type Staff = { prescriber: number; pharmacist: number; approver: number; nurse: number; secondNurse: number; secondNurseName: string; chargeNurse: number };
 export type Drugs = Map<string, { id: number; doseUnit: string }>;
-export type WrittenWard = PlannedWard & { id: number; paediatric: boolean; rules: Map<string, LimitRuleResponse> };
+/** What the PCA writers need of a ward: its id, whether it doses by weight, its active rules by drug and its policy. */
+export type WrittenWard = { id: number; paediatric: boolean; rules: Map<string, LimitRuleResponse>; policy: WardPolicy };
 
 const DAY = 86_400_000;
 
@@ -23,12 +24,13 @@ export function writeStaffAndDrugs(writer: ScaleWriter, passwordHash: string): {
     userIds.set(person.username, id);
   }
   const id = (username: string) => userIds.get(username)!;
-  const staff = { prescriber: id('amara.osei'), pharmacist: id('lin.park'), approver: id('tomas.ortiz'), nurse: id('kai.mendes'), secondNurse: id('rosa.adeyemi'), chargeNurse: id('mei.tan') };
+  const secondNurseName = DEMO_STAFF.find((person) => person.username === 'rosa.adeyemi')!.displayName;
+  const staff = { prescriber: id('amara.osei'), pharmacist: id('lin.park'), approver: id('tomas.ortiz'), nurse: id('kai.mendes'), secondNurse: id('rosa.adeyemi'), secondNurseName, chargeNurse: id('mei.tan') };
   return { staff, drugs, userIds };
 }
 
 /** The wards, each with an active dose-limit library version (the demo's adult or paediatric rules). */
-export function writeWards(writer: ScaleWriter, planned: PlannedWard[], drugs: Drugs, staff: Staff, userIds: Map<string, number>, now: number): WrittenWard[] {
+export function writeWards(writer: ScaleWriter, planned: PlannedWard[], drugs: Drugs, staff: Staff, userIds: Map<string, number>, now: number): (PlannedWard & WrittenWard)[] {
   const approvedAt = now - 60 * DAY;
   const wards = planned.map((ward) => {
     const slug = ward.name.toLowerCase().replace(/\s+/g, '-');
@@ -58,7 +60,7 @@ export function writeWards(writer: ScaleWriter, planned: PlannedWard[], drugs: D
       const ruleId = writer.insert('limit_rules', { versionId, drugId: drug.id, concentrationPerMl: rule.concentrationPerMl, doseUnit: rule.doseUnit, perKg: rule.perKg ? 1 : 0, limits: JSON.stringify(rule.limits) });
       rules.set(rule.drug, { id: ruleId, drugId: drug.id, drugName: rule.drug, concentrationPerMl: rule.concentrationPerMl, doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits });
     }
-    return { ...ward, id, paediatric: ward.weightBasedDosing, rules };
+    return { ...ward, id, paediatric: ward.weightBasedDosing, rules, policy: DEFAULT_WARD_POLICY };
   });
   // The demo staff keep their demo wards; prescribers and pharmacists cover the whole hospital.
   for (const person of DEMO_STAFF) {

@@ -1,4 +1,4 @@
-import { checkOrder, type Finding, type LimitRuleResponse, type Override, type PatientFactors, type Regimen } from '@lockstep/shared';
+import { checkOrder, hasBlockingFinding, type Finding, type LimitRuleResponse, type Override, type PatientFactors, type Regimen } from '@lockstep/shared';
 import type { Random } from './random.js';
 
 export type ScaleRegimen = Required<Regimen> & { drug: string; indication: string; syringeMl: number };
@@ -26,9 +26,10 @@ export function pickRegimen(random: Random, child: boolean, weightKg: number): S
   return { ...base, drug: 'fentanyl', doseUnit: 'mcg', concentrationPerMl: 10, demandDose: 20, lockoutMinutes: 6, basalRatePerHour: 0, fourHourLimit: 300, clinicianBolusDose: 25, indication };
 }
 
-/** The findings the server would have stored at signing, and a reason for each soft one. */
-export function signingRecord(regimen: ScaleRegimen, rule: LimitRuleResponse, patient: PatientFactors): { findings: Finding[]; overrides: Override[] } {
+/** The findings the server would have stored at signing, and the prescriber's reason for each soft one. */
+export function signingRecord(regimen: ScaleRegimen, rule: LimitRuleResponse, patient: PatientFactors, reason = 'Agreed with the acute pain team (invented)'): { findings: Finding[]; overrides: Override[] } {
   const findings = checkOrder(regimen, { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits }, patient);
-  const overrides = findings.filter((finding) => finding.severity === 'soft').map((finding) => ({ field: finding.field, reason: 'Agreed with the acute pain team (invented)' }));
+  if (hasBlockingFinding(findings)) throw new Error(`A seeded ${regimen.drug} order would be refused at signing: ${findings.filter((f) => f.severity === 'error' || f.severity === 'hard').map((f) => f.message).join('; ')}`);
+  const overrides = findings.filter((finding) => finding.severity === 'soft').map((finding) => ({ field: finding.field, reason }));
   return { findings, overrides };
 }

@@ -1,4 +1,6 @@
-import { DEFAULT_WARD_POLICY, observationFlags, reconcile, type ObservationValues, type PumpSettings, type SedationLevel } from '@lockstep/shared';
+import { observationFlags, reconcile, type FlagDraft, type ObservationValues, type PumpSettings, type WardPolicy } from '@lockstep/shared';
+import { discrepancyFlag } from '../../bedside/reconciliation-records.js';
+import type { ObservationScript } from './observation-script.js';
 import type { Random } from './random.js';
 import type { Staff } from './scale-reference.js';
 import type { ScaleRegimen } from './scale-regimen.js';
@@ -10,7 +12,7 @@ const HOUR = 60 * MINUTE;
 const CHANGE_BELOW_ML = 4;
 const RELEASE_ALPHABET = '234679ACDEFGHJKMNPQRTUVWXYZ';
 
-export type SyringeContext = { writer: ScaleWriter; random: Random; staff: Staff; toleranceMl: number; codes: ReleaseCodes };
+export type SyringeContext = { writer: ScaleWriter; random: Random; staff: Staff; policy: WardPolicy; codes: ReleaseCodes };
 
 export type ObservedOrder = {
   orderId: number;
@@ -21,9 +23,13 @@ export type ObservedOrder = {
   stopAt: number;
   /** Discontinued at this time (its last syringe is reconciled), or null while it runs. */
   end: number | null;
-  /** The last observation shows unacceptable sedation (an open urgent flag). */
-  sedatedAtLast: boolean;
+  /** Where each observation's values come from. */
+  script: ObservationScript;
+  /** False when the next syringe never came: the running one is left to run low. */
+  changeSyringes?: boolean;
 };
+
+type RunningSyringe = { id: number; releaseCode: string; lowFlagged: boolean };
 
 /** Distinct, label-safe release codes: a counter times a number coprime to 27^6, written in base 27. */
 export class ReleaseCodes {
@@ -47,28 +53,27 @@ export class ReleaseCodes {
  */
 export function writeSyringes(ctx: SyringeContext, order: ObservedOrder): void {
   const { random: r, writer, staff } = ctx;
-  const { regimen } = order;
+  const { regimen, script } = order;
   const demandMl = regimen.demandDose / regimen.concentrationPerMl;
   const basalMl = regimen.basalRatePerHour / regimen.concentrationPerMl;
+  let syringes = 0;
   let release = startSyringe(ctx, order, order.start);
   let previous: ObservationValues | null = null;
-  const jitter = () => r.int(-5, 5) * MINUTE;
-  let at = order.start + HOUR + jitter();
+  let at = order.start + HOUR + script.offsetMinutes() * MINUTE;
   for (let hour = 1; at < order.stopAt; hour++) {
-    const nextAt = order.start + (hour + 1) * HOUR + jitter();
+    const nextAt = order.start + (hour + 1) * HOUR + script.offsetMinutes() * MINUTE;
     const last = nextAt >= order.stopAt;
-    const early = hour <= 24;
+    const planned = script.hour({ hour, last });
     // Never more out of the syringe than was in it.
     const room = regimen.syringeMl - (previous?.volumeInfusedMl ?? 0) - basalMl;
-    const delivered = Math.max(0, Math.min(r.int(0, early ? 4 : 3), Math.floor(room / demandMl)));
-    const struggling = r.chance(0.01);
+    const delivered = Math.max(0, Math.min(planned.delivered, Math.floor(room / demandMl + 1e-9)));
     const values: ObservationValues = {
       at: new Date(at).toISOString(),
-      painScore: struggling ? r.int(7, 9) : Math.max(0, (early ? 4 : 3) + r.int(-2, 2)),
-      sedationLevel: last && order.sedatedAtLast ? '3' : r.pick<SedationLevel>(['S', '1', '1', '1', '2']),
-      respiratoryRate: last && order.sedatedAtLast ? 9 : r.int(11, 20),
-      spo2: r.int(93, 99),
-      attempts: (previous?.attempts ?? 0) + delivered + (struggling ? delivered + r.int(2, 4) : r.chance(0.3) ? r.int(1, 2) : 0),
+      painScore: planned.painScore,
+      sedationLevel: planned.sedationLevel,
+      respiratoryRate: planned.respiratoryRate,
+      spo2: planned.spo2,
+      attempts: (previous?.attempts ?? 0) + delivered + planned.refused,
       delivered: (previous?.delivered ?? 0) + delivered,
       volumeInfusedMl: round2(Math.min(regimen.syringeMl, (previous?.volumeInfusedMl ?? 0) + delivered * demandMl + basalMl)),
       syringeRemainingMl: 0,
@@ -91,42 +96,32 @@ export function writeSyringes(ctx: SyringeContext, order: ObservedOrder): void {
     });
     // Flags on the last observation of a running PCA are still open on the board.
     const acknowledgedAt = last && order.end === null ? null : at + r.int(10, 40) * MINUTE;
-    for (const flag of observationFlags(values, previous, basalMl, DEFAULT_WARD_POLICY)) {
+    for (const flag of observationFlags(values, previous, basalMl, ctx.policy)) {
       const oncePerSyringe = flag.code === 'syringe.low';
       if (oncePerSyringe && release.lowFlagged) continue;
       if (oncePerSyringe) release.lowFlagged = true;
-      writer.insert('flags', {
-        orderId: order.orderId,
-        releaseId: oncePerSyringe ? release.id : null,
-        severity: flag.severity,
-        code: flag.code,
-        message: flag.message,
-        action: flag.action,
-        raisedAt: sqlTime(at),
-        acknowledgedAt: acknowledgedAt === null ? null : sqlTime(acknowledgedAt),
-        acknowledgedById: acknowledgedAt === null ? null : staff.chargeNurse,
-        acknowledgeNote: acknowledgedAt === null ? null : 'Seen and acted on per protocol',
-      });
+      writeFlag(ctx, order.orderId, oncePerSyringe ? release.id : null, flag, at, acknowledgedAt);
     }
     previous = values;
     const changeAt = at + 10 * MINUTE;
-    if (values.syringeRemainingMl < CHANGE_BELOW_ML && changeAt < order.stopAt) {
-      takeDown(ctx, order, release.id, changeAt, values);
+    if (order.changeSyringes !== false && values.syringeRemainingMl < CHANGE_BELOW_ML && changeAt < order.stopAt) {
+      takeDown(ctx, order, release, changeAt, values, syringes++);
       release = startSyringe(ctx, order, changeAt);
       previous = null;
     }
     at = nextAt;
   }
-  if (order.end !== null) takeDown(ctx, order, release.id, order.end, previous);
+  if (order.end !== null) takeDown(ctx, order, release, order.end, previous, syringes);
 }
 
-function startSyringe(ctx: SyringeContext, order: ObservedOrder, at: number): { id: number; lowFlagged: boolean } {
+function startSyringe(ctx: SyringeContext, order: ObservedOrder, at: number): RunningSyringe {
   const { writer, staff, random: r } = ctx;
   const { regimen } = order;
   const releasedAt = at - r.int(20, 60) * MINUTE;
+  const releaseCode = ctx.codes.next();
   const id = writer.insert('syringe_releases', {
     orderId: order.orderId,
-    releaseCode: ctx.codes.next(),
+    releaseCode,
     status: 'in_use',
     concentrationPerMl: regimen.concentrationPerMl,
     volumeMl: regimen.syringeMl,
@@ -163,28 +158,45 @@ function startSyringe(ctx: SyringeContext, order: ObservedOrder, at: number): { 
     differences: '[]',
     rowVersion: 2,
   });
-  return { id, lowFlagged: false };
+  return { id, releaseCode, lowFlagged: false };
 }
 
-/** The syringe comes down: what is left is wasted in front of a witness and reconciled. */
-function takeDown(ctx: SyringeContext, order: ObservedOrder, releaseId: number, at: number, last: ObservationValues | null): void {
-  const { writer, staff, random: r } = ctx;
+/** The syringe comes down: what is left is wasted in front of a witness and reconciled; a shortfall is flagged for pharmacy. */
+function takeDown(ctx: SyringeContext, order: ObservedOrder, syringe: RunningSyringe, at: number, last: ObservationValues | null, index: number): void {
+  const { writer, staff } = ctx;
+  const dispensedMl = order.regimen.syringeMl;
   const infusedMl = last?.volumeInfusedMl ?? 0;
-  // Now and then what is left does not add up, so the board has reconciliations to report.
-  const wastedMl = round2(Math.max(0, order.regimen.syringeMl - infusedMl - (r.chance(0.02) ? 1 : 0)));
-  const result = reconcile(order.regimen.syringeMl, infusedMl, wastedMl, ctx.toleranceMl);
-  writer.finishRelease(releaseId);
+  const wastedMl = round2(Math.max(0, dispensedMl - infusedMl - order.script.missingAtTakeDown(index)));
+  const result = reconcile(dispensedMl, infusedMl, wastedMl, ctx.policy.reconciliationToleranceMl);
+  writer.finishRelease(syringe.id);
   writer.insert('release_reconciliations', {
-    releaseId,
-    dispensedMl: order.regimen.syringeMl,
+    releaseId: syringe.id,
+    dispensedMl,
     infusedMl,
     wastedMl,
     discrepancyMl: result.discrepancyMl,
     mustReport: result.mustReport ? 1 : 0,
-    toleranceMl: ctx.toleranceMl,
+    toleranceMl: ctx.policy.reconciliationToleranceMl,
     recordedById: staff.nurse,
     witnessId: staff.secondNurse,
     at: sqlTime(at),
+  });
+  // Open until pharmacy has reviewed the controlled-drug record.
+  if (result.mustReport) writeFlag(ctx, order.orderId, null, discrepancyFlag({ ...result, dispensedMl, infusedMl, wastedMl }, syringe.releaseCode), at, null);
+}
+
+function writeFlag(ctx: SyringeContext, orderId: number, releaseId: number | null, flag: FlagDraft, at: number, acknowledgedAt: number | null): void {
+  ctx.writer.insert('flags', {
+    orderId,
+    releaseId,
+    severity: flag.severity,
+    code: flag.code,
+    message: flag.message,
+    action: flag.action,
+    raisedAt: sqlTime(at),
+    acknowledgedAt: acknowledgedAt === null ? null : sqlTime(acknowledgedAt),
+    acknowledgedById: acknowledgedAt === null ? null : ctx.staff.chargeNurse,
+    acknowledgeNote: acknowledgedAt === null ? null : 'Seen and acted on per protocol',
   });
 }
 

@@ -52,4 +52,14 @@ export const DEMO_PATIENTS: DemoPatient[] = [
   { mrn: 'KB102391', givenName: 'Saoirse', familyName: 'Quill', dateOfBirth: '2011-02-06', sex: 'female', weightKg: 47, allergies: 'No known drug allergies', ...none, sleepApnoea: true, wardCode: 'WRE', bed: 'W06' },
   { mrn: 'KB103102', givenName: 'Bartholomew', familyName: 'Ng', dateOfBirth: '1949-10-09', sex: 'male', weightKg: 70, allergies: 'Morphine (itch, not anaphylaxis)', ...none, otherSedatives: true, wardCode: 'SUM', bed: 'S01' },
   { mrn: 'KB103355', givenName: 'Yelena', familyName: 'Marchetti', dateOfBirth: '1972-06-21', sex: 'female', weightKg: 66, allergies: 'No known drug allergies', ...none, opioidTolerant: true, sleepApnoea: true, wardCode: 'SUM', bed: 'S04' },
+  // Added after the first twelve, so those keep their ids.
+  { mrn: 'KB100905', givenName: 'Ezra', familyName: 'Whitlock', dateOfBirth: '1975-02-11', sex: 'male', weightKg: 79, allergies: 'No known drug allergies', ...none, wardCode: 'HAR', bed: 'H03' },
+  { mrn: 'KB100936', givenName: 'Sunniva', familyName: 'Haldorsen', dateOfBirth: '1962-08-30', sex: 'female', weightKg: 68, allergies: 'Penicillin (rash)', ...none, wardCode: 'HAR', bed: 'H08' },
+  { mrn: 'KB100947', givenName: 'Kwame', familyName: 'Asante-Boateng', dateOfBirth: '1958-12-03', sex: 'male', weightKg: 91, allergies: 'No known drug allergies', ...none, wardCode: 'HAR', bed: 'H09' },
+  { mrn: 'KB100958', givenName: 'Mateo', familyName: 'Quintero', dateOfBirth: '1986-05-19', sex: 'male', weightKg: 84, allergies: 'No known drug allergies', ...none, opioidTolerant: true, wardCode: 'HAR', bed: 'H12' },
+  { mrn: 'KB100969', givenName: 'Ottilie', familyName: 'Fenwick', dateOfBirth: '1990-01-25', sex: 'female', weightKg: 63, allergies: 'Latex', ...none, wardCode: 'HAR', bed: 'H04' },
+  { mrn: 'KB100971', givenName: 'Bogdan', familyName: 'Lisowski', dateOfBirth: '1971-04-08', sex: 'male', weightKg: 77, allergies: 'No known drug allergies', ...none, wardCode: 'HAR', bed: 'H01' },
+  { mrn: 'KB100983', givenName: 'Amaru', familyName: 'Condori', dateOfBirth: '1998-10-14', sex: 'male', weightKg: 70, allergies: 'No known drug allergies', ...none, wardCode: 'HAR', bed: 'H06' },
+  { mrn: 'KB101412', givenName: 'Yusra', familyName: 'Haddad', dateOfBirth: '1969-07-02', sex: 'female', weightKg: 72, allergies: 'No known drug allergies', ...none, wardCode: 'CED', bed: 'C05' },
+  { mrn: 'KB103410', givenName: 'Ilse', familyName: 'Brandvold', dateOfBirth: '1980-03-27', sex: 'female', weightKg: 59, allergies: 'Ibuprofen (wheeze)', ...none, wardCode: 'SUM', bed: 'S02' },
 ];

@@ -1,141 +1,143 @@
+import type { Database } from 'better-sqlite3';
 import type { EntityManager } from 'typeorm';
-import { ageInYears, checkOrder, type OrderStatus, type Regimen } from '@lockstep/shared';
+import type { BetterSqlite3Driver } from 'typeorm/driver/better-sqlite3/BetterSqlite3Driver.js';
+import { ageInYears, shiftWindow } from '@lockstep/shared';
+import { Drug } from '../../drugs/entities/drug.entity.js';
 import { toLimitRuleResponse } from '../../library/dto/library-response.js';
 import { LimitRule } from '../../library/entities/limit-rule.entity.js';
-import type { DemoAuditEntry } from './demo-audit.js';
-import { OrderEvent } from '../../orders/entities/order-event.entity.js';
-import { PcaOrder } from '../../orders/entities/pca-order.entity.js';
 import { Patient } from '../../patients/entities/patient.entity.js';
-import { SyringeRelease } from '../../releases/entities/syringe-release.entity.js';
-import { User } from '../../users/entities/user.entity.js';
+import type { User } from '../../users/entities/user.entity.js';
+import { Ward } from '../../wards/entities/ward.entity.js';
+import { wardPolicy } from '../../wards/ward-policy.js';
+import { Random } from '../scale/random.js';
+import { type OrderContext, type ScalePatient, writePca, writeUnstartedOrder } from '../scale/scale-orders.js';
+import type { Drugs, Staff, WrittenWard } from '../scale/scale-reference.js';
+import { ReleaseCodes } from '../scale/scale-syringes.js';
+import { ScaleWriter } from '../scale/scale-writer.js';
+import { DEMO_PCAS, DEMO_UNSTARTED_ORDERS, type DemoPca } from './demo-pcas.js';
+import { DemoScript } from './demo-script.js';
 
-// Invented demo orders, so the verification queue, "My orders" and the bedside have work at once.
-type DemoOrder = {
-  mrn: string;
-  drug: string;
-  regimen: Regimen;
-  indication: string;
-  signedMinutesAgo: number;
-  status: OrderStatus;
-  reason?: string;
-  releaseCode?: string;
-};
+const MINUTE = 60_000;
+const HOUR = 60 * MINUTE;
+// The same invented hospital every time: only the clock moves.
+const DEMO_RANDOM_SEED = 20261203;
 
-const DEMO_ORDERS: DemoOrder[] = [
-  {
-    mrn: 'KB100231',
-    drug: 'morphine',
-    regimen: { doseUnit: 'mg', concentrationPerMl: 1, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0, fourHourLimit: 30 },
-    indication: 'Pain after laparotomy',
-    signedMinutesAgo: 45,
-    status: 'awaiting_verification',
-  },
-  {
-    mrn: 'KB100672',
-    drug: 'hydromorphone',
-    regimen: { doseUnit: 'mg', concentrationPerMl: 0.2, demandDose: 0.2, lockoutMinutes: 10, basalRatePerHour: 0.1, fourHourLimit: 6 },
-    indication: 'Pain after bowel resection; regular opioid before admission',
-    signedMinutesAgo: 180,
-    status: 'verified',
-    releaseCode: 'HK3-7QT',
-  },
-  {
-    mrn: 'KB101127',
-    drug: 'fentanyl',
-    regimen: { doseUnit: 'mcg', concentrationPerMl: 10, demandDose: 20, lockoutMinutes: 6, basalRatePerHour: 0, fourHourLimit: 300 },
-    indication: 'Pain after femoral fracture fixation',
-    signedMinutesAgo: 120,
-    status: 'returned',
-    reason: 'Lockout of 6 minutes is shorter than the ward’s usual 10 minutes: please confirm or revise',
-  },
-];
+type DemoPatient = { ward: WrittenWard; shifts: ShiftStarts; patient: ScalePatient };
+type ShiftStarts = Pick<Ward, 'dayShiftStart' | 'nightShiftStart'>;
 
-/** Seeds the demo orders; answers the audit entries of their story, for the caller to record in time order. */
-export async function seedDemoOrders(manager: EntityManager, users: User[]): Promise<DemoAuditEntry[]> {
-  const story: DemoAuditEntry[] = [];
-  const person = (username: string) => users.find((user) => user.username === username)!;
-  const prescriber = person('amara.osei');
-  const pharmacist = person('lin.park');
-  for (const demo of DEMO_ORDERS) {
-    const patient = await manager.findOneByOrFail(Patient, { mrn: demo.mrn });
-    const rule = await manager
-      .createQueryBuilder(LimitRule, 'rule')
-      .innerJoinAndSelect('rule.drug', 'drug', 'drug.genericName = :name', { name: demo.drug })
-      .innerJoin('rule.version', 'version', "version.wardId = :wardId AND version.status = 'active'", { wardId: patient.wardId })
-      .where('abs(rule.concentrationPerMl - :c) < 1e-9', { c: demo.regimen.concentrationPerMl })
-      .getOneOrFail();
-    const signedAt = new Date(Date.now() - demo.signedMinutesAgo * 60_000);
-    const decidedAt = new Date(signedAt.getTime() + 20 * 60_000);
-    const findings = checkOrder(demo.regimen, { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits }, {
-      weightKg: patient.weightKg,
-      ageYears: ageInYears(patient.dateOfBirth),
-      opioidTolerant: patient.opioidTolerant,
-      sleepApnoea: patient.sleepApnoea,
-      otherSedatives: patient.otherSedatives,
+/**
+ * Writes the demo's orders through the scale seed's writers (the same rows the app writes: findings
+ * from the real order check, flags from the real observation rules, reconciliations from the real
+ * arithmetic), with times counted back from `now`. Runs inside the caller's transaction: TypeORM's
+ * better-sqlite3 driver has one connection, and the writers' statements run on it.
+ */
+export async function seedDemoOrders(manager: EntityManager, users: User[], now: number): Promise<void> {
+  const writer = new ScaleWriter((manager.connection.driver as BetterSqlite3Driver).databaseConnection as Database);
+  const ctx: OrderContext = { writer, random: new Random(DEMO_RANDOM_SEED), staff: demoStaff(users), drugs: await demoDrugs(manager), codes: new ReleaseCodes(), now };
+  const patients = await demoPatients(manager);
+  const find = (mrn: string) => patients.get(mrn) ?? missing(mrn);
+
+  for (const order of DEMO_UNSTARTED_ORDERS) {
+    const { ward, patient } = find(order.mrn);
+    const signedAt = now - order.signedMinutesAgo * MINUTE;
+    writeUnstartedOrder(ctx, {
+      ...order,
+      ward,
+      patient,
+      signedAt,
+      decidedAt: signedAt + (order.decidedAfterMinutes ?? 0) * MINUTE,
+      releaseCode: order.releaseCode ?? null,
     });
-    const order = await manager.save(
-      manager.create(PcaOrder, {
-        ...demo.regimen,
-        patientId: patient.id,
-        prescriberId: prescriber.id,
-        drugId: rule.drugId,
-        status: demo.status,
-        regimenType: demo.regimen.basalRatePerHour > 0 ? 'demand_basal' : 'demand_only',
-        version: 1,
-        loadingDose: null,
-        oneHourLimit: null,
-        clinicianBolusDose: null,
-        indication: demo.indication,
-        reviewDate: new Date(Date.now() + 2 * 24 * 3600_000).toISOString().slice(0, 10),
-        ruleSnapshot: toLimitRuleResponse(rule),
-        findingsSnapshot: findings,
-        overrides: [],
-        signedAt,
-        verifiedById: demo.status === 'verified' ? pharmacist.id : null,
-        verifiedAt: demo.status === 'verified' ? decidedAt : null,
-        statusChangedAt: demo.status === 'awaiting_verification' ? signedAt : decidedAt,
-        statusReason: demo.reason ?? null,
-      }),
-    );
-    await manager.insert(OrderEvent, { orderId: order.id, fromStatus: null, toStatus: 'awaiting_verification', userId: prescriber.id, at: signedAt, reason: null });
-    const { concentrationPerMl, doseUnit, demandDose, lockoutMinutes, basalRatePerHour, fourHourLimit } = demo.regimen;
-    story.push({
-      actor: prescriber,
-      action: 'order.create',
-      entityType: 'order',
-      entityId: order.id,
-      at: signedAt,
-      summary: { patientId: patient.id, drugId: rule.drugId, concentrationPerMl, doseUnit, demandDose, lockoutMinutes, basalRatePerHour, fourHourLimit, reviewDate: order.reviewDate },
-    });
-    if (demo.status !== 'awaiting_verification') {
-      await manager.insert(OrderEvent, { orderId: order.id, fromStatus: 'awaiting_verification', toStatus: demo.status, userId: pharmacist.id, at: decidedAt, reason: demo.reason ?? null });
-      story.push({
-        actor: pharmacist,
-        action: demo.status === 'verified' ? 'order.verify' : 'order.return',
-        entityType: 'order',
-        entityId: order.id,
-        at: decidedAt,
-        summary: { status: { from: 'awaiting_verification', to: demo.status }, ...(demo.reason ? { reason: demo.reason } : { signed: true }) },
-      });
-    }
-    if (demo.releaseCode) {
-      const releasedAt = new Date(decidedAt.getTime() + 15 * 60_000);
-      story.push({ actor: pharmacist, action: 'order.release', entityType: 'order', entityId: order.id, at: releasedAt, summary: { releaseCode: demo.releaseCode, concentrationPerMl, volumeMl: 50, batch: 'DEMO-0412' } });
-      await manager.insert(SyringeRelease, {
-        orderId: order.id,
-        releaseCode: demo.releaseCode,
-        status: 'ready',
-        concentrationPerMl: demo.regimen.concentrationPerMl,
-        volumeMl: 50,
-        batch: 'DEMO-0412',
-        expiresAt: new Date(Date.now() + 7 * 24 * 3600_000),
-        preparedBy: 'Lin Park',
-        checkedBy: 'Tomas Ortiz',
-        overrideReason: null,
-        releasedById: pharmacist.id,
-        releasedAt,
-      });
-    }
   }
-  return story;
+  for (const pca of DEMO_PCAS) writeDemoPca(ctx, find(pca.mrn), pca);
+  writer.flushObservations();
+}
+
+function writeDemoPca(ctx: OrderContext, { ward, shifts, patient }: DemoPatient, pca: DemoPca): void {
+  const { now, random } = ctx;
+  const start = pca.start === 'syringe-empties-this-shift' ? startToEmptyThisShift(pca, shifts, now) : now - pca.start.minutesAgo * MINUTE;
+  const end = pca.endedMinutesAgo === undefined ? null : now - pca.endedMinutesAgo * MINUTE;
+  const stopAt = end ?? now - (pca.unobservedMinutes ?? 0) * MINUTE;
+  // Verified before pharmacy releases the first syringe (20 to 60 minutes before the start).
+  const signedAt = start - random.int(110, 160) * MINUTE;
+  writePca(ctx, {
+    ward,
+    patient,
+    regimen: pca.regimen,
+    signedAt,
+    verifiedAt: signedAt + random.int(15, 40) * MINUTE,
+    start,
+    end,
+    stopAt,
+    script: new DemoScript(random, pca.script, Math.floor((stopAt - start) / HOUR)),
+    // Left to run low: pharmacy has been asked for the next syringe.
+    changeSyringes: pca.start !== 'syringe-empties-this-shift',
+    bolusAt: pca.bolusAfterHours === undefined ? null : start + pca.bolusAfterHours * HOUR + 12 * MINUTE,
+    currentShift: pca.currentShift,
+  });
+}
+
+/**
+ * A start time such that the syringe, used at a steady rate and observed on the hour, has an hour
+ * left at its last observation and so is projected empty before the current shift ends, whatever
+ * the time of day: the last observation is 15 minutes ago, or longer ago near the shift's end.
+ */
+function startToEmptyThisShift(pca: DemoPca, shifts: ShiftStarts, now: number): number {
+  const { regimen, script } = pca;
+  const mlPerHour = (script.doses[0] * regimen.demandDose + regimen.basalRatePerHour) / regimen.concentrationPerMl;
+  const hoursToEmpty = regimen.syringeMl / mlPerHour;
+  if (script.doses.length !== 1 || !script.onTheHour || !Number.isInteger(hoursToEmpty)) {
+    throw new Error(`The demo PCA for ${pca.mrn} must empty its syringe in whole hours at a steady rate, observed on the hour`);
+  }
+  const shiftLeft = Date.parse(shiftWindow(new Date(now), shifts.dayShiftStart, shifts.nightShiftStart).endsAt) - now;
+  const sinceLastObservation = Math.min(HOUR - MINUTE / 2, Math.max(15 * MINUTE, HOUR - shiftLeft / 2));
+  return now - sinceLastObservation - (hoursToEmpty - 1) * HOUR;
+}
+
+function demoStaff(users: User[]): Staff {
+  const id = (username: string) => (users.find((user) => user.username === username) ?? missing(username)).id;
+  const rosa = users.find((user) => user.username === 'rosa.adeyemi') ?? missing('rosa.adeyemi');
+  return { prescriber: id('amara.osei'), pharmacist: id('lin.park'), approver: id('tomas.ortiz'), nurse: id('kai.mendes'), secondNurse: rosa.id, secondNurseName: rosa.displayName, chargeNurse: id('mei.tan') };
+}
+
+async function demoDrugs(manager: EntityManager): Promise<Drugs> {
+  const drugs = await manager.find(Drug);
+  return new Map(drugs.map((drug) => [drug.genericName, { id: drug.id, doseUnit: drug.doseUnit }]));
+}
+
+/** Each demo patient with their ward's active rules and policy, by MRN. */
+async function demoPatients(manager: EntityManager): Promise<Map<string, DemoPatient>> {
+  const rules = await manager
+    .createQueryBuilder(LimitRule, 'rule')
+    .innerJoinAndSelect('rule.drug', 'drug')
+    .innerJoinAndSelect('rule.version', 'version', "version.status = 'active'")
+    .getMany();
+  const wards = new Map(
+    (await manager.find(Ward)).map((ward) => {
+      const mine = rules.filter((rule) => rule.version.wardId === ward.id);
+      const written: WrittenWard = { id: ward.id, paediatric: ward.weightBasedDosing, rules: new Map(mine.map((rule) => [rule.drug.genericName, toLimitRuleResponse(rule)])), policy: wardPolicy(ward) };
+      return [ward.id, { ward: written, shifts: ward }];
+    }),
+  );
+  const patients = await manager.find(Patient);
+  return new Map(
+    patients.map((patient) => [
+      patient.mrn,
+      {
+        ...wards.get(patient.wardId)!,
+        patient: {
+          id: patient.id,
+          weightKg: patient.weightKg ?? 0,
+          ageYears: ageInYears(patient.dateOfBirth),
+          opioidTolerant: patient.opioidTolerant,
+          sleepApnoea: patient.sleepApnoea,
+          otherSedatives: patient.otherSedatives,
+        },
+      },
+    ]),
+  );
+}
+
+function missing(what: string): never {
+  throw new Error(`The demo data has no ${what}`);
 }

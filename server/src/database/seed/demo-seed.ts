@@ -8,22 +8,23 @@ import { hashPassword } from '../../users/passwords.js';
 import { Ward } from '../../wards/entities/ward.entity.js';
 import { DEMO_DRUGS, DEMO_PATIENTS, DEMO_WARDS } from './demo-data.js';
 import { DEMO_LIBRARIES, DEMO_PENDING_CHANGE } from './demo-library.js';
-import { type DemoAuditEntry, recordDemoStory } from './demo-audit.js';
+import type { DemoAuditEntry } from './demo-audit.js';
 import { seedDemoOrders } from './demo-orders.js';
+import { tellDemoStory } from './demo-story.js';
 import { DEMO_PASSWORD, DEMO_STAFF } from './demo-staff.js';
 
 /** Seeds the demo scenario in one transaction, only into an empty database. Returns whether it did. */
-export async function seedDemoDataIfEmpty(dataSource: DataSource): Promise<boolean> {
+export async function seedDemoDataIfEmpty(dataSource: DataSource, now = Date.now()): Promise<boolean> {
   return dataSource.transaction(async (manager) => {
     const hasUsers = (await manager.count(User)) > 0;
     const hasWards = (await manager.count(Ward)) > 0;
     if (hasUsers || hasWards) return false;
-    await seedDemoData(manager);
+    await seedDemoData(manager, now);
     return true;
   });
 }
 
-async function seedDemoData(manager: EntityManager): Promise<void> {
+async function seedDemoData(manager: EntityManager, now: number): Promise<void> {
   const wards = await manager.save(Ward, DEMO_WARDS.map((ward) => manager.create(Ward, ward)));
   const wardByCode = new Map(wards.map((ward) => [ward.code, ward]));
 
@@ -44,7 +45,7 @@ async function seedDemoData(manager: EntityManager): Promise<void> {
     ),
   );
 
-  const libraryStory = await seedDemoLibraries(manager, wards, drugs, users);
+  const libraryStory = await seedDemoLibraries(manager, wards, drugs, users, now);
 
   await manager.save(
     Patient,
@@ -53,17 +54,17 @@ async function seedDemoData(manager: EntityManager): Promise<void> {
     ),
   );
 
-  const orderStory = await seedDemoOrders(manager, users);
-  await recordDemoStory(manager, [...libraryStory, ...orderStory]);
+  await seedDemoOrders(manager, users, now);
+  await tellDemoStory(manager, users, libraryStory);
 }
 
-async function seedDemoLibraries(manager: EntityManager, wards: Ward[], drugs: Drug[], users: User[]): Promise<DemoAuditEntry[]> {
+async function seedDemoLibraries(manager: EntityManager, wards: Ward[], drugs: Drug[], users: User[], now: number): Promise<DemoAuditEntry[]> {
   const story: DemoAuditEntry[] = [];
   const wardId = (code: string) => wards.find((ward) => ward.code === code)!.id;
   const drugId = (name: string) => drugs.find((drug) => drug.genericName === name)!.id;
   const author = users.find((user) => user.username === 'lin.park')!;
   const approver = users.find((user) => user.username === 'tomas.ortiz')!;
-  const approvedAt = new Date(Date.now() - 30 * 24 * 3600 * 1000);
+  const approvedAt = new Date(now - 30 * 24 * 3600 * 1000);
 
   for (const library of DEMO_LIBRARIES) {
     const version = await manager.save(
@@ -102,8 +103,8 @@ async function seedDemoLibraries(manager: EntityManager, wards: Ward[], drugs: D
       status: 'pending_approval',
       note: pending.note,
       authorId: author.id,
-      createdAt: new Date(Date.now() - 26 * 3600 * 1000),
-      submittedAt: new Date(Date.now() - 2 * 3600 * 1000),
+      createdAt: new Date(now - 26 * 3600 * 1000),
+      submittedAt: new Date(now - 2 * 3600 * 1000),
     }),
   );
   await manager.insert(
