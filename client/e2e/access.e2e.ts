@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { openBrowser, signIn, type BrowserSession } from './support/browser.js';
+import { openBrowser, signIn, signInHome, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 
 describe('roles are enforced by the API, not only by the screens', () => {
@@ -20,8 +20,7 @@ describe('roles are enforced by the API, not only by the screens', () => {
 
   it('a nurse calling an admin route with her own token gets 403', async () => {
     const { page } = browser;
-    await signIn(page, 'kai.mendes');
-    await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await signInHome(page, 'kai.mendes');
     kaiToken = await page.evaluate(
       () =>
         Object.keys(sessionStorage)

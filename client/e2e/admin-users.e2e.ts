@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, it } from 'vitest';
-import { openBrowser, signIn, snapshot, type BrowserSession } from './support/browser.js';
+import { openBrowser, signIn, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 import { readyDialog } from './support/dialog.js';
 
@@ -36,7 +36,6 @@ describe('admin user management', () => {
     await page.getByRole('cell', { name: 'noor.haddad' }).waitFor();
 
     await page.getByRole('button', { name: 'Sign out' }).click();
-    await signIn(page, 'noor.haddad', 'a-sufficiently-long-one');
-    await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await signInHome(page, 'noor.haddad', 'a-sufficiently-long-one');
   });
 });

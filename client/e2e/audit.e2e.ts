@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD, openBrowser, signIn, snapshot, type BrowserSession } from './support/browser.js';
+import { DEMO_PASSWORD, openBrowser, signIn, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 
 // The demo's Harbour ward (id 1) keeps SpO2 below 90 % as its shipped threshold; the demo order
@@ -111,8 +111,7 @@ describe('audit trail', () => {
 
   it('a pharmacist may search orders and library versions only, and opens an order from its event', async () => {
     const { page } = browser;
-    await signIn(page, 'lin.park');
-    await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await signInHome(page, 'lin.park');
     await openAudit(page);
     await page.getByRole('combobox', { name: 'Record type' }).click();
     await expect.poll(() => page.getByRole('option').allInnerTexts()).toEqual(['Order', 'Library version']);
@@ -131,8 +130,7 @@ describe('audit trail', () => {
 
   it("a nurse reads the order's story on its page: who verified it and when", async () => {
     const { page } = browser;
-    await signIn(page, 'kai.mendes');
-    await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await signInHome(page, 'kai.mendes');
     await page.goto(`/orders/${verifiedId}`);
     await page.getByRole('heading', { name: `PCA order ${verifiedId}`, level: 1 }).waitFor();
     const story = page.getByRole('region', { name: 'Order story' });

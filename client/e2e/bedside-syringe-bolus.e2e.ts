@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD, openBrowser, signIn, snapshot, type BrowserSession } from './support/browser.js';
+import { DEMO_PASSWORD, openBrowser, openPatients, signIn, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 
 // An active morphine PCA for NOAH ACHTERBERG (KB100231, born 1968-03-14, Harbour bed H02), set up
@@ -77,8 +77,7 @@ describe('bedside: clinician bolus over the soft limit, and a syringe change wit
     server = await startServer();
     ({ spareCode } = await activeOrderWithSpareSyringe(server.baseUrl));
     kai = await openBrowser(server.baseUrl);
-    await signIn(kai.page, 'kai.mendes');
-    await kai.page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await signInHome(kai.page, 'kai.mendes');
   });
   afterAll(async () => {
     await kai?.close();
@@ -87,6 +86,7 @@ describe('bedside: clinician bolus over the soft limit, and a syringe change wit
 
   it('leads from the patient page to the patient’s PCA tasks', async () => {
     const { page } = kai;
+    await openPatients(page);
     await page.getByText('KB100231').click();
     await page.getByRole('link', { name: 'Bedside PCA tasks' }).click();
     await page.getByRole('heading', { name: 'PCA orders', level: 1 }).waitFor();

@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD, openBrowser, signIn, snapshot, type BrowserSession } from './support/browser.js';
+import { DEMO_PASSWORD, openBrowser, signIn, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 
 // The demo's verified order: TAVITA FALEOLO (Harbour bed H07), HYDROmorphone 0.2 mg/mL, demand
@@ -87,8 +87,7 @@ describe('bedside: blind two-nurse check, a mismatch, a match, and discontinue w
   beforeAll(async () => {
     server = await startServer();
     kai = await openBrowser(server.baseUrl);
-    await signIn(kai.page, 'kai.mendes');
-    await kai.page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await signInHome(kai.page, 'kai.mendes');
   });
   afterAll(async () => {
     await sam?.close();

@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { openBrowser, signIn, snapshot, type BrowserSession } from './support/browser.js';
+import { openBrowser, openPatients, signIn, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 
 // The built client uses the default idle sign-out: 15 minutes, with a warning a minute before.
@@ -24,8 +24,8 @@ describe('idle sign-out on a shared ward computer', () => {
 
   it('warns a minute before, with a countdown and "Stay signed in" ready to press', async () => {
     const { page } = browser;
-    await signIn(page, 'kai.mendes');
-    await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await signInHome(page, 'kai.mendes');
+    await openPatients(page);
     await page.getByText('KB100231').click();
     await page.getByRole('heading', { name: 'ACHTERBERG, Noah', level: 1 }).waitFor();
 
@@ -65,8 +65,7 @@ describe('idle sign-out on a shared ward computer', () => {
     await page.getByText('Signed out after 15 minutes without activity. Sign in again to carry on.').waitFor();
     await snapshot(page, 'idle-signed-out');
 
-    await signIn(page, 'rosa.adeyemi');
-    await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
-    expect(new URL(page.url()).pathname).toBe('/patients');
+    await signInHome(page, 'rosa.adeyemi');
+    expect(new URL(page.url()).pathname).toBe('/bedside');
   });
 });

@@ -3,7 +3,7 @@ import { tmpdir } from 'node:os';
 import path from 'node:path';
 import type { Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { openBrowser, signIn, snapshot, type BrowserSession } from './support/browser.js';
+import { openBrowser, signIn, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 import { readyDialog } from './support/dialog.js';
 
@@ -77,8 +77,7 @@ describe('dose-limit library: import a CSV, submit, and a second pharmacist appr
     writeFileSync(goodFile, csv(ROWS));
     server = await startServer();
     lin = await openBrowser(server.baseUrl);
-    await signIn(lin.page, 'lin.park');
-    await lin.page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await signInHome(lin.page, 'lin.park');
   });
   afterAll(async () => {
     await tomas?.close();
@@ -217,8 +216,7 @@ describe('dose-limit library: import a CSV, submit, and a second pharmacist appr
   it('tomas.ortiz approves Cedar’s pending version with his password', async () => {
     tomas = await openBrowser(server.baseUrl);
     const { page } = tomas;
-    await signIn(page, 'tomas.ortiz');
-    await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await signInHome(page, 'tomas.ortiz');
     await openLibrary(page);
     await chooseWard(page, 'Cedar');
     await page.getByRole('table', { name: 'Library versions' }).getByRole('row', { name: /Version 2 Awaiting approval/ }).click();

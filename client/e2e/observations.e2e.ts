@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD, openBrowser, signIn, snapshot as saveSnapshot, type BrowserSession } from './support/browser.js';
+import { DEMO_PASSWORD, openBrowser, signIn, signInHome, snapshot as saveSnapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 import { readyDialog } from './support/dialog.js';
 
@@ -78,8 +78,7 @@ describe('observations: flags, usage charts and acknowledgement', () => {
     server = await startServer();
     order = await startDemoPca(server);
     kai = await openBrowser(server.baseUrl);
-    await signIn(kai.page, 'kai.mendes');
-    await kai.page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await signInHome(kai.page, 'kai.mendes');
   });
   afterAll(async () => {
     await sam?.close();

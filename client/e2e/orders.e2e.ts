@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD, openBrowser, signIn, snapshot, type BrowserSession } from './support/browser.js';
+import { DEMO_PASSWORD, openBrowser, openPatients, signIn, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 import { readyDialog } from './support/dialog.js';
 
@@ -59,8 +59,8 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
 
   it('a prescriber writes an order from a standard set and explains the soft finding', async () => {
     const { page } = browser;
-    await signIn(page, 'amara.osei');
-    await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await signInHome(page, 'amara.osei');
+    await openPatients(page);
     await page.getByText('KB100231').click();
     await page.getByRole('heading', { name: 'ACHTERBERG, Noah', level: 1 }).waitFor();
     await page.getByRole('link', { name: 'New PCA order' }).click();
@@ -245,7 +245,7 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
     expect(rows.some((row) => row.includes('amara.osei@') && row.includes('returned with a query'))).toBe(true);
     expect(rows.some((row) => row.includes('nurse-in-charge.') && row.includes('syringe released'))).toBe(true);
 
-    await table.getByRole('button', { name: /Show the text of “PCA syringe released/ }).click();
+    await table.getByRole('button', { name: /Show the text of “PCA syringe released for Harbour bed H02/ }).click();
     await table.getByText(`release code ${releaseCode}`).waitFor();
     await shot(page, 'mailbox');
   });
@@ -253,8 +253,8 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
   it('a weight-based ward offers only its per-kg set, worked out for the weight', async () => {
     const { page } = browser;
     await page.getByRole('button', { name: 'Sign out' }).click();
-    await signIn(page, 'amara.osei');
-    await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await signInHome(page, 'amara.osei');
+    await openPatients(page);
     await page.getByText('KB102248').click();
     await page.getByRole('link', { name: 'New PCA order' }).click();
     await page.getByRole('heading', { name: 'New PCA order', level: 1 }).waitFor();

@@ -1,6 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { openBrowser, signIn, snapshot, type BrowserSession } from './support/browser.js';
+import { openBrowser, openPatients, signIn, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
+
+// The demo hospital's admitted patients, on every ward (server/src/database/seed/demo-data.ts).
+const DEMO_PATIENT_COUNT = 21;
 
 describe('ward patient list', () => {
   let server: RunningServer;
@@ -9,8 +12,8 @@ describe('ward patient list', () => {
   beforeAll(async () => {
     server = await startServer();
     browser = await openBrowser(server.baseUrl);
-    await signIn(browser.page, 'amara.osei');
-    await browser.page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+    await signInHome(browser.page, 'amara.osei');
+    await openPatients(browser.page);
   });
   afterAll(async () => {
     await browser?.close();
@@ -21,7 +24,7 @@ describe('ward patient list', () => {
 
   it('lists every demo patient', async () => {
     await browser.page.getByText('KB100231').waitFor();
-    expect(await bodyRows().count()).toBe(12);
+    expect(await bodyRows().count()).toBe(DEMO_PATIENT_COUNT);
   });
 
   it('searches by name and by MRN', async () => {
@@ -32,7 +35,7 @@ describe('ward patient list', () => {
     await search.fill('KB102');
     await expect.poll(() => bodyRows().count()).toBe(3);
     await search.fill('');
-    await expect.poll(() => bodyRows().count()).toBe(12);
+    await expect.poll(() => bodyRows().count()).toBe(DEMO_PATIENT_COUNT);
   });
 
   it('filters by ward', async () => {
@@ -43,7 +46,7 @@ describe('ward patient list', () => {
     await snapshot(page, 'patients-wren');
     await page.getByRole('combobox', { name: /ward/i }).click();
     await page.getByRole('option', { name: 'All wards' }).click();
-    await expect.poll(() => bodyRows().count()).toBe(12);
+    await expect.poll(() => bodyRows().count()).toBe(DEMO_PATIENT_COUNT);
   });
 
   it('sorts by a column header', async () => {

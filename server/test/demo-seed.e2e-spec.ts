@@ -45,6 +45,15 @@ describe('the demo hospital, caught in the middle of a shift', () => {
     expect(confirmed).toBeLessThan(running.length);
   });
 
+  it('an order’s detail says when its next observation is due, as the board does; none before it runs', async () => {
+    for (const row of (await board(HARBOUR)).rows) {
+      const detail = (await get('kai', `/api/orders/${row.orderId}`)).body as OrderDetail;
+      expect(detail.nextObservation?.dueAt ?? null, `order ${row.orderId}`).toBe(row.nextObservation?.dueAt ?? null);
+      expect(detail.nextObservation?.severity ?? null).toBe(row.nextObservation?.severity ?? null);
+      if (row.status !== 'active') expect(detail.nextObservation).toBeNull();
+    }
+  });
+
   it('every running PCA has 24-hour figures, the same on its usage page as on the board', async () => {
     let running = 0;
     for (const wardId of WARDS) {

@@ -60,6 +60,29 @@ export async function signIn(page: Page, username: string, password = DEMO_PASSW
   await page.getByRole('button', { name: 'Sign in' }).click();
 }
 
+/** The heading of the screen each demo account lands on: where its work waits. */
+export const HOME_HEADINGS: Record<string, string> = {
+  'amara.osei': 'My orders',
+  'lin.park': 'Verification',
+  'tomas.ortiz': 'Verification',
+  'kai.mendes': 'PCA orders',
+  'rosa.adeyemi': 'PCA orders',
+  'mei.tan': 'Handover',
+  'sam.rivera': 'Users',
+};
+
+/** Signs in and waits for the account's home screen (a nurse's by default, for accounts made in a test). */
+export async function signInHome(page: Page, username: string, password = DEMO_PASSWORD, home = HOME_HEADINGS[username] ?? 'PCA orders'): Promise<void> {
+  await signIn(page, username, password);
+  await page.getByRole('heading', { name: home, level: 1 }).waitFor();
+}
+
+/** Opens the Patients screen from the left navigation. */
+export async function openPatients(page: Page): Promise<void> {
+  await page.getByRole('navigation').getByRole('link', { name: 'Patients' }).click();
+  await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
+}
+
 /** Saves a screenshot under client/e2e/artifacts for a person to look at after a run. */
 export async function snapshot(page: Page, name: string): Promise<void> {
   const directory = path.resolve(path.dirname(new URL(import.meta.url).pathname), '..', 'artifacts');

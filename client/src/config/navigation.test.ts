@@ -12,11 +12,11 @@ const NAV_LABELS: Partial<Record<Role, string[]>> = {
 };
 
 describe('role homes and navigation', () => {
-  it('lands clinical roles on Patients and the admin on Users', () => {
-    expect(homePathFor('prescriber')).toBe('/patients');
-    expect(homePathFor('pharmacist')).toBe('/patients');
-    expect(homePathFor('nurse')).toBe('/patients');
-    expect(homePathFor('charge_nurse')).toBe('/patients');
+  it('lands each role where its work waits', () => {
+    expect(homePathFor('prescriber')).toBe('/orders/mine');
+    expect(homePathFor('pharmacist')).toBe('/verification');
+    expect(homePathFor('nurse')).toBe('/bedside');
+    expect(homePathFor('charge_nurse')).toBe('/handover');
     expect(homePathFor('admin')).toBe('/admin/users');
   });
 
@@ -52,12 +52,12 @@ describe('landingPathFor', () => {
   });
 
   it("sends the role home otherwise", () => {
-    expect(landingPathFor('nurse', '/admin/users')).toBe('/patients');
+    expect(landingPathFor('nurse', '/admin/users')).toBe('/bedside');
     expect(landingPathFor('admin', '/patients/3')).toBe('/admin/users');
-    expect(landingPathFor('nurse', null)).toBe('/patients');
-    expect(landingPathFor('nurse', '/patientsXYZ')).toBe('/patients');
-    expect(landingPathFor('nurse', '/library')).toBe('/patients');
-    expect(landingPathFor('nurse', '//elsewhere.example/patients')).toBe('/patients');
+    expect(landingPathFor('nurse', null)).toBe('/bedside');
+    expect(landingPathFor('nurse', '/patientsXYZ')).toBe('/bedside');
+    expect(landingPathFor('nurse', '/library')).toBe('/bedside');
+    expect(landingPathFor('nurse', '//elsewhere.example/patients')).toBe('/bedside');
   });
 });
 
@@ -92,10 +92,10 @@ describe('order, verification and mailbox routes', () => {
 
   it('lands each role only on order screens it may open', () => {
     expect(landingPathFor('prescriber', '/orders/mine')).toBe('/orders/mine');
-    expect(landingPathFor('nurse', '/orders/mine')).toBe('/patients');
+    expect(landingPathFor('nurse', '/orders/mine')).toBe(homePathFor('nurse'));
     expect(landingPathFor('nurse', '/orders/14')).toBe('/orders/14');
     expect(landingPathFor('pharmacist', '/verification/14')).toBe('/verification/14');
-    expect(landingPathFor('prescriber', '/verification/14')).toBe('/patients');
+    expect(landingPathFor('prescriber', '/verification/14')).toBe(homePathFor('prescriber'));
     expect(landingPathFor('pharmacist', '/releases/14/3/label')).toBe('/releases/14/3/label');
     expect(landingPathFor('admin', '/admin/mailbox')).toBe('/admin/mailbox');
     expect(landingPathFor('admin', '/orders/14')).toBe('/admin/users');
@@ -120,7 +120,7 @@ describe('bedside routes', () => {
     expect(canAccess('pharmacist', 'bedside')).toBe(false);
     expect(landingPathFor('nurse', '/bedside/14/check')).toBe('/bedside/14/check');
     expect(landingPathFor('charge_nurse', '/bedside?ward=2')).toBe('/bedside?ward=2');
-    expect(landingPathFor('pharmacist', '/bedside/14/check')).toBe('/patients');
+    expect(landingPathFor('pharmacist', '/bedside/14/check')).toBe(homePathFor('pharmacist'));
   });
 });
 
@@ -153,7 +153,7 @@ describe('PCA and ward policy routes', () => {
     expect(landingPathFor('nurse', '/pca/14/observe')).toBe('/pca/14/observe');
     expect(landingPathFor('admin', '/pca/14')).toBe('/admin/users');
     expect(landingPathFor('admin', '/admin/ward-policies?ward=2')).toBe('/admin/ward-policies?ward=2');
-    expect(landingPathFor('charge_nurse', '/admin/ward-policies')).toBe('/patients');
+    expect(landingPathFor('charge_nurse', '/admin/ward-policies')).toBe(homePathFor('charge_nurse'));
   });
 });
 
@@ -168,8 +168,8 @@ describe('audit route', () => {
   it('is open to the admin and to pharmacists, and to nobody else', () => {
     expect(landingPathFor('admin', '/admin/audit?entityType=ward')).toBe('/admin/audit?entityType=ward');
     expect(landingPathFor('pharmacist', '/admin/audit')).toBe('/admin/audit');
-    expect(landingPathFor('pharmacist', '/admin/users')).toBe('/patients');
-    expect(landingPathFor('nurse', '/admin/audit')).toBe('/patients');
-    expect(landingPathFor('prescriber', '/admin/audit')).toBe('/patients');
+    expect(landingPathFor('pharmacist', '/admin/users')).toBe(homePathFor('pharmacist'));
+    expect(landingPathFor('nurse', '/admin/audit')).toBe(homePathFor('nurse'));
+    expect(landingPathFor('prescriber', '/admin/audit')).toBe(homePathFor('prescriber'));
   });
 });

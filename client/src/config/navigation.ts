@@ -46,9 +46,20 @@ export function navItemsFor(role: Role): NavItem[] {
   return NAV_ITEMS.filter((item) => canAccess(role, item.area));
 }
 
+// Each role starts where its work waits: the prescriber's own orders (returned ones first), the
+// pharmacist's verification queue, the nurse's PCA orders (bedside checks and observations due),
+// the charge nurse's handover board.
+const HOMES: Record<Role, string> = {
+  prescriber: paths.myOrders.getHref(),
+  pharmacist: paths.verificationQueue.getHref(),
+  nurse: paths.bedside.getHref(),
+  charge_nurse: paths.handover.getHref(),
+  admin: paths.adminUsers.getHref(),
+};
+
 /** Where a role lands after signing in, and where it is sent from a screen not its own. */
 export function homePathFor(role: Role): string {
-  return role === 'admin' ? paths.adminUsers.getHref() : paths.patients.getHref();
+  return HOMES[role];
 }
 
 const ROUTE_AREAS: ReadonlyArray<{ prefix: string; area: Area }> = [

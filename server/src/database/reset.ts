@@ -15,9 +15,11 @@ async function reset(): Promise<void> {
   for (const suffix of ['', '-wal', '-shm']) rmSync(file + suffix, { force: true });
   const dataSource = new DataSource(dataSourceOptions(file));
   await dataSource.initialize();
+  const started = performance.now();
   await seedDemoDataIfEmpty(dataSource);
+  const ms = Math.round(performance.now() - started);
   await dataSource.destroy();
-  console.log(`Reset ${file}: schema migrated and demo data seeded.`);
+  console.log(`Reset ${file}: schema migrated and the demo hospital seeded in ${ms} ms, its times counted back from now.`);
 }
 
 reset().catch((error: unknown) => {

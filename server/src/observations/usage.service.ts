@@ -1,12 +1,12 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, In, MoreThanOrEqual } from 'typeorm';
-import { observationDue, projectedEmptyAt, usageSummary, type ObservationDue, type SyringeReading, type UsageSummary } from '@lockstep/shared';
+import { projectedEmptyAt, usageSummary, type ObservationDue, type SyringeReading, type UsageSummary } from '@lockstep/shared';
 import { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
 import { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
 import { OrdersService } from '../orders/orders.service.js';
-import { wardPolicy } from '../wards/ward-policy.js';
 import { Observation } from './entities/observation.entity.js';
+import { nextObservationFor } from './next-observation.js';
 
 export type UsageResponse = UsageSummary & {
   doseUnit: string;
@@ -42,7 +42,7 @@ export class UsageService {
 
     const syringeReadings = last ? readings.filter((reading) => reading.syringeId === last.releaseId).sort((x, y) => Date.parse(x.at) - Date.parse(y.at)) : [];
     const projected = last && order.status === 'active' ? projectedEmptyAt(syringeReadings, last.syringeRemainingMl, order.basalRatePerHour / order.concentrationPerMl) : null;
-    const nextObservation = order.status === 'active' && order.startedAt ? observationDue(order.startedAt.toISOString(), last?.at.toISOString() ?? null, now, wardPolicy(order.patient.ward)) : null;
+    const nextObservation = nextObservationFor(order, last?.at ?? null, now);
     return { ...summary, doseUnit: order.doseUnit, projectedEmptyAt: projected, nextObservation };
   }
 }

@@ -4,6 +4,8 @@ import { type DataSource, type EntityManager, In } from 'typeorm';
 import type { Finding, OrderDetail, OrderStatus, OrderSummary } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { Flag } from '../flags/entities/flag.entity.js';
+import { Observation } from '../observations/entities/observation.entity.js';
+import { nextObservationFor } from '../observations/next-observation.js';
 import { toLimitRuleResponse } from '../library/dto/library-response.js';
 import { MailService } from '../mail/mail.service.js';
 import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
@@ -120,7 +122,8 @@ export class OrdersService {
     const events = await manager.find(OrderEvent, { where: { orderId: id }, relations: { user: true }, order: { id: 'ASC' } });
     const releases = await manager.find(SyringeRelease, { where: { orderId: id }, relations: { releasedBy: true }, order: { id: 'ASC' } });
     const flags = await manager.find(Flag, { where: { orderId: id }, relations: { acknowledgedBy: true }, order: { id: 'DESC' } });
-    return toOrderDetail(order, events, releases, flags);
+    const last = order.status === 'active' ? await manager.findOne(Observation, { select: { id: true, at: true }, where: { orderId: id }, order: { at: 'DESC', id: 'DESC' } }) : null;
+    return toOrderDetail(order, events, releases, flags, nextObservationFor(order, last?.at ?? null, new Date()));
   }
 
   async load(manager: EntityManager, id: number): Promise<PcaOrder> {

@@ -1,6 +1,8 @@
+import { z } from 'zod';
 import type { WardPolicy } from './ward-policy.js';
 
-export type ObservationDue = { dueAt: string; overdueMinutes: number; severity: 'review' | 'urgent' | null };
+export const observationDueSchema = z.object({ dueAt: z.string(), overdueMinutes: z.number(), severity: z.enum(['review', 'urgent']).nullable() });
+export type ObservationDue = z.infer<typeof observationDueSchema>;
 
 const MINUTE = 60_000;
 

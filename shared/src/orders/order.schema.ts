@@ -2,6 +2,7 @@ import { z } from 'zod';
 import type { DoseUnit } from '../drugs/drug.schema.js';
 import type { Finding } from '../dose/types.js';
 import type { LimitRuleResponse } from '../library/library.schema.js';
+import type { ObservationDue } from '../observations/observation-due.js';
 import { orderFieldsSchema, type OrderDerivedValues } from './order-fields.schema.js';
 import type { OrderStatus } from './order-status.js';
 
@@ -81,6 +82,8 @@ export type OrderDetail = OrderSummary & {
   releases: SyringeReleaseResponse[];
   flags: FlagResponse[];
   startedAt: string | null;
+  /** When the next observation of a running PCA is due, by the ward's policy; null unless active. */
+  nextObservation: ObservationDue | null;
 };
 
 export type FlagSeverity = 'info' | 'review' | 'urgent';

@@ -73,10 +73,10 @@ export type DemoPca = {
 export const DEMO_UNSTARTED_ORDERS: DemoUnstartedOrder[] = [
   {
     mrn: 'KB100231',
-    regimen: morphine({ demandDose: 2.5, lockoutMinutes: 10, indication: 'Pain after laparotomy' }),
+    regimen: morphine({ demandDose: 1, lockoutMinutes: 10, fourHourLimit: 35, indication: 'Pain after laparotomy' }),
     status: 'awaiting_verification',
     signedMinutesAgo: 45,
-    overrideReason: 'Needed 2.5 mg demand doses after his last laparotomy, without sedation (invented)',
+    overrideReason: 'Long midline incision; needed more than 30 mg in 4 hours after his last laparotomy, without sedation (invented)',
   },
   {
     mrn: 'KB100672',

@@ -17,7 +17,9 @@ export class DemoSeeder implements OnApplicationBootstrap {
 
   async onApplicationBootstrap(): Promise<void> {
     if (!this.config.get('DEMO', { infer: true })) return;
+    const started = performance.now();
     const seeded = await seedDemoDataIfEmpty(this.dataSource);
-    if (seeded) this.logger.log('Empty database: seeded the demo hospital (all demo passwords: lockstep-demo)');
+    const ms = Math.round(performance.now() - started);
+    if (seeded) this.logger.log(`Empty database: seeded the demo hospital mid-shift in ${ms} ms (all demo passwords: lockstep-demo)`);
   }
 }

@@ -1,4 +1,4 @@
-import { deriveOrderValues, type OrderDetail, type OrderSummary } from '@lockstep/shared';
+import { deriveOrderValues, type ObservationDue, type OrderDetail, type OrderSummary } from '@lockstep/shared';
 import type { Flag } from '../../flags/entities/flag.entity.js';
 import type { SyringeRelease } from '../../releases/entities/syringe-release.entity.js';
 import { toReleaseResponse } from '../../releases/dto/release-response.js';
@@ -44,7 +44,7 @@ export function toOrderSummary(order: PcaOrder): OrderSummary {
 }
 
 /** Expects the summary relations plus `verifiedBy`; events and releases with their users. */
-export function toOrderDetail(order: PcaOrder, events: OrderEvent[], releases: SyringeRelease[], flags: Flag[]): OrderDetail {
+export function toOrderDetail(order: PcaOrder, events: OrderEvent[], releases: SyringeRelease[], flags: Flag[], nextObservation: ObservationDue | null): OrderDetail {
   return {
     ...toOrderSummary(order),
     derived: deriveOrderValues(order),
@@ -75,5 +75,6 @@ export function toOrderDetail(order: PcaOrder, events: OrderEvent[], releases: S
       acknowledgeNote: flag.acknowledgeNote,
     })),
     startedAt: order.startedAt?.toISOString() ?? null,
+    nextObservation,
   };
 }

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import {
+  observationDueSchema,
   doseUnitSchema,
   orderStatusSchema,
   REGIMEN_TYPES,
@@ -82,14 +83,15 @@ const flagSchema: z.ZodType<FlagResponse> = z.object({
   acknowledgeNote: z.string().nullable(),
 });
 
-/** An order as the bedside reads it: the summary, its syringes, its flags and when it started. */
-export type BedsideOrder = OrderSummary & Pick<OrderDetail, 'releases' | 'flags' | 'startedAt'>;
+/** An order as the bedside reads it: the summary, its syringes, its flags, when it started and its next observation. */
+export type BedsideOrder = OrderSummary & Pick<OrderDetail, 'releases' | 'flags' | 'startedAt' | 'nextObservation'>;
 
 export const bedsideOrderSchema: z.ZodType<BedsideOrder> = z.object({
   ...summaryShape,
   releases: z.array(releaseSchema),
   flags: z.array(flagSchema),
   startedAt: z.string().nullable(),
+  nextObservation: observationDueSchema.nullable(),
 });
 
 export const firstCheckResponseSchema = z.object({ id: z.number().int(), status: z.literal('awaiting_second') });

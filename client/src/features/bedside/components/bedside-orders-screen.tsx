@@ -1,9 +1,10 @@
 import { useMemo } from 'react';
 import { Anchor, Group, Select, Stack, Text, Title } from '@mantine/core';
 import { Link, useSearchParams } from 'react-router-dom';
-import type { Ward } from '@lockstep/shared';
+import type { ObservationDue, Ward } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
+import { useNow } from '@/hooks/use-now';
 import { BEDSIDE_STATUSES, useBedsideOrderDetails, useBedsideOrders } from '../api/get-bedside-orders';
 import { byWardAndBed } from '../utils/order-sort';
 import { syringeState, type SyringeState } from '../utils/syringe-state';
@@ -32,8 +33,14 @@ export function BedsideOrdersScreen({ wards, wardsLoading }: BedsideOrdersScreen
   const ordersQuery = useBedsideOrders({ wardId, patientId, status: BEDSIDE_STATUSES });
   const orders = useMemo(() => [...(ordersQuery.data ?? [])].sort(byWardAndBed), [ordersQuery.data]);
   const details = useBedsideOrderDetails(orders.map((order) => order.id));
+  const now = useNow(30_000);
   const syringes = new Map<number, SyringeState>();
-  for (const detail of details) if (detail.data) syringes.set(detail.data.id, syringeState(detail.data.releases));
+  const nextObservations = new Map<number, ObservationDue>();
+  for (const { data } of details) {
+    if (!data) continue;
+    syringes.set(data.id, syringeState(data.releases));
+    if (data.nextObservation) nextObservations.set(data.id, data.nextObservation);
+  }
 
   const wardOptions = [{ value: ALL_WARDS, label: 'All wards' }, ...wards.map((ward) => ({ value: String(ward.id), label: ward.name }))];
   const chooseWard = (value: string | null) =>
@@ -67,6 +74,8 @@ export function BedsideOrdersScreen({ wards, wardsLoading }: BedsideOrdersScreen
         <BedsideOrdersTable
           orders={orders}
           syringes={syringes}
+          nextObservations={nextObservations}
+          now={now}
           isLoading={ordersQuery.isPending}
           emptyMessage="No PCA order here is waiting for a bedside check or running."
         />

@@ -1,15 +1,17 @@
 import type { ComponentType } from 'react';
-import { Button, Group, Skeleton, Stack, Table, Text } from '@mantine/core';
-import { IconClipboardCheck, IconDroplet, IconPlayerStop, IconReplace, type IconProps } from '@tabler/icons-react';
+import { Anchor, Button, Group, Skeleton, Stack, Table, Text } from '@mantine/core';
+import { IconClipboardCheck, IconClipboardHeart, IconDroplet, IconPlayerStop, IconReplace, type IconProps } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
-import type { OrderSummary } from '@lockstep/shared';
+import type { ObservationDue, OrderSummary } from '@lockstep/shared';
 import { paths } from '@/config/paths';
 import { drugAndConcentration, regimenParts } from '../utils/regimen-line';
 import { bedsideActions, bedsideHint, type BedsideAction, type SyringeState } from '../utils/syringe-state';
+import { NextObservationHint } from './next-observation-hint';
 import { OrderStatusBadge } from './order-status-badge';
 
 const ACTIONS: Record<BedsideAction, { label: string; icon: ComponentType<IconProps>; href: (orderId: number) => string; variant: string }> = {
   check: { label: 'Start bedside check', icon: IconClipboardCheck, href: (id) => paths.bedsideCheck.getHref(id), variant: 'filled' },
+  observe: { label: 'Record observation', icon: IconClipboardHeart, href: (id) => paths.pcaObserve.getHref(id), variant: 'default' },
   bolus: { label: 'Clinician bolus', icon: IconDroplet, href: (id) => paths.bedsideBolus.getHref(id), variant: 'default' },
   'syringe-change': { label: 'Change syringe', icon: IconReplace, href: (id) => paths.bedsideSyringeChange.getHref(id), variant: 'default' },
   discontinue: { label: 'Discontinue', icon: IconPlayerStop, href: (id) => paths.bedsideDiscontinue.getHref(id), variant: 'default' },
@@ -19,6 +21,9 @@ export interface BedsideOrdersTableProps {
   orders: readonly OrderSummary[];
   /** Each order's syringes, once its details have loaded. */
   syringes: ReadonlyMap<number, SyringeState>;
+  /** Each running order's next observation, once its details have loaded. */
+  nextObservations: ReadonlyMap<number, ObservationDue>;
+  now: Date;
   isLoading: boolean;
   emptyMessage: string;
 }
@@ -59,7 +64,7 @@ function RegimenParts({ parts }: { parts: readonly string[] }) {
 }
 
 /** The ward's PCA orders at the bedside: who, where, what runs, and what to do next. */
-export function BedsideOrdersTable({ orders, syringes, isLoading, emptyMessage }: BedsideOrdersTableProps) {
+export function BedsideOrdersTable({ orders, syringes, nextObservations, now, isLoading, emptyMessage }: BedsideOrdersTableProps) {
   return (
     <Table.ScrollContainer minWidth={900}>
       <Table aria-label="PCA orders" aria-busy={isLoading || undefined} tabularNums verticalSpacing="sm" fz="sm">
@@ -85,6 +90,7 @@ export function BedsideOrdersTable({ orders, syringes, isLoading, emptyMessage }
               ))
             : orders.map((order) => {
                 const hint = bedsideHint(order.status, syringes.get(order.id));
+                const due = nextObservations.get(order.id);
                 return (
                   <Table.Tr key={order.id}>
                     <Table.Td>
@@ -100,9 +106,15 @@ export function BedsideOrdersTable({ orders, syringes, isLoading, emptyMessage }
                     </Table.Th>
                     <Table.Td>
                       <Stack gap={2}>
-                        <Text fw={600} size="sm">
-                          {drugAndConcentration(order)}
-                        </Text>
+                        {order.status === 'active' ? (
+                          <Anchor component={Link} to={paths.pca.getHref(order.id)} fw={600} size="sm" aria-label={`${drugAndConcentration(order)}: open the PCA page for ${order.patientName}`}>
+                            {drugAndConcentration(order)}
+                          </Anchor>
+                        ) : (
+                          <Text fw={600} size="sm">
+                            {drugAndConcentration(order)}
+                          </Text>
+                        )}
                         <Text size="xs" c="dimmed">
                           <RegimenParts parts={regimenParts(order)} />
                         </Text>
@@ -116,6 +128,7 @@ export function BedsideOrdersTable({ orders, syringes, isLoading, emptyMessage }
                             {hint}
                           </Text>
                         ) : null}
+                        {due ? <NextObservationHint due={due} now={now} /> : null}
                       </Stack>
                     </Table.Td>
                     <Table.Td>

@@ -18,8 +18,8 @@ describe('bedsideActions', () => {
   });
 
   it('offers bolus, syringe change and discontinue while a syringe runs', () => {
-    expect(bedsideActions('active', 'running')).toEqual(['bolus', 'syringe-change', 'discontinue']);
-    expect(bedsideActions('active', undefined)).toEqual(['bolus', 'syringe-change', 'discontinue']);
+    expect(bedsideActions('active', 'running')).toEqual(['observe', 'bolus', 'syringe-change', 'discontinue']);
+    expect(bedsideActions('active', undefined)).toEqual(['observe', 'bolus', 'syringe-change', 'discontinue']);
   });
 
   it('offers nothing for an order that is not the bedside’s', () => {

@@ -13,17 +13,17 @@ export function runningSyringe<T extends Pick<SyringeReleaseResponse, 'status'>>
   return releases.find((release) => release.status === 'in_use');
 }
 
-export type BedsideAction = 'check' | 'bolus' | 'syringe-change' | 'discontinue';
+export type BedsideAction = 'check' | 'observe' | 'bolus' | 'syringe-change' | 'discontinue';
 
 /**
  * What a nurse can do for an order now. A verified order, or an active one between syringes,
- * needs a bedside check; a running syringe allows a bolus, a change or discontinuing. While the
- * syringes are not known yet (`undefined`), the status alone decides.
+ * needs a bedside check; a running syringe allows an observation, a bolus, a change or
+ * discontinuing. While the syringes are not known yet (`undefined`), the status alone decides.
  */
 export function bedsideActions(status: OrderStatus, syringes: SyringeState | undefined): BedsideAction[] {
   if (status === 'verified') return ['check'];
   if (status !== 'active') return [];
-  if (syringes === 'running' || syringes === undefined) return ['bolus', 'syringe-change', 'discontinue'];
+  if (syringes === 'running' || syringes === undefined) return ['observe', 'bolus', 'syringe-change', 'discontinue'];
   return ['check'];
 }
 

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import {
+  observationDueSchema,
   doseUnitSchema,
   orderStatusSchema,
   SEDATION_LEVELS,
@@ -63,7 +64,7 @@ const rowSchema: z.ZodType<HandoverRow> = z.object({
   lastObservation: z
     .object({ at: z.string(), painScore: z.number(), sedationLevel: z.enum(SEDATION_LEVELS), respiratoryRate: z.number(), spo2: z.number() })
     .nullable(),
-  nextObservation: z.object({ dueAt: z.string(), overdueMinutes: z.number(), severity: z.enum(['review', 'urgent']).nullable() }).nullable(),
+  nextObservation: observationDueSchema.nullable(),
   last4h: z.object({ attempts: z.number(), delivered: z.number(), dose: z.number() }),
   total24hDose: z.number(),
   syringe: z.object({ remainingMl: z.number().nullable(), projectedEmptyAt: z.string().nullable(), emptiesThisShift: z.boolean() }),

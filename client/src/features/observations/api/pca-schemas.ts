@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import {
+  observationDueSchema,
   doseUnitSchema,
   orderStatusSchema,
   RELEASE_STATUSES,
@@ -127,9 +128,7 @@ export const usageSchema: z.ZodType<PcaUsage> = z.object({
   oralMorphineEquivalent24hMg: z.number().nullable(),
   doseUnit: z.string(),
   projectedEmptyAt: z.string().nullable(),
-  nextObservation: z
-    .object({ dueAt: z.string(), overdueMinutes: z.number(), severity: z.enum(['review', 'urgent']).nullable() })
-    .nullable(),
+  nextObservation: observationDueSchema.nullable(),
 });
 
 /** The ward's escalation thresholds, for warnings while an observation is typed. */

@@ -6,7 +6,7 @@ import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
 import { useAcknowledgeFlag } from '../api/acknowledge-flag';
 import { acknowledgeNoteError } from '../utils/flags';
-import { SeverityBadge } from './severity';
+import { SeverityBadge } from '@/components/ui/severity-badge';
 
 export interface AcknowledgeFlagModalProps {
   orderId: number;

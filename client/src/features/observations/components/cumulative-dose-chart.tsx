@@ -2,7 +2,7 @@ import { LineChart } from '@mantine/charts';
 import { Table } from '@mantine/core';
 import { formatDose, normaliseUnit, type UsageBucket } from '@lockstep/shared';
 import { cumulativeDose, cumulativeSummary } from '../utils/chart-data';
-import { formatClock } from '../utils/clock';
+import { formatClock } from '@/utils/clock';
 import { ChartPanel } from './chart-panel';
 
 const TITLE = 'Cumulative dose';

@@ -1,8 +1,8 @@
 import { Group, Paper, Text, ThemeIcon } from '@mantine/core';
 import { IconClockCheck } from '@tabler/icons-react';
 import type { ObservationDue } from '@lockstep/shared';
-import { describeNextObservation } from '../utils/usage-display';
-import { SeverityBadge } from './severity';
+import { describeNextObservation } from '@/utils/next-observation';
+import { SeverityBadge } from '@/components/ui/severity-badge';
 
 /** When the next observation is due; overdue is shown as review or urgent, with icon and word. */
 export function NextObservation({ due, now }: { due: ObservationDue; now: Date }) {

@@ -6,7 +6,7 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { formatDateTime } from '@/utils/format-date';
 import { useRecordObservation } from '../api/record-observation';
 import type { Observation, PcaOrder, RecordedObservation, WardThresholds } from '../api/pca-schemas';
-import { formatClock } from '../utils/clock';
+import { formatClock } from '@/utils/clock';
 import {
   emptyObservationForm,
   NUMBER_FIELDS,

@@ -3,7 +3,7 @@ import { Center, Paper, Table, Text } from '@mantine/core';
 import { SEDATION_DESCRIPTIONS } from '@lockstep/shared';
 import type { Observation } from '../api/pca-schemas';
 import { painAndSedation, painAndSedationSummary, type ObservationPoint } from '../utils/chart-data';
-import { formatClock } from '../utils/clock';
+import { formatClock } from '@/utils/clock';
 import { sedationTick } from '../utils/sedation';
 import { ChartPanel } from './chart-panel';
 

@@ -9,7 +9,7 @@ import { useCurrentUser } from '@/lib/auth/use-session';
 import { useObservations } from '../api/get-observations';
 import { usePcaOrder } from '../api/get-pca-order';
 import type { UsageWindow } from '../api/get-usage';
-import { useNow } from '../hooks/use-now';
+import { useNow } from '@/hooks/use-now';
 import { FlagsPanel } from './flags-panel';
 import { ObservationsTable } from './observations-table';
 import { PcaHeader } from './pca-header';

@@ -1,6 +1,6 @@
 import { formatDose, withoutFloatNoise, type SedationLevel, type UsageBucket } from '@lockstep/shared';
 import type { Observation } from '../api/pca-schemas';
-import { formatClock } from './clock';
+import { formatClock } from '@/utils/clock';
 import { sedationToNumber } from './sedation';
 
 const HOUR = 3_600_000;

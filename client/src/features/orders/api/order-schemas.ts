@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import {
+  observationDueSchema,
   doseUnitSchema,
   limitRuleSchema,
   orderStatusSchema,
@@ -121,6 +122,7 @@ export const orderDetailSchema: z.ZodType<OrderDetail> = z.object({
   // Flags and the start time come with the bedside work; defaults keep an older server readable.
   flags: z.array(flagSchema).default([]),
   startedAt: z.string().nullable().default(null),
+  nextObservation: observationDueSchema.nullable().default(null),
 });
 
 export const orderPreviewSchema: z.ZodType<OrderPreview> = z.object({

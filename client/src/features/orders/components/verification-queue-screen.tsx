@@ -9,7 +9,7 @@ import { DataTable } from '@/components/ui/data-table';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/utils/format-date';
 import { useOrders } from '../api/get-orders';
-import { useNow } from '../hooks/use-now';
+import { useNow } from '@/hooks/use-now';
 import { regimenSummary } from '../utils/regimen-format';
 import { formatWaitingTime } from '../utils/waiting-time';
 
