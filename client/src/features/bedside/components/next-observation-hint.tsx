@@ -12,7 +12,7 @@ export function NextObservationHint({ due, now }: { due: ObservationDue; now: Da
       <Group gap={4} wrap="nowrap">
         <IconClock size={14} aria-hidden />
         <Text size="xs" className="tabular-nums">
-          Observation due {state.headline.replace(/^Due /, '')}
+          Observation {state.headline.toLowerCase()}
         </Text>
       </Group>
     );
