@@ -25,7 +25,10 @@ export default defineConfig({
         // else (Mantine components, the table library) is split per route automatically.
         codeSplitting: {
           groups: [
-            { name: 'react', test: /node_modules[\\/](react|react-dom|scheduler|react-router|react-router-dom|cookie|set-cookie-parser)[\\/]/ },
+            {
+              name: 'react',
+              test: /node_modules[\\/](react|react-dom|scheduler|react-router|react-router-dom|cookie|set-cookie-parser)[\\/]/,
+            },
             { name: 'zod', test: /node_modules[\\/]zod[\\/]/ },
             { name: 'query', test: /node_modules[\\/]@tanstack[\\/](query-core|react-query)[\\/]/ },
           ],

@@ -11,7 +11,9 @@ import path from 'node:path';
 import { chromium } from 'playwright-core';
 
 const [baseUrl, ward, rows, runs, username] = process.argv.slice(2);
-const executablePath = [process.env.CHROMIUM_PATH, '/usr/bin/chromium', '/usr/bin/chromium-browser'].find((candidate) => candidate && existsSync(candidate));
+const executablePath = [process.env.CHROMIUM_PATH, '/usr/bin/chromium', '/usr/bin/chromium-browser'].find(
+  (candidate) => candidate && existsSync(candidate),
+);
 if (!executablePath) {
   console.log(JSON.stringify({ error: 'no chromium (node client/e2e/ensure-chromium.mjs installs it)' }));
   process.exit(0);
@@ -21,7 +23,15 @@ const profile = mkdtempSync(path.join(tmpdir(), 'lockstep-render-'));
 const context = await chromium.launchPersistentContext(profile, {
   executablePath,
   headless: true,
-  args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  args: [
+    '--no-sandbox',
+    '--disable-gpu',
+    '--disable-quic',
+    '--no-first-run',
+    '--disable-background-networking',
+    '--disable-component-update',
+    '--disable-sync',
+  ],
   baseURL: baseUrl,
   viewport: { width: 1366, height: 900 },
 });

@@ -123,7 +123,10 @@ describe('audit trail', () => {
     for (const text of await auditRows(page).allInnerTexts()) expect(text).not.toContain('Ward Harbour');
     await snapshot(page, 'audit-pharmacist');
 
-    await auditRows(page).filter({ hasText: 'Order verified by pharmacy' }).getByRole('link', { name: `Order ${verifiedId}` }).click();
+    await auditRows(page)
+      .filter({ hasText: 'Order verified by pharmacy' })
+      .getByRole('link', { name: `Order ${verifiedId}` })
+      .click();
     await page.getByRole('heading', { name: `PCA order ${verifiedId}`, level: 1 }).waitFor();
     await page.getByRole('button', { name: 'Sign out' }).click();
   });

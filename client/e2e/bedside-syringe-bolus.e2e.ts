@@ -20,8 +20,25 @@ const ORDER = {
   overrides: [{ field: 'clinicianBolusDose', reason: 'Larger boluses agreed with the acute pain team' }],
   signature: { password: DEMO_PASSWORD },
 };
-const SETTINGS = { drugId: 1, concentrationPerMl: 1, syringeVolumeMl: 50, loadingDose: null, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0, oneHourLimit: null, fourHourLimit: 30 };
-const RELEASE = { concentrationPerMl: 1, volumeMl: 50, batch: 'E2E-1', expiresAt: '2030-01-01T12:00:00Z', preparedBy: 'Lin Park', checkedBy: 'Tomas Ortiz' };
+const SETTINGS = {
+  drugId: 1,
+  concentrationPerMl: 1,
+  syringeVolumeMl: 50,
+  loadingDose: null,
+  demandDose: 1,
+  lockoutMinutes: 10,
+  basalRatePerHour: 0,
+  oneHourLimit: null,
+  fourHourLimit: 30,
+};
+const RELEASE = {
+  concentrationPerMl: 1,
+  volumeMl: 50,
+  batch: 'E2E-1',
+  expiresAt: '2030-01-01T12:00:00Z',
+  preparedBy: 'Lin Park',
+  checkedBy: 'Tomas Ortiz',
+};
 
 async function api<T>(baseUrl: string, token: string | null, path: string, body?: object): Promise<T> {
   const response = await fetch(`${baseUrl}/api${path}`, {
@@ -49,7 +66,11 @@ async function activeOrderWithSpareSyringe(baseUrl: string): Promise<{ id: numbe
     releaseCode: first.releaseCode,
     settings: SETTINGS,
   });
-  await api(baseUrl, kai, `/orders/${order.id}/bedside-checks/${check.id}/second`, { username: 'rosa.adeyemi', password: DEMO_PASSWORD, settings: SETTINGS });
+  await api(baseUrl, kai, `/orders/${order.id}/bedside-checks/${check.id}/second`, {
+    username: 'rosa.adeyemi',
+    password: DEMO_PASSWORD,
+    settings: SETTINGS,
+  });
   const spare = await api<{ releaseCode: string }>(baseUrl, lin, `/orders/${order.id}/releases`, RELEASE);
   return { id: order.id, spareCode: spare.releaseCode };
 }
@@ -114,7 +135,7 @@ describe('bedside: clinician bolus over the soft limit, and a syringe change wit
 
     // 2.5 mg is over the ward's soft maximum of 2 mg: the server sends the nurse back for a reason.
     await stepHeading(page, 'Bolus and reason').waitFor();
-    await page.getByText('2.5 mg is outside the ward\'s soft limit for a clinician bolus: give a reason').waitFor();
+    await page.getByText("2.5 mg is outside the ward's soft limit for a clinician bolus: give a reason").waitFor();
     await snapshot(page, 'bedside-bolus-soft-limit');
     await page.getByLabel('Reason for going outside the ward’s soft limit').fill('Opioid-tolerant; agreed with the acute pain team');
     await page.getByRole('button', { name: 'Next: witness' }).click();

@@ -50,7 +50,9 @@ async function identifyScanAndEnter(page: Page, entry: Entry, snapshotPrefix?: s
 
   await stepHeading(page, 'Check the syringe').waitFor();
   // The focus moved to the release code: a scanner (or typing) goes straight in, Enter goes on.
-  await expect.poll(() => page.evaluate(() => (document.activeElement as HTMLInputElement | null)?.labels?.[0]?.textContent ?? '')).toMatch(/^Release code/);
+  await expect
+    .poll(() => page.evaluate(() => (document.activeElement as HTMLInputElement | null)?.labels?.[0]?.textContent ?? ''))
+    .toMatch(/^Release code/);
   await page.keyboard.type('hk3 7qt');
   await page.keyboard.press('Enter');
 
@@ -60,7 +62,16 @@ async function identifyScanAndEnter(page: Page, entry: Entry, snapshotPrefix?: s
   await page.getByRole('button', { name: 'Save first check' }).click();
 }
 
-const NUMBER_LABELS = ['Concentration', 'Syringe volume', 'Loading dose', 'Demand dose', 'Lockout', 'Basal rate', '1-hour limit', '4-hour limit'];
+const NUMBER_LABELS = [
+  'Concentration',
+  'Syringe volume',
+  'Loading dose',
+  'Demand dose',
+  'Lockout',
+  'Basal rate',
+  '1-hour limit',
+  '4-hour limit',
+];
 
 /** The first entry is gone: the second nurse starts from an empty form, never a prefilled one. */
 async function expectEmptySecondEntry(page: Page): Promise<void> {
@@ -131,7 +142,9 @@ describe('bedside: blind two-nurse check, a mismatch, a match, and discontinue w
     expect(await lockout.innerText()).toMatch(/Lockout\s+First check \(Kai Mendes\)\s+6 min\s+10 min\s+10 min/);
     await snapshot(page, 'bedside-mismatch');
     expect((await apiAs<{ status: string; releases: { status: string }[] }>(page, `/api/orders/${orderId}`)).status).toBe('verified');
-    expect((await apiAs<{ releases: { status: string }[] }>(page, `/api/orders/${orderId}`)).releases.map((r) => r.status)).toEqual(['ready']);
+    expect((await apiAs<{ releases: { status: string }[] }>(page, `/api/orders/${orderId}`)).releases.map((r) => r.status)).toEqual([
+      'ready',
+    ]);
   });
 
   it('a new check, with both entries right, matches and starts the PCA', async () => {
@@ -157,7 +170,10 @@ describe('bedside: blind two-nurse check, a mismatch, a match, and discontinue w
 
   it('discontinues with witnessed waste; a 5 mL discrepancy raises a review flag', async () => {
     const { page } = kai;
-    await page.getByRole('row', { name: /FALEOLO, Tavita/ }).getByRole('link', { name: 'Discontinue' }).click();
+    await page
+      .getByRole('row', { name: /FALEOLO, Tavita/ })
+      .getByRole('link', { name: 'Discontinue' })
+      .click();
     await stepHeading(page, 'Reason and final volumes').waitFor();
     await page.getByRole('textbox', { name: 'Reason' }).fill('Pain controlled on oral analgesia; acute pain team stopped the PCA');
     await page.getByLabel('Final volume infused').fill('30');
@@ -192,9 +208,15 @@ describe('bedside: blind two-nurse check, a mismatch, a match, and discontinue w
     await sam.page.getByRole('heading', { name: 'Users', level: 1 }).waitFor();
     type Message = { to: string; subject: string; text: string };
     await expect
-      .poll(async () => (await apiAs<Message[]>(sam!.page, '/api/dev/mailbox')).find((message) => message.subject.startsWith('Reconciliation discrepancy'))?.subject, {
-        timeout: 10_000,
-      })
+      .poll(
+        async () =>
+          (await apiAs<Message[]>(sam!.page, '/api/dev/mailbox')).find((message) =>
+            message.subject.startsWith('Reconciliation discrepancy'),
+          )?.subject,
+        {
+          timeout: 10_000,
+        },
+      )
       .toBe(`Reconciliation discrepancy: PCA order ${orderId}, Harbour bed H07`);
   });
 });

@@ -12,7 +12,10 @@ const BUDGET_GZIP_BYTES = 300 * 1024;
 
 function initialScripts(): string[] {
   const html = readFileSync(path.join(DIST, 'index.html'), 'utf8');
-  const entries = [...html.matchAll(/<script[^>]+type="module"[^>]+src="([^"]+)"/g), ...html.matchAll(/<link[^>]+rel="modulepreload"[^>]+href="([^"]+)"/g)].map((match) => match[1]);
+  const entries = [
+    ...html.matchAll(/<script[^>]+type="module"[^>]+src="([^"]+)"/g),
+    ...html.matchAll(/<link[^>]+rel="modulepreload"[^>]+href="([^"]+)"/g),
+  ].map((match) => match[1]);
   const seen = new Set<string>();
   const visit = (url: string) => {
     const file = path.join(DIST, url.replace(/^\//, ''));
@@ -20,7 +23,8 @@ function initialScripts(): string[] {
     seen.add(file);
     const code = readFileSync(file, 'utf8');
     // Static imports only: `import x from "./a.js"`, `import "./a.js"`, `export * from "./a.js"`; never `import("./a.js")`.
-    for (const match of code.matchAll(/(?:\bimport|\bexport)\s*(?:[\w$*{}\s,]+from\s*)?["'](\.\/[^"']+\.js)["']/g)) visit(path.posix.join(path.posix.dirname(url), match[1]));
+    for (const match of code.matchAll(/(?:\bimport|\bexport)\s*(?:[\w$*{}\s,]+from\s*)?["'](\.\/[^"']+\.js)["']/g))
+      visit(path.posix.join(path.posix.dirname(url), match[1]));
   };
   entries.forEach(visit);
   return [...seen];
@@ -32,7 +36,9 @@ describe('production bundle', () => {
     const files = initialScripts();
     const sizes = files.map((file) => ({ file: path.basename(file), gzip: gzipSync(readFileSync(file), { level: 9 }).length }));
     const total = sizes.reduce((sum, { gzip }) => sum + gzip, 0);
-    console.log(`Initial JavaScript: ${(total / 1024).toFixed(1)} KB gzip in ${files.length} files (${sizes.map((s) => `${s.file} ${(s.gzip / 1024).toFixed(1)}`).join(', ')})`);
+    console.log(
+      `Initial JavaScript: ${(total / 1024).toFixed(1)} KB gzip in ${files.length} files (${sizes.map((s) => `${s.file} ${(s.gzip / 1024).toFixed(1)}`).join(', ')})`,
+    );
     expect(files.length).toBeGreaterThan(1);
     expect(total).toBeLessThanOrEqual(BUDGET_GZIP_BYTES);
   });

@@ -26,7 +26,10 @@ describe('the demo hospital on first open', () => {
     const { page } = browser;
     await signIn(page, 'mei.tan');
     await page.getByRole('heading', { name: 'Handover', level: 1 }).waitFor();
-    await page.getByTestId('board-shift').filter({ hasText: /^Harbour · (Day|Night) shift, / }).waitFor();
+    await page
+      .getByTestId('board-shift')
+      .filter({ hasText: /^Harbour · (Day|Night) shift, / })
+      .waitFor();
     await expect.poll(() => boardRows(page).count()).toBeGreaterThanOrEqual(8);
     const rows = await boardRows(page).allInnerTexts();
     // Urgent flag first, then the overdue observation, then the syringe that empties this shift.
@@ -47,7 +50,10 @@ describe('the demo hospital on first open', () => {
     await page.getByRole('heading', { name: 'PCA orders', level: 1 }).waitFor();
     const orders = page.getByRole('table', { name: 'PCA orders' });
     await orders.getByRole('link', { name: 'Start bedside check' }).first().waitFor();
-    await orders.getByText(/Observation overdue by/).first().waitFor();
+    await orders
+      .getByText(/Observation overdue by/)
+      .first()
+      .waitFor();
     await expect.poll(() => orders.getByRole('link', { name: 'Record observation' }).count()).toBeGreaterThanOrEqual(5);
     await snapshot(page, 'demo-nurse-pca-orders');
 
@@ -60,9 +66,18 @@ describe('the demo hospital on first open', () => {
     // Twelve hours of hourly observations drawn from the seeded data.
     await expect.poll(() => attempts.locator('.recharts-bar-rectangle').count()).toBeGreaterThanOrEqual(10);
     await expect.poll(() => painSedation.locator('.recharts-line-dot').count()).toBeGreaterThanOrEqual(20);
-    await painSedation.locator('figcaption').getByText(/1[12] observations in the hours shown/).waitFor();
-    await cumulative.locator('figcaption').getByText(/mg given in the 12 hours shown/).waitFor();
-    await page.getByText(/oral morphine/i).first().waitFor();
+    await painSedation
+      .locator('figcaption')
+      .getByText(/1[12] observations in the hours shown/)
+      .waitFor();
+    await cumulative
+      .locator('figcaption')
+      .getByText(/mg given in the 12 hours shown/)
+      .waitFor();
+    await page
+      .getByText(/oral morphine/i)
+      .first()
+      .waitFor();
     await snapshot(page, 'demo-pca-page');
   });
 
@@ -77,6 +92,9 @@ describe('the demo hospital on first open', () => {
     await signIn(page, 'amara.osei');
     await page.getByRole('heading', { name: 'My orders', level: 1 }).waitFor();
     await page.getByText('RAGHUNATHAN, Dev').first().waitFor();
-    await page.getByText(/Returned/).first().waitFor();
+    await page
+      .getByText(/Returned/)
+      .first()
+      .waitFor();
   });
 });

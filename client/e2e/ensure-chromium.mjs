@@ -16,7 +16,9 @@ const hasApt = existsSync('/usr/bin/apt-get');
 const command = 'apt-get update && apt-get install -y chromium';
 
 if (!isRoot || !hasApt) {
-  console.error(`No chromium found for the browser tests. Install Debian's chromium first:\n  sudo sh -c '${command}'\nor set CHROMIUM_PATH to a chromium binary.`);
+  console.error(
+    `No chromium found for the browser tests. Install Debian's chromium first:\n  sudo sh -c '${command}'\nor set CHROMIUM_PATH to a chromium binary.`,
+  );
   process.exit(1);
 }
 

@@ -10,19 +10,46 @@ import { startServer, type RunningServer } from './support/server.js';
 // ACHTERBERG (H02) awaiting verification, and TAVITA FALEOLO (H07) with a verified HYDROmorphone
 // order and a ready syringe, release code HK3-7QT. Counts are read from the API's own answer.
 const HARBOUR = 1;
-const PUMP = { drugId: 2, concentrationPerMl: 0.2, syringeVolumeMl: 50, loadingDose: null, demandDose: 0.2, lockoutMinutes: 10, basalRatePerHour: 0.1, oneHourLimit: null, fourHourLimit: 6 };
+const PUMP = {
+  drugId: 2,
+  concentrationPerMl: 0.2,
+  syringeVolumeMl: 50,
+  loadingDose: null,
+  demandDose: 0.2,
+  lockoutMinutes: 10,
+  basalRatePerHour: 0.1,
+  oneHourLimit: null,
+  fourHourLimit: 6,
+};
 // Sedation 3 on the Pasero scale: an urgent flag.
-const URGENT_OBSERVATION = { painScore: 4, sedationLevel: '3', respiratoryRate: 12, spo2: 95, attempts: 6, delivered: 4, volumeInfusedMl: 2, syringeRemainingMl: 48 };
+const URGENT_OBSERVATION = {
+  painScore: 4,
+  sedationLevel: '3',
+  respiratoryRate: 12,
+  spo2: 95,
+  attempts: 6,
+  delivered: 4,
+  volumeInfusedMl: 2,
+  syringeRemainingMl: 48,
+};
 
 type BoardAnswer = {
-  rows: { orderId: number; status: string; patient: { name: string }; flags: { urgent: number; review: number; info: number }; signoffs: { role: string }[] }[];
+  rows: {
+    orderId: number;
+    status: string;
+    patient: { name: string };
+    flags: { urgent: number; review: number; info: number };
+    signoffs: { role: string }[];
+  }[];
 };
 
 const flaggedCount = (answer: BoardAnswer) => answer.rows.filter((row) => row.flags.urgent + row.flags.review + row.flags.info > 0).length;
 /** "3 of 7 PCAs confirmed": running PCAs confirmed by both nurses this shift. */
 function confirmedText(answer: BoardAnswer): string {
   const running = answer.rows.filter((row) => row.status === 'active');
-  const confirmed = running.filter((row) => row.signoffs.some((s) => s.role === 'outgoing') && row.signoffs.some((s) => s.role === 'incoming'));
+  const confirmed = running.filter(
+    (row) => row.signoffs.some((s) => s.role === 'outgoing') && row.signoffs.some((s) => s.role === 'incoming'),
+  );
   return `${confirmed.length} of ${running.length} PCAs confirmed`;
 }
 
@@ -81,7 +108,10 @@ describe('handover board', () => {
     await page.getByRole('heading', { name: 'Handover', level: 1 }).waitFor();
     await page.getByRole('combobox', { name: 'Ward' }).click();
     await page.getByRole('option', { name: 'Harbour' }).click();
-    await page.getByTestId('board-shift').filter({ hasText: /^Harbour · (Day|Night) shift, / }).waitFor();
+    await page
+      .getByTestId('board-shift')
+      .filter({ hasText: /^Harbour · (Day|Night) shift, / })
+      .waitFor();
 
     const answer = await api<BoardAnswer>(server.baseUrl, kaiToken, `/wards/${HARBOUR}/handover`);
     const names = answer.rows.map((row) => row.patient.name);
@@ -96,7 +126,10 @@ describe('handover board', () => {
     expect(await rowOf(page, 'FALEOLO').innerText()).toContain('HYDROmorphone 0.2 mg/mL');
     expect(await rowOf(page, 'FALEOLO').innerText()).toContain('0.2 mg / 10 min, basal 0.1 mg/h, 4-h limit 6 mg');
     await page.getByRole('status').filter({ hasText: 'Connected' }).waitFor();
-    await page.getByTestId('board-updated').filter({ hasText: /^Updated \d\d:\d\d:\d\d$/ }).waitFor();
+    await page
+      .getByTestId('board-updated')
+      .filter({ hasText: /^Updated \d\d:\d\d:\d\d$/ })
+      .waitFor();
     await snapshot(page, 'handover-board');
   });
 
@@ -111,7 +144,11 @@ describe('handover board', () => {
       releaseCode: 'HK3-7QT',
       settings: PUMP,
     });
-    await api(server.baseUrl, kaiToken, `/orders/${faleoloOrderId}/bedside-checks/${first.id}/second`, { username: 'rosa.adeyemi', password: DEMO_PASSWORD, settings: PUMP });
+    await api(server.baseUrl, kaiToken, `/orders/${faleoloOrderId}/bedside-checks/${first.id}/second`, {
+      username: 'rosa.adeyemi',
+      password: DEMO_PASSWORD,
+      settings: PUMP,
+    });
     await expect.poll(() => rowOf(page, 'FALEOLO').innerText(), { timeout: 2500 }).toContain('Outgoing: not signed');
 
     await api(server.baseUrl, kaiToken, `/orders/${faleoloOrderId}/observations`, URGENT_OBSERVATION);
@@ -183,7 +220,10 @@ describe('handover board', () => {
     await expect.poll(() => rowOf(mei.page, 'FALEOLO').innerText(), { timeout: 2500 }).toContain('Incoming ✓ Rosa Adeyemi (pump checked)');
     expect(await rowOf(mei.page, 'FALEOLO').innerText()).toContain('Outgoing ✓ Kai Mendes');
     const answer = await api<BoardAnswer>(server.baseUrl, kaiToken, `/wards/${HARBOUR}/handover`);
-    await mei.page.getByTestId('signoff-progress').filter({ hasText: confirmedText(answer) }).waitFor();
+    await mei.page
+      .getByTestId('signoff-progress')
+      .filter({ hasText: confirmedText(answer) })
+      .waitFor();
     await snapshot(mei.page, 'handover-signed');
   });
 
@@ -192,7 +232,10 @@ describe('handover board', () => {
     await page.getByRole('link', { name: 'Print handover sheet' }).click();
     await page.waitForURL(`**/handover/print?ward=${HARBOUR}`);
     await page.getByRole('heading', { name: 'Handover sheet: Harbour', level: 1 }).waitFor();
-    await page.getByTestId('sheet-meta').filter({ hasText: /(Day|Night) shift, .* · Printed .* by Mei Tan · / }).waitFor();
+    await page
+      .getByTestId('sheet-meta')
+      .filter({ hasText: /(Day|Night) shift, .* · Printed .* by Mei Tan · / })
+      .waitFor();
     const sheet = page.getByRole('table', { name: 'Handover sheet' });
     const answer = await api<BoardAnswer>(server.baseUrl, kaiToken, `/wards/${HARBOUR}/handover`);
     expect(await sheet.locator('tbody tr').count()).toBe(answer.rows.length);
@@ -207,7 +250,10 @@ describe('handover board', () => {
     await snapshot(page, 'handover-print');
     const pdf = await page.pdf({ preferCSSPageSize: true, printBackground: true });
     writeFileSync(path.join(path.dirname(fileURLToPath(import.meta.url)), 'artifacts', 'handover-sheet.pdf'), pdf);
-    const pages = [...pdf.toString('latin1').matchAll(/\/MediaBox\s*\[\s*0 0 ([\d.]+) ([\d.]+)\s*\]/g)].map((box) => [Math.round(Number(box[1])), Math.round(Number(box[2]))]);
+    const pages = [...pdf.toString('latin1').matchAll(/\/MediaBox\s*\[\s*0 0 ([\d.]+) ([\d.]+)\s*\]/g)].map((box) => [
+      Math.round(Number(box[1])),
+      Math.round(Number(box[2])),
+    ]);
     // Every page A4 landscape (297 × 210 mm = 841.9 × 595.3 pt); a ward of eight PCAs takes two.
     expect(pages.length).toBeGreaterThanOrEqual(1);
     expect(pages.length).toBeLessThanOrEqual(Math.ceil(answer.rows.length / 4));

@@ -58,7 +58,10 @@ async function resubmit(page: Page): Promise<void> {
   const dialog = await readyDialog(page, /^Submit version \d+ for approval$/);
   await dialog.getByRole('button', { name: 'Submit for approval' }).click();
   await dialog.waitFor({ state: 'detached' });
-  await page.getByRole('table', { name: 'Library versions' }).getByRole('row', { name: /Awaiting approval Lin Park/ }).waitFor();
+  await page
+    .getByRole('table', { name: 'Library versions' })
+    .getByRole('row', { name: /Awaiting approval Lin Park/ })
+    .waitFor();
 }
 
 describe('dose-limit library: import a CSV, submit, and a second pharmacist approves', () => {
@@ -106,7 +109,10 @@ describe('dose-limit library: import a CSV, submit, and a second pharmacist appr
     const { page } = lin;
     await chooseWard(page, 'Harbour');
     await page.getByRole('heading', { name: 'Harbour library, version 1' }).waitFor();
-    await page.getByRole('table', { name: 'Library versions' }).getByRole('row', { name: /Version 2/ }).click();
+    await page
+      .getByRole('table', { name: 'Library versions' })
+      .getByRole('row', { name: /Version 2/ })
+      .click();
     await page.getByRole('heading', { name: 'Harbour library, version 2' }).waitFor();
     const changes = page.getByRole('table', { name: 'Changed limits' });
     await changes.getByRole('row', { name: /morphine 1 mg\/mL Demand dose, soft max 2 mg to 1.5 mg Lowered/ }).waitFor();
@@ -130,9 +136,18 @@ describe('dose-limit library: import a CSV, submit, and a second pharmacist appr
     const rules = page.getByRole('table', { name: 'Limit rules' });
     const morphine = ruleRows(rules, 'morphine 1 mg/mL per kg');
     await morphine.getByText('per kg', { exact: true }).waitFor();
-    await morphine.getByRole('row', { name: /^Demand dose/ }).getByRole('cell', { name: '0.02 mg/kg' }).waitFor();
-    await morphine.getByRole('row', { name: /^Basal rate/ }).getByRole('cell', { name: '0.004 mg/kg/h' }).waitFor();
-    await morphine.getByRole('row', { name: /^Lockout/ }).getByRole('cell', { name: '10 min' }).waitFor();
+    await morphine
+      .getByRole('row', { name: /^Demand dose/ })
+      .getByRole('cell', { name: '0.02 mg/kg' })
+      .waitFor();
+    await morphine
+      .getByRole('row', { name: /^Basal rate/ })
+      .getByRole('cell', { name: '0.004 mg/kg/h' })
+      .waitFor();
+    await morphine
+      .getByRole('row', { name: /^Lockout/ })
+      .getByRole('cell', { name: '10 min' })
+      .waitFor();
     await snapshot(page, 'library-wren-per-kg');
   });
 
@@ -219,8 +234,14 @@ describe('dose-limit library: import a CSV, submit, and a second pharmacist appr
     await signInHome(page, 'tomas.ortiz');
     await openLibrary(page);
     await chooseWard(page, 'Cedar');
-    await page.getByRole('table', { name: 'Library versions' }).getByRole('row', { name: /Version 2 Awaiting approval/ }).click();
-    await page.getByRole('table', { name: 'Changed limits' }).getByRole('row', { name: /soft max 2 mg to 1.8 mg/ }).waitFor();
+    await page
+      .getByRole('table', { name: 'Library versions' })
+      .getByRole('row', { name: /Version 2 Awaiting approval/ })
+      .click();
+    await page
+      .getByRole('table', { name: 'Changed limits' })
+      .getByRole('row', { name: /soft max 2 mg to 1.8 mg/ })
+      .waitFor();
 
     await page.getByRole('button', { name: 'Approve' }).click();
     const dialog = await readyDialog(page, 'Approve version 2');
@@ -234,12 +255,18 @@ describe('dose-limit library: import a CSV, submit, and a second pharmacist appr
     await resubmit(lin.page);
     await dialog.getByLabel('Your password').fill('lockstep-demo');
     await dialog.getByRole('button', { name: 'Sign and approve' }).click();
-    await dialog.getByRole('alert').getByText(/withdrawn and submitted again after you opened it: review its changes again/).waitFor();
+    await dialog
+      .getByRole('alert')
+      .getByText(/withdrawn and submitted again after you opened it: review its changes again/)
+      .waitFor();
     await snapshot(page, 'library-approve-resubmitted');
     expect(await dialog.getByLabel('Your password').count()).toBe(0);
     await dialog.getByRole('button', { name: 'Close and review the changes' }).click();
     await dialog.waitFor({ state: 'detached' });
-    await page.getByRole('table', { name: 'Changed limits' }).getByRole('row', { name: /soft max 2 mg to 1.8 mg/ }).waitFor();
+    await page
+      .getByRole('table', { name: 'Changed limits' })
+      .getByRole('row', { name: /soft max 2 mg to 1.8 mg/ })
+      .waitFor();
 
     await page.getByRole('button', { name: 'Approve' }).click();
     const again = await readyDialog(page, 'Approve version 2');

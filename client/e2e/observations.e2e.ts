@@ -7,7 +7,17 @@ import { readyDialog } from './support/dialog.js';
 // The demo's verified order: FALEOLO, Tavita (Harbour bed H07), HYDROmorphone 0.2 mg/mL, demand
 // 0.2 mg, lockout 10 min, basal 0.1 mg/h, 4-hour limit 6 mg, a ready 50 mL syringe HK3-7QT.
 // The demo has no running PCA, so the API starts this one (both bedside checks) before the UI.
-const PUMP = { drugId: 2, concentrationPerMl: 0.2, syringeVolumeMl: 50, loadingDose: null, demandDose: 0.2, lockoutMinutes: 10, basalRatePerHour: 0.1, oneHourLimit: null, fourHourLimit: 6 };
+const PUMP = {
+  drugId: 2,
+  concentrationPerMl: 0.2,
+  syringeVolumeMl: 50,
+  loadingDose: null,
+  demandDose: 0.2,
+  lockoutMinutes: 10,
+  basalRatePerHour: 0.1,
+  oneHourLimit: null,
+  fourHourLimit: 6,
+};
 
 type OrderSummary = { id: number; patientId: number; drugName: string; status: string };
 type Message = { subject: string; to: string };
@@ -40,13 +50,26 @@ async function startDemoPca(server: RunningServer): Promise<OrderSummary> {
     releaseCode: 'HK3-7QT',
     settings: PUMP,
   });
-  await api(server, kai, 'POST', `/orders/${order.id}/bedside-checks/${check.id}/second`, { username: 'rosa.adeyemi', password: DEMO_PASSWORD, settings: PUMP });
+  await api(server, kai, 'POST', `/orders/${order.id}/bedside-checks/${check.id}/second`, {
+    username: 'rosa.adeyemi',
+    password: DEMO_PASSWORD,
+    settings: PUMP,
+  });
   const started = await api<OrderSummary>(server, kai, 'GET', `/orders/${order.id}`);
   expect(started.status).toBe('active');
   return started;
 }
 
-type Reading = { sedation: RegExp; respiratoryRate: string; spo2: string; pain: string; attempts: string; delivered: string; volume: string; remaining: string };
+type Reading = {
+  sedation: RegExp;
+  respiratoryRate: string;
+  spo2: string;
+  pain: string;
+  attempts: string;
+  delivered: string;
+  volume: string;
+  remaining: string;
+};
 
 /** Typed in the form's own order: sedation and breathing before the pain score, then the pump. */
 async function enterObservation(page: Page, reading: Reading): Promise<void> {
@@ -96,9 +119,14 @@ describe('observations: flags, usage charts and acknowledgement', () => {
     await page.getByRole('heading', { name: 'PCA: FALEOLO, Tavita', level: 1 }).waitFor();
     expect(await page.getByTestId('pca-drug').innerText()).toBe('HYDROmorphone 0.2 mg/mL');
     const regimen = page.locator('dl[aria-label="Ordered regimen"]');
-    expect(await regimen.innerText()).toMatch(/Demand dose\s+0\.2 mg[\s\S]*Lockout\s+10 min[\s\S]*Basal rate\s+0\.1 mg\/h[\s\S]*4-hour limit\s+6 mg/);
+    expect(await regimen.innerText()).toMatch(
+      /Demand dose\s+0\.2 mg[\s\S]*Lockout\s+10 min[\s\S]*Basal rate\s+0\.1 mg\/h[\s\S]*4-hour limit\s+6 mg/,
+    );
     await page.getByText('No open flags.').waitFor();
-    await page.getByTestId('next-observation').getByText(/^Due at \d{2}:\d{2}$/).waitFor();
+    await page
+      .getByTestId('next-observation')
+      .getByText(/^Due at \d{2}:\d{2}$/)
+      .waitFor();
     await page.getByText(/Cross-tolerance between opioids is incomplete/).waitFor();
     await snapshot(page, 'observations-pca-page-start');
   });
@@ -108,7 +136,16 @@ describe('observations: flags, usage charts and acknowledgement', () => {
     await page.getByRole('link', { name: 'Record observation' }).click();
     await page.getByRole('heading', { name: 'Record observation', level: 1 }).waitFor();
     await page.getByText('No observation yet for this PCA.').waitFor();
-    await enterObservation(page, { sedation: /Frequently drowsy/, respiratoryRate: '12', spo2: '95', pain: '4', attempts: '6', delivered: '4', volume: '2', remaining: '48' });
+    await enterObservation(page, {
+      sedation: /Frequently drowsy/,
+      respiratoryRate: '12',
+      spo2: '95',
+      pain: '4',
+      attempts: '6',
+      delivered: '4',
+      volume: '2',
+      remaining: '48',
+    });
     // Said before saving: sedation 3 is unacceptable, with the scale's action.
     await page.getByText('Urgent: saving raises an urgent flag').waitFor();
     await snapshot(page, 'observations-form-sedation-3');
@@ -129,21 +166,39 @@ describe('observations: flags, usage charts and acknowledgement', () => {
   it('e-mails the urgent flag', async () => {
     const token = await login(server, 'sam.rivera');
     await expect
-      .poll(async () => (await api<Message[]>(server, token, 'GET', '/dev/mailbox')).find((message) => message.subject.startsWith('URGENT: Sedation level 3'))?.subject, {
-        timeout: 10_000,
-      })
+      .poll(
+        async () =>
+          (await api<Message[]>(server, token, 'GET', '/dev/mailbox')).find((message) =>
+            message.subject.startsWith('URGENT: Sedation level 3'),
+          )?.subject,
+        {
+          timeout: 10_000,
+        },
+      )
       .toMatch(/^URGENT: Sedation level 3 — Harbour bed H07$/);
   });
 
   it('checks pump totals as they are typed, then records a second observation', async () => {
     const { page } = kai;
     await page.getByRole('link', { name: 'Record observation' }).click();
-    await page.getByTestId('last-observation').getByText(/sedation 3, respiratory rate 12\/min/).waitFor();
+    await page
+      .getByTestId('last-observation')
+      .getByText(/sedation 3, respiratory rate 12\/min/)
+      .waitFor();
     await page.getByLabel('Attempts').fill('5');
     await page.getByText('At least 6: pump totals never go down within one syringe').waitFor();
     expect(await page.getByLabel('Attempts').getAttribute('aria-invalid')).toBe('true');
     await snapshot(page, 'observations-form-totals-check');
-    await enterObservation(page, { sedation: /Slightly drowsy/, respiratoryRate: '14', spo2: '96', pain: '3', attempts: '9', delivered: '7', volume: '2.6', remaining: '47.4' });
+    await enterObservation(page, {
+      sedation: /Slightly drowsy/,
+      respiratoryRate: '14',
+      spo2: '96',
+      pain: '3',
+      attempts: '9',
+      delivered: '7',
+      volume: '2.6',
+      remaining: '47.4',
+    });
     await page.getByRole('button', { name: 'Save observation' }).click();
     await page.getByRole('heading', { name: 'Observation saved' }).waitFor();
     await page.getByRole('link', { name: 'Open the PCA page' }).click();
@@ -159,9 +214,18 @@ describe('observations: flags, usage charts and acknowledgement', () => {
     await expect.poll(() => attempts.locator('.recharts-bar-rectangle').count()).toBeGreaterThan(0);
     await expect.poll(() => painSedation.locator('.recharts-line-dot').count()).toBe(4);
     await expect.poll(() => cumulative.locator('.recharts-line-curve').count()).toBe(1);
-    await attempts.locator('figcaption').getByText(/9 attempts, 7 doses delivered/).waitFor();
-    await painSedation.locator('figcaption').getByText(/2 observations in the hours shown\. Latest at \d{2}:\d{2}: pain 3\/10, sedation 2/).waitFor();
-    await cumulative.locator('figcaption').getByText(/^0\.52 mg given in the 12 hours shown/).waitFor();
+    await attempts
+      .locator('figcaption')
+      .getByText(/9 attempts, 7 doses delivered/)
+      .waitFor();
+    await painSedation
+      .locator('figcaption')
+      .getByText(/2 observations in the hours shown\. Latest at \d{2}:\d{2}: pain 3\/10, sedation 2/)
+      .waitFor();
+    await cumulative
+      .locator('figcaption')
+      .getByText(/^0\.52 mg given in the 12 hours shown/)
+      .waitFor();
 
     await painSedation.getByRole('button', { name: 'Show as table' }).click();
     const rows = painSedation.getByRole('table').locator('tbody tr');
@@ -171,7 +235,10 @@ describe('observations: flags, usage charts and acknowledgement', () => {
 
     await page.getByText('8 h', { exact: true }).click();
     await expect.poll(() => new URL(page.url()).searchParams.get('hours')).toBe('8');
-    await cumulative.locator('figcaption').getByText(/given in the 8 hours shown/).waitFor();
+    await cumulative
+      .locator('figcaption')
+      .getByText(/given in the 8 hours shown/)
+      .waitFor();
     await snapshot(page, 'observations-pca-page-charts');
   });
 
@@ -225,7 +292,12 @@ describe('observations: flags, usage charts and acknowledgement', () => {
     await page.getByText('At least 70 %').waitFor();
     expect(await spo2.getAttribute('aria-invalid')).toBe('true');
     const describedBy = (await spo2.getAttribute('aria-describedby')) ?? '';
-    const messages = await Promise.all(describedBy.split(' ').filter(Boolean).map((id) => page.locator(`[id="${id}"]`).innerText()));
+    const messages = await Promise.all(
+      describedBy
+        .split(' ')
+        .filter(Boolean)
+        .map((id) => page.locator(`[id="${id}"]`).innerText()),
+    );
     expect(messages.join(' ')).toContain('At least 70 %');
     await snapshot(page, 'ward-policy-harbour');
   });

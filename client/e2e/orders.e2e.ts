@@ -57,179 +57,195 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
     await server?.stop();
   }, STEP_TIMEOUT_MS);
 
-  it('a prescriber writes an order from a standard set and explains the soft finding', async () => {
-    const { page } = browser;
-    await signInHome(page, 'amara.osei');
-    await openPatients(page);
-    await page.getByText('KB100231').click();
-    await page.getByRole('heading', { name: 'ACHTERBERG, Noah', level: 1 }).waitFor();
-    await page.getByRole('link', { name: 'New PCA order' }).click();
-    await page.getByRole('heading', { name: 'New PCA order', level: 1 }).waitFor();
-    await page.getByRole('region', { name: 'Patient' }).getByText('Opioid-naive').waitFor();
+  it(
+    'a prescriber writes an order from a standard set and explains the soft finding',
+    async () => {
+      const { page } = browser;
+      await signInHome(page, 'amara.osei');
+      await openPatients(page);
+      await page.getByText('KB100231').click();
+      await page.getByRole('heading', { name: 'ACHTERBERG, Noah', level: 1 }).waitFor();
+      await page.getByRole('link', { name: 'New PCA order' }).click();
+      await page.getByRole('heading', { name: 'New PCA order', level: 1 }).waitFor();
+      await page.getByRole('region', { name: 'Patient' }).getByText('Opioid-naive').waitFor();
 
-    await page.getByRole('button', { name: /^Adult morphine, morphine 1 mg\/mL/ }).click();
-    const demand = page.getByRole('textbox', { name: 'Demand dose', exact: true });
-    expect(await demand.inputValue()).toBe('1');
-    expect(await page.getByRole('textbox', { name: '4-hour limit', exact: true }).inputValue()).toBe('30');
-    await page.locator('[data-server-check="agrees"]').waitFor();
-    await page.getByText('No findings: every value is inside its limits.').waitFor();
+      await page.getByRole('button', { name: /^Adult morphine, morphine 1 mg\/mL/ }).click();
+      const demand = page.getByRole('textbox', { name: 'Demand dose', exact: true });
+      expect(await demand.inputValue()).toBe('1');
+      expect(await page.getByRole('textbox', { name: '4-hour limit', exact: true }).inputValue()).toBe('30');
+      await page.locator('[data-server-check="agrees"]').waitFor();
+      await page.getByText('No findings: every value is inside its limits.').waitFor();
 
-    // Past the hard maximum: blocked, said beside the field, in words as well as colour.
-    await demand.fill('3.5');
-    await page.getByText('Hard limit (blocks signing):').first().waitFor();
-    await page.getByText('Signing is blocked while a value is marked as an error or outside a hard limit.').waitFor();
-    await shot(page, 'order-hard-limit');
+      // Past the hard maximum: blocked, said beside the field, in words as well as colour.
+      await demand.fill('3.5');
+      await page.getByText('Hard limit (blocks signing):').first().waitFor();
+      await page.getByText('Signing is blocked while a value is marked as an error or outside a hard limit.').waitFor();
+      await shot(page, 'order-hard-limit');
 
-    await demand.fill('2.5');
-    // Beside the field (and in the live panel), before the server has even answered.
-    const field = page.locator('div').filter({ has: demand }).filter({ hasText: SOFT_FINDING }).last();
-    await field.getByText(SOFT_FINDING).waitFor();
-    const reason = page.getByLabel('Reason for the demand dose outside the soft limit');
-    await reason.waitFor();
-    await page.locator('[data-server-check="agrees"]').waitFor();
-    expect(await page.getByTestId('findings-summary').innerText()).toContain('1 outside a soft limit');
-    await shot(page, 'order-soft-finding');
+      await demand.fill('2.5');
+      // Beside the field (and in the live panel), before the server has even answered.
+      const field = page.locator('div').filter({ has: demand }).filter({ hasText: SOFT_FINDING }).last();
+      await field.getByText(SOFT_FINDING).waitFor();
+      const reason = page.getByLabel('Reason for the demand dose outside the soft limit');
+      await reason.waitFor();
+      await page.locator('[data-server-check="agrees"]').waitFor();
+      expect(await page.getByTestId('findings-summary').innerText()).toContain('1 outside a soft limit');
+      await shot(page, 'order-soft-finding');
 
-    // Signing without the reason puts the schema's message beside the reason.
-    await page.getByRole('button', { name: 'Sign order' }).click();
-    await page.getByText('Give a reason of at least 10 characters').waitFor();
-    await reason.fill('Tolerated 2.5 mg in recovery without sedation');
-    await page.getByRole('button', { name: 'Sign order' }).click();
-    await page.getByRole('dialog').getByText('morphine 1 mg/mL · demand 2.5 mg · lockout 10 min · 4-hour limit 30 mg').waitFor();
-    await shot(page, 'order-sign-dialog');
-    const dialog = await readyDialog(page);
-    await dialog.getByLabel('Your password').fill('not-my-password');
-    await dialog.getByRole('button', { name: 'Sign and send to pharmacy' }).click();
-    await dialog.getByText('The password you signed with is not correct').waitFor();
-    expect(await dialog.getByLabel('Your password').inputValue()).toBe('');
-    await signInDialog(page, 'Sign and send to pharmacy');
+      // Signing without the reason puts the schema's message beside the reason.
+      await page.getByRole('button', { name: 'Sign order' }).click();
+      await page.getByText('Give a reason of at least 10 characters').waitFor();
+      await reason.fill('Tolerated 2.5 mg in recovery without sedation');
+      await page.getByRole('button', { name: 'Sign order' }).click();
+      await page.getByRole('dialog').getByText('morphine 1 mg/mL · demand 2.5 mg · lockout 10 min · 4-hour limit 30 mg').waitFor();
+      await shot(page, 'order-sign-dialog');
+      const dialog = await readyDialog(page);
+      await dialog.getByLabel('Your password').fill('not-my-password');
+      await dialog.getByRole('button', { name: 'Sign and send to pharmacy' }).click();
+      await dialog.getByText('The password you signed with is not correct').waitFor();
+      expect(await dialog.getByLabel('Your password').inputValue()).toBe('');
+      await signInDialog(page, 'Sign and send to pharmacy');
 
-    await page.getByRole('heading', { name: /^PCA order \d+$/, level: 1 }).waitFor();
-    firstId = orderIdFrom(page.url());
-    await page.getByText('Awaiting verification').first().waitFor();
-    await page.getByText('Reason given: Tolerated 2.5 mg in recovery without sedation').waitFor();
-    await shot(page, 'order-signed');
-    await signOut(page);
-  }, STEP_TIMEOUT_MS);
+      await page.getByRole('heading', { name: /^PCA order \d+$/, level: 1 }).waitFor();
+      firstId = orderIdFrom(page.url());
+      await page.getByText('Awaiting verification').first().waitFor();
+      await page.getByText('Reason given: Tolerated 2.5 mg in recovery without sedation').waitFor();
+      await shot(page, 'order-signed');
+      await signOut(page);
+    },
+    STEP_TIMEOUT_MS,
+  );
 
-  it('a pharmacist finds it in the queue and returns it with a query', async () => {
-    const { page } = browser;
-    await signIn(page, 'lin.park');
-    await openNav(page, 'Verification', 'Verification');
-    const rows = page.getByRole('table', { name: 'Orders awaiting verification' }).locator('tbody tr');
-    // The demo order for the same patient waited longer, so it comes first.
-    await expect.poll(() => rows.count()).toBe(2);
-    expect(await rows.first().innerText()).toMatch(/\b4[5-9] min\b/);
-    await shot(page, 'verification-queue');
+  it(
+    'a pharmacist finds it in the queue and returns it with a query',
+    async () => {
+      const { page } = browser;
+      await signIn(page, 'lin.park');
+      await openNav(page, 'Verification', 'Verification');
+      const rows = page.getByRole('table', { name: 'Orders awaiting verification' }).locator('tbody tr');
+      // The demo order for the same patient waited longer, so it comes first.
+      await expect.poll(() => rows.count()).toBe(2);
+      expect(await rows.first().innerText()).toMatch(/\b4[5-9] min\b/);
+      await shot(page, 'verification-queue');
 
-    await rows.filter({ hasText: 'demand 2.5 mg' }).click();
-    await page.getByRole('heading', { name: `Verify order ${firstId}`, level: 1 }).waitFor();
-    await page.getByRole('region', { name: 'Patient' }).getByText('82 kg').waitFor();
-    await page.getByRole('table', { name: 'Regimen against the limit rule' }).getByText('0.5–2 mg').waitFor();
-    await shot(page, 'verification-detail');
+      await rows.filter({ hasText: 'demand 2.5 mg' }).click();
+      await page.getByRole('heading', { name: `Verify order ${firstId}`, level: 1 }).waitFor();
+      await page.getByRole('region', { name: 'Patient' }).getByText('82 kg').waitFor();
+      await page.getByRole('table', { name: 'Regimen against the limit rule' }).getByText('0.5–2 mg').waitFor();
+      await shot(page, 'verification-detail');
 
-    await page.getByRole('button', { name: 'Return with query' }).click();
-    const returnDialog = await readyDialog(page);
-    await returnDialog.getByLabel('Query for the prescriber').fill(QUERY);
-    await returnDialog.getByRole('button', { name: 'Return to prescriber' }).click();
-    await page.getByRole('heading', { name: 'Verification', level: 1 }).waitFor();
-    await expect.poll(() => rows.count()).toBe(1);
-    await signOut(page);
-  }, STEP_TIMEOUT_MS);
+      await page.getByRole('button', { name: 'Return with query' }).click();
+      const returnDialog = await readyDialog(page);
+      await returnDialog.getByLabel('Query for the prescriber').fill(QUERY);
+      await returnDialog.getByRole('button', { name: 'Return to prescriber' }).click();
+      await page.getByRole('heading', { name: 'Verification', level: 1 }).waitFor();
+      await expect.poll(() => rows.count()).toBe(1);
+      await signOut(page);
+    },
+    STEP_TIMEOUT_MS,
+  );
 
-  it('the prescriber reads the query in My orders, revises to 1 mg and signs again', async () => {
-    const { page } = browser;
-    await signIn(page, 'amara.osei');
-    await openNav(page, 'My orders', 'My orders');
-    const row = page.getByRole('table', { name: 'My orders' }).locator('tbody tr').filter({ hasText: 'demand 2.5 mg' });
-    await row.getByText(`Query: ${QUERY}`).waitFor();
-    await shot(page, 'my-orders-returned');
+  it(
+    'the prescriber reads the query in My orders, revises to 1 mg and signs again',
+    async () => {
+      const { page } = browser;
+      await signIn(page, 'amara.osei');
+      await openNav(page, 'My orders', 'My orders');
+      const row = page.getByRole('table', { name: 'My orders' }).locator('tbody tr').filter({ hasText: 'demand 2.5 mg' });
+      await row.getByText(`Query: ${QUERY}`).waitFor();
+      await shot(page, 'my-orders-returned');
 
-    await row.getByRole('button', { name: `Revise order ${firstId}` }).click();
-    await page.getByRole('heading', { name: `Revise PCA order ${firstId}`, level: 1 }).waitFor();
-    await page.getByText(QUERY).waitFor();
-    const demand = page.getByRole('textbox', { name: 'Demand dose', exact: true });
-    expect(await demand.inputValue()).toBe('2.5');
-    await demand.fill('1');
-    await page.getByLabel('Reason for the demand dose outside the soft limit').waitFor({ state: 'detached' });
-    await page.getByText('Changed. Was 2.5 mg in the returned version').waitFor();
-    await page.locator('[data-server-check="agrees"]').waitFor();
-    await shot(page, 'order-revise');
-    await page.getByRole('button', { name: 'Sign order' }).click();
-    await signInDialog(page, 'Sign and send to pharmacy');
+      await row.getByRole('button', { name: `Revise order ${firstId}` }).click();
+      await page.getByRole('heading', { name: `Revise PCA order ${firstId}`, level: 1 }).waitFor();
+      await page.getByText(QUERY).waitFor();
+      const demand = page.getByRole('textbox', { name: 'Demand dose', exact: true });
+      expect(await demand.inputValue()).toBe('2.5');
+      await demand.fill('1');
+      await page.getByLabel('Reason for the demand dose outside the soft limit').waitFor({ state: 'detached' });
+      await page.getByText('Changed. Was 2.5 mg in the returned version').waitFor();
+      await page.locator('[data-server-check="agrees"]').waitFor();
+      await shot(page, 'order-revise');
+      await page.getByRole('button', { name: 'Sign order' }).click();
+      await signInDialog(page, 'Sign and send to pharmacy');
 
-    await page.getByRole('heading', { name: /^PCA order \d+$/, level: 1 }).waitFor();
-    revisedId = orderIdFrom(page.url());
-    expect(revisedId).toBeGreaterThan(firstId);
-    await page.getByText(`Revises order ${firstId}`).waitFor();
-    const changed = page.getByRole('table', { name: 'Regimen against the limit rule' }).locator('tr[data-changed]');
-    await expect.poll(() => changed.count()).toBe(1);
-    expect(await changed.innerText()).toContain('Demand dose');
+      await page.getByRole('heading', { name: /^PCA order \d+$/, level: 1 }).waitFor();
+      revisedId = orderIdFrom(page.url());
+      expect(revisedId).toBeGreaterThan(firstId);
+      await page.getByText(`Revises order ${firstId}`).waitFor();
+      const changed = page.getByRole('table', { name: 'Regimen against the limit rule' }).locator('tr[data-changed]');
+      await expect.poll(() => changed.count()).toBe(1);
+      expect(await changed.innerText()).toContain('Demand dose');
 
-    await page.getByRole('link', { name: 'Patients', exact: true }).click();
-    await page.getByText('KB100231').click();
-    const patientOrders = page.getByRole('table', { name: 'PCA orders for this patient' }).locator('tbody tr');
-    await expect.poll(() => patientOrders.count()).toBe(3);
-    await patientOrders.filter({ hasText: 'Superseded' }).waitFor();
-    await shot(page, 'patient-orders');
-    await signOut(page);
-  }, STEP_TIMEOUT_MS);
+      await page.getByRole('link', { name: 'Patients', exact: true }).click();
+      await page.getByText('KB100231').click();
+      const patientOrders = page.getByRole('table', { name: 'PCA orders for this patient' }).locator('tbody tr');
+      await expect.poll(() => patientOrders.count()).toBe(3);
+      await patientOrders.filter({ hasText: 'Superseded' }).waitFor();
+      await shot(page, 'patient-orders');
+      await signOut(page);
+    },
+    STEP_TIMEOUT_MS,
+  );
 
-  it('the pharmacist verifies the revision and releases a syringe with a printable label', async () => {
-    const { page } = browser;
-    await signIn(page, 'lin.park');
-    await openNav(page, 'Verification', 'Verification');
-    await page.getByRole('table', { name: 'Orders awaiting verification' }).locator('tbody tr').filter({ hasText: 'Revision' }).click();
-    await page.getByRole('heading', { name: `Verify order ${revisedId}`, level: 1 }).waitFor();
-    await page.locator('tr[data-changed]').getByText('2.5 mg').waitFor();
-    await page.getByText(QUERY).waitFor();
-    await shot(page, 'verification-revision');
+  it(
+    'the pharmacist verifies the revision and releases a syringe with a printable label',
+    async () => {
+      const { page } = browser;
+      await signIn(page, 'lin.park');
+      await openNav(page, 'Verification', 'Verification');
+      await page.getByRole('table', { name: 'Orders awaiting verification' }).locator('tbody tr').filter({ hasText: 'Revision' }).click();
+      await page.getByRole('heading', { name: `Verify order ${revisedId}`, level: 1 }).waitFor();
+      await page.locator('tr[data-changed]').getByText('2.5 mg').waitFor();
+      await page.getByText(QUERY).waitFor();
+      await shot(page, 'verification-revision');
 
-    await page.getByRole('button', { name: 'Verify' }).click();
-    await signInDialog(page, 'Sign and verify');
-    await page.getByText('Verified').first().waitFor();
+      await page.getByRole('button', { name: 'Verify' }).click();
+      await signInDialog(page, 'Sign and verify');
+      await page.getByText('Verified').first().waitFor();
 
-    await page.getByRole('button', { name: 'Release syringe' }).click();
-    const dialog = await readyDialog(page);
-    const volume = dialog.getByRole('textbox', { name: 'Volume', exact: true });
-    expect(await dialog.getByLabel('Concentration').inputValue()).toBe('1');
-    expect(await volume.inputValue()).toBe('50');
-    await dialog.getByLabel('Batch').fill('B2403-17');
-    const expiry = new Date(Date.now() + 7 * 24 * 3600_000);
-    const pad = (n: number) => String(n).padStart(2, '0');
-    await dialog.getByLabel('Expiry').fill(`${expiry.getFullYear()}-${pad(expiry.getMonth() + 1)}-${pad(expiry.getDate())}T18:00`);
-    await dialog.getByLabel('Prepared by').fill('Lin Park');
-    await dialog.getByLabel('Checked by').fill('Tomas Ortiz');
-    await volume.fill('10');
-    await dialog.getByLabel('Reason for the unusual volume').waitFor();
-    await volume.fill('50');
-    await dialog.getByLabel('Reason for the unusual volume').waitFor({ state: 'detached' });
-    await dialog.getByRole('button', { name: 'Release syringe' }).click();
+      await page.getByRole('button', { name: 'Release syringe' }).click();
+      const dialog = await readyDialog(page);
+      const volume = dialog.getByRole('textbox', { name: 'Volume', exact: true });
+      expect(await dialog.getByLabel('Concentration').inputValue()).toBe('1');
+      expect(await volume.inputValue()).toBe('50');
+      await dialog.getByLabel('Batch').fill('B2403-17');
+      const expiry = new Date(Date.now() + 7 * 24 * 3600_000);
+      const pad = (n: number) => String(n).padStart(2, '0');
+      await dialog.getByLabel('Expiry').fill(`${expiry.getFullYear()}-${pad(expiry.getMonth() + 1)}-${pad(expiry.getDate())}T18:00`);
+      await dialog.getByLabel('Prepared by').fill('Lin Park');
+      await dialog.getByLabel('Checked by').fill('Tomas Ortiz');
+      await volume.fill('10');
+      await dialog.getByLabel('Reason for the unusual volume').waitFor();
+      await volume.fill('50');
+      await dialog.getByLabel('Reason for the unusual volume').waitFor({ state: 'detached' });
+      await dialog.getByRole('button', { name: 'Release syringe' }).click();
 
-    releaseCode = (await dialog.getByTestId('release-code').innerText()).trim();
-    expect(releaseCode).toMatch(/^[234679ACDEFGHJKMNPQRTUVWXYZ]{3}-[234679ACDEFGHJKMNPQRTUVWXYZ]{3}$/);
-    await shot(page, 'release-code');
+      releaseCode = (await dialog.getByTestId('release-code').innerText()).trim();
+      expect(releaseCode).toMatch(/^[234679ACDEFGHJKMNPQRTUVWXYZ]{3}-[234679ACDEFGHJKMNPQRTUVWXYZ]{3}$/);
+      await shot(page, 'release-code');
 
-    await dialog.getByRole('link', { name: 'Print label' }).click();
-    await page.getByRole('heading', { name: 'Syringe label', level: 1 }).waitFor();
-    const label = page.getByRole('article', { name: 'Syringe label' });
-    expect(await label.getByTestId('label-release-code').innerText()).toBe(releaseCode);
-    const text = await label.innerText();
-    expect(text).toContain('ACHTERBERG, Noah');
-    expect(text).toContain('MRN KB100231');
-    expect(text).toContain('Harbour, bed H02');
-    expect(text).toContain('morphine 1 mg/mL');
-    expect(text).toContain('50 mg in 50 mL');
-    expect(text).toContain('Batch B2403-17');
-    expect(text).toContain('For PCA use by this patient only.');
-    await shot(page, 'release-label');
-    await page.emulateMedia({ media: 'print' });
-    expect(await page.getByRole('navigation').isVisible()).toBe(false);
-    expect(await page.getByRole('button', { name: 'Print label' }).isVisible()).toBe(false);
-    await shot(page, 'release-label-print');
-    await page.emulateMedia({ media: 'screen' });
-    await signOut(page);
-  }, STEP_TIMEOUT_MS);
+      await dialog.getByRole('link', { name: 'Print label' }).click();
+      await page.getByRole('heading', { name: 'Syringe label', level: 1 }).waitFor();
+      const label = page.getByRole('article', { name: 'Syringe label' });
+      expect(await label.getByTestId('label-release-code').innerText()).toBe(releaseCode);
+      const text = await label.innerText();
+      expect(text).toContain('ACHTERBERG, Noah');
+      expect(text).toContain('MRN KB100231');
+      expect(text).toContain('Harbour, bed H02');
+      expect(text).toContain('morphine 1 mg/mL');
+      expect(text).toContain('50 mg in 50 mL');
+      expect(text).toContain('Batch B2403-17');
+      expect(text).toContain('For PCA use by this patient only.');
+      await shot(page, 'release-label');
+      await page.emulateMedia({ media: 'print' });
+      expect(await page.getByRole('navigation').isVisible()).toBe(false);
+      expect(await page.getByRole('button', { name: 'Print label' }).isVisible()).toBe(false);
+      await shot(page, 'release-label-print');
+      await page.emulateMedia({ media: 'screen' });
+      await signOut(page);
+    },
+    STEP_TIMEOUT_MS,
+  );
 
   it("the admin's mailbox holds the e-mails to pharmacy, prescriber and nurse-in-charge", async () => {
     const { page } = browser;
@@ -250,21 +266,25 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
     await shot(page, 'mailbox');
   });
 
-  it('a weight-based ward offers only its per-kg set, worked out for the weight', async () => {
-    const { page } = browser;
-    await page.getByRole('button', { name: 'Sign out' }).click();
-    await signInHome(page, 'amara.osei');
-    await openPatients(page);
-    await page.getByText('KB102248').click();
-    await page.getByRole('link', { name: 'New PCA order' }).click();
-    await page.getByRole('heading', { name: 'New PCA order', level: 1 }).waitFor();
-    const sets = page.getByRole('group', { name: 'Standard order sets' }).getByRole('button');
-    await expect.poll(() => sets.allInnerTexts()).toEqual(['Paediatric morphine (per kg), morphine 1 mg/mL']);
-    await sets.first().click();
-    // APAGBI good practice: morphine PCA bolus 10–20 mcg/kg; 0.02 mg/kg × 24.5 kg = 0.49 mg.
-    expect(await page.getByRole('textbox', { name: 'Demand dose', exact: true }).inputValue()).toBe('0.49');
-    await page.getByText('(soft 0.245–0.49 mg for 24.5 kg)').waitFor();
-    await page.locator('[data-server-check="agrees"]').waitFor();
-    await shot(page, 'order-per-kg');
-  }, STEP_TIMEOUT_MS);
+  it(
+    'a weight-based ward offers only its per-kg set, worked out for the weight',
+    async () => {
+      const { page } = browser;
+      await page.getByRole('button', { name: 'Sign out' }).click();
+      await signInHome(page, 'amara.osei');
+      await openPatients(page);
+      await page.getByText('KB102248').click();
+      await page.getByRole('link', { name: 'New PCA order' }).click();
+      await page.getByRole('heading', { name: 'New PCA order', level: 1 }).waitFor();
+      const sets = page.getByRole('group', { name: 'Standard order sets' }).getByRole('button');
+      await expect.poll(() => sets.allInnerTexts()).toEqual(['Paediatric morphine (per kg), morphine 1 mg/mL']);
+      await sets.first().click();
+      // APAGBI good practice: morphine PCA bolus 10–20 mcg/kg; 0.02 mg/kg × 24.5 kg = 0.49 mg.
+      expect(await page.getByRole('textbox', { name: 'Demand dose', exact: true }).inputValue()).toBe('0.49');
+      await page.getByText('(soft 0.245–0.49 mg for 24.5 kg)').waitFor();
+      await page.locator('[data-server-check="agrees"]').waitFor();
+      await shot(page, 'order-per-kg');
+    },
+    STEP_TIMEOUT_MS,
+  );
 });

@@ -64,7 +64,10 @@ describe('ward patient list', () => {
     await page.getByText('KB102248').click();
     await page.getByRole('heading', { level: 1, name: /OKONKWO-BRANDT|Okonkwo-Brandt/ }).waitFor();
     await page.getByText('24.5 kg').first().waitFor();
-    await page.getByText(/Ibuprofen/).first().waitFor();
+    await page
+      .getByText(/Ibuprofen/)
+      .first()
+      .waitFor();
     await snapshot(page, 'patient-page');
   });
 });

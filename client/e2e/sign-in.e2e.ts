@@ -4,10 +4,38 @@ import { startServer, type RunningServer } from './support/server.js';
 
 // Each demo account, the heading of the home screen it lands on, and the nav links it must (not) see.
 const ROLE_HOMES = [
-  { username: 'amara.osei', displayName: 'Dr Amara Osei', role: 'Prescriber', home: 'My orders', path: '/orders/mine', wards: 'Your wards: Cedar, Harbour, Summit, Wren4 wards' },
-  { username: 'lin.park', displayName: 'Lin Park', role: 'Pharmacist', home: 'Verification', path: '/verification', wards: 'Your wards: Cedar, Harbour, Summit, Wren4 wards' },
-  { username: 'kai.mendes', displayName: 'Kai Mendes', role: 'Nurse', home: 'PCA orders', path: '/bedside', wards: 'Your wards: Harbour, SummitHarbour · Summit' },
-  { username: 'mei.tan', displayName: 'Mei Tan', role: 'Charge nurse', home: 'Handover', path: '/handover', wards: 'Your wards: HarbourHarbour' },
+  {
+    username: 'amara.osei',
+    displayName: 'Dr Amara Osei',
+    role: 'Prescriber',
+    home: 'My orders',
+    path: '/orders/mine',
+    wards: 'Your wards: Cedar, Harbour, Summit, Wren4 wards',
+  },
+  {
+    username: 'lin.park',
+    displayName: 'Lin Park',
+    role: 'Pharmacist',
+    home: 'Verification',
+    path: '/verification',
+    wards: 'Your wards: Cedar, Harbour, Summit, Wren4 wards',
+  },
+  {
+    username: 'kai.mendes',
+    displayName: 'Kai Mendes',
+    role: 'Nurse',
+    home: 'PCA orders',
+    path: '/bedside',
+    wards: 'Your wards: Harbour, SummitHarbour · Summit',
+  },
+  {
+    username: 'mei.tan',
+    displayName: 'Mei Tan',
+    role: 'Charge nurse',
+    home: 'Handover',
+    path: '/handover',
+    wards: 'Your wards: HarbourHarbour',
+  },
   { username: 'sam.rivera', displayName: 'Sam Rivera', role: 'Admin', home: 'Users', path: '/admin/users', wards: null },
 ];
 

@@ -17,14 +17,19 @@ const SQL = {
       o.reviewDate, o.signedAt, o.statusChangedAt, o.startedAt, p.bed, p.familyName, p.givenName, p.mrn, p.dateOfBirth, p.weightKg, d.genericName
     FROM pca_orders o LEFT JOIN patients p ON p.id = o.patientId LEFT JOIN drugs d ON d.id = o.drugId
     WHERE o.status IN ('awaiting_verification', 'verified', 'active') AND p.wardId = ?`,
-  observations: (n: number) => `SELECT id, orderId, releaseId, at, attempts, delivered, volumeInfusedMl FROM observations WHERE orderId IN (${marks(n)}) AND at >= ? ORDER BY orderId ASC, at ASC, id ASC`,
-  latest: (n: number) => `SELECT id, orderId, releaseId, at, painScore, sedationLevel, respiratoryRate, spo2, syringeRemainingMl FROM observations
+  observations: (n: number) =>
+    `SELECT id, orderId, releaseId, at, attempts, delivered, volumeInfusedMl FROM observations WHERE orderId IN (${marks(n)}) AND at >= ? ORDER BY orderId ASC, at ASC, id ASC`,
+  latest: (
+    n: number,
+  ) => `SELECT id, orderId, releaseId, at, painScore, sedationLevel, respiratoryRate, spo2, syringeRemainingMl FROM observations
     WHERE id IN (SELECT max(id) FROM observations WHERE orderId IN (${marks(n)}) GROUP BY orderId)`,
   flags: (n: number) => `SELECT * FROM flags WHERE orderId IN (${marks(n)}) AND acknowledgedAt IS NULL ORDER BY raisedAt DESC`,
   releases: (n: number) => `SELECT id, orderId, volumeMl FROM syringe_releases WHERE orderId IN (${marks(n)}) AND status = 'in_use'`,
-  starts: (n: number) => `SELECT id, orderId, releaseId, firstAt, secondAt FROM bedside_checks WHERE orderId IN (${marks(n)}) AND status = 'matched'`,
+  starts: (n: number) =>
+    `SELECT id, orderId, releaseId, firstAt, secondAt FROM bedside_checks WHERE orderId IN (${marks(n)}) AND status = 'matched'`,
   boluses: (n: number) => `SELECT id, orderId, amount, at FROM clinician_boluses WHERE orderId IN (${marks(n)}) AND at >= ?`,
-  discrepancies: (n: number) => `SELECT r.id, r.at, s.orderId FROM release_reconciliations r INNER JOIN syringe_releases s ON s.id = r.releaseId WHERE s.orderId IN (${marks(n)}) AND r.mustReport = 1`,
+  discrepancies: (n: number) =>
+    `SELECT r.id, r.at, s.orderId FROM release_reconciliations r INNER JOIN syringe_releases s ON s.id = r.releaseId WHERE s.orderId IN (${marks(n)}) AND r.mustReport = 1`,
   signoffs: `SELECT s.*, u.displayName FROM handover_signoffs s LEFT JOIN users u ON u.id = s.nurseId WHERE s.wardId = ? AND s.shiftDate = ? AND s.shift = ?`,
 };
 
@@ -49,7 +54,13 @@ export class BaselineBoard {
     const orders = (this.statement('orders', SQL.orders).all(wardId) as Row[]).map(toOrder);
     const ids = orders.map((order) => order.id);
     const inputs = ids.length === 0 ? emptyInputs() : this.inputs(ids, wardId, shift, now);
-    return { wardId, wardName: ward.name, generatedAt: now.toISOString(), shift, rows: boardRows(orders, inputs, wardPolicy(ward), shift, now) };
+    return {
+      wardId,
+      wardName: ward.name,
+      generatedAt: now.toISOString(),
+      shift,
+      rows: boardRows(orders, inputs, wardPolicy(ward), shift, now),
+    };
   }
 
   private inputs(ids: number[], wardId: number, shift: { shift: string; shiftDate: string }, now: Date): BoardInputs {
@@ -59,12 +70,30 @@ export class BaselineBoard {
     const list = (name: ListQuery) => this.statement(`${name}:${n}`, SQL[name](n));
     return {
       observations: (list('observations').all(...ids, readFrom) as Reading[]).map((row) => ({ ...row, at: date(row.at) })),
-      latest: (list('latest').all(...ids) as Row[]).map((row) => ({ ...row, at: date(row.at as string) })) as unknown as BoardInputs['latest'],
-      flags: (list('flags').all(...ids) as Row[]).map((row) => ({ ...row, raisedAt: date(row.raisedAt as string), acknowledgedAt: row.acknowledgedAt === null ? null : date(row.acknowledgedAt as string) })) as unknown as BoardInputs['flags'],
+      latest: (list('latest').all(...ids) as Row[]).map((row) => ({
+        ...row,
+        at: date(row.at as string),
+      })) as unknown as BoardInputs['latest'],
+      flags: (list('flags').all(...ids) as Row[]).map((row) => ({
+        ...row,
+        raisedAt: date(row.raisedAt as string),
+        acknowledgedAt: row.acknowledgedAt === null ? null : date(row.acknowledgedAt as string),
+      })) as unknown as BoardInputs['flags'],
       releases: list('releases').all(...ids) as unknown as BoardInputs['releases'],
-      starts: (list('starts').all(...ids) as Row[]).map((row) => ({ ...row, firstAt: date(row.firstAt as string), secondAt: row.secondAt === null ? null : date(row.secondAt as string) })) as unknown as BoardInputs['starts'],
-      boluses: (list('boluses').all(...ids, since) as Row[]).map((row) => ({ ...row, at: date(row.at as string) })) as unknown as BoardInputs['boluses'],
-      discrepancies: (list('discrepancies').all(...ids) as Row[]).map((row) => ({ id: row.id, at: date(row.at as string), release: { orderId: row.orderId } })) as unknown as BoardInputs['discrepancies'],
+      starts: (list('starts').all(...ids) as Row[]).map((row) => ({
+        ...row,
+        firstAt: date(row.firstAt as string),
+        secondAt: row.secondAt === null ? null : date(row.secondAt as string),
+      })) as unknown as BoardInputs['starts'],
+      boluses: (list('boluses').all(...ids, since) as Row[]).map((row) => ({
+        ...row,
+        at: date(row.at as string),
+      })) as unknown as BoardInputs['boluses'],
+      discrepancies: (list('discrepancies').all(...ids) as Row[]).map((row) => ({
+        id: row.id,
+        at: date(row.at as string),
+        release: { orderId: row.orderId },
+      })) as unknown as BoardInputs['discrepancies'],
       signoffs: (this.statement('signoffs', SQL.signoffs).all(wardId, shift.shiftDate, shift.shift) as Row[]).map((row) => ({
         ...row,
         at: date(row.at as string),
@@ -90,7 +119,14 @@ function toOrder(row: Row): PcaOrder {
     signedAt: date(row.signedAt as string),
     statusChangedAt: date(row.statusChangedAt as string),
     startedAt: row.startedAt === null ? null : date(row.startedAt as string),
-    patient: { bed: row.bed, familyName: row.familyName, givenName: row.givenName, mrn: row.mrn, dateOfBirth: row.dateOfBirth, weightKg: row.weightKg },
+    patient: {
+      bed: row.bed,
+      familyName: row.familyName,
+      givenName: row.givenName,
+      mrn: row.mrn,
+      dateOfBirth: row.dateOfBirth,
+      weightKg: row.weightKg,
+    },
     drug: { genericName: row.genericName },
   } as unknown as PcaOrder;
 }

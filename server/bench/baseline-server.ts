@@ -18,7 +18,9 @@ const server = createServer((req, res) => {
   if (req.method === 'GET' && match) {
     const board = boards.board(Number(match[1]));
     const body = board ? JSON.stringify(board) : JSON.stringify({ statusCode: 404, message: 'No such ward' });
-    res.writeHead(board ? 200 : 404, { 'Content-Type': 'application/json; charset=utf-8', 'Content-Length': Buffer.byteLength(body) }).end(body);
+    res
+      .writeHead(board ? 200 : 404, { 'Content-Type': 'application/json; charset=utf-8', 'Content-Length': Buffer.byteLength(body) })
+      .end(body);
   } else if (req.url === '/api/health') {
     res.writeHead(200, { 'Content-Type': 'application/json' }).end('{"status":"ok"}');
   } else {

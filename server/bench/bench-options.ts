@@ -19,7 +19,19 @@ export type BenchOptions = {
   doc: string | null;
 };
 
-const DEFAULTS: BenchOptions = { seconds: 10, connections: 50, warmupSeconds: 3, wards: 30, beds: 1000, active: 300, days: 30, factor: 10, seed: true, renderRuns: 5, doc: 'docs/performance.md' };
+const DEFAULTS: BenchOptions = {
+  seconds: 10,
+  connections: 50,
+  warmupSeconds: 3,
+  wards: 30,
+  beds: 1000,
+  active: 300,
+  days: 30,
+  factor: 10,
+  seed: true,
+  renderRuns: 5,
+  doc: 'docs/performance.md',
+};
 
 /** `npm run bench -- --seconds 2 --connections 10 --no-write` and so on; defaults are the issue's. */
 export function parseBenchOptions(argv: string[]): BenchOptions {

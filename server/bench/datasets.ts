@@ -27,7 +27,19 @@ export function datasetSizes(options: BenchOptions): { full: DatasetSize; small:
 /** Writes a dataset with the built seed script (`npm run seed:scale`), returning its seconds. */
 export async function writeDataset(size: DatasetSize, file: string): Promise<number> {
   const script = path.join(SERVER_ROOT, 'dist', 'database', 'scale', 'scale-seed.js');
-  const args = [script, '--wards', String(size.wards), '--beds', String(size.beds), '--active', String(size.active), '--days', String(size.days), '--out', file];
+  const args = [
+    script,
+    '--wards',
+    String(size.wards),
+    '--beds',
+    String(size.beds),
+    '--active',
+    String(size.active),
+    '--days',
+    String(size.days),
+    '--out',
+    file,
+  ];
   const started = performance.now();
   await new Promise<void>((resolve, reject) => {
     const child = spawn(process.execPath, args, { cwd: SERVER_ROOT, stdio: ['ignore', 'inherit', 'inherit'] });
@@ -46,7 +58,12 @@ export function readFacts(file: string): DatasetFacts {
          WHERE o.status IN ('awaiting_verification', 'verified', 'active') GROUP BY w.id ORDER BY boardRows DESC, w.id LIMIT 1`,
       )
       .get() as DatasetFacts['busyWard'];
-    const busyWardActiveOrderIds = (db.prepare(`SELECT o.id FROM pca_orders o JOIN patients p ON p.id = o.patientId WHERE o.status = 'active' AND p.wardId = ? ORDER BY o.id`).pluck().all(busyWard.id)) as number[];
+    const busyWardActiveOrderIds = db
+      .prepare(
+        `SELECT o.id FROM pca_orders o JOIN patients p ON p.id = o.patientId WHERE o.status = 'active' AND p.wardId = ? ORDER BY o.id`,
+      )
+      .pluck()
+      .all(busyWard.id) as number[];
     const activeOrders = db
       .prepare(
         `SELECT o.id AS orderId, r.volumeMl AS syringeMl, coalesce(ob.attempts, 0) AS attempts, coalesce(ob.delivered, 0) AS delivered, coalesce(ob.volumeInfusedMl, 0) AS volumeInfusedMl
@@ -56,7 +73,9 @@ export function readFacts(file: string): DatasetFacts {
       )
       .all() as ActiveOrder[];
     const counts = db
-      .prepare(`SELECT (SELECT count(*) FROM wards) AS wards, (SELECT count(*) FROM patients) AS patients, (SELECT count(*) FROM pca_orders) AS orders, (SELECT count(*) FROM observations) AS observations`)
+      .prepare(
+        `SELECT (SELECT count(*) FROM wards) AS wards, (SELECT count(*) FROM patients) AS patients, (SELECT count(*) FROM pca_orders) AS orders, (SELECT count(*) FROM observations) AS observations`,
+      )
       .get() as DatasetFacts['counts'];
     return { busyWard, busyWardActiveOrderIds, activeOrders, counts };
   } finally {

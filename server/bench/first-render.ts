@@ -6,13 +6,26 @@ import { median } from './stats.js';
 export type FirstRender = { firstMs: number; repeatMedianMs: number; repeatMs: number[] } | { error: string };
 
 /** Installs chromium when it may (client/e2e/ensure-chromium.mjs), then times the board in it. */
-export async function measureFirstRender(baseUrl: string, wardId: number, rows: number, runs: number, username: string): Promise<FirstRender> {
+export async function measureFirstRender(
+  baseUrl: string,
+  wardId: number,
+  rows: number,
+  runs: number,
+  username: string,
+): Promise<FirstRender> {
   const ensured = await run([path.join(REPO_ROOT, 'client', 'e2e', 'ensure-chromium.mjs')]);
   if (ensured.code !== 0) return { error: 'no chromium (see node client/e2e/ensure-chromium.mjs)' };
   let result: FirstRender = { error: 'not run' };
   // Once more on failure: on a busy machine one opening can miss the browser's timeout.
   for (let attempt = 0; attempt < 2 && 'error' in result; attempt++) {
-    const measured = await run([path.join(REPO_ROOT, 'client', 'bench', 'first-render.mjs'), baseUrl, String(wardId), String(rows), String(runs), username]);
+    const measured = await run([
+      path.join(REPO_ROOT, 'client', 'bench', 'first-render.mjs'),
+      baseUrl,
+      String(wardId),
+      String(rows),
+      String(runs),
+      username,
+    ]);
     result = parse(measured.stdout, measured.code);
   }
   return result;

@@ -46,10 +46,18 @@ export async function runLoad(spec: LoadSpec): Promise<LoadResult> {
   };
   let connections = 0;
   const requestsFor = spec.requestsFor;
-  const setupClient = requestsFor ? (client: Client) => client.setRequests(requestsFor(connections++).map((request) => ({ ...request, onResponse }))) : undefined;
+  const setupClient = requestsFor
+    ? (client: Client) => client.setRequests(requestsFor(connections++).map((request) => ({ ...request, onResponse })))
+    : undefined;
   const started = performance.now();
   const result = await new Promise<Result>((resolve, reject) => {
-    const options = { url: spec.baseUrl, connections: spec.connections, duration: spec.seconds, requests: [{ ...spec.request, onResponse }], setupClient };
+    const options = {
+      url: spec.baseUrl,
+      connections: spec.connections,
+      duration: spec.seconds,
+      requests: [{ ...spec.request, onResponse }],
+      setupClient,
+    };
     const instance = autocannon(options, (error: unknown, done: Result) => (error ? reject(error) : resolve(done)));
     instance.on('response', (_client: Client, _status: number, _bytes: number, responseTime: number) => latencies.push(responseTime));
   });

@@ -5,7 +5,11 @@ import { BaselineBoard } from './baseline-board.js';
 
 /** Signs in once (sign-in is rate-limited per address) and returns the bearer token. */
 export async function signIn(baseUrl: string, username: string): Promise<string> {
-  const response = await fetch(`${baseUrl}/api/auth/login`, { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ username, password: 'lockstep-demo' }) });
+  const response = await fetch(`${baseUrl}/api/auth/login`, {
+    method: 'POST',
+    headers: { 'content-type': 'application/json' },
+    body: JSON.stringify({ username, password: 'lockstep-demo' }),
+  });
   if (!response.ok) throw new Error(`Sign-in as ${username} answered ${response.status}: ${await response.text()}`);
   return ((await response.json()) as { accessToken: string }).accessToken;
 }

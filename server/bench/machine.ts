@@ -15,6 +15,9 @@ export function describeMachine(): Machine {
     os: `${os.type()} ${os.release()} (${os.arch()})`,
     node: process.version,
     sqlite,
-    loadAverage: os.loadavg().map((load) => load.toFixed(1)).join(', '),
+    loadAverage: os
+      .loadavg()
+      .map((load) => load.toFixed(1))
+      .join(', '),
   };
 }

@@ -6,7 +6,11 @@ import type { ActiveOrder } from './datasets.js';
  * order's writes never race each other and its pump totals always go up, as the API demands.
  * Every body is a valid, unremarkable observation (no flag raised by its values).
  */
-export function observationRequests(orders: readonly ActiveOrder[], connections: number, authorization: string): (connection: number) => Request[] {
+export function observationRequests(
+  orders: readonly ActiveOrder[],
+  connections: number,
+  authorization: string,
+): (connection: number) => Request[] {
   const state = orders.map((order) => ({ ...order }));
   return (connection) => {
     const mine = state.filter((_, index) => index % connections === connection);

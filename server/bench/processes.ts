@@ -26,7 +26,9 @@ export function startLockstep(databasePath: string, name: string): Promise<Runni
 
 /** The bare node:http + better-sqlite3 board server (baseline-server.ts). */
 export function startBaseline(databasePath: string): Promise<RunningServer> {
-  return start('baseline', path.join(SERVER_ROOT, 'dist-bench', 'bench', 'baseline-server.js'), [databasePath], (port) => ({ PORT: String(port) }));
+  return start('baseline', path.join(SERVER_ROOT, 'dist-bench', 'bench', 'baseline-server.js'), [databasePath], (port) => ({
+    PORT: String(port),
+  }));
 }
 
 async function start(name: string, script: string, args: string[], env: (port: number) => Record<string, string>): Promise<RunningServer> {
@@ -34,7 +36,11 @@ async function start(name: string, script: string, args: string[], env: (port: n
   mkdirSync(logDirectory, { recursive: true });
   const logFile = path.join(logDirectory, `${name}.log`);
   const log = openSync(logFile, 'w');
-  const child = spawn(process.execPath, [script, ...args], { cwd: SERVER_ROOT, env: { ...process.env, ...env(port) }, stdio: ['ignore', log, log] });
+  const child = spawn(process.execPath, [script, ...args], {
+    cwd: SERVER_ROOT,
+    env: { ...process.env, ...env(port) },
+    stdio: ['ignore', log, log],
+  });
   closeSync(log);
   const baseUrl = `http://127.0.0.1:${port}`;
   await waitForHealth(baseUrl, child, logFile);

@@ -33,7 +33,11 @@ export function verdicts(report: BenchReport): Verdict[] {
   return [
     { target: `board p95 server time ≤ 10 ms at ${c} connections`, measured: `${ms(boardP95)} ms`, holds: boardP95 <= 10 },
     { target: 'board throughput ≥ 50 % of the baseline', measured: `${(share * 100).toFixed(0)} %`, holds: share >= 0.5 },
-    { target: `board time on ${report.options.factor}× the data ≤ 1.3× (median server time)`, measured: `${growth.toFixed(2)}×`, holds: growth <= 1.3 },
+    {
+      target: `board time on ${report.options.factor}× the data ≤ 1.3× (median server time)`,
+      measured: `${growth.toFixed(2)}×`,
+      holds: growth <= 1.3,
+    },
     { target: 'observation write p95 ≤ 20 ms (server time)', measured: `${ms(writeP95)} ms`, holds: writeP95 <= 20 },
   ];
 }
@@ -57,13 +61,19 @@ export function renderReport(report: BenchReport): string {
     '',
     '| dataset | wards | beds | active PCAs | patients | orders | observations | written in |',
     '|---|---:|---:|---:|---:|---:|---:|---:|',
-    ...[full, small].map((d) => `| ${d.label} | ${d.facts.counts.wards} | ${d.beds} | ${d.facts.activeOrders.length} | ${d.facts.counts.patients.toLocaleString('en-GB')} | ${d.facts.counts.orders.toLocaleString('en-GB')} | ${d.facts.counts.observations.toLocaleString('en-GB')} | ${d.seedSeconds === null ? 'reused' : `${d.seedSeconds.toFixed(1)} s`} |`),
+    ...[full, small].map(
+      (d) =>
+        `| ${d.label} | ${d.facts.counts.wards} | ${d.beds} | ${d.facts.activeOrders.length} | ${d.facts.counts.patients.toLocaleString('en-GB')} | ${d.facts.counts.orders.toLocaleString('en-GB')} | ${d.facts.counts.observations.toLocaleString('en-GB')} | ${d.seedSeconds === null ? 'reused' : `${d.seedSeconds.toFixed(1)} s`} |`,
+    ),
     '',
     `Busy ward: ${full.facts.busyWard.name} (${full.facts.busyWard.boardRows} rows on its board in both datasets: ${small.facts.busyWard.boardRows} in the small one). The baseline's board is the same JSON as Lockstep's: ${report.sameJson ? 'yes' : 'NO'}.`,
     '',
     '| endpoint | server | data | req/s | latency p50 / p95 / p99 (ms) | server time p50 / p95 / p99 (ms) | non-2xx | errors |',
     '|---|---|---|---:|---|---|---:|---:|',
-    ...rows.map(([server, data, r]) => `| ${r.name} | ${server} | ${data} | ${r.requestsPerSecond.toFixed(0)} | ${trio(r.latency)} | ${trio(r.serverTime)} | ${r.non2xx} | ${r.errors} |`),
+    ...rows.map(
+      ([server, data, r]) =>
+        `| ${r.name} | ${server} | ${data} | ${r.requestsPerSecond.toFixed(0)} | ${trio(r.latency)} | ${trio(r.serverTime)} | ${r.non2xx} | ${r.errors} |`,
+    ),
     '',
     `Board throughput against the baseline: ${((report.lockstep.board.requestsPerSecond / report.baseline.requestsPerSecond) * 100).toFixed(0)} %. Board median server time, full over 1/${options.factor} data: ${((report.lockstep.board.serverTime?.p50 ?? Number.NaN) / (report.smallBoard.serverTime?.p50 ?? Number.NaN)).toFixed(2)}×.`,
     '',
@@ -78,7 +88,9 @@ export function renderReport(report: BenchReport): string {
   const all = [...Object.values(report.lockstep), report.baseline, report.smallBoard];
   const failures = all.flatMap((r) => [
     ...r.failures.map((failure) => `${r.name}: ${failure}`),
-    ...(r.non2xx + r.errors > 0 ? [`${r.name}: status codes ${JSON.stringify(r.statusCodes)}, ${r.errors} connection errors or timeouts`] : []),
+    ...(r.non2xx + r.errors > 0
+      ? [`${r.name}: status codes ${JSON.stringify(r.statusCodes)}, ${r.errors} connection errors or timeouts`]
+      : []),
   ]);
   if (failures.length > 0) lines.push('', 'Non-2xx answers seen:', ...failures.map((failure) => `- ${failure}`));
   return lines.join('\n');

@@ -41,14 +41,23 @@ async function main(): Promise<void> {
   let sameJson: boolean;
   let firstRender: BenchReport['firstRender'];
   try {
-    const tokens = { chargeNurse: await signIn(lockstepServer.baseUrl, 'mei.tan'), nurse: await signIn(lockstepServer.baseUrl, 'kai.mendes') };
+    const tokens = {
+      chargeNurse: await signIn(lockstepServer.baseUrl, 'mei.tan'),
+      nurse: await signIn(lockstepServer.baseUrl, 'kai.mendes'),
+    };
     const context = { baseUrl: lockstepServer.baseUrl, options, facts, tokens };
     sameJson = await sameBoardAsBaseline(lockstepServer.baseUrl, tokens.chargeNurse, facts.busyWard.id, full.file);
     const board = await measure(boardLoad(context));
     const orders = await measure(ordersLoad(context));
     const usage = await measure(usageLoad(context));
     console.log('Timing the board in headless chromium ...');
-    firstRender = await measureFirstRender(lockstepServer.baseUrl, facts.busyWard.id, facts.busyWard.boardRows, options.renderRuns, 'mei.tan');
+    firstRender = await measureFirstRender(
+      lockstepServer.baseUrl,
+      facts.busyWard.id,
+      facts.busyWard.boardRows,
+      options.renderRuns,
+      'mei.tan',
+    );
     const writes = await measure(writesLoad(context));
     lockstep = { board, orders, usage, writes };
   } finally {
@@ -58,7 +67,9 @@ async function main(): Promise<void> {
   const baselineServer = await startBaseline(full.file);
   let baseline: LoadResult;
   try {
-    baseline = await measure(boardLoad({ baseUrl: baselineServer.baseUrl, options, facts, tokens: { chargeNurse: '', nurse: '' } }, 'board'));
+    baseline = await measure(
+      boardLoad({ baseUrl: baselineServer.baseUrl, options, facts, tokens: { chargeNurse: '', nurse: '' } }, 'board'),
+    );
   } finally {
     await baselineServer.stop();
   }
@@ -67,12 +78,25 @@ async function main(): Promise<void> {
   let smallBoard: LoadResult;
   try {
     const token = await signIn(smallServer.baseUrl, 'mei.tan');
-    smallBoard = await measure(boardLoad({ baseUrl: smallServer.baseUrl, options, facts: smallFacts, tokens: { chargeNurse: token, nurse: token } }, 'board'));
+    smallBoard = await measure(
+      boardLoad({ baseUrl: smallServer.baseUrl, options, facts: smallFacts, tokens: { chargeNurse: token, nurse: token } }, 'board'),
+    );
   } finally {
     await smallServer.stop();
   }
 
-  const report: BenchReport = { startedAt, machine, options, full: { ...full, facts }, small: { ...small, facts: smallFacts }, sameJson, lockstep, baseline, smallBoard, firstRender };
+  const report: BenchReport = {
+    startedAt,
+    machine,
+    options,
+    full: { ...full, facts },
+    small: { ...small, facts: smallFacts },
+    sameJson,
+    lockstep,
+    baseline,
+    smallBoard,
+    firstRender,
+  };
   const markdown = renderReport(report);
   console.log(`\n${markdown}\n`);
   if (options.doc) {

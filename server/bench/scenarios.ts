@@ -11,13 +11,25 @@ const bearer = (token: string) => ({ authorization: `Bearer ${token}` });
 
 /** The charge nurse's handover board of the busiest ward. */
 export function boardLoad({ baseUrl, options, facts, tokens }: Context, name = 'board'): LoadSpec {
-  return { name, baseUrl, connections: options.connections, seconds: options.seconds, request: { method: 'GET', path: `/api/wards/${facts.busyWard.id}/handover`, headers: bearer(tokens.chargeNurse) } };
+  return {
+    name,
+    baseUrl,
+    connections: options.connections,
+    seconds: options.seconds,
+    request: { method: 'GET', path: `/api/wards/${facts.busyWard.id}/handover`, headers: bearer(tokens.chargeNurse) },
+  };
 }
 
 /** The bedside list of that ward: orders waiting for a bedside check and running ones. */
 export function ordersLoad({ baseUrl, options, facts, tokens }: Context): LoadSpec {
   const path = `/api/orders?wardId=${facts.busyWard.id}&status=verified,active`;
-  return { name: 'orders list', baseUrl, connections: options.connections, seconds: options.seconds, request: { method: 'GET', path, headers: bearer(tokens.nurse) } };
+  return {
+    name: 'orders list',
+    baseUrl,
+    connections: options.connections,
+    seconds: options.seconds,
+    request: { method: 'GET', path, headers: bearer(tokens.nurse) },
+  };
 }
 
 /** The 24-hour usage of each running PCA on that ward in turn. */
@@ -29,7 +41,12 @@ export function usageLoad({ baseUrl, options, facts, tokens }: Context): LoadSpe
     baseUrl,
     connections: options.connections,
     seconds: options.seconds,
-    request: { method: 'GET', path: `/api/orders/${ids[0]}/usage?hours=24`, headers: bearer(tokens.nurse), setupRequest: (request) => ({ ...request, path: `/api/orders/${ids[next++ % ids.length]}/usage?hours=24` }) },
+    request: {
+      method: 'GET',
+      path: `/api/orders/${ids[0]}/usage?hours=24`,
+      headers: bearer(tokens.nurse),
+      setupRequest: (request) => ({ ...request, path: `/api/orders/${ids[next++ % ids.length]}/usage?hours=24` }),
+    },
   };
 }
 

@@ -13,5 +13,8 @@ export function percentiles(values: readonly number[]): Percentiles {
 }
 
 export function median(values: readonly number[]): number {
-  return percentile([...values].sort((a, b) => a - b), 50);
+  return percentile(
+    [...values].sort((a, b) => a - b),
+    50,
+  );
 }

@@ -48,8 +48,20 @@ export const ACCESS_MATRIX: MatrixRow[] = [
   { method: 'GET', path: '/api/auth/demo-accounts', url: '/api/auth/demo-accounts', access: 'public', ok: 200 },
   { method: 'GET', path: '/api/auth/lockouts', url: '/api/auth/lockouts', access: ['admin'], ok: 200 },
   // Nothing is locked in a fresh app, so an admin's unlock finds nothing (404) and changes nothing.
-  { method: 'DELETE', path: '/api/auth/lockouts/usernames/:username', url: '/api/auth/lockouts/usernames/kai.mendes', access: ['admin'], ok: 404 },
-  { method: 'DELETE', path: '/api/auth/lockouts/addresses/:address', url: '/api/auth/lockouts/addresses/192.0.2.1', access: ['admin'], ok: 404 },
+  {
+    method: 'DELETE',
+    path: '/api/auth/lockouts/usernames/:username',
+    url: '/api/auth/lockouts/usernames/kai.mendes',
+    access: ['admin'],
+    ok: 404,
+  },
+  {
+    method: 'DELETE',
+    path: '/api/auth/lockouts/addresses/:address',
+    url: '/api/auth/lockouts/addresses/192.0.2.1',
+    access: ['admin'],
+    ok: 404,
+  },
 
   { method: 'GET', path: '/api/users', url: '/api/users', access: ['admin'], ok: 200 },
   { method: 'POST', path: '/api/users', url: '/api/users', access: ['admin'], ok: 400, body: EMPTY },
@@ -69,10 +81,31 @@ export const ACCESS_MATRIX: MatrixRow[] = [
   { method: 'GET', path: '/api/library/versions/:id/diff', url: '/api/library/versions/5/diff', access: 'signed-in', ok: 200 },
   { method: 'GET', path: '/api/library/versions/:id/export', url: '/api/library/versions/1/export', access: 'signed-in', ok: 200 },
   { method: 'POST', path: '/api/library/versions', url: '/api/library/versions', access: ['pharmacist'], ok: 400, body: EMPTY },
-  { method: 'PUT', path: '/api/library/versions/:id/rules', url: '/api/library/versions/5/rules', access: ['pharmacist'], ok: 400, body: EMPTY },
-  { method: 'POST', path: '/api/library/versions/:id/submit', url: '/api/library/versions/1/submit', access: ['pharmacist'], ok: 400, body: UNKNOWN_FIELD },
+  {
+    method: 'PUT',
+    path: '/api/library/versions/:id/rules',
+    url: '/api/library/versions/5/rules',
+    access: ['pharmacist'],
+    ok: 400,
+    body: EMPTY,
+  },
+  {
+    method: 'POST',
+    path: '/api/library/versions/:id/submit',
+    url: '/api/library/versions/1/submit',
+    access: ['pharmacist'],
+    ok: 400,
+    body: UNKNOWN_FIELD,
+  },
   { method: 'POST', path: '/api/library/versions/:id/withdraw', url: '/api/library/versions/1/withdraw', access: ['pharmacist'], ok: 409 },
-  { method: 'POST', path: '/api/library/versions/:id/approve', url: '/api/library/versions/5/approve', access: ['pharmacist'], ok: 400, body: EMPTY },
+  {
+    method: 'POST',
+    path: '/api/library/versions/:id/approve',
+    url: '/api/library/versions/5/approve',
+    access: ['pharmacist'],
+    ok: 400,
+    body: EMPTY,
+  },
   { method: 'DELETE', path: '/api/library/versions/:id', url: '/api/library/versions/1', access: ['pharmacist'], ok: 409 },
   { method: 'POST', path: '/api/library/import', url: '/api/library/import', access: ['pharmacist'], ok: 400, body: EMPTY },
 
@@ -88,10 +121,31 @@ export const ACCESS_MATRIX: MatrixRow[] = [
   { method: 'GET', path: '/api/orders/:id/audit', url: '/api/orders/1/audit', access: 'signed-in', ok: 200 },
   { method: 'POST', path: '/api/orders/:orderId/releases', url: '/api/orders/2/releases', access: ['pharmacist'], ok: 400, body: EMPTY },
 
-  { method: 'POST', path: '/api/orders/:orderId/bedside-checks', url: '/api/orders/2/bedside-checks', access: NURSES, ok: 400, body: EMPTY },
-  { method: 'POST', path: '/api/orders/:orderId/bedside-checks/:checkId/second', url: '/api/orders/2/bedside-checks/1/second', access: NURSES, ok: 400, body: EMPTY },
+  {
+    method: 'POST',
+    path: '/api/orders/:orderId/bedside-checks',
+    url: '/api/orders/2/bedside-checks',
+    access: NURSES,
+    ok: 400,
+    body: EMPTY,
+  },
+  {
+    method: 'POST',
+    path: '/api/orders/:orderId/bedside-checks/:checkId/second',
+    url: '/api/orders/2/bedside-checks/1/second',
+    access: NURSES,
+    ok: 400,
+    body: EMPTY,
+  },
   { method: 'POST', path: '/api/orders/:orderId/boluses', url: '/api/orders/2/boluses', access: NURSES, ok: 400, body: EMPTY },
-  { method: 'POST', path: '/api/orders/:orderId/syringe-changes', url: '/api/orders/2/syringe-changes', access: NURSES, ok: 400, body: EMPTY },
+  {
+    method: 'POST',
+    path: '/api/orders/:orderId/syringe-changes',
+    url: '/api/orders/2/syringe-changes',
+    access: NURSES,
+    ok: 400,
+    body: EMPTY,
+  },
   { method: 'POST', path: '/api/orders/:orderId/discontinue', url: '/api/orders/2/discontinue', access: NURSES, ok: 400, body: EMPTY },
   { method: 'POST', path: '/api/orders/:orderId/observations', url: '/api/orders/2/observations', access: NURSES, ok: 400, body: EMPTY },
   { method: 'GET', path: '/api/orders/:orderId/observations', url: '/api/orders/2/observations', access: 'signed-in', ok: 200 },
@@ -99,15 +153,41 @@ export const ACCESS_MATRIX: MatrixRow[] = [
   { method: 'POST', path: '/api/flags/:id/acknowledge', url: '/api/flags/1/acknowledge', access: CLINICAL, ok: 400, body: EMPTY },
 
   { method: 'GET', path: '/api/wards/:wardId/handover', url: '/api/wards/1/handover', access: CLINICAL, ok: 200 },
-  { method: 'GET', path: '/api/wards/:wardId/handover/stream', url: '/api/wards/1/handover/stream', access: CLINICAL, ok: 200, stream: true },
+  {
+    method: 'GET',
+    path: '/api/wards/:wardId/handover/stream',
+    url: '/api/wards/1/handover/stream',
+    access: CLINICAL,
+    ok: 200,
+    stream: true,
+  },
   { method: 'GET', path: '/api/wards/:wardId/handover/signoffs', url: '/api/wards/1/handover/signoffs', access: CLINICAL, ok: 200 },
-  { method: 'POST', path: '/api/wards/:wardId/handover/signoffs', url: '/api/wards/1/handover/signoffs', access: NURSES, ok: 400, body: EMPTY },
+  {
+    method: 'POST',
+    path: '/api/wards/:wardId/handover/signoffs',
+    url: '/api/wards/1/handover/signoffs',
+    access: NURSES,
+    ok: 400,
+    body: EMPTY,
+  },
 
   { method: 'GET', path: '/api/audit', url: '/api/audit', access: ['admin', 'pharmacist'], ok: 200 },
   { method: 'GET', path: '/api/audit/verify', url: '/api/audit/verify', access: ['admin'], ok: 200 },
 
-  { method: 'GET', path: '/api/fhir/MedicationRequest/:orderId', url: '/api/fhir/MedicationRequest/1', access: [...CLINICAL, 'admin'], ok: 200 },
-  { method: 'GET', path: '/api/fhir/Patient/:id/pca-bundle', url: '/api/fhir/Patient/1/pca-bundle', access: [...CLINICAL, 'admin'], ok: 200 },
+  {
+    method: 'GET',
+    path: '/api/fhir/MedicationRequest/:orderId',
+    url: '/api/fhir/MedicationRequest/1',
+    access: [...CLINICAL, 'admin'],
+    ok: 200,
+  },
+  {
+    method: 'GET',
+    path: '/api/fhir/Patient/:id/pca-bundle',
+    url: '/api/fhir/Patient/1/pca-bundle',
+    access: [...CLINICAL, 'admin'],
+    ok: 200,
+  },
 
   // The OpenAPI documentation: SwaggerModule's own routes, public (docs/security.md). It registers
   // the UI page under several names, its start script twice, and refuses its LICENSE file (404).
@@ -150,12 +230,18 @@ describe('access matrix: every route × every role and anonymous', () => {
 
   it('lists every route the app serves', () => {
     const listed = new Set(tableKeys());
-    expect(apiRoutes().filter((key) => !listed.has(key)), 'routes missing from ACCESS_MATRIX').toEqual([]);
+    expect(
+      apiRoutes().filter((key) => !listed.has(key)),
+      'routes missing from ACCESS_MATRIX',
+    ).toEqual([]);
   });
 
   it('lists no route that the app no longer serves, and each route once', () => {
     const served = new Set(apiRoutes());
-    expect(tableKeys().filter((key) => !served.has(key)), 'ACCESS_MATRIX rows for routes that do not exist').toEqual([]);
+    expect(
+      tableKeys().filter((key) => !served.has(key)),
+      'ACCESS_MATRIX rows for routes that do not exist',
+    ).toEqual([]);
     expect(new Set(tableKeys()).size).toBe(ACCESS_MATRIX.length);
   });
 
@@ -163,7 +249,10 @@ describe('access matrix: every route × every role and anonymous', () => {
     const token = caller === 'anonymous' ? undefined : row.endsSession ? await t.tokenFor(DEMO_USER_BY_ROLE[caller]) : tokens[caller];
     if (!row.stream) return (await api.call(row.method, row.url, { token, body: row.body })).status;
     const abort = new AbortController();
-    const response = await fetch(`${api.baseUrl}${row.url}`, { headers: token ? { Authorization: `Bearer ${token}` } : {}, signal: abort.signal });
+    const response = await fetch(`${api.baseUrl}${row.url}`, {
+      headers: token ? { Authorization: `Bearer ${token}` } : {},
+      signal: abort.signal,
+    });
     if (response.status === 200) expect(response.headers.get('content-type')).toContain('text/event-stream');
     abort.abort();
     return response.status;

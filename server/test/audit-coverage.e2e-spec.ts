@@ -8,7 +8,11 @@ import { createTestApp, DEMO_PASSWORD, DEMO_USER_BY_ROLE, type TestApp } from '.
 /** Writes that change nothing: signing in, and the order check a prescriber runs while typing. */
 const NOT_STATE_CHANGING = new Set(['POST /api/auth/login', 'POST /api/orders/preview']);
 const WRITE_METHODS = new Set(['POST', 'PUT', 'PATCH', 'DELETE']);
-const CSV = ['drug,concentration_per_ml,dose_unit,per_kg,parameter,hard_min,soft_min,soft_max,hard_max', 'morphine,1,mg,no,demand_dose,0.2,0.5,1.8,3', 'morphine,1,mg,no,lockout_minutes,5,6,15,30'].join('\n');
+const CSV = [
+  'drug,concentration_per_ml,dose_unit,per_kg,parameter,hard_min,soft_min,soft_max,hard_max',
+  'morphine,1,mg,no,demand_dose,0.2,0.5,1.8,3',
+  'morphine,1,mg,no,lockout_minutes,5,6,15,30',
+].join('\n');
 
 /**
  * Every state-changing route, called for real once, must leave exactly the audit event it owes;
@@ -26,10 +30,20 @@ describe('every state-changing route writes its audit event', () => {
   });
   afterAll(() => t.close());
 
-  const latestEvent = async () => ((await request(t.http).get('/api/audit?limit=1').set('Authorization', `Bearer ${tokens.admin}`).expect(200)).body as AuditPage).events[0];
+  const latestEvent = async () =>
+    ((await request(t.http).get('/api/audit?limit=1').set('Authorization', `Bearer ${tokens.admin}`).expect(200)).body as AuditPage)
+      .events[0];
 
   /** Calls the route, checks its status, and that the newest audit event is the one expected. */
-  async function step(method: 'post' | 'put' | 'patch' | 'delete', route: string, url: string, as: string, body: object | undefined, status: number, action: AuditAction) {
+  async function step(
+    method: 'post' | 'put' | 'patch' | 'delete',
+    route: string,
+    url: string,
+    as: string,
+    body: object | undefined,
+    status: number,
+    action: AuditAction,
+  ) {
     const before = await latestEvent();
     const response = await request(t.http)[method](url).set('Authorization', `Bearer ${tokens[as]}`).send(body);
     expect(response.status, `${method} ${url}: ${JSON.stringify(response.body)}`).toBe(status);
@@ -41,44 +55,184 @@ describe('every state-changing route writes its audit event', () => {
   }
 
   it('walks every write route of the app', async () => {
-    const user = await step('post', '/api/users', '/api/users', 'admin', { username: 'ada.voss', displayName: 'Ada Voss', role: 'nurse', wardIds: [1], password: 'a-long-password-1' }, 201, 'user.create');
+    const user = await step(
+      'post',
+      '/api/users',
+      '/api/users',
+      'admin',
+      { username: 'ada.voss', displayName: 'Ada Voss', role: 'nurse', wardIds: [1], password: 'a-long-password-1' },
+      201,
+      'user.create',
+    );
     await step('patch', '/api/users/:id', `/api/users/${user.id}`, 'admin', { displayName: 'Ada Voss-Lee' }, 200, 'user.update');
-    await step('patch', '/api/wards/:id/policy', '/api/wards/1/policy', 'admin', { respiratoryRateThreshold: 9 }, 200, 'ward.policy-update');
+    await step(
+      'patch',
+      '/api/wards/:id/policy',
+      '/api/wards/1/policy',
+      'admin',
+      { respiratoryRateThreshold: 9 },
+      200,
+      'ward.policy-update',
+    );
 
     // One order from signature to a second syringe.
     const order = await step('post', '/api/orders', '/api/orders', 'prescriber', ORDER, 201, 'order.create');
     const base = `/api/orders/${order.id}`;
-    await step('post', '/api/orders/:id/verify', `${base}/verify`, 'pharmacist', { signature: { password: DEMO_PASSWORD } }, 200, 'order.verify');
+    await step(
+      'post',
+      '/api/orders/:id/verify',
+      `${base}/verify`,
+      'pharmacist',
+      { signature: { password: DEMO_PASSWORD } },
+      200,
+      'order.verify',
+    );
     const first = await step('post', '/api/orders/:id/releases', `${base}/releases`, 'pharmacist', RELEASE, 201, 'order.release');
-    const check = await step('post', '/api/orders/:id/bedside-checks', `${base}/bedside-checks`, 'nurse', { ...IDENTITY, releaseCode: first.releaseCode, settings: SETTINGS }, 201, 'order.bedside-first-check');
-    await step('post', '/api/orders/:id/bedside-checks/:id/second', `${base}/bedside-checks/${check.id}/second`, 'nurse', { ...ROSA, settings: SETTINGS }, 200, 'order.bedside-second-check');
+    const check = await step(
+      'post',
+      '/api/orders/:id/bedside-checks',
+      `${base}/bedside-checks`,
+      'nurse',
+      { ...IDENTITY, releaseCode: first.releaseCode, settings: SETTINGS },
+      201,
+      'order.bedside-first-check',
+    );
+    await step(
+      'post',
+      '/api/orders/:id/bedside-checks/:id/second',
+      `${base}/bedside-checks/${check.id}/second`,
+      'nurse',
+      { ...ROSA, settings: SETTINGS },
+      200,
+      'order.bedside-second-check',
+    );
     const observation = await step(
       'post',
       '/api/orders/:id/observations',
       `${base}/observations`,
       'nurse',
-      { painScore: 3, sedationLevel: '3', respiratoryRate: 12, spo2: 96, attempts: 2, delivered: 2, volumeInfusedMl: 2, syringeRemainingMl: 48 },
+      {
+        painScore: 3,
+        sedationLevel: '3',
+        respiratoryRate: 12,
+        spo2: 96,
+        attempts: 2,
+        delivered: 2,
+        volumeInfusedMl: 2,
+        syringeRemainingMl: 48,
+      },
       201,
       'order.observation',
     );
-    await step('post', '/api/flags/:id/acknowledge', `/api/flags/${observation.flags[0].id}/acknowledge`, 'nurse', { note: 'PCA paused, prescriber called' }, 200, 'order.flag-acknowledge');
-    await step('post', '/api/orders/:id/boluses', `${base}/boluses`, 'nurse', { amount: 1, reason: 'Breakthrough pain on coughing', witness: ROSA }, 201, 'order.bolus');
-    const { body: wardPatient } = await request(t.http).get(`/api/patients/${ORDER.patientId}`).set('Authorization', `Bearer ${tokens.nurse}`).expect(200);
-    await step('post', '/api/wards/:id/handover/signoffs', `/api/wards/${wardPatient.wardId}/handover/signoffs`, 'nurse', { orderId: order.id, role: 'outgoing' }, 201, 'order.handover-signoff');
+    await step(
+      'post',
+      '/api/flags/:id/acknowledge',
+      `/api/flags/${observation.flags[0].id}/acknowledge`,
+      'nurse',
+      { note: 'PCA paused, prescriber called' },
+      200,
+      'order.flag-acknowledge',
+    );
+    await step(
+      'post',
+      '/api/orders/:id/boluses',
+      `${base}/boluses`,
+      'nurse',
+      { amount: 1, reason: 'Breakthrough pain on coughing', witness: ROSA },
+      201,
+      'order.bolus',
+    );
+    const { body: wardPatient } = await request(t.http)
+      .get(`/api/patients/${ORDER.patientId}`)
+      .set('Authorization', `Bearer ${tokens.nurse}`)
+      .expect(200);
+    await step(
+      'post',
+      '/api/wards/:id/handover/signoffs',
+      `/api/wards/${wardPatient.wardId}/handover/signoffs`,
+      'nurse',
+      { orderId: order.id, role: 'outgoing' },
+      201,
+      'order.handover-signoff',
+    );
     const second = await step('post', '/api/orders/:id/releases', `${base}/releases`, 'pharmacist', RELEASE, 201, 'order.release');
-    await step('post', '/api/orders/:id/syringe-changes', `${base}/syringe-changes`, 'nurse', { volumeInfusedMl: 46, wastedMl: 4, newReleaseCode: second.releaseCode, witness: ROSA }, 201, 'order.syringe-change');
+    await step(
+      'post',
+      '/api/orders/:id/syringe-changes',
+      `${base}/syringe-changes`,
+      'nurse',
+      { volumeInfusedMl: 46, wastedMl: 4, newReleaseCode: second.releaseCode, witness: ROSA },
+      201,
+      'order.syringe-change',
+    );
 
-    const recheck = await step('post', '/api/orders/:id/bedside-checks', `${base}/bedside-checks`, 'nurse', { ...IDENTITY, releaseCode: second.releaseCode, settings: SETTINGS }, 201, 'order.bedside-first-check');
-    await step('post', '/api/orders/:id/bedside-checks/:id/second', `${base}/bedside-checks/${recheck.id}/second`, 'nurse', { ...ROSA, settings: SETTINGS }, 200, 'order.bedside-second-check');
-    await step('post', '/api/orders/:id/discontinue', `${base}/discontinue`, 'nurse', { reason: 'Pain controlled on oral analgesia', volumeInfusedMl: 10, wastedMl: 40, witness: ROSA }, 200, 'order.discontinue');
+    const recheck = await step(
+      'post',
+      '/api/orders/:id/bedside-checks',
+      `${base}/bedside-checks`,
+      'nurse',
+      { ...IDENTITY, releaseCode: second.releaseCode, settings: SETTINGS },
+      201,
+      'order.bedside-first-check',
+    );
+    await step(
+      'post',
+      '/api/orders/:id/bedside-checks/:id/second',
+      `${base}/bedside-checks/${recheck.id}/second`,
+      'nurse',
+      { ...ROSA, settings: SETTINGS },
+      200,
+      'order.bedside-second-check',
+    );
+    await step(
+      'post',
+      '/api/orders/:id/discontinue',
+      `${base}/discontinue`,
+      'nurse',
+      { reason: 'Pain controlled on oral analgesia', volumeInfusedMl: 10, wastedMl: 40, witness: ROSA },
+      200,
+      'order.discontinue',
+    );
 
     const queried = await step('post', '/api/orders', '/api/orders', 'prescriber', { ...ORDER, patientId: 3 }, 201, 'order.create');
-    await step('post', '/api/orders/:id/return', `/api/orders/${queried.id}/return`, 'pharmacist', { reason: 'Please confirm the 4-hour limit' }, 200, 'order.return');
-    await step('post', '/api/orders/:id/revise', `/api/orders/${queried.id}/revise`, 'prescriber', { ...ORDER, patientId: 3, fourHourLimit: 25 }, 201, 'order.revise');
+    await step(
+      'post',
+      '/api/orders/:id/return',
+      `/api/orders/${queried.id}/return`,
+      'pharmacist',
+      { reason: 'Please confirm the 4-hour limit' },
+      200,
+      'order.return',
+    );
+    await step(
+      'post',
+      '/api/orders/:id/revise',
+      `/api/orders/${queried.id}/revise`,
+      'prescriber',
+      { ...ORDER, patientId: 3, fourHourLimit: 25 },
+      201,
+      'order.revise',
+    );
     const refused = await step('post', '/api/orders', '/api/orders', 'prescriber', { ...ORDER, patientId: 4 }, 201, 'order.create');
-    await step('post', '/api/orders/:id/reject', `/api/orders/${refused.id}/reject`, 'pharmacist', { reason: 'Patient is not for a PCA' }, 200, 'order.reject');
+    await step(
+      'post',
+      '/api/orders/:id/reject',
+      `/api/orders/${refused.id}/reject`,
+      'pharmacist',
+      { reason: 'Patient is not for a PCA' },
+      200,
+      'order.reject',
+    );
     const unwanted = await step('post', '/api/orders', '/api/orders', 'prescriber', { ...ORDER, patientId: 5 }, 201, 'order.create');
-    await step('post', '/api/orders/:id/cancel', `/api/orders/${unwanted.id}/cancel`, 'prescriber', { reason: 'Written for the wrong bed' }, 200, 'order.cancel');
+    await step(
+      'post',
+      '/api/orders/:id/cancel',
+      `/api/orders/${unwanted.id}/cancel`,
+      'prescriber',
+      { reason: 'Written for the wrong bed' },
+      200,
+      'order.cancel',
+    );
 
     // The library: import a draft, edit, submit, withdraw, resubmit, approve; create and discard another.
     const beforeImport = await latestEvent();
@@ -93,26 +247,93 @@ describe('every state-changing route writes its audit event', () => {
     expect(importEvent.action).toBe('library-version.import');
     exercised.add(routeKey('post', '/api/library/import'));
     const version = `/api/library/versions/${imported.body.id}`;
-    const rules = imported.body.rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }: Record<string, unknown>) => ({ drugId, concentrationPerMl, doseUnit, perKg, limits }));
+    const rules = imported.body.rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }: Record<string, unknown>) => ({
+      drugId,
+      concentrationPerMl,
+      doseUnit,
+      perKg,
+      limits,
+    }));
     await step('put', '/api/library/versions/:id/rules', `${version}/rules`, 'pharmacist', { rules }, 200, 'library-version.rules-replace');
     await step('post', '/api/library/versions/:id/submit', `${version}/submit`, 'pharmacist', {}, 200, 'library-version.submit');
-    await step('post', '/api/library/versions/:id/withdraw', `${version}/withdraw`, 'pharmacist', undefined, 200, 'library-version.withdraw');
-    const { submittedAt } = await step('post', '/api/library/versions/:id/submit', `${version}/submit`, 'pharmacist', {}, 200, 'library-version.submit');
-    await step('post', '/api/library/versions/:id/approve', `${version}/approve`, 'secondPharmacist', { signature: { password: DEMO_PASSWORD }, submittedAt }, 200, 'library-version.approve');
-    const draft = await step('post', '/api/library/versions', '/api/library/versions', 'pharmacist', { wardId: 3, note: 'Trial' }, 201, 'library-version.create');
-    await step('delete', '/api/library/versions/:id', `/api/library/versions/${draft.id}`, 'pharmacist', undefined, 204, 'library-version.delete');
+    await step(
+      'post',
+      '/api/library/versions/:id/withdraw',
+      `${version}/withdraw`,
+      'pharmacist',
+      undefined,
+      200,
+      'library-version.withdraw',
+    );
+    const { submittedAt } = await step(
+      'post',
+      '/api/library/versions/:id/submit',
+      `${version}/submit`,
+      'pharmacist',
+      {},
+      200,
+      'library-version.submit',
+    );
+    await step(
+      'post',
+      '/api/library/versions/:id/approve',
+      `${version}/approve`,
+      'secondPharmacist',
+      { signature: { password: DEMO_PASSWORD }, submittedAt },
+      200,
+      'library-version.approve',
+    );
+    const draft = await step(
+      'post',
+      '/api/library/versions',
+      '/api/library/versions',
+      'pharmacist',
+      { wardId: 3, note: 'Trial' },
+      201,
+      'library-version.create',
+    );
+    await step(
+      'delete',
+      '/api/library/versions/:id',
+      `/api/library/versions/${draft.id}`,
+      'pharmacist',
+      undefined,
+      204,
+      'library-version.delete',
+    );
 
     // An admin clears the lock left by five wrong passwords.
-    for (let attempt = 0; attempt < 5; attempt++) await request(t.http).post('/api/auth/login').send({ username: 'no.such.user', password: 'not-the-password' }).expect(401);
-    await step('delete', '/api/auth/lockouts/usernames/:username', '/api/auth/lockouts/usernames/no.such.user', 'admin', undefined, 204, 'sign-in.unlock');
-    for (let attempt = 0; attempt < 5; attempt++) await request(t.http).post('/api/auth/login').send({ username: 'no.such.user', password: 'not-the-password' });
-    await step('delete', '/api/auth/lockouts/addresses/:address', '/api/auth/lockouts/addresses/127.0.0.1', 'admin', undefined, 204, 'sign-in.unlock');
+    for (let attempt = 0; attempt < 5; attempt++)
+      await request(t.http).post('/api/auth/login').send({ username: 'no.such.user', password: 'not-the-password' }).expect(401);
+    await step(
+      'delete',
+      '/api/auth/lockouts/usernames/:username',
+      '/api/auth/lockouts/usernames/no.such.user',
+      'admin',
+      undefined,
+      204,
+      'sign-in.unlock',
+    );
+    for (let attempt = 0; attempt < 5; attempt++)
+      await request(t.http).post('/api/auth/login').send({ username: 'no.such.user', password: 'not-the-password' });
+    await step(
+      'delete',
+      '/api/auth/lockouts/addresses/:address',
+      '/api/auth/lockouts/addresses/127.0.0.1',
+      'admin',
+      undefined,
+      204,
+      'sign-in.unlock',
+    );
 
     // Last: it ends the nurse's session.
     await step('post', '/api/auth/logout', '/api/auth/logout', 'nurse', undefined, 204, 'user.sign-out');
 
     const writeRoutes = appRoutes(t.app).filter((key) => WRITE_METHODS.has(key.split(' ')[0]) && !NOT_STATE_CHANGING.has(key));
-    expect(writeRoutes.filter((key) => !exercised.has(key)), 'write routes this walk does not call').toEqual([]);
+    expect(
+      writeRoutes.filter((key) => !exercised.has(key)),
+      'write routes this walk does not call',
+    ).toEqual([]);
 
     const verified = (await request(t.http).get('/api/audit/verify').set('Authorization', `Bearer ${tokens.admin}`).expect(200)).body;
     expect(verified).toMatchObject({ ok: true, firstBadId: null });

@@ -12,7 +12,8 @@ describe('audit trail', () => {
   let nurse: string;
   let tokens: PcaTokens;
   const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
-  const search = async (query: string, token = admin) => (await request(t.http).get(`/api/audit${query}`).set(bearer(token)).expect(200)).body as AuditPage;
+  const search = async (query: string, token = admin) =>
+    (await request(t.http).get(`/api/audit${query}`).set(bearer(token)).expect(200)).body as AuditPage;
   const auditCount = async () => (await search('?limit=1')).total;
 
   beforeAll(async () => {
@@ -35,10 +36,20 @@ describe('audit trail', () => {
   });
 
   it('records a ward policy change with who, when and each field’s old and new value; a no-op writes nothing', async () => {
-    await request(t.http).patch('/api/wards/1/policy').set(bearer(admin)).send({ respiratoryRateThreshold: 10, syringeLowThresholdHours: 2 }).expect(200);
+    await request(t.http)
+      .patch('/api/wards/1/policy')
+      .set(bearer(admin))
+      .send({ respiratoryRateThreshold: 10, syringeLowThresholdHours: 2 })
+      .expect(200);
     const { events } = await search('?entityType=ward&entityId=1');
     expect(events).toHaveLength(1);
-    expect(events[0]).toMatchObject({ action: 'ward.policy-update', actorName: 'Sam Rivera', entityType: 'ward', entityId: '1', summary: { respiratoryRateThreshold: { from: 8, to: 10 } } });
+    expect(events[0]).toMatchObject({
+      action: 'ward.policy-update',
+      actorName: 'Sam Rivera',
+      entityType: 'ward',
+      entityId: '1',
+      summary: { respiratoryRateThreshold: { from: 8, to: 10 } },
+    });
     expect(events[0].summary).not.toHaveProperty('syringeLowThresholdHours');
     expect(Date.now() - Date.parse(events[0].at)).toBeLessThan(60_000);
 
@@ -53,7 +64,16 @@ describe('audit trail', () => {
     await request(t.http)
       .post(`/api/orders/${id}/observations`)
       .set(bearer(nurse))
-      .send({ painScore: 4, sedationLevel: '1', respiratoryRate: 14, spo2: 97, attempts: 3, delivered: 2, volumeInfusedMl: 2, syringeRemainingMl: 48 })
+      .send({
+        painScore: 4,
+        sedationLevel: '1',
+        respiratoryRate: 14,
+        spo2: 97,
+        attempts: 3,
+        delivered: 2,
+        volumeInfusedMl: 2,
+        syringeRemainingMl: 48,
+      })
       .expect(201);
 
     const story = (await request(t.http).get(`/api/orders/${id}/audit`).set(bearer(nurse)).expect(200)).body as AuditEvent[];
@@ -80,8 +100,16 @@ describe('audit trail', () => {
   it('writes nothing when a change is refused', async () => {
     const before = await auditCount();
     // Demo order 2 is already verified: a second verify is a 409 and its transaction rolls back.
-    await request(t.http).post('/api/orders/2/verify').set(bearer(pharmacist)).send({ signature: { password: DEMO_PASSWORD } }).expect(409);
-    await request(t.http).post('/api/users').set(bearer(admin)).send({ username: 'kai.mendes', displayName: 'Copy', role: 'nurse', wardIds: [1], password: 'long-enough-password' }).expect(409);
+    await request(t.http)
+      .post('/api/orders/2/verify')
+      .set(bearer(pharmacist))
+      .send({ signature: { password: DEMO_PASSWORD } })
+      .expect(409);
+    await request(t.http)
+      .post('/api/users')
+      .set(bearer(admin))
+      .send({ username: 'kai.mendes', displayName: 'Copy', role: 'nurse', wardIds: [1], password: 'long-enough-password' })
+      .expect(409);
     expect(await auditCount()).toBe(before);
   });
 
@@ -91,7 +119,11 @@ describe('audit trail', () => {
       .set(bearer(admin))
       .send({ username: 'ivo.lund', displayName: 'Ivo Lund', role: 'nurse', wardIds: [1], password: 'a-long-password-1' })
       .expect(201);
-    await request(t.http).patch(`/api/users/${user.id}`).set(bearer(admin)).send({ role: 'charge_nurse', password: 'another-long-password' }).expect(200);
+    await request(t.http)
+      .patch(`/api/users/${user.id}`)
+      .set(bearer(admin))
+      .send({ role: 'charge_nurse', password: 'another-long-password' })
+      .expect(200);
     const { events } = await search(`?entityType=user&entityId=${user.id}`);
     expect(events.map((event) => [event.action, event.summary])).toEqual([
       ['user.update', { role: { from: 'nurse', to: 'charge_nurse' }, passwordReset: true }],
@@ -142,7 +174,9 @@ describe('audit trail', () => {
       expect(() => db.prepare('DELETE FROM audit_event WHERE id = ?').run(policyChange.id)).toThrow(/append-only/);
       // Someone with the database file drops the guard and edits history.
       db.exec('DROP TRIGGER audit_event_no_update');
-      db.prepare(`UPDATE audit_event SET summary = json_set(summary, '$.respiratoryRateThreshold.to', 20) WHERE id = ?`).run(policyChange.id);
+      db.prepare(`UPDATE audit_event SET summary = json_set(summary, '$.respiratoryRateThreshold.to', 20) WHERE id = ?`).run(
+        policyChange.id,
+      );
     } finally {
       db.close();
     }

@@ -25,7 +25,13 @@ describe('sign-in and sessions', () => {
   ])('signs in %s as %s and returns the token and user with their wards', async (username, role, wards) => {
     const response = await request(t.http).post('/api/auth/login').send({ username, password: DEMO_PASSWORD }).expect(200);
     expect(response.body.accessToken).toEqual(expect.any(String));
-    expect(response.body.user).toEqual({ id: expect.any(Number), username, displayName: expect.any(String), role, wards: expect.any(Array) });
+    expect(response.body.user).toEqual({
+      id: expect.any(Number),
+      username,
+      displayName: expect.any(String),
+      role,
+      wards: expect.any(Array),
+    });
     expect(response.body.user.wards.map((ward: { name: string }) => ward.name)).toEqual(wards);
     const me = await request(t.http).get('/api/auth/me').auth(response.body.accessToken, { type: 'bearer' }).expect(200);
     expect(me.body).toEqual(response.body.user);
@@ -33,7 +39,10 @@ describe('sign-in and sessions', () => {
 
   it('gives a wrong password and an unknown user the same 401, so usernames cannot be probed', async () => {
     const wrong = await request(t.http).post('/api/auth/login').send({ username: 'kai.mendes', password: 'not-the-password' }).expect(401);
-    const unknown = await request(t.http).post('/api/auth/login').send({ username: 'nobody.here', password: 'not-the-password' }).expect(401);
+    const unknown = await request(t.http)
+      .post('/api/auth/login')
+      .send({ username: 'nobody.here', password: 'not-the-password' })
+      .expect(401);
     expect(wrong.body).toEqual({ statusCode: 401, message: 'Username or password is incorrect' });
     expect(unknown.body).toEqual(wrong.body);
   });

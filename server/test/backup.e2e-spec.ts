@@ -11,7 +11,16 @@ import { createTestApp, DEMO_USER_BY_ROLE, type TestApp } from './support/test-a
 
 // Invented, unremarkable observations: no flag is raised and the pump totals stay put, so any
 // number of them can be written in any order.
-const OBSERVATION = { painScore: 3, sedationLevel: '1', respiratoryRate: 14, spo2: 97, attempts: 4, delivered: 3, volumeInfusedMl: 3, syringeRemainingMl: 47 };
+const OBSERVATION = {
+  painScore: 3,
+  sedationLevel: '1',
+  respiratoryRate: 14,
+  spo2: 97,
+  attempts: 4,
+  delivered: 3,
+  volumeInfusedMl: 3,
+  syringeRemainingMl: 47,
+};
 
 describe('database backup (npm run db:backup)', () => {
   let t: TestApp;
@@ -19,7 +28,9 @@ describe('database backup (npm run db:backup)', () => {
   let backups: string;
 
   const tables = async (): Promise<string[]> =>
-    (await live.query(`SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' ORDER BY name`)).map((row: { name: string }) => row.name);
+    (await live.query(`SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' ORDER BY name`)).map(
+      (row: { name: string }) => row.name,
+    );
   const liveCounts = async (): Promise<Record<string, number>> => {
     const counts: Record<string, number> = {};
     for (const table of await tables()) counts[table] = Number((await live.query(`SELECT COUNT(*) AS n FROM "${table}"`))[0].n);
@@ -48,7 +59,8 @@ describe('database backup (npm run db:backup)', () => {
       expect(copy.pragma('journal_mode', { simple: true })).toBe('delete');
       const counts = await liveCounts();
       expect(Object.keys(counts).length).toBeGreaterThan(10);
-      for (const [table, n] of Object.entries(counts)) expect(copy.prepare(`SELECT COUNT(*) AS n FROM "${table}"`).get(), table).toEqual({ n });
+      for (const [table, n] of Object.entries(counts))
+        expect(copy.prepare(`SELECT COUNT(*) AS n FROM "${table}"`).get(), table).toEqual({ n });
     } finally {
       copy.close();
     }
@@ -91,7 +103,10 @@ describe('database backup (npm run db:backup)', () => {
       return result;
     })();
     const [during, { file }] = await Promise.all([writes, backup]);
-    expect(during.filter((write) => write.answeredAt > backupStarted && write.answeredAt < backupEnded).length, 'writes answered while the backup ran').toBeGreaterThan(0);
+    expect(
+      during.filter((write) => write.answeredAt > backupStarted && write.answeredAt < backupEnded).length,
+      'writes answered while the backup ran',
+    ).toBeGreaterThan(0);
 
     const copy = openCopy(file);
     try {
@@ -103,7 +118,8 @@ describe('database backup (npm run db:backup)', () => {
       // Every copied row is the live row, unchanged: a snapshot, not a mixture.
       const copiedTotal = copy.prepare('SELECT COUNT(*) AS n FROM observations').get() as { n: number };
       expect(copiedTotal.n).toBeLessThanOrEqual(Number((await live.query('SELECT COUNT(*) AS n FROM observations'))[0].n));
-      for (const row of copied) expect(Object.values(row)).toEqual(Object.values((await live.query('SELECT * FROM observations WHERE id = ?', [row.id]))[0]));
+      for (const row of copied)
+        expect(Object.values(row)).toEqual(Object.values((await live.query('SELECT * FROM observations WHERE id = ?', [row.id]))[0]));
     } finally {
       copy.close();
     }

@@ -12,9 +12,18 @@ import { UpdateUserDto } from '../src/users/dto/update-user.dto.js';
 import { UpdateWardPolicyDto } from '../src/wards/dto/update-ward-policy.dto.js';
 import { appRoutes } from './support/app-routes.js';
 import { type BadInputApp, badInputSuite, type BadInputRoute } from './support/bad-input-harness.js';
-import { APPROVE_VERSION, BAD_INPUT_COVERAGE, CREATE_DRAFT, CREATE_USER, LOGIN, REPLACE_RULES, SUBMIT_VERSION, UPDATE_USER, WARD_POLICY } from './support/bad-input-specs.js';
+import {
+  APPROVE_VERSION,
+  BAD_INPUT_COVERAGE,
+  CREATE_DRAFT,
+  CREATE_USER,
+  LOGIN,
+  REPLACE_RULES,
+  SUBMIT_VERSION,
+  UPDATE_USER,
+  WARD_POLICY,
+} from './support/bad-input-specs.js';
 import { DEMO_PASSWORD } from './support/test-app.js';
-
 
 // Demo data: user 4 is the nurse kai.mendes; library version 5 is Harbour's draft awaiting
 // approval; Cedar (2) has no open version, so a new draft for it is valid.
@@ -26,14 +35,27 @@ const PENDING_VERSION = 5;
 const state = { draftId: 0, pendingSubmittedAt: '' };
 
 async function setUp({ t, tokens }: BadInputApp): Promise<void> {
-  const draft = await request(t.http).post('/api/library/versions').set({ Authorization: `Bearer ${tokens.pharmacist}` }).send({ wardId: SUMMIT, note: 'Bad-input target' }).expect(201);
+  const draft = await request(t.http)
+    .post('/api/library/versions')
+    .set({ Authorization: `Bearer ${tokens.pharmacist}` })
+    .send({ wardId: SUMMIT, note: 'Bad-input target' })
+    .expect(201);
   state.draftId = draft.body.id;
-  const pending = await request(t.http).get(`/api/library/versions/${PENDING_VERSION}`).set({ Authorization: `Bearer ${tokens.pharmacist}` }).expect(200);
+  const pending = await request(t.http)
+    .get(`/api/library/versions/${PENDING_VERSION}`)
+    .set({ Authorization: `Bearer ${tokens.pharmacist}` })
+    .expect(200);
   state.pendingSubmittedAt = pending.body.submittedAt;
 }
 
 const RULES = [
-  { drugId: 1, concentrationPerMl: 1, doseUnit: 'mg', perKg: false, limits: { demandDose: { hardMin: 0.2, softMin: 0.5, softMax: 2, hardMax: 3 }, lockoutMinutes: { hardMin: 5, softMax: 20 } } },
+  {
+    drugId: 1,
+    concentrationPerMl: 1,
+    doseUnit: 'mg',
+    perKg: false,
+    limits: { demandDose: { hardMin: 0.2, softMin: 0.5, softMax: 2, hardMax: 3 }, lockoutMinutes: { hardMin: 5, softMax: 20 } },
+  },
   { drugId: 3, concentrationPerMl: 10, doseUnit: 'mcg', perKg: false, limits: { demandDose: { softMax: 20, hardMax: 30 } } },
 ];
 const POLICY = {
@@ -50,7 +72,15 @@ const POLICY = {
 };
 
 const ROUTES: BadInputRoute[] = [
-  { method: 'POST', path: '/api/auth/login', url: () => '/api/auth/login', role: 'anonymous', spec: LOGIN, dto: LoginDto, valid: () => ({ username: 'kai.mendes', password: DEMO_PASSWORD }) },
+  {
+    method: 'POST',
+    path: '/api/auth/login',
+    url: () => '/api/auth/login',
+    role: 'anonymous',
+    spec: LOGIN,
+    dto: LoginDto,
+    valid: () => ({ username: 'kai.mendes', password: DEMO_PASSWORD }),
+  },
   {
     method: 'POST',
     path: '/api/users',
@@ -58,7 +88,13 @@ const ROUTES: BadInputRoute[] = [
     role: 'admin',
     spec: CREATE_USER,
     dto: CreateUserDto,
-    valid: () => ({ username: 'new.nurse', displayName: 'New Nurse', role: 'nurse', wardIds: [HARBOUR, CEDAR], password: 'a-long-enough-password' }),
+    valid: () => ({
+      username: 'new.nurse',
+      displayName: 'New Nurse',
+      role: 'nurse',
+      wardIds: [HARBOUR, CEDAR],
+      password: 'a-long-enough-password',
+    }),
   },
   {
     method: 'PATCH',
@@ -69,10 +105,42 @@ const ROUTES: BadInputRoute[] = [
     dto: UpdateUserDto,
     valid: () => ({ displayName: 'Kai Mendes', role: 'nurse', wardIds: [HARBOUR, SUMMIT], active: true, password: 'a-new-long-password' }),
   },
-  { method: 'PATCH', path: '/api/wards/:wardId/policy', url: () => `/api/wards/${HARBOUR}/policy`, role: 'admin', spec: WARD_POLICY, dto: UpdateWardPolicyDto, valid: () => POLICY },
-  { method: 'POST', path: '/api/library/versions', url: () => '/api/library/versions', role: 'pharmacist', spec: CREATE_DRAFT, dto: CreateDraftDto, valid: () => ({ wardId: CEDAR, note: 'Tighter demand limits' }) },
-  { method: 'PUT', path: '/api/library/versions/:id/rules', url: () => `/api/library/versions/${state.draftId}/rules`, role: 'pharmacist', spec: REPLACE_RULES, dto: ReplaceRulesDto, valid: () => ({ rules: RULES }) },
-  { method: 'POST', path: '/api/library/versions/:id/submit', url: () => `/api/library/versions/${state.draftId}/submit`, role: 'pharmacist', spec: SUBMIT_VERSION, dto: SubmitVersionDto, valid: () => ({ note: 'Ready for a second pharmacist' }) },
+  {
+    method: 'PATCH',
+    path: '/api/wards/:wardId/policy',
+    url: () => `/api/wards/${HARBOUR}/policy`,
+    role: 'admin',
+    spec: WARD_POLICY,
+    dto: UpdateWardPolicyDto,
+    valid: () => POLICY,
+  },
+  {
+    method: 'POST',
+    path: '/api/library/versions',
+    url: () => '/api/library/versions',
+    role: 'pharmacist',
+    spec: CREATE_DRAFT,
+    dto: CreateDraftDto,
+    valid: () => ({ wardId: CEDAR, note: 'Tighter demand limits' }),
+  },
+  {
+    method: 'PUT',
+    path: '/api/library/versions/:id/rules',
+    url: () => `/api/library/versions/${state.draftId}/rules`,
+    role: 'pharmacist',
+    spec: REPLACE_RULES,
+    dto: ReplaceRulesDto,
+    valid: () => ({ rules: RULES }),
+  },
+  {
+    method: 'POST',
+    path: '/api/library/versions/:id/submit',
+    url: () => `/api/library/versions/${state.draftId}/submit`,
+    role: 'pharmacist',
+    spec: SUBMIT_VERSION,
+    dto: SubmitVersionDto,
+    valid: () => ({ note: 'Ready for a second pharmacist' }),
+  },
   {
     method: 'POST',
     path: '/api/library/versions/:id/approve',
@@ -89,7 +157,13 @@ describe('bad input: sign-in, users, ward policy and the dose-limit library', ()
 
   it('has bad-input tests (or no body) for every write route the app serves', () => {
     const writes = appRoutes(suite.t.app).filter((key) => /^(POST|PUT|PATCH|DELETE) \/api\//.test(key));
-    expect(writes.filter((key) => !(key in BAD_INPUT_COVERAGE)), 'write routes missing from BAD_INPUT_COVERAGE').toEqual([]);
-    expect(Object.keys(BAD_INPUT_COVERAGE).filter((key) => !writes.includes(key)), 'BAD_INPUT_COVERAGE rows for routes that do not exist').toEqual([]);
+    expect(
+      writes.filter((key) => !(key in BAD_INPUT_COVERAGE)),
+      'write routes missing from BAD_INPUT_COVERAGE',
+    ).toEqual([]);
+    expect(
+      Object.keys(BAD_INPUT_COVERAGE).filter((key) => !writes.includes(key)),
+      'BAD_INPUT_COVERAGE rows for routes that do not exist',
+    ).toEqual([]);
   });
 });

@@ -7,10 +7,18 @@ import { FirstCheckDto, SecondCheckDto } from '../src/bedside/dto/bedside-check.
 import { AcknowledgeFlagDto } from '../src/flags/dto/acknowledge-flag.dto.js';
 import { CreateSignoffDto } from '../src/handover/dto/create-signoff.dto.js';
 import { CreateObservationDto } from '../src/observations/dto/create-observation.dto.js';
-import { ACKNOWLEDGE_FLAG, BOLUS, DISCONTINUE, FIRST_CHECK, OBSERVATION, SECOND_CHECK, SIGNOFF, SYRINGE_CHANGE } from './support/bad-input-specs.js';
+import {
+  ACKNOWLEDGE_FLAG,
+  BOLUS,
+  DISCONTINUE,
+  FIRST_CHECK,
+  OBSERVATION,
+  SECOND_CHECK,
+  SIGNOFF,
+  SYRINGE_CHANGE,
+} from './support/bad-input-specs.js';
 import { type BadInputApp, badInputSuite, type BadInputRoute } from './support/bad-input-harness.js';
 import { activeOrder, IDENTITY, RELEASE, ROSA, SETTINGS, verifiedOrderWithSyringe } from './support/pca.js';
-
 
 const HARBOUR = 1; // the ward of patient 1, whose orders support/pca.ts writes
 
@@ -22,16 +30,38 @@ async function setUp({ t, tokens }: BadInputApp): Promise<void> {
   const nurse = { Authorization: `Bearer ${tokens.nurse}` };
   state.released = await verifiedOrderWithSyringe(t.http, pca);
   const pending = await verifiedOrderWithSyringe(t.http, pca);
-  const first = await request(t.http).post(`/api/orders/${pending.id}/bedside-checks`).set(nurse).send({ ...IDENTITY, releaseCode: pending.code, settings: SETTINGS }).expect(201);
+  const first = await request(t.http)
+    .post(`/api/orders/${pending.id}/bedside-checks`)
+    .set(nurse)
+    .send({ ...IDENTITY, releaseCode: pending.code, settings: SETTINGS })
+    .expect(201);
   state.checkPending = { id: pending.id, checkId: first.body.id };
   state.active = await activeOrder(t.http, pca);
-  const spare = await request(t.http).post(`/api/orders/${state.active.id}/releases`).set({ Authorization: `Bearer ${tokens.pharmacist}` }).send(RELEASE).expect(201);
+  const spare = await request(t.http)
+    .post(`/api/orders/${state.active.id}/releases`)
+    .set({ Authorization: `Bearer ${tokens.pharmacist}` })
+    .send(RELEASE)
+    .expect(201);
   state.spareCode = spare.body.releaseCode;
-  const sedated = await request(t.http).post(`/api/orders/${state.active.id}/observations`).set(nurse).send({ ...OBSERVATION_BODY, sedationLevel: '3' }).expect(201);
+  const sedated = await request(t.http)
+    .post(`/api/orders/${state.active.id}/observations`)
+    .set(nurse)
+    .send({ ...OBSERVATION_BODY, sedationLevel: '3' })
+    .expect(201);
   state.flagId = sedated.body.flags[0].id;
 }
 
-const OBSERVATION_BODY = { painScore: 3, sedationLevel: '1', respiratoryRate: 14, spo2: 97, attempts: 4, delivered: 3, volumeInfusedMl: 3, syringeRemainingMl: 47, note: 'Comfortable, settled' };
+const OBSERVATION_BODY = {
+  painScore: 3,
+  sedationLevel: '1',
+  respiratoryRate: 14,
+  spo2: 97,
+  attempts: 4,
+  delivered: 3,
+  volumeInfusedMl: 3,
+  syringeRemainingMl: 47,
+  note: 'Comfortable, settled',
+};
 
 const ROUTES: BadInputRoute[] = [
   {
@@ -59,7 +89,12 @@ const ROUTES: BadInputRoute[] = [
     role: 'nurse',
     spec: BOLUS,
     dto: BolusDto,
-    valid: () => ({ amount: 2, reason: 'Breakthrough pain on mobilising', overrideReason: 'Pain team agreed a larger bolus', witness: ROSA }),
+    valid: () => ({
+      amount: 2,
+      reason: 'Breakthrough pain on mobilising',
+      overrideReason: 'Pain team agreed a larger bolus',
+      witness: ROSA,
+    }),
   },
   {
     method: 'POST',

@@ -3,7 +3,15 @@ import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { waitForMail } from './support/mailbox.js';
-import { activeOrder as startOrder, IDENTITY, ORDER, RELEASE, ROSA, SETTINGS, verifiedOrderWithSyringe as releasedOrder } from './support/pca.js';
+import {
+  activeOrder as startOrder,
+  IDENTITY,
+  ORDER,
+  RELEASE,
+  ROSA,
+  SETTINGS,
+  verifiedOrderWithSyringe as releasedOrder,
+} from './support/pca.js';
 import { createTestApp, DEMO_PASSWORD, type TestApp } from './support/test-app.js';
 
 // Regimen, patient and syringe are in support/pca.ts (ASHP Standardize 4 Safety, PCA standards, 2023).
@@ -15,7 +23,8 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
   const pcaTokens = () => ({ prescriber: token.amara, pharmacist: token.lin, nurse: token.kai });
   const verifiedOrderWithSyringe = () => releasedOrder(t.http, pcaTokens());
   const firstCheck = (id: number, body: object) => request(t.http).post(`/api/orders/${id}/bedside-checks`).set(as('kai')).send(body);
-  const secondCheck = (id: number, checkId: number, body: object) => request(t.http).post(`/api/orders/${id}/bedside-checks/${checkId}/second`).set(as('kai')).send(body);
+  const secondCheck = (id: number, checkId: number, body: object) =>
+    request(t.http).post(`/api/orders/${id}/bedside-checks/${checkId}/second`).set(as('kai')).send(body);
 
   const activeOrder = () => startOrder(t.http, pcaTokens());
 
@@ -32,7 +41,11 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
   describe('bedside check', () => {
     it('never sends the first entry back, names each mismatched field and whose entry differs, and starts nothing', async () => {
       const order = await verifiedOrderWithSyringe();
-      const first = await firstCheck(order.id, { ...IDENTITY, releaseCode: order.code.toLowerCase().replace('-', ' '), settings: { ...SETTINGS, lockoutMinutes: 6 } }).expect(201);
+      const first = await firstCheck(order.id, {
+        ...IDENTITY,
+        releaseCode: order.code.toLowerCase().replace('-', ' '),
+        settings: { ...SETTINGS, lockoutMinutes: 6 },
+      }).expect(201);
       expect(first.body).toEqual({ id: expect.any(Number), status: 'awaiting_second' });
       const second = await secondCheck(order.id, first.body.id, { ...ROSA, settings: SETTINGS }).expect(200);
       expect(second.body).toEqual({
@@ -54,31 +67,60 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
       const detail = await request(t.http).get(`/api/orders/${order.id}`).set(as('kai')).expect(200);
       expect(detail.body).toMatchObject({ status: 'active', startedAt: expect.any(String) });
       expect(detail.body.releases[0].status).toBe('in_use');
-      expect(detail.body.events.at(-1)).toMatchObject({ toStatus: 'active', userName: 'Kai Mendes', reason: expect.stringContaining('Rosa Adeyemi') });
+      expect(detail.body.events.at(-1)).toMatchObject({
+        toStatus: 'active',
+        userName: 'Kai Mendes',
+        reason: expect.stringContaining('Rosa Adeyemi'),
+      });
       const dataSource = t.app.get<DataSource>(getDataSourceToken());
-      const [row] = await dataSource.query('SELECT firstNurseId, firstAt, secondNurseId, secondAt FROM bedside_checks WHERE id = ?', [first.body.id]);
+      const [row] = await dataSource.query('SELECT firstNurseId, firstAt, secondNurseId, secondAt FROM bedside_checks WHERE id = ?', [
+        first.body.id,
+      ]);
       expect(row).toEqual({ firstNurseId: 4, firstAt: expect.any(String), secondNurseId: 5, secondAt: expect.any(String) });
     });
 
     it('refuses the same nurse twice (400), a wrong second password (401) and a pharmacist as either check (403)', async () => {
       const order = await verifiedOrderWithSyringe();
       const first = await firstCheck(order.id, { ...IDENTITY, releaseCode: order.code, settings: SETTINGS }).expect(201);
-      const same = await secondCheck(order.id, first.body.id, { username: 'kai.mendes', password: DEMO_PASSWORD, settings: SETTINGS }).expect(400);
+      const same = await secondCheck(order.id, first.body.id, {
+        username: 'kai.mendes',
+        password: DEMO_PASSWORD,
+        settings: SETTINGS,
+      }).expect(400);
       expect(same.body.errors[0].field).toBe('username');
       await secondCheck(order.id, first.body.id, { ...ROSA, password: 'wrong-password', settings: SETTINGS }).expect(401);
       await secondCheck(order.id, first.body.id, { username: 'lin.park', password: DEMO_PASSWORD, settings: SETTINGS }).expect(403);
-      await request(t.http).post(`/api/orders/${order.id}/bedside-checks`).set(as('lin')).send({ ...IDENTITY, releaseCode: order.code, settings: SETTINGS }).expect(403);
-      await request(t.http).post(`/api/orders/${order.id}/bedside-checks`).set(as('amara')).send({ ...IDENTITY, releaseCode: order.code, settings: SETTINGS }).expect(403);
+      await request(t.http)
+        .post(`/api/orders/${order.id}/bedside-checks`)
+        .set(as('lin'))
+        .send({ ...IDENTITY, releaseCode: order.code, settings: SETTINGS })
+        .expect(403);
+      await request(t.http)
+        .post(`/api/orders/${order.id}/bedside-checks`)
+        .set(as('amara'))
+        .send({ ...IDENTITY, releaseCode: order.code, settings: SETTINGS })
+        .expect(403);
     });
 
     it('refuses the wrong patient and a syringe released for another order (400 naming the field)', async () => {
       const order = await verifiedOrderWithSyringe();
       const other = await verifiedOrderWithSyringe();
-      const wrongPatient = await firstCheck(order.id, { patientMrn: 'KB100458', patientDateOfBirth: '1968-03-14', releaseCode: order.code, settings: SETTINGS }).expect(400);
+      const wrongPatient = await firstCheck(order.id, {
+        patientMrn: 'KB100458',
+        patientDateOfBirth: '1968-03-14',
+        releaseCode: order.code,
+        settings: SETTINGS,
+      }).expect(400);
       expect(wrongPatient.body.errors.map((e: { field: string }) => e.field)).toEqual(['patientMrn']);
       const otherSyringe = await firstCheck(order.id, { ...IDENTITY, releaseCode: other.code, settings: SETTINGS }).expect(400);
-      expect(otherSyringe.body.errors).toEqual([{ field: 'releaseCode', message: 'This syringe was released for another order: do not use it' }]);
-      const missing = await firstCheck(order.id, { ...IDENTITY, releaseCode: order.code, settings: { ...SETTINGS, demandDose: undefined } }).expect(400);
+      expect(otherSyringe.body.errors).toEqual([
+        { field: 'releaseCode', message: 'This syringe was released for another order: do not use it' },
+      ]);
+      const missing = await firstCheck(order.id, {
+        ...IDENTITY,
+        releaseCode: order.code,
+        settings: { ...SETTINGS, demandDose: undefined },
+      }).expect(400);
       expect(missing.body.errors[0].field).toBe('settings.demandDose');
     });
   });
@@ -87,18 +129,38 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
     it('gives a co-signed bolus within the order, refuses one over it, and one over the hard limit', async () => {
       const order = await activeOrder();
       const witness = { witness: ROSA };
-      const given = await request(t.http).post(`/api/orders/${order.id}/boluses`).set(as('kai')).send({ amount: 1.5, reason: 'Breakthrough pain on coughing', ...witness }).expect(201);
+      const given = await request(t.http)
+        .post(`/api/orders/${order.id}/boluses`)
+        .set(as('kai'))
+        .send({ amount: 1.5, reason: 'Breakthrough pain on coughing', ...witness })
+        .expect(201);
       expect(given.body).toMatchObject({ amount: 1.5, givenByName: 'Kai Mendes', witnessName: 'Rosa Adeyemi', at: expect.any(String) });
-      const over = await request(t.http).post(`/api/orders/${order.id}/boluses`).set(as('kai')).send({ amount: 5, reason: 'Breakthrough pain on coughing', ...witness }).expect(400);
+      const over = await request(t.http)
+        .post(`/api/orders/${order.id}/boluses`)
+        .set(as('kai'))
+        .send({ amount: 5, reason: 'Breakthrough pain on coughing', ...witness })
+        .expect(400);
       expect(over.body.errors[0].field).toBe('amount');
-      await request(t.http).post(`/api/orders/${order.id}/boluses`).set(as('kai')).send({ amount: 1, reason: 'Breakthrough pain on coughing', witness: { username: 'kai.mendes', password: DEMO_PASSWORD } }).expect(400);
+      await request(t.http)
+        .post(`/api/orders/${order.id}/boluses`)
+        .set(as('kai'))
+        .send({ amount: 1, reason: 'Breakthrough pain on coughing', witness: { username: 'kai.mendes', password: DEMO_PASSWORD } })
+        .expect(400);
     });
 
     it('refuses a bolus over the ward hard limit even when the order allows it', async () => {
       // The demo Harbour rule's clinician bolus hard maximum is 4 mg (invented demo value).
-      const { body: order } = await request(t.http).post('/api/orders').set(as('amara')).send({ ...ORDER, clinicianBolusDose: 2 }).expect(201);
+      const { body: order } = await request(t.http)
+        .post('/api/orders')
+        .set(as('amara'))
+        .send({ ...ORDER, clinicianBolusDose: 2 })
+        .expect(201);
       expect(order.clinicianBolusDose).toBe(2);
-      const hard = await request(t.http).post('/api/orders').set(as('amara')).send({ ...ORDER, clinicianBolusDose: 5 }).expect(400);
+      const hard = await request(t.http)
+        .post('/api/orders')
+        .set(as('amara'))
+        .send({ ...ORDER, clinicianBolusDose: 5 })
+        .expect(400);
       expect(hard.body.errors[0].field).toBe('clinicianBolusDose');
     });
   });
@@ -113,7 +175,14 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
         .set(as('kai'))
         .send({ volumeInfusedMl: 46, wastedMl: 4, newReleaseCode: next.releaseCode, witness: ROSA })
         .expect(201);
-      expect(change.body.reconciliation).toEqual({ dispensedMl: 50, infusedMl: 46, wastedMl: 4, discrepancyMl: 0, mustReport: false, releaseCode: order.code });
+      expect(change.body.reconciliation).toEqual({
+        dispensedMl: 50,
+        infusedMl: 46,
+        wastedMl: 4,
+        discrepancyMl: 0,
+        mustReport: false,
+        releaseCode: order.code,
+      });
       const first = await firstCheck(order.id, { ...IDENTITY, releaseCode: next.releaseCode, settings: SETTINGS }).expect(201);
       await secondCheck(order.id, first.body.id, { ...ROSA, settings: SETTINGS }).expect(200);
       const detail = await request(t.http).get(`/api/orders/${order.id}`).set(as('kai'));
@@ -127,10 +196,24 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
         .set(as('kai'))
         .send({ reason: 'Prescriber stopped the PCA: pain controlled orally', volumeInfusedMl: 30.2, wastedMl: 19.5, witness: ROSA })
         .expect(200);
-      expect(response.body.reconciliation).toMatchObject({ dispensedMl: 50, infusedMl: 30.2, wastedMl: 19.5, discrepancyMl: 0.3, mustReport: false });
+      expect(response.body.reconciliation).toMatchObject({
+        dispensedMl: 50,
+        infusedMl: 30.2,
+        wastedMl: 19.5,
+        discrepancyMl: 0.3,
+        mustReport: false,
+      });
       expect(response.body.order).toMatchObject({ status: 'discontinued', flags: [] });
-      await request(t.http).post(`/api/orders/${order.id}/discontinue`).set(as('kai')).send({ reason: 'Prescriber stopped the PCA again', volumeInfusedMl: 1, wastedMl: 1, witness: ROSA }).expect(409);
-      await request(t.http).post(`/api/orders/${order.id}/boluses`).set(as('kai')).send({ amount: 1, reason: 'Breakthrough pain on coughing', witness: ROSA }).expect(409);
+      await request(t.http)
+        .post(`/api/orders/${order.id}/discontinue`)
+        .set(as('kai'))
+        .send({ reason: 'Prescriber stopped the PCA again', volumeInfusedMl: 1, wastedMl: 1, witness: ROSA })
+        .expect(409);
+      await request(t.http)
+        .post(`/api/orders/${order.id}/boluses`)
+        .set(as('kai'))
+        .send({ amount: 1, reason: 'Breakthrough pain on coughing', witness: ROSA })
+        .expect(409);
     });
 
     it('discontinues with a discrepancy over tolerance: a flag for pharmacy and an e-mail to the ward pharmacy', async () => {

@@ -32,7 +32,13 @@ describe('concurrency: simultaneous requests on one record', { timeout: 120_000 
     const text = await response.text();
     return { status: response.status, body: text ? (JSON.parse(text) as Record<string, unknown>) : {} };
   };
-  const ok = async (method: string, path: string, as: string, body: object | undefined, status: number): Promise<Record<string, unknown>> => {
+  const ok = async (
+    method: string,
+    path: string,
+    as: string,
+    body: object | undefined,
+    status: number,
+  ): Promise<Record<string, unknown>> => {
     const reply = await call(method, path, as, body);
     expect(reply.status, `${method} ${path}: ${JSON.stringify(reply.body)}`).toBe(status);
     return reply.body;
@@ -59,7 +65,11 @@ describe('concurrency: simultaneous requests on one record', { timeout: 120_000 
     token.kai = await t.tokenFor('kai.mendes');
   });
   afterAll(async () => {
-    console.log(`Races run: ${Object.entries(tally).map(([race, rounds]) => `${race} ${rounds}`).join(', ')}`);
+    console.log(
+      `Races run: ${Object.entries(tally)
+        .map(([race, rounds]) => `${race} ${rounds}`)
+        .join(', ')}`,
+    );
     await t.close();
   });
 
@@ -96,10 +106,18 @@ describe('concurrency: simultaneous requests on one record', { timeout: 120_000 
   it(`two second nurses sign one bedside check at once: one activation (${ROUNDS} rounds)`, async () => {
     for (let round = 0; round < ROUNDS; round++) {
       const { id, code } = await verifiedWithSyringe();
-      const first = await ok('POST', `/api/orders/${id}/bedside-checks`, token.kai, { ...IDENTITY, releaseCode: code, settings: SETTINGS }, 201);
+      const first = await ok(
+        'POST',
+        `/api/orders/${id}/bedside-checks`,
+        token.kai,
+        { ...IDENTITY, releaseCode: code, settings: SETTINGS },
+        201,
+      );
       const path = `/api/orders/${id}/bedside-checks/${first.id as number}/second`;
       const replies = await Promise.all(
-        ['rosa.adeyemi', 'mei.tan'].map((username) => call('POST', path, token.kai, { username, password: DEMO_PASSWORD, settings: SETTINGS })),
+        ['rosa.adeyemi', 'mei.tan'].map((username) =>
+          call('POST', path, token.kai, { username, password: DEMO_PASSWORD, settings: SETTINGS }),
+        ),
       );
       expect(statuses(replies), JSON.stringify(replies)).toEqual([200, 409]);
       expect(replies.find((reply) => reply.status === 200)!.body).toMatchObject({ status: 'matched', differences: [] });
@@ -119,7 +137,9 @@ describe('concurrency: simultaneous requests on one record', { timeout: 120_000 
       const draft = await ok('POST', '/api/library/versions', token.lin, { wardId: SUMMIT, note: `Race round ${round}` }, 201);
       const id = draft.id as number;
       const { submittedAt } = await ok('POST', `/api/library/versions/${id}/submit`, token.lin, {}, 200);
-      const replies = await Promise.all([0, 1].map(() => call('POST', `/api/library/versions/${id}/approve`, token.tomas, { ...SIGNED, submittedAt })));
+      const replies = await Promise.all(
+        [0, 1].map(() => call('POST', `/api/library/versions/${id}/approve`, token.tomas, { ...SIGNED, submittedAt })),
+      );
       expect(statuses(replies), JSON.stringify(replies)).toEqual([200, 409]);
       const active = await db.query(`SELECT id FROM library_versions WHERE wardId = ? AND status = 'active'`, [SUMMIT]);
       expect(active).toEqual([{ id }]);
@@ -130,10 +150,20 @@ describe('concurrency: simultaneous requests on one record', { timeout: 120_000 
 
   it(`two new drafts for one ward at once: one 201, one 409, never two open versions (${ROUNDS} rounds)`, async () => {
     for (let round = 0; round < ROUNDS; round++) {
-      const replies = await Promise.all([token.lin, token.tomas].map((as) => call('POST', '/api/library/versions', as, { wardId: SUMMIT })));
+      const replies = await Promise.all(
+        [token.lin, token.tomas].map((as) => call('POST', '/api/library/versions', as, { wardId: SUMMIT })),
+      );
       expect(statuses(replies), JSON.stringify(replies)).toEqual([201, 409]);
-      expect(await count(`SELECT COUNT(*) AS n FROM library_versions WHERE wardId = ? AND status IN ('draft', 'pending_approval')`, [SUMMIT])).toBe(1);
-      await ok('DELETE', `/api/library/versions/${replies.find((reply) => reply.status === 201)!.body.id as number}`, token.lin, undefined, 204);
+      expect(
+        await count(`SELECT COUNT(*) AS n FROM library_versions WHERE wardId = ? AND status IN ('draft', 'pending_approval')`, [SUMMIT]),
+      ).toBe(1);
+      await ok(
+        'DELETE',
+        `/api/library/versions/${replies.find((reply) => reply.status === 201)!.body.id as number}`,
+        token.lin,
+        undefined,
+        204,
+      );
       tally['draft/draft'] = round + 1;
     }
   });
@@ -161,9 +191,13 @@ describe('concurrency: simultaneous requests on one record', { timeout: 120_000 
 
   it('the database itself refuses a second active or a second open version for a ward', async () => {
     const [retired] = await db.query(`SELECT id FROM library_versions WHERE wardId = ? AND status = 'retired' LIMIT 1`, [SUMMIT]);
-    await expect(db.query(`UPDATE library_versions SET status = 'active' WHERE id = ?`, [retired.id])).rejects.toThrow(/UNIQUE constraint failed/);
+    await expect(db.query(`UPDATE library_versions SET status = 'active' WHERE id = ?`, [retired.id])).rejects.toThrow(
+      /UNIQUE constraint failed/,
+    );
     await ok('POST', '/api/library/versions', token.lin, { wardId: SUMMIT }, 201);
-    await expect(db.query(`UPDATE library_versions SET status = 'draft' WHERE id = ?`, [retired.id])).rejects.toThrow(/UNIQUE constraint failed/);
+    await expect(db.query(`UPDATE library_versions SET status = 'draft' WHERE id = ?`, [retired.id])).rejects.toThrow(
+      /UNIQUE constraint failed/,
+    );
   });
 
   // The races above are settled by the status re-read inside each (queued) transaction. This

@@ -17,17 +17,63 @@ const PASSWORD = 'lockstep-demo';
 
 // The same invented morphine PCA as test/support/pca.ts (patient 1 on Harbour, drug 1), written
 // out here so this test loads no application code: everything goes through HTTP.
-const ORDER = { patientId: 1, drugId: 1, concentrationPerMl: 1, doseUnit: 'mg', demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0, fourHourLimit: 30, clinicianBolusDose: 2, reviewDate: '2030-01-02', overrides: [], signature: { password: PASSWORD } };
-const SETTINGS = { drugId: 1, concentrationPerMl: 1, syringeVolumeMl: 50, loadingDose: null, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0, oneHourLimit: null, fourHourLimit: 30 };
-const RELEASE = { concentrationPerMl: 1, volumeMl: 50, batch: 'KB-77', expiresAt: '2030-01-01T12:00:00Z', preparedBy: 'Lin Park', checkedBy: 'Tomas Ortiz' };
+const ORDER = {
+  patientId: 1,
+  drugId: 1,
+  concentrationPerMl: 1,
+  doseUnit: 'mg',
+  demandDose: 1,
+  lockoutMinutes: 10,
+  basalRatePerHour: 0,
+  fourHourLimit: 30,
+  clinicianBolusDose: 2,
+  reviewDate: '2030-01-02',
+  overrides: [],
+  signature: { password: PASSWORD },
+};
+const SETTINGS = {
+  drugId: 1,
+  concentrationPerMl: 1,
+  syringeVolumeMl: 50,
+  loadingDose: null,
+  demandDose: 1,
+  lockoutMinutes: 10,
+  basalRatePerHour: 0,
+  oneHourLimit: null,
+  fourHourLimit: 30,
+};
+const RELEASE = {
+  concentrationPerMl: 1,
+  volumeMl: 50,
+  batch: 'KB-77',
+  expiresAt: '2030-01-01T12:00:00Z',
+  preparedBy: 'Lin Park',
+  checkedBy: 'Tomas Ortiz',
+};
 const IDENTITY = { patientMrn: 'KB100231', patientDateOfBirth: '1968-03-14' };
 // Unremarkable values that raise no flag; pump totals that stay put, so the order in which the
 // server takes overlapping requests never matters.
-const OBSERVATION = { painScore: 3, sedationLevel: '1', respiratoryRate: 14, spo2: 97, attempts: 4, delivered: 3, volumeInfusedMl: 3, syringeRemainingMl: 47 };
+const OBSERVATION = {
+  painScore: 3,
+  sedationLevel: '1',
+  respiratoryRate: 14,
+  spo2: 97,
+  attempts: 4,
+  delivered: 3,
+  volumeInfusedMl: 3,
+  syringeRemainingMl: 47,
+};
 
 type Json = Record<string, unknown>;
 
-async function api<T = Json>(baseUrl: string, method: string, route: string, token: string | null, body: object | undefined, expected: number): Promise<T> {
+async function api<T = Json>(
+  baseUrl: string,
+  method: string,
+  route: string,
+  token: string | null,
+  body: object | undefined,
+  expected: number,
+): Promise<T> {
   const response = await fetch(`${baseUrl}/api${route}`, {
     method,
     headers: { ...(token ? { Authorization: `Bearer ${token}` } : {}), ...(body ? { 'Content-Type': 'application/json' } : {}) },
@@ -43,12 +89,21 @@ const signIn = async (baseUrl: string, username: string): Promise<string> =>
 
 /** Signed, verified, a syringe released and a matching two-nurse check: an active PCA. */
 async function activePca(baseUrl: string): Promise<number> {
-  const [prescriber, pharmacist, nurse] = await Promise.all(['amara.osei', 'lin.park', 'kai.mendes'].map((username) => signIn(baseUrl, username)));
+  const [prescriber, pharmacist, nurse] = await Promise.all(
+    ['amara.osei', 'lin.park', 'kai.mendes'].map((username) => signIn(baseUrl, username)),
+  );
   const { id } = await api(baseUrl, 'POST', '/orders', prescriber, ORDER, 201);
   await api(baseUrl, 'POST', `/orders/${id}/verify`, pharmacist, { signature: { password: PASSWORD } }, 200);
   const { releaseCode } = await api(baseUrl, 'POST', `/orders/${id}/releases`, pharmacist, RELEASE, 201);
   const first = await api(baseUrl, 'POST', `/orders/${id}/bedside-checks`, nurse, { ...IDENTITY, releaseCode, settings: SETTINGS }, 201);
-  await api(baseUrl, 'POST', `/orders/${id}/bedside-checks/${first.id}/second`, nurse, { username: 'rosa.adeyemi', password: PASSWORD, settings: SETTINGS }, 200);
+  await api(
+    baseUrl,
+    'POST',
+    `/orders/${id}/bedside-checks/${first.id}/second`,
+    nurse,
+    { username: 'rosa.adeyemi', password: PASSWORD, settings: SETTINGS },
+    200,
+  );
   return id as number;
 }
 
@@ -151,7 +206,15 @@ describe('crash safety of the built server', () => {
       // A random delay after the trigger (a request takes tens of milliseconds here) lands the
       // kill at varied points of the server's handling of one.
       const started = performance.now();
-      const result = await burst(running.baseUrl, orderId, nurse, thisBurst, () => thisBurst.length >= killAfter, running.kill, Math.random() * 200);
+      const result = await burst(
+        running.baseUrl,
+        orderId,
+        nurse,
+        thisBurst,
+        () => thisBurst.length >= killAfter,
+        running.kill,
+        Math.random() * 200,
+      );
       const msPerWrite = Math.round((performance.now() - started) / thisBurst.length);
       expect(result.inFlightAtStop, 'requests still in flight when the server was killed').toBeGreaterThan(0);
       answered.push(...thisBurst);
@@ -160,7 +223,10 @@ describe('crash safety of the built server', () => {
       const stored = storedObservationIds(databasePath, orderId);
       expect(stored.integrity).toBe('ok');
       expect(stored.foreignKeyProblems).toEqual([]);
-      expect(answered.filter((id) => !stored.ids.has(id)), 'answered 201 but missing after the restart').toEqual([]);
+      expect(
+        answered.filter((id) => !stored.ids.has(id)),
+        'answered 201 but missing after the restart',
+      ).toEqual([]);
       const listed = await api<{ id: number }[]>(server.baseUrl, 'GET', `/orders/${orderId}/observations`, nurse, undefined, 200);
       expect(listed.map((observation) => observation.id).sort((a, b) => a - b)).toEqual([...stored.ids].sort((a, b) => a - b));
       const chain = await api(server.baseUrl, 'GET', '/audit/verify', await signIn(server.baseUrl, 'sam.rivera'), undefined, 200);
@@ -188,14 +254,24 @@ describe('crash safety of the built server', () => {
     })();
     // The writes go on until 2 × WORKERS more were answered after the copy was done: at least
     // WORKERS of those were sent after it, so they cannot be in it.
-    await burst(running.baseUrl, orderId, nurse, during, () => answeredWhenDone >= 0 && during.length >= answeredWhenDone + 2 * WORKERS, async () => undefined);
+    await burst(
+      running.baseUrl,
+      orderId,
+      nurse,
+      during,
+      () => answeredWhenDone >= 0 && during.length >= answeredWhenDone + 2 * WORKERS,
+      async () => undefined,
+    );
     const { file, answeredBefore } = await copy;
 
     const backup = openReadOnly(file);
     try {
       expect(backup.pragma('integrity_check', { simple: true })).toBe('ok');
       const ids = new Set(backup.prepare('SELECT id FROM observations WHERE orderId = ?').pluck().all(orderId) as number[]);
-      expect([...answered, ...answeredBefore].filter((id) => !ids.has(id)), 'answered before the backup began but not in it').toEqual([]);
+      expect(
+        [...answered, ...answeredBefore].filter((id) => !ids.has(id)),
+        'answered before the backup began but not in it',
+      ).toEqual([]);
       expect(during.filter((id) => !ids.has(id)).length, 'writes sent after the backup was taken').toBeGreaterThanOrEqual(WORKERS);
     } finally {
       backup.close();
@@ -212,7 +288,9 @@ describe('crash safety of the built server', () => {
     const fromCli = openReadOnly(cliBackup);
     try {
       expect(fromCli.pragma('integrity_check', { simple: true })).toBe('ok');
-      expect((fromCli.prepare('SELECT COUNT(*) AS n FROM observations WHERE orderId = ?').get(orderId) as { n: number }).n).toBeGreaterThanOrEqual(answered.length + during.length);
+      expect(
+        (fromCli.prepare('SELECT COUNT(*) AS n FROM observations WHERE orderId = ?').get(orderId) as { n: number }).n,
+      ).toBeGreaterThanOrEqual(answered.length + during.length);
     } finally {
       fromCli.close();
     }

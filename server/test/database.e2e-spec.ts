@@ -48,7 +48,9 @@ describe('database', () => {
   it('rolls every migration back cleanly', async () => {
     const dataSource = await openFresh();
     for (let i = 0; i < dataSource.migrations.length; i++) await dataSource.undoLastMigration();
-    const tables = await dataSource.query(`SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT IN ('migrations', 'sqlite_sequence')`);
+    const tables = await dataSource.query(
+      `SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT IN ('migrations', 'sqlite_sequence')`,
+    );
     expect(tables).toEqual([]);
     await dataSource.destroy();
   });

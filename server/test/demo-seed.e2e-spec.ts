@@ -21,7 +21,11 @@ const WARDS = [1, 2, 3, 4];
 describe('the demo hospital, caught in the middle of a shift', () => {
   let t: TestApp;
   const token = {} as Record<Who, string>;
-  const get = (who: Who, url: string) => request(t.http).get(url).set({ Authorization: `Bearer ${token[who]}` }).expect(200);
+  const get = (who: Who, url: string) =>
+    request(t.http)
+      .get(url)
+      .set({ Authorization: `Bearer ${token[who]}` })
+      .expect(200);
   const board = async (wardId: number) => (await get('mei', `/api/wards/${wardId}/handover`)).body as HandoverBoard;
 
   beforeAll(async () => {
@@ -34,7 +38,12 @@ describe('the demo hospital, caught in the middle of a shift', () => {
     const { rows } = await board(HARBOUR);
     const running = rows.filter((row) => row.status === 'active');
     expect(running.length).toBeGreaterThanOrEqual(5);
-    expect(running.filter((row) => row.flags.urgent > 0).map((row) => row.flags.open.map((flag) => flag.code)).flat()).toContain('sedation.3');
+    expect(
+      running
+        .filter((row) => row.flags.urgent > 0)
+        .map((row) => row.flags.open.map((flag) => flag.code))
+        .flat(),
+    ).toContain('sedation.3');
     expect(running.some((row) => (row.nextObservation?.overdueMinutes ?? 0) > 0)).toBe(true);
     expect(running.some((row) => row.syringe.emptiesThisShift)).toBe(true);
     expect(rows.some((row) => row.pendingTasks.some((task) => task.code === 'reconciliation_discrepancy'))).toBe(true);
@@ -83,7 +92,8 @@ describe('the demo hospital, caught in the middle of a shift', () => {
       const last = new Map<number, { attempts: number; delivered: number; volumeInfusedMl: number }>();
       for (const reading of observations) {
         const before = last.get(reading.releaseId) ?? { attempts: 0, delivered: 0, volumeInfusedMl: 0 };
-        for (const counter of ['attempts', 'delivered', 'volumeInfusedMl'] as const) expect(reading[counter]).toBeGreaterThanOrEqual(before[counter]);
+        for (const counter of ['attempts', 'delivered', 'volumeInfusedMl'] as const)
+          expect(reading[counter]).toBeGreaterThanOrEqual(before[counter]);
         expect(reading.delivered).toBeLessThanOrEqual(reading.attempts);
         expect(reading.volumeInfusedMl + reading.syringeRemainingMl).toBeCloseTo(volumes.get(reading.releaseId)!, 6);
         last.set(reading.releaseId, reading);
@@ -100,11 +110,15 @@ describe('the demo hospital, caught in the middle of a shift', () => {
     expect(queue.length).toBeGreaterThan(0);
     const waiting = (await get('lin', `/api/orders/${queue[0].id}`)).body as OrderDetail;
     expect(waiting.overrides.length).toBeGreaterThan(0);
-    expect(waiting.findings.filter((finding) => finding.severity === 'soft').map((finding) => finding.field)).toEqual(expect.arrayContaining(waiting.overrides.map((o) => o.field)));
+    expect(waiting.findings.filter((finding) => finding.severity === 'soft').map((finding) => finding.field)).toEqual(
+      expect.arrayContaining(waiting.overrides.map((o) => o.field)),
+    );
 
     const nurseList = (await get('kai', `/api/orders?wardId=${HARBOUR}&status=verified,active`)).body as OrderSummary[];
     const toCheck = nurseList.find((order) => order.status === 'verified')!;
-    expect((await get('kai', `/api/orders/${toCheck.id}`)).body.releases.map((release: { status: string }) => release.status)).toEqual(['ready']);
+    expect((await get('kai', `/api/orders/${toCheck.id}`)).body.releases.map((release: { status: string }) => release.status)).toEqual([
+      'ready',
+    ]);
     expect(nurseList.filter((order) => order.status === 'active').length).toBeGreaterThanOrEqual(5);
 
     const returned = (await get('amara', '/api/orders?mine=true&status=returned')).body as OrderSummary[];
@@ -132,7 +146,13 @@ describe('the demo hospital, caught in the middle of a shift', () => {
     const { body: observations } = await get('kai', '/api/orders/5/observations');
     const story = (await get('kai', '/api/orders/5/audit')).body as { action: string; at: string }[];
     expect(story.filter((event) => event.action === 'order.observation')).toHaveLength(observations.length);
-    expect(story.slice(0, 5).map((event) => event.action)).toEqual(['order.create', 'order.verify', 'order.release', 'order.bedside-first-check', 'order.bedside-second-check']);
+    expect(story.slice(0, 5).map((event) => event.action)).toEqual([
+      'order.create',
+      'order.verify',
+      'order.release',
+      'order.bedside-first-check',
+      'order.bedside-second-check',
+    ]);
     expect(story.map((event) => event.at)).toEqual([...story.map((event) => event.at)].sort());
 
     const mail = (await get('sam', '/api/dev/mailbox')).body as { subject: string }[];
@@ -156,7 +176,9 @@ describe('the demo seed at any time of day', () => {
     return { dataSource, seconds };
   };
   const counts = (dataSource: DataSource) =>
-    dataSource.query(`SELECT (SELECT count(*) FROM observations) AS observations, (SELECT count(*) FROM flags) AS flags, (SELECT count(*) FROM release_reconciliations) AS reconciliations, (SELECT count(*) FROM pca_orders) AS orders`);
+    dataSource.query(
+      `SELECT (SELECT count(*) FROM observations) AS observations, (SELECT count(*) FROM flags) AS flags, (SELECT count(*) FROM release_reconciliations) AS reconciliations, (SELECT count(*) FROM pca_orders) AS orders`,
+    );
 
   let reference: DataSource;
   beforeAll(async () => {
@@ -165,21 +187,24 @@ describe('the demo seed at any time of day', () => {
   afterAll(() => reference.destroy());
 
   // Just before and after each shift change, and mid-shift: the board keeps its story whatever the clock.
-  it.each(['2026-12-03T18:59:30Z', '2026-12-03T19:00:30Z', '2026-12-04T06:45:00Z', '2026-12-04T07:01:00Z', '2026-12-04T13:00:00Z'])('seeded at %s', async (at) => {
-    const now = new Date(at);
-    const { dataSource, seconds } = await seedAt(at.replace(/\W/g, ''), now);
-    try {
-      expect(seconds).toBeLessThan(5);
-      const { rows } = await new HandoverBoardService(dataSource).board(HARBOUR, now);
-      const running = rows.filter((row) => row.status === 'active');
-      expect(running.length).toBeGreaterThanOrEqual(5);
-      expect(running.some((row) => row.flags.urgent > 0)).toBe(true);
-      expect(running.some((row) => (row.nextObservation?.overdueMinutes ?? 0) > 0)).toBe(true);
-      expect(running.some((row) => row.syringe.emptiesThisShift)).toBe(true);
-      // The same picture every time: only the clock moves.
-      expect(await counts(dataSource)).toEqual(await counts(reference));
-    } finally {
-      await dataSource.destroy();
-    }
-  });
+  it.each(['2026-12-03T18:59:30Z', '2026-12-03T19:00:30Z', '2026-12-04T06:45:00Z', '2026-12-04T07:01:00Z', '2026-12-04T13:00:00Z'])(
+    'seeded at %s',
+    async (at) => {
+      const now = new Date(at);
+      const { dataSource, seconds } = await seedAt(at.replace(/\W/g, ''), now);
+      try {
+        expect(seconds).toBeLessThan(5);
+        const { rows } = await new HandoverBoardService(dataSource).board(HARBOUR, now);
+        const running = rows.filter((row) => row.status === 'active');
+        expect(running.length).toBeGreaterThanOrEqual(5);
+        expect(running.some((row) => row.flags.urgent > 0)).toBe(true);
+        expect(running.some((row) => (row.nextObservation?.overdueMinutes ?? 0) > 0)).toBe(true);
+        expect(running.some((row) => row.syringe.emptiesThisShift)).toBe(true);
+        // The same picture every time: only the clock moves.
+        expect(await counts(dataSource)).toEqual(await counts(reference));
+      } finally {
+        await dataSource.destroy();
+      }
+    },
+  );
 });

@@ -15,7 +15,9 @@ const fhir = new (require('fhir') as FhirLibrary).Fhir();
 // @lhncbc/ucum-lhc is the shared package's dev dependency, found here through the workspace's hoisting.
 const ucum = (require('@lhncbc/ucum-lhc') as { UcumLhcUtils: { getInstance(): UcumUtils } }).UcumLhcUtils.getInstance();
 // The validator does not check Timing's periodUnit against its value set, so this test does.
-const UNITS_OF_TIME = (require('fhir/profiles/valuesets.json') as ValueSets)['http://hl7.org/fhir/ValueSet/units-of-time'].systems.flatMap((system) => system.codes.map(({ code }) => code));
+const UNITS_OF_TIME = (require('fhir/profiles/valuesets.json') as ValueSets)['http://hl7.org/fhir/ValueSet/units-of-time'].systems.flatMap(
+  (system) => system.codes.map(({ code }) => code),
+);
 
 const UCUM = 'http://unitsofmeasure.org';
 const FHIR_JSON = /^application\/fhir\+json/;
@@ -27,7 +29,15 @@ type Resource = { resourceType: string } & Record<string, unknown>;
 // ranges of a widely used clinical reference table (REFERENCES.md). Loading dose, basal rate,
 // 1-hour limit and clinician bolus are invented for the example (inside the demo library's soft
 // limits): the mapping does not depend on their clinical values.
-const WORKED = { ...ORDER, loadingDose: 2, basalRatePerHour: 0.5, oneHourLimit: 8, fourHourLimit: 30, clinicianBolusDose: 2, indication: 'Pain after laparotomy' };
+const WORKED = {
+  ...ORDER,
+  loadingDose: 2,
+  basalRatePerHour: 0.5,
+  oneHourLimit: 8,
+  fourHourLimit: 30,
+  clinicianBolusDose: 2,
+  indication: 'Pain after laparotomy',
+};
 const WORKED_SETTINGS = { ...SETTINGS, loadingDose: 2, basalRatePerHour: 0.5, oneHourLimit: 8, fourHourLimit: 30 };
 
 describe('FHIR R4 export', () => {
@@ -36,7 +46,10 @@ describe('FHIR R4 export', () => {
   const as = (role: Role) => ({ Authorization: `Bearer ${tokens[role]}` });
   const pcaTokens = () => ({ prescriber: tokens.prescriber, pharmacist: tokens.pharmacist, nurse: tokens.nurse });
   const signed = { signature: { password: DEMO_PASSWORD } };
-  const ids = {} as Record<'worked' | 'returned' | 'superseded' | 'revision' | 'rejected' | 'cancelled' | 'discontinued' | 'verified', number>;
+  const ids = {} as Record<
+    'worked' | 'returned' | 'superseded' | 'revision' | 'rejected' | 'cancelled' | 'discontinued' | 'verified',
+    number
+  >;
   let patientWithoutOrders: number;
   const validated = { resources: 0, unitCodes: new Set<string>(), unitChecks: 0 };
 
@@ -45,7 +58,10 @@ describe('FHIR R4 export', () => {
   /** Validates with the `fhir` package and every UCUM code and time unit inside, and counts them. */
   function expectValidFhir(resource: Resource): void {
     const result = fhir.validate(resource, { errorOnUnexpected: true });
-    expect(result.messages.filter((message) => message.severity !== 'info'), `${resource.resourceType} ${String(resource.id ?? '')}`).toEqual([]);
+    expect(
+      result.messages.filter((message) => message.severity !== 'info'),
+      `${resource.resourceType} ${String(resource.id ?? '')}`,
+    ).toEqual([]);
     expect(result.valid).toBe(true);
     validated.resources += 1;
     walk(resource, (node) => {
@@ -68,15 +84,37 @@ describe('FHIR R4 export', () => {
     ids.verified = 2;
     ids.worked = (await activeOrder(t.http, pcaTokens(), WORKED, WORKED_SETTINGS)).id;
     const { body: returned } = await request(t.http).get('/api/orders/3').set(as('prescriber')).expect(200);
-    const revision = { ...ORDER, patientId: returned.patientId, drugId: returned.drugId, doseUnit: 'mcg', concentrationPerMl: 10, demandDose: 20, lockoutMinutes: 8, fourHourLimit: 300, clinicianBolusDose: null };
+    const revision = {
+      ...ORDER,
+      patientId: returned.patientId,
+      drugId: returned.drugId,
+      doseUnit: 'mcg',
+      concentrationPerMl: 10,
+      demandDose: 20,
+      lockoutMinutes: 8,
+      fourHourLimit: 300,
+      clinicianBolusDose: null,
+    };
     ids.superseded = 3;
     ids.revision = (await request(t.http).post('/api/orders/3/revise').set(as('prescriber')).send(revision).expect(201)).body.id;
     ids.returned = 1;
-    await request(t.http).post('/api/orders/1/return').set(as('pharmacist')).send({ reason: 'Please confirm the 4-hour limit' }).expect(200);
+    await request(t.http)
+      .post('/api/orders/1/return')
+      .set(as('pharmacist'))
+      .send({ reason: 'Please confirm the 4-hour limit' })
+      .expect(200);
     ids.rejected = (await request(t.http).post('/api/orders').set(as('prescriber')).send(ORDER).expect(201)).body.id;
-    await request(t.http).post(`/api/orders/${ids.rejected}/reject`).set(as('pharmacist')).send({ reason: 'Duplicate of an active PCA' }).expect(200);
+    await request(t.http)
+      .post(`/api/orders/${ids.rejected}/reject`)
+      .set(as('pharmacist'))
+      .send({ reason: 'Duplicate of an active PCA' })
+      .expect(200);
     ids.cancelled = (await request(t.http).post('/api/orders').set(as('prescriber')).send(ORDER).expect(201)).body.id;
-    await request(t.http).post(`/api/orders/${ids.cancelled}/cancel`).set(as('prescriber')).send({ reason: 'Written for the wrong patient' }).expect(200);
+    await request(t.http)
+      .post(`/api/orders/${ids.cancelled}/cancel`)
+      .set(as('prescriber'))
+      .send({ reason: 'Written for the wrong patient' })
+      .expect(200);
     ids.discontinued = (await activeOrder(t.http, pcaTokens())).id;
     await request(t.http)
       .post(`/api/orders/${ids.discontinued}/discontinue`)
@@ -91,7 +129,9 @@ describe('FHIR R4 export', () => {
   });
 
   afterAll(async () => {
-    console.log(`FHIR export: ${validated.resources} resources validated with the fhir package, ${validated.unitChecks} UCUM codes checked (${[...validated.unitCodes].sort().join(', ')})`);
+    console.log(
+      `FHIR export: ${validated.resources} resources validated with the fhir package, ${validated.unitChecks} UCUM codes checked (${[...validated.unitCodes].sort().join(', ')})`,
+    );
     await t.close();
   });
 
@@ -112,26 +152,61 @@ describe('FHIR R4 export', () => {
       resourceType: 'MedicationRequest',
       id: String(ids.worked),
       contained: [
-        { resourceType: 'Medication', id: 'medication', code: { text: 'morphine' }, ingredient: [{ itemCodeableConcept: { text: 'morphine' }, isActive: true, strength: { numerator: mg(1), denominator: { value: 1, unit: 'mL', system: UCUM, code: 'mL' } } }] },
+        {
+          resourceType: 'Medication',
+          id: 'medication',
+          code: { text: 'morphine' },
+          ingredient: [
+            {
+              itemCodeableConcept: { text: 'morphine' },
+              isActive: true,
+              strength: { numerator: mg(1), denominator: { value: 1, unit: 'mL', system: UCUM, code: 'mL' } },
+            },
+          ],
+        },
       ],
       identifier: [{ system: 'https://lockstep.example/fhir/sid/pca-order', value: String(ids.worked) }],
       status: 'active',
       intent: 'order',
-      category: [{ coding: [{ system: 'http://terminology.hl7.org/CodeSystem/medicationrequest-category', code: 'inpatient', display: 'Inpatient' }] }],
+      category: [
+        {
+          coding: [{ system: 'http://terminology.hl7.org/CodeSystem/medicationrequest-category', code: 'inpatient', display: 'Inpatient' }],
+        },
+      ],
       medicationReference: { reference: '#medication', display: 'morphine 1 mg/mL' },
       subject: {
         type: 'Patient',
-        identifier: { type: { coding: [{ system: 'http://terminology.hl7.org/CodeSystem/v2-0203', code: 'MR' }], text: 'MRN' }, system: 'https://lockstep.example/fhir/sid/mrn', value: 'KB100231' },
+        identifier: {
+          type: { coding: [{ system: 'http://terminology.hl7.org/CodeSystem/v2-0203', code: 'MR' }], text: 'MRN' },
+          system: 'https://lockstep.example/fhir/sid/mrn',
+          value: 'KB100231',
+        },
         display: 'ACHTERBERG, Noah',
       },
       authoredOn: order.signedAt,
-      requester: { type: 'Practitioner', identifier: { system: 'https://lockstep.example/fhir/sid/user', value: String(order.prescriberId) }, display: 'Dr Amara Osei' },
+      requester: {
+        type: 'Practitioner',
+        identifier: { system: 'https://lockstep.example/fhir/sid/user', value: String(order.prescriberId) },
+        display: 'Dr Amara Osei',
+      },
       reasonCode: [{ text: 'Pain after laparotomy' }],
       note: [{ text: 'Review by 2030-01-02' }],
       dosageInstruction: [
-        { sequence: 1, text: 'Loading dose 2 mg intravenously, once, before the PCA starts', timing: { repeat: { count: 1 } }, route: { text: 'Intravenous' }, method: { text: 'Loading dose' }, doseAndRate: [{ doseQuantity: mg(2) }] },
         {
-          extension: [{ url: 'https://lockstep.example/fhir/StructureDefinition/pca-lockout-interval', valueDuration: { value: 10, unit: 'min', system: UCUM, code: 'min' } }],
+          sequence: 1,
+          text: 'Loading dose 2 mg intravenously, once, before the PCA starts',
+          timing: { repeat: { count: 1 } },
+          route: { text: 'Intravenous' },
+          method: { text: 'Loading dose' },
+          doseAndRate: [{ doseQuantity: mg(2) }],
+        },
+        {
+          extension: [
+            {
+              url: 'https://lockstep.example/fhir/StructureDefinition/pca-lockout-interval',
+              valueDuration: { value: 10, unit: 'min', system: UCUM, code: 'min' },
+            },
+          ],
           sequence: 2,
           text: 'Demand dose 1 mg intravenously when the patient presses the button; lockout 10 min',
           timing: { repeat: { frequency: 1, period: 10, periodUnit: 'min' } },
@@ -140,9 +215,23 @@ describe('FHIR R4 export', () => {
           method: { text: 'Patient-controlled demand dose' },
           doseAndRate: [{ doseQuantity: mg(1) }],
         },
-        { sequence: 2, text: 'Basal rate 0.5 mg/h intravenously, continuous', route: { text: 'Intravenous' }, method: { text: 'Continuous infusion' }, doseAndRate: [{ rateQuantity: { value: 0.5, unit: 'mg/h', system: UCUM, code: 'mg/h' } }] },
-        { sequence: 2, text: '1-hour limit: at most 8 mg in any hour, demand doses and basal rate together', maxDosePerPeriod: { numerator: mg(8), denominator: hours(1) } },
-        { sequence: 2, text: '4-hour limit: at most 30 mg in any 4 hours, demand doses and basal rate together', maxDosePerPeriod: { numerator: mg(30), denominator: hours(4) } },
+        {
+          sequence: 2,
+          text: 'Basal rate 0.5 mg/h intravenously, continuous',
+          route: { text: 'Intravenous' },
+          method: { text: 'Continuous infusion' },
+          doseAndRate: [{ rateQuantity: { value: 0.5, unit: 'mg/h', system: UCUM, code: 'mg/h' } }],
+        },
+        {
+          sequence: 2,
+          text: '1-hour limit: at most 8 mg in any hour, demand doses and basal rate together',
+          maxDosePerPeriod: { numerator: mg(8), denominator: hours(1) },
+        },
+        {
+          sequence: 2,
+          text: '4-hour limit: at most 30 mg in any 4 hours, demand doses and basal rate together',
+          maxDosePerPeriod: { numerator: mg(30), denominator: hours(4) },
+        },
         {
           sequence: 2,
           text: "Clinician bolus 2 mg intravenously as needed for breakthrough pain, given by a nurse with a second nurse's check",
@@ -234,7 +323,10 @@ describe('FHIR R4 export', () => {
     for (const [call, status, code] of cases) {
       const response = await call.expect(status);
       expect(response.headers['content-type']).toMatch(FHIR_JSON);
-      expect(response.body).toEqual({ resourceType: 'OperationOutcome', issue: [{ severity: 'error', code, diagnostics: expect.any(String) }] });
+      expect(response.body).toEqual({
+        resourceType: 'OperationOutcome',
+        issue: [{ severity: 'error', code, diagnostics: expect.any(String) }],
+      });
       expectValidFhir(response.body);
     }
     expect((await getFhir('MedicationRequest/999999')).body.issue[0].diagnostics).toBe('No order with id 999999');

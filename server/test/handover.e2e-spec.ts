@@ -15,7 +15,14 @@ describe('handover board', () => {
   beforeAll(async () => {
     t = await createTestApp();
     dataSource = t.app.get<DataSource>(getDataSourceToken());
-    for (const [who, username] of [['mei', 'mei.tan'], ['kai', 'kai.mendes'], ['rosa', 'rosa.adeyemi'], ['amara', 'amara.osei'], ['sam', 'sam.rivera']] as const) token[who] = await t.tokenFor(username);
+    for (const [who, username] of [
+      ['mei', 'mei.tan'],
+      ['kai', 'kai.mendes'],
+      ['rosa', 'rosa.adeyemi'],
+      ['amara', 'amara.osei'],
+      ['sam', 'sam.rivera'],
+    ] as const)
+      token[who] = await t.tokenFor(username);
   });
   afterAll(() => t.close());
 
@@ -32,7 +39,13 @@ describe('handover board', () => {
     const response = await request(t.http).get(`/api/wards/${wardId}/handover`).set(as('mei')).expect(200);
     expect(response.body.rows.map((row: { bed: string }) => row.bed)).toEqual(['R5', 'R8', 'R7', 'R3', 'R2', 'R10']);
     const r8 = response.body.rows[1];
-    expect(r8).toMatchObject({ riskTier: 1, status: 'active', drugName: 'morphine', doseUnit: 'mg', nextObservation: { severity: 'urgent' } });
+    expect(r8).toMatchObject({
+      riskTier: 1,
+      status: 'active',
+      drugName: 'morphine',
+      doseUnit: 'mg',
+      nextObservation: { severity: 'urgent' },
+    });
     expect(r8.nextObservation.overdueMinutes).toBeGreaterThanOrEqual(139);
     expect(response.body.rows[0].flags).toMatchObject({ urgent: 1, open: [{ code: 'sedation.3' }] });
     expect(response.body.rows[3].syringe).toMatchObject({ remainingMl: 0.5, emptiesThisShift: true });
@@ -47,7 +60,8 @@ describe('handover board', () => {
   });
 
   it('costs the same number of queries for 5 patients as for 50', async () => {
-    const beds = (n: number): FixtureBed[] => Array.from({ length: n }, (_, i) => ({ bed: `Q${i + 1}`, startedMinutesAgo: 200, observedMinutesAgo: 30 + (i % 50) }));
+    const beds = (n: number): FixtureBed[] =>
+      Array.from({ length: n }, (_, i) => ({ bed: `Q${i + 1}`, startedMinutesAgo: 200, observedMinutesAgo: 30 + (i % 50) }));
     const small = await seedBoardWard(dataSource, 'QS', beds(5));
     const large = await seedBoardWard(dataSource, 'QL', beds(50));
     const smallQueries = await queryCounter.measure(() => request(t.http).get(`/api/wards/${small}/handover`).set(as('mei')).expect(200));
@@ -74,7 +88,11 @@ describe('handover board', () => {
     await request(t.http).post(url).set(as('kai')).send({ orderId, role: 'incoming', pumpSettingsMatch: true }).expect(400);
     const refused = await request(t.http).post(url).set(as('rosa')).send({ orderId, role: 'incoming' }).expect(400);
     expect(refused.body.errors[0].field).toBe('pumpSettingsMatch');
-    const incoming = await request(t.http).post(url).set(as('rosa')).send({ orderId, role: 'incoming', pumpSettingsMatch: true }).expect(201);
+    const incoming = await request(t.http)
+      .post(url)
+      .set(as('rosa'))
+      .send({ orderId, role: 'incoming', pumpSettingsMatch: true })
+      .expect(201);
     expect(incoming.body).toMatchObject({ role: 'incoming', nurseName: 'Rosa Adeyemi', pumpSettingsMatch: true });
     const after = await request(t.http).get(`/api/wards/${wardId}/handover`).set(as('mei')).expect(200);
     expect(after.body.rows[0].signoffs.map((s: { role: string }) => s.role)).toEqual(['outgoing', 'incoming']);
@@ -89,13 +107,25 @@ describe('handover board', () => {
     await new Promise<void>((resolve) => t.app.getHttpServer().listen(0, resolve));
     const port = (t.app.getHttpServer().address() as { port: number }).port;
     const controller = new AbortController();
-    const response = await fetch(`http://127.0.0.1:${port}/api/wards/${wardId}/handover/stream`, { headers: as('mei'), signal: controller.signal });
+    const response = await fetch(`http://127.0.0.1:${port}/api/wards/${wardId}/handover/stream`, {
+      headers: as('mei'),
+      signal: controller.signal,
+    });
     expect(response.headers.get('content-type')).toContain('text/event-stream');
     const reader = response.body!.getReader();
     await request(t.http)
       .post(`/api/orders/${orderId}/observations`)
       .set(as('kai'))
-      .send({ painScore: 2, sedationLevel: '1', respiratoryRate: 14, spo2: 97, attempts: 13, delivered: 11, volumeInfusedMl: 11, syringeRemainingMl: 39 })
+      .send({
+        painScore: 2,
+        sedationLevel: '1',
+        respiratoryRate: 14,
+        spo2: 97,
+        attempts: 13,
+        delivered: 11,
+        volumeInfusedMl: 11,
+        syringeRemainingMl: 39,
+      })
       .expect(201);
     let text = '';
     while (!text.includes('ward-change')) text += new TextDecoder().decode((await reader.read()).value);

@@ -76,7 +76,9 @@ describe('hardening', () => {
     it('locks an address after too many wrong passwords across usernames (8 in this file; 50 by default)', async () => {
       for (let i = 0; i < 8; i++) await login(`guess.${i}`, WRONG, '10.0.4.1').expect(401);
       const locked = await login('amara.osei', DEMO_PASSWORD, '10.0.4.1').expect(429);
-      expect(locked.body.message).toBe('Too many wrong passwords from this computer. Wait 15 minutes and try again, or ask an admin to unlock it.');
+      expect(locked.body.message).toBe(
+        'Too many wrong passwords from this computer. Wait 15 minutes and try again, or ask an admin to unlock it.',
+      );
       expect(locked.headers['retry-after']).toEqual(expect.stringMatching(/^\d+$/));
       await login('amara.osei', DEMO_PASSWORD, '10.0.4.2').expect(200);
 
@@ -85,9 +87,17 @@ describe('hardening', () => {
     });
 
     it('counts a wrong signature password: a pharmacist verifying an order is locked after 5, and so is their sign-in', async () => {
-      const { body: order } = await request(t.http).post('/api/orders').set(bearer(prescriber)).send({ ...PCA_ORDER, indication: 'Pain after surgery' }).expect(201);
+      const { body: order } = await request(t.http)
+        .post('/api/orders')
+        .set(bearer(prescriber))
+        .send({ ...PCA_ORDER, indication: 'Pain after surgery' })
+        .expect(201);
       const verify = (password: string) =>
-        request(t.http).post(`/api/orders/${order.id}/verify`).set(bearer(pharmacist)).set('X-Forwarded-For', '10.0.5.1').send({ signature: { password } });
+        request(t.http)
+          .post(`/api/orders/${order.id}/verify`)
+          .set(bearer(pharmacist))
+          .set('X-Forwarded-For', '10.0.5.1')
+          .send({ signature: { password } });
       for (let i = 0; i < 5; i++) {
         const wrong = await verify(WRONG).expect(401);
         expect(wrong.body.errors).toEqual([{ field: 'signature.password', message: 'The password you signed with is not correct' }]);
@@ -110,10 +120,22 @@ describe('hardening', () => {
     });
 
     it('counts a colleague’s wrong password at the bedside check against the colleague', async () => {
-      const started = await verifiedOrderWithSyringe(t.http, { prescriber, pharmacist, nurse }, { ...PCA_ORDER, indication: 'Pain after surgery' });
-      const first = await request(t.http).post(`/api/orders/${started.id}/bedside-checks`).set(bearer(nurse)).send({ ...IDENTITY, releaseCode: started.code, settings: SETTINGS }).expect(201);
+      const started = await verifiedOrderWithSyringe(
+        t.http,
+        { prescriber, pharmacist, nurse },
+        { ...PCA_ORDER, indication: 'Pain after surgery' },
+      );
+      const first = await request(t.http)
+        .post(`/api/orders/${started.id}/bedside-checks`)
+        .set(bearer(nurse))
+        .send({ ...IDENTITY, releaseCode: started.code, settings: SETTINGS })
+        .expect(201);
       const second = (password: string) =>
-        request(t.http).post(`/api/orders/${started.id}/bedside-checks/${first.body.id}/second`).set(bearer(nurse)).set('X-Forwarded-For', '10.0.6.1').send({ ...ROSA, password, settings: SETTINGS });
+        request(t.http)
+          .post(`/api/orders/${started.id}/bedside-checks/${first.body.id}/second`)
+          .set(bearer(nurse))
+          .set('X-Forwarded-For', '10.0.6.1')
+          .send({ ...ROSA, password, settings: SETTINGS });
       for (let i = 0; i < 5; i++) await second(WRONG).expect(401);
       const locked = await second(DEMO_PASSWORD).expect(429);
       expect(locked.body.message).toMatch(/^Too many wrong passwords for rosa\.adeyemi\./);
@@ -126,7 +148,10 @@ describe('hardening', () => {
         await Promise.all(Array.from({ length: 6 }, () => login('amara.osei', DEMO_PASSWORD, '10.0.7.1').expect(200)));
       }
       const limited = await login('amara.osei', DEMO_PASSWORD, '10.0.7.1').expect(429);
-      expect(limited.body).toEqual({ statusCode: 429, message: expect.stringMatching(/^Too many sign-ins and signatures from this computer in a short time\. Wait \d+ seconds/) });
+      expect(limited.body).toEqual({
+        statusCode: 429,
+        message: expect.stringMatching(/^Too many sign-ins and signatures from this computer in a short time\. Wait \d+ seconds/),
+      });
       expect(Number(limited.headers['retry-after'])).toBeGreaterThan(0);
       // Requests without a password are not limited.
       await request(t.http).get('/api/auth/me').set(bearer(admin)).set('X-Forwarded-For', '10.0.7.1').expect(200);
@@ -158,7 +183,9 @@ describe('hardening', () => {
       await request(t.http).post('/api/auth/logout').set(bearer(here)).expect(401);
       await request(t.http).get('/api/auth/me').set(bearer(elsewhere)).expect(200);
 
-      const [row] = await t.app.get(DataSource).query('SELECT userId, expiresAt FROM revoked_tokens WHERE jti = ?', [jwt.decode<{ jti: string }>(here).jti]);
+      const [row] = await t.app
+        .get(DataSource)
+        .query('SELECT userId, expiresAt FROM revoked_tokens WHERE jti = ?', [jwt.decode<{ jti: string }>(here).jti]);
       expect(row.userId).toBe(6);
       const audit = await request(t.http).get('/api/audit?action=user.sign-out&limit=1').set(bearer(admin)).expect(200);
       expect(audit.body.events[0]).toMatchObject({ action: 'user.sign-out', entityType: 'user', entityId: '6', actorName: 'Mei Tan' });
@@ -174,8 +201,15 @@ describe('hardening', () => {
     });
 
     it('clears revoked tokens once they would have expired anyway', async () => {
-      await t.app.get(DataSource).query(`INSERT INTO revoked_tokens (jti, userId, expiresAt) VALUES ('00000000-0000-4000-8000-000000000000', 4, '2020-01-01 00:00:00.000')`);
-      await request(t.http).post('/api/auth/logout').set(bearer(await t.tokenFor('kai.mendes'))).expect(204);
+      await t.app
+        .get(DataSource)
+        .query(
+          `INSERT INTO revoked_tokens (jti, userId, expiresAt) VALUES ('00000000-0000-4000-8000-000000000000', 4, '2020-01-01 00:00:00.000')`,
+        );
+      await request(t.http)
+        .post('/api/auth/logout')
+        .set(bearer(await t.tokenFor('kai.mendes')))
+        .expect(204);
       expect(await t.app.get(DataSource).query(`SELECT jti FROM revoked_tokens WHERE expiresAt < '2026-01-01'`)).toEqual([]);
     });
 
@@ -189,7 +223,13 @@ describe('hardening', () => {
     it('sends the security headers and keeps API answers out of the browser cache', async () => {
       const response = await request(t.http).get('/api/health').expect(200);
       const csp = response.headers['content-security-policy'];
-      for (const directive of ["default-src 'self'", "script-src 'self'", "style-src 'self' 'unsafe-inline'", "object-src 'none'", "frame-ancestors 'none'"]) {
+      for (const directive of [
+        "default-src 'self'",
+        "script-src 'self'",
+        "style-src 'self' 'unsafe-inline'",
+        "object-src 'none'",
+        "frame-ancestors 'none'",
+      ]) {
         expect(csp).toContain(directive);
       }
       expect(csp).not.toContain('upgrade-insecure-requests');
@@ -225,7 +265,11 @@ describe('hardening', () => {
     });
 
     it('answers malformed JSON with a clear 400 and no stack trace', async () => {
-      const response = await request(t.http).post('/api/auth/login').set('Content-Type', 'application/json').send('{"username": "kai.mendes",').expect(400);
+      const response = await request(t.http)
+        .post('/api/auth/login')
+        .set('Content-Type', 'application/json')
+        .send('{"username": "kai.mendes",')
+        .expect(400);
       expect(response.body).toEqual({ statusCode: 400, message: 'The request body is not valid JSON' });
     });
 
@@ -243,7 +287,10 @@ describe('hardening', () => {
       const logger: LoggerService = { log: capture, error: capture, warn: capture, debug: capture, verbose: capture, fatal: capture };
       t.app.useLogger(logger);
       try {
-        const signedIn = await request(t.http).post('/api/auth/login').send({ username: 'kai.mendes', password: DEMO_PASSWORD }).expect(200);
+        const signedIn = await request(t.http)
+          .post('/api/auth/login')
+          .send({ username: 'kai.mendes', password: DEMO_PASSWORD })
+          .expect(200);
         await request(t.http).get('/api/auth/me?token=secret-in-url').set(bearer(signedIn.body.accessToken)).expect(200);
         await request(t.http).post('/api/auth/login').send({ username: 'kai.mendes', password: 'a-wrong-secret' }).expect(401);
         // The entry is written when the server closes the answer, a moment after the client has it.

@@ -44,9 +44,18 @@ describe('dose-limit library', () => {
     await request(t.http).post('/api/library/versions').set(auth).send({ wardId: CEDAR }).expect(403);
     await request(t.http).put('/api/library/versions/1/rules').set(auth).send({ rules: [] }).expect(403);
     await request(t.http).post('/api/library/versions/1/submit').set(auth).send({}).expect(403);
-    await request(t.http).post('/api/library/versions/5/approve').set(auth).send({ signature: { password: DEMO_PASSWORD } }).expect(403);
+    await request(t.http)
+      .post('/api/library/versions/5/approve')
+      .set(auth)
+      .send({ signature: { password: DEMO_PASSWORD } })
+      .expect(403);
     await request(t.http).delete('/api/library/versions/1').set(auth).expect(403);
-    await request(t.http).post('/api/library/import').set(auth).field('wardId', CEDAR).attach('file', Buffer.from(GOOD_CSV), 'limits.csv').expect(403);
+    await request(t.http)
+      .post('/api/library/import')
+      .set(auth)
+      .field('wardId', CEDAR)
+      .attach('file', Buffer.from(GOOD_CSV), 'limits.csv')
+      .expect(403);
   });
 
   it('lists versions with their status and rule counts', async () => {
@@ -64,7 +73,12 @@ describe('dose-limit library', () => {
     expect(diff.body.added).toEqual([]);
     expect(diff.body.removed).toEqual([]);
     expect(diff.body.changed).toEqual([
-      { drugName: 'morphine', concentrationPerMl: 1, doseUnit: 'mg', changes: [{ field: 'demandDose', limit: 'softMax', from: 2, to: 1.5 }] },
+      {
+        drugName: 'morphine',
+        concentrationPerMl: 1,
+        doseUnit: 'mg',
+        changes: [{ field: 'demandDose', limit: 'softMax', from: 2, to: 1.5 }],
+      },
     ]);
   });
 
@@ -90,7 +104,12 @@ describe('dose-limit library', () => {
     ['a file with the wrong columns', Buffer.from('drug,dose\nmorphine,1'), 'limits.csv', 'The file has'],
     ['a file over 1 MB', Buffer.alloc(1024 * 1024 + 10, 'a'), 'big.csv', 'over 1 MB'],
     // Which hard_max would count is a guess about a limit: refused, not picked.
-    ['a file with a column twice', Buffer.from(`${HEADER},hard_max\nmorphine,1,mg,no,demand_dose,0.2,0.5,1.8,3,30`), 'limits.csv', 'The file has 1 problem'],
+    [
+      'a file with a column twice',
+      Buffer.from(`${HEADER},hard_max\nmorphine,1,mg,no,demand_dose,0.2,0.5,1.8,3,30`),
+      'limits.csv',
+      'The file has 1 problem',
+    ],
   ])('refuses %s with a clear 400', async (_label, content, filename, message) => {
     const response = await request(t.http)
       .post('/api/library/import')
@@ -156,12 +175,24 @@ describe('dose-limit library', () => {
     const { submittedAt } = submitted.body;
     await request(t.http).put(`/api/library/versions/${id}/rules`).set(as(tokens.pharmacist)).send({ rules: [] }).expect(409);
 
-    const self = await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tokens.pharmacist)).send(signed(submittedAt)).expect(403);
+    const self = await request(t.http)
+      .post(`/api/library/versions/${id}/approve`)
+      .set(as(tokens.pharmacist))
+      .send(signed(submittedAt))
+      .expect(403);
     expect(self.body.message).toContain('second pharmacist');
-    const wrongPassword = await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tomas)).send(signed(submittedAt, 'not-it')).expect(401);
+    const wrongPassword = await request(t.http)
+      .post(`/api/library/versions/${id}/approve`)
+      .set(as(tomas))
+      .send(signed(submittedAt, 'not-it'))
+      .expect(401);
     expect(wrongPassword.body.errors[0].field).toBe('signature.password');
     await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tomas)).send({}).expect(400);
-    const unnamed = await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tomas)).send({ signature: { password: DEMO_PASSWORD } }).expect(400);
+    const unnamed = await request(t.http)
+      .post(`/api/library/versions/${id}/approve`)
+      .set(as(tomas))
+      .send({ signature: { password: DEMO_PASSWORD } })
+      .expect(400);
     expect(unnamed.body.errors).toEqual([{ field: 'submittedAt', message: 'submittedAt is required: the submission you reviewed' }]);
 
     const approved = await request(t.http).post(`/api/library/versions/${id}/approve`).set(as(tomas)).send(signed(submittedAt)).expect(200);
@@ -179,15 +210,29 @@ describe('dose-limit library', () => {
   });
 
   it('refuses an approval of a version withdrawn, edited and submitted again after the approver opened it', async () => {
-    const draft = await request(t.http).post('/api/library/versions').set(as(tokens.pharmacist)).send({ wardId: CEDAR, note: 'Second look' }).expect(201);
+    const draft = await request(t.http)
+      .post('/api/library/versions')
+      .set(as(tokens.pharmacist))
+      .send({ wardId: CEDAR, note: 'Second look' })
+      .expect(201);
     const id = draft.body.id;
     const reviewed = await request(t.http).post(`/api/library/versions/${id}/submit`).set(as(tokens.pharmacist)).send({}).expect(200);
 
     // The author takes it back, drops a rule and submits again while Tomas has it open.
     await request(t.http).post(`/api/library/versions/${id}/withdraw`).set(as(tokens.pharmacist)).expect(200);
-    const rules = draft.body.rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }: Record<string, unknown>) => ({ drugId, concentrationPerMl, doseUnit, perKg, limits }));
+    const rules = draft.body.rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }: Record<string, unknown>) => ({
+      drugId,
+      concentrationPerMl,
+      doseUnit,
+      perKg,
+      limits,
+    }));
     expect(rules.length).toBeGreaterThan(1);
-    await request(t.http).put(`/api/library/versions/${id}/rules`).set(as(tokens.pharmacist)).send({ rules: rules.slice(1) }).expect(200);
+    await request(t.http)
+      .put(`/api/library/versions/${id}/rules`)
+      .set(as(tokens.pharmacist))
+      .send({ rules: rules.slice(1) })
+      .expect(200);
     const resubmitted = await request(t.http).post(`/api/library/versions/${id}/submit`).set(as(tokens.pharmacist)).send({}).expect(200);
     expect(resubmitted.body.submittedAt).not.toBe(reviewed.body.submittedAt);
 
@@ -223,9 +268,17 @@ describe('dose-limit library', () => {
   });
 
   it('edits a draft: limits out of order and a duplicate rule are refused with the path of each', async () => {
-    const draft = await request(t.http).post('/api/library/versions').set(as(tokens.pharmacist)).send({ wardId: 4, note: 'Edit test' }).expect(201);
+    const draft = await request(t.http)
+      .post('/api/library/versions')
+      .set(as(tokens.pharmacist))
+      .send({ wardId: 4, note: 'Edit test' })
+      .expect(201);
     const rule = { drugId: 1, concentrationPerMl: 1, doseUnit: 'mg', perKg: false, limits: { demandDose: { softMax: 2, hardMax: 1 } } };
-    const response = await request(t.http).put(`/api/library/versions/${draft.body.id}/rules`).set(as(tokens.pharmacist)).send({ rules: [rule, rule] }).expect(400);
+    const response = await request(t.http)
+      .put(`/api/library/versions/${draft.body.id}/rules`)
+      .set(as(tokens.pharmacist))
+      .send({ rules: [rule, rule] })
+      .expect(400);
     expect(response.body.errors.map((e: { field: string }) => e.field).sort()).toEqual([
       'rules.0.limits.demandDose.hardMax',
       'rules.1.concentrationPerMl',

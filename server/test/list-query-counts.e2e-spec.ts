@@ -14,7 +14,12 @@ type Who = 'mei' | 'kai' | 'lin' | 'sam';
 const USERNAMES: Record<Who, string> = { mei: 'mei.tan', kai: 'kai.mendes', lin: 'lin.park', sam: 'sam.rivera' };
 
 const beds = (prefix: string, n: number): FixtureBed[] =>
-  Array.from({ length: n }, (_, i) => ({ bed: `${prefix}${i + 1}`, startedMinutesAgo: 300, observedMinutesAgo: 20 + i, urgentFlag: i % 3 === 0 }));
+  Array.from({ length: n }, (_, i) => ({
+    bed: `${prefix}${i + 1}`,
+    startedMinutesAgo: 300,
+    observedMinutesAgo: 20 + i,
+    urgentFlag: i % 3 === 0,
+  }));
 
 describe('list endpoints cost a fixed number of queries, however many rows', () => {
   let t: TestApp;
@@ -27,13 +32,18 @@ describe('list endpoints cost a fixed number of queries, however many rows', () 
 
   const queries = (who: Who, url: string) =>
     queryCounter.measure(async () => {
-      const response = await request(t.http).get(url).set({ Authorization: `Bearer ${token[who]}` });
+      const response = await request(t.http)
+        .get(url)
+        .set({ Authorization: `Bearer ${token[who]}` });
       expect(response.status, `${url}: ${JSON.stringify(response.body).slice(0, 200)}`).toBe(200);
     });
 
   /** The first active order of a ward, and its running syringe. */
   const runningOrder = async (wardId: number) => {
-    const [row] = await dataSource.query(`SELECT o.id FROM pca_orders o JOIN patients p ON p.id = o.patientId WHERE p.wardId = ? AND o.status = 'active' ORDER BY o.id LIMIT 1`, [wardId]);
+    const [row] = await dataSource.query(
+      `SELECT o.id FROM pca_orders o JOIN patients p ON p.id = o.patientId WHERE p.wardId = ? AND o.status = 'active' ORDER BY o.id LIMIT 1`,
+      [wardId],
+    );
     const release = await dataSource.manager.findOneByOrFail(SyringeRelease, { orderId: row.id, status: 'in_use' });
     return { orderId: row.id as number, releaseId: release.id };
   };

@@ -5,14 +5,25 @@ import { type MailboxMessage, waitForMail } from './support/mailbox.js';
 import { activeOrder, ORDER, SETTINGS } from './support/pca.js';
 import { createTestApp, type TestApp } from './support/test-app.js';
 
-const CALM = { painScore: 3, sedationLevel: '1', respiratoryRate: 14, spo2: 97, attempts: 4, delivered: 3, volumeInfusedMl: 3, syringeRemainingMl: 47 };
+const CALM = {
+  painScore: 3,
+  sedationLevel: '1',
+  respiratoryRate: 14,
+  spo2: 97,
+  attempts: 4,
+  delivered: 3,
+  volumeInfusedMl: 3,
+  syringeRemainingMl: 47,
+};
 
 describe('observations, flags, usage and ward policy', () => {
   let t: TestApp;
   const token = {} as Record<'amara' | 'lin' | 'kai' | 'mei' | 'sam', string>;
   const as = (who: keyof typeof token) => ({ Authorization: `Bearer ${token[who]}` });
-  const observe = (id: number, body: object, who: keyof typeof token = 'kai') => request(t.http).post(`/api/orders/${id}/observations`).set(as(who)).send(body);
-  const start = (order: object = ORDER, settings: object = SETTINGS) => activeOrder(t.http, { prescriber: token.amara, pharmacist: token.lin, nurse: token.kai }, order, settings);
+  const observe = (id: number, body: object, who: keyof typeof token = 'kai') =>
+    request(t.http).post(`/api/orders/${id}/observations`).set(as(who)).send(body);
+  const start = (order: object = ORDER, settings: object = SETTINGS) =>
+    activeOrder(t.http, { prescriber: token.amara, pharmacist: token.lin, nurse: token.kai }, order, settings);
 
   beforeAll(async () => {
     t = await createTestApp();
@@ -65,8 +76,15 @@ describe('observations, flags, usage and ward policy', () => {
 
     const flagId = response.body.flags[0].id;
     await request(t.http).post(`/api/flags/${flagId}/acknowledge`).set(as('kai')).send({ note: 'no' }).expect(400);
-    const acknowledged = await request(t.http).post(`/api/flags/${flagId}/acknowledge`).set(as('kai')).send({ note: 'PCA paused, prescriber called, dose reduced' }).expect(200);
-    expect(acknowledged.body).toMatchObject({ acknowledgedByName: 'Kai Mendes', acknowledgeNote: 'PCA paused, prescriber called, dose reduced' });
+    const acknowledged = await request(t.http)
+      .post(`/api/flags/${flagId}/acknowledge`)
+      .set(as('kai'))
+      .send({ note: 'PCA paused, prescriber called, dose reduced' })
+      .expect(200);
+    expect(acknowledged.body).toMatchObject({
+      acknowledgedByName: 'Kai Mendes',
+      acknowledgeNote: 'PCA paused, prescriber called, dose reduced',
+    });
     await request(t.http).post(`/api/flags/${flagId}/acknowledge`).set(as('mei')).send({ note: 'Seen and agreed' }).expect(409);
     await request(t.http).post(`/api/flags/${flagId}/acknowledge`).set(as('sam')).send({ note: 'Admin cannot do this' }).expect(403);
   });
@@ -76,7 +94,12 @@ describe('observations, flags, usage and ward policy', () => {
     await request(t.http)
       .post(`/api/orders/${order.id}/discontinue`)
       .set(as('kai'))
-      .send({ reason: 'Prescriber stopped the PCA today', volumeInfusedMl: 0, wastedMl: 50, witness: { username: 'rosa.adeyemi', password: 'lockstep-demo' } })
+      .send({
+        reason: 'Prescriber stopped the PCA today',
+        volumeInfusedMl: 0,
+        wastedMl: 50,
+        witness: { username: 'rosa.adeyemi', password: 'lockstep-demo' },
+      })
       .expect(200);
     await observe(order.id, CALM).expect(409);
   });
@@ -132,14 +155,29 @@ describe('observations, flags, usage and ward policy', () => {
     expect(first.body.flags.map((f: { code: string }) => f.code)).toContain('syringe.low');
     const again = await observe(order.id, { ...low, attempts: 41, delivered: 41, volumeInfusedMl: 49, syringeRemainingMl: 1 }).expect(201);
     expect(again.body.flags.map((f: { code: string }) => f.code)).not.toContain('syringe.low');
-    await waitForMail(t.http, token.sam, (m) => m.subject.startsWith('PCA syringe running low') && m.to === 'pharmacy.harbour@kestrelbay.example');
+    await waitForMail(
+      t.http,
+      token.sam,
+      (m) => m.subject.startsWith('PCA syringe running low') && m.to === 'pharmacy.harbour@kestrelbay.example',
+    );
   });
 
   it('lets the admin change a ward policy, names bad fields, and refuses other roles', async () => {
     const policy = await request(t.http).get('/api/wards/1/policy').set(as('kai')).expect(200);
-    expect(policy.body).toMatchObject({ observationIntervalFirst24hMinutes: 60, observationIntervalMinutes: 120, respiratoryRateThreshold: 8, spo2Threshold: 90, syringeLowThresholdHours: 2, reconciliationToleranceMl: 0.5 });
+    expect(policy.body).toMatchObject({
+      observationIntervalFirst24hMinutes: 60,
+      observationIntervalMinutes: 120,
+      respiratoryRateThreshold: 8,
+      spo2Threshold: 90,
+      syringeLowThresholdHours: 2,
+      reconciliationToleranceMl: 0.5,
+    });
     await request(t.http).patch('/api/wards/1/policy').set(as('mei')).send({ spo2Threshold: 92 }).expect(403);
-    const bad = await request(t.http).patch('/api/wards/1/policy').set(as('sam')).send({ spo2Threshold: 20, pharmacyEmail: 'not-an-address' }).expect(400);
+    const bad = await request(t.http)
+      .patch('/api/wards/1/policy')
+      .set(as('sam'))
+      .send({ spo2Threshold: 20, pharmacyEmail: 'not-an-address' })
+      .expect(400);
     expect(bad.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['pharmacyEmail', 'spo2Threshold']);
     const changed = await request(t.http).patch('/api/wards/1/policy').set(as('sam')).send({ spo2Threshold: 92 }).expect(200);
     expect(changed.body.spo2Threshold).toBe(92);

@@ -15,8 +15,12 @@ import { createTestApp, type TestApp } from './support/test-app.js';
 async function dtoClasses(): Promise<Map<string, new () => object>> {
   const src = fileURLToPath(new URL('../src/', import.meta.url));
   const files = readdirSync(src, { recursive: true, encoding: 'utf8' }).filter((file) => /(^|\/)dto\/[^/]+\.dto\.ts$/.test(file));
-  const modules = await Promise.all(files.map((file) => import(pathToFileURL(path.join(src, file)).href) as Promise<Record<string, unknown>>));
-  const classes = modules.flatMap((module) => Object.values(module)).filter((value): value is new () => object => typeof value === 'function' && value.name.endsWith('Dto'));
+  const modules = await Promise.all(
+    files.map((file) => import(pathToFileURL(path.join(src, file)).href) as Promise<Record<string, unknown>>),
+  );
+  const classes = modules
+    .flatMap((module) => Object.values(module))
+    .filter((value): value is new () => object => typeof value === 'function' && value.name.endsWith('Dto'));
   return new Map(classes.map((dto) => [dto.name, dto]));
 }
 
@@ -39,11 +43,18 @@ describe('OpenAPI document at /api/docs-json', () => {
     operations = Object.entries(document.paths).flatMap(([path, item]) =>
       Object.entries(item)
         .filter(([method]) => ['get', ...WRITE_METHODS].includes(method))
-        .map(([method, operation]) => ({ key: routeKey(method, path.replace(/\{([^}]+)\}/g, ':$1')), method, path, operation: operation as Operation['operation'] })),
+        .map(([method, operation]) => ({
+          key: routeKey(method, path.replace(/\{([^}]+)\}/g, ':$1')),
+          method,
+          path,
+          operation: operation as Operation['operation'],
+        })),
     );
   });
   afterAll(async () => {
-    console.log(`OpenAPI: ${operations.length} operations on ${Object.keys(document.paths).length} paths, ${Object.keys(document.components?.schemas ?? {}).length} schemas`);
+    console.log(
+      `OpenAPI: ${operations.length} operations on ${Object.keys(document.paths).length} paths, ${Object.keys(document.components?.schemas ?? {}).length} schemas`,
+    );
     await t.close();
   });
 
@@ -51,12 +62,18 @@ describe('OpenAPI document at /api/docs-json', () => {
 
   it('documents every route the app serves', () => {
     const documented = new Set(operations.map(({ key }) => key));
-    expect(servedRoutes().filter((key) => !documented.has(key)), 'routes missing from the OpenAPI document').toEqual([]);
+    expect(
+      servedRoutes().filter((key) => !documented.has(key)),
+      'routes missing from the OpenAPI document',
+    ).toEqual([]);
   });
 
   it('documents no route the app does not serve, and each once', () => {
     const served = new Set(servedRoutes());
-    expect(operations.filter(({ key }) => !served.has(key)).map(({ key }) => key), 'documented routes that do not exist').toEqual([]);
+    expect(
+      operations.filter(({ key }) => !served.has(key)).map(({ key }) => key),
+      'documented routes that do not exist',
+    ).toEqual([]);
     expect(new Set(operations.map(({ key }) => key)).size).toBe(operations.length);
   });
 
@@ -82,7 +99,11 @@ describe('OpenAPI document at /api/docs-json', () => {
     expect(byKey.get('POST /api/orders/:param/verify')?.['x-roles']).toEqual(['pharmacist']);
     expect(byKey.get('POST /api/orders/:param/bedside-checks')?.['x-roles']).toEqual(['nurse', 'charge_nurse']);
     expect(byKey.get('GET /api/orders/:param')?.['x-roles']).toHaveLength(5);
-    expect(['POST /api/auth/login', 'GET /api/health', 'GET /api/auth/demo-accounts'].map((key) => byKey.get(key)?.['x-public'])).toEqual([true, true, true]);
+    expect(['POST /api/auth/login', 'GET /api/health', 'GET /api/auth/demo-accounts'].map((key) => byKey.get(key)?.['x-public'])).toEqual([
+      true,
+      true,
+      true,
+    ]);
     expect(document.components?.securitySchemes?.bearer).toMatchObject({ type: 'http', scheme: 'bearer' });
     expect(document.security).toEqual([{ bearer: [] }]);
   });
@@ -117,7 +138,14 @@ describe('OpenAPI document at /api/docs-json', () => {
   it('gives every numeric id in a path as a whole number from 1, and answers a bad one with 400', () => {
     for (const { key, operation } of operations) {
       for (const parameter of operation.parameters ?? []) {
-        if ('$ref' in parameter || parameter.in !== 'path' || !parameter.schema || '$ref' in parameter.schema || parameter.schema.type === 'string') continue;
+        if (
+          '$ref' in parameter ||
+          parameter.in !== 'path' ||
+          !parameter.schema ||
+          '$ref' in parameter.schema ||
+          parameter.schema.type === 'string'
+        )
+          continue;
         expect(parameter.schema, `${key} ${parameter.name}`).toEqual({ type: 'integer', minimum: 1 });
         expect(operation.responses, key).toHaveProperty('400');
       }
@@ -127,12 +155,18 @@ describe('OpenAPI document at /api/docs-json', () => {
   it('documents each request body as its validators check it', async () => {
     const classes = await dtoClasses();
     const schemas = (document.components?.schemas ?? {}) as Record<string, SchemaObject>;
-    const checked = [...classes].filter(([name]) => schemas[name]).map(([name, dto]) => (expectMatchesValidators(document, name, dto, schemas[name]), name));
+    const checked = [...classes]
+      .filter(([name]) => schemas[name])
+      .map(([name, dto]) => (expectMatchesValidators(document, name, dto, schemas[name]), name));
     // The multipart upload's model is ImportLibraryDto's fields plus the file, which multer reads.
     const { file, ...fields } = schemas.ImportLibraryUploadModel.properties ?? {};
     expect(file).toMatchObject({ type: 'string', format: 'binary' });
     const upload = schemas.ImportLibraryUploadModel;
-    expectMatchesValidators(document, 'ImportLibraryUploadModel', classes.get('ImportLibraryDto')!, { ...upload, properties: fields, required: upload.required?.filter((name) => name !== 'file') });
+    expectMatchesValidators(document, 'ImportLibraryUploadModel', classes.get('ImportLibraryDto')!, {
+      ...upload,
+      properties: fields,
+      required: upload.required?.filter((name) => name !== 'file'),
+    });
     checked.push('ImportLibraryUploadModel');
     expect(checked.length).toBeGreaterThanOrEqual(25);
     for (const { key, operation } of operations) {
@@ -145,12 +179,16 @@ describe('OpenAPI document at /api/docs-json', () => {
     let checked = 0;
     for (const { key, operation } of operations) {
       const dto = handlerArgument(t, operation.operationId!, RouteParamtypes.QUERY);
-      const parameters = (operation.parameters ?? []).filter((parameter): parameter is ParameterObject => !('$ref' in parameter) && parameter.in === 'query');
+      const parameters = (operation.parameters ?? []).filter(
+        (parameter): parameter is ParameterObject => !('$ref' in parameter) && parameter.in === 'query',
+      );
       if (!dto) {
         expect(parameters, key).toEqual([]);
         continue;
       }
-      const properties = Object.fromEntries(parameters.map((parameter) => [parameter.name, { ...(parameter.schema as SchemaObject), description: parameter.description }]));
+      const properties = Object.fromEntries(
+        parameters.map((parameter) => [parameter.name, { ...(parameter.schema as SchemaObject), description: parameter.description }]),
+      );
       const required = parameters.filter((parameter) => parameter.required).map((parameter) => parameter.name);
       expectMatchesValidators(document, `${key} query`, dto, { type: 'object', properties, required });
       checked += 1;
@@ -162,11 +200,20 @@ describe('OpenAPI document at /api/docs-json', () => {
 /** The schema has exactly the validated properties, the right ones required, and each rule's bounds. */
 function expectMatchesValidators(document: OpenAPIObject, name: string, dto: Function, schema: SchemaObject): void {
   const rules = getMetadataStorage().getTargetValidationMetadatas(dto, '', true, false);
-  expect(Object.keys(schema.properties ?? {}).sort(), `${name} properties`).toEqual([...new Set(rules.map((rule) => rule.propertyName))].sort());
+  expect(Object.keys(schema.properties ?? {}).sort(), `${name} properties`).toEqual(
+    [...new Set(rules.map((rule) => rule.propertyName))].sort(),
+  );
   // Required: @IsDefined, unless a condition (@IsOptional, @ValidateIf) skips a missing value.
   const skipsMissing = (property: string) =>
-    rules.some((rule) => rule.propertyName === property && rule.type === ValidationTypes.CONDITIONAL_VALIDATION && !(rule.constraints[0] as (object: object, value: unknown) => boolean)({}, undefined));
-  const required = rules.filter((rule) => rule.type === ValidationTypes.IS_DEFINED && !skipsMissing(rule.propertyName)).map((rule) => rule.propertyName);
+    rules.some(
+      (rule) =>
+        rule.propertyName === property &&
+        rule.type === ValidationTypes.CONDITIONAL_VALIDATION &&
+        !(rule.constraints[0] as (object: object, value: unknown) => boolean)({}, undefined),
+    );
+  const required = rules
+    .filter((rule) => rule.type === ValidationTypes.IS_DEFINED && !skipsMissing(rule.propertyName))
+    .map((rule) => rule.propertyName);
   expect([...(schema.required ?? [])].sort(), `${name} required`).toEqual(required.sort());
   for (const rule of rules) {
     const property = resolveProperty(document, schema.properties?.[rule.propertyName]);

@@ -23,7 +23,10 @@ describe('POST /api/orders/preview', () => {
   let t: TestApp;
   const tokens = {} as Record<Role, string>;
   const preview = (body: object, role: Role = 'prescriber') =>
-    request(t.http).post('/api/orders/preview').set({ Authorization: `Bearer ${tokens[role]}` }).send(body);
+    request(t.http)
+      .post('/api/orders/preview')
+      .set({ Authorization: `Bearer ${tokens[role]}` })
+      .send(body);
 
   beforeAll(async () => {
     t = await createTestApp();
@@ -34,7 +37,13 @@ describe('POST /api/orders/preview', () => {
   it.each(ROLES)('as %s, previews the ASHP starting regimen with no findings', async (role) => {
     const response = await preview(ASHP_MORPHINE, role).expect(200);
     expect(response.body.findings).toEqual([]);
-    expect(response.body.derived).toEqual({ demandDoseMl: 1, basalRateMlPerHour: 0, maxDemandsPerHour: 6, maxHourlyDose: 6, maxFourHourDose: 24 });
+    expect(response.body.derived).toEqual({
+      demandDoseMl: 1,
+      basalRateMlPerHour: 0,
+      maxDemandsPerHour: 6,
+      maxHourlyDose: 6,
+      maxFourHourDose: 24,
+    });
     expect(response.body.rule).toMatchObject({ drugName: 'morphine', concentrationPerMl: 1, perKg: false });
   });
 

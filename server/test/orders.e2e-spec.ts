@@ -23,7 +23,14 @@ const ORDER = {
   signature: { password: DEMO_PASSWORD },
 };
 const SOFT = { ...ORDER, demandDose: 2.5, overrides: [{ field: 'demandDose', reason: 'Opioid use before surgery; pain team agreed' }] };
-const RELEASE = { concentrationPerMl: 1, volumeMl: 50, batch: 'KB-24-0117', expiresAt: '2030-01-01T12:00:00Z', preparedBy: 'Lin Park', checkedBy: 'Tomas Ortiz' };
+const RELEASE = {
+  concentrationPerMl: 1,
+  volumeMl: 50,
+  batch: 'KB-24-0117',
+  expiresAt: '2030-01-01T12:00:00Z',
+  preparedBy: 'Lin Park',
+  checkedBy: 'Tomas Ortiz',
+};
 
 describe('orders, verification and syringe release', () => {
   let t: TestApp;
@@ -45,11 +52,21 @@ describe('orders, verification and syringe release', () => {
   describe('signing', () => {
     it('signs an order with one soft override, keeps the findings and reason, and tells pharmacy', async () => {
       const response = await sign(SOFT).expect(201);
-      expect(response.body).toMatchObject({ status: 'awaiting_verification', version: 1, regimenType: 'demand_only', prescriberName: 'Dr Amara Osei', wardName: 'Harbour' });
-      expect(response.body.findings.map((f: { field: string; severity: string }) => [f.field, f.severity])).toEqual([['demandDose', 'soft']]);
+      expect(response.body).toMatchObject({
+        status: 'awaiting_verification',
+        version: 1,
+        regimenType: 'demand_only',
+        prescriberName: 'Dr Amara Osei',
+        wardName: 'Harbour',
+      });
+      expect(response.body.findings.map((f: { field: string; severity: string }) => [f.field, f.severity])).toEqual([
+        ['demandDose', 'soft'],
+      ]);
       expect(response.body.overrides).toEqual(SOFT.overrides);
       expect(response.body.events).toMatchObject([{ fromStatus: null, toStatus: 'awaiting_verification', userName: 'Dr Amara Osei' }]);
-      const mail = await waitForMail(t.http, tokens.admin, (m) => m.subject.includes(`PCA order ${response.body.id} awaiting verification`));
+      const mail = await waitForMail(t.http, tokens.admin, (m) =>
+        m.subject.includes(`PCA order ${response.body.id} awaiting verification`),
+      );
       expect(mail.to).toBe('pharmacy.harbour@kestrelbay.example');
       expect(mail.text).toContain('demand 2.5 mg');
     });
@@ -62,7 +79,11 @@ describe('orders, verification and syringe release', () => {
     });
 
     it('refuses a hard finding (a missed decimal point) even with a reason', async () => {
-      const response = await sign({ ...ORDER, demandDose: 10, overrides: [{ field: 'demandDose', reason: 'I really mean ten milligrams' }] }).expect(400);
+      const response = await sign({
+        ...ORDER,
+        demandDose: 10,
+        overrides: [{ field: 'demandDose', reason: 'I really mean ten milligrams' }],
+      }).expect(400);
       expect(response.body.errors[0]).toMatchObject({ field: 'demandDose' });
     });
 
@@ -102,7 +123,11 @@ describe('orders, verification and syringe release', () => {
       await act(order.id, 'verify', { signature: { password: 'nope' } }).expect(401);
       const verified = await act(order.id, 'verify', { signature: { password: DEMO_PASSWORD } }).expect(200);
       expect(verified.body).toMatchObject({ status: 'verified', verifiedByName: 'Lin Park' });
-      const again = await request(t.http).post(`/api/orders/${order.id}/verify`).set({ Authorization: `Bearer ${tomas}` }).send({ signature: { password: DEMO_PASSWORD } }).expect(409);
+      const again = await request(t.http)
+        .post(`/api/orders/${order.id}/verify`)
+        .set({ Authorization: `Bearer ${tomas}` })
+        .send({ signature: { password: DEMO_PASSWORD } })
+        .expect(409);
       expect(again.body).toMatchObject({ currentStatus: 'verified' });
     });
 
@@ -114,8 +139,16 @@ describe('orders, verification and syringe release', () => {
       const mail = await waitForMail(t.http, tokens.admin, (m) => m.subject === `PCA order ${order.id} returned with a query`);
       expect(mail.to).toBe('amara.osei@kestrelbay.example');
 
-      await request(t.http).post(`/api/orders/${order.id}/revise`).set(as('prescriber')).send({ ...ORDER, patientId: 2 }).expect(400);
-      const revised = await request(t.http).post(`/api/orders/${order.id}/revise`).set(as('prescriber')).send({ ...ORDER, fourHourLimit: 25 }).expect(201);
+      await request(t.http)
+        .post(`/api/orders/${order.id}/revise`)
+        .set(as('prescriber'))
+        .send({ ...ORDER, patientId: 2 })
+        .expect(400);
+      const revised = await request(t.http)
+        .post(`/api/orders/${order.id}/revise`)
+        .set(as('prescriber'))
+        .send({ ...ORDER, fourHourLimit: 25 })
+        .expect(201);
       expect(revised.body).toMatchObject({ version: 2, supersedesId: order.id, status: 'awaiting_verification', fourHourLimit: 25 });
       const old = await request(t.http).get(`/api/orders/${order.id}`).set(as('pharmacist')).expect(200);
       expect(old.body.status).toBe('superseded');
@@ -140,7 +173,9 @@ describe('orders, verification and syringe release', () => {
     it('lists orders by ward and status, and the prescriber’s own', async () => {
       const queue = await request(t.http).get('/api/orders?wardId=1&status=awaiting_verification').set(as('pharmacist')).expect(200);
       expect(queue.body.length).toBeGreaterThan(0);
-      expect(queue.body.every((o: { status: string; wardId: number }) => o.status === 'awaiting_verification' && o.wardId === 1)).toBe(true);
+      expect(queue.body.every((o: { status: string; wardId: number }) => o.status === 'awaiting_verification' && o.wardId === 1)).toBe(
+        true,
+      );
       const mine = await request(t.http).get('/api/orders?mine=true').set(as('prescriber')).expect(200);
       expect(mine.body.every((o: { prescriberName: string }) => o.prescriberName === 'Dr Amara Osei')).toBe(true);
       await request(t.http).get('/api/orders?status=finished').set(as('pharmacist')).expect(400);
@@ -154,13 +189,21 @@ describe('orders, verification and syringe release', () => {
       await act(order.id, 'verify', { signature: { password: DEMO_PASSWORD } }).expect(200);
       await request(t.http).post(`/api/orders/${order.id}/releases`).set(as('nurse')).send(RELEASE).expect(403);
 
-      const wrong = await request(t.http).post(`/api/orders/${order.id}/releases`).set(as('pharmacist')).send({ ...RELEASE, concentrationPerMl: 2, volumeMl: 70, expiresAt: '2020-01-01T00:00:00Z' }).expect(400);
+      const wrong = await request(t.http)
+        .post(`/api/orders/${order.id}/releases`)
+        .set(as('pharmacist'))
+        .send({ ...RELEASE, concentrationPerMl: 2, volumeMl: 70, expiresAt: '2020-01-01T00:00:00Z' })
+        .expect(400);
       expect(wrong.body.errors.map((e: { field: string }) => e.field)).toEqual(['concentrationPerMl', 'overrideReason', 'expiresAt']);
 
       const released = await request(t.http).post(`/api/orders/${order.id}/releases`).set(as('pharmacist')).send(RELEASE).expect(201);
       expect(released.body).toMatchObject({ status: 'ready', volumeMl: 50, totalAmount: 50, doseUnit: 'mg', releasedByName: 'Lin Park' });
       expect(released.body.releaseCode).toMatch(/^[234679ACDEFGHJKMNPQRTUVWXYZ]{3}-[234679ACDEFGHJKMNPQRTUVWXYZ]{3}$/);
-      const unusual = await request(t.http).post(`/api/orders/${order.id}/releases`).set(as('pharmacist')).send({ ...RELEASE, volumeMl: 100, overrideReason: 'Only 100 mL syringes in stock tonight' }).expect(201);
+      const unusual = await request(t.http)
+        .post(`/api/orders/${order.id}/releases`)
+        .set(as('pharmacist'))
+        .send({ ...RELEASE, volumeMl: 100, overrideReason: 'Only 100 mL syringes in stock tonight' })
+        .expect(201);
       expect(unusual.body.releaseCode).not.toBe(released.body.releaseCode);
 
       const mail = await waitForMail(t.http, tokens.admin, (m) => m.text.includes(released.body.releaseCode));

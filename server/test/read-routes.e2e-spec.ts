@@ -22,12 +22,9 @@ describe('read routes', () => {
     await request(t.http).get(route).expect(401);
   });
 
-  it.each(ROLES.flatMap((role) => READ_ROUTES.map((route) => [role, route] as const)))(
-    'as %s, %s answers 200',
-    async (role, route) => {
-      await request(t.http).get(route).set(as(role)).expect(200);
-    },
-  );
+  it.each(ROLES.flatMap((role) => READ_ROUTES.map((route) => [role, route] as const)))('as %s, %s answers 200', async (role, route) => {
+    await request(t.http).get(route).set(as(role)).expect(200);
+  });
 
   it('lists the four demo wards', async () => {
     const response = await request(t.http).get('/api/wards').set(as('nurse')).expect(200);
@@ -40,7 +37,9 @@ describe('read routes', () => {
     expect(all.body).toHaveLength(DEMO_PATIENTS.length);
     const harbour = await request(t.http).get('/api/patients?wardId=1').set(as('nurse')).expect(200);
     expect(harbour.body.length).toBeGreaterThan(0);
-    expect(harbour.body.every((patient: { wardId: number; wardName: string }) => patient.wardId === 1 && patient.wardName === 'Harbour')).toBe(true);
+    expect(
+      harbour.body.every((patient: { wardId: number; wardName: string }) => patient.wardId === 1 && patient.wardName === 'Harbour'),
+    ).toBe(true);
   });
 
   it('answers a bad ward filter with 400 naming wardId', async () => {

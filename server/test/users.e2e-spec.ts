@@ -47,7 +47,13 @@ describe('user management (admin only)', () => {
     const created = await request(t.http)
       .post('/api/users')
       .set(asAdmin())
-      .send({ username: 'ari.nakamura', displayName: 'Ari Nakamura', role: 'nurse', wardIds: [wards.body[0].id], password: 'correct-horse-battery' })
+      .send({
+        username: 'ari.nakamura',
+        displayName: 'Ari Nakamura',
+        role: 'nurse',
+        wardIds: [wards.body[0].id],
+        password: 'correct-horse-battery',
+      })
       .expect(201);
     expect(created.body).toMatchObject({ username: 'ari.nakamura', role: 'nurse', active: true, wardIds: [wards.body[0].id] });
     expect(created.body).not.toHaveProperty('passwordHash');
@@ -99,7 +105,10 @@ describe('user management (admin only)', () => {
       .send({ role: 'charge_nurse', wardIds: [1, 2, 3], password: 'a-brand-new-password' })
       .expect(200);
     expect(updated.body).toMatchObject({ role: 'charge_nurse', wardIds: [1, 2, 3] });
-    const login = await request(t.http).post('/api/auth/login').send({ username: 'rosa.adeyemi', password: 'a-brand-new-password' }).expect(200);
+    const login = await request(t.http)
+      .post('/api/auth/login')
+      .send({ username: 'rosa.adeyemi', password: 'a-brand-new-password' })
+      .expect(200);
     expect(login.body.user.role).toBe('charge_nurse');
   });
 

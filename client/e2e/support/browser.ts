@@ -72,7 +72,12 @@ export const HOME_HEADINGS: Record<string, string> = {
 };
 
 /** Signs in and waits for the account's home screen (a nurse's by default, for accounts made in a test). */
-export async function signInHome(page: Page, username: string, password = DEMO_PASSWORD, home = HOME_HEADINGS[username] ?? 'PCA orders'): Promise<void> {
+export async function signInHome(
+  page: Page,
+  username: string,
+  password = DEMO_PASSWORD,
+  home = HOME_HEADINGS[username] ?? 'PCA orders',
+): Promise<void> {
   await signIn(page, username, password);
   await page.getByRole('heading', { name: home, level: 1 }).waitFor();
 }

@@ -20,7 +20,7 @@ describe('role homes and navigation', () => {
     expect(homePathFor('admin')).toBe('/admin/users');
   });
 
-  it("shows each role only its own screens", () => {
+  it('shows each role only its own screens', () => {
     for (const role of ROLES) {
       const labels = navItemsFor(role).map((item) => item.label);
       expect(labels).toEqual(NAV_LABELS[role] ?? ['Patients']);
@@ -51,7 +51,7 @@ describe('landingPathFor', () => {
     expect(landingPathFor('pharmacist', '/library?ward=2&version=5')).toBe('/library?ward=2&version=5');
   });
 
-  it("sends the role home otherwise", () => {
+  it('sends the role home otherwise', () => {
     expect(landingPathFor('nurse', '/admin/users')).toBe('/bedside');
     expect(landingPathFor('admin', '/patients/3')).toBe('/admin/users');
     expect(landingPathFor('nurse', null)).toBe('/bedside');

@@ -14,7 +14,8 @@ export const AREA_ROLES: Record<Area, readonly Role[]> = {
   audit: ['admin', 'pharmacist'],
 };
 
-export type NavIcon = 'patients' | 'library' | 'users' | 'orders' | 'verification' | 'mailbox' | 'bedside' | 'handover' | 'policy' | 'audit';
+export type NavIcon =
+  'patients' | 'library' | 'users' | 'orders' | 'verification' | 'mailbox' | 'bedside' | 'handover' | 'policy' | 'audit';
 
 export interface NavItem {
   label: string;
@@ -83,8 +84,6 @@ const ROUTE_AREAS: ReadonlyArray<{ prefix: string; area: Area }> = [
 export function landingPathFor(role: Role, requested: string | null): string {
   if (!isSafeRedirect(requested)) return homePathFor(role);
   const pathname = requested.split(/[?#]/)[0];
-  const match = ROUTE_AREAS.find(
-    ({ prefix }) => pathname === prefix || pathname.startsWith(`${prefix}/`),
-  );
+  const match = ROUTE_AREAS.find(({ prefix }) => pathname === prefix || pathname.startsWith(`${prefix}/`));
   return match && canAccess(role, match.area) ? requested : homePathFor(role);
 }

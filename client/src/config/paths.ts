@@ -8,9 +8,7 @@ export const paths = {
     path: '/sign-in',
     /** `redirectTo` is where to go after signing in (only paths inside the app are kept). */
     getHref: (redirectTo?: string) =>
-      redirectTo && isSafeRedirect(redirectTo) && redirectTo !== '/'
-        ? `/sign-in?redirectTo=${encodeURIComponent(redirectTo)}`
-        : '/sign-in',
+      redirectTo && isSafeRedirect(redirectTo) && redirectTo !== '/' ? `/sign-in?redirectTo=${encodeURIComponent(redirectTo)}` : '/sign-in',
   },
   patients: {
     path: '/patients',

@@ -53,11 +53,19 @@ describe('api client', () => {
 
   it('throws a typed error with the field errors of a 400', async () => {
     const { request } = setup(
-      jsonResponse(400, { statusCode: 400, message: 'Check the highlighted fields', errors: [{ field: 'username', message: 'Enter your username' }] }),
+      jsonResponse(400, {
+        statusCode: 400,
+        message: 'Check the highlighted fields',
+        errors: [{ field: 'username', message: 'Enter your username' }],
+      }),
     );
     const error = await request('/users', { method: 'POST', body: {} }).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(ApiRequestError);
-    expect(error).toMatchObject({ status: 400, message: 'Check the highlighted fields', errors: [{ field: 'username', message: 'Enter your username' }] });
+    expect(error).toMatchObject({
+      status: 400,
+      message: 'Check the highlighted fields',
+      errors: [{ field: 'username', message: 'Enter your username' }],
+    });
   });
 
   it('ends the session on a 401 from an ordinary call', async () => {
@@ -76,7 +84,11 @@ describe('api client', () => {
   });
 
   it('keeps the session on a 401 for a wrong signature password, not for an expired token', async () => {
-    const wrongPassword = { statusCode: 401, message: 'The password you signed with is not correct', errors: [{ field: 'signature.password', message: 'The password you signed with is not correct' }] };
+    const wrongPassword = {
+      statusCode: 401,
+      message: 'The password you signed with is not correct',
+      errors: [{ field: 'signature.password', message: 'The password you signed with is not correct' }],
+    };
     const signed = setup(jsonResponse(401, wrongPassword));
     await expect(signed.request('/library/versions/2/approve', { method: 'POST', body: {}, signed: true })).rejects.toMatchObject({
       status: 401,
@@ -86,13 +98,24 @@ describe('api client', () => {
 
     // A colleague (second nurse, witness) signing on the same screen with a wrong password.
     for (const field of ['password', 'witness.password']) {
-      const colleague = setup(jsonResponse(401, { statusCode: 401, message: 'The second person’s username or password is incorrect', errors: [{ field, message: 'Username or password is incorrect' }] }));
-      await expect(colleague.request('/orders/2/boluses', { method: 'POST', body: {}, signed: true })).rejects.toMatchObject({ status: 401, errors: [{ field }] });
+      const colleague = setup(
+        jsonResponse(401, {
+          statusCode: 401,
+          message: 'The second person’s username or password is incorrect',
+          errors: [{ field, message: 'Username or password is incorrect' }],
+        }),
+      );
+      await expect(colleague.request('/orders/2/boluses', { method: 'POST', body: {}, signed: true })).rejects.toMatchObject({
+        status: 401,
+        errors: [{ field }],
+      });
       expect(colleague.onUnauthorized).not.toHaveBeenCalled();
     }
 
     const expired = setup(jsonResponse(401, { statusCode: 401, message: 'Unauthorized' }));
-    await expect(expired.request('/library/versions/2/approve', { method: 'POST', body: {}, signed: true })).rejects.toMatchObject({ status: 401 });
+    await expect(expired.request('/library/versions/2/approve', { method: 'POST', body: {}, signed: true })).rejects.toMatchObject({
+      status: 401,
+    });
     expect(expired.onUnauthorized).toHaveBeenCalledOnce();
   });
 

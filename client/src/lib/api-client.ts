@@ -1,5 +1,12 @@
 import type { z } from 'zod';
-import { ApiRequestError, isSignatureError, NO_RESPONSE_MESSAGE, NO_RESPONSE_STATUS, toApiRequestError, UNREADABLE_ANSWER_MESSAGE } from './api-error';
+import {
+  ApiRequestError,
+  isSignatureError,
+  NO_RESPONSE_MESSAGE,
+  NO_RESPONSE_STATUS,
+  toApiRequestError,
+  UNREADABLE_ANSWER_MESSAGE,
+} from './api-error';
 import { endSession, getSession } from './auth/session-store';
 import { queryClient } from './query-client';
 

@@ -36,12 +36,7 @@ function safeFilename(name: string, fallback: string): string {
  * What a finished upload's answer means: the parsed body, or the error to throw. A 401 calls
  * `onUnauthorized` as any other call would.
  */
-export function readUploadAnswer<T>(
-  status: number,
-  responseText: string,
-  schema: z.ZodType<T>,
-  onUnauthorized: () => void,
-): T {
+export function readUploadAnswer<T>(status: number, responseText: string, schema: z.ZodType<T>, onUnauthorized: () => void): T {
   let body: unknown = null;
   try {
     body = responseText ? (JSON.parse(responseText) as unknown) : null;

@@ -1,7 +1,12 @@
 import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
-import { PHARMACY_AUDIT_ENTITY_TYPES, type AuditEvent as AuditEventResponse, type AuditPage, type AuditVerifyResult } from '@lockstep/shared';
+import {
+  PHARMACY_AUDIT_ENTITY_TYPES,
+  type AuditEvent as AuditEventResponse,
+  type AuditPage,
+  type AuditVerifyResult,
+} from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { auditHash, GENESIS_HASH } from './audit-hash.js';
@@ -42,7 +47,10 @@ export class AuditService {
   /** An order's whole story, oldest first. */
   async forOrder(orderId: number): Promise<AuditEventResponse[]> {
     if (!(await this.dataSource.manager.existsBy(PcaOrder, { id: orderId }))) throw new NotFoundException(`No order with id ${orderId}`);
-    const events = await this.dataSource.manager.find(AuditEvent, { where: { entityType: 'order', entityId: String(orderId) }, order: { id: 'ASC' } });
+    const events = await this.dataSource.manager.find(AuditEvent, {
+      where: { entityType: 'order', entityId: String(orderId) },
+      order: { id: 'ASC' },
+    });
     return events.map(toAuditEventResponse);
   }
 

@@ -19,7 +19,11 @@ export type AuditEntry = {
  * the change and its record commit or roll back together. Transactions are queued one at a time
  * (database/serial-transactions.ts), so reading the chain's tail here cannot race another writer.
  */
-export async function recordAudit(manager: EntityManager, actor: Pick<AuthUser, 'id' | 'displayName'> | null, entry: AuditEntry): Promise<void> {
+export async function recordAudit(
+  manager: EntityManager,
+  actor: Pick<AuthUser, 'id' | 'displayName'> | null,
+  entry: AuditEntry,
+): Promise<void> {
   const tail = await manager.findOne(AuditEvent, { where: {}, order: { id: 'DESC' }, select: { id: true, hash: true } });
   const content = {
     id: (tail?.id ?? 0) + 1,
@@ -36,7 +40,11 @@ export async function recordAudit(manager: EntityManager, actor: Pick<AuthUser, 
 }
 
 /** `{ field: { from, to } }` for each listed field whose value differs. */
-export function changedFields<T extends object>(before: T, after: Partial<T>, fields: readonly (keyof T)[] = Object.keys(after) as (keyof T)[]): Record<string, { from: unknown; to: unknown }> {
+export function changedFields<T extends object>(
+  before: T,
+  after: Partial<T>,
+  fields: readonly (keyof T)[] = Object.keys(after) as (keyof T)[],
+): Record<string, { from: unknown; to: unknown }> {
   const changes: Record<string, { from: unknown; to: unknown }> = {};
   for (const field of fields) {
     if (!(field in after) || after[field] === undefined) continue;

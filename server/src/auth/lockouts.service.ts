@@ -20,7 +20,12 @@ export class LockoutsService {
   async unlock(kind: Lockout['kind'], key: string, admin: AuthUser): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
       // The event first: if there was nothing to clear, throwing rolls it back.
-      await recordAudit(manager, admin, { action: 'sign-in.unlock', entityType: 'sign-in', entityId: `${kind}:${key}`, summary: { kind, key } });
+      await recordAudit(manager, admin, {
+        action: 'sign-in.unlock',
+        entityType: 'sign-in',
+        entityId: `${kind}:${key}`,
+        summary: { kind, key },
+      });
       if (!this.attempts.clear(kind, key)) throw new NotFoundException(`No wrong passwords are counted for the ${kind} ${key}`);
     });
   }

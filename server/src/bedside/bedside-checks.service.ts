@@ -1,7 +1,13 @@
 import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource, EntityManager } from 'typeorm';
-import { compareSettings, normaliseReleaseCode, type FirstCheckResponse, type PumpSettings, type SecondCheckResponse } from '@lockstep/shared';
+import {
+  compareSettings,
+  normaliseReleaseCode,
+  type FirstCheckResponse,
+  type PumpSettings,
+  type SecondCheckResponse,
+} from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { statusConflict, transitionOrder } from '../orders/order-transitions.js';
@@ -35,12 +41,26 @@ export class BedsideChecksService {
       checkIdentity(order, dto);
       const release = await readyRelease(manager, order, dto.releaseCode, 'releaseCode');
       if (order.status === 'active' && (await manager.existsBy(SyringeRelease, { orderId, status: 'in_use' }))) {
-        throw new ConflictException('A syringe is still running for this order: record the syringe change (old syringe and witnessed waste) first');
+        throw new ConflictException(
+          'A syringe is still running for this order: record the syringe change (old syringe and witnessed waste) first',
+        );
       }
       const check = await manager.save(
-        manager.create(BedsideCheck, { orderId, releaseId: release.id, status: 'awaiting_second', firstNurseId: nurse.id, firstSettings: { ...dto.settings }, firstAt: new Date() }),
+        manager.create(BedsideCheck, {
+          orderId,
+          releaseId: release.id,
+          status: 'awaiting_second',
+          firstNurseId: nurse.id,
+          firstSettings: { ...dto.settings },
+          firstAt: new Date(),
+        }),
       );
-      await recordAudit(manager, nurse, { action: 'order.bedside-first-check', entityType: 'order', entityId: orderId, summary: { checkId: check.id, releaseCode: release.releaseCode, settings: dto.settings } });
+      await recordAudit(manager, nurse, {
+        action: 'order.bedside-first-check',
+        entityType: 'order',
+        entityId: orderId,
+        summary: { checkId: check.id, releaseCode: release.releaseCode, settings: dto.settings },
+      });
       return { id: check.id, status: 'awaiting_second' };
     });
   }
@@ -61,7 +81,14 @@ export class BedsideChecksService {
       const saved = await manager.update(
         BedsideCheck,
         { id: checkId, status: 'awaiting_second', rowVersion: check.rowVersion },
-        { status, secondNurseId: colleague.id, secondSettings: { ...dto.settings }, secondAt: new Date(), differences, rowVersion: check.rowVersion + 1 },
+        {
+          status,
+          secondNurseId: colleague.id,
+          secondSettings: { ...dto.settings },
+          secondAt: new Date(),
+          differences,
+          rowVersion: check.rowVersion + 1,
+        },
       );
       if (saved.affected !== 1) throw new ConflictException('This check was completed by someone else a moment ago');
       if (status === 'matched') await this.start(manager, order, release, check.firstNurseId, colleague.displayName);
@@ -83,11 +110,23 @@ export class BedsideChecksService {
     return result;
   }
 
-  private async start(manager: EntityManager, order: PcaOrder, release: SyringeRelease, firstNurseId: number, secondName: string): Promise<void> {
-    const started = await manager.update(SyringeRelease, { id: release.id, status: 'ready' }, { status: 'in_use', rowVersion: release.rowVersion + 1 });
+  private async start(
+    manager: EntityManager,
+    order: PcaOrder,
+    release: SyringeRelease,
+    firstNurseId: number,
+    secondName: string,
+  ): Promise<void> {
+    const started = await manager.update(
+      SyringeRelease,
+      { id: release.id, status: 'ready' },
+      { status: 'in_use', rowVersion: release.rowVersion + 1 },
+    );
     if (started.affected !== 1) throw new ConflictException('This syringe is no longer ready: it was started or finished a moment ago');
     if (order.status === 'verified') {
-      await transitionOrder(manager, order, 'active', firstNurseId, `Bedside check matched; second check by ${secondName}`, { startedAt: new Date() });
+      await transitionOrder(manager, order, 'active', firstNurseId, `Bedside check matched; second check by ${secondName}`, {
+        startedAt: new Date(),
+      });
     }
   }
 }
@@ -100,7 +139,12 @@ function checkIdentity(order: PcaOrder, dto: FirstCheckDto): void {
   if (dto.patientDateOfBirth !== order.patient.dateOfBirth) {
     errors.push({ field: 'patientDateOfBirth', message: 'This date of birth is not this order’s patient: check the wristband' });
   }
-  if (errors.length > 0) throw new BadRequestException({ statusCode: 400, message: 'The patient does not match this order: stop and check the wristband', errors });
+  if (errors.length > 0)
+    throw new BadRequestException({
+      statusCode: 400,
+      message: 'The patient does not match this order: stop and check the wristband',
+      errors,
+    });
 }
 
 /** A `ready` syringe released for this very order, from the code on its label. */

@@ -25,7 +25,11 @@ export class BedsideController {
   @ApiOperation({ summary: 'First check: the patient’s wristband, the syringe’s release code and the pump settings' })
   @ApiErrors(404, 409)
   @Post('bedside-checks')
-  first(@Param('orderId', ParseIdPipe) orderId: number, @Body() body: FirstCheckDto, @CurrentUser() user: AuthUser): Promise<FirstCheckResponse> {
+  first(
+    @Param('orderId', ParseIdPipe) orderId: number,
+    @Body() body: FirstCheckDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<FirstCheckResponse> {
     return this.checks.first(orderId, body, user);
   }
 
@@ -33,7 +37,11 @@ export class BedsideController {
   @ApiErrors(404, 409)
   @Post('bedside-checks/:checkId/second')
   @HttpCode(200)
-  second(@Param('orderId', ParseIdPipe) orderId: number, @Param('checkId', ParseIdPipe) checkId: number, @Body() body: SecondCheckDto): Promise<SecondCheckResponse> {
+  second(
+    @Param('orderId', ParseIdPipe) orderId: number,
+    @Param('checkId', ParseIdPipe) checkId: number,
+    @Body() body: SecondCheckDto,
+  ): Promise<SecondCheckResponse> {
     return this.checks.second(orderId, checkId, body);
   }
 
@@ -47,7 +55,11 @@ export class BedsideController {
   @ApiOperation({ summary: 'Change the syringe, with witnessed waste and reconciliation' })
   @ApiErrors(404, 409)
   @Post('syringe-changes')
-  syringeChange(@Param('orderId', ParseIdPipe) orderId: number, @Body() body: SyringeChangeDto, @CurrentUser() user: AuthUser): Promise<SyringeChangeResponse> {
+  syringeChange(
+    @Param('orderId', ParseIdPipe) orderId: number,
+    @Body() body: SyringeChangeDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<SyringeChangeResponse> {
     return this.syringeEnds.change(orderId, body, user);
   }
 
@@ -56,7 +68,11 @@ export class BedsideController {
   @ApiErrors(404, 409)
   @Post('discontinue')
   @HttpCode(200)
-  discontinue(@Param('orderId', ParseIdPipe) orderId: number, @Body() body: DiscontinueDto, @CurrentUser() user: AuthUser): Promise<DiscontinueResponse> {
+  discontinue(
+    @Param('orderId', ParseIdPipe) orderId: number,
+    @Body() body: DiscontinueDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<DiscontinueResponse> {
     return this.syringeEnds.discontinue(orderId, body, user);
   }
 }

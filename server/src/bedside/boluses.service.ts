@@ -11,7 +11,17 @@ import { ClinicianBolus } from './entities/clinician-bolus.entity.js';
 import { BEDSIDE_ROLES } from './nurse-roles.js';
 import { recordAudit } from '../audit/record-audit.js';
 
-export type BolusResponse = { id: number; orderId: number; amount: number; doseUnit: string; reason: string; overrideReason: string | null; givenByName: string; witnessName: string; at: string };
+export type BolusResponse = {
+  id: number;
+  orderId: number;
+  amount: number;
+  doseUnit: string;
+  reason: string;
+  overrideReason: string | null;
+  givenByName: string;
+  witnessName: string;
+  at: string;
+};
 
 /** A clinician bolus: within the order's bolus dose and the ward rule, co-signed by a second nurse. */
 @Injectable()
@@ -30,7 +40,9 @@ export class BolusesService {
       const unit = order.doseUnit;
       if (order.clinicianBolusDose === null) throw amountProblem('This order has no clinician bolus: ask the prescriber');
       if (dto.amount > order.clinicianBolusDose + 1e-9) {
-        throw amountProblem(`${formatDose(dto.amount, unit)} is more than the ordered clinician bolus of ${formatDose(order.clinicianBolusDose, unit)}`);
+        throw amountProblem(
+          `${formatDose(dto.amount, unit)} is more than the ordered clinician bolus of ${formatDose(order.clinicianBolusDose, unit)}`,
+        );
       }
       const rule = order.ruleSnapshot;
       const limits = rule?.limits.clinicianBolusDose;
@@ -38,22 +50,48 @@ export class BolusesService {
         const weight = order.patient.weightKg;
         const value = rule.perKg && weight ? dto.amount / weight : dto.amount;
         const result = checkAgainstRule(value, limits);
-        if (result === 'hard-high' || result === 'hard-low') throw amountProblem(`${formatDose(dto.amount, unit)} is outside the ward's hard limit for a clinician bolus`);
+        if (result === 'hard-high' || result === 'hard-low')
+          throw amountProblem(`${formatDose(dto.amount, unit)} is outside the ward's hard limit for a clinician bolus`);
         if ((result === 'soft-high' || result === 'soft-low') && !dto.overrideReason?.trim()) {
           const message = `${formatDose(dto.amount, unit)} is outside the ward's soft limit for a clinician bolus: give a reason`;
           throw new BadRequestException({ statusCode: 400, message, errors: [{ field: 'overrideReason', message }] });
         }
       }
       const bolus = await manager.save(
-        manager.create(ClinicianBolus, { orderId, amount: dto.amount, reason: dto.reason.trim(), overrideReason: dto.overrideReason?.trim() ?? null, givenById: nurse.id, witnessId: witness.id, at: new Date() }),
+        manager.create(ClinicianBolus, {
+          orderId,
+          amount: dto.amount,
+          reason: dto.reason.trim(),
+          overrideReason: dto.overrideReason?.trim() ?? null,
+          givenById: nurse.id,
+          witnessId: witness.id,
+          at: new Date(),
+        }),
       );
       await recordAudit(manager, nurse, {
         action: 'order.bolus',
         entityType: 'order',
         entityId: orderId,
-        summary: { bolusId: bolus.id, amount: bolus.amount, doseUnit: unit, reason: bolus.reason, overrideReason: bolus.overrideReason, witness: witness.displayName },
+        summary: {
+          bolusId: bolus.id,
+          amount: bolus.amount,
+          doseUnit: unit,
+          reason: bolus.reason,
+          overrideReason: bolus.overrideReason,
+          witness: witness.displayName,
+        },
       });
-      return { id: bolus.id, orderId, amount: bolus.amount, doseUnit: unit, reason: bolus.reason, overrideReason: bolus.overrideReason, givenByName: nurse.displayName, witnessName: witness.displayName, at: bolus.at.toISOString() };
+      return {
+        id: bolus.id,
+        orderId,
+        amount: bolus.amount,
+        doseUnit: unit,
+        reason: bolus.reason,
+        overrideReason: bolus.overrideReason,
+        givenByName: nurse.displayName,
+        witnessName: witness.displayName,
+        at: bolus.at.toISOString(),
+      };
     });
   }
 }

@@ -17,7 +17,11 @@ export async function finishRunningSyringe(
 ): Promise<ReconciliationResponse & { releaseCode: string }> {
   const release = await manager.findOneBy(SyringeRelease, { orderId, status: 'in_use' });
   if (!release) throw new ConflictException('No syringe is running for this order');
-  const finished = await manager.update(SyringeRelease, { id: release.id, status: 'in_use', rowVersion: release.rowVersion }, { status: 'finished', rowVersion: release.rowVersion + 1 });
+  const finished = await manager.update(
+    SyringeRelease,
+    { id: release.id, status: 'in_use', rowVersion: release.rowVersion },
+    { status: 'finished', rowVersion: release.rowVersion + 1 },
+  );
   if (finished.affected !== 1) throw new ConflictException('This syringe was finished by someone else a moment ago');
 
   const result = reconcile(release.volumeMl, volumes.infusedMl, volumes.wastedMl, toleranceMl);
@@ -33,5 +37,11 @@ export async function finishRunningSyringe(
     witnessId: people.witnessId,
     at: new Date(),
   });
-  return { ...result, dispensedMl: release.volumeMl, infusedMl: volumes.infusedMl, wastedMl: volumes.wastedMl, releaseCode: release.releaseCode };
+  return {
+    ...result,
+    dispensedMl: release.volumeMl,
+    infusedMl: volumes.infusedMl,
+    wastedMl: volumes.wastedMl,
+    releaseCode: release.releaseCode,
+  };
 }

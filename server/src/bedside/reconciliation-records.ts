@@ -25,7 +25,9 @@ export function discrepancyMail(order: PcaOrder, result: Reconciled): OutgoingMa
 }
 
 /** What the audit event of a syringe change or discontinuation records of its reconciliation. */
-export function reconciliationAuditSummary(result: Reconciled & Pick<ReconciliationResponse, 'mustReport'> & { releaseCode?: string }): Record<string, unknown> {
+export function reconciliationAuditSummary(
+  result: Reconciled & Pick<ReconciliationResponse, 'mustReport'> & { releaseCode?: string },
+): Record<string, unknown> {
   const { releaseCode, dispensedMl, infusedMl, wastedMl, discrepancyMl, mustReport } = result;
   return { releaseCode, dispensedMl, infusedMl, wastedMl, discrepancyMl, mustReport };
 }

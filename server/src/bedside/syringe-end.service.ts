@@ -39,7 +39,12 @@ export class SyringeEndService {
       if (found.status !== 'active') throw statusConflict(found.status, 'active');
       const next = await readyRelease(manager, found, dto.newReleaseCode, 'newReleaseCode');
       const result = await this.finish(manager, found, dto, nurse.id, witness.id);
-      await recordAudit(manager, nurse, { action: 'order.syringe-change', entityType: 'order', entityId: orderId, summary: { ...reconciliationAuditSummary(result), newReleaseCode: next.releaseCode, witness: witness.displayName } });
+      await recordAudit(manager, nurse, {
+        action: 'order.syringe-change',
+        entityType: 'order',
+        entityId: orderId,
+        summary: { ...reconciliationAuditSummary(result), newReleaseCode: next.releaseCode, witness: witness.displayName },
+      });
       return { order: found, reconciliation: result, newReleaseCode: next.releaseCode };
     });
     this.reportDiscrepancy(order, reconciliation);
@@ -58,7 +63,12 @@ export class SyringeEndService {
         action: 'order.discontinue',
         entityType: 'order',
         entityId: orderId,
-        summary: { status: { from: found.status, to: 'discontinued' }, reason: dto.reason.trim(), ...reconciliationAuditSummary(result), witness: witness.displayName },
+        summary: {
+          status: { from: found.status, to: 'discontinued' },
+          reason: dto.reason.trim(),
+          ...reconciliationAuditSummary(result),
+          witness: witness.displayName,
+        },
       });
       return { order: found, reconciliation: result };
     });
@@ -67,7 +77,13 @@ export class SyringeEndService {
     return { order: await this.orders.get(orderId), reconciliation };
   }
 
-  private async finish(manager: EntityManager, order: PcaOrder, volumes: { volumeInfusedMl: number; wastedMl: number }, nurseId: number, witnessId: number) {
+  private async finish(
+    manager: EntityManager,
+    order: PcaOrder,
+    volumes: { volumeInfusedMl: number; wastedMl: number },
+    nurseId: number,
+    witnessId: number,
+  ) {
     const result = await finishRunningSyringe(
       manager,
       order.id,

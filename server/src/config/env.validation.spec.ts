@@ -16,9 +16,7 @@ describe('validateEnv', () => {
 
   it('refuses the demo secret in production', () => {
     expect(() => validateEnv({ NODE_ENV: 'production' })).toThrow(/JWT_SECRET: the demo secret/);
-    expect(validateEnv({ NODE_ENV: 'production', JWT_SECRET: 'a-real-secret-of-some-length' }).NODE_ENV).toBe(
-      'production',
-    );
+    expect(validateEnv({ NODE_ENV: 'production', JWT_SECRET: 'a-real-secret-of-some-length' }).NODE_ENV).toBe('production');
   });
 
   it('fills the sign-in limits, body limit, proxy and log defaults', () => {

@@ -72,9 +72,7 @@ export type Env = z.infer<typeof envSchema>;
 export function validateEnv(raw: Record<string, unknown>): Env {
   const result = envSchema.safeParse(raw);
   if (!result.success) {
-    const problems = result.error.issues
-      .map((issue) => `  - ${issue.path.join('.') || '(environment)'}: ${issue.message}`)
-      .join('\n');
+    const problems = result.error.issues.map((issue) => `  - ${issue.path.join('.') || '(environment)'}: ${issue.message}`).join('\n');
     throw new Error(`Lockstep cannot start; fix these settings:\n${problems}`);
   }
   return result.data;

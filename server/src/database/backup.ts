@@ -17,7 +17,11 @@ export function backupFileName(at: Date): string {
  * the server keeps reading and writing. It is written under a `.partial` name and renamed only
  * once it is complete and passes `integrity_check`, so a backup file is never half written.
  */
-export async function backupDatabase(databaseFile: string, directory: string, options: { at?: Date; pagesPerStep?: number } = {}): Promise<BackupResult> {
+export async function backupDatabase(
+  databaseFile: string,
+  directory: string,
+  options: { at?: Date; pagesPerStep?: number } = {},
+): Promise<BackupResult> {
   if (!existsSync(databaseFile)) throw new Error(`There is no database at ${databaseFile}`);
   mkdirSync(directory, { recursive: true });
   const file = path.join(directory, backupFileName(options.at ?? new Date()));

@@ -18,4 +18,23 @@ import { User } from '../users/entities/user.entity.js';
 import { Ward } from '../wards/entities/ward.entity.js';
 
 /** Every entity, for the data source used outside Nest (migrations, reset, schema check). */
-export const ENTITIES = [Ward, User, Patient, Drug, LibraryVersion, LimitRule, PcaOrder, OrderEvent, SyringeRelease, MailboxMessage, BedsideCheck, ClinicianBolus, ReleaseReconciliation, Flag, Observation, HandoverSignoff, AuditEvent, RevokedToken];
+export const ENTITIES = [
+  Ward,
+  User,
+  Patient,
+  Drug,
+  LibraryVersion,
+  LimitRule,
+  PcaOrder,
+  OrderEvent,
+  SyringeRelease,
+  MailboxMessage,
+  BedsideCheck,
+  ClinicianBolus,
+  ReleaseReconciliation,
+  Flag,
+  Observation,
+  HandoverSignoff,
+  AuditEvent,
+  RevokedToken,
+];

@@ -17,7 +17,12 @@ describe('serialiseTransactions', () => {
   let dataSource: DataSource;
 
   beforeAll(async () => {
-    const options: DataSourceOptions = { type: 'better-sqlite3', database: path.join(directory, 'tx.sqlite'), entities: [Item], synchronize: true };
+    const options: DataSourceOptions = {
+      type: 'better-sqlite3',
+      database: path.join(directory, 'tx.sqlite'),
+      entities: [Item],
+      synchronize: true,
+    };
     dataSource = serialiseTransactions(await new DataSource(options).initialize());
   });
   afterAll(async () => {

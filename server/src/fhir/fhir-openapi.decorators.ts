@@ -29,5 +29,11 @@ export const ApiFhirErrors = () =>
         [401, 'No valid sign-in token'],
         [404, 'No such order or patient'],
       ] as const
-    ).map(([status, description]) => ApiResponse({ status, description: `${description} (an OperationOutcome)`, schema: resourceSchema('OperationOutcome', 'operationoutcome.html') })),
+    ).map(([status, description]) =>
+      ApiResponse({
+        status,
+        description: `${description} (an OperationOutcome)`,
+        schema: resourceSchema('OperationOutcome', 'operationoutcome.html'),
+      }),
+    ),
   );

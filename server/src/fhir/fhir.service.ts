@@ -1,7 +1,13 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
-import { type FhirBundle, type FhirMedicationRequest, type FhirOrderSource, toFhirMedicationRequest, toFhirPcaBundle } from '@lockstep/shared';
+import {
+  type FhirBundle,
+  type FhirMedicationRequest,
+  type FhirOrderSource,
+  toFhirMedicationRequest,
+  toFhirPcaBundle,
+} from '@lockstep/shared';
 import { ORDER_SUMMARY_RELATIONS, toOrderSummary } from '../orders/dto/order-response.js';
 import { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { OrdersService } from '../orders/orders.service.js';

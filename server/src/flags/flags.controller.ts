@@ -19,7 +19,11 @@ export class FlagsController {
   @Post(':id/acknowledge')
   @HttpCode(200)
   @Roles('nurse', 'charge_nurse', 'prescriber', 'pharmacist')
-  acknowledge(@Param('id', ParseIdPipe) id: number, @Body() body: AcknowledgeFlagDto, @CurrentUser() user: AuthUser): Promise<FlagResponse> {
+  acknowledge(
+    @Param('id', ParseIdPipe) id: number,
+    @Body() body: AcknowledgeFlagDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<FlagResponse> {
     return this.flags.acknowledge(id, body.note, user);
   }
 }

@@ -18,16 +18,34 @@ export class FlagsService {
 
   /** Inside the caller's transaction, so a flag exists exactly when its cause does. */
   async raise(manager: EntityManager, flag: NewFlag): Promise<Flag> {
-    return manager.save(manager.create(Flag, { releaseId: null, ...flag, raisedAt: new Date(), acknowledgedAt: null, acknowledgedById: null, acknowledgeNote: null }));
+    return manager.save(
+      manager.create(Flag, {
+        releaseId: null,
+        ...flag,
+        raisedAt: new Date(),
+        acknowledgedAt: null,
+        acknowledgedById: null,
+        acknowledgeNote: null,
+      }),
+    );
   }
 
   async acknowledge(id: number, note: string, user: AuthUser): Promise<FlagResponse> {
     const flag = await this.dataSource.transaction(async (manager) => {
       const flag = await manager.findOneBy(Flag, { id });
       if (!flag) throw new NotFoundException(`No flag with id ${id}`);
-      const done = await manager.update(Flag, { id, acknowledgedAt: IsNull() }, { acknowledgedAt: new Date(), acknowledgedById: user.id, acknowledgeNote: note.trim() });
+      const done = await manager.update(
+        Flag,
+        { id, acknowledgedAt: IsNull() },
+        { acknowledgedAt: new Date(), acknowledgedById: user.id, acknowledgeNote: note.trim() },
+      );
       if (done.affected !== 1) throw new ConflictException('This flag was already acknowledged');
-      await recordAudit(manager, user, { action: 'order.flag-acknowledge', entityType: 'order', entityId: flag.orderId, summary: { flagId: id, code: flag.code, severity: flag.severity, note: note.trim() } });
+      await recordAudit(manager, user, {
+        action: 'order.flag-acknowledge',
+        entityType: 'order',
+        entityId: flag.orderId,
+        summary: { flagId: id, code: flag.code, severity: flag.severity, note: note.trim() },
+      });
       return manager.findOneOrFail(Flag, { where: { id }, relations: { acknowledgedBy: true } });
     });
     this.events.publishForOrder(flag.orderId, 'flag');

@@ -8,7 +8,13 @@ import { type BoardInputs, emptyInputs, inputsByOrder, type OrderInputs, rowFigu
  * The board's rows, sorted by risk, from what was fetched for the ward's orders. Pure: the
  * benchmark's bare baseline server builds its answer with this too, from its own queries.
  */
-export function boardRows(orders: PcaOrder[], inputs: BoardInputs, policy: WardPolicy, shift: { endsAt: string }, now: Date): HandoverRow[] {
+export function boardRows(
+  orders: PcaOrder[],
+  inputs: BoardInputs,
+  policy: WardPolicy,
+  shift: { endsAt: string },
+  now: Date,
+): HandoverRow[] {
   const byOrder = inputsByOrder(inputs);
   const rows = orders.map((order) => {
     const mine = byOrder.get(order.id) ?? emptyInputs();
@@ -34,7 +40,13 @@ export function boardRows(orders: PcaOrder[], inputs: BoardInputs, policy: WardP
       drugName: order.drug.genericName,
       doseUnit: order.doseUnit,
       concentrationPerMl: order.concentrationPerMl,
-      regimen: { demandDose: order.demandDose, lockoutMinutes: order.lockoutMinutes, basalRatePerHour: order.basalRatePerHour, oneHourLimit: order.oneHourLimit, fourHourLimit: order.fourHourLimit },
+      regimen: {
+        demandDose: order.demandDose,
+        lockoutMinutes: order.lockoutMinutes,
+        basalRatePerHour: order.basalRatePerHour,
+        oneHourLimit: order.oneHourLimit,
+        fourHourLimit: order.fourHourLimit,
+      },
       startedAt: order.startedAt?.toISOString() ?? null,
       minutesSinceStart: order.startedAt ? Math.floor((now.getTime() - order.startedAt.getTime()) / 60_000) : null,
       ...figures,

@@ -22,15 +22,46 @@ const HOUR = 3_600_000;
 // Only the columns the board shows or computes with: a ward's orders carry large JSON snapshots
 // that it never shows.
 const ORDER_COLUMNS = {
-  id: true, status: true, patientId: true, doseUnit: true, concentrationPerMl: true, demandDose: true, lockoutMinutes: true, basalRatePerHour: true,
-  oneHourLimit: true, fourHourLimit: true, reviewDate: true, signedAt: true, statusChangedAt: true, startedAt: true,
+  id: true,
+  status: true,
+  patientId: true,
+  doseUnit: true,
+  concentrationPerMl: true,
+  demandDose: true,
+  lockoutMinutes: true,
+  basalRatePerHour: true,
+  oneHourLimit: true,
+  fourHourLimit: true,
+  reviewDate: true,
+  signedAt: true,
+  statusChangedAt: true,
+  startedAt: true,
   patient: { id: true, bed: true, familyName: true, givenName: true, mrn: true, dateOfBirth: true, weightKg: true },
   drug: { id: true, genericName: true },
 } as const;
 const READING_COLUMNS = ['orderId', 'releaseId', 'at', 'attempts', 'delivered', 'volumeInfusedMl'] as const;
 type RawReading = Omit<BoardReading, 'at'> & { at: string | Date };
-const LATEST_COLUMNS = ['id', 'orderId', 'releaseId', 'at', 'painScore', 'sedationLevel', 'respiratoryRate', 'spo2', 'syringeRemainingMl'] as const;
-const SIGNOFF_COLUMNS = { id: true, orderId: true, shiftDate: true, shift: true, role: true, pumpSettingsMatch: true, at: true, nurse: { id: true, displayName: true } } as const;
+const LATEST_COLUMNS = [
+  'id',
+  'orderId',
+  'releaseId',
+  'at',
+  'painScore',
+  'sedationLevel',
+  'respiratoryRate',
+  'spo2',
+  'syringeRemainingMl',
+] as const;
+const SIGNOFF_COLUMNS = {
+  id: true,
+  orderId: true,
+  shiftDate: true,
+  shift: true,
+  role: true,
+  pumpSettingsMatch: true,
+  at: true,
+  nurse: { id: true, displayName: true },
+} as const;
 
 /**
  * The handover board of one ward. A fixed number of queries however many patients: each kind of
@@ -45,7 +76,11 @@ export class HandoverBoardService {
     const ward = await manager.findOneBy(Ward, { id: wardId });
     if (!ward) throw new NotFoundException(`No ward with id ${wardId}`);
     const shift = shiftWindow(now, ward.dayShiftStart, ward.nightShiftStart);
-    const orders = await manager.find(PcaOrder, { select: ORDER_COLUMNS, where: { status: In([...ON_BOARD]), patient: { wardId } }, relations: { patient: true, drug: true } });
+    const orders = await manager.find(PcaOrder, {
+      select: ORDER_COLUMNS,
+      where: { status: In([...ON_BOARD]), patient: { wardId } },
+      relations: { patient: true, drug: true },
+    });
     const ids = orders.map((order) => order.id);
     const inputs = ids.length === 0 ? emptyInputs() : await this.inputs(ids, wardId, shift, now);
 
@@ -77,15 +112,25 @@ export class HandoverBoardService {
         .getMany(),
       manager.find(Flag, { where: { orderId: In(ids), acknowledgedAt: IsNull() }, order: { raisedAt: 'DESC' } }),
       manager.find(SyringeRelease, { select: { id: true, orderId: true, volumeMl: true }, where: { orderId: In(ids), status: 'in_use' } }),
-      manager.find(BedsideCheck, { select: { id: true, orderId: true, releaseId: true, firstAt: true, secondAt: true }, where: { orderId: In(ids), status: 'matched' } }),
-      manager.find(ClinicianBolus, { select: { id: true, orderId: true, amount: true, at: true }, where: { orderId: In(ids), at: MoreThanOrEqual(since) } }),
+      manager.find(BedsideCheck, {
+        select: { id: true, orderId: true, releaseId: true, firstAt: true, secondAt: true },
+        where: { orderId: In(ids), status: 'matched' },
+      }),
+      manager.find(ClinicianBolus, {
+        select: { id: true, orderId: true, amount: true, at: true },
+        where: { orderId: In(ids), at: MoreThanOrEqual(since) },
+      }),
       manager
         .createQueryBuilder(ReleaseReconciliation, 'r')
         .select(['r.id', 'r.at', 'release.id', 'release.orderId'])
         .innerJoin('r.release', 'release')
         .where('release.orderId IN (:...ids) AND r.mustReport = 1', { ids })
         .getMany(),
-      manager.find(HandoverSignoff, { select: SIGNOFF_COLUMNS, where: { wardId, shiftDate: shift.shiftDate, shift: shift.shift as 'day' | 'night' }, relations: { nurse: true } }),
+      manager.find(HandoverSignoff, {
+        select: SIGNOFF_COLUMNS,
+        where: { wardId, shiftDate: shift.shiftDate, shift: shift.shift as 'day' | 'night' },
+        relations: { nurse: true },
+      }),
     ]);
     return { observations, latest, flags, releases, starts, boluses, discrepancies, signoffs };
   }

@@ -29,20 +29,41 @@ export class HandoverSignoffsService {
         throw fieldError('orderId', 'Only an active PCA on this ward is confirmed at handover');
       }
       if (dto.role === 'incoming' && dto.pumpSettingsMatch !== true) {
-        throw fieldError('pumpSettingsMatch', 'Confirm the pump settings match the order; if they do not, stop and escalate before taking over');
+        throw fieldError(
+          'pumpSettingsMatch',
+          'Confirm the pump settings match the order; if they do not, stop and escalate before taking over',
+        );
       }
       const { shift, shiftDate } = shiftWindow(now, ward.dayShiftStart, ward.nightShiftStart);
       const existing = await manager.find(HandoverSignoff, { where: { orderId: dto.orderId, shiftDate, shift } });
-      if (existing.some((signoff) => signoff.role === dto.role)) throw new ConflictException(`The ${dto.role} nurse has already confirmed this PCA for this shift`);
-      if (existing.some((signoff) => signoff.nurseId === nurse.id)) throw fieldError('role', 'The outgoing and incoming nurse are two different people');
+      if (existing.some((signoff) => signoff.role === dto.role))
+        throw new ConflictException(`The ${dto.role} nurse has already confirmed this PCA for this shift`);
+      if (existing.some((signoff) => signoff.nurseId === nurse.id))
+        throw fieldError('role', 'The outgoing and incoming nurse are two different people');
       const created = await manager.save(
-        manager.create(HandoverSignoff, { wardId, orderId: dto.orderId, shiftDate, shift, role: dto.role, nurseId: nurse.id, pumpSettingsMatch: dto.role === 'incoming' ? true : null, at: now }),
+        manager.create(HandoverSignoff, {
+          wardId,
+          orderId: dto.orderId,
+          shiftDate,
+          shift,
+          role: dto.role,
+          nurseId: nurse.id,
+          pumpSettingsMatch: dto.role === 'incoming' ? true : null,
+          at: now,
+        }),
       );
       await recordAudit(manager, nurse, {
         action: 'order.handover-signoff',
         entityType: 'order',
         entityId: dto.orderId,
-        summary: { signoffId: created.id, wardId, shiftDate, shift, role: dto.role, ...(dto.role === 'incoming' ? { pumpSettingsMatch: true } : {}) },
+        summary: {
+          signoffId: created.id,
+          wardId,
+          shiftDate,
+          shift,
+          role: dto.role,
+          ...(dto.role === 'incoming' ? { pumpSettingsMatch: true } : {}),
+        },
       });
       return manager.findOneOrFail(HandoverSignoff, { where: { id: created.id }, relations: { nurse: true } });
     });
@@ -54,7 +75,11 @@ export class HandoverSignoffsService {
     const ward = await this.dataSource.manager.findOneBy(Ward, { id: wardId });
     if (!ward) throw new NotFoundException(`No ward with id ${wardId}`);
     const { shift, shiftDate } = shiftWindow(now, ward.dayShiftStart, ward.nightShiftStart);
-    const signoffs = await this.dataSource.manager.find(HandoverSignoff, { where: { wardId, shiftDate, shift }, relations: { nurse: true }, order: { id: 'ASC' } });
+    const signoffs = await this.dataSource.manager.find(HandoverSignoff, {
+      where: { wardId, shiftDate, shift },
+      relations: { nurse: true },
+      order: { id: 'ASC' },
+    });
     return signoffs.map(toSignoffResponse);
   }
 }

@@ -47,7 +47,11 @@ export class HandoverController {
   @ApiErrors(404, 409)
   @Post('signoffs')
   @Roles('nurse', 'charge_nurse')
-  signOff(@Param('wardId', ParseIdPipe) wardId: number, @Body() body: CreateSignoffDto, @CurrentUser() user: AuthUser): Promise<HandoverSignoffResponse> {
+  signOff(
+    @Param('wardId', ParseIdPipe) wardId: number,
+    @Body() body: CreateSignoffDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<HandoverSignoffResponse> {
     return this.signoffs.signOff(wardId, body, user);
   }
 }

@@ -10,8 +10,23 @@ const now = new Date('2026-12-03T12:00:00Z');
 const ago = (hours: number) => new Date(now.getTime() - hours * HOUR);
 
 // Invented test values: morphine 1 mg/mL, so mL and mg are the same number.
-const order = { id: 1, status: 'active', concentrationPerMl: 1, doseUnit: 'mg', basalRatePerHour: 0, startedAt: ago(30), drug: { genericName: 'morphine' } } as unknown as PcaOrder;
-const reading = (hoursAgo: number, volumeInfusedMl: number): BoardReading => ({ orderId: 1, releaseId: 7, at: ago(hoursAgo), attempts: volumeInfusedMl, delivered: volumeInfusedMl, volumeInfusedMl });
+const order = {
+  id: 1,
+  status: 'active',
+  concentrationPerMl: 1,
+  doseUnit: 'mg',
+  basalRatePerHour: 0,
+  startedAt: ago(30),
+  drug: { genericName: 'morphine' },
+} as unknown as PcaOrder;
+const reading = (hoursAgo: number, volumeInfusedMl: number): BoardReading => ({
+  orderId: 1,
+  releaseId: 7,
+  at: ago(hoursAgo),
+  attempts: volumeInfusedMl,
+  delivered: volumeInfusedMl,
+  volumeInfusedMl,
+});
 
 describe('rowFigures', () => {
   it('counts only use inside the 24 hours when a syringe started before the readings fetched (no reading just before the window)', () => {

@@ -56,7 +56,8 @@ export function inputsByOrder(inputs: BoardInputs): Map<number, OrderInputs> {
   };
   for (const key of Object.keys(inputs) as (keyof BoardInputs)[]) {
     for (const item of inputs[key]) {
-      const orderId = key === 'discrepancies' ? (item as BoardInputs['discrepancies'][number]).release.orderId : (item as { orderId: number }).orderId;
+      const orderId =
+        key === 'discrepancies' ? (item as BoardInputs['discrepancies'][number]).release.orderId : (item as { orderId: number }).orderId;
       (share(orderId)[key] as unknown[]).push(item);
     }
   }
@@ -73,8 +74,22 @@ export function rowFigures(order: PcaOrder, mine: OrderInputs, policy: WardPolic
   // the first reading fetched: otherwise its whole use before the window would count inside it.
   const readFrom = boardReadingsFrom(now).getTime();
   const readings: SyringeReading[] = [
-    ...mine.starts.filter((check) => (check.secondAt ?? check.firstAt).getTime() >= readFrom).map((check) => ({ syringeId: check.releaseId, at: (check.secondAt ?? check.firstAt).toISOString(), attempts: 0, delivered: 0, volumeInfusedMl: 0 })),
-    ...mine.observations.map((o) => ({ syringeId: o.releaseId, at: o.at.toISOString(), attempts: o.attempts, delivered: o.delivered, volumeInfusedMl: o.volumeInfusedMl })),
+    ...mine.starts
+      .filter((check) => (check.secondAt ?? check.firstAt).getTime() >= readFrom)
+      .map((check) => ({
+        syringeId: check.releaseId,
+        at: (check.secondAt ?? check.firstAt).toISOString(),
+        attempts: 0,
+        delivered: 0,
+        volumeInfusedMl: 0,
+      })),
+    ...mine.observations.map((o) => ({
+      syringeId: o.releaseId,
+      at: o.at.toISOString(),
+      attempts: o.attempts,
+      delivered: o.delivered,
+      volumeInfusedMl: o.volumeInfusedMl,
+    })),
   ]
     .map((reading) => ({ reading, time: Date.parse(reading.at) }))
     .sort((x, y) => x.time - y.time)
@@ -87,10 +102,24 @@ export function rowFigures(order: PcaOrder, mine: OrderInputs, policy: WardPolic
 
   const running = mine.releases[0];
   const runningReadings = running ? readings.filter((reading) => reading.syringeId === running.id) : [];
-  const projected = running && last && last.releaseId === running.id ? projectedEmptyAt(runningReadings, last.syringeRemainingMl, order.basalRatePerHour / order.concentrationPerMl) : null;
+  const projected =
+    running && last && last.releaseId === running.id
+      ? projectedEmptyAt(runningReadings, last.syringeRemainingMl, order.basalRatePerHour / order.concentrationPerMl)
+      : null;
   return {
-    lastObservation: last ? { at: last.at.toISOString(), painScore: last.painScore, sedationLevel: last.sedationLevel, respiratoryRate: last.respiratoryRate, spo2: last.spo2 } : null,
-    nextObservation: order.status === 'active' && order.startedAt ? observationDue(order.startedAt.toISOString(), last?.at.toISOString() ?? null, now, policy) : null,
+    lastObservation: last
+      ? {
+          at: last.at.toISOString(),
+          painScore: last.painScore,
+          sedationLevel: last.sedationLevel,
+          respiratoryRate: last.respiratoryRate,
+          spo2: last.spo2,
+        }
+      : null,
+    nextObservation:
+      order.status === 'active' && order.startedAt
+        ? observationDue(order.startedAt.toISOString(), last?.at.toISOString() ?? null, now, policy)
+        : null,
     last4h: { attempts: recent.attempts, delivered: recent.delivered, dose: recent.dose + recent.bolusDose },
     total24hDose: usage.rolling24hDose,
     syringe: {

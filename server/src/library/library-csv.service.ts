@@ -40,7 +40,10 @@ export class LibraryCsvService {
   async preview(wardId: number, file: UploadedCsv | undefined): Promise<ImportPreview> {
     if (!(await this.dataSource.manager.existsBy(Ward, { id: wardId }))) throw fieldError('wardId', `No ward with id ${wardId}`);
     const rules = await this.readRules(file);
-    const active = await this.dataSource.manager.findOne(LibraryVersion, { where: { wardId, status: 'active' }, relations: { rules: { drug: true } } });
+    const active = await this.dataSource.manager.findOne(LibraryVersion, {
+      where: { wardId, status: 'active' },
+      relations: { rules: { drug: true } },
+    });
     return { rules, diff: diffLibrary(active?.rules.map(toNamedRule) ?? [], rules) };
   }
 
@@ -106,6 +109,8 @@ function rowProblems(problems: CsvProblem[]): BadRequestException {
     message:
       `The file has ${problems.length} problem${problems.length === 1 ? '' : 's'} in ${rows} row${rows === 1 ? '' : 's'}; nothing was imported` +
       (more > 0 ? ` (the first ${PROBLEMS_LISTED} are listed)` : ''),
-    errors: problems.slice(0, PROBLEMS_LISTED).map(({ row, column, message }) => ({ field: 'file', row, column, message: `Row ${row}, ${column}: ${message}` })),
+    errors: problems
+      .slice(0, PROBLEMS_LISTED)
+      .map(({ row, column, message }) => ({ field: 'file', row, column, message: `Row ${row}, ${column}: ${message}` })),
   });
 }

@@ -1,7 +1,13 @@
 import { BadRequestException, ConflictException, ForbiddenException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In } from 'typeorm';
-import { LIBRARY_STATUS_LABELS, validateLimitRules, type LibraryStatus, type LibraryVersionDetail, type LimitRuleInput } from '@lockstep/shared';
+import {
+  LIBRARY_STATUS_LABELS,
+  validateLimitRules,
+  type LibraryStatus,
+  type LibraryVersionDetail,
+  type LimitRuleInput,
+} from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { Drug } from '../drugs/entities/drug.entity.js';
 import { UsersService } from '../users/users.service.js';
@@ -40,15 +46,36 @@ export class LibraryVersionsService {
       const active = await manager.findOne(LibraryVersion, { where: { wardId, status: 'active' }, relations: { rules: true } });
       const last = await manager.findOne(LibraryVersion, { where: { wardId }, order: { number: 'DESC' } });
       const draft = await manager.save(
-        manager.create(LibraryVersion, { wardId, number: (last?.number ?? 0) + 1, status: 'draft', note: note?.trim() ?? '', authorId: author.id }),
+        manager.create(LibraryVersion, {
+          wardId,
+          number: (last?.number ?? 0) + 1,
+          status: 'draft',
+          note: note?.trim() ?? '',
+          authorId: author.id,
+        }),
       );
-      const startingRules = rules ?? active?.rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }) => ({ drugId, concentrationPerMl, doseUnit, perKg, limits })) ?? [];
+      const startingRules =
+        rules ??
+        active?.rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }) => ({
+          drugId,
+          concentrationPerMl,
+          doseUnit,
+          perKg,
+          limits,
+        })) ??
+        [];
       await this.writeRules(manager, draft.id, startingRules);
       await recordAudit(manager, author, {
         action: rules ? 'library-version.import' : 'library-version.create',
         entityType: 'library-version',
         entityId: draft.id,
-        summary: { wardId, number: draft.number, note: draft.note, rules: startingRules.length, ...(rules ? {} : { copiedFromVersion: active?.number ?? null }) },
+        summary: {
+          wardId,
+          number: draft.number,
+          note: draft.note,
+          rules: startingRules.length,
+          ...(rules ? {} : { copiedFromVersion: active?.number ?? null }),
+        },
       });
       return toLibraryVersionDetail(await this.library.loadVersion(manager, draft.id));
     });
@@ -59,7 +86,12 @@ export class LibraryVersionsService {
       const version = await this.lockedVersion(manager, id, ['draft'], 'change its rules');
       await manager.delete(LimitRule, { versionId: version.id });
       await this.writeRules(manager, version.id, rules);
-      await recordAudit(manager, author, { action: 'library-version.rules-replace', entityType: 'library-version', entityId: id, summary: { rules: { from: version.rules.length, to: rules.length } } });
+      await recordAudit(manager, author, {
+        action: 'library-version.rules-replace',
+        entityType: 'library-version',
+        entityId: id,
+        summary: { rules: { from: version.rules.length, to: rules.length } },
+      });
       return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
     });
   }
@@ -70,8 +102,17 @@ export class LibraryVersionsService {
       if ((await manager.countBy(LimitRule, { versionId: id })) === 0) {
         throw fieldError('rules', 'A library version needs at least one rule before it is submitted');
       }
-      await manager.update(LibraryVersion, { id }, { status: 'pending_approval', submittedAt: new Date(), ...(note?.trim() ? { note: note.trim() } : {}) });
-      await recordAudit(manager, author, { action: 'library-version.submit', entityType: 'library-version', entityId: id, summary: { status: { from: version.status, to: 'pending_approval' }, ...(note?.trim() ? { note: note.trim() } : {}) } });
+      await manager.update(
+        LibraryVersion,
+        { id },
+        { status: 'pending_approval', submittedAt: new Date(), ...(note?.trim() ? { note: note.trim() } : {}) },
+      );
+      await recordAudit(manager, author, {
+        action: 'library-version.submit',
+        entityType: 'library-version',
+        entityId: id,
+        summary: { status: { from: version.status, to: 'pending_approval' }, ...(note?.trim() ? { note: note.trim() } : {}) },
+      });
       return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
     });
   }
@@ -81,7 +122,12 @@ export class LibraryVersionsService {
     return this.dataSource.transaction(async (manager) => {
       await this.lockedVersion(manager, id, ['pending_approval'], 'withdraw it');
       await manager.update(LibraryVersion, { id }, { status: 'draft', submittedAt: null });
-      await recordAudit(manager, user, { action: 'library-version.withdraw', entityType: 'library-version', entityId: id, summary: { status: { from: 'pending_approval', to: 'draft' } } });
+      await recordAudit(manager, user, {
+        action: 'library-version.withdraw',
+        entityType: 'library-version',
+        entityId: id,
+        summary: { status: { from: 'pending_approval', to: 'draft' } },
+      });
       return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
     });
   }
@@ -91,7 +137,12 @@ export class LibraryVersionsService {
     await this.dataSource.transaction(async (manager) => {
       const version = await this.lockedVersion(manager, id, ['draft'], 'discard it');
       await manager.delete(LibraryVersion, { id });
-      await recordAudit(manager, user, { action: 'library-version.delete', entityType: 'library-version', entityId: id, summary: { wardId: version.wardId, number: version.number, rules: version.rules.length } });
+      await recordAudit(manager, user, {
+        action: 'library-version.delete',
+        entityType: 'library-version',
+        entityId: id,
+        summary: { wardId: version.wardId, number: version.number, rules: version.rules.length },
+      });
     });
   }
 
@@ -104,12 +155,19 @@ export class LibraryVersionsService {
         throw new ForbiddenException('A second pharmacist must approve: you wrote this version');
       }
       if (version.submittedAt?.getTime() !== Date.parse(reviewedSubmission)) {
-        throw new ConflictException(`Version ${version.number} was withdrawn and submitted again after you opened it: review its changes again, then approve`);
+        throw new ConflictException(
+          `Version ${version.number} was withdrawn and submitted again after you opened it: review its changes again, then approve`,
+        );
       }
       const now = new Date();
       await manager.update(LibraryVersion, { wardId: version.wardId, status: 'active' }, { status: 'retired', retiredAt: now });
       await manager.update(LibraryVersion, { id }, { status: 'active', approverId: approver.id, approvedAt: now });
-      await recordAudit(manager, approver, { action: 'library-version.approve', entityType: 'library-version', entityId: id, summary: { wardId: version.wardId, number: version.number, status: { from: version.status, to: 'active' }, signed: true } });
+      await recordAudit(manager, approver, {
+        action: 'library-version.approve',
+        entityType: 'library-version',
+        entityId: id,
+        summary: { wardId: version.wardId, number: version.number, status: { from: version.status, to: 'active' }, signed: true },
+      });
       return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
     });
   }
@@ -117,7 +175,9 @@ export class LibraryVersionsService {
   private async lockedVersion(manager: EntityManager, id: number, allowed: LibraryStatus[], action: string): Promise<LibraryVersion> {
     const version = await this.library.loadVersion(manager, id);
     if (!allowed.includes(version.status)) {
-      throw new ConflictException(`Version ${version.number} is ${LIBRARY_STATUS_LABELS[version.status].toLowerCase()}, so you cannot ${action}`);
+      throw new ConflictException(
+        `Version ${version.number} is ${LIBRARY_STATUS_LABELS[version.status].toLowerCase()}, so you cannot ${action}`,
+      );
     }
     return version;
   }
@@ -129,7 +189,10 @@ export class LibraryVersionsService {
       const drug = drugs.find((candidate) => candidate.id === rule.drugId);
       if (!drug) problems.push({ path: `rules.${index}.drugId`, message: `No drug with id ${rule.drugId}` });
       else if (drug.doseUnit !== rule.doseUnit) {
-        problems.push({ path: `rules.${index}.doseUnit`, message: `${drug.genericName} is dosed in ${drug.doseUnit}, not ${rule.doseUnit}` });
+        problems.push({
+          path: `rules.${index}.doseUnit`,
+          message: `${drug.genericName} is dosed in ${drug.doseUnit}, not ${rule.doseUnit}`,
+        });
       }
     });
     if (problems.length > 0) {
@@ -142,7 +205,14 @@ export class LibraryVersionsService {
     if (rules.length > 0) {
       await manager.insert(
         LimitRule,
-        rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }) => ({ versionId, drugId, concentrationPerMl, doseUnit, perKg, limits })),
+        rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }) => ({
+          versionId,
+          drugId,
+          concentrationPerMl,
+          doseUnit,
+          perKg,
+          limits,
+        })),
       );
     }
   }

@@ -1,4 +1,19 @@
-import { Body, Controller, Delete, Get, Header, HttpCode, Param, Post, Put, Query, Res, UploadedFile, UseFilters, UseInterceptors } from '@nestjs/common';
+import {
+  Body,
+  Controller,
+  Delete,
+  Get,
+  Header,
+  HttpCode,
+  Param,
+  Post,
+  Put,
+  Query,
+  Res,
+  UploadedFile,
+  UseFilters,
+  UseInterceptors,
+} from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
 import type { Response } from 'express';
 import type { LibraryDiff, LibraryVersion, LibraryVersionDetail } from '@lockstep/shared';
@@ -72,7 +87,11 @@ export class LibraryController {
   @ApiErrors(404, 409)
   @Put('versions/:id/rules')
   @Roles('pharmacist')
-  replaceRules(@Param('id', ParseIdPipe) id: number, @Body() body: ReplaceRulesDto, @CurrentUser() user: AuthUser): Promise<LibraryVersionDetail> {
+  replaceRules(
+    @Param('id', ParseIdPipe) id: number,
+    @Body() body: ReplaceRulesDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<LibraryVersionDetail> {
     return this.versions.replaceRules(id, body.rules, user);
   }
 
@@ -81,7 +100,11 @@ export class LibraryController {
   @Post('versions/:id/submit')
   @HttpCode(200)
   @Roles('pharmacist')
-  submit(@Param('id', ParseIdPipe) id: number, @Body() body: SubmitVersionDto, @CurrentUser() user: AuthUser): Promise<LibraryVersionDetail> {
+  submit(
+    @Param('id', ParseIdPipe) id: number,
+    @Body() body: SubmitVersionDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<LibraryVersionDetail> {
     return this.versions.submit(id, body.note, user);
   }
 
@@ -99,7 +122,11 @@ export class LibraryController {
   @Post('versions/:id/approve')
   @HttpCode(200)
   @Roles('pharmacist')
-  approve(@Param('id', ParseIdPipe) id: number, @Body() body: ApproveVersionDto, @CurrentUser() user: AuthUser): Promise<LibraryVersionDetail> {
+  approve(
+    @Param('id', ParseIdPipe) id: number,
+    @Body() body: ApproveVersionDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<LibraryVersionDetail> {
     return this.versions.approve(id, user, body.signature.password, body.submittedAt);
   }
 

@@ -1,7 +1,13 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In } from 'typeorm';
-import { diffLibrary, type LibraryDiff, type LibraryVersion as LibraryVersionResponse, type LibraryVersionDetail, type NamedRule } from '@lockstep/shared';
+import {
+  diffLibrary,
+  type LibraryDiff,
+  type LibraryVersion as LibraryVersionResponse,
+  type LibraryVersionDetail,
+  type NamedRule,
+} from '@lockstep/shared';
 import { Ward } from '../wards/entities/ward.entity.js';
 import { toLibraryVersionDetail, toLibraryVersionResponse, toLimitRuleResponse } from './dto/library-response.js';
 import { LibraryVersion } from './entities/library-version.entity.js';
@@ -15,7 +21,10 @@ export class LibraryService {
   constructor(@InjectDataSource() private readonly dataSource: DataSource) {}
 
   async getActive(wardId: number): Promise<LibraryVersionDetail> {
-    const version = await this.dataSource.manager.findOne(LibraryVersion, { where: { wardId, status: 'active' }, relations: VERSION_RELATIONS });
+    const version = await this.dataSource.manager.findOne(LibraryVersion, {
+      where: { wardId, status: 'active' },
+      relations: VERSION_RELATIONS,
+    });
     if (!version) {
       if (!(await this.dataSource.manager.existsBy(Ward, { id: wardId }))) throw new NotFoundException(`No ward with id ${wardId}`);
       throw new NotFoundException('This ward has no active dose-limit library yet');
@@ -51,14 +60,16 @@ export class LibraryService {
 
   /** The active rule of a ward for one drug at one concentration, or null. */
   async findActiveRule(wardId: number, drugId: number, concentrationPerMl: number): Promise<LimitRule | null> {
-    return this.dataSource.manager
-      .createQueryBuilder(LimitRule, 'rule')
-      .innerJoin('rule.version', 'version', 'version.wardId = :wardId AND version.status = :status', { wardId, status: 'active' })
-      .innerJoinAndSelect('rule.drug', 'drug')
-      .where('rule.drugId = :drugId', { drugId })
-      // Concentrations are decimals typed by people; compare with a tolerance, not bit for bit.
-      .andWhere('abs(rule.concentrationPerMl - :concentration) < 1e-9', { concentration: concentrationPerMl })
-      .getOne();
+    return (
+      this.dataSource.manager
+        .createQueryBuilder(LimitRule, 'rule')
+        .innerJoin('rule.version', 'version', 'version.wardId = :wardId AND version.status = :status', { wardId, status: 'active' })
+        .innerJoinAndSelect('rule.drug', 'drug')
+        .where('rule.drugId = :drugId', { drugId })
+        // Concentrations are decimals typed by people; compare with a tolerance, not bit for bit.
+        .andWhere('abs(rule.concentrationPerMl - :concentration) < 1e-9', { concentration: concentrationPerMl })
+        .getOne()
+    );
   }
 
   async loadVersion(manager: EntityManager, id: number): Promise<LibraryVersion> {

@@ -6,6 +6,10 @@ import type { Response } from 'express';
 export class UploadTooLargeFilter implements ExceptionFilter {
   catch(_exception: PayloadTooLargeException, host: ArgumentsHost): void {
     const message = 'The file is over 1 MB; a dose-limit library CSV is far smaller';
-    host.switchToHttp().getResponse<Response>().status(400).json({ statusCode: 400, message, errors: [{ field: 'file', message }] });
+    host
+      .switchToHttp()
+      .getResponse<Response>()
+      .status(400)
+      .json({ statusCode: 400, message, errors: [{ field: 'file', message }] });
   }
 }

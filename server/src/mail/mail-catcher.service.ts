@@ -55,7 +55,9 @@ export class MailCatcherService implements OnModuleDestroy {
       .filter(Boolean)
       .join(', ');
     // Through the transaction queue, so it never lands inside (or is rolled back with) a request’s transaction.
-    await this.dataSource.transaction((manager) => manager.insert(MailboxMessage, { to: addresses, subject, text: text.trim(), at: new Date() }));
+    await this.dataSource.transaction((manager) =>
+      manager.insert(MailboxMessage, { to: addresses, subject, text: text.trim(), at: new Date() }),
+    );
   }
 
   onModuleDestroy(): Promise<void> {

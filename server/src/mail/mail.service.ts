@@ -46,7 +46,9 @@ export class MailService {
         return;
       } catch (error) {
         const last = attempt === RETRY_DELAYS_MS.length;
-        this.logger.warn(`Sending "${mail.subject}" to ${mail.to} failed (attempt ${attempt + 1})${last ? '; giving up' : ''}: ${(error as Error).message}`);
+        this.logger.warn(
+          `Sending "${mail.subject}" to ${mail.to} failed (attempt ${attempt + 1})${last ? '; giving up' : ''}: ${(error as Error).message}`,
+        );
         if (last) return;
         await new Promise((resolve) => setTimeout(resolve, RETRY_DELAYS_MS[attempt]));
       }

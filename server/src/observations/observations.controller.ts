@@ -22,7 +22,11 @@ export class ObservationsController {
   @ApiErrors(404, 409)
   @Post('observations')
   @Roles('nurse', 'charge_nurse')
-  record(@Param('orderId', ParseIdPipe) orderId: number, @Body() body: CreateObservationDto, @CurrentUser() user: AuthUser): Promise<ObservationResponse> {
+  record(
+    @Param('orderId', ParseIdPipe) orderId: number,
+    @Body() body: CreateObservationDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<ObservationResponse> {
     return this.observations.record(orderId, body, user);
   }
 

@@ -36,14 +36,20 @@ export class ObservationsService {
     const { order, observation, raised } = await this.dataSource.transaction(async (manager) => {
       const found = await this.orders.load(manager, orderId);
       if (found.status !== 'active') {
-        throw new ConflictException({ statusCode: 409, message: `Observations are recorded on an active PCA; this one is ${ORDER_STATUS_LABELS[found.status].toLowerCase()}`, currentStatus: found.status });
+        throw new ConflictException({
+          statusCode: 409,
+          message: `Observations are recorded on an active PCA; this one is ${ORDER_STATUS_LABELS[found.status].toLowerCase()}`,
+          currentStatus: found.status,
+        });
       }
       const release = await manager.findOneBy(SyringeRelease, { orderId, status: 'in_use' });
       if (!release) throw new ConflictException('No syringe is running: finish the bedside check first');
       const at = dto.at ? new Date(dto.at) : new Date();
       const { previous } = await checkTimeline(manager, found, release.id, at, dto);
 
-      const saved = await manager.save(manager.create(Observation, { ...dto, at, orderId, releaseId: release.id, note: dto.note?.trim() ?? '', recordedById: nurse.id }));
+      const saved = await manager.save(
+        manager.create(Observation, { ...dto, at, orderId, releaseId: release.id, note: dto.note?.trim() ?? '', recordedById: nurse.id }),
+      );
       const drafts = observationFlags(
         { ...dto, at: at.toISOString() },
         previous ? { ...previous, at: previous.at.toISOString() } : null,
@@ -61,7 +67,10 @@ export class ObservationsService {
         action: 'order.observation',
         entityType: 'order',
         entityId: orderId,
-        summary: observationAuditSummary({ ...dto, id: saved.id, at }, flags.map((flag) => flag.code)),
+        summary: observationAuditSummary(
+          { ...dto, id: saved.id, at },
+          flags.map((flag) => flag.code),
+        ),
       });
       const withUser = await manager.findOneOrFail(Observation, { where: { id: saved.id }, relations: { recordedBy: true } });
       return { order: found, observation: withUser, raised: flags };
@@ -79,7 +88,11 @@ export class ObservationsService {
 
   async list(orderId: number): Promise<ObservationResponse[]> {
     await this.orders.load(this.dataSource.manager, orderId);
-    const observations = await this.dataSource.manager.find(Observation, { where: { orderId }, relations: { recordedBy: true }, order: { at: 'ASC', id: 'ASC' } });
+    const observations = await this.dataSource.manager.find(Observation, {
+      where: { orderId },
+      relations: { recordedBy: true },
+      order: { at: 'ASC', id: 'ASC' },
+    });
     return observations.map(toObservationResponse);
   }
 }
@@ -89,11 +102,20 @@ async function checkTimeline(manager: EntityManager, order: PcaOrder, releaseId:
   const errors: FieldError[] = [];
   if (at.getTime() > Date.now() + CLOCK_SKEW_MS) errors.push({ field: 'at', message: 'An observation cannot be in the future' });
   if (order.startedAt && at < order.startedAt) errors.push({ field: 'at', message: 'An observation cannot be before the PCA started' });
-  const previous = await manager.findOne(Observation, { where: { orderId: order.id, releaseId, at: LessThanOrEqual(at) }, order: { at: 'DESC', id: 'DESC' } });
-  const next = await manager.findOne(Observation, { where: { orderId: order.id, releaseId, at: MoreThan(at) }, order: { at: 'ASC', id: 'ASC' } });
+  const previous = await manager.findOne(Observation, {
+    where: { orderId: order.id, releaseId, at: LessThanOrEqual(at) },
+    order: { at: 'DESC', id: 'DESC' },
+  });
+  const next = await manager.findOne(Observation, {
+    where: { orderId: order.id, releaseId, at: MoreThan(at) },
+    order: { at: 'ASC', id: 'ASC' },
+  });
   for (const counter of PUMP_COUNTERS) {
     if (previous && dto[counter] < previous[counter]) {
-      errors.push({ field: counter, message: `The pump total cannot go down within one syringe: it was ${previous[counter]} at the last observation` });
+      errors.push({
+        field: counter,
+        message: `The pump total cannot go down within one syringe: it was ${previous[counter]} at the last observation`,
+      });
     } else if (next && dto[counter] > next[counter]) {
       errors.push({ field: counter, message: `The pump total cannot be more than the later observation's ${next[counter]}` });
     }

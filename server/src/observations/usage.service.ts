@@ -32,16 +32,40 @@ export class UsageService {
     const last = recent.at(-1) ?? (await manager.findOne(Observation, { where: { orderId }, order: { at: 'DESC', id: 'DESC' } }));
     const releaseIds = [...new Set(recent.map((observation) => observation.releaseId))];
     // Each syringe's counters start at zero when its bedside check matched.
-    const starts = releaseIds.length === 0 ? [] : await manager.find(BedsideCheck, { where: { orderId, status: 'matched', releaseId: In(releaseIds) } });
+    const starts =
+      releaseIds.length === 0 ? [] : await manager.find(BedsideCheck, { where: { orderId, status: 'matched', releaseId: In(releaseIds) } });
     const readings: SyringeReading[] = [
-      ...starts.map((check) => ({ syringeId: check.releaseId, at: (check.secondAt ?? check.firstAt).toISOString(), attempts: 0, delivered: 0, volumeInfusedMl: 0 })),
-      ...recent.map((o) => ({ syringeId: o.releaseId, at: o.at.toISOString(), attempts: o.attempts, delivered: o.delivered, volumeInfusedMl: o.volumeInfusedMl })),
+      ...starts.map((check) => ({
+        syringeId: check.releaseId,
+        at: (check.secondAt ?? check.firstAt).toISOString(),
+        attempts: 0,
+        delivered: 0,
+        volumeInfusedMl: 0,
+      })),
+      ...recent.map((o) => ({
+        syringeId: o.releaseId,
+        at: o.at.toISOString(),
+        attempts: o.attempts,
+        delivered: o.delivered,
+        volumeInfusedMl: o.volumeInfusedMl,
+      })),
     ];
     const boluses = await manager.find(ClinicianBolus, { where: { orderId, at: MoreThanOrEqual(since) } });
-    const summary = usageSummary(readings, boluses.map((bolus) => ({ at: bolus.at.toISOString(), amount: bolus.amount })), { concentrationPerMl: order.concentrationPerMl, doseUnit: order.doseUnit, drug: order.drug.genericName }, now, hours);
+    const summary = usageSummary(
+      readings,
+      boluses.map((bolus) => ({ at: bolus.at.toISOString(), amount: bolus.amount })),
+      { concentrationPerMl: order.concentrationPerMl, doseUnit: order.doseUnit, drug: order.drug.genericName },
+      now,
+      hours,
+    );
 
-    const syringeReadings = last ? readings.filter((reading) => reading.syringeId === last.releaseId).sort((x, y) => Date.parse(x.at) - Date.parse(y.at)) : [];
-    const projected = last && order.status === 'active' ? projectedEmptyAt(syringeReadings, last.syringeRemainingMl, order.basalRatePerHour / order.concentrationPerMl) : null;
+    const syringeReadings = last
+      ? readings.filter((reading) => reading.syringeId === last.releaseId).sort((x, y) => Date.parse(x.at) - Date.parse(y.at))
+      : [];
+    const projected =
+      last && order.status === 'active'
+        ? projectedEmptyAt(syringeReadings, last.syringeRemainingMl, order.basalRatePerHour / order.concentrationPerMl)
+        : null;
     const nextObservation = nextObservationFor(order, last?.at ?? null, now);
     return { ...summary, doseUnit: order.doseUnit, projectedEmptyAt: projected, nextObservation };
   }

@@ -1,7 +1,17 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
-import { ageInYears, checkOrder, deriveOrderValues, formatDose, tallMan, type Finding, type OrderDerivedValues, type OrderPreview, type Regimen } from '@lockstep/shared';
+import {
+  ageInYears,
+  checkOrder,
+  deriveOrderValues,
+  formatDose,
+  tallMan,
+  type Finding,
+  type OrderDerivedValues,
+  type OrderPreview,
+  type Regimen,
+} from '@lockstep/shared';
 import { Drug } from '../drugs/entities/drug.entity.js';
 import { toLimitRuleResponse } from '../library/dto/library-response.js';
 import type { LimitRule } from '../library/entities/limit-rule.entity.js';

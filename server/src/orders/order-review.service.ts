@@ -28,7 +28,12 @@ export class OrderReviewService {
       const order = await this.orders.load(manager, id);
       if (order.prescriberId === pharmacist.id) throw new ForbiddenException('You wrote this order: another pharmacist verifies it');
       await transitionOrder(manager, order, 'verified', pharmacist.id, null, { verifiedById: pharmacist.id, verifiedAt: new Date() });
-      await recordAudit(manager, pharmacist, { action: 'order.verify', entityType: 'order', entityId: id, summary: { status: { from: order.status, to: 'verified' }, signed: true } });
+      await recordAudit(manager, pharmacist, {
+        action: 'order.verify',
+        entityType: 'order',
+        entityId: id,
+        summary: { status: { from: order.status, to: 'verified' }, signed: true },
+      });
     });
     this.events.publishForOrder(id, 'order');
     return this.orders.get(id);
@@ -38,7 +43,12 @@ export class OrderReviewService {
     const order = await this.dataSource.transaction(async (manager) => {
       const found = await this.orders.load(manager, id);
       await transitionOrder(manager, found, 'returned', pharmacist.id, reason.trim());
-      await recordAudit(manager, pharmacist, { action: 'order.return', entityType: 'order', entityId: id, summary: { status: { from: found.status, to: 'returned' }, reason: reason.trim() } });
+      await recordAudit(manager, pharmacist, {
+        action: 'order.return',
+        entityType: 'order',
+        entityId: id,
+        summary: { status: { from: found.status, to: 'returned' }, reason: reason.trim() },
+      });
       return found;
     });
     this.mail.send(orderReturnedMail(order, reason.trim(), pharmacist.displayName));
@@ -50,7 +60,12 @@ export class OrderReviewService {
     const order = await this.dataSource.transaction(async (manager) => {
       const found = await this.orders.load(manager, id);
       await transitionOrder(manager, found, 'rejected', pharmacist.id, reason.trim());
-      await recordAudit(manager, pharmacist, { action: 'order.reject', entityType: 'order', entityId: id, summary: { status: { from: found.status, to: 'rejected' }, reason: reason.trim() } });
+      await recordAudit(manager, pharmacist, {
+        action: 'order.reject',
+        entityType: 'order',
+        entityId: id,
+        summary: { status: { from: found.status, to: 'rejected' }, reason: reason.trim() },
+      });
       return found;
     });
     this.mail.send(orderRejectedMail(order, reason.trim(), pharmacist.displayName));

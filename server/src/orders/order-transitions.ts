@@ -22,7 +22,11 @@ export async function transitionOrder(
     .createQueryBuilder()
     .update(PcaOrder)
     .set({ ...changes, status: to, statusChangedAt: at, statusReason: reason, rowVersion: order.rowVersion + 1 })
-    .where('id = :id AND rowVersion = :rowVersion AND status = :status', { id: order.id, rowVersion: order.rowVersion, status: order.status })
+    .where('id = :id AND rowVersion = :rowVersion AND status = :status', {
+      id: order.id,
+      rowVersion: order.rowVersion,
+      status: order.status,
+    })
     .execute();
   if (result.affected !== 1) {
     const current = await manager.findOneByOrFail(PcaOrder, { id: order.id });

@@ -71,11 +71,28 @@ export class OrdersService {
         statusReason: null,
       });
       const orderId = identifiers[0].id as number;
-      await manager.insert(OrderEvent, { orderId, fromStatus: null, toStatus: 'awaiting_verification', userId: prescriber.id, at: now, reason: previous ? `Revision of order ${previous.id}` : null });
-      await recordAudit(manager, prescriber, { action: previous ? 'order.revise' : 'order.create', entityType: 'order', entityId: orderId, summary: orderAuditSummary(dto, previous?.id) });
+      await manager.insert(OrderEvent, {
+        orderId,
+        fromStatus: null,
+        toStatus: 'awaiting_verification',
+        userId: prescriber.id,
+        at: now,
+        reason: previous ? `Revision of order ${previous.id}` : null,
+      });
+      await recordAudit(manager, prescriber, {
+        action: previous ? 'order.revise' : 'order.create',
+        entityType: 'order',
+        entityId: orderId,
+        summary: orderAuditSummary(dto, previous?.id),
+      });
       if (previous) {
         await transitionOrder(manager, previous, 'superseded', prescriber.id, `Revised as order ${orderId}`);
-        await recordAudit(manager, prescriber, { action: 'order.revise', entityType: 'order', entityId: previous.id, summary: { status: { from: previous.status, to: 'superseded' }, revisedAs: orderId } });
+        await recordAudit(manager, prescriber, {
+          action: 'order.revise',
+          entityType: 'order',
+          entityId: previous.id,
+          summary: { status: { from: previous.status, to: 'superseded' }, revisedAs: orderId },
+        });
       }
       return orderId;
     });
@@ -90,7 +107,12 @@ export class OrdersService {
     await this.dataSource.transaction(async (manager) => {
       const order = await this.load(manager, id);
       await transitionOrder(manager, order, 'cancelled', user.id, reason);
-      await recordAudit(manager, user, { action: 'order.cancel', entityType: 'order', entityId: id, summary: { status: { from: order.status, to: 'cancelled' }, reason } });
+      await recordAudit(manager, user, {
+        action: 'order.cancel',
+        entityType: 'order',
+        entityId: id,
+        summary: { status: { from: order.status, to: 'cancelled' }, reason },
+      });
     });
     this.events.publishForOrder(id, 'order');
     return this.get(id);
@@ -122,7 +144,10 @@ export class OrdersService {
     const events = await manager.find(OrderEvent, { where: { orderId: id }, relations: { user: true }, order: { id: 'ASC' } });
     const releases = await manager.find(SyringeRelease, { where: { orderId: id }, relations: { releasedBy: true }, order: { id: 'ASC' } });
     const flags = await manager.find(Flag, { where: { orderId: id }, relations: { acknowledgedBy: true }, order: { id: 'DESC' } });
-    const last = order.status === 'active' ? await manager.findOne(Observation, { select: { id: true, at: true }, where: { orderId: id }, order: { at: 'DESC', id: 'DESC' } }) : null;
+    const last =
+      order.status === 'active'
+        ? await manager.findOne(Observation, { select: { id: true, at: true }, where: { orderId: id }, order: { at: 'DESC', id: 'DESC' } })
+        : null;
     return toOrderDetail(order, events, releases, flags, nextObservationFor(order, last?.at ?? null, new Date()));
   }
 
@@ -136,7 +161,11 @@ export class OrdersService {
     const previous = await this.load(manager, id);
     if (previous.status !== 'returned') throw statusConflict(previous.status, 'superseded' satisfies OrderStatus);
     if (previous.patientId !== patientId) {
-      throw new BadRequestException({ statusCode: 400, message: 'A revision is for the same patient', errors: [{ field: 'patientId', message: 'A revision is for the same patient as the order it revises' }] });
+      throw new BadRequestException({
+        statusCode: 400,
+        message: 'A revision is for the same patient',
+        errors: [{ field: 'patientId', message: 'A revision is for the same patient as the order it revises' }],
+      });
     }
     return previous;
   }
@@ -161,5 +190,7 @@ function checkSignable(findings: Finding[], dto: CreateOrderDto): CreateOrderDto
       errors: unexplained.map((finding) => ({ field: finding.field, message: `Reason needed: ${finding.message}` })),
     });
   }
-  return dto.overrides.filter((override) => soft.some((finding) => finding.field === override.field)).map(({ field, reason }) => ({ field, reason: reason.trim() }));
+  return dto.overrides
+    .filter((override) => soft.some((finding) => finding.field === override.field))
+    .map(({ field, reason }) => ({ field, reason: reason.trim() }));
 }

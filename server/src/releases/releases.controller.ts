@@ -17,7 +17,11 @@ export class ReleasesController {
   @ApiErrors(404, 409)
   @Post()
   @Roles('pharmacist')
-  release(@Param('orderId', ParseIdPipe) orderId: number, @Body() body: CreateReleaseDto, @CurrentUser() user: AuthUser): Promise<SyringeReleaseResponse> {
+  release(
+    @Param('orderId', ParseIdPipe) orderId: number,
+    @Body() body: CreateReleaseDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<SyringeReleaseResponse> {
     return this.releases.release(orderId, body, user);
   }
 }

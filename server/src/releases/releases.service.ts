@@ -2,7 +2,14 @@ import { BadRequestException, ConflictException, Injectable } from '@nestjs/comm
 import { InjectDataSource } from '@nestjs/typeorm';
 import { randomInt } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
-import { formatDose, ORDER_STATUS_LABELS, releaseCode, USUAL_SYRINGE_ML, type FieldError, type SyringeReleaseResponse } from '@lockstep/shared';
+import {
+  formatDose,
+  ORDER_STATUS_LABELS,
+  releaseCode,
+  USUAL_SYRINGE_ML,
+  type FieldError,
+  type SyringeReleaseResponse,
+} from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { MailService } from '../mail/mail.service.js';
 import { syringeReleasedMail } from '../orders/order-notifications.js';
@@ -31,7 +38,11 @@ export class ReleasesService {
     const { order, release } = await this.dataSource.transaction(async (manager) => {
       const found = await this.orders.load(manager, orderId);
       if (found.status !== 'verified' && found.status !== 'active') {
-        throw new ConflictException({ statusCode: 409, message: `Syringes are released for verified or active orders; this one is ${ORDER_STATUS_LABELS[found.status].toLowerCase()}`, currentStatus: found.status });
+        throw new ConflictException({
+          statusCode: 409,
+          message: `Syringes are released for verified or active orders; this one is ${ORDER_STATUS_LABELS[found.status].toLowerCase()}`,
+          currentStatus: found.status,
+        });
       }
       checkRelease(dto, found.concentrationPerMl, found.doseUnit);
       const saved = await manager.save(
@@ -56,7 +67,10 @@ export class ReleasesService {
         entityId: orderId,
         summary: releaseAuditSummary(saved),
       });
-      return { order: found, release: await manager.findOneOrFail(SyringeRelease, { where: { id: saved.id }, relations: { releasedBy: true } }) };
+      return {
+        order: found,
+        release: await manager.findOneOrFail(SyringeRelease, { where: { id: saved.id }, relations: { releasedBy: true } }),
+      };
     });
     this.mail.send(syringeReleasedMail(order, release));
     this.events.publishForOrder(orderId, 'release');
@@ -67,7 +81,10 @@ export class ReleasesService {
 function checkRelease(dto: CreateReleaseDto, orderedConcentration: number, doseUnit: string): void {
   const errors: FieldError[] = [];
   if (Math.abs(dto.concentrationPerMl - orderedConcentration) > SAME_CONCENTRATION) {
-    errors.push({ field: 'concentrationPerMl', message: `The order is for ${formatDose(orderedConcentration, `${doseUnit}/mL`)}; the syringe must match it` });
+    errors.push({
+      field: 'concentrationPerMl',
+      message: `The order is for ${formatDose(orderedConcentration, `${doseUnit}/mL`)}; the syringe must match it`,
+    });
   }
   const unusual = dto.volumeMl < USUAL_SYRINGE_ML.min || dto.volumeMl > USUAL_SYRINGE_ML.max;
   if (unusual && !dto.overrideReason?.trim()) {

@@ -1,4 +1,12 @@
-import { BadRequestException, ConflictException, ForbiddenException, Inject, Injectable, NotFoundException, UnauthorizedException } from '@nestjs/common';
+import {
+  BadRequestException,
+  ConflictException,
+  ForbiddenException,
+  Inject,
+  Injectable,
+  NotFoundException,
+  UnauthorizedException,
+} from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { DataSource, In, type Repository } from 'typeorm';
 import { ROLE_LABELS, type Role, type SessionProfile, type SessionUser, type User as UserResponse } from '@lockstep/shared';
@@ -32,7 +40,10 @@ export class UsersService {
   /** A signature is the caller's own password typed again; a wrong one is a 401 and nothing is signed. */
   async verifySignature(userId: number, password: string): Promise<void> {
     const user = await this.users.findOneBy({ id: userId, active: true });
-    const matches = await this.attempts.check(user?.username, async () => user !== null && (await passwordMatches(password, user.passwordHash)));
+    const matches = await this.attempts.check(
+      user?.username,
+      async () => user !== null && (await passwordMatches(password, user.passwordHash)),
+    );
     if (!matches) {
       throw new UnauthorizedException({
         statusCode: 401,
@@ -50,13 +61,23 @@ export class UsersService {
     const at = (name: string) => (field ? `${field}.${name}` : name);
     const colleague = await this.attempts.check(username, () => this.verifyCredentials(username.trim(), password));
     if (!colleague) {
-      throw new UnauthorizedException({ statusCode: 401, message: 'The second person’s username or password is incorrect', errors: [{ field: at('password'), message: 'Username or password is incorrect' }] });
+      throw new UnauthorizedException({
+        statusCode: 401,
+        message: 'The second person’s username or password is incorrect',
+        errors: [{ field: at('password'), message: 'Username or password is incorrect' }],
+      });
     }
     if (colleague.id === notUserId) {
-      throw new BadRequestException({ statusCode: 400, message: 'A second, different person must sign', errors: [{ field: at('username'), message: 'You cannot be both people: a different colleague signs here' }] });
+      throw new BadRequestException({
+        statusCode: 400,
+        message: 'A second, different person must sign',
+        errors: [{ field: at('username'), message: 'You cannot be both people: a different colleague signs here' }],
+      });
     }
     if (!roles.includes(colleague.role)) {
-      throw new ForbiddenException(`${colleague.displayName} is a ${ROLE_LABELS[colleague.role].toLowerCase()}; only a nurse or charge nurse can sign here`);
+      throw new ForbiddenException(
+        `${colleague.displayName} is a ${ROLE_LABELS[colleague.role].toLowerCase()}; only a nurse or charge nurse can sign here`,
+      );
     }
     return colleague;
   }
@@ -123,7 +144,10 @@ export class UsersService {
         action: 'user.update',
         entityType: 'user',
         entityId: id,
-        summary: { ...changedFields(before, after, ['displayName', 'role', 'active', 'wardIds']), ...(passwordHash ? { passwordReset: true } : {}) },
+        summary: {
+          ...changedFields(before, after, ['displayName', 'role', 'active', 'wardIds']),
+          ...(passwordHash ? { passwordReset: true } : {}),
+        },
       });
       return after;
     });

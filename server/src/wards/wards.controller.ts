@@ -31,7 +31,11 @@ export class WardsController {
   @ApiErrors(404)
   @Patch(':wardId/policy')
   @Roles('admin')
-  updatePolicy(@Param('wardId', ParseIdPipe) wardId: number, @Body() body: UpdateWardPolicyDto, @CurrentUser() admin: AuthUser): Promise<WardPolicySettings> {
+  updatePolicy(
+    @Param('wardId', ParseIdPipe) wardId: number,
+    @Body() body: UpdateWardPolicyDto,
+    @CurrentUser() admin: AuthUser,
+  ): Promise<WardPolicySettings> {
     return this.wards.updatePolicy(wardId, body, admin);
   }
 }

@@ -21,7 +21,20 @@ const INFINITY = 'INFINITY-sentinel-5c1e';
 const MINUS_INFINITY = '-INFINITY-sentinel-5c1e';
 
 /** Keys a careless handler might copy onto an entity. */
-const MASS_ASSIGNMENT_KEYS = ['id', 'status', 'role', 'isAdmin', 'passwordHash', 'userId', 'verifiedById', 'prescriberId', 'approverId', 'createdAt', 'version', 'rowVersion'];
+const MASS_ASSIGNMENT_KEYS = [
+  'id',
+  'status',
+  'role',
+  'isAdmin',
+  'passwordHash',
+  'userId',
+  'verifiedById',
+  'prescriberId',
+  'approverId',
+  'createdAt',
+  'version',
+  'rowVersion',
+];
 
 const nullIsBad = (presence: Presence) => presence === 'required' || presence === 'partial';
 const missingIsBad = (presence: Presence) => presence === 'required' || presence === 'nullable';
@@ -35,7 +48,9 @@ function fieldMutations(spec: FieldSpec, path: Path, current: unknown): fc.Arbit
   arbitraries.push(fc.oneof(...values).map(({ kind, value }) => ({ kind, at: path, broken: path, value })));
   if (spec.type === 'array') {
     const items = Array.isArray(current) ? current : [];
-    const tooMany = fc.integer({ min: spec.maxItems + 1, max: spec.maxItems + 3 }).map((n) => Array.from({ length: n }, () => structuredClone(spec.sample)));
+    const tooMany = fc
+      .integer({ min: spec.maxItems + 1, max: spec.maxItems + 3 })
+      .map((n) => Array.from({ length: n }, () => structuredClone(spec.sample)));
     arbitraries.push(tooMany.map((value) => ({ kind: 'too many items', at: path, broken: path, value })));
     const itemValues = badValues(spec.items, true);
     arbitraries.push(
@@ -54,8 +69,12 @@ const PROTOTYPE_NAMES = new Set([...Object.getOwnPropertyNames(Object.prototype)
 
 function unknownFieldMutation(spec: BodySpec, path: Path): fc.Arbitrary<Mutation> {
   // Object.prototype's names are left to prototypeKeys: class-transformer drops them silently.
-  const key = fc.oneof(fc.string({ maxLength: 16 }), fc.constantFrom(...MASS_ASSIGNMENT_KEYS), injection).filter((k) => !(k in spec) && !PROTOTYPE_NAMES.has(k));
-  return fc.tuple(key, fc.jsonValue({ maxDepth: 2 })).map(([k, value]) => ({ kind: 'unknown field', at: [...path, k], broken: [...path, k], value }));
+  const key = fc
+    .oneof(fc.string({ maxLength: 16 }), fc.constantFrom(...MASS_ASSIGNMENT_KEYS), injection)
+    .filter((k) => !(k in spec) && !PROTOTYPE_NAMES.has(k));
+  return fc
+    .tuple(key, fc.jsonValue({ maxDepth: 2 }))
+    .map(([k, value]) => ({ kind: 'unknown field', at: [...path, k], broken: [...path, k], value }));
 }
 
 /**
@@ -100,7 +119,11 @@ function apply(body: Json, mutation: Mutation): boolean {
 }
 
 /** Objects under keys that exist on Object.prototype: the validation pipe must never let them pollute it. */
-const prototypeKeys = fc.subarray(['"__proto__":{"polluted":"yes"}', '"constructor":{"prototype":{"polluted":"yes"}}', '"toString":"polluted"']);
+const prototypeKeys = fc.subarray([
+  '"__proto__":{"polluted":"yes"}',
+  '"constructor":{"prototype":{"polluted":"yes"}}',
+  '"toString":"polluted"',
+]);
 
 export function toJson(body: unknown): string {
   return JSON.stringify(body, (_key, value: unknown) => (value === Infinity ? INFINITY : value === -Infinity ? MINUS_INFINITY : value))
@@ -118,7 +141,8 @@ export function badBodies(spec: BodySpec, valid: Json): fc.Arbitrary<BadBody> {
     const applied: Mutation[] = [];
     for (const mutation of mutations) {
       // A later mutation must not touch what an earlier one broke (or rebuild a list around it).
-      const clash = (done: Mutation) => related(dotted(done.at), dotted(mutation.at)) || related(dotted(done.broken), dotted(mutation.broken));
+      const clash = (done: Mutation) =>
+        related(dotted(done.at), dotted(mutation.at)) || related(dotted(done.broken), dotted(mutation.broken));
       if (applied.some(clash)) continue;
       if (apply(body, mutation)) applied.push(mutation);
     }
@@ -131,6 +155,9 @@ export function badBodies(spec: BodySpec, valid: Json): fc.Arbitrary<BadBody> {
       extraKeys: extras.map((extra) => extra.slice(1, extra.indexOf('"', 1))),
     };
     // fast-check prints counterexamples with this: keep a 501-rule list from filling the screen.
-    return Object.assign(bad, { [fc.toStringMethod]: () => `${bad.kinds.join(' + ')} at ${bad.broken.join(', ')}: ${bad.json.length > 600 ? `${bad.json.slice(0, 600)}…` : bad.json}` });
+    return Object.assign(bad, {
+      [fc.toStringMethod]: () =>
+        `${bad.kinds.join(' + ')} at ${bad.broken.join(', ')}: ${bad.json.length > 600 ? `${bad.json.slice(0, 600)}…` : bad.json}`,
+    });
   });
 }

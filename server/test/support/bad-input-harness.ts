@@ -26,7 +26,20 @@ export type BadInputRoute = {
 };
 
 /** Not one of them is valid JSON for a DTO: malformed text, or JSON whose top level is not an object. */
-const MALFORMED_JSON = ['{"demandDose": NaN}', '{', '{"a":1,}', "{'a':1}", '{"a":1}{"b":2}', '"text"', 'null', '42', 'true', '[]', '[{}]', '\u0000'];
+const MALFORMED_JSON = [
+  '{"demandDose": NaN}',
+  '{',
+  '{"a":1,}',
+  "{'a':1}",
+  '{"a":1}{"b":2}',
+  '"text"',
+  'null',
+  '42',
+  'true',
+  '[]',
+  '[{}]',
+  '\u0000',
+];
 /** Over the 100 kB JSON body limit (JSON_BODY_LIMIT_KB). */
 const OVERSIZED_JSON = JSON.stringify({ note: 'x'.repeat(150 * 1024) });
 
@@ -42,7 +55,11 @@ export interface BadInputApp {
  * The app listening on a free port, one sign-in per role, and the tests every write route gets:
  * generated bad bodies, malformed JSON, and a check that the valid starting body really is valid.
  */
-export function badInputSuite(file: string, routes: BadInputRoute[], setup: (app: BadInputApp) => Promise<void> = async () => {}): BadInputApp {
+export function badInputSuite(
+  file: string,
+  routes: BadInputRoute[],
+  setup: (app: BadInputApp) => Promise<void> = async () => {},
+): BadInputApp {
   const context = { tokens: {} as Record<Role, string>, tallies: [] as RouteTally[] } as BadInputApp;
   const tokenFor = (role: Role | 'anonymous') => (role === 'anonymous' ? undefined : context.tokens[role]);
 
@@ -62,7 +79,9 @@ export function badInputSuite(file: string, routes: BadInputRoute[], setup: (app
   const named = routes.map((route) => [`${route.method} ${route.path}`, route] as const);
 
   it('covers the routes BAD_INPUT_COVERAGE assigns to this file', () => {
-    const assigned = Object.entries(BAD_INPUT_COVERAGE).filter(([, where]) => where === file).map(([key]) => key);
+    const assigned = Object.entries(BAD_INPUT_COVERAGE)
+      .filter(([, where]) => where === file)
+      .map(([key]) => key);
     expect(routes.map((route) => routeKey(route.method, route.path)).sort()).toEqual(assigned.sort());
   });
 
@@ -70,12 +89,25 @@ export function badInputSuite(file: string, routes: BadInputRoute[], setup: (app
     await expect(createValidationPipe().transform(route.valid(), { type: 'body', metatype: route.dto })).resolves.toBeDefined();
   });
 
-  it.each(named)('%s: generated bad bodies are all 400 naming the broken fields, and nothing is written', { timeout: 300_000 }, async (_name, route) => {
-    const before = await settledRowCounts(context.dataSource);
-    context.tallies.push(await sendBadBodies({ api: context.api, method: route.method, url: route.url(), token: tokenFor(route.role), spec: route.spec, valid: route.valid() }));
-    expect(await rowCounts(context.dataSource)).toEqual(before);
-    expect(prototypeIsClean(), 'Object.prototype was polluted').toBe(true);
-  });
+  it.each(named)(
+    '%s: generated bad bodies are all 400 naming the broken fields, and nothing is written',
+    { timeout: 300_000 },
+    async (_name, route) => {
+      const before = await settledRowCounts(context.dataSource);
+      context.tallies.push(
+        await sendBadBodies({
+          api: context.api,
+          method: route.method,
+          url: route.url(),
+          token: tokenFor(route.role),
+          spec: route.spec,
+          valid: route.valid(),
+        }),
+      );
+      expect(await rowCounts(context.dataSource)).toEqual(before);
+      expect(prototypeIsClean(), 'Object.prototype was polluted').toBe(true);
+    },
+  );
 
   it.each(named)('%s: malformed and oversized JSON get a clear 4xx, never a 500', async (_name, route) => {
     const before = await settledRowCounts(context.dataSource);
@@ -90,7 +122,10 @@ export function badInputSuite(file: string, routes: BadInputRoute[], setup: (app
     const expected = [...MALFORMED_JSON.map((raw) => `${raw.slice(0, 20)} → 400`), `${OVERSIZED_JSON.slice(0, 20)} → 413`];
     expect(answers.map((answer) => answer.replace(/^(.* → \d{3}) .+$/s, '$1'))).toEqual(expected);
     // A clear message of our own, not the parser's ("Unexpected token … is not valid JSON") echoing the body back.
-    expect(answers.every((answer) => / → \d{3} \S/.test(answer) && !/Unexpected token|at position/.test(answer)), answers.join('\n')).toBe(true);
+    expect(
+      answers.every((answer) => / → \d{3} \S/.test(answer) && !/Unexpected token|at position/.test(answer)),
+      answers.join('\n'),
+    ).toBe(true);
     context.tallies.push({ route: `${route.method} ${route.url()} (malformed JSON)`, sent: answers.length, statuses, kinds: {}, ms: 0 });
     expect(await rowCounts(context.dataSource)).toEqual(before);
   });

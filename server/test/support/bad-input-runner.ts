@@ -11,7 +11,9 @@ export type RowCounts = Record<string, number>;
 
 /** Rows in every table of the app's database, table names read from sqlite_master. */
 export async function rowCounts(dataSource: DataSource): Promise<RowCounts> {
-  const tables: { name: string }[] = await dataSource.query("SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' ORDER BY name");
+  const tables: { name: string }[] = await dataSource.query(
+    "SELECT name FROM sqlite_master WHERE type = 'table' AND name NOT LIKE 'sqlite_%' ORDER BY name",
+  );
   const counts: RowCounts = {};
   for (const { name } of tables) counts[name] = Number((await dataSource.query(`SELECT COUNT(*) AS n FROM "${name}"`))[0].n);
   return counts;
@@ -43,9 +45,11 @@ export type BadInputTarget = {
 function problemWith(reply: Reply, bad: BadBody): string | null {
   if (reply.status !== 400) return `expected 400, got ${reply.status}`;
   const body = reply.body as { statusCode?: unknown; message?: unknown; errors?: unknown };
-  if (body.statusCode !== 400 || typeof body.message !== 'string' || !Array.isArray(body.errors)) return 'the body is not {statusCode: 400, message, errors}';
+  if (body.statusCode !== 400 || typeof body.message !== 'string' || !Array.isArray(body.errors))
+    return 'the body is not {statusCode: 400, message, errors}';
   const errors = body.errors as { field?: unknown; message?: unknown }[];
-  if (errors.some((e) => typeof e.field !== 'string' || typeof e.message !== 'string' || e.message === '')) return 'an error lacks a field or a message';
+  if (errors.some((e) => typeof e.field !== 'string' || typeof e.message !== 'string' || e.message === ''))
+    return 'an error lacks a field or a message';
   const fields = errors.map((e) => e.field as string);
   const unnamed = bad.broken.filter((broken) => !fields.some((field) => related(field, broken)));
   if (unnamed.length > 0) return `no error names ${unnamed.join(', ')}`;
@@ -70,7 +74,10 @@ export async function sendBadBodies(target: BadInputTarget): Promise<RouteTally>
     tally.statuses[reply.status] = (tally.statuses[reply.status] ?? 0) + 1;
     for (const kind of bad.kinds) tally.kinds[kind] = (tally.kinds[kind] ?? 0) + 1;
     const problem = problemWith(reply, bad);
-    return problem && `${problem}\n  broke: ${bad.broken.join(', ')} (${bad.kinds.join(', ')})\n  sent: ${bad.json.slice(0, 2000)}\n  answer: ${reply.text.slice(0, 1000)}`;
+    return (
+      problem &&
+      `${problem}\n  broke: ${bad.broken.join(', ')} (${bad.kinds.join(', ')})\n  sent: ${bad.json.slice(0, 2000)}\n  answer: ${reply.text.slice(0, 1000)}`
+    );
   };
   const started = performance.now();
   await fc.assert(
@@ -86,7 +93,14 @@ export async function sendBadBodies(target: BadInputTarget): Promise<RouteTally>
 
 export function describeTallies(file: string, tallies: RouteTally[]): string {
   const sent = tallies.reduce((sum, t) => sum + t.sent, 0);
-  const errors5xx = tallies.reduce((sum, t) => sum + Object.entries(t.statuses).filter(([status]) => Number(status) >= 500).reduce((s, [, n]) => s + n, 0), 0);
+  const errors5xx = tallies.reduce(
+    (sum, t) =>
+      sum +
+      Object.entries(t.statuses)
+        .filter(([status]) => Number(status) >= 500)
+        .reduce((s, [, n]) => s + n, 0),
+    0,
+  );
   const lines = tallies.map((t) => `  ${t.route}: ${t.sent} sent in ${t.ms} ms; statuses ${JSON.stringify(t.statuses)}`);
   const kinds: Record<string, number> = {};
   for (const t of tallies) {
@@ -95,12 +109,19 @@ export function describeTallies(file: string, tallies: RouteTally[]): string {
       kinds[label] = (kinds[label] ?? 0) + n;
     }
   }
-  const mix = Object.entries(kinds).sort(([, a], [, b]) => b - a).map(([kind, n]) => `${kind} ${n}`).join(', ');
+  const mix = Object.entries(kinds)
+    .sort(([, a], [, b]) => b - a)
+    .map(([kind, n]) => `${kind} ${n}`)
+    .join(', ');
   return `${file}: ${sent} bad bodies, ${errors5xx} server errors\n${lines.join('\n')}\n  fields broken by kind: ${mix}`;
 }
 
 /** Object.prototype must come out of any request untouched. */
 export function prototypeIsClean(): boolean {
   const probe = {} as Record<string, unknown>;
-  return probe.polluted === undefined && typeof probe.toString === 'function' && Object.getOwnPropertyNames(Object.prototype).every((name) => name !== 'polluted');
+  return (
+    probe.polluted === undefined &&
+    typeof probe.toString === 'function' &&
+    Object.getOwnPropertyNames(Object.prototype).every((name) => name !== 'polluted')
+  );
 }

@@ -38,7 +38,12 @@ const OVERRIDE: BodySpec = { field: { type: 'string', max: 64 }, reason };
 export const CREATE_ORDER: BodySpec = {
   ...ORDER_FIELDS,
   reviewDate: { type: 'date' },
-  overrides: { type: 'array', items: { type: 'object', fields: OVERRIDE }, maxItems: 20, sample: { field: 'demandDose', reason: 'Agreed with the pain team' } },
+  overrides: {
+    type: 'array',
+    items: { type: 'object', fields: OVERRIDE },
+    maxItems: 20,
+    sample: { field: 'demandDose', reason: 'Agreed with the pain team' },
+  },
   signature: { type: 'object', fields: SIGNATURE },
 };
 
@@ -96,7 +101,11 @@ export const OBSERVATION: BodySpec = {
   note: { type: 'string', max: 2000, presence: 'optional' },
 };
 export const ACKNOWLEDGE_FLAG: BodySpec = { note: { type: 'string', min: 5, max: 1000, trimmed: true } };
-export const SIGNOFF: BodySpec = { orderId: id, role: { type: 'enum', values: SIGNOFF_ROLES }, pumpSettingsMatch: { type: 'boolean', presence: 'optional' } };
+export const SIGNOFF: BodySpec = {
+  orderId: id,
+  role: { type: 'enum', values: SIGNOFF_ROLES },
+  pumpSettingsMatch: { type: 'boolean', presence: 'optional' },
+};
 
 export const CREATE_DRAFT: BodySpec = { wardId: id, note: note1000 };
 const LIMITS: BodySpec = { hardMin: optionalAmount, softMin: optionalAmount, softMax: optionalAmount, hardMax: optionalAmount };
@@ -108,11 +117,24 @@ const RULE: BodySpec = {
   perKg: { type: 'boolean' },
   limits: {
     type: 'object',
-    fields: { loadingDose: limits, demandDose: limits, lockoutMinutes: limits, basalRatePerHour: limits, oneHourLimit: limits, fourHourLimit: limits, clinicianBolusDose: limits },
+    fields: {
+      loadingDose: limits,
+      demandDose: limits,
+      lockoutMinutes: limits,
+      basalRatePerHour: limits,
+      oneHourLimit: limits,
+      fourHourLimit: limits,
+      clinicianBolusDose: limits,
+    },
   },
 };
 export const REPLACE_RULES: BodySpec = {
-  rules: { type: 'array', items: { type: 'object', fields: RULE }, maxItems: 500, sample: { drugId: 1, concentrationPerMl: 1, doseUnit: 'mg', perKg: false, limits: {} } },
+  rules: {
+    type: 'array',
+    items: { type: 'object', fields: RULE },
+    maxItems: 500,
+    sample: { drugId: 1, concentrationPerMl: 1, doseUnit: 'mg', perKg: false, limits: {} },
+  },
 };
 export const SUBMIT_VERSION: BodySpec = { note: note1000 };
 
@@ -129,7 +151,11 @@ export const UPDATE_USER: BodySpec = {
   active: { type: 'boolean', presence: 'partial' },
 };
 
-const setting = (spec: Omit<Extract<FieldSpec, { type: 'number' }>, 'type'>): FieldSpec => ({ type: 'number', presence: 'partial', ...spec });
+const setting = (spec: Omit<Extract<FieldSpec, { type: 'number' }>, 'type'>): FieldSpec => ({
+  type: 'number',
+  presence: 'partial',
+  ...spec,
+});
 const email: FieldSpec = { type: 'email', emptyAllowed: true, presence: 'partial' };
 export const WARD_POLICY: BodySpec = {
   observationIntervalFirst24hMinutes: setting({ int: true, min: 15, max: 240 }),

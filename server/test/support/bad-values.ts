@@ -16,7 +16,13 @@ export type Presence =
 
 /** The rules a DTO field enforces, written out from the DTO so that bad values can be generated. */
 export type FieldSpec = { presence?: Presence } & (
-  | { type: 'string'; min?: number; max: number; /** Whitespace is trimmed before the length is checked. */ trimmed?: boolean; pattern?: RegExp }
+  | {
+      type: 'string';
+      min?: number;
+      max: number;
+      /** Whitespace is trimmed before the length is checked. */ trimmed?: boolean;
+      pattern?: RegExp;
+    }
   | { type: 'number'; int?: boolean; min?: number; positive?: boolean; max?: number }
   | { type: 'enum'; values: readonly string[] }
   | { type: 'boolean' }
@@ -64,19 +70,62 @@ const finiteDouble = fc.double({ noNaN: true, noDefaultInfinity: true });
 /** No whitespace (trimming cannot shorten it), no surrogate pairs or variation selectors (which class-validator does not count). */
 const solidChar = fc.constantFrom(...'abcxyzABCXYZ0189<>\'"%;$-_/\\|&*()éßΩ漢字');
 
-const notAString = fc.oneof(fc.integer(), finiteDouble, fc.boolean(), fc.constant([]), fc.array(anyText, { minLength: 1, maxLength: 3 }), someObject);
+const notAString = fc.oneof(
+  fc.integer(),
+  finiteDouble,
+  fc.boolean(),
+  fc.constant([]),
+  fc.array(anyText, { minLength: 1, maxLength: 3 }),
+  someObject,
+);
 const notANumber = fc.oneof(anyText, fc.boolean(), fc.constant([]), fc.array(fc.integer(), { minLength: 1, maxLength: 3 }), someObject);
-const notAnObject = fc.oneof(anyText, fc.integer(), finiteDouble, fc.boolean(), fc.constant([]), fc.constant([{}]), fc.array(fc.integer(), { minLength: 1, maxLength: 3 }));
+const notAnObject = fc.oneof(
+  anyText,
+  fc.integer(),
+  finiteDouble,
+  fc.boolean(),
+  fc.constant([]),
+  fc.constant([{}]),
+  fc.array(fc.integer(), { minLength: 1, maxLength: 3 }),
+);
 const notAnArray = fc.oneof(anyText, fc.integer(), fc.boolean(), fc.constant({}), someObject);
-const notABoolean = fc.oneof(fc.constantFrom('true', 'false', 'yes', 'no', '1', '0', ''), fc.constantFrom(0, 1, -1), fc.constant([]), fc.constant({}), anyText);
+const notABoolean = fc.oneof(
+  fc.constantFrom('true', 'false', 'yes', 'no', '1', '0', ''),
+  fc.constantFrom(0, 1, -1),
+  fc.constant([]),
+  fc.constant({}),
+  anyText,
+);
 /** Strings and other values that are not ISO 8601 at all; `accepted` says which strings the field takes. */
 const dateLike = (accepted: (text: string) => boolean) =>
   fc
     .oneof(
       anyText,
-      fc.constantFrom('2030-02-30', '2030-13-01', '2030-1-2', '02/01/2030', '2030-01-02T25:00:00Z', '2030-01-02T12:60:00Z', 'yesterday', 'now', '2030-01-02 12:00 UTC'),
+      fc.constantFrom(
+        '2030-02-30',
+        '2030-13-01',
+        '2030-1-2',
+        '02/01/2030',
+        '2030-01-02T25:00:00Z',
+        '2030-01-02T12:60:00Z',
+        'yesterday',
+        'now',
+        '2030-01-02 12:00 UTC',
+      ),
       // ISO 8601 forms that are not the one the field takes: week and ordinal dates, a year, compact forms, no seconds or zone.
-      fc.constantFrom('2030-W01-1', '2030-W01', '2030-001', '2030', '2030-01', '20300102', '20300102T120000Z', '2030-01-02T12:00Z', '2030-01-02T12:00:00', '2030-01-02', '2030-01-02T12:00:00Z'),
+      fc.constantFrom(
+        '2030-W01-1',
+        '2030-W01',
+        '2030-001',
+        '2030',
+        '2030-01',
+        '20300102',
+        '20300102T120000Z',
+        '2030-01-02T12:00Z',
+        '2030-01-02T12:00:00',
+        '2030-01-02',
+        '2030-01-02T12:00:00Z',
+      ),
       fc.integer(),
       fc.boolean(),
       fc.constant([]),
@@ -100,7 +149,12 @@ export function badValues(spec: FieldSpec, nullIsBad: boolean): Labelled[] {
       bad.push(
         as(
           'long string',
-          fc.tuple(fc.constantFrom('', ...INJECTION_STRINGS.filter((s) => s.trim() === s)), fc.string({ unit: solidChar, minLength: spec.max + 1, maxLength: longest })).map(([prefix, text]) => prefix + text),
+          fc
+            .tuple(
+              fc.constantFrom('', ...INJECTION_STRINGS.filter((s) => s.trim() === s)),
+              fc.string({ unit: solidChar, minLength: spec.max + 1, maxLength: longest }),
+            )
+            .map(([prefix, text]) => prefix + text),
         ),
       );
       const min = spec.min ?? 0;
@@ -113,13 +167,22 @@ export function badValues(spec: FieldSpec, nullIsBad: boolean): Labelled[] {
         bad.push(
           as(
             'too short once trimmed',
-            fc.tuple(fc.string({ unit: solidChar, minLength: 1, maxLength: min - 1 }), fc.nat({ max: 20 })).map(([text, pad]) => ' '.repeat(min + pad) + text + ' '),
+            fc
+              .tuple(fc.string({ unit: solidChar, minLength: 1, maxLength: min - 1 }), fc.nat({ max: 20 }))
+              .map(([text, pad]) => ' '.repeat(min + pad) + text + ' '),
           ),
         );
       }
       if (spec.pattern) {
         const pattern = spec.pattern;
-        bad.push(as('pattern', fc.oneof(injection, fc.string({ minLength: Math.max(min, 1), maxLength: spec.max })).filter((s) => s.length >= min && s.length <= spec.max && !pattern.test(s))));
+        bad.push(
+          as(
+            'pattern',
+            fc
+              .oneof(injection, fc.string({ minLength: Math.max(min, 1), maxLength: spec.max }))
+              .filter((s) => s.length >= min && s.length <= spec.max && !pattern.test(s)),
+          ),
+        );
       }
       return bad;
     }
@@ -127,22 +190,55 @@ export function badValues(spec: FieldSpec, nullIsBad: boolean): Labelled[] {
       bad.push(as('wrong type', notANumber), as('Infinity', fc.constantFrom(Infinity, -Infinity)));
       const floor = spec.positive ? 0 : spec.min;
       if (floor !== undefined) {
-        const below = fc.oneof(fc.double({ max: floor, noNaN: true, noDefaultInfinity: true }), fc.integer({ min: -1_000_000, max: Math.ceil(floor) }));
+        const below = fc.oneof(
+          fc.double({ max: floor, noNaN: true, noDefaultInfinity: true }),
+          fc.integer({ min: -1_000_000, max: Math.ceil(floor) }),
+        );
         const refused = (x: number) => (spec.positive ? x <= 0 : x < floor);
         bad.push(as(floor <= 0 ? 'negative' : 'below minimum', below.filter(refused)));
       }
       if (spec.max !== undefined) {
         const max = spec.max;
-        bad.push(as('huge', fc.oneof(fc.double({ min: max, noNaN: true, noDefaultInfinity: true }), fc.constantFrom(1e308, Number.MAX_VALUE, Number.MAX_SAFE_INTEGER + 2, 1e20)).filter((x) => x > max)));
+        bad.push(
+          as(
+            'huge',
+            fc
+              .oneof(
+                fc.double({ min: max, noNaN: true, noDefaultInfinity: true }),
+                fc.constantFrom(1e308, Number.MAX_VALUE, Number.MAX_SAFE_INTEGER + 2, 1e20),
+              )
+              .filter((x) => x > max),
+          ),
+        );
       }
-      if (spec.int) bad.push(as('not whole', fc.double({ min: -1e6, max: 1e6, noNaN: true }).filter((x) => !Number.isInteger(x))));
+      if (spec.int)
+        bad.push(
+          as(
+            'not whole',
+            fc.double({ min: -1e6, max: 1e6, noNaN: true }).filter((x) => !Number.isInteger(x)),
+          ),
+        );
       return bad;
     }
     case 'enum': {
       const values = spec.values;
-      const near = fc.constantFrom(...values).chain((v) => fc.constantFrom(v.toUpperCase(), v.toLowerCase(), ` ${v}`, `${v} `, `${v}'; --`));
+      const near = fc
+        .constantFrom(...values)
+        .chain((v) => fc.constantFrom(v.toUpperCase(), v.toLowerCase(), ` ${v}`, `${v} `, `${v}'; --`));
       const wrong = fc.oneof(anyText, near, fc.constantFrom('constructor', 'toString', '__proto__', 'valueOf', 'hasOwnProperty'));
-      bad.push(as('wrong enum', wrong.filter((v) => !values.includes(v))), as('wrong type', fc.oneof(notAString, fc.constantFrom(...values).map((v) => [v]))));
+      bad.push(
+        as(
+          'wrong enum',
+          wrong.filter((v) => !values.includes(v)),
+        ),
+        as(
+          'wrong type',
+          fc.oneof(
+            notAString,
+            fc.constantFrom(...values).map((v) => [v]),
+          ),
+        ),
+      );
       return bad;
     }
     case 'boolean':
@@ -163,4 +259,3 @@ export function badValues(spec: FieldSpec, nullIsBad: boolean): Labelled[] {
       return [...bad, as('wrong type', notAnArray)];
   }
 }
-

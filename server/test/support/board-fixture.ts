@@ -29,29 +29,126 @@ export async function seedBoardWard(dataSource: DataSource, code: string, beds: 
     const now = Date.now();
     for (const [index, spec] of beds.entries()) {
       const patient = await manager.save(
-        manager.create(Patient, { mrn: `${code}${String(index).padStart(5, '0')}`, givenName: 'Test', familyName: `Patient ${index}`, dateOfBirth: '1970-01-01', sex: 'unknown', weightKg: 70, allergies: '', wardId: ward.id, bed: spec.bed }),
+        manager.create(Patient, {
+          mrn: `${code}${String(index).padStart(5, '0')}`,
+          givenName: 'Test',
+          familyName: `Patient ${index}`,
+          dateOfBirth: '1970-01-01',
+          sex: 'unknown',
+          weightKg: 70,
+          allergies: '',
+          wardId: ward.id,
+          bed: spec.bed,
+        }),
       );
       const startedAt = new Date(now - spec.startedMinutesAgo * MINUTE);
       const order = await manager.save(
         manager.create(PcaOrder, {
-          patientId: patient.id, prescriberId: 1, drugId: 1, status: 'active', regimenType: 'demand_only', version: 1, supersedesId: null,
-          concentrationPerMl: 1, doseUnit: 'mg', loadingDose: null, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0, oneHourLimit: null, fourHourLimit: 30, clinicianBolusDose: null,
-          indication: 'Test', reviewDate: '2099-01-01', ruleSnapshot: null, findingsSnapshot: [], overrides: [], signedAt: startedAt, verifiedById: 2, verifiedAt: startedAt, startedAt, statusChangedAt: startedAt, statusReason: null,
+          patientId: patient.id,
+          prescriberId: 1,
+          drugId: 1,
+          status: 'active',
+          regimenType: 'demand_only',
+          version: 1,
+          supersedesId: null,
+          concentrationPerMl: 1,
+          doseUnit: 'mg',
+          loadingDose: null,
+          demandDose: 1,
+          lockoutMinutes: 10,
+          basalRatePerHour: 0,
+          oneHourLimit: null,
+          fourHourLimit: 30,
+          clinicianBolusDose: null,
+          indication: 'Test',
+          reviewDate: '2099-01-01',
+          ruleSnapshot: null,
+          findingsSnapshot: [],
+          overrides: [],
+          signedAt: startedAt,
+          verifiedById: 2,
+          verifiedAt: startedAt,
+          startedAt,
+          statusChangedAt: startedAt,
+          statusReason: null,
         }),
       );
       const release = await manager.save(
-        manager.create(SyringeRelease, { orderId: order.id, releaseCode: `T${code}${index}`.slice(0, 12), status: 'in_use', concentrationPerMl: 1, volumeMl: 50, batch: 'T', expiresAt: new Date(now + 86_400_000), preparedBy: 'T', checkedBy: 'T', overrideReason: null, releasedById: 2, releasedAt: startedAt }),
+        manager.create(SyringeRelease, {
+          orderId: order.id,
+          releaseCode: `T${code}${index}`.slice(0, 12),
+          status: 'in_use',
+          concentrationPerMl: 1,
+          volumeMl: 50,
+          batch: 'T',
+          expiresAt: new Date(now + 86_400_000),
+          preparedBy: 'T',
+          checkedBy: 'T',
+          overrideReason: null,
+          releasedById: 2,
+          releasedAt: startedAt,
+        }),
       );
-      const settings = { drugId: 1, concentrationPerMl: 1, syringeVolumeMl: 50, loadingDose: null, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0, oneHourLimit: null, fourHourLimit: 30 };
-      await manager.save(manager.create(BedsideCheck, { orderId: order.id, releaseId: release.id, status: 'matched', firstNurseId: 4, firstSettings: settings, firstAt: startedAt, secondNurseId: 5, secondSettings: settings, secondAt: startedAt, differences: [] }));
+      const settings = {
+        drugId: 1,
+        concentrationPerMl: 1,
+        syringeVolumeMl: 50,
+        loadingDose: null,
+        demandDose: 1,
+        lockoutMinutes: 10,
+        basalRatePerHour: 0,
+        oneHourLimit: null,
+        fourHourLimit: 30,
+      };
+      await manager.save(
+        manager.create(BedsideCheck, {
+          orderId: order.id,
+          releaseId: release.id,
+          status: 'matched',
+          firstNurseId: 4,
+          firstSettings: settings,
+          firstAt: startedAt,
+          secondNurseId: 5,
+          secondSettings: settings,
+          secondAt: startedAt,
+          differences: [],
+        }),
+      );
       if (spec.observedMinutesAgo !== null) {
         const remaining = spec.syringeRemainingMl ?? 40;
         await manager.save(
-          manager.create(Observation, { orderId: order.id, releaseId: release.id, at: new Date(now - spec.observedMinutesAgo * MINUTE), painScore: 3, sedationLevel: '1', respiratoryRate: 14, spo2: 97, attempts: 12, delivered: 10, volumeInfusedMl: 50 - remaining, syringeRemainingMl: remaining, note: '', recordedById: 4 }),
+          manager.create(Observation, {
+            orderId: order.id,
+            releaseId: release.id,
+            at: new Date(now - spec.observedMinutesAgo * MINUTE),
+            painScore: 3,
+            sedationLevel: '1',
+            respiratoryRate: 14,
+            spo2: 97,
+            attempts: 12,
+            delivered: 10,
+            volumeInfusedMl: 50 - remaining,
+            syringeRemainingMl: remaining,
+            note: '',
+            recordedById: 4,
+          }),
         );
       }
       if (spec.urgentFlag) {
-        await manager.save(manager.create(Flag, { orderId: order.id, releaseId: null, severity: 'urgent', code: 'sedation.3', message: 'Sedation level 3', action: 'Reduce the dose', raisedAt: new Date(now), acknowledgedAt: null, acknowledgedById: null, acknowledgeNote: null }));
+        await manager.save(
+          manager.create(Flag, {
+            orderId: order.id,
+            releaseId: null,
+            severity: 'urgent',
+            code: 'sedation.3',
+            message: 'Sedation level 3',
+            action: 'Reduce the dose',
+            raisedAt: new Date(now),
+            acknowledgedAt: null,
+            acknowledgedById: null,
+            acknowledgeNote: null,
+          }),
+        );
       }
     }
     return ward.id;

@@ -17,11 +17,26 @@ export async function seedLibraryVersions(dataSource: DataSource, wardId: number
       const at = new Date(Date.now() - (count + 2 - number) * day);
       const version = await manager.save(
         manager.create(LibraryVersion, {
-          wardId, number, status: number > count ? 'active' : 'retired', note: `Test version ${number}`, authorId: 2, approverId: 3,
-          createdAt: at, submittedAt: at, approvedAt: at, retiredAt: number > count ? null : new Date(at.getTime() + day),
+          wardId,
+          number,
+          status: number > count ? 'active' : 'retired',
+          note: `Test version ${number}`,
+          authorId: 2,
+          approverId: 3,
+          createdAt: at,
+          submittedAt: at,
+          approvedAt: at,
+          retiredAt: number > count ? null : new Date(at.getTime() + day),
         }),
       );
-      await manager.insert(LimitRule, { versionId: version.id, drugId: 1, concentrationPerMl: 1, doseUnit: 'mg', perKg: false, limits: { demandDose: { hardMin: 0.2, hardMax: 3 } } });
+      await manager.insert(LimitRule, {
+        versionId: version.id,
+        drugId: 1,
+        concentrationPerMl: 1,
+        doseUnit: 'mg',
+        perKg: false,
+        limits: { demandDose: { hardMin: 0.2, hardMax: 3 } },
+      });
     }
   });
 }
@@ -30,7 +45,11 @@ export async function seedLibraryVersions(dataSource: DataSource, wardId: number
 export async function seedAuditEvents(dataSource: DataSource, orderId: number, count: number): Promise<void> {
   await dataSource.transaction(async (manager) => {
     for (let i = 0; i < count; i++) {
-      await recordAudit(manager, { id: 4, displayName: 'Kai Mendes' }, { action: 'order.observation', entityType: 'order', entityId: orderId, summary: { test: i } });
+      await recordAudit(
+        manager,
+        { id: 4, displayName: 'Kai Mendes' },
+        { action: 'order.observation', entityType: 'order', entityId: orderId, summary: { test: i } },
+      );
     }
   });
 }
@@ -38,9 +57,22 @@ export async function seedAuditEvents(dataSource: DataSource, orderId: number, c
 /** `count` nurses, each on every ward given. */
 export async function seedUsers(dataSource: DataSource, prefix: string, count: number, wardIds: number[]): Promise<void> {
   await dataSource.transaction(async (manager) => {
-    const wards = await manager.findBy(Ward, wardIds.map((id) => ({ id })));
+    const wards = await manager.findBy(
+      Ward,
+      wardIds.map((id) => ({ id })),
+    );
     for (let i = 0; i < count; i++) {
-      await manager.save(manager.create(User, { username: `${prefix}.${i}`, displayName: `Test Nurse ${prefix} ${i}`, role: 'nurse', email: '', passwordHash: 'not-a-real-hash', active: true, wards }));
+      await manager.save(
+        manager.create(User, {
+          username: `${prefix}.${i}`,
+          displayName: `Test Nurse ${prefix} ${i}`,
+          role: 'nurse',
+          email: '',
+          passwordHash: 'not-a-real-hash',
+          active: true,
+          wards,
+        }),
+      );
     }
   });
 }
@@ -51,8 +83,19 @@ export async function seedObservations(dataSource: DataSource, orderId: number, 
     const start = Date.now() - (count + 1) * 3_600_000;
     for (let i = 0; i < count; i++) {
       await manager.insert(Observation, {
-        orderId, releaseId, at: new Date(start + i * 3_600_000), painScore: 3, sedationLevel: '1', respiratoryRate: 14, spo2: 97,
-        attempts: i, delivered: i, volumeInfusedMl: i * 0.5, syringeRemainingMl: 50 - i * 0.5, note: '', recordedById: 4,
+        orderId,
+        releaseId,
+        at: new Date(start + i * 3_600_000),
+        painScore: 3,
+        sedationLevel: '1',
+        respiratoryRate: 14,
+        spo2: 97,
+        attempts: i,
+        delivered: i,
+        volumeInfusedMl: i * 0.5,
+        syringeRemainingMl: 50 - i * 0.5,
+        note: '',
+        recordedById: 4,
       });
     }
   });

@@ -10,7 +10,10 @@ export async function waitForMail(http: App, adminToken: string, match: (message
     const response = await request(http).get('/api/dev/mailbox').auth(adminToken, { type: 'bearer' });
     const found = (response.body as MailboxMessage[]).find(match);
     if (found) return found;
-    if (Date.now() > deadline) throw new Error(`No matching e-mail arrived; the mailbox holds: ${JSON.stringify(response.body.map((m: MailboxMessage) => m.subject))}`);
+    if (Date.now() > deadline)
+      throw new Error(
+        `No matching e-mail arrived; the mailbox holds: ${JSON.stringify(response.body.map((m: MailboxMessage) => m.subject))}`,
+      );
     await new Promise((resolve) => setTimeout(resolve, 100));
   }
 }

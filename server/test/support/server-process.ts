@@ -25,7 +25,9 @@ export interface ServerProcess {
 export async function startBuiltServer(databasePath: string): Promise<ServerProcess> {
   const missing = BUILT.filter((file) => !existsSync(file));
   if (missing.length > 0) {
-    throw new Error(`The built server is missing (${missing.join(', ')}): run \`npm run test:crash\` at the repository root, which builds first.`);
+    throw new Error(
+      `The built server is missing (${missing.join(', ')}): run \`npm run test:crash\` at the repository root, which builds first.`,
+    );
   }
   const port = await freePort();
   const child = spawn(process.execPath, [BUILT[0]], {

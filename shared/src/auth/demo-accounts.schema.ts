@@ -5,8 +5,6 @@ import { roleSchema } from './roles.js';
 export const demoAccountsSchema = z.object({
   demo: z.boolean(),
   password: z.string().nullable(),
-  accounts: z.array(
-    z.object({ username: z.string(), displayName: z.string(), role: roleSchema }),
-  ),
+  accounts: z.array(z.object({ username: z.string(), displayName: z.string(), role: roleSchema })),
 });
 export type DemoAccounts = z.infer<typeof demoAccountsSchema>;

@@ -37,6 +37,9 @@ describe('compareSettings', () => {
   });
 
   it('treats a missing optional limit as different from a set one', () => {
-    expect(compareSettings({ ...ordered, fourHourLimit: null }, ordered, ordered)[0]).toMatchObject({ field: 'fourHourLimit', differs: 'first' });
+    expect(compareSettings({ ...ordered, fourHourLimit: null }, ordered, ordered)[0]).toMatchObject({
+      field: 'fourHourLimit',
+      differs: 'first',
+    });
   });
 });

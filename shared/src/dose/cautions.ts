@@ -5,8 +5,7 @@ export const DECISION_SUPPORT_CAUTION =
   "Decision support only: check every value against the prescriber's order, local policy and licensed clinical judgement.";
 
 /** Brief §1: the limits and defaults shipped with Lockstep give way to the ward's own protocols. */
-export const LOCAL_POLICY_CAUTION =
-  'Local protocols override the default limits and values shipped with Lockstep.';
+export const LOCAL_POLICY_CAUTION = 'Local protocols override the default limits and values shipped with Lockstep.';
 
 /**
  * Shown with every oral morphine equivalent. Source: Fine & Portenoy, J Pain Symptom Manage

@@ -9,7 +9,14 @@ const codes = (findings: Finding[]) => findings.map((f) => `${f.field}:${f.code}
 
 // ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg demand, lockout 10 minutes,
 // at 1 mg/mL [practice; ASHP Standardize 4 Safety].
-const ashpMorphine: Regimen = { doseUnit: 'mg', concentrationPerMl: 1, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0, fourHourLimit: 30 };
+const ashpMorphine: Regimen = {
+  doseUnit: 'mg',
+  concentrationPerMl: 1,
+  demandDose: 1,
+  lockoutMinutes: 10,
+  basalRatePerHour: 0,
+  fourHourLimit: 30,
+};
 
 // Typical ranges [read, a widely used clinical reference table]: morphine demand 0.5–2 mg,
 // lockout 5–10 min, 4-hour limit 30 mg, as soft limits; hard limits illustrative, not published.
@@ -95,7 +102,12 @@ describe('checkOrder: adult morphine', () => {
     const r: Regimen = { ...ashpMorphine, doseUnit: 'mcg', demandDose: 1000, concentrationPerMl: 1000, fourHourLimit: null };
     const findings = checkOrder(r, morphineRule, adult);
     expect(findings).toEqual([
-      { field: 'doseUnit', severity: 'error', code: 'unit.mismatch', message: 'Dose unit mcg does not match the limit rule, which is in mg' },
+      {
+        field: 'doseUnit',
+        severity: 'error',
+        code: 'unit.mismatch',
+        message: 'Dose unit mcg does not match the limit rule, which is in mg',
+      },
     ]);
   });
 });
@@ -161,18 +173,24 @@ describe('checkOrder: properties', () => {
 
   it('never misses a value outside a hard limit, per kg or not', () => {
     fc.assert(
-      fc.property(regimen, ruleLimits, fc.boolean(), fc.integer({ min: 1, max: 200_000 }).map((g) => g / 1000), (r, l, perKg, weightKg) => {
-        const findings = checkOrder(r, { doseUnit: 'mg', perKg, limits: l }, { weightKg, opioidTolerant: false });
-        for (const field of REGIMEN_FIELDS) {
-          const raw = r[field];
-          const hard = l[field];
-          if (raw === null || raw === undefined || hard === undefined) continue;
-          const value = perKg && DOSE_FIELDS.includes(field) ? withoutFloatNoise(raw / weightKg) : raw;
-          const outside = (hard.hardMin != null && value < hard.hardMin) || (hard.hardMax != null && value > hard.hardMax);
-          const flagged = findings.some((f) => f.field === field && f.severity === 'hard');
-          expect(flagged, `${field} ${value} against ${JSON.stringify(hard)}`).toBe(outside);
-        }
-      }),
+      fc.property(
+        regimen,
+        ruleLimits,
+        fc.boolean(),
+        fc.integer({ min: 1, max: 200_000 }).map((g) => g / 1000),
+        (r, l, perKg, weightKg) => {
+          const findings = checkOrder(r, { doseUnit: 'mg', perKg, limits: l }, { weightKg, opioidTolerant: false });
+          for (const field of REGIMEN_FIELDS) {
+            const raw = r[field];
+            const hard = l[field];
+            if (raw === null || raw === undefined || hard === undefined) continue;
+            const value = perKg && DOSE_FIELDS.includes(field) ? withoutFloatNoise(raw / weightKg) : raw;
+            const outside = (hard.hardMin != null && value < hard.hardMin) || (hard.hardMax != null && value > hard.hardMax);
+            const flagged = findings.some((f) => f.field === field && f.severity === 'hard');
+            expect(flagged, `${field} ${value} against ${JSON.stringify(hard)}`).toBe(outside);
+          }
+        },
+      ),
     );
   });
 });

@@ -18,7 +18,9 @@ describe('withoutFloatNoise', () => {
   });
   it('gives whole numbers the same answer by its short path as by the string round trip', () => {
     const slow = (value: number) => Number(value.toPrecision(12)) + 0;
-    fc.assert(fc.property(fc.integer({ min: -999_999_999_999, max: 999_999_999_999 }), (value) => Object.is(withoutFloatNoise(value), slow(value))));
+    fc.assert(
+      fc.property(fc.integer({ min: -999_999_999_999, max: 999_999_999_999 }), (value) => Object.is(withoutFloatNoise(value), slow(value))),
+    );
     expect(withoutFloatNoise(1e13 + 1)).toBe(1e13); // beyond 12 digits the rounding still applies
   });
 });

@@ -3,8 +3,8 @@
 const SAFE_UNIT_PARTS: Readonly<Record<string, string>> = {
   mcg: 'mcg',
   ug: 'mcg',
-  'µg': 'mcg', // U+00B5 micro sign
-  'μg': 'mcg', // U+03BC Greek small mu
+  µg: 'mcg', // U+00B5 micro sign
+  μg: 'mcg', // U+03BC Greek small mu
   mg: 'mg',
   g: 'g',
   kg: 'kg',

@@ -36,9 +36,7 @@ describe('consistencyFindings', () => {
 
   it('needs a 4-hour limit of at least four hours of basal', () => {
     const findings = consistencyFindings({ ...ashpMorphine, doseUnit: 'mcg', basalRatePerHour: 25, fourHourLimit: 90 });
-    expect(findings.map((f) => f.message)).toEqual([
-      '4-hour limit 90 mcg is less than four hours of basal rate (100 mcg)',
-    ]);
+    expect(findings.map((f) => f.message)).toEqual(['4-hour limit 90 mcg is less than four hours of basal rate (100 mcg)']);
     expect(consistencyFindings({ ...ashpMorphine, basalRatePerHour: 0.1, fourHourLimit: 0.4 })).toEqual([]);
   });
 

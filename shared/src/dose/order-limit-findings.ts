@@ -32,12 +32,7 @@ function limitMessage(field: RegimenField, check: OutsideCheck, value: number, l
   return `${label} ${shownValue} is ${side} the ${limitName} ${shownLimit}`;
 }
 
-function fieldFinding(
-  field: RegimenField,
-  value: number,
-  limits: Limits,
-  unit: string,
-): Finding | null {
+function fieldFinding(field: RegimenField, value: number, limits: Limits, unit: string): Finding | null {
   const check = checkAgainstRule(value, limits);
   if (check === 'ok') return null;
   const limit = limits[LIMIT_WORDS[check].key] ?? Number.NaN;

@@ -8,12 +8,7 @@ const LABELS: Readonly<Record<NumericOrderField, string>> = {
   ...REGIMEN_FIELD_LABELS,
 };
 
-const REQUIRED: ReadonlySet<NumericOrderField> = new Set([
-  'concentrationPerMl',
-  'demandDose',
-  'lockoutMinutes',
-  'basalRatePerHour',
-]);
+const REQUIRED: ReadonlySet<NumericOrderField> = new Set(['concentrationPerMl', 'demandDose', 'lockoutMinutes', 'basalRatePerHour']);
 
 const NUMERIC_FIELDS = Object.keys(LABELS) as NumericOrderField[];
 
@@ -42,9 +37,7 @@ function numberFinding(field: NumericOrderField, value: unknown): Finding | null
  * negative number, a concentration of 0. Optional fields left null or undefined are not checked.
  */
 export function invalidNumberFindings(r: Regimen): Finding[] {
-  return NUMERIC_FIELDS.map((field) => numberFinding(field, r[field])).filter(
-    (finding): finding is Finding => finding !== null,
-  );
+  return NUMERIC_FIELDS.map((field) => numberFinding(field, r[field])).filter((finding): finding is Finding => finding !== null);
 }
 
 /** Whether a regimen value can be used in arithmetic and limit checks. */

@@ -13,9 +13,7 @@ describe('patientCautions', () => {
   it('cautions against a basal rate in an opioid-naive patient only', () => {
     // ASHP Standardize 4 Safety, PCA standards (2023): basal rate only for opioid-tolerant patients.
     const withBasal = { ...demandOnly, basalRatePerHour: 0.5 };
-    expect(patientCautions(withBasal, naive).map((f) => [f.field, f.code])).toEqual([
-      ['basalRatePerHour', 'caution.basal-opioid-naive'],
-    ]);
+    expect(patientCautions(withBasal, naive).map((f) => [f.field, f.code])).toEqual([['basalRatePerHour', 'caution.basal-opioid-naive']]);
     expect(patientCautions(withBasal, { ...naive, opioidTolerant: true })).toEqual([]);
   });
 

@@ -1,9 +1,4 @@
-import {
-  AGE_70_OR_OVER_CAUTION,
-  BASAL_OPIOID_NAIVE_CAUTION,
-  OTHER_SEDATIVES_CAUTION,
-  SLEEP_APNOEA_CAUTION,
-} from './cautions.js';
+import { AGE_70_OR_OVER_CAUTION, BASAL_OPIOID_NAIVE_CAUTION, OTHER_SEDATIVES_CAUTION, SLEEP_APNOEA_CAUTION } from './cautions.js';
 import { isUsableNumber } from './order-number-findings.js';
 import type { Finding, PatientFactors, Regimen } from './types.js';
 

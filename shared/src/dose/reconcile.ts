@@ -12,12 +12,7 @@ const DISCREPANCY_DECIMALS = 3;
  * negative or non-finite volume) gives NaN and must be reported; a negative or missing tolerance
  * counts as 0.
  */
-export function reconcile(
-  dispensedMl: number,
-  infusedMl: number,
-  wastedMl: number,
-  toleranceMl: number,
-): Reconciliation {
+export function reconcile(dispensedMl: number, infusedMl: number, wastedMl: number, toleranceMl: number): Reconciliation {
   const volumes = [dispensedMl, infusedMl, wastedMl];
   if (volumes.some((volume) => !Number.isFinite(volume) || volume < 0)) {
     return { discrepancyMl: Number.NaN, mustReport: true };

@@ -13,9 +13,7 @@ export const REGIMEN_FIELDS: readonly RegimenField[] = [
 ];
 
 /** Fields holding an amount of drug; a per-kg rule divides these by weight. Lockout is a time. */
-export const DOSE_FIELDS: readonly RegimenField[] = REGIMEN_FIELDS.filter(
-  (field) => field !== 'lockoutMinutes',
-);
+export const DOSE_FIELDS: readonly RegimenField[] = REGIMEN_FIELDS.filter((field) => field !== 'lockoutMinutes');
 
 export const REGIMEN_FIELD_LABELS: Readonly<Record<RegimenField, string>> = {
   loadingDose: 'Loading dose',

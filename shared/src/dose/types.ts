@@ -9,13 +9,7 @@ export type Limits = {
 };
 
 export type RegimenField =
-  | 'loadingDose'
-  | 'demandDose'
-  | 'lockoutMinutes'
-  | 'basalRatePerHour'
-  | 'oneHourLimit'
-  | 'fourHourLimit'
-  | 'clinicianBolusDose';
+  'loadingDose' | 'demandDose' | 'lockoutMinutes' | 'basalRatePerHour' | 'oneHourLimit' | 'fourHourLimit' | 'clinicianBolusDose';
 
 /**
  * A PCA regimen. Every dose is in `doseUnit`; concentration is `doseUnit` per mL; rates are per

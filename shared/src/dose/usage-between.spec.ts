@@ -14,10 +14,7 @@ const reading = (at: string, attempts: number, delivered: number, volumeInfusedM
 // infused are the pump readings the brief names. Usage kept as 24-hour rolling figures [practice].
 describe('usageBetween', () => {
   it('gives attempts, delivered, their ratio, volume and hours between two readings', () => {
-    const usage = usageBetween(
-      reading('2026-03-01T08:00:00Z', 10, 8, 8.4),
-      reading('2026-03-01T12:00:00Z', 40, 20, 20.1),
-    );
+    const usage = usageBetween(reading('2026-03-01T08:00:00Z', 10, 8, 8.4), reading('2026-03-01T12:00:00Z', 40, 20, 20.1));
     expect(usage).toEqual({ attempts: 30, delivered: 12, ratio: 2.5, volumeMl: 11.7, hours: 4 });
   });
 

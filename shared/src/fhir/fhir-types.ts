@@ -39,9 +39,11 @@ export type FhirMedication = {
 };
 
 /** R4 medicationrequest-status. */
-export type FhirMedicationRequestStatus = 'active' | 'on-hold' | 'cancelled' | 'completed' | 'entered-in-error' | 'stopped' | 'draft' | 'unknown';
+export type FhirMedicationRequestStatus =
+  'active' | 'on-hold' | 'cancelled' | 'completed' | 'entered-in-error' | 'stopped' | 'draft' | 'unknown';
 /** R4 medicationrequest-intent. */
-export type FhirMedicationRequestIntent = 'proposal' | 'plan' | 'order' | 'original-order' | 'reflex-order' | 'filler-order' | 'instance-order' | 'option';
+export type FhirMedicationRequestIntent =
+  'proposal' | 'plan' | 'order' | 'original-order' | 'reflex-order' | 'filler-order' | 'instance-order' | 'option';
 
 export type FhirMedicationRequest = {
   resourceType: 'MedicationRequest';

@@ -4,8 +4,14 @@ import { type PcaRegimenSource, pcaDosageInstructions } from './pca-dosage.js';
 // Hydromorphone 0.2 mg demand, lockout 10 minutes: ASHP Standardize 4 Safety, PCA standards
 // (2023); 4-hour limit 6 mg: a widely used clinical reference table (REFERENCES.md).
 const REGIMEN: PcaRegimenSource = {
-  doseUnit: 'mg', loadingDose: null, demandDose: 0.2, lockoutMinutes: 10, basalRatePerHour: 0,
-  oneHourLimit: null, fourHourLimit: 6, clinicianBolusDose: null,
+  doseUnit: 'mg',
+  loadingDose: null,
+  demandDose: 0.2,
+  lockoutMinutes: 10,
+  basalRatePerHour: 0,
+  oneHourLimit: null,
+  fourHourLimit: 6,
+  clinicianBolusDose: null,
 };
 
 // Source: HL7 FHIR R4 (4.0.1), Dosage: sequence, asNeeded[x], timing, maxDosePerPeriod (0..1).
@@ -22,7 +28,10 @@ describe('pcaDosageInstructions', () => {
   it('puts one limit in each maxDosePerPeriod', () => {
     const dosages = pcaDosageInstructions({ ...REGIMEN, oneHourLimit: 2 });
     const limits = dosages.filter((dosage) => dosage.maxDosePerPeriod);
-    expect(limits.map((dosage) => [dosage.maxDosePerPeriod?.numerator.value, dosage.maxDosePerPeriod?.denominator.value])).toEqual([[2, 1], [6, 4]]);
+    expect(limits.map((dosage) => [dosage.maxDosePerPeriod?.numerator.value, dosage.maxDosePerPeriod?.denominator.value])).toEqual([
+      [2, 1],
+      [6, 4],
+    ]);
     expect(limits.every((dosage) => !dosage.doseAndRate && !dosage.asNeededBoolean)).toBe(true);
   });
 

@@ -6,7 +6,14 @@ import { doseQuantity, dosePerHours, hourlyRateQuantity, minutesDuration } from 
 
 export type PcaRegimenSource = Pick<
   OrderSummary,
-  'doseUnit' | 'loadingDose' | 'demandDose' | 'lockoutMinutes' | 'basalRatePerHour' | 'oneHourLimit' | 'fourHourLimit' | 'clinicianBolusDose'
+  | 'doseUnit'
+  | 'loadingDose'
+  | 'demandDose'
+  | 'lockoutMinutes'
+  | 'basalRatePerHour'
+  | 'oneHourLimit'
+  | 'fourHourLimit'
+  | 'clinicianBolusDose'
 >;
 
 // Text only: no route or method code whose meaning we have not checked (docs/integration.md).
@@ -60,7 +67,10 @@ export function pcaDosageInstructions(order: PcaRegimenSource): FhirDosage[] {
       doseAndRate: [{ rateQuantity: hourlyRateQuantity(basal, doseUnit) }],
     });
   }
-  for (const [hours, limit] of [[1, order.oneHourLimit], [4, order.fourHourLimit]] as const) {
+  for (const [hours, limit] of [
+    [1, order.oneHourLimit],
+    [4, order.fourHourLimit],
+  ] as const) {
     if (limit == null) continue;
     dosages.push({
       sequence,

@@ -58,7 +58,10 @@ describe('toFhirMedicationRequest: worked example', () => {
             {
               itemCodeableConcept: { text: 'morphine' },
               isActive: true,
-              strength: { numerator: { value: 1, unit: 'mg', system: UCUM, code: 'mg' }, denominator: { value: 1, unit: 'mL', system: UCUM, code: 'mL' } },
+              strength: {
+                numerator: { value: 1, unit: 'mg', system: UCUM, code: 'mg' },
+                denominator: { value: 1, unit: 'mL', system: UCUM, code: 'mL' },
+              },
             },
           ],
         },
@@ -66,7 +69,11 @@ describe('toFhirMedicationRequest: worked example', () => {
       identifier: [{ system: 'https://lockstep.example/fhir/sid/pca-order', value: '12' }],
       status: 'active',
       intent: 'order',
-      category: [{ coding: [{ system: 'http://terminology.hl7.org/CodeSystem/medicationrequest-category', code: 'inpatient', display: 'Inpatient' }] }],
+      category: [
+        {
+          coding: [{ system: 'http://terminology.hl7.org/CodeSystem/medicationrequest-category', code: 'inpatient', display: 'Inpatient' }],
+        },
+      ],
       medicationReference: { reference: '#medication', display: 'morphine 1 mg/mL' },
       subject: {
         type: 'Patient',
@@ -78,7 +85,11 @@ describe('toFhirMedicationRequest: worked example', () => {
         display: 'ACHTERBERG, Noah',
       },
       authoredOn: '2030-01-01T08:00:00.000Z',
-      requester: { type: 'Practitioner', identifier: { system: 'https://lockstep.example/fhir/sid/user', value: '1' }, display: 'Amara Osei' },
+      requester: {
+        type: 'Practitioner',
+        identifier: { system: 'https://lockstep.example/fhir/sid/user', value: '1' },
+        display: 'Amara Osei',
+      },
       reasonCode: [{ text: 'Pain after laparotomy' }],
       note: [{ text: 'Review by 2030-01-02' }],
       priorPrescription: { reference: 'MedicationRequest/11' },
@@ -92,7 +103,12 @@ describe('toFhirMedicationRequest: worked example', () => {
           doseAndRate: [{ doseQuantity: { value: 2, unit: 'mg', system: UCUM, code: 'mg' } }],
         },
         {
-          extension: [{ url: 'https://lockstep.example/fhir/StructureDefinition/pca-lockout-interval', valueDuration: { value: 10, unit: 'min', system: UCUM, code: 'min' } }],
+          extension: [
+            {
+              url: 'https://lockstep.example/fhir/StructureDefinition/pca-lockout-interval',
+              valueDuration: { value: 10, unit: 'min', system: UCUM, code: 'min' },
+            },
+          ],
           sequence: 2,
           text: 'Demand dose 1 mg intravenously when the patient presses the button; lockout 10 min',
           timing: { repeat: { frequency: 1, period: 10, periodUnit: 'min' } },
@@ -111,12 +127,18 @@ describe('toFhirMedicationRequest: worked example', () => {
         {
           sequence: 2,
           text: '1-hour limit: at most 8 mg in any hour, demand doses and basal rate together',
-          maxDosePerPeriod: { numerator: { value: 8, unit: 'mg', system: UCUM, code: 'mg' }, denominator: { value: 1, unit: 'h', system: UCUM, code: 'h' } },
+          maxDosePerPeriod: {
+            numerator: { value: 8, unit: 'mg', system: UCUM, code: 'mg' },
+            denominator: { value: 1, unit: 'h', system: UCUM, code: 'h' },
+          },
         },
         {
           sequence: 2,
           text: '4-hour limit: at most 30 mg in any 4 hours, demand doses and basal rate together',
-          maxDosePerPeriod: { numerator: { value: 30, unit: 'mg', system: UCUM, code: 'mg' }, denominator: { value: 4, unit: 'h', system: UCUM, code: 'h' } },
+          maxDosePerPeriod: {
+            numerator: { value: 30, unit: 'mg', system: UCUM, code: 'mg' },
+            denominator: { value: 4, unit: 'h', system: UCUM, code: 'h' },
+          },
         },
         {
           sequence: 2,
@@ -159,14 +181,20 @@ describe('toFhirMedicationRequest: other orders', () => {
     expect(resource.medicationReference.display).toBe('fentanyl 10 mcg/mL');
     expect(resource.contained[0].ingredient[0].strength.numerator).toMatchObject({ value: 10, unit: 'mcg', code: 'ug' });
     expect(resource.dosageInstruction).toHaveLength(1);
-    expect(resource.dosageInstruction[0]).toMatchObject({ sequence: 1, asNeededBoolean: true, doseAndRate: [{ doseQuantity: { value: 10, unit: 'mcg', code: 'ug' } }] });
+    expect(resource.dosageInstruction[0]).toMatchObject({
+      sequence: 1,
+      asNeededBoolean: true,
+      doseAndRate: [{ doseQuantity: { value: 10, unit: 'mcg', code: 'ug' } }],
+    });
     expect(resource).not.toHaveProperty('priorPrescription');
     expect(resource).not.toHaveProperty('reasonCode');
   });
 
   it('gives the reason only when the order is not going ahead', () => {
     expect(toFhirMedicationRequest({ ...WORKED_EXAMPLE, statusReason: 'Matched at the bedside' })).not.toHaveProperty('statusReason');
-    expect(toFhirMedicationRequest({ ...WORKED_EXAMPLE, status: 'discontinued', statusReason: 'Pain controlled' }).statusReason).toEqual({ text: 'Pain controlled' });
+    expect(toFhirMedicationRequest({ ...WORKED_EXAMPLE, status: 'discontinued', statusReason: 'Pain controlled' }).statusReason).toEqual({
+      text: 'Pain controlled',
+    });
   });
 
   it('names the rate of a mcg basal in ug/h', () => {

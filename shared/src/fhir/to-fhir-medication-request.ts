@@ -40,11 +40,19 @@ export function toFhirMedicationRequest(order: FhirOrderSource): FhirMedicationR
     medicationReference: { reference: `#${MEDICATION_ID}`, display: `${order.drugName} ${concentration}` },
     subject: {
       type: 'Patient',
-      identifier: { type: { coding: [{ system: IDENTIFIER_TYPE_SYSTEM, code: 'MR' }], text: 'MRN' }, system: MRN_IDENTIFIER_SYSTEM, value: order.patientMrn },
+      identifier: {
+        type: { coding: [{ system: IDENTIFIER_TYPE_SYSTEM, code: 'MR' }], text: 'MRN' },
+        system: MRN_IDENTIFIER_SYSTEM,
+        value: order.patientMrn,
+      },
       display: order.patientName,
     },
     authoredOn: order.signedAt,
-    requester: { type: 'Practitioner', identifier: { system: USER_IDENTIFIER_SYSTEM, value: String(order.prescriberId) }, display: order.prescriberName },
+    requester: {
+      type: 'Practitioner',
+      identifier: { system: USER_IDENTIFIER_SYSTEM, value: String(order.prescriberId) },
+      display: order.prescriberName,
+    },
     ...(order.indication.trim() ? { reasonCode: [{ text: order.indication.trim() }] } : {}),
     note: [{ text: `Review by ${order.reviewDate}` }],
     dosageInstruction: pcaDosageInstructions(order),

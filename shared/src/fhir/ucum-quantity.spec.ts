@@ -24,8 +24,13 @@ describe('UCUM quantities', () => {
 
   it('uses only codes UCUM accepts as written', () => {
     const codes = [
-      doseQuantity(1, 'mg'), doseQuantity(1, 'mcg'), hourlyRateQuantity(1, 'mg'), hourlyRateQuantity(1, 'mcg'),
-      ucumQuantity(1, 'mL'), ucumQuantity(1, 'h'), minutesDuration(1),
+      doseQuantity(1, 'mg'),
+      doseQuantity(1, 'mcg'),
+      hourlyRateQuantity(1, 'mg'),
+      hourlyRateQuantity(1, 'mcg'),
+      ucumQuantity(1, 'mL'),
+      ucumQuantity(1, 'h'),
+      minutesDuration(1),
     ].map((quantity) => quantity.code);
     expect(codes).toEqual(['mg', 'ug', 'mg/h', 'ug/h', 'mL', 'h', 'min']);
     for (const code of codes) expect(ucum.validateUnitString(code), code).toMatchObject({ status: 'valid', ucumCode: code });

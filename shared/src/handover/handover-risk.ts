@@ -13,7 +13,10 @@ export function riskTier(row: RiskInputs): HandoverRow['riskTier'] {
 /** Beds compare as people read them: H2 before H10. */
 const bedCollator = new Intl.Collator('en', { numeric: true, sensitivity: 'base' });
 
-export function compareHandoverRows(a: Pick<HandoverRow, 'riskTier' | 'bed' | 'nextObservation'>, b: Pick<HandoverRow, 'riskTier' | 'bed' | 'nextObservation'>): number {
+export function compareHandoverRows(
+  a: Pick<HandoverRow, 'riskTier' | 'bed' | 'nextObservation'>,
+  b: Pick<HandoverRow, 'riskTier' | 'bed' | 'nextObservation'>,
+): number {
   if (a.riskTier !== b.riskTier) return a.riskTier - b.riskTier;
   if (a.riskTier === 1) {
     const overdue = (b.nextObservation?.overdueMinutes ?? 0) - (a.nextObservation?.overdueMinutes ?? 0);

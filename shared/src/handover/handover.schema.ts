@@ -34,7 +34,13 @@ export type HandoverRow = {
   drugName: string;
   doseUnit: DoseUnit;
   concentrationPerMl: number;
-  regimen: { demandDose: number; lockoutMinutes: number; basalRatePerHour: number; oneHourLimit: number | null; fourHourLimit: number | null };
+  regimen: {
+    demandDose: number;
+    lockoutMinutes: number;
+    basalRatePerHour: number;
+    oneHourLimit: number | null;
+    fourHourLimit: number | null;
+  };
   startedAt: string | null;
   minutesSinceStart: number | null;
   lastObservation: { at: string; painScore: number; sedationLevel: SedationLevel; respiratoryRate: number; spo2: number } | null;

@@ -2,7 +2,11 @@ import { describe, expect, it } from 'vitest';
 import { compareHandoverRows, riskTier } from './handover-risk.js';
 import { shiftWindow } from './shift-window.js';
 
-const calm = { flags: { urgent: 0, review: 0, info: 0, open: [] }, nextObservation: { dueAt: '', overdueMinutes: 0, severity: null }, syringe: { remainingMl: 30, projectedEmptyAt: null, emptiesThisShift: false } };
+const calm = {
+  flags: { urgent: 0, review: 0, info: 0, open: [] },
+  nextObservation: { dueAt: '', overdueMinutes: 0, severity: null },
+  syringe: { remainingMl: 30, projectedEmptyAt: null, emptiesThisShift: false },
+};
 
 // The risk order is Lockstep's own design (BRIEF §5, handover board), not a published scale.
 describe('handover risk order', () => {
@@ -34,6 +38,11 @@ describe('shiftWindow', () => {
   });
 
   it('dates a night shift after midnight by its start', () => {
-    expect(shiftWindow(new Date('2026-12-03T02:00:00Z'), '07:00', '19:00')).toMatchObject({ shift: 'night', shiftDate: '2026-12-02', startsAt: '2026-12-02T19:00:00.000Z', endsAt: '2026-12-03T07:00:00.000Z' });
+    expect(shiftWindow(new Date('2026-12-03T02:00:00Z'), '07:00', '19:00')).toMatchObject({
+      shift: 'night',
+      shiftDate: '2026-12-02',
+      startsAt: '2026-12-02T19:00:00.000Z',
+      endsAt: '2026-12-03T07:00:00.000Z',
+    });
   });
 });

@@ -4,7 +4,12 @@ import type { Shift } from './handover.schema.js';
  * The shift a moment falls in, from the ward's day-shift start and night-shift start ("07:00",
  * "19:00", ward-local clock given as minutes east of UTC). A night shift is dated by its start.
  */
-export function shiftWindow(now: Date, dayStart: string, nightStart: string, utcOffsetMinutes = 0): { shift: Shift; shiftDate: string; startsAt: string; endsAt: string } {
+export function shiftWindow(
+  now: Date,
+  dayStart: string,
+  nightStart: string,
+  utcOffsetMinutes = 0,
+): { shift: Shift; shiftDate: string; startsAt: string; endsAt: string } {
   const minutes = (text: string) => {
     const [h, m] = text.split(':').map(Number);
     return h * 60 + m;
@@ -19,8 +24,18 @@ export function shiftWindow(now: Date, dayStart: string, nightStart: string, utc
   const DAY = 24 * 60 * 60_000;
 
   if (minuteOfDay >= day && minuteOfDay < night) {
-    return { shift: 'day', shiftDate: new Date(midnight).toISOString().slice(0, 10), startsAt: toUtc(at(midnight, day)), endsAt: toUtc(at(midnight, night)) };
+    return {
+      shift: 'day',
+      shiftDate: new Date(midnight).toISOString().slice(0, 10),
+      startsAt: toUtc(at(midnight, day)),
+      endsAt: toUtc(at(midnight, night)),
+    };
   }
   const startBase = minuteOfDay >= night ? midnight : midnight - DAY;
-  return { shift: 'night', shiftDate: new Date(startBase).toISOString().slice(0, 10), startsAt: toUtc(at(startBase, night)), endsAt: toUtc(at(startBase + DAY, day)) };
+  return {
+    shift: 'night',
+    shiftDate: new Date(startBase).toISOString().slice(0, 10),
+    startsAt: toUtc(at(startBase, night)),
+    endsAt: toUtc(at(startBase + DAY, day)),
+  };
 }

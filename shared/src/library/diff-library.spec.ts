@@ -11,7 +11,14 @@ const morphine: NamedRule = {
   limits: { demandDose: { softMin: 0.5, softMax: 2, hardMax: 4 } },
 };
 const fentanyl: NamedRule = { drugId: 3, drugName: 'fentanyl', concentrationPerMl: 10, doseUnit: 'mcg', perKg: false, limits: {} };
-const hydromorphone: NamedRule = { drugId: 2, drugName: 'hydromorphone', concentrationPerMl: 0.2, doseUnit: 'mg', perKg: false, limits: {} };
+const hydromorphone: NamedRule = {
+  drugId: 2,
+  drugName: 'hydromorphone',
+  concentrationPerMl: 0.2,
+  doseUnit: 'mg',
+  perKg: false,
+  limits: {},
+};
 
 describe('diffLibrary', () => {
   it('is empty for identical rule sets', () => {

@@ -25,7 +25,11 @@ const row = (values: Partial<CsvRecord>): CsvRecord => ({
 describe('library CSV', () => {
   it('groups rows into one rule per drug and concentration', () => {
     const { rules, problems } = rulesFromCsvRecords(
-      [row({}), row({ parameter: 'lockout_minutes', soft_min: '5', soft_max: '10', hard_max: '' }), row({ drug: 'fentanyl', concentration_per_ml: '10', dose_unit: 'mcg', soft_min: '5', soft_max: '20', hard_max: '40' })],
+      [
+        row({}),
+        row({ parameter: 'lockout_minutes', soft_min: '5', soft_max: '10', hard_max: '' }),
+        row({ drug: 'fentanyl', concentration_per_ml: '10', dose_unit: 'mcg', soft_min: '5', soft_max: '20', hard_max: '40' }),
+      ],
       drugs,
     );
     expect(problems).toEqual([]);
@@ -38,7 +42,14 @@ describe('library CSV', () => {
         perKg: false,
         limits: { demandDose: { softMin: 0.5, softMax: 2, hardMax: 4 }, lockoutMinutes: { softMin: 5, softMax: 10 } },
       },
-      { drugId: 3, drugName: 'fentanyl', concentrationPerMl: 10, doseUnit: 'mcg', perKg: false, limits: { demandDose: { softMin: 5, softMax: 20, hardMax: 40 } } },
+      {
+        drugId: 3,
+        drugName: 'fentanyl',
+        concentrationPerMl: 10,
+        doseUnit: 'mcg',
+        perKg: false,
+        limits: { demandDose: { softMin: 5, softMax: 20, hardMax: 40 } },
+      },
     ]);
   });
 
@@ -58,13 +69,28 @@ describe('library CSV', () => {
 
   it('checks the header for missing and unknown columns', () => {
     expect(checkCsvHeader([...LIBRARY_CSV_COLUMNS])).toEqual([]);
-    expect(checkCsvHeader([...LIBRARY_CSV_COLUMNS, 'hard_max'])).toEqual([{ row: 1, column: 'hard_max', message: 'The column hard_max appears more than once; keep one' }]);
-    const problems = checkCsvHeader(['drug', 'concentration', 'dose_unit', 'per_kg', 'parameter', 'hard_min', 'soft_min', 'soft_max', 'hard_max']);
+    expect(checkCsvHeader([...LIBRARY_CSV_COLUMNS, 'hard_max'])).toEqual([
+      { row: 1, column: 'hard_max', message: 'The column hard_max appears more than once; keep one' },
+    ]);
+    const problems = checkCsvHeader([
+      'drug',
+      'concentration',
+      'dose_unit',
+      'per_kg',
+      'parameter',
+      'hard_min',
+      'soft_min',
+      'soft_max',
+      'hard_max',
+    ]);
     expect(problems.map((p) => p.column)).toEqual(['concentration_per_ml', 'concentration']);
   });
 
   it('exports rows that import back to the same rules', () => {
-    const { rules } = rulesFromCsvRecords([row({}), row({ parameter: 'four_hour_limit', soft_min: '', soft_max: '30', hard_max: '40' })], drugs);
+    const { rules } = rulesFromCsvRecords(
+      [row({}), row({ parameter: 'four_hour_limit', soft_min: '', soft_max: '30', hard_max: '40' })],
+      drugs,
+    );
     const [header, ...body] = csvRowsFromRules(rules);
     const records = body.map((cells) => Object.fromEntries(header.map((column, i) => [column, cells[i]])));
     expect(rulesFromCsvRecords(records, drugs).rules).toEqual(rules);

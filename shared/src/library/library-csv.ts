@@ -68,21 +68,28 @@ export function rulesFromCsvRecords(records: readonly CsvRecord[], drugs: readon
     const cell = (column: string) => (record[column] ?? '').trim();
 
     const drug = drugByName.get(cell('drug').toLowerCase());
-    if (!drug) problem('drug', cell('drug') ? `Unknown drug ${cell('drug')}; known: ${drugs.map((d) => d.genericName).join(', ')}` : 'Enter the drug');
+    if (!drug)
+      problem(
+        'drug',
+        cell('drug') ? `Unknown drug ${cell('drug')}; known: ${drugs.map((d) => d.genericName).join(', ')}` : 'Enter the drug',
+      );
     const concentration = parseNumber(cell('concentration_per_ml'));
-    if (concentration === undefined || concentration === null || concentration <= 0) problem('concentration_per_ml', 'Concentration must be a number more than 0');
+    if (concentration === undefined || concentration === null || concentration <= 0)
+      problem('concentration_per_ml', 'Concentration must be a number more than 0');
     const doseUnit = cell('dose_unit');
     if (doseUnit !== 'mg' && doseUnit !== 'mcg') problem('dose_unit', 'Dose unit must be mg or mcg');
     else if (drug && drug.doseUnit !== doseUnit) problem('dose_unit', `${drug.genericName} is dosed in ${drug.doseUnit}, not ${doseUnit}`);
     const perKg = parseBoolean(cell('per_kg'));
     if (perKg === undefined) problem('per_kg', 'per_kg must be yes or no');
     const field = FIELD_BY_PARAMETER.get(cell('parameter'));
-    if (!field) problem('parameter', `Unknown parameter ${cell('parameter') || '(empty)'}; one of ${Object.values(CSV_PARAMETERS).join(', ')}`);
+    if (!field)
+      problem('parameter', `Unknown parameter ${cell('parameter') || '(empty)'}; one of ${Object.values(CSV_PARAMETERS).join(', ')}`);
 
     const limits: Limits = {};
     for (const key of LIMIT_KEYS) {
       const value = parseNumber(cell(LIMIT_COLUMNS[key]));
-      if (value === undefined || (value !== null && value < 0)) problem(LIMIT_COLUMNS[key], 'A limit must be empty or a number of 0 or more');
+      if (value === undefined || (value !== null && value < 0))
+        problem(LIMIT_COLUMNS[key], 'A limit must be empty or a number of 0 or more');
       else if (value !== null) limits[key] = value;
     }
     if (LIMIT_KEYS.every((key) => limits[key] === undefined) && !problems.some((p) => p.row === row)) {
@@ -97,12 +104,21 @@ export function rulesFromCsvRecords(records: readonly CsvRecord[], drugs: readon
     const key = ruleKey({ drugId: drug.id, concentrationPerMl: concentration });
     const existing = rules.get(key);
     if (!existing) {
-      const rule: NamedRule = { drugId: drug.id, drugName: drug.genericName, concentrationPerMl: concentration, doseUnit: drug.doseUnit, perKg, limits: { [field]: limits } };
+      const rule: NamedRule = {
+        drugId: drug.id,
+        drugName: drug.genericName,
+        concentrationPerMl: concentration,
+        doseUnit: drug.doseUnit,
+        perKg,
+        limits: { [field]: limits },
+      };
       rules.set(key, { rule, firstRow: row, rows: new Map([[field, row]]) });
       return;
     }
-    if (existing.rule.perKg !== perKg) problem('per_kg', `per_kg differs from row ${existing.firstRow} for the same drug and concentration`);
-    else if (existing.rows.has(field)) problem('parameter', `${cell('parameter')} is already set in row ${existing.rows.get(field)} for this drug and concentration`);
+    if (existing.rule.perKg !== perKg)
+      problem('per_kg', `per_kg differs from row ${existing.firstRow} for the same drug and concentration`);
+    else if (existing.rows.has(field))
+      problem('parameter', `${cell('parameter')} is already set in row ${existing.rows.get(field)} for this drug and concentration`);
     else {
       existing.rule.limits[field] = limits;
       existing.rows.set(field, row);

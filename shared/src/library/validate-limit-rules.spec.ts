@@ -30,6 +30,8 @@ describe('validateLimitRules', () => {
     const other = { ...morphine, concentrationPerMl: 2 };
     expect(validateLimitRules([morphine, other])).toEqual([]);
     const problems = validateLimitRules([morphine, other, { ...morphine }]);
-    expect(problems).toEqual([{ path: 'rules.2.concentrationPerMl', message: 'Rule 3 repeats rule 1: one rule per drug and concentration' }]);
+    expect(problems).toEqual([
+      { path: 'rules.2.concentrationPerMl', message: 'Rule 3 repeats rule 1: one rule per drug and concentration' },
+    ]);
   });
 });

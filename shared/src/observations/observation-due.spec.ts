@@ -14,11 +14,17 @@ describe('observationDue', () => {
   });
 
   it('is a review when late, urgent when more than one interval late', () => {
-    expect(observationDue('2026-12-02T08:00:00Z', '2026-12-02T09:00:00Z', new Date('2026-12-02T10:20:00Z'), DEFAULT_WARD_POLICY)).toMatchObject({ overdueMinutes: 20, severity: 'review' });
-    expect(observationDue('2026-12-02T08:00:00Z', '2026-12-02T09:00:00Z', new Date('2026-12-02T11:01:00Z'), DEFAULT_WARD_POLICY)).toMatchObject({ severity: 'urgent' });
+    expect(
+      observationDue('2026-12-02T08:00:00Z', '2026-12-02T09:00:00Z', new Date('2026-12-02T10:20:00Z'), DEFAULT_WARD_POLICY),
+    ).toMatchObject({ overdueMinutes: 20, severity: 'review' });
+    expect(
+      observationDue('2026-12-02T08:00:00Z', '2026-12-02T09:00:00Z', new Date('2026-12-02T11:01:00Z'), DEFAULT_WARD_POLICY),
+    ).toMatchObject({ severity: 'urgent' });
   });
 
   it('uses the usual interval after the first day', () => {
-    expect(observationDue('2026-12-01T08:00:00Z', '2026-12-02T09:00:00Z', new Date('2026-12-02T10:30:00Z'), DEFAULT_WARD_POLICY).dueAt).toBe('2026-12-02T11:00:00.000Z');
+    expect(
+      observationDue('2026-12-01T08:00:00Z', '2026-12-02T09:00:00Z', new Date('2026-12-02T10:30:00Z'), DEFAULT_WARD_POLICY).dueAt,
+    ).toBe('2026-12-02T11:00:00.000Z');
   });
 });

@@ -1,7 +1,11 @@
 import { z } from 'zod';
 import type { WardPolicy } from './ward-policy.js';
 
-export const observationDueSchema = z.object({ dueAt: z.string(), overdueMinutes: z.number(), severity: z.enum(['review', 'urgent']).nullable() });
+export const observationDueSchema = z.object({
+  dueAt: z.string(),
+  overdueMinutes: z.number(),
+  severity: z.enum(['review', 'urgent']).nullable(),
+});
 export type ObservationDue = z.infer<typeof observationDueSchema>;
 
 const MINUTE = 60_000;

@@ -17,7 +17,8 @@ const codes = (flags: { code: string; severity: string }[]) => flags.map((f) => 
 
 describe('observationFlags', () => {
   it('raises nothing for acceptable values (POSS S, 1 and 2 are acceptable: Pasero & McCaffery, 2011)', () => {
-    for (const level of ['S', '1', '2'] as const) expect(observationFlags({ ...calm, sedationLevel: level }, null, 0, DEFAULT_WARD_POLICY)).toEqual([]);
+    for (const level of ['S', '1', '2'] as const)
+      expect(observationFlags({ ...calm, sedationLevel: level }, null, 0, DEFAULT_WARD_POLICY)).toEqual([]);
   });
 
   it('sedation 3 is urgent, with the scale’s action to reduce the dose 25–50 % or call the prescriber (Pasero & McCaffery, 2011)', () => {
@@ -32,12 +33,23 @@ describe('observationFlags', () => {
   });
 
   it('respiratory rate under 8/min [practice] and SpO2 under 90 % (Overdyk et al., Anesth Analg 2007) are urgent; equal is not', () => {
-    expect(codes(observationFlags({ ...calm, respiratoryRate: 7, spo2: 89 }, null, 0, DEFAULT_WARD_POLICY))).toEqual(['urgent:respiratory-rate.low', 'urgent:spo2.low']);
+    expect(codes(observationFlags({ ...calm, respiratoryRate: 7, spo2: 89 }, null, 0, DEFAULT_WARD_POLICY))).toEqual([
+      'urgent:respiratory-rate.low',
+      'urgent:spo2.low',
+    ]);
     expect(observationFlags({ ...calm, respiratoryRate: 8, spo2: 90 }, null, 0, DEFAULT_WARD_POLICY)).toEqual([]);
   });
 
   it('pain ≥ 7 with two or more attempts per delivered dose since the last observation needs review [practice]', () => {
-    const later = { ...calm, at: '2026-12-02T11:00:00Z', painScore: 8, attempts: 22, delivered: 12, volumeInfusedMl: 12, syringeRemainingMl: 38 };
+    const later = {
+      ...calm,
+      at: '2026-12-02T11:00:00Z',
+      painScore: 8,
+      attempts: 22,
+      delivered: 12,
+      volumeInfusedMl: 12,
+      syringeRemainingMl: 38,
+    };
     expect(codes(observationFlags(later, calm, 0, DEFAULT_WARD_POLICY))).toEqual(['review:pain.not-controlled']);
     expect(observationFlags({ ...later, attempts: 17 }, calm, 0, DEFAULT_WARD_POLICY)).toEqual([]);
   });

@@ -25,10 +25,20 @@ const MS_PER_HOUR = 3_600_000;
  * The flags one observation raises, from the observation, the one before it (same syringe), the
  * order's basal volume rate and the ward policy. Pure: the caller stores and sends them.
  */
-export function observationFlags(current: ObservationValues, previous: ObservationValues | null, basalMlPerHour: number, policy: WardPolicy): FlagDraft[] {
+export function observationFlags(
+  current: ObservationValues,
+  previous: ObservationValues | null,
+  basalMlPerHour: number,
+  policy: WardPolicy,
+): FlagDraft[] {
   const flags: FlagDraft[] = [];
   if (current.sedationLevel === '3' || current.sedationLevel === '4') {
-    flags.push({ severity: 'urgent', code: `sedation.${current.sedationLevel}`, message: `Sedation level ${current.sedationLevel}`, action: SEDATION_ACTIONS[current.sedationLevel] });
+    flags.push({
+      severity: 'urgent',
+      code: `sedation.${current.sedationLevel}`,
+      message: `Sedation level ${current.sedationLevel}`,
+      action: SEDATION_ACTIONS[current.sedationLevel],
+    });
   }
   if (current.respiratoryRate < policy.respiratoryRateThreshold) {
     flags.push({

@@ -16,7 +16,8 @@ export function projectedEmptyAt(syringeReadings: readonly VolumeReading[], rema
   if (!last) return null;
   const before = syringeReadings.at(-2);
   const hours = before ? (Date.parse(last.at) - Date.parse(before.at)) / 3_600_000 : 0;
-  const demandMlPerHour = before && hours >= MIN_RATE_WINDOW_HOURS ? Math.max(0, (last.volumeInfusedMl - before.volumeInfusedMl) / hours - basalMlPerHour) : 0;
+  const demandMlPerHour =
+    before && hours >= MIN_RATE_WINDOW_HOURS ? Math.max(0, (last.volumeInfusedMl - before.volumeInfusedMl) / hours - basalMlPerHour) : 0;
   const left = hoursUntilEmpty(remainingMl, basalMlPerHour, demandMlPerHour);
   return Number.isFinite(left) ? new Date(Date.parse(last.at) + left * 3_600_000).toISOString() : null;
 }

@@ -31,7 +31,11 @@ describe('usageSummary', () => {
   });
 
   it('never subtracts across syringes (counters restart with each syringe)', () => {
-    const changed: SyringeReading[] = [...readings, { syringeId: 2, at: '2026-12-02T10:05:00Z', attempts: 0, delivered: 0, volumeInfusedMl: 0 }, { syringeId: 2, at: '2026-12-02T11:00:00Z', attempts: 2, delivered: 2, volumeInfusedMl: 2 }];
+    const changed: SyringeReading[] = [
+      ...readings,
+      { syringeId: 2, at: '2026-12-02T10:05:00Z', attempts: 0, delivered: 0, volumeInfusedMl: 0 },
+      { syringeId: 2, at: '2026-12-02T11:00:00Z', attempts: 2, delivered: 2, volumeInfusedMl: 2 },
+    ];
     expect(usageSummary(changed, [], morphine, new Date('2026-12-02T11:00:00Z'), 24).rolling24hDose).toBe(9);
   });
 });

@@ -5,7 +5,14 @@ describe('deriveOrderValues', () => {
   it('works the ASHP adult morphine starting regimen', () => {
     // ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg demand, lockout 10 minutes,
     // standard concentration 1 mg/mL; 4-hour limit 30 mg [read, a widely used clinical reference table].
-    const derived = deriveOrderValues({ doseUnit: 'mg', concentrationPerMl: 1, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0, fourHourLimit: 30 });
+    const derived = deriveOrderValues({
+      doseUnit: 'mg',
+      concentrationPerMl: 1,
+      demandDose: 1,
+      lockoutMinutes: 10,
+      basalRatePerHour: 0,
+      fourHourLimit: 30,
+    });
     expect(derived).toEqual({
       demandDoseMl: 1,
       basalRateMlPerHour: 0,
@@ -17,7 +24,14 @@ describe('deriveOrderValues', () => {
 
   it('works the ASHP hydromorphone regimen with the volume per demand', () => {
     // ASHP Standardize 4 Safety (2023): hydromorphone 0.2 mg demand at the standard 0.2 mg/mL.
-    const derived = deriveOrderValues({ doseUnit: 'mg', concentrationPerMl: 0.2, demandDose: 0.2, lockoutMinutes: 10, basalRatePerHour: 0, fourHourLimit: 6 });
+    const derived = deriveOrderValues({
+      doseUnit: 'mg',
+      concentrationPerMl: 0.2,
+      demandDose: 0.2,
+      lockoutMinutes: 10,
+      basalRatePerHour: 0,
+      fourHourLimit: 6,
+    });
     expect(derived.demandDoseMl).toBe(1);
     expect(derived.maxFourHourDose).toBeCloseTo(4.8, 10);
   });

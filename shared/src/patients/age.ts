@@ -2,8 +2,7 @@
 export function ageInYears(dateOfBirth: string, at: Date = new Date()): number {
   const [year, month, day] = dateOfBirth.split('-').map(Number);
   let age = at.getUTCFullYear() - year;
-  const beforeBirthday =
-    at.getUTCMonth() + 1 < month || (at.getUTCMonth() + 1 === month && at.getUTCDate() < day);
+  const beforeBirthday = at.getUTCMonth() + 1 < month || (at.getUTCMonth() + 1 === month && at.getUTCDate() < day);
   if (beforeBirthday) age -= 1;
   return age;
 }

@@ -14,7 +14,10 @@ export function Component() {
   const users = useQuery({ ...usersQueryOptions(), enabled: admin });
   const wards = useWards();
   const userOptions = useMemo(
-    () => (admin ? (users.data ?? []).map((person) => ({ value: String(person.id), label: `${person.displayName} (${person.username})` })) : null),
+    () =>
+      admin
+        ? (users.data ?? []).map((person) => ({ value: String(person.id), label: `${person.displayName} (${person.username})` }))
+        : null,
     [admin, users.data],
   );
   const wardNames = useMemo(() => new Map((wards.data ?? []).map((ward) => [String(ward.id), ward.name])), [wards.data]);

@@ -55,7 +55,11 @@ export function Component() {
       <Stack gap="md">
         {back}
         <QueryErrorAlert
-          title={noLibrary ? "This ward has no active dose-limit library: a PCA order cannot be written until pharmacy approves one" : 'The order form could not be loaded'}
+          title={
+            noLibrary
+              ? 'This ward has no active dose-limit library: a PCA order cannot be written until pharmacy approves one'
+              : 'The order form could not be loaded'
+          }
           error={failed.error}
           onRetry={noLibrary ? undefined : () => void failed.refetch()}
         />

@@ -8,7 +8,8 @@ import { useSession } from '@/lib/auth/use-session';
 
 function endNotice(reason: SessionEndReason | null): string | undefined {
   if (reason === 'expired') return 'Your session has ended. Sign in again to carry on.';
-  if (reason === 'idle') return `Signed out after ${formatIdleDuration(IDLE_SIGN_OUT_MINUTES * 60_000)} without activity. Sign in again to carry on.`;
+  if (reason === 'idle')
+    return `Signed out after ${formatIdleDuration(IDLE_SIGN_OUT_MINUTES * 60_000)} without activity. Sign in again to carry on.`;
   return undefined;
 }
 

@@ -12,9 +12,7 @@ export function RouteError() {
       <Stack gap="sm">
         <Title order={1}>{notFound ? 'Page not found' : 'This screen could not be shown'}</Title>
         <Text>
-          {notFound
-            ? 'There is no page at this address.'
-            : 'Reload the page. If it happens again, tell support what you were doing.'}
+          {notFound ? 'There is no page at this address.' : 'Reload the page. If it happens again, tell support what you were doing.'}
         </Text>
         <Anchor component={Link} to={paths.root.getHref()}>
           Go to your home screen

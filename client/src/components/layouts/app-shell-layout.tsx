@@ -1,7 +1,20 @@
 import type { ComponentType, ReactNode } from 'react';
 import { AppShell, Burger, Button, Group, NavLink, Stack, Text } from '@mantine/core';
 import { useDisclosure } from '@mantine/hooks';
-import { IconAdjustments, IconArrowsExchange, IconBooks, IconClipboardCheck, IconClipboardList, IconHeartbeat, IconHistory, IconLogout, IconMail, IconUsers, IconUsersGroup, type IconProps } from '@tabler/icons-react';
+import {
+  IconAdjustments,
+  IconArrowsExchange,
+  IconBooks,
+  IconClipboardCheck,
+  IconClipboardList,
+  IconHeartbeat,
+  IconHistory,
+  IconLogout,
+  IconMail,
+  IconUsers,
+  IconUsersGroup,
+  type IconProps,
+} from '@tabler/icons-react';
 import { Link, useLocation } from 'react-router-dom';
 import { ROLE_LABELS } from '@lockstep/shared';
 import { navItemsFor, type NavIcon } from '@/config/navigation';
@@ -31,11 +44,7 @@ export function AppShellLayout({ children }: { children: ReactNode }) {
   const items = navItemsFor(user.role);
 
   return (
-    <AppShell
-      header={{ height: 56 }}
-      navbar={{ width: 220, breakpoint: 'sm', collapsed: { mobile: !navOpened } }}
-      padding="md"
-    >
+    <AppShell header={{ height: 56 }} navbar={{ width: 220, breakpoint: 'sm', collapsed: { mobile: !navOpened } }} padding="md">
       <AppShell.Header>
         <Group h="100%" px="md" justify="space-between" wrap="nowrap">
           <Group gap="sm" wrap="nowrap">

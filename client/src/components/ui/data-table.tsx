@@ -73,7 +73,14 @@ export function DataTable<T>({ table, label, caption, isLoading, empty, onRowOpe
 
   return (
     <Table.ScrollContainer minWidth={720}>
-      <Table aria-label={label} aria-busy={isLoading || undefined} highlightOnHover={Boolean(onRowOpen)} stickyHeader tabularNums captionSide="bottom">
+      <Table
+        aria-label={label}
+        aria-busy={isLoading || undefined}
+        highlightOnHover={Boolean(onRowOpen)}
+        stickyHeader
+        tabularNums
+        captionSide="bottom"
+      >
         {caption ? <Table.Caption className={classes.caption}>{caption}</Table.Caption> : null}
         <Table.Thead>
           {table.getHeaderGroups().map((group) => (

@@ -4,5 +4,7 @@
  * `keepalive` lets the request finish while the page moves on.
  */
 export function revokeToken(token: string, fetchFn: typeof fetch = fetch): void {
-  void fetchFn('/api/auth/logout', { method: 'POST', headers: { Authorization: `Bearer ${token}` }, keepalive: true }).catch(() => undefined);
+  void fetchFn('/api/auth/logout', { method: 'POST', headers: { Authorization: `Bearer ${token}` }, keepalive: true }).catch(
+    () => undefined,
+  );
 }

@@ -1,5 +1,16 @@
 import { Type } from 'class-transformer';
-import { IsDefined, IsNumber, IsObject, IsOptional, IsPositive, IsString, MaxLength, Min, MinLength, ValidateNested } from 'class-validator';
+import {
+  IsDefined,
+  IsNumber,
+  IsObject,
+  IsOptional,
+  IsPositive,
+  IsString,
+  MaxLength,
+  Min,
+  MinLength,
+  ValidateNested,
+} from 'class-validator';
 import { MIN_REASON_LENGTH } from '@lockstep/shared';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Trim } from '../../common/validation/trim.decorator.js';
@@ -17,13 +28,23 @@ class WitnessedDto {
 }
 
 export class BolusDto extends WitnessedDto {
-  @ApiProperty({ minimum: 0, exclusiveMinimum: true, example: 2, description: 'The clinician bolus, in the order’s dose unit; at most the ordered clinician bolus' })
+  @ApiProperty({
+    minimum: 0,
+    exclusiveMinimum: true,
+    example: 2,
+    description: 'The clinician bolus, in the order’s dose unit; at most the ordered clinician bolus',
+  })
   @IsPositive({ message: 'The bolus must be more than 0' })
   @IsNumber(finite, { message: 'The bolus must be a number' })
   @IsDefined({ message: 'Enter the bolus amount' })
   amount: number;
 
-  @ApiProperty({ minLength: MIN_REASON_LENGTH, maxLength: 1000, description: 'Why the bolus is given', example: 'Breakthrough pain on moving' })
+  @ApiProperty({
+    minLength: MIN_REASON_LENGTH,
+    maxLength: 1000,
+    description: 'Why the bolus is given',
+    example: 'Breakthrough pain on moving',
+  })
   @Trim()
   @MaxLength(1000, { message: 'At most 1,000 characters' })
   @MinLength(MIN_REASON_LENGTH, { message: `Give a reason of at least ${MIN_REASON_LENGTH} characters` })
@@ -31,7 +52,12 @@ export class BolusDto extends WitnessedDto {
   @IsDefined({ message: 'Give the reason for the bolus (e.g. breakthrough pain)' })
   reason: string;
 
-  @ApiPropertyOptional({ minLength: MIN_REASON_LENGTH, maxLength: 1000, description: 'Needed when the amount is outside the ward’s soft limit for a clinician bolus', example: 'Agreed with the acute pain team' })
+  @ApiPropertyOptional({
+    minLength: MIN_REASON_LENGTH,
+    maxLength: 1000,
+    description: 'Needed when the amount is outside the ward’s soft limit for a clinician bolus',
+    example: 'Agreed with the acute pain team',
+  })
   @Trim()
   @MaxLength(1000, { message: 'At most 1,000 characters' })
   @MinLength(MIN_REASON_LENGTH, { message: `Give a reason of at least ${MIN_REASON_LENGTH} characters` })
@@ -64,7 +90,12 @@ export class SyringeChangeDto extends WitnessedDto {
 }
 
 export class DiscontinueDto extends WitnessedDto {
-  @ApiProperty({ minLength: MIN_REASON_LENGTH, maxLength: 1000, description: 'The prescriber’s decision to stop, as the nurse records it', example: 'Pain controlled on oral analgesia' })
+  @ApiProperty({
+    minLength: MIN_REASON_LENGTH,
+    maxLength: 1000,
+    description: 'The prescriber’s decision to stop, as the nurse records it',
+    example: 'Pain controlled on oral analgesia',
+  })
   @Trim()
   @MaxLength(1000, { message: 'At most 1,000 characters' })
   @MinLength(MIN_REASON_LENGTH, { message: `Give a reason of at least ${MIN_REASON_LENGTH} characters` })

@@ -1,11 +1,4 @@
-import {
-  type ArgumentsHost,
-  Catch,
-  type ExceptionFilter,
-  HttpException,
-  HttpStatus,
-  Logger,
-} from '@nestjs/common';
+import { type ArgumentsHost, Catch, type ExceptionFilter, HttpException, HttpStatus, Logger } from '@nestjs/common';
 import type { Response } from 'express';
 import type { ApiError, FieldError } from '@lockstep/shared';
 import { TooManyAttemptsException } from '../throttling/too-many-attempts.exception.js';
@@ -40,7 +33,13 @@ export class AllExceptionsFilter implements ExceptionFilter {
       const raw = exception.getResponse();
       if (typeof raw === 'string') return { statusCode, message: raw };
       // Extra keys a service adds (e.g. `currentStatus` on a 409) pass through; Nest's `error` does not.
-      const { message, errors, error: _error, statusCode: _statusCode, ...extra } = raw as {
+      const {
+        message,
+        errors,
+        error: _error,
+        statusCode: _statusCode,
+        ...extra
+      } = raw as {
         message?: unknown;
         errors?: FieldError[];
         error?: unknown;

@@ -30,7 +30,10 @@ export function addAccessAndCommonErrors(document: OpenAPIObject, facts: Readonl
 /** Query DTOs go through the validation pipe, numeric path parameters through ParseIdPipe. */
 function isValidated(parameter: NonNullable<OperationObject['parameters']>[number]): boolean {
   if ('$ref' in parameter) return true;
-  return parameter.in === 'query' || (parameter.in === 'path' && !!parameter.schema && !('$ref' in parameter.schema) && parameter.schema.type === 'integer');
+  return (
+    parameter.in === 'query' ||
+    (parameter.in === 'path' && !!parameter.schema && !('$ref' in parameter.schema) && parameter.schema.type === 'integer')
+  );
 }
 
 function describeAccess(operation: OperationObject, route: RouteAccess, signs: boolean): void {
@@ -43,7 +46,10 @@ function describeAccess(operation: OperationObject, route: RouteAccess, signs: b
   }
   const roles = route.roles ?? ROLES;
   extensions['x-roles'] = [...roles];
-  appendDescription(operation, route.roles ? `Roles: ${roles.map((role) => ROLE_LABELS[role].toLowerCase()).join(', ')}.` : 'Any signed-in role.');
+  appendDescription(
+    operation,
+    route.roles ? `Roles: ${roles.map((role) => ROLE_LABELS[role].toLowerCase()).join(', ')}.` : 'Any signed-in role.',
+  );
   addError(operation, 401, signs ? 'No valid sign-in token, or a wrong password in the body (a signature or a colleague’s)' : undefined);
   if (roles.length < ROLES.length) addError(operation, 403);
 }
@@ -62,7 +68,9 @@ function bodyCarriesPassword(document: OpenAPIObject, operation: OperationObject
   const body = operation.requestBody && !('$ref' in operation.requestBody) ? operation.requestBody : null;
   const schema = resolve(document, body?.content['application/json']?.schema);
   const properties = Object.values(schema?.properties ?? {});
-  return 'password' in (schema?.properties ?? {}) || properties.some((property) => 'password' in (resolve(document, property)?.properties ?? {}));
+  return (
+    'password' in (schema?.properties ?? {}) || properties.some((property) => 'password' in (resolve(document, property)?.properties ?? {}))
+  );
 }
 
 function resolve(document: OpenAPIObject, schema: SchemaObject | ReferenceObject | undefined): SchemaObject | undefined {

@@ -65,7 +65,9 @@ export class PasswordAttemptsService {
   lockouts(): Lockout[] {
     const now = Date.now();
     const list = (kind: Lockout['kind'], counter: FailureCounter): Lockout[] =>
-      counter.locked(now).map(({ key, failures, retryAfterMs }) => ({ kind, key, failures, retryAfterSeconds: Math.ceil(retryAfterMs / 1000) }));
+      counter
+        .locked(now)
+        .map(({ key, failures, retryAfterMs }) => ({ kind, key, failures, retryAfterSeconds: Math.ceil(retryAfterMs / 1000) }));
     return [...list('username', this.byUsername), ...list('address', this.byAddress)];
   }
 
@@ -97,7 +99,8 @@ export class PasswordAttemptsService {
   }
 
   private warnIfNowLocked(name: string | null, address: string | null, now: number): void {
-    if (name && this.byUsername.retryAfterMs(name, now) > 0) this.logger.warn('Username locked after wrong passwords', { username: name, address });
+    if (name && this.byUsername.retryAfterMs(name, now) > 0)
+      this.logger.warn('Username locked after wrong passwords', { username: name, address });
     if (address && this.byAddress.retryAfterMs(address, now) > 0) this.logger.warn('Address locked after wrong passwords', { address });
   }
 

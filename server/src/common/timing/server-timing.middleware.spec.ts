@@ -14,10 +14,15 @@ describe('serverTimingMiddleware', () => {
     serverTimingMiddleware(req as Request, res as Response, () => routes[req.url ?? '']!(res));
   });
   let base = '';
-  beforeAll(() => new Promise<void>((resolve) => server.listen(0, '127.0.0.1', () => {
-    base = `http://127.0.0.1:${(server.address() as { port: number }).port}`;
-    resolve();
-  })));
+  beforeAll(
+    () =>
+      new Promise<void>((resolve) =>
+        server.listen(0, '127.0.0.1', () => {
+          base = `http://127.0.0.1:${(server.address() as { port: number }).port}`;
+          resolve();
+        }),
+      ),
+  );
   afterAll(() => new Promise<void>((resolve) => server.close(() => resolve())));
 
   it('reports the handling time, including time spent waiting inside the handler', async () => {

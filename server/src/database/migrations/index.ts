@@ -9,4 +9,14 @@ import { OrderListsByPrescriber1764729000000 } from './1764729000000-order-lists
 import { RevokedTokens1764739000000 } from './1764739000000-revoked-tokens.js';
 
 /** In order. Listed explicitly (not globbed) so tests and the built server run the same set. */
-export const MIGRATIONS = [InitialSchema1764650000000, DoseLimitLibrary1764660000000, OrdersAndReleases1764670000000, BedsideChecks1764680000000, Observations1764690000000, Handover1764700000000, AuditTrail1764710000000, OrderListsByPrescriber1764729000000, RevokedTokens1764739000000];
+export const MIGRATIONS = [
+  InitialSchema1764650000000,
+  DoseLimitLibrary1764660000000,
+  OrdersAndReleases1764670000000,
+  BedsideChecks1764680000000,
+  Observations1764690000000,
+  Handover1764700000000,
+  AuditTrail1764710000000,
+  OrderListsByPrescriber1764729000000,
+  RevokedTokens1764739000000,
+];

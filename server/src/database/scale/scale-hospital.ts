@@ -22,7 +22,10 @@ export function writeHospital(writer: ScaleWriter, random: Random, options: Scal
   const patients = new PatientFactory(writer, random, now);
   const ctx: OrderContext = { writer, random, staff, drugs, codes: new ReleaseCodes(), now };
   for (const ward of wards) {
-    const beds = shuffle(random, Array.from({ length: ward.beds }, (_, i) => `${ward.code[0]}${String(i + 1).padStart(2, '0')}`));
+    const beds = shuffle(
+      random,
+      Array.from({ length: ward.beds }, (_, i) => `${ward.code[0]}${String(i + 1).padStart(2, '0')}`),
+    );
     const occupants = beds.map((bed) => ({ bed, patient: admit(patients, ward, bed) }));
     for (const { bed, patient } of occupants.slice(0, ward.active)) writeBedHistory(ctx, patients, ward, bed, patient, options.days);
     const waiting = occupants.slice(ward.active);
@@ -35,13 +38,27 @@ export function writeHospital(writer: ScaleWriter, random: Random, options: Scal
 }
 
 /** PCAs one after another in one bed; the last, the current occupant's, is still running. */
-function writeBedHistory(ctx: OrderContext, patients: PatientFactory, ward: WrittenWard, bed: string, occupant: ScalePatient, days: number): void {
+function writeBedHistory(
+  ctx: OrderContext,
+  patients: PatientFactory,
+  ward: WrittenWard,
+  bed: string,
+  occupant: ScalePatient,
+  days: number,
+): void {
   const { random: r, now } = ctx;
   let start = now - days * DAY + r.int(0, 36 * 60) * MINUTE;
   for (;;) {
     const end = start + r.int(36 * 60, 96 * 60) * MINUTE;
     if (end >= now - HOUR) {
-      const story = { ward, patient: occupant, start: Math.min(start, now - 20 * MINUTE), end: null, overdue: r.chance(0.08), sedatedAtLast: r.chance(0.06) };
+      const story = {
+        ward,
+        patient: occupant,
+        start: Math.min(start, now - 20 * MINUTE),
+        end: null,
+        overdue: r.chance(0.08),
+        sedatedAtLast: r.chance(0.06),
+      };
       writePcaStory(ctx, story);
       return;
     }

@@ -12,7 +12,14 @@ export type ScaleOptions = {
   seed: number;
 };
 
-export const DEFAULT_SCALE_OPTIONS: ScaleOptions = { wards: 30, beds: 1000, active: 300, days: 30, out: 'server/data/lockstep-scale.sqlite', seed: 1 };
+export const DEFAULT_SCALE_OPTIONS: ScaleOptions = {
+  wards: 30,
+  beds: 1000,
+  active: 300,
+  days: 30,
+  out: 'server/data/lockstep-scale.sqlite',
+  seed: 1,
+};
 
 /** `--wards 30 --beds 1000 --active 300 --days 30 --out file --seed 1`; throws a readable message on bad input. */
 export function parseScaleOptions(argv: string[]): ScaleOptions {

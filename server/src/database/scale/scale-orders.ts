@@ -76,28 +76,64 @@ export function writePca(ctx: OrderContext, course: PcaCourse): number {
   const events: Event[] = [
     { from: null, to: 'awaiting_verification', userId: staff.prescriber, at: course.signedAt, reason: null },
     { from: 'awaiting_verification', to: 'verified', userId: staff.pharmacist, at: course.verifiedAt, reason: null },
-    { from: 'verified', to: 'active', userId: staff.nurse, at: course.start, reason: `Bedside check matched; second check by ${staff.secondNurseName}` },
+    {
+      from: 'verified',
+      to: 'active',
+      userId: staff.nurse,
+      at: course.start,
+      reason: `Bedside check matched; second check by ${staff.secondNurseName}`,
+    },
   ];
-  if (course.end !== null) events.push({ from: 'active', to: 'discontinued', userId: staff.nurse, at: course.end, reason: DISCONTINUE_REASON });
+  if (course.end !== null)
+    events.push({ from: 'active', to: 'discontinued', userId: staff.nurse, at: course.end, reason: DISCONTINUE_REASON });
   const { regimen } = course;
   const orderId = writeOrder(ctx, course.ward, course.patient, regimen, events, course.start, course.overrideReason);
   writeSyringes(
     { ...ctx, policy: course.ward.policy },
-    { orderId, drugId: ctx.drugs.get(regimen.drug)!.id, regimen, start: course.start, stopAt: course.stopAt, end: course.end, script: course.script, changeSyringes: course.changeSyringes },
+    {
+      orderId,
+      drugId: ctx.drugs.get(regimen.drug)!.id,
+      regimen,
+      start: course.start,
+      stopAt: course.stopAt,
+      end: course.end,
+      script: course.script,
+      changeSyringes: course.changeSyringes,
+    },
   );
   if (course.bolusAt !== null) {
-    ctx.writer.insert('clinician_boluses', { orderId, amount: regimen.clinicianBolusDose, reason: 'Breakthrough pain on moving', givenById: staff.nurse, witnessId: staff.secondNurse, at: sqlTime(course.bolusAt) });
+    ctx.writer.insert('clinician_boluses', {
+      orderId,
+      amount: regimen.clinicianBolusDose,
+      reason: 'Breakthrough pain on moving',
+      givenById: staff.nurse,
+      witnessId: staff.secondNurse,
+      at: sqlTime(course.bolusAt),
+    });
   }
   writeSignoffs(ctx, course.ward.id, orderId, course.start, course.end ?? now, course.currentShift);
   return orderId;
 }
 
 /** An order still with pharmacy, or verified with its syringe waiting for the bedside check. */
-export function writeWaitingOrder(ctx: OrderContext, ward: WrittenWard, patient: ScalePatient, status: 'awaiting_verification' | 'verified'): void {
+export function writeWaitingOrder(
+  ctx: OrderContext,
+  ward: WrittenWard,
+  patient: ScalePatient,
+  status: 'awaiting_verification' | 'verified',
+): void {
   const { random: r, now } = ctx;
   const regimen = pickRegimen(r, ward.paediatric, patient.weightKg);
   const signedAt = now - r.int(20, 240) * MINUTE;
-  writeUnstartedOrder(ctx, { ward, patient, regimen, status, signedAt, decidedAt: signedAt + 15 * MINUTE, releaseCode: status === 'verified' ? ctx.codes.next() : null });
+  writeUnstartedOrder(ctx, {
+    ward,
+    patient,
+    regimen,
+    status,
+    signedAt,
+    decidedAt: signedAt + 15 * MINUTE,
+    releaseCode: status === 'verified' ? ctx.codes.next() : null,
+  });
 }
 
 export type UnstartedOrder = {
@@ -121,13 +157,24 @@ export function writeUnstartedOrder(ctx: OrderContext, order: UnstartedOrder): n
   const { staff } = ctx;
   const { regimen, status } = order;
   const events: Event[] = [{ from: null, to: 'awaiting_verification', userId: staff.prescriber, at: order.signedAt, reason: null }];
-  if (status !== 'awaiting_verification') events.push({ from: 'awaiting_verification', to: status, userId: staff.pharmacist, at: order.decidedAt, reason: order.reason ?? null });
+  if (status !== 'awaiting_verification')
+    events.push({ from: 'awaiting_verification', to: status, userId: staff.pharmacist, at: order.decidedAt, reason: order.reason ?? null });
   const orderId = writeOrder(ctx, order.ward, order.patient, regimen, events, null, order.overrideReason);
   if (order.releaseCode !== null) {
     const releasedAt = order.decidedAt + 15 * MINUTE;
     ctx.writer.insert('syringe_releases', {
-      orderId, releaseCode: order.releaseCode, status: 'ready', concentrationPerMl: regimen.concentrationPerMl, volumeMl: regimen.syringeMl, batch: order.batch ?? 'KB-WAITING',
-      expiresAt: sqlTime(releasedAt + 7 * DAY), preparedBy: 'Lin Park', checkedBy: 'Tomas Ortiz', releasedById: staff.pharmacist, releasedAt: sqlTime(releasedAt), rowVersion: 1,
+      orderId,
+      releaseCode: order.releaseCode,
+      status: 'ready',
+      concentrationPerMl: regimen.concentrationPerMl,
+      volumeMl: regimen.syringeMl,
+      batch: order.batch ?? 'KB-WAITING',
+      expiresAt: sqlTime(releasedAt + 7 * DAY),
+      preparedBy: 'Lin Park',
+      checkedBy: 'Tomas Ortiz',
+      releasedById: staff.pharmacist,
+      releasedAt: sqlTime(releasedAt),
+      rowVersion: 1,
     });
   }
   return orderId;
@@ -135,7 +182,15 @@ export function writeUnstartedOrder(ctx: OrderContext, order: UnstartedOrder): n
 
 type Event = { from: OrderStatus | null; to: OrderStatus; userId: number; at: number; reason: string | null };
 
-function writeOrder(ctx: OrderContext, ward: WrittenWard, patient: ScalePatient, regimen: ScaleRegimen, events: Event[], startedAt: number | null, overrideReason?: string): number {
+function writeOrder(
+  ctx: OrderContext,
+  ward: WrittenWard,
+  patient: ScalePatient,
+  regimen: ScaleRegimen,
+  events: Event[],
+  startedAt: number | null,
+  overrideReason?: string,
+): number {
   const { writer, staff } = ctx;
   const rule = ward.rules.get(regimen.drug)!;
   const { findings, overrides } = signingRecord(regimen, rule, patient, overrideReason);
@@ -170,7 +225,15 @@ function writeOrder(ctx: OrderContext, ward: WrittenWard, patient: ScalePatient,
     startedAt: startedAt === null ? null : sqlTime(startedAt),
     rowVersion: events.length,
   });
-  for (const event of events) writer.insert('order_events', { orderId, fromStatus: event.from, toStatus: event.to, userId: event.userId, at: sqlTime(event.at), reason: event.reason });
+  for (const event of events)
+    writer.insert('order_events', {
+      orderId,
+      fromStatus: event.from,
+      toStatus: event.to,
+      userId: event.userId,
+      at: sqlTime(event.at),
+      reason: event.reason,
+    });
   return orderId;
 }
 
@@ -190,8 +253,22 @@ function writeSignoffs(ctx: OrderContext, wardId: number, orderId: number, start
     const outgoingAt = boundary + Math.min(r.int(2, 15) * MINUTE, room / 3);
     const incomingAt = outgoingAt + Math.min(r.int(1, 5) * MINUTE, room / 3);
     const signoff = { wardId, orderId, shiftDate: shift.shiftDate, shift: shift.shift };
-    if (progress !== 'none') writer.insert('handover_signoffs', { ...signoff, role: 'outgoing', nurseId: staff.nurse, pumpSettingsMatch: null, at: sqlTime(outgoingAt) });
-    if (progress === 'both') writer.insert('handover_signoffs', { ...signoff, role: 'incoming', nurseId: staff.secondNurse, pumpSettingsMatch: 1, at: sqlTime(incomingAt) });
+    if (progress !== 'none')
+      writer.insert('handover_signoffs', {
+        ...signoff,
+        role: 'outgoing',
+        nurseId: staff.nurse,
+        pumpSettingsMatch: null,
+        at: sqlTime(outgoingAt),
+      });
+    if (progress === 'both')
+      writer.insert('handover_signoffs', {
+        ...signoff,
+        role: 'incoming',
+        nurseId: staff.secondNurse,
+        pumpSettingsMatch: 1,
+        at: sqlTime(incomingAt),
+      });
     boundary = Date.parse(shift.endsAt);
   }
 }

@@ -3,10 +3,70 @@ import type { ScalePatient } from './scale-orders.js';
 import type { ScaleWriter } from './scale-writer.js';
 
 // Invented names: common given names, family names built from syllables.
-const GIVEN = ['Ari', 'Bea', 'Cal', 'Dana', 'Eli', 'Fen', 'Gia', 'Hugo', 'Ila', 'Jonah', 'Kit', 'Lena', 'Milo', 'Nia', 'Otto', 'Pia', 'Quinn', 'Remy', 'Sol', 'Tess', 'Uma', 'Vik', 'Wynn', 'Yara', 'Zev', 'Anouk', 'Bram', 'Cleo', 'Dov', 'Esme'];
-const FAMILY_START = ['Ash', 'Brook', 'Cald', 'Dun', 'Elm', 'Fair', 'Gar', 'Hal', 'Ing', 'Kel', 'Lang', 'Mor', 'Nor', 'Ost', 'Pen', 'Rad', 'Sel', 'Tor', 'Und', 'Wex'];
+const GIVEN = [
+  'Ari',
+  'Bea',
+  'Cal',
+  'Dana',
+  'Eli',
+  'Fen',
+  'Gia',
+  'Hugo',
+  'Ila',
+  'Jonah',
+  'Kit',
+  'Lena',
+  'Milo',
+  'Nia',
+  'Otto',
+  'Pia',
+  'Quinn',
+  'Remy',
+  'Sol',
+  'Tess',
+  'Uma',
+  'Vik',
+  'Wynn',
+  'Yara',
+  'Zev',
+  'Anouk',
+  'Bram',
+  'Cleo',
+  'Dov',
+  'Esme',
+];
+const FAMILY_START = [
+  'Ash',
+  'Brook',
+  'Cald',
+  'Dun',
+  'Elm',
+  'Fair',
+  'Gar',
+  'Hal',
+  'Ing',
+  'Kel',
+  'Lang',
+  'Mor',
+  'Nor',
+  'Ost',
+  'Pen',
+  'Rad',
+  'Sel',
+  'Tor',
+  'Und',
+  'Wex',
+];
 const FAMILY_END = ['by', 'croft', 'dale', 'er', 'field', 'gate', 'holm', 'ley', 'mere', 'ow', 'ridge', 'stead', 'ton', 'well', 'wick'];
-const ALLERGIES = ['No known drug allergies', 'No known drug allergies', 'No known drug allergies', 'Penicillin (rash)', 'Codeine (vomiting)', 'Latex', 'Ibuprofen (wheeze)'];
+const ALLERGIES = [
+  'No known drug allergies',
+  'No known drug allergies',
+  'No known drug allergies',
+  'Penicillin (rash)',
+  'Codeine (vomiting)',
+  'Latex',
+  'Ibuprofen (wheeze)',
+];
 
 /** Writes invented patients with hospital numbers KB3000001, KB3000002, ... */
 export class PatientFactory {

@@ -12,8 +12,46 @@ export type PlannedWard = {
 };
 
 // Invented ward names after the demo's four; numbered once they run out.
-const MORE_NAMES = ['Alder', 'Birch', 'Cove', 'Dune', 'Ember', 'Fern', 'Grove', 'Heath', 'Inlet', 'Juniper', 'Kelp', 'Lark', 'Moss', 'Nook', 'Orchard', 'Pine', 'Quay', 'Reed', 'Shore', 'Tide', 'Umber', 'Vale', 'Willow', 'Yarrow', 'Zephyr', 'Aster'];
-const SPECIALTIES = ['General surgery', 'Orthopaedics', 'Urology', 'Gynaecology', 'Vascular surgery', 'Colorectal surgery', 'Trauma', 'Thoracic surgery', 'Plastic surgery', 'High dependency'];
+const MORE_NAMES = [
+  'Alder',
+  'Birch',
+  'Cove',
+  'Dune',
+  'Ember',
+  'Fern',
+  'Grove',
+  'Heath',
+  'Inlet',
+  'Juniper',
+  'Kelp',
+  'Lark',
+  'Moss',
+  'Nook',
+  'Orchard',
+  'Pine',
+  'Quay',
+  'Reed',
+  'Shore',
+  'Tide',
+  'Umber',
+  'Vale',
+  'Willow',
+  'Yarrow',
+  'Zephyr',
+  'Aster',
+];
+const SPECIALTIES = [
+  'General surgery',
+  'Orthopaedics',
+  'Urology',
+  'Gynaecology',
+  'Vascular surgery',
+  'Colorectal surgery',
+  'Trauma',
+  'Thoracic surgery',
+  'Plastic surgery',
+  'High dependency',
+];
 
 /**
  * Splits the beds and active PCAs over the wards. The first ward is the busy one (half as many
@@ -28,7 +66,10 @@ export function planWards(options: Pick<ScaleOptions, 'wards' | 'beds' | 'active
   const restActive = spread(active - busyActive, wards - 1);
   return Array.from({ length: wards }, (_, index) => {
     const counts = index === 0 ? { beds: busyBeds, active: busyActive } : { beds: restBeds[index - 1], active: restActive[index - 1] };
-    if (counts.active > counts.beds) throw new Error(`Ward ${index + 1} would have more PCAs (${counts.active}) than beds (${counts.beds}): lower --active or raise --beds`);
+    if (counts.active > counts.beds)
+      throw new Error(
+        `Ward ${index + 1} would have more PCAs (${counts.active}) than beds (${counts.beds}): lower --active or raise --beds`,
+      );
     return { ...identity(index), ...counts };
   });
 }
@@ -40,7 +81,12 @@ function identity(index: number): Omit<PlannedWard, 'beds' | 'active'> {
   const base = MORE_NAMES[n % MORE_NAMES.length];
   const round = Math.floor(n / MORE_NAMES.length);
   const name = round === 0 ? base : `${base} ${round + 1}`;
-  return { code: `${base.slice(0, 3).toUpperCase()}${round === 0 ? '' : round + 1}`, name, specialty: SPECIALTIES[n % SPECIALTIES.length], weightBasedDosing: false };
+  return {
+    code: `${base.slice(0, 3).toUpperCase()}${round === 0 ? '' : round + 1}`,
+    name,
+    specialty: SPECIALTIES[n % SPECIALTIES.length],
+    weightBasedDosing: false,
+  };
 }
 
 function spread(total: number, parts: number): number[] {

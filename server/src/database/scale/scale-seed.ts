@@ -45,10 +45,14 @@ async function seedScale(): Promise<void> {
 
   const rows = [...writer.counts.values()].reduce((sum, n) => sum + n, 0);
   const seconds = (ms: number) => `${(ms / 1000).toFixed(1)} s`;
-  console.log(`Scale dataset: ${options.wards} wards, ${options.beds} beds, ${options.active} active PCAs, ${options.days} days (seed ${options.seed})`);
+  console.log(
+    `Scale dataset: ${options.wards} wards, ${options.beds} beds, ${options.active} active PCAs, ${options.days} days (seed ${options.seed})`,
+  );
   for (const [table, count] of writer.counts) console.log(`  ${table.padEnd(24)} ${count.toLocaleString('en-GB').padStart(9)}`);
   console.log(`Wrote ${rows.toLocaleString('en-GB')} rows to ${file} (${(statSync(file).size / 1e6).toFixed(0)} MB)`);
-  console.log(`Time: ${seconds(written - started)} (migrations ${seconds(migrated - started)}, one insert transaction ${seconds(written - migrated)})`);
+  console.log(
+    `Time: ${seconds(written - started)} (migrations ${seconds(migrated - started)}, one insert transaction ${seconds(written - migrated)})`,
+  );
 }
 
 seedScale().catch((error: unknown) => {

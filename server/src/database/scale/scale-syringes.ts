@@ -162,7 +162,14 @@ function startSyringe(ctx: SyringeContext, order: ObservedOrder, at: number): Ru
 }
 
 /** The syringe comes down: what is left is wasted in front of a witness and reconciled; a shortfall is flagged for pharmacy. */
-function takeDown(ctx: SyringeContext, order: ObservedOrder, syringe: RunningSyringe, at: number, last: ObservationValues | null, index: number): void {
+function takeDown(
+  ctx: SyringeContext,
+  order: ObservedOrder,
+  syringe: RunningSyringe,
+  at: number,
+  last: ObservationValues | null,
+  index: number,
+): void {
   const { writer, staff } = ctx;
   const dispensedMl = order.regimen.syringeMl;
   const infusedMl = last?.volumeInfusedMl ?? 0;
@@ -182,10 +189,18 @@ function takeDown(ctx: SyringeContext, order: ObservedOrder, syringe: RunningSyr
     at: sqlTime(at),
   });
   // Open until pharmacy has reviewed the controlled-drug record.
-  if (result.mustReport) writeFlag(ctx, order.orderId, null, discrepancyFlag({ ...result, dispensedMl, infusedMl, wastedMl }, syringe.releaseCode), at, null);
+  if (result.mustReport)
+    writeFlag(ctx, order.orderId, null, discrepancyFlag({ ...result, dispensedMl, infusedMl, wastedMl }, syringe.releaseCode), at, null);
 }
 
-function writeFlag(ctx: SyringeContext, orderId: number, releaseId: number | null, flag: FlagDraft, at: number, acknowledgedAt: number | null): void {
+function writeFlag(
+  ctx: SyringeContext,
+  orderId: number,
+  releaseId: number | null,
+  flag: FlagDraft,
+  at: number,
+  acknowledgedAt: number | null,
+): void {
   ctx.writer.insert('flags', {
     orderId,
     releaseId,

@@ -5,7 +5,13 @@ import type { DoseUnit, Limits, RegimenField } from '@lockstep/shared';
 // demand 0.1–0.4 mg, 4-hour 6 mg; fentanyl 10 mcg/mL demand 5–20 mcg, 4-hour 300 mcg) and the
 // paediatric morphine bolus of 10–20 mcg/kg. Hard limits are invented. Not for clinical use.
 
-type DemoRule = { drug: string; concentrationPerMl: number; doseUnit: DoseUnit; perKg: boolean; limits: Partial<Record<RegimenField, Limits>> };
+type DemoRule = {
+  drug: string;
+  concentrationPerMl: number;
+  doseUnit: DoseUnit;
+  perKg: boolean;
+  limits: Partial<Record<RegimenField, Limits>>;
+};
 
 const lockout: Limits = { hardMin: 5, softMin: 6, softMax: 15, hardMax: 30 };
 

@@ -33,7 +33,14 @@ type ShiftStarts = Pick<Ward, 'dayShiftStart' | 'nightShiftStart'>;
  */
 export async function seedDemoOrders(manager: EntityManager, users: User[], now: number): Promise<void> {
   const writer = new ScaleWriter((manager.connection.driver as BetterSqlite3Driver).databaseConnection as Database);
-  const ctx: OrderContext = { writer, random: new Random(DEMO_RANDOM_SEED), staff: demoStaff(users), drugs: await demoDrugs(manager), codes: new ReleaseCodes(), now };
+  const ctx: OrderContext = {
+    writer,
+    random: new Random(DEMO_RANDOM_SEED),
+    staff: demoStaff(users),
+    drugs: await demoDrugs(manager),
+    codes: new ReleaseCodes(),
+    now,
+  };
   const patients = await demoPatients(manager);
   const find = (mrn: string) => patients.get(mrn) ?? missing(mrn);
 
@@ -97,7 +104,15 @@ function startToEmptyThisShift(pca: DemoPca, shifts: ShiftStarts, now: number): 
 function demoStaff(users: User[]): Staff {
   const id = (username: string) => (users.find((user) => user.username === username) ?? missing(username)).id;
   const rosa = users.find((user) => user.username === 'rosa.adeyemi') ?? missing('rosa.adeyemi');
-  return { prescriber: id('amara.osei'), pharmacist: id('lin.park'), approver: id('tomas.ortiz'), nurse: id('kai.mendes'), secondNurse: rosa.id, secondNurseName: rosa.displayName, chargeNurse: id('mei.tan') };
+  return {
+    prescriber: id('amara.osei'),
+    pharmacist: id('lin.park'),
+    approver: id('tomas.ortiz'),
+    nurse: id('kai.mendes'),
+    secondNurse: rosa.id,
+    secondNurseName: rosa.displayName,
+    chargeNurse: id('mei.tan'),
+  };
 }
 
 async function demoDrugs(manager: EntityManager): Promise<Drugs> {
@@ -115,7 +130,12 @@ async function demoPatients(manager: EntityManager): Promise<Map<string, DemoPat
   const wards = new Map(
     (await manager.find(Ward)).map((ward) => {
       const mine = rules.filter((rule) => rule.version.wardId === ward.id);
-      const written: WrittenWard = { id: ward.id, paediatric: ward.weightBasedDosing, rules: new Map(mine.map((rule) => [rule.drug.genericName, toLimitRuleResponse(rule)])), policy: wardPolicy(ward) };
+      const written: WrittenWard = {
+        id: ward.id,
+        paediatric: ward.weightBasedDosing,
+        rules: new Map(mine.map((rule) => [rule.drug.genericName, toLimitRuleResponse(rule)])),
+        policy: wardPolicy(ward),
+      };
       return [ward.id, { ward: written, shifts: ward }];
     }),
   );

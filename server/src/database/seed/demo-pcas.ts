@@ -80,7 +80,12 @@ export const DEMO_UNSTARTED_ORDERS: DemoUnstartedOrder[] = [
   },
   {
     mrn: 'KB100672',
-    regimen: hydromorphone({ demandDose: 0.2, basalRatePerHour: 0.1, clinicianBolusDose: null, indication: 'Pain after bowel resection; regular opioid before admission' }),
+    regimen: hydromorphone({
+      demandDose: 0.2,
+      basalRatePerHour: 0.1,
+      clinicianBolusDose: null,
+      indication: 'Pain after bowel resection; regular opioid before admission',
+    }),
     status: 'verified',
     signedMinutesAgo: 180,
     decidedAfterMinutes: 20,
@@ -89,7 +94,13 @@ export const DEMO_UNSTARTED_ORDERS: DemoUnstartedOrder[] = [
   },
   {
     mrn: 'KB101127',
-    regimen: fentanyl({ demandDose: 20, lockoutMinutes: 6, fourHourLimit: 300, clinicianBolusDose: null, indication: 'Pain after femoral fracture fixation' }),
+    regimen: fentanyl({
+      demandDose: 20,
+      lockoutMinutes: 6,
+      fourHourLimit: 300,
+      clinicianBolusDose: null,
+      indication: 'Pain after femoral fracture fixation',
+    }),
     status: 'returned',
     signedMinutesAgo: 120,
     decidedAfterMinutes: 20,
@@ -150,7 +161,12 @@ export const DEMO_PCAS: DemoPca[] = [
   },
   {
     mrn: 'KB100958',
-    regimen: morphine({ demandDose: 1.5, lockoutMinutes: 10, basalRatePerHour: 1, indication: 'Pain after spinal decompression; regular opioid before admission' }),
+    regimen: morphine({
+      demandDose: 1.5,
+      lockoutMinutes: 10,
+      basalRatePerHour: 1,
+      indication: 'Pain after spinal decompression; regular opioid before admission',
+    }),
     start: { minutesAgo: 20 * 60 + 25 },
     script: { doses: [2, 1, 2, 1, 1, 2], ...SETTLED },
     currentShift: 'none',
@@ -174,14 +190,25 @@ export const DEMO_PCAS: DemoPca[] = [
   {
     // Wren's rule is per kg: 0.4 mg is 0.016 mg/kg for 24.5 kg; a 20 mL syringe for a child.
     mrn: 'KB102248',
-    regimen: morphine({ demandDose: 0.4, lockoutMinutes: 10, fourHourLimit: 7, clinicianBolusDose: 0.4, syringeMl: 20, indication: 'Pain after femoral fracture fixation' }),
+    regimen: morphine({
+      demandDose: 0.4,
+      lockoutMinutes: 10,
+      fourHourLimit: 7,
+      clinicianBolusDose: 0.4,
+      syringeMl: 20,
+      indication: 'Pain after femoral fracture fixation',
+    }),
     start: { minutesAgo: 18 * 60 + 15 },
     script: { doses: [2, 1, 2, 1, 1, 1], pain: [4, 3, 3, 2, 2, 3] },
     currentShift: 'both',
   },
   {
     mrn: 'KB103355',
-    regimen: hydromorphone({ demandDose: 0.3, basalRatePerHour: 0.1, indication: 'Pain after thoracotomy; regular opioid before admission' }),
+    regimen: hydromorphone({
+      demandDose: 0.3,
+      basalRatePerHour: 0.1,
+      indication: 'Pain after thoracotomy; regular opioid before admission',
+    }),
     start: { minutesAgo: 26 * 60 + 20 },
     script: { doses: [2, 1, 2, 1, 1, 1], ...SETTLED },
     currentShift: 'both',

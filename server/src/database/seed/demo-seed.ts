@@ -25,10 +25,16 @@ export async function seedDemoDataIfEmpty(dataSource: DataSource, now = Date.now
 }
 
 async function seedDemoData(manager: EntityManager, now: number): Promise<void> {
-  const wards = await manager.save(Ward, DEMO_WARDS.map((ward) => manager.create(Ward, ward)));
+  const wards = await manager.save(
+    Ward,
+    DEMO_WARDS.map((ward) => manager.create(Ward, ward)),
+  );
   const wardByCode = new Map(wards.map((ward) => [ward.code, ward]));
 
-  const drugs = await manager.save(Drug, DEMO_DRUGS.map((drug) => manager.create(Drug, drug)));
+  const drugs = await manager.save(
+    Drug,
+    DEMO_DRUGS.map((drug) => manager.create(Drug, drug)),
+  );
 
   // The demo accounts share one password, so one (slow, salted) hash serves them all.
   const passwordHash = await hashPassword(DEMO_PASSWORD);
@@ -49,16 +55,20 @@ async function seedDemoData(manager: EntityManager, now: number): Promise<void> 
 
   await manager.save(
     Patient,
-    DEMO_PATIENTS.map(({ wardCode, ...patient }) =>
-      manager.create(Patient, { ...patient, wardId: wardByCode.get(wardCode)!.id }),
-    ),
+    DEMO_PATIENTS.map(({ wardCode, ...patient }) => manager.create(Patient, { ...patient, wardId: wardByCode.get(wardCode)!.id })),
   );
 
   await seedDemoOrders(manager, users, now);
   await tellDemoStory(manager, users, libraryStory);
 }
 
-async function seedDemoLibraries(manager: EntityManager, wards: Ward[], drugs: Drug[], users: User[], now: number): Promise<DemoAuditEntry[]> {
+async function seedDemoLibraries(
+  manager: EntityManager,
+  wards: Ward[],
+  drugs: Drug[],
+  users: User[],
+  now: number,
+): Promise<DemoAuditEntry[]> {
   const story: DemoAuditEntry[] = [];
   const wardId = (code: string) => wards.find((ward) => ward.code === code)!.id;
   const drugId = (name: string) => drugs.find((drug) => drug.genericName === name)!.id;

@@ -29,7 +29,12 @@ type Story = { audit: DemoAuditEntry[]; mail: (OutgoingMail & { at: Date })[] };
 export async function tellDemoStory(manager: EntityManager, users: User[], earlier: DemoAuditEntry[]): Promise<void> {
   const person = new Map(users.map((user) => [user.id, user]));
   const actor = (id: number) => person.get(id)!;
-  const orders = new Map((await manager.find(PcaOrder, { relations: { patient: { ward: true }, drug: true, prescriber: true } })).map((order) => [order.id, order]));
+  const orders = new Map(
+    (await manager.find(PcaOrder, { relations: { patient: { ward: true }, drug: true, prescriber: true } })).map((order) => [
+      order.id,
+      order,
+    ]),
+  );
   const releases = await manager.find(SyringeRelease, { order: { releasedAt: 'ASC', id: 'ASC' } });
   const story: Story = { audit: [...earlier], mail: [] };
   const tell = (entry: Omit<DemoAuditEntry, 'entityType'>) => story.audit.push({ ...entry, entityType: 'order' });
@@ -50,7 +55,13 @@ export async function tellDemoStory(manager: EntityManager, users: User[], earli
   }
 
   for (const release of releases) {
-    tell({ actor: actor(release.releasedById), entityId: release.orderId, at: release.releasedAt, action: 'order.release', summary: releaseAuditSummary(release) });
+    tell({
+      actor: actor(release.releasedById),
+      entityId: release.orderId,
+      at: release.releasedAt,
+      action: 'order.release',
+      summary: releaseAuditSummary(release),
+    });
     send(syringeReleasedMail(orders.get(release.orderId)!, release), release.releasedAt);
   }
 
@@ -58,7 +69,13 @@ export async function tellDemoStory(manager: EntityManager, users: User[], earli
   for (const check of await manager.find(BedsideCheck)) {
     const { releaseCode } = releaseById.get(check.releaseId)!;
     const order = orders.get(check.orderId)!;
-    tell({ actor: actor(check.firstNurseId), entityId: check.orderId, at: check.firstAt, action: 'order.bedside-first-check', summary: { checkId: check.id, releaseCode, settings: check.firstSettings } });
+    tell({
+      actor: actor(check.firstNurseId),
+      entityId: check.orderId,
+      at: check.firstAt,
+      action: 'order.bedside-first-check',
+      summary: { checkId: check.id, releaseCode, settings: check.firstSettings },
+    });
     const starts = order.startedAt?.getTime() === check.secondAt!.getTime();
     tell({
       actor: actor(check.secondNurseId!),
@@ -78,22 +95,46 @@ export async function tellDemoStory(manager: EntityManager, users: User[], earli
   for (const observation of await manager.find(Observation, { order: { at: 'ASC', id: 'ASC' } })) {
     const order = orders.get(observation.orderId)!;
     const raised = raisedWith.get(`${observation.orderId}@${observation.at.getTime()}`) ?? [];
-    tell({ actor: actor(observation.recordedById), entityId: order.id, at: observation.at, action: 'order.observation', summary: observationAuditSummary(observation, raised.map((flag) => flag.code)) });
+    tell({
+      actor: actor(observation.recordedById),
+      entityId: order.id,
+      at: observation.at,
+      action: 'order.observation',
+      summary: observationAuditSummary(
+        observation,
+        raised.map((flag) => flag.code),
+      ),
+    });
     const urgent = raised.filter((flag) => flag.severity === 'urgent');
-    if (urgent.length > 0) for (const to of [order.prescriber.email, order.patient.ward.nurseInChargeEmail]) send(urgentFlagsMail(order, urgent, to), observation.at);
+    if (urgent.length > 0)
+      for (const to of [order.prescriber.email, order.patient.ward.nurseInChargeEmail])
+        send(urgentFlagsMail(order, urgent, to), observation.at);
     const low = raised.find((flag) => flag.code === 'syringe.low');
     if (low) send(syringeLowMail(order, low), observation.at);
   }
   for (const flag of flags) {
     if (!flag.acknowledgedAt) continue;
-    tell({ actor: actor(flag.acknowledgedById!), entityId: flag.orderId, at: flag.acknowledgedAt, action: 'order.flag-acknowledge', summary: { flagId: flag.id, code: flag.code, severity: flag.severity, note: flag.acknowledgeNote } });
+    tell({
+      actor: actor(flag.acknowledgedById!),
+      entityId: flag.orderId,
+      at: flag.acknowledgedAt,
+      action: 'order.flag-acknowledge',
+      summary: { flagId: flag.id, code: flag.code, severity: flag.severity, note: flag.acknowledgeNote },
+    });
   }
 
   tellSyringeEnds(await manager.find(ReleaseReconciliation), releases, orders, actor, tell, send);
 
   for (const bolus of await manager.find(ClinicianBolus)) {
     const order = orders.get(bolus.orderId)!;
-    const summary = { bolusId: bolus.id, amount: bolus.amount, doseUnit: order.doseUnit, reason: bolus.reason, overrideReason: bolus.overrideReason, witness: actor(bolus.witnessId).displayName };
+    const summary = {
+      bolusId: bolus.id,
+      amount: bolus.amount,
+      doseUnit: order.doseUnit,
+      reason: bolus.reason,
+      overrideReason: bolus.overrideReason,
+      witness: actor(bolus.witnessId).displayName,
+    };
     tell({ actor: actor(bolus.givenById), entityId: bolus.orderId, at: bolus.at, action: 'order.bolus', summary });
   }
   for (const signoff of await manager.find(HandoverSignoff)) {
@@ -105,7 +146,11 @@ export async function tellDemoStory(manager: EntityManager, users: User[], earli
   await recordDemoStory(manager, story.audit);
   // Oldest first, so the mailbox (newest first by id) reads as it would have filled.
   const mail = story.mail.sort((a, b) => a.at.getTime() - b.at.getTime());
-  if (mail.length > 0) await manager.insert(MailboxMessage, mail.map(({ to, subject, text, at }) => ({ to, subject, text: text.trim(), at })));
+  if (mail.length > 0)
+    await manager.insert(
+      MailboxMessage,
+      mail.map(({ to, subject, text, at }) => ({ to, subject, text: text.trim(), at })),
+    );
 }
 
 /** Each syringe taken down: a change to the next syringe, or the end of the PCA, with its reconciliation. */
@@ -126,10 +171,18 @@ function tellSyringeEnds(
     const next = releases.find((other) => other.orderId === order.id && other.releasedAt > release.releasedAt);
     const base = { actor: actor(reconciliation.recordedById), entityId: order.id, at: reconciliation.at };
     if (next) {
-      tell({ ...base, action: 'order.syringe-change', summary: { ...reconciliationAuditSummary(result), newReleaseCode: next.releaseCode, witness } });
+      tell({
+        ...base,
+        action: 'order.syringe-change',
+        summary: { ...reconciliationAuditSummary(result), newReleaseCode: next.releaseCode, witness },
+      });
     } else {
       const reason = order.statusReason;
-      tell({ ...base, action: 'order.discontinue', summary: { status: { from: 'active', to: 'discontinued' }, reason, ...reconciliationAuditSummary(result), witness } });
+      tell({
+        ...base,
+        action: 'order.discontinue',
+        summary: { status: { from: 'active', to: 'discontinued' }, reason, ...reconciliationAuditSummary(result), witness },
+      });
     }
     if (reconciliation.mustReport) send(discrepancyMail(order, reconciliation), reconciliation.at);
   }

@@ -3,7 +3,12 @@ import { ApiProperty } from '@nestjs/swagger';
 import { Trim } from '../../common/validation/trim.decorator.js';
 
 export class AcknowledgeFlagDto {
-  @ApiProperty({ minLength: 5, maxLength: 1000, example: 'Naloxone given, prescriber informed', description: 'What was done about the flag' })
+  @ApiProperty({
+    minLength: 5,
+    maxLength: 1000,
+    example: 'Naloxone given, prescriber informed',
+    description: 'What was done about the flag',
+  })
   @Trim()
   @MaxLength(1000, { message: 'The note is at most 1,000 characters' })
   @MinLength(5, { message: 'Say what was done (at least 5 characters)' })

@@ -3,7 +3,6 @@ import type { FlagSeverity } from '@lockstep/shared';
 import { PcaOrder } from '../../orders/entities/pca-order.entity.js';
 import { User } from '../../users/entities/user.entity.js';
 
-
 /** A warning Lockstep raised about an order. Open until someone acknowledges it with a note. */
 @Entity('flags')
 export class Flag {

@@ -8,7 +8,11 @@ import { SignedRequestDto } from '../../common/dto/signature.dto.js';
  * refuse an approval of rules its signer never saw.
  */
 export class ApproveVersionDto extends SignedRequestDto {
-  @ApiProperty({ format: 'date-time', example: '2030-01-01T10:00:00.000Z', description: 'The `submittedAt` of the version as the approver reviewed it' })
+  @ApiProperty({
+    format: 'date-time',
+    example: '2030-01-01T10:00:00.000Z',
+    description: 'The `submittedAt` of the version as the approver reviewed it',
+  })
   @IsRFC3339({ message: 'submittedAt must be the time the reviewed version was submitted' })
   @IsISO8601({ strict: true }, { message: 'submittedAt must be the time the reviewed version was submitted' })
   @IsDefined({ message: 'submittedAt is required: the submission you reviewed' })

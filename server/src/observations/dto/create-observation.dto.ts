@@ -7,7 +7,11 @@ const finite = { allowNaN: false, allowInfinity: false };
 export class CreateObservationDto {
   /** Defaults to now; never in the future, never before the PCA started. */
   // ISO 8601 alone lets through week dates (2030-W01-1) and compact forms that Date cannot read.
-  @ApiPropertyOptional({ format: 'date-time', example: '2030-01-01T10:00:00Z', description: 'When observed; defaults to now; never in the future, never before the PCA started' })
+  @ApiPropertyOptional({
+    format: 'date-time',
+    example: '2030-01-01T10:00:00Z',
+    description: 'When observed; defaults to now; never in the future, never before the PCA started',
+  })
   @IsRFC3339({ message: 'Enter the time of the observation' })
   @IsISO8601({ strict: true }, { message: 'Enter the time of the observation' })
   @IsOptional()

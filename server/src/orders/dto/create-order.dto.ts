@@ -1,5 +1,16 @@
 import { Type } from 'class-transformer';
-import { ArrayMaxSize, IsArray, IsDefined, IsISO8601, IsObject, IsString, Matches, MaxLength, MinLength, ValidateNested } from 'class-validator';
+import {
+  ArrayMaxSize,
+  IsArray,
+  IsDefined,
+  IsISO8601,
+  IsObject,
+  IsString,
+  Matches,
+  MaxLength,
+  MinLength,
+  ValidateNested,
+} from 'class-validator';
 import { MIN_REASON_LENGTH, type CreateOrderRequest, type Override } from '@lockstep/shared';
 import { ApiProperty } from '@nestjs/swagger';
 import { SignatureDto } from '../../common/dto/signature.dto.js';
@@ -13,7 +24,12 @@ export class OverrideDto implements Override {
   @IsDefined({ message: 'field is required' })
   field: string;
 
-  @ApiProperty({ minLength: MIN_REASON_LENGTH, maxLength: 1000, example: 'Opioid-tolerant patient, agreed with the pain team', description: 'Why the value is right for this patient' })
+  @ApiProperty({
+    minLength: MIN_REASON_LENGTH,
+    maxLength: 1000,
+    example: 'Opioid-tolerant patient, agreed with the pain team',
+    description: 'Why the value is right for this patient',
+  })
   @Trim()
   @MaxLength(1000, { message: 'The reason is at most 1,000 characters' })
   @MinLength(MIN_REASON_LENGTH, { message: `Give a reason of at least ${MIN_REASON_LENGTH} characters` })
@@ -24,7 +40,12 @@ export class OverrideDto implements Override {
 
 export class CreateOrderDto extends OrderFieldsDto implements CreateOrderRequest {
   // ISO 8601 alone also takes 2030, 2030-W01-1 or a date and time.
-  @ApiProperty({ format: 'date', pattern: '^\\d{4}-\\d{2}-\\d{2}$', example: '2030-01-02', description: 'When the order is to be reviewed (yyyy-mm-dd)' })
+  @ApiProperty({
+    format: 'date',
+    pattern: '^\\d{4}-\\d{2}-\\d{2}$',
+    example: '2030-01-02',
+    description: 'When the order is to be reviewed (yyyy-mm-dd)',
+  })
   @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'Enter the review date (yyyy-mm-dd)' })
   @IsISO8601({ strict: true }, { message: 'Enter the review date (yyyy-mm-dd)' })
   @IsDefined({ message: 'Enter the review date' })
@@ -33,7 +54,11 @@ export class CreateOrderDto extends OrderFieldsDto implements CreateOrderRequest
   @ValidateNested({ each: true })
   @Type(() => OverrideDto)
   // ValidateNested alone walks into a nested list ([[]]) and finds nothing wrong with it.
-  @ApiProperty({ type: () => [OverrideDto], maxItems: 20, description: 'A reason for each value outside a soft limit; an empty list when there are none' })
+  @ApiProperty({
+    type: () => [OverrideDto],
+    maxItems: 20,
+    description: 'A reason for each value outside a soft limit; an empty list when there are none',
+  })
   @IsObject({ each: true, message: 'Each override is {field, reason}' })
   @ArrayMaxSize(20, { message: 'At most 20 overrides' })
   @IsArray({ message: 'overrides must be a list of {field, reason}' })

@@ -29,7 +29,13 @@ export class OrderFieldsDto implements OrderFields {
   @IsDefined({ message: 'Choose the dose unit' })
   doseUnit: DoseUnit;
 
-  @ApiPropertyOptional({ type: 'number', nullable: true, minimum: 0, example: null, description: 'Given once before the PCA starts; null or absent for none' })
+  @ApiPropertyOptional({
+    type: 'number',
+    nullable: true,
+    minimum: 0,
+    example: null,
+    description: 'Given once before the PCA starts; null or absent for none',
+  })
   @Min(0, { message: 'Loading dose cannot be negative' })
   @IsNumber(finite, { message: 'Loading dose must be a number' })
   @IsOptional()
@@ -53,19 +59,37 @@ export class OrderFieldsDto implements OrderFields {
   @IsDefined({ message: 'Enter the basal rate (0 for none)' })
   basalRatePerHour: number;
 
-  @ApiPropertyOptional({ type: 'number', nullable: true, minimum: 0, example: null, description: 'Most in any hour, demand doses and basal together' })
+  @ApiPropertyOptional({
+    type: 'number',
+    nullable: true,
+    minimum: 0,
+    example: null,
+    description: 'Most in any hour, demand doses and basal together',
+  })
   @Min(0, { message: '1-hour limit cannot be negative' })
   @IsNumber(finite, { message: '1-hour limit must be a number' })
   @IsOptional()
   oneHourLimit?: number | null;
 
-  @ApiPropertyOptional({ type: 'number', nullable: true, minimum: 0, example: 30, description: 'Most in any 4 hours, demand doses and basal together' })
+  @ApiPropertyOptional({
+    type: 'number',
+    nullable: true,
+    minimum: 0,
+    example: 30,
+    description: 'Most in any 4 hours, demand doses and basal together',
+  })
   @Min(0, { message: '4-hour limit cannot be negative' })
   @IsNumber(finite, { message: '4-hour limit must be a number' })
   @IsOptional()
   fourHourLimit?: number | null;
 
-  @ApiPropertyOptional({ type: 'number', nullable: true, minimum: 0, example: 2, description: 'What a nurse may give for breakthrough pain, with a second nurse' })
+  @ApiPropertyOptional({
+    type: 'number',
+    nullable: true,
+    minimum: 0,
+    example: 2,
+    description: 'What a nurse may give for breakthrough pain, with a second nurse',
+  })
   @Min(0, { message: 'Clinician bolus cannot be negative' })
   @IsNumber(finite, { message: 'Clinician bolus must be a number' })
   @IsOptional()

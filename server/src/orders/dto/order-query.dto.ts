@@ -19,7 +19,11 @@ export class OrderQueryDto {
   patientId?: number;
 
   /** One status, or several separated by commas. */
-  @ApiPropertyOptional({ type: 'string', example: 'awaiting_verification,returned', description: `One status, or several separated by commas: ${ORDER_STATUSES.join(', ')}` })
+  @ApiPropertyOptional({
+    type: 'string',
+    example: 'awaiting_verification,returned',
+    description: `One status, or several separated by commas: ${ORDER_STATUSES.join(', ')}`,
+  })
   @IsIn(ORDER_STATUSES, { each: true, message: `status must be among: ${ORDER_STATUSES.join(', ')}` })
   @Transform(({ value }) => (typeof value === 'string' ? value.split(',').map((part) => part.trim()) : value))
   @IsOptional()

@@ -44,7 +44,13 @@ export function toOrderSummary(order: PcaOrder): OrderSummary {
 }
 
 /** Expects the summary relations plus `verifiedBy`; events and releases with their users. */
-export function toOrderDetail(order: PcaOrder, events: OrderEvent[], releases: SyringeRelease[], flags: Flag[], nextObservation: ObservationDue | null): OrderDetail {
+export function toOrderDetail(
+  order: PcaOrder,
+  events: OrderEvent[],
+  releases: SyringeRelease[],
+  flags: Flag[],
+  nextObservation: ObservationDue | null,
+): OrderDetail {
   return {
     ...toOrderSummary(order),
     derived: deriveOrderValues(order),

@@ -1,4 +1,15 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, OneToMany, PrimaryGeneratedColumn, type Relation, VersionColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  OneToMany,
+  PrimaryGeneratedColumn,
+  type Relation,
+  VersionColumn,
+} from 'typeorm';
 import type { DoseUnit, Finding, LimitRuleResponse, OrderStatus, Override, RegimenType } from '@lockstep/shared';
 import { Drug } from '../../drugs/entities/drug.entity.js';
 import { Patient } from '../../patients/entities/patient.entity.js';

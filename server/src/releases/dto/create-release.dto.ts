@@ -50,7 +50,11 @@ export class CreateReleaseDto implements CreateReleaseRequest {
   @IsDefined({ message: 'Enter who checked the syringe' })
   checkedBy: string;
 
-  @ApiPropertyOptional({ minLength: MIN_REASON_LENGTH, maxLength: 1000, description: 'Needed for a syringe volume outside the usual 20 to 60 mL' })
+  @ApiPropertyOptional({
+    minLength: MIN_REASON_LENGTH,
+    maxLength: 1000,
+    description: 'Needed for a syringe volume outside the usual 20 to 60 mL',
+  })
   @Trim()
   @MaxLength(1000, { message: 'The reason is at most 1,000 characters' })
   @MinLength(MIN_REASON_LENGTH, { message: `Give a reason of at least ${MIN_REASON_LENGTH} characters` })

@@ -5,7 +5,13 @@ import { Trim } from '../../common/validation/trim.decorator.js';
 
 // The decorator nearest the property runs first (see login.dto.ts).
 export class CreateUserDto implements CreateUserRequest {
-  @ApiProperty({ minLength: 3, maxLength: 64, pattern: '^[a-z0-9._-]+$', example: 'jo.bloggs', description: 'Lower-case letters, digits, dots, dashes and underscores; never changes' })
+  @ApiProperty({
+    minLength: 3,
+    maxLength: 64,
+    pattern: '^[a-z0-9._-]+$',
+    example: 'jo.bloggs',
+    description: 'Lower-case letters, digits, dots, dashes and underscores; never changes',
+  })
   @Matches(/^[a-z0-9._-]+$/, {
     message: 'Username may use lower-case letters, digits, dots, dashes and underscores',
   })
@@ -28,7 +34,14 @@ export class CreateUserDto implements CreateUserRequest {
   @IsDefined({ message: 'role is required' })
   role: Role;
 
-  @ApiProperty({ type: 'integer', isArray: true, minimum: 1, maxItems: 100, example: [1], description: 'The wards the user works on (an empty list is allowed)' })
+  @ApiProperty({
+    type: 'integer',
+    isArray: true,
+    minimum: 1,
+    maxItems: 100,
+    example: [1],
+    description: 'The wards the user works on (an empty list is allowed)',
+  })
   @IsPositive({ each: true, message: 'each ward id must be positive' })
   @IsInt({ each: true, message: 'each ward id must be a whole number' })
   @ArrayMaxSize(100, { message: 'wardIds lists at most 100 wards' })

@@ -9,21 +9,39 @@ const emailOrEmpty = ValidateIf((_object, value) => value !== undefined && value
 
 /** Local monitoring and escalation settings; each change is the ward's own policy. */
 export class UpdateWardPolicyDto {
-  @ApiPropertyOptional({ type: 'integer', minimum: 15, maximum: 240, example: 60, description: 'Minutes between observations in the first 24 hours of a PCA' })
+  @ApiPropertyOptional({
+    type: 'integer',
+    minimum: 15,
+    maximum: 240,
+    example: 60,
+    description: 'Minutes between observations in the first 24 hours of a PCA',
+  })
   @Max(240, { message: 'At most 240 minutes' })
   @Min(15, { message: 'At least 15 minutes' })
   @IsInt({ message: 'A whole number of minutes' })
   @unlessAbsent
   observationIntervalFirst24hMinutes?: number;
 
-  @ApiPropertyOptional({ type: 'integer', minimum: 15, maximum: 480, example: 120, description: 'Minutes between observations after the first 24 hours' })
+  @ApiPropertyOptional({
+    type: 'integer',
+    minimum: 15,
+    maximum: 480,
+    example: 120,
+    description: 'Minutes between observations after the first 24 hours',
+  })
   @Max(480, { message: 'At most 480 minutes' })
   @Min(15, { message: 'At least 15 minutes' })
   @IsInt({ message: 'A whole number of minutes' })
   @unlessAbsent
   observationIntervalMinutes?: number;
 
-  @ApiPropertyOptional({ type: 'integer', minimum: 4, maximum: 20, example: 8, description: 'A respiratory rate below this raises an urgent flag' })
+  @ApiPropertyOptional({
+    type: 'integer',
+    minimum: 4,
+    maximum: 20,
+    example: 8,
+    description: 'A respiratory rate below this raises an urgent flag',
+  })
   @Max(20, { message: 'At most 20 per minute' })
   @Min(4, { message: 'At least 4 per minute' })
   @IsInt({ message: 'A whole number per minute' })
@@ -37,40 +55,72 @@ export class UpdateWardPolicyDto {
   @unlessAbsent
   spo2Threshold?: number;
 
-  @ApiPropertyOptional({ type: 'number', minimum: 0.5, maximum: 24, example: 2, description: 'A syringe projected to run out within this many hours raises a review flag' })
+  @ApiPropertyOptional({
+    type: 'number',
+    minimum: 0.5,
+    maximum: 24,
+    example: 2,
+    description: 'A syringe projected to run out within this many hours raises a review flag',
+  })
   @Max(24, { message: 'At most 24 hours' })
   @Min(0.5, { message: 'At least 0.5 hours' })
   @IsNumber(finite, { message: 'A number of hours' })
   @unlessAbsent
   syringeLowThresholdHours?: number;
 
-  @ApiPropertyOptional({ type: 'number', minimum: 0, maximum: 10, example: 0.5, description: 'A reconciliation difference above this many mL is reported' })
+  @ApiPropertyOptional({
+    type: 'number',
+    minimum: 0,
+    maximum: 10,
+    example: 0.5,
+    description: 'A reconciliation difference above this many mL is reported',
+  })
   @Max(10, { message: 'At most 10 mL' })
   @Min(0, { message: 'Cannot be negative' })
   @IsNumber(finite, { message: 'A number of mL' })
   @unlessAbsent
   reconciliationToleranceMl?: number;
 
-  @ApiPropertyOptional({ type: 'integer', minimum: 0, maximum: 10, example: 7, description: 'A pain score at or above this, with attempts per delivered dose at or above painNotControlledRatio, raises a review flag' })
+  @ApiPropertyOptional({
+    type: 'integer',
+    minimum: 0,
+    maximum: 10,
+    example: 7,
+    description: 'A pain score at or above this, with attempts per delivered dose at or above painNotControlledRatio, raises a review flag',
+  })
   @Max(10, { message: 'Pain score is 0 to 10' })
   @Min(0, { message: 'Pain score is 0 to 10' })
   @IsInt({ message: 'A whole pain score' })
   @unlessAbsent
   painNotControlledScore?: number;
 
-  @ApiPropertyOptional({ type: 'number', minimum: 1, maximum: 20, example: 2, description: 'Attempts per delivered dose at or above this, with a pain score at or above painNotControlledScore, raises a review flag' })
+  @ApiPropertyOptional({
+    type: 'number',
+    minimum: 1,
+    maximum: 20,
+    example: 2,
+    description: 'Attempts per delivered dose at or above this, with a pain score at or above painNotControlledScore, raises a review flag',
+  })
   @Max(20, { message: 'At most 20' })
   @Min(1, { message: 'At least 1' })
   @IsNumber(finite, { message: 'A number of attempts per delivered dose' })
   @unlessAbsent
   painNotControlledRatio?: number;
 
-  @ApiPropertyOptional({ format: 'email', example: 'pharmacy@hospital.example', description: 'Where Lockstep e-mails the ward’s pharmacy; empty for none' })
+  @ApiPropertyOptional({
+    format: 'email',
+    example: 'pharmacy@hospital.example',
+    description: 'Where Lockstep e-mails the ward’s pharmacy; empty for none',
+  })
   @IsEmail({}, { message: 'Enter an e-mail address (or leave empty)' })
   @emailOrEmpty
   pharmacyEmail?: string;
 
-  @ApiPropertyOptional({ format: 'email', example: 'harbour.nic@hospital.example', description: 'Where Lockstep e-mails the nurse in charge (urgent flags among others); empty for none' })
+  @ApiPropertyOptional({
+    format: 'email',
+    example: 'harbour.nic@hospital.example',
+    description: 'Where Lockstep e-mails the nurse in charge (urgent flags among others); empty for none',
+  })
   @IsEmail({}, { message: 'Enter an e-mail address (or leave empty)' })
   @emailOrEmpty
   nurseInChargeEmail?: string;

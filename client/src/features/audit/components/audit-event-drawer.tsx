@@ -14,17 +14,19 @@ export interface AuditEventDrawerProps {
 }
 
 function Hash({ value }: { value: string }) {
-  return (
-    <Code title={value}>
-      {shortHash(value)}
-    </Code>
-  );
+  return <Code title={value}>{shortHash(value)}</Code>;
 }
 
 /** One event in full: who, when, what it recorded, and its place in the hash chain. */
 export function AuditEventDrawer({ event, role, wardNames, onClose }: AuditEventDrawerProps) {
   return (
-    <Drawer opened={event !== null} onClose={onClose} position="right" size="lg" title={event ? `Event #${event.id}: ${auditActionLabel(event.action)}` : ''}>
+    <Drawer
+      opened={event !== null}
+      onClose={onClose}
+      position="right"
+      size="lg"
+      title={event ? `Event #${event.id}: ${auditActionLabel(event.action)}` : ''}
+    >
       {event ? <EventDetails event={event} role={role} wardNames={wardNames} /> : null}
     </Drawer>
   );
@@ -46,7 +48,12 @@ function EventDetails({ event, role, wardNames }: { event: AuditEvent; role: Rol
           <DataList.ItemLabel>Who</DataList.ItemLabel>
           <DataList.ItemValue>
             {actorText(event)}
-            {event.userId !== null ? <Text span c="dimmed"> (user ID {event.userId})</Text> : null}
+            {event.userId !== null ? (
+              <Text span c="dimmed">
+                {' '}
+                (user ID {event.userId})
+              </Text>
+            ) : null}
           </DataList.ItemValue>
         </DataList.Item>
         <DataList.Item>

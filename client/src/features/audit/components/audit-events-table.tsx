@@ -35,7 +35,14 @@ export function AuditEventsTable({ events, role, wardNames, isLoading, caption, 
 
   const columns = useMemo(
     () => [
-      column.accessor('id', { header: '#', cell: ({ getValue }) => <Text span size="sm" c="dimmed">{getValue()}</Text> }),
+      column.accessor('id', {
+        header: '#',
+        cell: ({ getValue }) => (
+          <Text span size="sm" c="dimmed">
+            {getValue()}
+          </Text>
+        ),
+      }),
       column.accessor('at', {
         header: 'When',
         cell: ({ getValue }) => <time dateTime={getValue()}>{formatDateTime(getValue())}</time>,
@@ -88,7 +95,14 @@ export function AuditEventsTable({ events, role, wardNames, isLoading, caption, 
       isLoading={isLoading}
       onRowOpen={onOpen}
       isRowCurrent={(event) => event.id === openId}
-      empty={<EmptyState size="sm" icon={<IconHistoryOff aria-hidden />} title="No events found" description="Nothing recorded matches these filters." />}
+      empty={
+        <EmptyState
+          size="sm"
+          icon={<IconHistoryOff aria-hidden />}
+          title="No events found"
+          description="Nothing recorded matches these filters."
+        />
+      }
     />
   );
 }

@@ -44,7 +44,11 @@ export function AuditFiltersForm({ initial, entityTypes, users, usersLoading, on
   };
 
   return (
-    <form onSubmit={form.onSubmit((values) => onSearch({ ...values, entityId: values.entityId.trim() }))} noValidate aria-label="Audit filters">
+    <form
+      onSubmit={form.onSubmit((values) => onSearch({ ...values, entityId: values.entityId.trim() }))}
+      noValidate
+      aria-label="Audit filters"
+    >
       <SimpleGrid cols={{ base: 1, sm: 2, lg: 3 }} spacing="sm" verticalSpacing="sm">
         <Select
           label="Record type"
@@ -54,7 +58,14 @@ export function AuditFiltersForm({ initial, entityTypes, users, usersLoading, on
           onChange={changeEntityType}
           clearable
         />
-        <TextInput label="Record number" description={allTypes ? 'An order number, or the ID of a library version, user or ward' : 'An order number, or the ID of a library version'} maxLength={40} {...form.getInputProps('entityId')} />
+        <TextInput
+          label="Record number"
+          description={
+            allTypes ? 'An order number, or the ID of a library version, user or ward' : 'An order number, or the ID of a library version'
+          }
+          maxLength={40}
+          {...form.getInputProps('entityId')}
+        />
         {users ? (
           <Select
             label="Person"
@@ -78,7 +89,12 @@ export function AuditFiltersForm({ initial, entityTypes, users, usersLoading, on
           nothingFoundMessage="No such action"
         />
         <TextInput type="datetime-local" label="From" description="Your local time" {...form.getInputProps('from')} />
-        <TextInput type="datetime-local" label="To" description="Your local time, to the end of that minute" {...form.getInputProps('to')} />
+        <TextInput
+          type="datetime-local"
+          label="To"
+          description="Your local time, to the end of that minute"
+          {...form.getInputProps('to')}
+        />
       </SimpleGrid>
       <Group gap="sm" mt="md">
         <Button type="submit" leftSection={<IconSearch size={16} aria-hidden />}>

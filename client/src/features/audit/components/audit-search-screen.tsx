@@ -7,7 +7,15 @@ import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/lib/auth/use-session';
 import { useAuditEvents } from '../api/get-audit-events';
 import { useVerifyAuditChain } from '../api/verify-audit-chain';
-import { AUDIT_PAGE_SIZE, entityTypesFor, filtersFromSearch, pageCount, searchFromFilters, toAuditQuery, type AuditFilters } from '../utils/audit-filters';
+import {
+  AUDIT_PAGE_SIZE,
+  entityTypesFor,
+  filtersFromSearch,
+  pageCount,
+  searchFromFilters,
+  toAuditQuery,
+  type AuditFilters,
+} from '../utils/audit-filters';
 import { AuditEventDrawer } from './audit-event-drawer';
 import { AuditEventsTable } from './audit-events-table';
 import { AuditFiltersForm, type UserOption } from './audit-filters-form';
@@ -63,7 +71,14 @@ export function AuditSearchScreen({ users, usersLoading, wardNames }: AuditSearc
       {admin ? <VerifyChainResult verify={verify} /> : null}
 
       <Paper withBorder radius="md" p="md">
-        <AuditFiltersForm key={search} initial={filters} entityTypes={entityTypesFor(user.role)} users={users} usersLoading={usersLoading} onSearch={(next) => go(next)} />
+        <AuditFiltersForm
+          key={search}
+          initial={filters}
+          entityTypes={entityTypesFor(user.role)}
+          users={users}
+          usersLoading={usersLoading}
+          onSearch={(next) => go(next)}
+        />
       </Paper>
 
       {events.isError ? (

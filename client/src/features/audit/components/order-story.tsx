@@ -47,7 +47,14 @@ export function OrderStory({ orderId, orderUpdatedAt }: OrderStoryProps) {
   // Orders written before the audit trail began (or seeded) have only their later steps in it.
   const startsAtWriting = audit.data[0]?.action === 'order.create' || audit.data[0]?.action === 'order.revise';
   if (events.length === 0) {
-    return <EmptyState size="sm" icon={<IconHistoryOff aria-hidden />} title="No audit events for this order yet" description="It was written before Lockstep kept an audit trail; the header shows who signed it. Every step from now on appears here." />;
+    return (
+      <EmptyState
+        size="sm"
+        icon={<IconHistoryOff aria-hidden />}
+        title="No audit events for this order yet"
+        description="It was written before Lockstep kept an audit trail; the header shows who signed it. Every step from now on appears here."
+      />
+    );
   }
 
   return (

@@ -8,7 +8,12 @@ type VerifyChain = ReturnType<typeof useVerifyAuditChain>;
 
 export function VerifyChainButton({ verify }: { verify: VerifyChain }) {
   return (
-    <Button variant="default" leftSection={<IconShieldCheck size={16} aria-hidden />} loading={verify.isPending} onClick={() => verify.mutate()}>
+    <Button
+      variant="default"
+      leftSection={<IconShieldCheck size={16} aria-hidden />}
+      loading={verify.isPending}
+      onClick={() => verify.mutate()}
+    >
       Verify chain
     </Button>
   );
@@ -17,13 +22,25 @@ export function VerifyChainButton({ verify }: { verify: VerifyChain }) {
 function ChainResult({ result }: { result: AuditVerifyResult }) {
   if (result.ok) {
     return (
-      <Alert color="green" variant="light" icon={<IconShieldCheck aria-hidden />} role="status" title={`All ${result.checked} events verified`}>
+      <Alert
+        color="green"
+        variant="light"
+        icon={<IconShieldCheck aria-hidden />}
+        role="status"
+        title={`All ${result.checked} events verified`}
+      >
         <Text size="sm">Every event still carries the hash it was written with, and each links to the one before.</Text>
       </Alert>
     );
   }
   return (
-    <Alert color="red" variant="light" icon={<IconShieldX aria-hidden />} role="alert" title={result.firstBadId === null ? 'The chain is broken' : `The chain breaks at event #${result.firstBadId}`}>
+    <Alert
+      color="red"
+      variant="light"
+      icon={<IconShieldX aria-hidden />}
+      role="alert"
+      title={result.firstBadId === null ? 'The chain is broken' : `The chain breaks at event #${result.firstBadId}`}
+    >
       <Text size="sm">
         That event, or its link to the one before, no longer matches what was written, so events from there on cannot be relied on as
         recorded. Report it to whoever looks after Lockstep's server. {result.checked} events before it were verified.

@@ -1,5 +1,15 @@
 import { describe, expect, it } from 'vitest';
-import { actionOptions, EMPTY_FILTERS, entityTypesFor, filterErrors, filtersFromSearch, localDateTimeToIso, pageCount, searchFromFilters, toAuditQuery } from './audit-filters';
+import {
+  actionOptions,
+  EMPTY_FILTERS,
+  entityTypesFor,
+  filterErrors,
+  filtersFromSearch,
+  localDateTimeToIso,
+  pageCount,
+  searchFromFilters,
+  toAuditQuery,
+} from './audit-filters';
 
 describe('entity types and actions per role', () => {
   it('offers pharmacists orders and library versions only', () => {
@@ -10,7 +20,9 @@ describe('entity types and actions per role', () => {
   it('groups actions by what they are about, narrowed to the chosen type', () => {
     const pharmacy = actionOptions(entityTypesFor('pharmacist'), null);
     expect(pharmacy.map((group) => group.group)).toEqual(['Order', 'Library version']);
-    expect(pharmacy.flatMap((group) => group.items.map((item) => item.value)).every((value) => /^(order|library-version)\./.test(value))).toBe(true);
+    expect(
+      pharmacy.flatMap((group) => group.items.map((item) => item.value)).every((value) => /^(order|library-version)\./.test(value)),
+    ).toBe(true);
 
     const ward = actionOptions(entityTypesFor('admin'), 'ward');
     expect(ward.map((group) => group.group)).toEqual(['Ward']);
@@ -21,7 +33,9 @@ describe('entity types and actions per role', () => {
 
 describe('filters in the address', () => {
   it('reads what the role may ask for and drops the rest', () => {
-    const search = new URLSearchParams('entityType=ward&entityId=%202%20&userId=7&action=ward.policy-update&from=2026-03-03T09:00&to=nonsense&page=3');
+    const search = new URLSearchParams(
+      'entityType=ward&entityId=%202%20&userId=7&action=ward.policy-update&from=2026-03-03T09:00&to=nonsense&page=3',
+    );
     expect(filtersFromSearch(search, 'admin')).toEqual({
       filters: { entityType: 'ward', entityId: '2', userId: 7, action: 'ward.policy-update', from: '2026-03-03T09:00', to: '' },
       page: 3,
@@ -39,9 +53,19 @@ describe('filters in the address', () => {
 
   it('writes only what is set, and the page from 2 on', () => {
     expect(searchFromFilters(EMPTY_FILTERS)).toEqual({
-      entityType: undefined, entityId: undefined, userId: undefined, action: undefined, from: undefined, to: undefined, page: undefined,
+      entityType: undefined,
+      entityId: undefined,
+      userId: undefined,
+      action: undefined,
+      from: undefined,
+      to: undefined,
+      page: undefined,
     });
-    expect(searchFromFilters({ ...EMPTY_FILTERS, entityType: 'order', entityId: ' 14 ' }, 2)).toMatchObject({ entityType: 'order', entityId: '14', page: 2 });
+    expect(searchFromFilters({ ...EMPTY_FILTERS, entityType: 'order', entityId: ' 14 ' }, 2)).toMatchObject({
+      entityType: 'order',
+      entityId: '14',
+      page: 2,
+    });
   });
 });
 
@@ -49,7 +73,12 @@ describe('the query sent to the server', () => {
   it('pages by limit and offset and sends only the filters set', () => {
     expect(toAuditQuery(EMPTY_FILTERS, 1)).toEqual({ limit: 50, offset: 0 });
     expect(toAuditQuery({ ...EMPTY_FILTERS, entityType: 'order', entityId: '14', userId: 3, action: 'order.verify' }, 3, 20)).toEqual({
-      limit: 20, offset: 40, entityType: 'order', entityId: '14', userId: 3, action: 'order.verify',
+      limit: 20,
+      offset: 40,
+      entityType: 'order',
+      entityId: '14',
+      userId: 3,
+      action: 'order.verify',
     });
   });
 
@@ -62,7 +91,9 @@ describe('the query sent to the server', () => {
   });
 
   it('refuses an end before the start', () => {
-    expect(filterErrors({ ...EMPTY_FILTERS, from: '2026-03-03T10:00', to: '2026-03-03T09:00' })).toEqual({ to: 'The end is before the start' });
+    expect(filterErrors({ ...EMPTY_FILTERS, from: '2026-03-03T10:00', to: '2026-03-03T09:00' })).toEqual({
+      to: 'The end is before the start',
+    });
     expect(filterErrors({ ...EMPTY_FILTERS, from: '2026-03-03T09:05', to: '2026-03-03T09:05' })).toEqual({});
     expect(filterErrors({ ...EMPTY_FILTERS, to: '2026-03-03T09:00' })).toEqual({});
   });

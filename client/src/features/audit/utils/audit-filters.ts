@@ -1,4 +1,12 @@
-import { AUDIT_ACTIONS, AUDIT_ENTITY_TYPES, auditActionLabel, PHARMACY_AUDIT_ENTITY_TYPES, type AuditEntityType, type AuditQuery, type Role } from '@lockstep/shared';
+import {
+  AUDIT_ACTIONS,
+  AUDIT_ENTITY_TYPES,
+  auditActionLabel,
+  PHARMACY_AUDIT_ENTITY_TYPES,
+  type AuditEntityType,
+  type AuditQuery,
+  type Role,
+} from '@lockstep/shared';
 import { ENTITY_TYPE_LABELS } from './audit-entity';
 
 /** What the search form holds; the address holds the same, so a reload keeps it. */
@@ -38,7 +46,10 @@ export function actionOptions(types: readonly AuditEntityType[], entityType: Aud
   return shown
     .map((type) => ({
       group: ENTITY_TYPE_LABELS[type],
-      items: AUDIT_ACTIONS.filter((action) => actionEntityType(action) === type).map((action) => ({ value: action, label: auditActionLabel(action) })),
+      items: AUDIT_ACTIONS.filter((action) => actionEntityType(action) === type).map((action) => ({
+        value: action,
+        label: auditActionLabel(action),
+      })),
     }))
     .filter((group) => group.items.length > 0);
 }

@@ -79,7 +79,14 @@ describe('summaryFacts', () => {
   });
 
   it('gives each record of a list its own line', () => {
-    expect(summaryFacts({ differences: [{ field: 'demandDose', expected: 1, entered: 10 }, { field: 'lockoutMinutes', expected: 10, entered: 5 }] })).toEqual([
+    expect(
+      summaryFacts({
+        differences: [
+          { field: 'demandDose', expected: 1, entered: 10 },
+          { field: 'lockoutMinutes', expected: 10, entered: 5 },
+        ],
+      }),
+    ).toEqual([
       { label: 'Differences (1)', value: 'Field: demandDose; Expected: 1; Entered: 10' },
       { label: 'Differences (2)', value: 'Field: lockoutMinutes; Expected: 10; Entered: 5' },
     ]);

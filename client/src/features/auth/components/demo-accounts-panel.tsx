@@ -17,8 +17,7 @@ export function DemoAccountsPanel({ demo, onChoose }: DemoAccountsPanelProps) {
         </Title>
         {demo.password ? (
           <Text size="sm">
-            Every demo account uses the password <Code>{demo.password}</Code>. Choose one to fill in the form, then
-            press Sign in.
+            Every demo account uses the password <Code>{demo.password}</Code>. Choose one to fill in the form, then press Sign in.
           </Text>
         ) : null}
         <Table aria-label="Demo accounts" verticalSpacing={4} fz="sm">
@@ -28,7 +27,9 @@ export function DemoAccountsPanel({ demo, onChoose }: DemoAccountsPanelProps) {
               <Table.Th>Role</Table.Th>
               <Table.Th>Username</Table.Th>
               <Table.Th>
-                <Text span size="sm" fw={600}>Fill in</Text>
+                <Text span size="sm" fw={600}>
+                  Fill in
+                </Text>
               </Table.Th>
             </Table.Tr>
           </Table.Thead>

@@ -21,8 +21,8 @@ export function IdleWarningModal({ opened, msLeft, idleFor, onStay, onSignOut }:
     <Modal opened={opened} onClose={onStay} title="Are you still there?" centered zIndex={400}>
       <Stack gap="md">
         <Text size="sm">
-          Nobody has used Lockstep in this window for {idleFor}. On a shared ward computer it signs out by itself to keep patients'
-          records private.
+          Nobody has used Lockstep in this window for {idleFor}. On a shared ward computer it signs out by itself to keep patients' records
+          private.
         </Text>
         <Text size="sm">
           Signing out in{' '}

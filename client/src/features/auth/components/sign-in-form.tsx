@@ -66,7 +66,14 @@ export function SignInForm({ form, onSignedIn, notice }: SignInFormProps) {
             {failure === WRONG_CREDENTIALS_MESSAGE ? <Text size="sm">Check both and try again. Passwords are case-sensitive.</Text> : null}
           </Alert>
         ) : null}
-        <TextInput label="Username" autoComplete="username" autoCapitalize="none" spellCheck={false} size="md" {...form.getInputProps('username')} />
+        <TextInput
+          label="Username"
+          autoComplete="username"
+          autoCapitalize="none"
+          spellCheck={false}
+          size="md"
+          {...form.getInputProps('username')}
+        />
         <PasswordInput label="Password" autoComplete="current-password" size="md" {...form.getInputProps('password')} />
         <Button type="submit" size="md" loading={login.isPending} fullWidth>
           Sign in

@@ -101,7 +101,17 @@ export const secondCheckResponseSchema: z.ZodType<SecondCheckResponse> = z.objec
   status: z.enum(['matched', 'mismatch']),
   differences: z.array(
     z.object({
-      field: z.enum(['drugId', 'concentrationPerMl', 'syringeVolumeMl', 'loadingDose', 'demandDose', 'lockoutMinutes', 'basalRatePerHour', 'oneHourLimit', 'fourHourLimit']),
+      field: z.enum([
+        'drugId',
+        'concentrationPerMl',
+        'syringeVolumeMl',
+        'loadingDose',
+        'demandDose',
+        'lockoutMinutes',
+        'basalRatePerHour',
+        'oneHourLimit',
+        'fourHourLimit',
+      ]),
       first: amount,
       second: amount,
       ordered: amount,

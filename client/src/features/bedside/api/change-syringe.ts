@@ -15,7 +15,12 @@ export type SyringeChangeResponse = z.infer<typeof syringeChangeResponseSchema>;
 
 /** Finishes the running syringe with witnessed waste; the new one starts only after a bedside check. */
 export function changeSyringe(orderId: number, request: SyringeChangeRequest): Promise<SyringeChangeResponse> {
-  return apiRequest(`/orders/${orderId}/syringe-changes`, { method: 'POST', body: request, schema: syringeChangeResponseSchema, signed: true });
+  return apiRequest(`/orders/${orderId}/syringe-changes`, {
+    method: 'POST',
+    body: request,
+    schema: syringeChangeResponseSchema,
+    signed: true,
+  });
 }
 
 export function useChangeSyringe(orderId: number) {

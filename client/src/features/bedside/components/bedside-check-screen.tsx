@@ -43,7 +43,11 @@ function notCheckable(order: BedsideOrder) {
     );
   }
   if (syringes === 'none') {
-    return <OrderNotice title="No syringe released yet">Pharmacy has not released a syringe for this order. Check again when it arrives.</OrderNotice>;
+    return (
+      <OrderNotice title="No syringe released yet">
+        Pharmacy has not released a syringe for this order. Check again when it arrives.
+      </OrderNotice>
+    );
   }
   return null;
 }
@@ -75,7 +79,16 @@ function BedsideCheck({ order, drugs }: { order: BedsideOrder; drugs: readonly D
   let step;
   switch (state.step) {
     case 'identify':
-      step = <IdentifyStep key={key} patient={patient.data} initialValues={state.identity} bounced={state.bounced} stepCount={stepCount} onNext={check.identified} />;
+      step = (
+        <IdentifyStep
+          key={key}
+          patient={patient.data}
+          initialValues={state.identity}
+          bounced={state.bounced}
+          stepCount={stepCount}
+          onNext={check.identified}
+        />
+      );
       break;
     case 'syringe':
       step = (
@@ -142,7 +155,11 @@ function BedsideCheck({ order, drugs }: { order: BedsideOrder; drugs: readonly D
     <>
       <BedsideSteps steps={steps} active={active} label="Bedside check steps" />
       {state.step === 'identify' && patient.isError ? (
-        <QueryErrorAlert title="The patient’s details could not be loaded to compare with" error={patient.error} onRetry={() => void patient.refetch()} />
+        <QueryErrorAlert
+          title="The patient’s details could not be loaded to compare with"
+          error={patient.error}
+          onRetry={() => void patient.refetch()}
+        />
       ) : null}
       {step}
     </>

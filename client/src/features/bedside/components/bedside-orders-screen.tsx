@@ -43,8 +43,7 @@ export function BedsideOrdersScreen({ wards, wardsLoading }: BedsideOrdersScreen
   }
 
   const wardOptions = [{ value: ALL_WARDS, label: 'All wards' }, ...wards.map((ward) => ({ value: String(ward.id), label: ward.name }))];
-  const chooseWard = (value: string | null) =>
-    setSearchParams(value && value !== ALL_WARDS ? { ward: value } : {}, { replace: true });
+  const chooseWard = (value: string | null) => setSearchParams(value && value !== ALL_WARDS ? { ward: value } : {}, { replace: true });
 
   return (
     <Stack gap="md">

@@ -9,11 +9,19 @@ import { bedsideActions, bedsideHint, type BedsideAction, type SyringeState } fr
 import { NextObservationHint } from './next-observation-hint';
 import { OrderStatusBadge } from './order-status-badge';
 
-const ACTIONS: Record<BedsideAction, { label: string; icon: ComponentType<IconProps>; href: (orderId: number) => string; variant: string }> = {
+const ACTIONS: Record<
+  BedsideAction,
+  { label: string; icon: ComponentType<IconProps>; href: (orderId: number) => string; variant: string }
+> = {
   check: { label: 'Start bedside check', icon: IconClipboardCheck, href: (id) => paths.bedsideCheck.getHref(id), variant: 'filled' },
   observe: { label: 'Record observation', icon: IconClipboardHeart, href: (id) => paths.pcaObserve.getHref(id), variant: 'default' },
   bolus: { label: 'Clinician bolus', icon: IconDroplet, href: (id) => paths.bedsideBolus.getHref(id), variant: 'default' },
-  'syringe-change': { label: 'Change syringe', icon: IconReplace, href: (id) => paths.bedsideSyringeChange.getHref(id), variant: 'default' },
+  'syringe-change': {
+    label: 'Change syringe',
+    icon: IconReplace,
+    href: (id) => paths.bedsideSyringeChange.getHref(id),
+    variant: 'default',
+  },
   discontinue: { label: 'Discontinue', icon: IconPlayerStop, href: (id) => paths.bedsideDiscontinue.getHref(id), variant: 'default' },
 };
 
@@ -107,7 +115,13 @@ export function BedsideOrdersTable({ orders, syringes, nextObservations, now, is
                     <Table.Td>
                       <Stack gap={2}>
                         {order.status === 'active' ? (
-                          <Anchor component={Link} to={paths.pca.getHref(order.id)} fw={600} size="sm" aria-label={`${drugAndConcentration(order)}: open the PCA page for ${order.patientName}`}>
+                          <Anchor
+                            component={Link}
+                            to={paths.pca.getHref(order.id)}
+                            fw={600}
+                            size="sm"
+                            aria-label={`${drugAndConcentration(order)}: open the PCA page for ${order.patientName}`}
+                          >
                             {drugAndConcentration(order)}
                           </Anchor>
                         ) : (

@@ -26,7 +26,10 @@ const STEPS = [
   { label: 'Witness', description: 'Second nurse co-signs' },
   { label: 'Given', description: 'Recorded' },
 ];
-const STEP_FIELDS = [['amount', 'reason', 'overrideReason'], ['witness.username', 'witness.password']];
+const STEP_FIELDS = [
+  ['amount', 'reason', 'overrideReason'],
+  ['witness.username', 'witness.password'],
+];
 
 export function BolusScreen({ orderId }: { orderId: number }) {
   return (
@@ -44,7 +47,8 @@ function Bolus({ order }: { order: BedsideOrder }) {
   const [alert, setAlert] = useState<string | null>(null);
   const unit = order.doseUnit;
   const maximum = order.clinicianBolusDose;
-  const reasonRule = (value: string) => (value.trim().length >= MIN_REASON_LENGTH ? null : `Give a reason of at least ${MIN_REASON_LENGTH} characters`);
+  const reasonRule = (value: string) =>
+    value.trim().length >= MIN_REASON_LENGTH ? null : `Give a reason of at least ${MIN_REASON_LENGTH} characters`;
   const form = useForm<BolusValues>({
     initialValues: { amount: '', reason: '', overrideReason: '', witness: { username: '', password: '' } },
     validate: {
@@ -55,7 +59,10 @@ function Bolus({ order }: { order: BedsideOrder }) {
       },
       reason: reasonRule,
       overrideReason: (value) => (needsOverride ? reasonRule(value) : null),
-      witness: { username: (value) => (value.trim() ? null : 'The witness enters their username'), password: (value) => (value ? null : 'The witness enters their password') },
+      witness: {
+        username: (value) => (value.trim() ? null : 'The witness enters their username'),
+        password: (value) => (value ? null : 'The witness enters their password'),
+      },
     },
   });
 
@@ -68,9 +75,12 @@ function Bolus({ order }: { order: BedsideOrder }) {
     );
   }
   if (order.status !== 'active' || syringeState(order.releases) !== 'running') {
-    return <OrderNotice title="No bolus now">A clinician bolus can be given only while a syringe is running for an active order.</OrderNotice>;
+    return (
+      <OrderNotice title="No bolus now">A clinician bolus can be given only while a syringe is running for an active order.</OrderNotice>
+    );
   }
-  if (maximum === null) return <OrderNotice title="No clinician bolus ordered">This order has no clinician bolus: ask the prescriber.</OrderNotice>;
+  if (maximum === null)
+    return <OrderNotice title="No clinician bolus ordered">This order has no clinician bolus: ask the prescriber.</OrderNotice>;
 
   const send = (values: BolusValues) =>
     bolus.mutate(
@@ -124,9 +134,24 @@ function Bolus({ order }: { order: BedsideOrder }) {
                 classNames={{ input: 'tabular-nums' }}
                 {...form.getInputProps('amount')}
               />
-              <Textarea label="Reason" description="For example: pain score 8 on movement despite demand doses" size="lg" autosize minRows={2} withAsterisk {...form.getInputProps('reason')} />
+              <Textarea
+                label="Reason"
+                description="For example: pain score 8 on movement despite demand doses"
+                size="lg"
+                autosize
+                minRows={2}
+                withAsterisk
+                {...form.getInputProps('reason')}
+              />
               {needsOverride ? (
-                <Textarea label="Reason for going outside the ward’s soft limit" size="lg" autosize minRows={2} withAsterisk {...form.getInputProps('overrideReason')} />
+                <Textarea
+                  label="Reason for going outside the ward’s soft limit"
+                  size="lg"
+                  autosize
+                  minRows={2}
+                  withAsterisk
+                  {...form.getInputProps('overrideReason')}
+                />
               ) : null}
               <StepAlert title="The bolus was not given">{alert}</StepAlert>
               <StepActions next="Next: witness" />
@@ -134,12 +159,27 @@ function Bolus({ order }: { order: BedsideOrder }) {
           </form>
         </StepPanel>
       ) : (
-        <StepPanel key="witness" number={2} of={3} title="Witness co-signs" intro={`A second nurse checks ${formatDose(readNumber(form.values.amount) ?? NaN, unit)} of ${tallMan(order.drugName)} for ${order.patientName} and signs here.`}>
+        <StepPanel
+          key="witness"
+          number={2}
+          of={3}
+          title="Witness co-signs"
+          intro={`A second nurse checks ${formatDose(readNumber(form.values.amount) ?? NaN, unit)} of ${tallMan(order.drugName)} for ${order.patientName} and signs here.`}
+        >
           <form onSubmit={submit} noValidate>
             <Stack gap="lg">
-              <ColleagueFields who="Witness" username={form.getInputProps('witness.username')} password={form.getInputProps('witness.password')} />
+              <ColleagueFields
+                who="Witness"
+                username={form.getInputProps('witness.username')}
+                password={form.getInputProps('witness.password')}
+              />
               <StepAlert title="The bolus was not given">{alert}</StepAlert>
-              <StepActions next="Sign and record bolus" nextIcon={<IconSignature size={20} aria-hidden />} loading={bolus.isPending} onBack={() => setStep(0)} />
+              <StepActions
+                next="Sign and record bolus"
+                nextIcon={<IconSignature size={20} aria-hidden />}
+                loading={bolus.isPending}
+                onBack={() => setStep(0)}
+              />
             </Stack>
           </form>
         </StepPanel>

@@ -15,7 +15,15 @@ export interface ColleagueFieldsProps {
 export function ColleagueFields({ who, username, password }: ColleagueFieldsProps) {
   return (
     <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="lg">
-      <TextInput label={`${who} username`} size="lg" autoComplete="off" autoCapitalize="none" spellCheck={false} withAsterisk {...username} />
+      <TextInput
+        label={`${who} username`}
+        size="lg"
+        autoComplete="off"
+        autoCapitalize="none"
+        spellCheck={false}
+        withAsterisk
+        {...username}
+      />
       <PasswordInput label={`${who} password`} size="lg" autoComplete="off" withAsterisk {...password} />
     </SimpleGrid>
   );

@@ -29,7 +29,10 @@ const STEPS = [
   { label: 'Confirm', description: 'Witness co-signs' },
   { label: 'Discontinued', description: 'Reconciled' },
 ];
-const STEP_FIELDS = [['reason', 'volumeInfusedMl', 'wastedMl'], ['witness.username', 'witness.password']];
+const STEP_FIELDS = [
+  ['reason', 'volumeInfusedMl', 'wastedMl'],
+  ['witness.username', 'witness.password'],
+];
 
 export function DiscontinueScreen({ orderId }: { orderId: number }) {
   return (
@@ -48,10 +51,14 @@ function Discontinue({ order }: { order: BedsideOrder }) {
   const form = useForm<DiscontinueValues>({
     initialValues: { reason: '', volumeInfusedMl: '', wastedMl: '', witness: { username: '', password: '' } },
     validate: {
-      reason: (value) => (value.trim().length >= MIN_REASON_LENGTH ? null : `Give the prescriber’s decision in at least ${MIN_REASON_LENGTH} characters`),
+      reason: (value) =>
+        value.trim().length >= MIN_REASON_LENGTH ? null : `Give the prescriber’s decision in at least ${MIN_REASON_LENGTH} characters`,
       volumeInfusedMl: volumeRule('Enter the final volume infused from the pump'),
       wastedMl: volumeRule('Enter the volume wasted (0 if none)'),
-      witness: { username: (value) => (value.trim() ? null : 'The witness enters their username'), password: (value) => (value ? null : 'The witness enters their password') },
+      witness: {
+        username: (value) => (value.trim() ? null : 'The witness enters their username'),
+        password: (value) => (value ? null : 'The witness enters their password'),
+      },
     },
   });
 
@@ -64,7 +71,11 @@ function Discontinue({ order }: { order: BedsideOrder }) {
     );
   }
   if (order.status !== 'active' || !running) {
-    return <OrderNotice title="Nothing to discontinue here">Only an active PCA with a running syringe is discontinued at the bedside.</OrderNotice>;
+    return (
+      <OrderNotice title="Nothing to discontinue here">
+        Only an active PCA with a running syringe is discontinued at the bedside.
+      </OrderNotice>
+    );
   }
 
   const send = (values: DiscontinueValues) =>
@@ -118,7 +129,11 @@ function Discontinue({ order }: { order: BedsideOrder }) {
                 withAsterisk
                 {...form.getInputProps('reason')}
               />
-              <VolumeFields infusedLabel="Final volume infused" infused={form.getInputProps('volumeInfusedMl')} wasted={form.getInputProps('wastedMl')} />
+              <VolumeFields
+                infusedLabel="Final volume infused"
+                infused={form.getInputProps('volumeInfusedMl')}
+                wasted={form.getInputProps('wastedMl')}
+              />
               <StepAlert title="The PCA was not discontinued">{alert}</StepAlert>
               <StepActions next="Next: confirm" />
             </Stack>
@@ -129,11 +144,15 @@ function Discontinue({ order }: { order: BedsideOrder }) {
           <form onSubmit={submit} noValidate>
             <Stack gap="lg">
               <Alert color="orange" variant="light" icon={<IconAlertTriangle aria-hidden />} title="This ends the PCA">
-                {tallMan(order.drugName)} PCA for {order.patientName} stops for good: the syringe is finished and the order is discontinued. A new
-                PCA needs a new order.
+                {tallMan(order.drugName)} PCA for {order.patientName} stops for good: the syringe is finished and the order is discontinued.
+                A new PCA needs a new order.
               </Alert>
               <DiscrepancyPreview dispensedMl={running.volumeMl} infused={form.values.volumeInfusedMl} wasted={form.values.wastedMl} />
-              <ColleagueFields who="Witness" username={form.getInputProps('witness.username')} password={form.getInputProps('witness.password')} />
+              <ColleagueFields
+                who="Witness"
+                username={form.getInputProps('witness.username')}
+                password={form.getInputProps('witness.password')}
+              />
               <StepAlert title="The PCA was not discontinued">{alert}</StepAlert>
               <StepActions
                 next="Sign and discontinue"

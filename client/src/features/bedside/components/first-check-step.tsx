@@ -29,7 +29,18 @@ export interface FirstCheckStepProps {
 const FORM_FIELDS = Object.keys(emptyPumpSettingsForm());
 
 /** Step 3: the signed-in nurse enters what the pump is programmed with, from the pump itself. */
-export function FirstCheckStep({ order, drugs, nurseName, identity, releaseCode, draft, stepCount, onSent, onBounced, onBack }: FirstCheckStepProps) {
+export function FirstCheckStep({
+  order,
+  drugs,
+  nurseName,
+  identity,
+  releaseCode,
+  draft,
+  stepCount,
+  onSent,
+  onBounced,
+  onBack,
+}: FirstCheckStepProps) {
   const firstCheck = useStartFirstCheck(order.id);
   const [alert, setAlert] = useState<string | null>(null);
   const form = useForm<PumpSettingsFormValues>({
@@ -47,7 +58,9 @@ export function FirstCheckStep({ order, drugs, nurseName, identity, releaseCode,
         onSuccess: (answer) => onSent(answer.id),
         onError: (error) => {
           const step = stepOfFirstCheckError(error);
-          const placed = placeServerErrors(error, step === 'first' ? FORM_FIELDS : ['patientMrn', 'patientDateOfBirth', 'releaseCode'], { 'settings.': '' });
+          const placed = placeServerErrors(error, step === 'first' ? FORM_FIELDS : ['patientMrn', 'patientDateOfBirth', 'releaseCode'], {
+            'settings.': '',
+          });
           if (step === 'first') {
             form.setErrors(placed.fieldErrors);
             setAlert(placed.alert);
@@ -68,7 +81,12 @@ export function FirstCheckStep({ order, drugs, nurseName, identity, releaseCode,
     >
       <form onSubmit={submit} noValidate>
         <Stack gap="lg">
-          <PumpSettingsFields drugs={drugs} drugId={form.values.drugId} fallbackUnit={order.doseUnit} inputProps={(field) => form.getInputProps(field)} />
+          <PumpSettingsFields
+            drugs={drugs}
+            drugId={form.values.drugId}
+            fallbackUnit={order.doseUnit}
+            inputProps={(field) => form.getInputProps(field)}
+          />
           <StepAlert title="The first check was not saved">{alert}</StepAlert>
           <StepActions next="Save first check" loading={firstCheck.isPending} onBack={onBack} />
         </Stack>

@@ -14,7 +14,13 @@ export function FlagAlert({ flag }: { flag: Pick<FlagResponse, 'severity' | 'mes
   const look = SEVERITY_LOOK[flag.severity];
   const Icon = look.icon;
   return (
-    <Alert color={look.color} variant="light" icon={<Icon aria-hidden />} title={`Flag: ${FLAG_SEVERITY_LABELS[flag.severity]}`} role="alert">
+    <Alert
+      color={look.color}
+      variant="light"
+      icon={<Icon aria-hidden />}
+      title={`Flag: ${FLAG_SEVERITY_LABELS[flag.severity]}`}
+      role="alert"
+    >
       <Text size="sm" className="tabular-nums">
         {flag.message}
       </Text>

@@ -40,33 +40,38 @@ export function IdentifyStep({ patient, initialValues, bounced, stepCount, onNex
       title="Identify the patient"
       intro="Read the MRN and date of birth from the patient’s wristband and type them here. Both must match this order’s patient."
     >
-      <form onSubmit={form.onSubmit((values) => onNext({ patientMrn: values.patientMrn.trim(), patientDateOfBirth: values.patientDateOfBirth }))} noValidate>
+      <form
+        onSubmit={form.onSubmit((values) =>
+          onNext({ patientMrn: values.patientMrn.trim(), patientDateOfBirth: values.patientDateOfBirth }),
+        )}
+        noValidate
+      >
         <Stack gap="lg">
-        <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="lg">
-          <TextInput
-            label="MRN"
-            description="From the wristband"
-            size="lg"
-            autoComplete="off"
-            autoCapitalize="characters"
-            spellCheck={false}
-            withAsterisk
-            classNames={{ input: 'tabular-nums' }}
-            {...form.getInputProps('patientMrn')}
-          />
-          <TextInput
-            label="Date of birth"
-            description={dateReadBack(form.values.patientDateOfBirth)}
-            type="date"
-            size="lg"
-            max={today()}
-            withAsterisk
-            classNames={{ input: 'tabular-nums' }}
-            {...form.getInputProps('patientDateOfBirth')}
-          />
-        </SimpleGrid>
-        <StepAlert title="Stop: check the wristband">{bounced?.alert}</StepAlert>
-        <StepActions next="Next: syringe" disabled={!patient} />
+          <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="lg">
+            <TextInput
+              label="MRN"
+              description="From the wristband"
+              size="lg"
+              autoComplete="off"
+              autoCapitalize="characters"
+              spellCheck={false}
+              withAsterisk
+              classNames={{ input: 'tabular-nums' }}
+              {...form.getInputProps('patientMrn')}
+            />
+            <TextInput
+              label="Date of birth"
+              description={dateReadBack(form.values.patientDateOfBirth)}
+              type="date"
+              size="lg"
+              max={today()}
+              withAsterisk
+              classNames={{ input: 'tabular-nums' }}
+              {...form.getInputProps('patientDateOfBirth')}
+            />
+          </SimpleGrid>
+          <StepAlert title="Stop: check the wristband">{bounced?.alert}</StepAlert>
+          <StepActions next="Next: syringe" disabled={!patient} />
         </Stack>
       </form>
     </StepPanel>

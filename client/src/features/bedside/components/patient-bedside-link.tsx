@@ -18,9 +18,14 @@ export function PatientBedsideLink({ patientId }: { patientId: number }) {
     <Paper withBorder radius="md" p="md">
       <Group justify="space-between" wrap="wrap" gap="sm">
         <Text>
-          {count === 1 ? 'One PCA order' : `${count} PCA orders`} at the bedside: bedside check, clinician bolus, syringe change or discontinue.
+          {count === 1 ? 'One PCA order' : `${count} PCA orders`} at the bedside: bedside check, clinician bolus, syringe change or
+          discontinue.
         </Text>
-        <Button component={Link} to={paths.bedside.getHref({ wardId, patientId })} leftSection={<IconClipboardCheck size={16} aria-hidden />}>
+        <Button
+          component={Link}
+          to={paths.bedside.getHref({ wardId, patientId })}
+          leftSection={<IconClipboardCheck size={16} aria-hidden />}
+        >
           Bedside PCA tasks
         </Button>
       </Group>

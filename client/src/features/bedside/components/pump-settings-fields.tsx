@@ -1,7 +1,12 @@
 import { NumberInput, Select, SimpleGrid, Stack } from '@mantine/core';
 import type { GetInputPropsReturnType } from '@mantine/form';
 import { PUMP_SETTING_LABELS, tallMan, type DoseUnit, type Drug } from '@lockstep/shared';
-import { NUMERIC_SETTING_FIELDS, OPTIONAL_SETTING_FIELDS, type NumericSettingField, type PumpSettingsFormValues } from '../utils/pump-settings-form';
+import {
+  NUMERIC_SETTING_FIELDS,
+  OPTIONAL_SETTING_FIELDS,
+  type NumericSettingField,
+  type PumpSettingsFormValues,
+} from '../utils/pump-settings-form';
 import { pumpSettingUnit } from '../utils/setting-format';
 
 export interface PumpSettingsFieldsProps {

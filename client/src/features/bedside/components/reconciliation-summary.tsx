@@ -17,7 +17,14 @@ export function ReconciliationSummary({ reconciliation, flags }: ReconciliationS
   const flag = reconciliation.mustReport ? reconciliationFlag(flags, reconciliation.releaseCode) : undefined;
   return (
     <Stack gap="md">
-      <Table aria-label={`Reconciliation of syringe ${reconciliation.releaseCode}`} tabularNums fz="md" verticalSpacing="sm" withTableBorder maw={560}>
+      <Table
+        aria-label={`Reconciliation of syringe ${reconciliation.releaseCode}`}
+        tabularNums
+        fz="md"
+        verticalSpacing="sm"
+        withTableBorder
+        maw={560}
+      >
         <Table.Tbody>
           {rows.map((row) => (
             <Table.Tr key={row.label}>

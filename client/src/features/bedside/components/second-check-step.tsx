@@ -81,7 +81,12 @@ export function SecondCheckStep({ order, drugs, checkId, firstNurseName, stepCou
         <Stack gap="lg">
           <ColleagueFields who="Second nurse" username={form.getInputProps('username')} password={form.getInputProps('password')} />
           <Divider label="The pump as the second nurse reads it" labelPosition="left" />
-          <PumpSettingsFields drugs={drugs} drugId={form.values.drugId} fallbackUnit={order.doseUnit} inputProps={(field) => form.getInputProps(field)} />
+          <PumpSettingsFields
+            drugs={drugs}
+            drugId={form.values.drugId}
+            fallbackUnit={order.doseUnit}
+            inputProps={(field) => form.getInputProps(field)}
+          />
           <StepAlert title="The second check was not saved">{alert}</StepAlert>
           {closed ? (
             <Button size="lg" variant="default" onClick={onRestart}>

@@ -23,7 +23,13 @@ export function StepActions({ next, nextIcon, loading, disabled, onBack, backLab
       ) : (
         <span />
       )}
-      <Button type="submit" size="lg" rightSection={nextIcon ?? <IconArrowRight size={20} aria-hidden />} loading={loading} disabled={disabled}>
+      <Button
+        type="submit"
+        size="lg"
+        rightSection={nextIcon ?? <IconArrowRight size={20} aria-hidden />}
+        loading={loading}
+        disabled={disabled}
+      >
         {next}
       </Button>
     </Group>

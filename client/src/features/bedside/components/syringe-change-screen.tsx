@@ -30,7 +30,10 @@ const STEPS = [
   { label: 'New syringe', description: 'Code and witness' },
   { label: 'Reconciled', description: 'Then a bedside check' },
 ];
-const STEP_FIELDS = [['volumeInfusedMl', 'wastedMl'], ['newReleaseCode', 'witness.username', 'witness.password']];
+const STEP_FIELDS = [
+  ['volumeInfusedMl', 'wastedMl'],
+  ['newReleaseCode', 'witness.username', 'witness.password'],
+];
 
 export function SyringeChangeScreen({ orderId }: { orderId: number }) {
   return (
@@ -52,7 +55,10 @@ function SyringeChange({ order }: { order: BedsideOrder }) {
       volumeInfusedMl: volumeRule('Enter the volume infused from the pump'),
       wastedMl: volumeRule('Enter the volume wasted (0 if none)'),
       newReleaseCode: (value) => releaseCodeProblem(value, order.releases),
-      witness: { username: (value) => (value.trim() ? null : 'The witness enters their username'), password: (value) => (value ? null : 'The witness enters their password') },
+      witness: {
+        username: (value) => (value.trim() ? null : 'The witness enters their username'),
+        password: (value) => (value ? null : 'The witness enters their password'),
+      },
     },
   });
 
@@ -110,7 +116,11 @@ function SyringeChange({ order }: { order: BedsideOrder }) {
         >
           <form onSubmit={submit} noValidate>
             <Stack gap="lg">
-              <VolumeFields infusedLabel="Volume infused" infused={form.getInputProps('volumeInfusedMl')} wasted={form.getInputProps('wastedMl')} />
+              <VolumeFields
+                infusedLabel="Volume infused"
+                infused={form.getInputProps('volumeInfusedMl')}
+                wasted={form.getInputProps('wastedMl')}
+              />
               <StepAlert title="The syringe change was not recorded">{alert}</StepAlert>
               <StepActions next="Next: new syringe" />
             </Stack>
@@ -134,12 +144,21 @@ function SyringeChange({ order }: { order: BedsideOrder }) {
                 {...form.getInputProps('newReleaseCode')}
               />
               <DiscrepancyPreview dispensedMl={running.volumeMl} infused={form.values.volumeInfusedMl} wasted={form.values.wastedMl} />
-              <ColleagueFields who="Witness" username={form.getInputProps('witness.username')} password={form.getInputProps('witness.password')} />
+              <ColleagueFields
+                who="Witness"
+                username={form.getInputProps('witness.username')}
+                password={form.getInputProps('witness.password')}
+              />
               <Text size="sm" c="dimmed">
                 Signing finishes the old syringe. The new one starts only after a bedside check by two nurses.
               </Text>
               <StepAlert title="The syringe change was not recorded">{alert}</StepAlert>
-              <StepActions next="Sign and finish old syringe" nextIcon={<IconSignature size={20} aria-hidden />} loading={change.isPending} onBack={() => setStep(0)} />
+              <StepActions
+                next="Sign and finish old syringe"
+                nextIcon={<IconSignature size={20} aria-hidden />}
+                loading={change.isPending}
+                onBack={() => setStep(0)}
+              />
             </Stack>
           </form>
         </StepPanel>

@@ -18,7 +18,12 @@ export function SyringeChanged({ order, changed }: { order: BedsideOrder; change
           nurses enter every setting again.
         </Text>
         <Group>
-          <Button component={Link} to={paths.bedsideCheck.getHref(order.id)} size="lg" leftSection={<IconClipboardCheck size={20} aria-hidden />}>
+          <Button
+            component={Link}
+            to={paths.bedsideCheck.getHref(order.id)}
+            size="lg"
+            leftSection={<IconClipboardCheck size={20} aria-hidden />}
+          >
             Start bedside check for the new syringe
           </Button>
         </Group>

@@ -24,7 +24,12 @@ export function VolumeFields({ infusedLabel, infused, wasted }: VolumeFieldsProp
   return (
     <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="lg">
       <NumberInput label={`${infusedLabel} (mL)`} description="The pump’s reading for this syringe" {...numberProps} {...infused} />
-      <NumberInput label="Volume wasted (mL)" description="Left in the syringe, wasted in front of the witness" {...numberProps} {...wasted} />
+      <NumberInput
+        label="Volume wasted (mL)"
+        description="Left in the syringe, wasted in front of the witness"
+        {...numberProps}
+        {...wasted}
+      />
     </SimpleGrid>
   );
 }

@@ -54,16 +54,15 @@ export function useBedsideCheck() {
 
   const identified = useCallback((identity: IdentityValues) => setState((s) => ({ ...s, identity, bounced: null, step: 'syringe' })), []);
   const syringeScanned = useCallback((releaseCode: string) => setState((s) => ({ ...s, releaseCode, bounced: null, step: 'first' })), []);
-  const goBack = useCallback(
-    (step: CheckStep) => setState((s) => (s.checkId === null ? { ...s, bounced: null, step } : s)),
-    [],
-  );
+  const goBack = useCallback((step: CheckStep) => setState((s) => (s.checkId === null ? { ...s, bounced: null, step } : s)), []);
   const firstSent = useCallback(
-    (checkId: number, newSyringe: boolean) => setState((s) => ({ ...s, checkId, newSyringe, firstDraft: null, bounced: null, step: 'second' })),
+    (checkId: number, newSyringe: boolean) =>
+      setState((s) => ({ ...s, checkId, newSyringe, firstDraft: null, bounced: null, step: 'second' })),
     [],
   );
   const firstBounced = useCallback(
-    (step: CheckStep, draft: PumpSettingsFormValues, bounced: BouncedErrors) => setState((s) => ({ ...s, step, firstDraft: draft, bounced })),
+    (step: CheckStep, draft: PumpSettingsFormValues, bounced: BouncedErrors) =>
+      setState((s) => ({ ...s, step, firstDraft: draft, bounced })),
     [],
   );
   const compared = useCallback(

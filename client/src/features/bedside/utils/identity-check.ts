@@ -9,7 +9,10 @@ export const DOB_MISMATCH = 'This date of birth is not this order’s patient: c
  * The wristband against the order's patient, before anything else is entered. The server checks
  * again when the first check is sent; this only saves a nurse entering the pump for nothing.
  */
-export function identityErrors(values: IdentityValues, patient: Pick<Patient, 'mrn' | 'dateOfBirth'>): Partial<Record<keyof IdentityValues, string>> {
+export function identityErrors(
+  values: IdentityValues,
+  patient: Pick<Patient, 'mrn' | 'dateOfBirth'>,
+): Partial<Record<keyof IdentityValues, string>> {
   const errors: Partial<Record<keyof IdentityValues, string>> = {};
   const mrn = values.patientMrn.trim();
   if (!mrn) errors.patientMrn = 'Enter the MRN from the wristband';
@@ -23,7 +26,10 @@ export function identityErrors(values: IdentityValues, patient: Pick<Patient, 'm
  * A typed or scanned release code against this order's syringes: the normalised code, or why it
  * cannot be used. A code the order does not know may be another order's: the server names that.
  */
-export function releaseCodeProblem(typed: string, releases: readonly Pick<SyringeReleaseResponse, 'releaseCode' | 'status'>[]): string | null {
+export function releaseCodeProblem(
+  typed: string,
+  releases: readonly Pick<SyringeReleaseResponse, 'releaseCode' | 'status'>[],
+): string | null {
   const code = normaliseReleaseCode(typed);
   if (!code) return 'Enter the release code from the syringe label';
   const release = releases.find((candidate) => candidate.releaseCode === code);

@@ -31,15 +31,26 @@ describe('previewDiscrepancy', () => {
 });
 
 describe('reconciliationFlag', () => {
-  const flag = (id: number, message: string, acknowledgedAt: string | null = null, code = 'reconciliation.discrepancy') => ({ id, code, message, acknowledgedAt });
+  const flag = (id: number, message: string, acknowledgedAt: string | null = null, code = 'reconciliation.discrepancy') => ({
+    id,
+    code,
+    message,
+    acknowledgedAt,
+  });
 
   it('finds the open flag that names this syringe', () => {
-    const flags = [flag(3, 'Syringe QX4-9MT: 1 mL unaccounted for'), flag(2, 'Syringe HK3-7QT: 5 mL unaccounted for'), flag(1, 'Sedation', null, 'observation.sedation')];
+    const flags = [
+      flag(3, 'Syringe QX4-9MT: 1 mL unaccounted for'),
+      flag(2, 'Syringe HK3-7QT: 5 mL unaccounted for'),
+      flag(1, 'Sedation', null, 'observation.sedation'),
+    ];
     expect(reconciliationFlag(flags, 'HK3-7QT')?.id).toBe(2);
     expect(reconciliationFlag(flags, 'ZZZ-ZZZ')?.id).toBe(3);
   });
 
   it('ignores acknowledged flags and other kinds', () => {
-    expect(reconciliationFlag([flag(1, 'Syringe HK3-7QT', '2026-01-01T00:00:00Z'), flag(2, 'x', null, 'other')], 'HK3-7QT')).toBeUndefined();
+    expect(
+      reconciliationFlag([flag(1, 'Syringe HK3-7QT', '2026-01-01T00:00:00Z'), flag(2, 'x', null, 'other')], 'HK3-7QT'),
+    ).toBeUndefined();
   });
 });

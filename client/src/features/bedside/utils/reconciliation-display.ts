@@ -14,7 +14,9 @@ export function discrepancyText(discrepancyMl: number): string {
 }
 
 /** Dispensed, infused, wasted and the discrepancy, each in safe format. */
-export function reconciliationRows(reconciliation: Pick<ReconciliationResponse, 'dispensedMl' | 'infusedMl' | 'wastedMl' | 'discrepancyMl'>): ReconciliationRow[] {
+export function reconciliationRows(
+  reconciliation: Pick<ReconciliationResponse, 'dispensedMl' | 'infusedMl' | 'wastedMl' | 'discrepancyMl'>,
+): ReconciliationRow[] {
   return [
     { label: 'Dispensed', value: formatDose(reconciliation.dispensedMl, 'mL') },
     { label: 'Infused', value: formatDose(reconciliation.infusedMl, 'mL') },
@@ -27,7 +29,11 @@ export function reconciliationRows(reconciliation: Pick<ReconciliationResponse, 
  * The discrepancy the nurses are about to sign for, before they sign. Whether it must be reported
  * depends on the ward's tolerance, which the server applies; undefined until both volumes are in.
  */
-export function previewDiscrepancy(dispensedMl: number, infusedMl: number | null | undefined, wastedMl: number | null | undefined): number | undefined {
+export function previewDiscrepancy(
+  dispensedMl: number,
+  infusedMl: number | null | undefined,
+  wastedMl: number | null | undefined,
+): number | undefined {
   if (infusedMl === null || infusedMl === undefined || wastedMl === null || wastedMl === undefined) return undefined;
   return reconcile(dispensedMl, infusedMl, wastedMl, 0).discrepancyMl;
 }
@@ -38,7 +44,10 @@ export const RECONCILIATION_FLAG_CODE = 'reconciliation.discrepancy';
  * The review flag the server raised for this syringe's discrepancy: the open reconciliation flag
  * that names the syringe's release code, or else the newest open one.
  */
-export function reconciliationFlag<T extends Pick<FlagResponse, 'code' | 'message' | 'acknowledgedAt'>>(flags: readonly T[], releaseCode: string): T | undefined {
+export function reconciliationFlag<T extends Pick<FlagResponse, 'code' | 'message' | 'acknowledgedAt'>>(
+  flags: readonly T[],
+  releaseCode: string,
+): T | undefined {
   const open = flags.filter((flag) => flag.code === RECONCILIATION_FLAG_CODE && flag.acknowledgedAt === null);
   return open.find((flag) => flag.message.includes(releaseCode)) ?? open[0];
 }

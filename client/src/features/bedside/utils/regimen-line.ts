@@ -2,7 +2,15 @@ import { formatDose, tallMan, type OrderSummary } from '@lockstep/shared';
 
 type RegimenLine = Pick<
   OrderSummary,
-  'drugName' | 'concentrationPerMl' | 'doseUnit' | 'loadingDose' | 'demandDose' | 'lockoutMinutes' | 'basalRatePerHour' | 'oneHourLimit' | 'fourHourLimit'
+  | 'drugName'
+  | 'concentrationPerMl'
+  | 'doseUnit'
+  | 'loadingDose'
+  | 'demandDose'
+  | 'lockoutMinutes'
+  | 'basalRatePerHour'
+  | 'oneHourLimit'
+  | 'fourHourLimit'
 >;
 
 /** "HYDROmorphone 0.2 mg/mL": tall-man name and safe concentration. */

@@ -9,14 +9,21 @@ describe('placeServerErrors', () => {
       { field: 'username', message: 'You cannot be both people: a different colleague signs here' },
     ]);
     expect(placeServerErrors(error, ['username', 'password', 'lockoutMinutes'], { 'settings.': '' })).toEqual({
-      fieldErrors: { lockoutMinutes: 'Lockout cannot be negative', username: 'You cannot be both people: a different colleague signs here' },
+      fieldErrors: {
+        lockoutMinutes: 'Lockout cannot be negative',
+        username: 'You cannot be both people: a different colleague signs here',
+      },
       alert: null,
     });
   });
 
   it('puts a witness’s wrong password on the nested field', () => {
-    const error = new ApiRequestError(401, 'The second person’s username or password is incorrect', [{ field: 'witness.password', message: 'Username or password is incorrect' }]);
-    expect(placeServerErrors(error, ['amount', 'witness.username', 'witness.password']).fieldErrors).toEqual({ 'witness.password': 'Username or password is incorrect' });
+    const error = new ApiRequestError(401, 'The second person’s username or password is incorrect', [
+      { field: 'witness.password', message: 'Username or password is incorrect' },
+    ]);
+    expect(placeServerErrors(error, ['amount', 'witness.username', 'witness.password']).fieldErrors).toEqual({
+      'witness.password': 'Username or password is incorrect',
+    });
   });
 
   it('turns an error without fields into the alert', () => {

@@ -14,7 +14,11 @@ export interface PlacedErrors {
  * `witnessPassword`). A 401/403 about the colleague lands on the named field; anything without
  * a field becomes the alert.
  */
-export function placeServerErrors(error: unknown, formFields: readonly string[], renames: Readonly<Record<string, string>> = {}): PlacedErrors {
+export function placeServerErrors(
+  error: unknown,
+  formFields: readonly string[],
+  renames: Readonly<Record<string, string>> = {},
+): PlacedErrors {
   if (!isApiRequestError(error) || error.errors.length === 0) return { fieldErrors: {}, alert: errorMessage(error) };
   const renamed = error.errors.map((fieldError) => ({ ...fieldError, field: renameField(fieldError.field, renames) }));
   const { fieldErrors, otherErrors } = splitFieldErrors(renamed, formFields);

@@ -23,10 +23,42 @@ describe('differenceRows', () => {
       nurses,
     );
     expect(rows).toEqual([
-      { field: 'lockoutMinutes', label: 'Lockout', differs: 'first', whose: 'First check (Kai Mendes)', first: '6 min', second: '10 min', ordered: '10 min' },
-      { field: 'demandDose', label: 'Demand dose', differs: 'second', whose: 'Second check (Rosa Adeyemi)', first: '0.2 mg', second: '2 mg', ordered: '0.2 mg' },
-      { field: 'drugId', label: 'Drug', differs: 'both', whose: 'Both checks (Kai Mendes and Rosa Adeyemi)', first: 'morphine', second: 'morphine', ordered: 'HYDROmorphone' },
-      { field: 'oneHourLimit', label: '1-hour limit', differs: 'both', whose: 'Both checks (Kai Mendes and Rosa Adeyemi)', first: '2 mg', second: '2 mg', ordered: 'None' },
+      {
+        field: 'lockoutMinutes',
+        label: 'Lockout',
+        differs: 'first',
+        whose: 'First check (Kai Mendes)',
+        first: '6 min',
+        second: '10 min',
+        ordered: '10 min',
+      },
+      {
+        field: 'demandDose',
+        label: 'Demand dose',
+        differs: 'second',
+        whose: 'Second check (Rosa Adeyemi)',
+        first: '0.2 mg',
+        second: '2 mg',
+        ordered: '0.2 mg',
+      },
+      {
+        field: 'drugId',
+        label: 'Drug',
+        differs: 'both',
+        whose: 'Both checks (Kai Mendes and Rosa Adeyemi)',
+        first: 'morphine',
+        second: 'morphine',
+        ordered: 'HYDROmorphone',
+      },
+      {
+        field: 'oneHourLimit',
+        label: '1-hour limit',
+        differs: 'both',
+        whose: 'Both checks (Kai Mendes and Rosa Adeyemi)',
+        first: '2 mg',
+        second: '2 mg',
+        ordered: 'None',
+      },
     ]);
   });
 });
@@ -34,7 +66,7 @@ describe('differenceRows', () => {
 describe('formatPumpSetting', () => {
   it('uses the unit of each setting, with a leading zero and no trailing zero (ISMP)', () => {
     expect(formatPumpSetting('concentrationPerMl', 0.2, 'mg', drugs)).toBe('0.2 mg/mL');
-    expect(formatPumpSetting('basalRatePerHour', 0.10, 'mg', drugs)).toBe('0.1 mg/h');
+    expect(formatPumpSetting('basalRatePerHour', 0.1, 'mg', drugs)).toBe('0.1 mg/h');
     expect(formatPumpSetting('syringeVolumeMl', 50, 'mcg', drugs)).toBe('50 mL');
     expect(formatPumpSetting('demandDose', 20, 'mcg', drugs)).toBe('20 mcg');
     expect(formatPumpSetting('loadingDose', null, 'mg', drugs)).toBe('None');

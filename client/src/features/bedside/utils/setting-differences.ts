@@ -23,7 +23,12 @@ function whoseEntry(differs: SettingDifference['differs'], nurses: CheckNurses):
 }
 
 /** The settings to correct on the pump, in the pump's field order, each value in safe format. */
-export function differenceRows(differences: readonly SettingDifference[], doseUnit: DoseUnit, drugs: readonly Drug[], nurses: CheckNurses): DifferenceRow[] {
+export function differenceRows(
+  differences: readonly SettingDifference[],
+  doseUnit: DoseUnit,
+  drugs: readonly Drug[],
+  nurses: CheckNurses,
+): DifferenceRow[] {
   return differences.map((difference) => ({
     field: difference.field,
     label: PUMP_SETTING_LABELS[difference.field],

@@ -12,7 +12,10 @@ describe('validateStepFields', () => {
 });
 
 describe('stepWithErrors', () => {
-  const steps = [['volumeInfusedMl', 'wastedMl'], ['newReleaseCode', 'witness.username', 'witness.password']];
+  const steps = [
+    ['volumeInfusedMl', 'wastedMl'],
+    ['newReleaseCode', 'witness.username', 'witness.password'],
+  ];
 
   it('finds the step that shows the refused field', () => {
     expect(stepWithErrors(['witness.password'], steps)).toBe(1);

@@ -62,7 +62,13 @@ const rowSchema: z.ZodType<HandoverRow> = z.object({
   startedAt: z.string().nullable(),
   minutesSinceStart: z.number().nullable(),
   lastObservation: z
-    .object({ at: z.string(), painScore: z.number(), sedationLevel: z.enum(SEDATION_LEVELS), respiratoryRate: z.number(), spo2: z.number() })
+    .object({
+      at: z.string(),
+      painScore: z.number(),
+      sedationLevel: z.enum(SEDATION_LEVELS),
+      respiratoryRate: z.number(),
+      spo2: z.number(),
+    })
     .nullable(),
   nextObservation: observationDueSchema.nullable(),
   last4h: z.object({ attempts: z.number(), delivered: z.number(), dose: z.number() }),

@@ -45,7 +45,9 @@ function run(answers: Answer[]) {
 
 describe('reconnectDelayMs', () => {
   it('doubles from 1 s to at most 30 s, within ±20 %', () => {
-    expect([0, 1, 2, 3, 4, 5, 9].map((failures) => reconnectDelayMs(failures, () => 0.5))).toEqual([1000, 2000, 4000, 8000, 16000, 30000, 30000]);
+    expect([0, 1, 2, 3, 4, 5, 9].map((failures) => reconnectDelayMs(failures, () => 0.5))).toEqual([
+      1000, 2000, 4000, 8000, 16000, 30000, 30000,
+    ]);
     expect(reconnectDelayMs(0, () => 0)).toBe(800);
     expect(reconnectDelayMs(0, () => 1)).toBe(1200);
   });
@@ -58,7 +60,10 @@ describe('followWardStream', () => {
   it('sends the bearer token, passes events on and reports itself live', async () => {
     const stream = run([{ status: 200, chunks: ['event: ward-change\ndata: {"wardId":1}\n', '\n'], stayOpen: true }]);
     await vi.advanceTimersByTimeAsync(10);
-    expect(stream.calls[0]).toEqual({ url: '/api/wards/1/handover/stream', headers: { Accept: 'text/event-stream', Authorization: 'Bearer token-1' } });
+    expect(stream.calls[0]).toEqual({
+      url: '/api/wards/1/handover/stream',
+      headers: { Accept: 'text/event-stream', Authorization: 'Bearer token-1' },
+    });
     expect(stream.events).toEqual([{ event: 'ward-change', data: '{"wardId":1}' }]);
     expect(stream.statuses).toEqual(['connecting', 'live']);
     stream.controller.abort();

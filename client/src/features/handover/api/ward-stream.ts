@@ -43,7 +43,11 @@ function sleep(ms: number, signal: AbortSignal): Promise<void> {
 type Outcome = 'ended' | 'unauthorized' | 'refused';
 
 /** One connection: resolves when it ends; reports 'refused' for answers asking again cannot fix. */
-async function connectOnce(options: WardStreamOptions, connection: NonNullable<WardStreamOptions['connection']>, opened: () => void): Promise<Outcome> {
+async function connectOnce(
+  options: WardStreamOptions,
+  connection: NonNullable<WardStreamOptions['connection']>,
+  opened: () => void,
+): Promise<Outcome> {
   const attempt = new AbortController();
   const stop = () => attempt.abort();
   options.signal.addEventListener('abort', stop, { once: true });

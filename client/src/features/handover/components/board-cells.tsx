@@ -1,7 +1,14 @@
 import type { ReactNode } from 'react';
 import { Group, Stack, Text, VisuallyHidden } from '@mantine/core';
 import { IconAlertTriangle, IconClock, IconHourglassLow } from '@tabler/icons-react';
-import { FLAG_SEVERITY_LABELS, formatDose, isAcceptableSedation, ORDER_STATUS_LABELS, SEDATION_DESCRIPTIONS, type HandoverRow } from '@lockstep/shared';
+import {
+  FLAG_SEVERITY_LABELS,
+  formatDose,
+  isAcceptableSedation,
+  ORDER_STATUS_LABELS,
+  SEDATION_DESCRIPTIONS,
+  type HandoverRow,
+} from '@lockstep/shared';
 import { hasOpenFlags, rowSeverity } from '../utils/board-filters';
 import { drugLine, formatElapsed, formatNearTime, lastFourHours, patientFacts, regimenSummary } from '../utils/board-format';
 import { SeverityLabel } from './severity';
@@ -84,7 +91,11 @@ export function NextObservationCell({ next, now }: { next: HandoverRow['nextObse
     const late = formatElapsed(next.overdueMinutes);
     return (
       <Stack gap={0}>
-        {next.severity === 'urgent' ? <SeverityLabel severity="urgent" detail={`· ${late} overdue`} /> : <SeverityLabel severity="review" word="Overdue" detail={late} />}
+        {next.severity === 'urgent' ? (
+          <SeverityLabel severity="urgent" detail={`· ${late} overdue`} />
+        ) : (
+          <SeverityLabel severity="review" word="Overdue" detail={late} />
+        )}
         <Dimmed>was due {formatNearTime(next.dueAt, now)}</Dimmed>
       </Stack>
     );
@@ -146,4 +157,3 @@ export function FlagsCell({ flags }: { flags: HandoverRow['flags'] }) {
     </Stack>
   );
 }
-

@@ -60,8 +60,9 @@ export function HandoverPrintScreen({ wardId, printedBy }: HandoverPrintScreenPr
           Handover sheet: {data.wardName}
         </h1>
         <Text component="p" className={classes.meta} data-testid="sheet-meta">
-          {formatShift(data.shift)} · Printed {formatDateTime(printedAt)} by {printedBy} · Board as of {formatClockSeconds(data.generatedAt)} ·{' '}
-          {data.rows.length} {data.rows.length === 1 ? 'PCA' : 'PCAs'} · {signoffProgressText(signoffProgress(data.rows))}
+          {formatShift(data.shift)} · Printed {formatDateTime(printedAt)} by {printedBy} · Board as of{' '}
+          {formatClockSeconds(data.generatedAt)} · {data.rows.length} {data.rows.length === 1 ? 'PCA' : 'PCAs'} ·{' '}
+          {signoffProgressText(signoffProgress(data.rows))}
         </Text>
         <PrintTable rows={data.rows} now={new Date(data.generatedAt)} />
       </article>

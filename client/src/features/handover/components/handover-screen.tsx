@@ -42,7 +42,9 @@ export function HandoverScreen({ wards, wardsLoading, canSignOff }: HandoverScre
   };
 
   const empty =
-    rows.length === 0 ? 'No PCA on this ward is awaiting verification, verified or running.' : 'No PCA matches these filters. Clear a filter to see every PCA.';
+    rows.length === 0
+      ? 'No PCA on this ward is awaiting verification, verified or running.'
+      : 'No PCA matches these filters. Clear a filter to see every PCA.';
 
   return (
     <Stack gap="sm">
@@ -95,7 +97,13 @@ export function HandoverScreen({ wards, wardsLoading, canSignOff }: HandoverScre
         <Skeleton height={240} aria-label="Loading the handover board" />
       )}
       {signing && signingRow && wardId !== null ? (
-        <SignoffModal key={`${signing.orderId}-${signing.role}`} wardId={wardId} row={signingRow} role={signing.role} onClose={() => setSigning(null)} />
+        <SignoffModal
+          key={`${signing.orderId}-${signing.role}`}
+          wardId={wardId}
+          row={signingRow}
+          role={signing.role}
+          onClose={() => setSigning(null)}
+        />
       ) : null}
     </Stack>
   );

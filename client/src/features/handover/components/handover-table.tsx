@@ -16,7 +16,14 @@ export interface HandoverTableProps {
 export function HandoverTable({ rows, now, empty, onSignOff }: HandoverTableProps) {
   return (
     // The scrolling region takes keyboard focus, so the board can be scrolled without a mouse.
-    <Table.ScrollContainer minWidth={1080} maxHeight="calc(100dvh - 230px)" type="native" tabIndex={0} role="region" aria-label="Handover board, scrollable">
+    <Table.ScrollContainer
+      minWidth={1080}
+      maxHeight="calc(100dvh - 230px)"
+      type="native"
+      tabIndex={0}
+      role="region"
+      aria-label="Handover board, scrollable"
+    >
       <Table aria-label="Handover board" className={classes.table} stickyHeader tabularNums verticalSpacing={6} horizontalSpacing={8}>
         <Table.Thead>
           <Table.Tr>

@@ -7,7 +7,12 @@ import { formatClockSeconds } from '../utils/board-format';
 const STATUS_LOOK: Record<StreamStatus, { word: string; color: string; icon: ComponentType<IconProps>; hint: string }> = {
   connecting: { word: 'Connecting', color: 'slate.7', icon: IconRefresh, hint: 'Opening the live connection' },
   live: { word: 'Connected', color: 'teal.8', icon: IconPlugConnected, hint: 'Changes on the ward appear within seconds' },
-  reconnecting: { word: 'Reconnecting', color: 'orange.9', icon: IconRefresh, hint: 'The board may be behind; it refreshes once the connection is back' },
+  reconnecting: {
+    word: 'Reconnecting',
+    color: 'orange.9',
+    icon: IconRefresh,
+    hint: 'The board may be behind; it refreshes once the connection is back',
+  },
   stopped: { word: 'Not live', color: 'red.8', icon: IconPlugConnectedX, hint: 'Live updates are off; the board refreshes every minute' },
 };
 

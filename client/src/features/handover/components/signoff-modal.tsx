@@ -30,7 +30,10 @@ export interface SignoffModalProps {
 export function SignoffModal({ wardId, row, role, onClose }: SignoffModalProps) {
   const mutation = useSignOff(wardId);
   const [refusals, setRefusals] = useState<string[]>([]);
-  const form = useForm({ initialValues: { pumpSettingsMatch: false }, validate: zod4Resolver(role === 'incoming' ? incomingSchema : outgoingSchema) });
+  const form = useForm({
+    initialValues: { pumpSettingsMatch: false },
+    validate: zod4Resolver(role === 'incoming' ? incomingSchema : outgoingSchema),
+  });
 
   const submit = form.onSubmit(({ pumpSettingsMatch }) => {
     setRefusals([]);

@@ -1,6 +1,14 @@
 import type { ComponentType } from 'react';
 import { Button, Group, Stack, Text } from '@mantine/core';
-import { IconCircleCheck, IconCircleDashed, IconClipboardCheck, IconHourglass, IconScale, IconCalendarExclamation, type IconProps } from '@tabler/icons-react';
+import {
+  IconCircleCheck,
+  IconCircleDashed,
+  IconClipboardCheck,
+  IconHourglass,
+  IconScale,
+  IconCalendarExclamation,
+  type IconProps,
+} from '@tabler/icons-react';
 import type { HandoverRow, PendingTask, SignoffRole } from '@lockstep/shared';
 import { formatSince } from '../utils/board-format';
 
@@ -13,7 +21,12 @@ const TASK_LOOK: Record<PendingTask['code'], { label: string; color: string; bg:
 
 /** Short labelled tags (they wrap, never truncate) for what waits on someone, and since when. */
 export function TasksCell({ tasks, now }: { tasks: readonly PendingTask[]; now: Date }) {
-  if (tasks.length === 0) return <Text size="xs" c="dimmed">None</Text>;
+  if (tasks.length === 0)
+    return (
+      <Text size="xs" c="dimmed">
+        None
+      </Text>
+    );
   return (
     <Stack gap={4}>
       {tasks.map((task) => {
@@ -21,7 +34,16 @@ export function TasksCell({ tasks, now }: { tasks: readonly PendingTask[]; now: 
         const Icon = look.icon;
         return (
           <div key={task.code}>
-            <Group gap={4} wrap="nowrap" px={5} py={1} bg={look.bg} c={look.color} data-task={task.code} style={{ borderRadius: 4, width: 'fit-content' }}>
+            <Group
+              gap={4}
+              wrap="nowrap"
+              px={5}
+              py={1}
+              bg={look.bg}
+              c={look.color}
+              data-task={task.code}
+              style={{ borderRadius: 4, width: 'fit-content' }}
+            >
               <Icon size={12} aria-hidden style={{ flexShrink: 0 }} />
               <Text size="xs" fw={600} c="inherit" lh={1.3}>
                 {look.label}
@@ -70,7 +92,12 @@ export interface SignoffCellProps {
 
 /** Who has confirmed this PCA at this handover, and the actions still open. */
 export function SignoffCell({ row, onSignOff }: SignoffCellProps) {
-  if (row.status !== 'active') return <Text size="xs" c="dimmed">Not running: no sign-off</Text>;
+  if (row.status !== 'active')
+    return (
+      <Text size="xs" c="dimmed">
+        Not running: no sign-off
+      </Text>
+    );
   const missing = (['outgoing', 'incoming'] as const).filter((role) => !row.signoffs.some((signoff) => signoff.role === role));
   return (
     <Stack gap={2}>
@@ -79,7 +106,13 @@ export function SignoffCell({ row, onSignOff }: SignoffCellProps) {
       {onSignOff && missing.length > 0 ? (
         <Stack gap={4} mt={2} align="flex-start" className="no-print">
           {missing.map((role) => (
-            <Button key={role} size="compact-xs" variant="light" aria-label={`Sign off (${role}): ${row.patient.name}, bed ${row.bed}`} onClick={() => onSignOff(row, role)}>
+            <Button
+              key={role}
+              size="compact-xs"
+              variant="light"
+              aria-label={`Sign off (${role}): ${row.patient.name}, bed ${row.bed}`}
+              onClick={() => onSignOff(row, role)}
+            >
               Sign off ({role})
             </Button>
           ))}

@@ -18,5 +18,8 @@ export function useWardParam(wards: readonly Ward[]): number | null {
   const asked = Number(searchParams.get('ward'));
   if (wards.length === 0) return Number.isInteger(asked) && asked > 0 ? asked : null;
   if (wards.some((ward) => ward.id === asked)) return asked;
-  return defaultWardId(wards, user.wards.map((ward) => ward.id));
+  return defaultWardId(
+    wards,
+    user.wards.map((ward) => ward.id),
+  );
 }

@@ -15,7 +15,11 @@ const calm: Row = {
 
 const row = (bed: string, changes: Partial<Row> = {}): Row => ({ ...calm, bed, ...changes });
 const flags = (urgent: number, review: number, info: number) => ({ urgent, review, info, open: [] });
-const overdue = (minutes: number, severity: 'review' | 'urgent') => ({ dueAt: '2026-12-02T05:00:00.000Z', overdueMinutes: minutes, severity });
+const overdue = (minutes: number, severity: 'review' | 'urgent') => ({
+  dueAt: '2026-12-02T05:00:00.000Z',
+  overdueMinutes: minutes,
+  severity,
+});
 const signoff = (role: 'outgoing' | 'incoming'): HandoverSignoffResponse => ({
   id: 1,
   orderId: 1,
@@ -28,7 +32,12 @@ const signoff = (role: 'outgoing' | 'incoming'): HandoverSignoffResponse => ({
 });
 
 describe('filterRows', () => {
-  const rows = [row('H03', { flags: flags(1, 0, 0) }), row('H01', { nextObservation: overdue(12, 'review') }), row('H02'), row('H04', { flags: flags(0, 0, 1), nextObservation: overdue(90, 'urgent') })];
+  const rows = [
+    row('H03', { flags: flags(1, 0, 0) }),
+    row('H01', { nextObservation: overdue(12, 'review') }),
+    row('H02'),
+    row('H04', { flags: flags(0, 0, 1), nextObservation: overdue(90, 'urgent') }),
+  ];
   const beds = (kept: Row[]) => kept.map((kept) => kept.bed);
 
   it('keeps every row, in the order given, with no filter', () => {
@@ -58,7 +67,9 @@ describe('rowSeverity', () => {
     expect(rowSeverity(row('A', { nextObservation: overdue(75, 'urgent') }))).toBe('urgent');
     expect(rowSeverity(row('A', { flags: flags(0, 1, 0) }))).toBe('review');
     expect(rowSeverity(row('A', { nextObservation: overdue(5, 'review') }))).toBe('review');
-    expect(rowSeverity(row('A', { syringe: { remainingMl: 4, projectedEmptyAt: '2026-12-02T06:30:00.000Z', emptiesThisShift: true } }))).toBe('review');
+    expect(
+      rowSeverity(row('A', { syringe: { remainingMl: 4, projectedEmptyAt: '2026-12-02T06:30:00.000Z', emptiesThisShift: true } })),
+    ).toBe('review');
     expect(rowSeverity(row('A', { flags: flags(0, 0, 1) }))).toBe('info');
     expect(rowSeverity(calm)).toBe('routine');
   });

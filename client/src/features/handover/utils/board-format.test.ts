@@ -1,6 +1,18 @@
 import { describe, expect, it } from 'vitest';
 import type { HandoverRow } from '@lockstep/shared';
-import { drugLine, formatClock, formatNearTime, formatClockSeconds, formatElapsed, formatShift, formatSince, lastFourHours, patientFacts, regimenLines, regimenSummary } from './board-format';
+import {
+  drugLine,
+  formatClock,
+  formatNearTime,
+  formatClockSeconds,
+  formatElapsed,
+  formatShift,
+  formatSince,
+  lastFourHours,
+  patientFacts,
+  regimenLines,
+  regimenSummary,
+} from './board-format';
 
 // The demo's hydromorphone order (BRIEF §7, Harbour H07).
 const hydromorphone: Pick<HandoverRow, 'drugName' | 'concentrationPerMl' | 'doseUnit' | 'regimen' | 'last4h'> = {
@@ -17,7 +29,10 @@ describe('regimen formatting', () => {
   });
 
   it('leaves out what a demand-only order does not have, and shows a 1-hour limit', () => {
-    const fentanyl = { doseUnit: 'mcg' as const, regimen: { demandDose: 10, lockoutMinutes: 6, basalRatePerHour: 0, oneHourLimit: 100, fourHourLimit: null } };
+    const fentanyl = {
+      doseUnit: 'mcg' as const,
+      regimen: { demandDose: 10, lockoutMinutes: 6, basalRatePerHour: 0, oneHourLimit: 100, fourHourLimit: null },
+    };
     expect(regimenSummary(fentanyl)).toBe('10 mcg / 6 min, 1-h limit 100 mcg');
   });
 
@@ -71,9 +86,16 @@ describe('time formatting', () => {
   });
 
   it('names the shift with its date and hours', () => {
-    const night = { shift: 'night' as const, shiftDate: '2026-12-01', startsAt: '2026-12-01T19:00:00.000Z', endsAt: '2026-12-02T07:00:00.000Z' };
+    const night = {
+      shift: 'night' as const,
+      shiftDate: '2026-12-01',
+      startsAt: '2026-12-01T19:00:00.000Z',
+      endsAt: '2026-12-02T07:00:00.000Z',
+    };
     expect(formatShift(night, 'UTC')).toBe('Night shift, 1 Dec 2026, 19:00–07:00');
-    expect(formatShift({ ...night, shift: 'day', startsAt: '2026-12-01T07:00:00.000Z', endsAt: '2026-12-01T19:00:00.000Z' }, 'UTC')).toBe('Day shift, 1 Dec 2026, 07:00–19:00');
+    expect(formatShift({ ...night, shift: 'day', startsAt: '2026-12-01T07:00:00.000Z', endsAt: '2026-12-01T19:00:00.000Z' }, 'UTC')).toBe(
+      'Day shift, 1 Dec 2026, 07:00–19:00',
+    );
   });
 
   it('says since when a task has waited: the time today, the date before that', () => {

@@ -86,7 +86,9 @@ export function regimenSummary(row: Pick<HandoverRow, 'regimen' | 'doseUnit'>): 
 }
 
 /** The regimen as labelled lines, for comparing with the pump field by field. */
-export function regimenLines(row: Pick<HandoverRow, 'regimen' | 'doseUnit' | 'drugName' | 'concentrationPerMl'>): { label: string; value: string }[] {
+export function regimenLines(
+  row: Pick<HandoverRow, 'regimen' | 'doseUnit' | 'drugName' | 'concentrationPerMl'>,
+): { label: string; value: string }[] {
   const { regimen } = row;
   const unit = row.doseUnit;
   const notSet = (value: number | null, valueUnit: string) => (value === null ? 'Not set' : formatDose(value, valueUnit));

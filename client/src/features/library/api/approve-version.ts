@@ -33,6 +33,7 @@ export function useApproveVersion() {
     onSuccess: () => queryClient.invalidateQueries({ queryKey: libraryKeys.all }),
     // Refused because the version changed (409): the page shows it as it is now, for a fresh
     // review, by the time the refusal is on screen (the mutation waits for this refetch).
-    onError: (error) => (isApiRequestError(error) && error.status === 409 ? queryClient.invalidateQueries({ queryKey: libraryKeys.all }) : undefined),
+    onError: (error) =>
+      isApiRequestError(error) && error.status === 409 ? queryClient.invalidateQueries({ queryKey: libraryKeys.all }) : undefined,
   });
 }

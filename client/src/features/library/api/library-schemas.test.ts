@@ -3,7 +3,9 @@ import { versionDiffSchema } from './library-schemas';
 
 // The shape the server sends for GET /library/versions/:id/diff (demo values).
 const answer = {
-  added: [{ drugId: 3, drugName: 'fentanyl', concentrationPerMl: 10, doseUnit: 'mcg', perKg: false, limits: { demandDose: { softMax: 20 } } }],
+  added: [
+    { drugId: 3, drugName: 'fentanyl', concentrationPerMl: 10, doseUnit: 'mcg', perKg: false, limits: { demandDose: { softMax: 20 } } },
+  ],
   removed: [],
   changed: [
     {

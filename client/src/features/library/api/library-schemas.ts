@@ -16,7 +16,10 @@ export function isRuleChange(value: unknown): value is RuleChange {
   if (field === 'perKg') return typeof from === 'boolean' && typeof to === 'boolean';
   if (field === 'doseUnit') return typeof from === 'string' && typeof to === 'string';
   return (
-    (REGIMEN_FIELDS as readonly unknown[]).includes(field) && (LIMIT_KEYS as readonly unknown[]).includes(limit) && isLimitValue(from) && isLimitValue(to)
+    (REGIMEN_FIELDS as readonly unknown[]).includes(field) &&
+    (LIMIT_KEYS as readonly unknown[]).includes(limit) &&
+    isLimitValue(from) &&
+    isLimitValue(to)
   );
 }
 

@@ -10,7 +10,11 @@ export interface SubmitVersionVariables {
 
 /** Draft → awaiting approval. */
 export function submitVersion({ versionId, note }: SubmitVersionVariables): Promise<LibraryVersionDetail> {
-  return apiRequest(`/library/versions/${versionId}/submit`, { method: 'POST', body: note ? { note } : {}, schema: libraryVersionDetailSchema });
+  return apiRequest(`/library/versions/${versionId}/submit`, {
+    method: 'POST',
+    body: note ? { note } : {},
+    schema: libraryVersionDetailSchema,
+  });
 }
 
 export function useSubmitVersion() {

@@ -49,8 +49,8 @@ export function ApproveModal({ version, onClose }: ApproveModalProps) {
       <form onSubmit={submit} noValidate>
         <Stack gap="md">
           <Text size="sm">
-            Version {version.number} becomes {version.wardName}&apos;s active dose-limit library as soon as you sign, and the
-            version in use now is retired. Approve only after checking every change.
+            Version {version.number} becomes {version.wardName}&apos;s active dose-limit library as soon as you sign, and the version in use
+            now is retired. Approve only after checking every change.
           </Text>
           {refusal ? (
             <Alert color="red" variant="light" icon={<IconAlertCircle aria-hidden />} title="Not approved" role="alert">

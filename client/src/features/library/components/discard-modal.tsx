@@ -26,8 +26,7 @@ export function DiscardModal({ version, onClose, onDiscarded }: DiscardModalProp
     <Modal opened onClose={onClose} title={`Discard draft version ${version.number}?`} size="sm">
       <Stack gap="md">
         <Text size="sm">
-          The draft and its {version.ruleCount} {version.ruleCount === 1 ? 'rule' : 'rules'} are deleted. The active version is not
-          changed.
+          The draft and its {version.ruleCount} {version.ruleCount === 1 ? 'rule' : 'rules'} are deleted. The active version is not changed.
         </Text>
         {discard.isError ? (
           <Alert color="red" variant="light" icon={<IconAlertCircle aria-hidden />} title="Not discarded" role="alert">

@@ -18,7 +18,15 @@ const ACCEPT = { 'text/csv': ['.csv'], 'application/vnd.ms-excel': ['.csv'], 'te
 export function ImportDropzone({ onFile, onRejected, busy, compact = false }: ImportDropzoneProps) {
   const onReject = (rejections: FileRejection[]) =>
     onRejected([
-      ...new Set(rejections.map(({ file, errors }) => rejectionMessage(file.name, file.size, errors.map((error) => error.code)))),
+      ...new Set(
+        rejections.map(({ file, errors }) =>
+          rejectionMessage(
+            file.name,
+            file.size,
+            errors.map((error) => error.code),
+          ),
+        ),
+      ),
     ]);
 
   return (

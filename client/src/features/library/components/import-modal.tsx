@@ -66,7 +66,10 @@ export function ImportModal({ wards, initialWardId, onClose, onImported }: Impor
       { wardId, file: step.file, note, onProgress: setProgress },
       {
         onSuccess: (draft) => {
-          notifySuccess('Draft created', `Version ${draft.number} of ${draft.wardName}'s library is a draft from ${step.file.name}. Submit it for approval when it is ready.`);
+          notifySuccess(
+            'Draft created',
+            `Version ${draft.number} of ${draft.wardName}'s library is a draft from ${step.file.name}. Submit it for approval when it is ready.`,
+          );
           onImported(draft);
           onClose();
         },
@@ -108,7 +111,12 @@ export function ImportModal({ wards, initialWardId, onClose, onImported }: Impor
             <Progress value={Math.max(5, Math.round(progress * 100))} animated striped aria-label="Upload progress" />
           </Stack>
         ) : (
-          <ImportDropzone onFile={(file) => check(file)} onRejected={setRejections} busy={importLibrary.isPending} compact={step.kind !== 'choose'} />
+          <ImportDropzone
+            onFile={(file) => check(file)}
+            onRejected={setRejections}
+            busy={importLibrary.isPending}
+            compact={step.kind !== 'choose'}
+          />
         )}
 
         {rejections.length > 0 ? (

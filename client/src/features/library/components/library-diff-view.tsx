@@ -16,7 +16,19 @@ export interface LibraryDiffViewProps {
   subject: string;
 }
 
-function Section({ title, count, color, icon, children }: { title: string; count: number; color: string; icon: ReactNode; children: ReactNode }) {
+function Section({
+  title,
+  count,
+  color,
+  icon,
+  children,
+}: {
+  title: string;
+  count: number;
+  color: string;
+  icon: ReactNode;
+  children: ReactNode;
+}) {
   return (
     <Stack gap="xs">
       <Group gap="xs">

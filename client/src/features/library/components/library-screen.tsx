@@ -58,7 +58,10 @@ export function LibraryScreen({ wards, wardsLoading, drugs }: LibraryScreenProps
       { wardId },
       {
         onSuccess: (draft) => {
-          notifySuccess('Draft started', `Version ${draft.number} of ${draft.wardName}'s library is a draft copied from the active version.`);
+          notifySuccess(
+            'Draft started',
+            `Version ${draft.number} of ${draft.wardName}'s library is a draft copied from the active version.`,
+          );
           select({ wardId: draft.wardId, versionId: draft.id });
         },
         onError: (error) => setDraftRefusal(errorMessage(error)),
@@ -80,17 +83,35 @@ export function LibraryScreen({ wards, wardsLoading, drugs }: LibraryScreenProps
           w={240}
         />
         <Group gap="sm">
-          <Button variant="default" leftSection={<IconFileImport size={16} aria-hidden />} onClick={() => setImporting(true)} disabled={wardId === null}>
+          <Button
+            variant="default"
+            leftSection={<IconFileImport size={16} aria-hidden />}
+            onClick={() => setImporting(true)}
+            disabled={wardId === null}
+          >
             Import CSV
           </Button>
-          <Button leftSection={<IconCopyPlus size={16} aria-hidden />} onClick={startDraft} loading={createDraft.isPending} disabled={wardId === null}>
+          <Button
+            leftSection={<IconCopyPlus size={16} aria-hidden />}
+            onClick={startDraft}
+            loading={createDraft.isPending}
+            disabled={wardId === null}
+          >
             New draft
           </Button>
         </Group>
       </Group>
 
       {draftRefusal ? (
-        <Alert color="red" variant="light" icon={<IconAlertCircle aria-hidden />} title="No new draft was started" withCloseButton onClose={() => setDraftRefusal(null)} role="alert">
+        <Alert
+          color="red"
+          variant="light"
+          icon={<IconAlertCircle aria-hidden />}
+          title="No new draft was started"
+          withCloseButton
+          onClose={() => setDraftRefusal(null)}
+          role="alert"
+        >
           {draftRefusal}
         </Alert>
       ) : null}
@@ -98,7 +119,11 @@ export function LibraryScreen({ wards, wardsLoading, drugs }: LibraryScreenProps
       <Stack gap="xs">
         <Title order={2}>Versions{ward ? ` for ${ward.name}` : ''}</Title>
         {versionsQuery.isError ? (
-          <QueryErrorAlert title="The versions could not be loaded" error={versionsQuery.error} onRetry={() => void versionsQuery.refetch()} />
+          <QueryErrorAlert
+            title="The versions could not be loaded"
+            error={versionsQuery.error}
+            onRetry={() => void versionsQuery.refetch()}
+          />
         ) : (
           <VersionsTable
             versions={versions}

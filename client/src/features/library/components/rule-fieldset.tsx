@@ -18,7 +18,10 @@ export function RuleFieldset({ form, index, drugs }: RuleFieldsetProps) {
   const rule = form.values.rules[index];
   const drug = drugs.find((candidate) => String(candidate.id) === rule.drugId);
   const concentration = typeof rule.concentrationPerMl === 'number' ? rule.concentrationPerMl : null;
-  const title = drug && concentration ? `: ${ruleTitle({ drugName: drug.genericName, concentrationPerMl: concentration, doseUnit: drug.doseUnit })}` : '';
+  const title =
+    drug && concentration
+      ? `: ${ruleTitle({ drugName: drug.genericName, concentrationPerMl: concentration, doseUnit: drug.doseUnit })}`
+      : '';
   const doseUnit = drug?.doseUnit ?? rule.doseUnit;
 
   return (
@@ -41,7 +44,11 @@ export function RuleFieldset({ form, index, drugs }: RuleFieldsetProps) {
           min={0}
           decimalScale={4}
           hideControls
-          rightSection={<Text size="xs" c="dimmed">{doseUnit ? `${doseUnit}/mL` : 'per mL'}</Text>}
+          rightSection={
+            <Text size="xs" c="dimmed">
+              {doseUnit ? `${doseUnit}/mL` : 'per mL'}
+            </Text>
+          }
           rightSectionWidth={64}
           w={170}
           {...form.getInputProps(`${path}.concentrationPerMl`)}
@@ -55,11 +62,7 @@ export function RuleFieldset({ form, index, drugs }: RuleFieldsetProps) {
           w={90}
           error={form.errors[`${path}.doseUnit`]}
         />
-        <Checkbox
-          label="Limits per kg of body weight"
-          mt={30}
-          {...form.getInputProps(`${path}.perKg`, { type: 'checkbox' })}
-        />
+        <Checkbox label="Limits per kg of body weight" mt={30} {...form.getInputProps(`${path}.perKg`, { type: 'checkbox' })} />
         <Button
           variant="subtle"
           color="red"

@@ -19,7 +19,13 @@ export interface RulesEditorDrawerProps {
 
 export function RulesEditorDrawer({ opened, onClose, version, ...props }: RulesEditorDrawerProps) {
   return (
-    <Drawer opened={opened} onClose={onClose} position="right" size={1000} title={`Edit rules: ${version.wardName} version ${version.number}`}>
+    <Drawer
+      opened={opened}
+      onClose={onClose}
+      position="right"
+      size={1000}
+      title={`Edit rules: ${version.wardName} version ${version.number}`}
+    >
       {/* Mounted only while open, so each opening starts from the saved rules. */}
       {opened ? <RulesEditorForm version={version} onClose={onClose} {...props} /> : null}
     </Drawer>
@@ -51,7 +57,10 @@ function RulesEditorForm({ version, drugs, weightBased, onClose }: RulesEditorFo
         { versionId: version.id, rules },
         {
           onSuccess: (saved) => {
-            notifySuccess('Rules saved', `Draft version ${saved.number} now has ${saved.ruleCount} ${saved.ruleCount === 1 ? 'rule' : 'rules'}.`);
+            notifySuccess(
+              'Rules saved',
+              `Draft version ${saved.number} now has ${saved.ruleCount} ${saved.ruleCount === 1 ? 'rule' : 'rules'}.`,
+            );
             onClose();
           },
           onError: (error) => {
@@ -74,8 +83,8 @@ function RulesEditorForm({ version, drugs, weightBased, onClose }: RulesEditorFo
     <form onSubmit={save} noValidate>
       <Stack gap="md">
         <Text size="sm" c="dimmed">
-          Leave a limit empty where it is not checked. Limits must run hard min ≤ soft min ≤ soft max ≤ hard max; a value equal to a
-          limit is inside it.
+          Leave a limit empty where it is not checked. Limits must run hard min ≤ soft min ≤ soft max ≤ hard max; a value equal to a limit
+          is inside it.
         </Text>
         {alerts.length > 0 ? (
           <Alert color="red" variant="light" icon={<IconAlertCircle aria-hidden />} title="The rules were not saved" role="alert">
@@ -95,7 +104,14 @@ function RulesEditorForm({ version, drugs, weightBased, onClose }: RulesEditorFo
             Add rule
           </Button>
         </Group>
-        <Group justify="flex-end" pos="sticky" bottom={0} py="sm" bg="var(--mantine-color-body)" style={{ zIndex: 1, borderTop: '1px solid var(--mantine-color-default-border)' }}>
+        <Group
+          justify="flex-end"
+          pos="sticky"
+          bottom={0}
+          py="sm"
+          bg="var(--mantine-color-body)"
+          style={{ zIndex: 1, borderTop: '1px solid var(--mantine-color-default-border)' }}
+        >
           <Button variant="default" onClick={onClose}>
             Cancel
           </Button>

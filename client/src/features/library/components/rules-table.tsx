@@ -51,7 +51,13 @@ export function RulesTable({ rules, label, empty }: RulesTableProps) {
         {rules.length === 0 ? (
           <Table.Tbody>
             <Table.Tr>
-              <Table.Td colSpan={5}>{empty ?? <Text size="sm" c="dimmed">No rules.</Text>}</Table.Td>
+              <Table.Td colSpan={5}>
+                {empty ?? (
+                  <Text size="sm" c="dimmed">
+                    No rules.
+                  </Text>
+                )}
+              </Table.Td>
             </Table.Tr>
           </Table.Tbody>
         ) : null}

@@ -29,8 +29,8 @@ export function SubmitModal({ version, onClose }: { version: LibraryVersion; onC
     <Modal opened onClose={onClose} title={`Submit version ${version.number} for approval`} size="md">
       <Stack gap="md">
         <Text size="sm">
-          A second pharmacist checks and approves the version before it is used. Until then the draft cannot be edited; withdraw it
-          to change it again.
+          A second pharmacist checks and approves the version before it is used. Until then the draft cannot be edited; withdraw it to
+          change it again.
         </Text>
         {submitVersion.isError ? (
           <Alert color="red" variant="light" icon={<IconAlertCircle aria-hidden />} title="Not submitted" role="alert">

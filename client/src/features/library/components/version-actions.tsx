@@ -70,7 +70,12 @@ export function VersionActions({ version, drugs, currentUserId, weightBased, onD
             >
               Approve
             </Button>
-            <Button variant="default" leftSection={<IconArrowBackUp size={16} aria-hidden />} onClick={doWithdraw} loading={withdraw.isPending}>
+            <Button
+              variant="default"
+              leftSection={<IconArrowBackUp size={16} aria-hidden />}
+              onClick={doWithdraw}
+              loading={withdraw.isPending}
+            >
               Withdraw to draft
             </Button>
           </>

@@ -38,7 +38,13 @@ export function VersionHeader({ version }: { version: LibraryVersion }) {
           </Fact>
         ) : null}
         {version.retiredAt ? <Fact label="Retired">{formatDateTime(version.retiredAt)}</Fact> : null}
-        <Fact label="Note">{version.note || <Text span size="sm" c="dimmed">No note</Text>}</Fact>
+        <Fact label="Note">
+          {version.note || (
+            <Text span size="sm" c="dimmed">
+              No note
+            </Text>
+          )}
+        </Fact>
       </DataList>
     </Stack>
   );

@@ -47,7 +47,13 @@ export function VersionPanel({ wardId, versionId, ...props }: VersionPanelProps)
         />
       );
     }
-    return <QueryErrorAlert title="The library version could not be loaded" error={query.error} onRetry={notFound ? undefined : () => void query.refetch()} />;
+    return (
+      <QueryErrorAlert
+        title="The library version could not be loaded"
+        error={query.error}
+        onRetry={notFound ? undefined : () => void query.refetch()}
+      />
+    );
   }
   // Keyed by id so the tabs start afresh for each version.
   return <VersionDetail key={query.data.id} version={query.data} {...props} />;
@@ -80,7 +86,9 @@ function VersionDetail({ version, ...actionProps }: VersionDetailProps) {
             </Tabs.Panel>
             <Tabs.Panel value="changes" pt="md">
               {diffQuery.isPending ? <Skeleton height={160} /> : null}
-              {diffQuery.isError ? <QueryErrorAlert title="The changes could not be loaded" error={diffQuery.error} onRetry={() => void diffQuery.refetch()} /> : null}
+              {diffQuery.isError ? (
+                <QueryErrorAlert title="The changes could not be loaded" error={diffQuery.error} onRetry={() => void diffQuery.refetch()} />
+              ) : null}
               {diffQuery.data ? <LibraryDiffView diff={diffQuery.data} rules={version.rules} subject="this version" /> : null}
             </Tabs.Panel>
           </Tabs>

@@ -10,20 +10,37 @@ import { VersionStatusBadge } from './version-status-badge';
 const column = createColumnHelper<LibraryVersion>();
 
 function When({ value }: { value: string | null }) {
-  if (!value) return <Text span size="sm" c="dimmed">–</Text>;
+  if (!value)
+    return (
+      <Text span size="sm" c="dimmed">
+        –
+      </Text>
+    );
   return <span style={{ whiteSpace: 'nowrap' }}>{formatDateTime(value)}</span>;
 }
 
 // Newest first, as the server sends them; sorting would only hide the order of events.
 const columns = [
-  column.accessor('number', { header: 'Version', cell: ({ getValue }) => <Text span size="sm" fw={600}>Version {getValue()}</Text> }),
+  column.accessor('number', {
+    header: 'Version',
+    cell: ({ getValue }) => (
+      <Text span size="sm" fw={600}>
+        Version {getValue()}
+      </Text>
+    ),
+  }),
   column.accessor('status', { header: 'Status', cell: ({ getValue }) => <VersionStatusBadge status={getValue()} /> }),
   column.accessor('authorName', { header: 'Written by' }),
   column.accessor('createdAt', { header: 'Created', cell: ({ getValue }) => <When value={getValue()} /> }),
   column.accessor('submittedAt', { header: 'Submitted', cell: ({ getValue }) => <When value={getValue()} /> }),
   column.accessor('approverName', {
     header: 'Approved by',
-    cell: ({ getValue }) => getValue() ?? <Text span size="sm" c="dimmed">–</Text>,
+    cell: ({ getValue }) =>
+      getValue() ?? (
+        <Text span size="sm" c="dimmed">
+          –
+        </Text>
+      ),
   }),
   column.accessor('approvedAt', { header: 'Approved', cell: ({ getValue }) => <When value={getValue()} /> }),
   column.accessor('ruleCount', { header: 'Rules' }),
@@ -56,7 +73,14 @@ export function VersionsTable({ versions, isLoading, currentVersionId, onOpen }:
       skeletonRows={2}
       onRowOpen={onOpen}
       isRowCurrent={(version) => version.id === currentVersionId}
-      empty={<EmptyState size="sm" icon={<IconBooks aria-hidden />} title="No versions yet" description="Import a CSV to start this ward's library." />}
+      empty={
+        <EmptyState
+          size="sm"
+          icon={<IconBooks aria-hidden />}
+          title="No versions yet"
+          description="Import a CSV to start this ward's library."
+        />
+      }
     />
   );
 }

@@ -22,23 +22,65 @@ describe('changeRows', () => {
       ],
     };
     expect(changeRows(diff, [morphine])).toEqual([
-      { key: 'morphine 1 mg/mL-0', rule: 'morphine 1 mg/mL', what: 'Demand dose, soft max', from: '2 mg', to: '1.8 mg', direction: 'lowered' },
-      { key: 'morphine 1 mg/mL-1', rule: 'morphine 1 mg/mL', what: '4-hour limit, hard max', from: '40 mg', to: '45 mg', direction: 'raised' },
-      { key: 'morphine 1 mg/mL-2', rule: 'morphine 1 mg/mL', what: 'Loading dose, hard min', from: 'Not set', to: '0.5 mg', direction: 'set' },
-      { key: 'morphine 1 mg/mL-3', rule: 'morphine 1 mg/mL', what: 'Lockout, soft min', from: '6 min', to: 'Not set', direction: 'cleared' },
+      {
+        key: 'morphine 1 mg/mL-0',
+        rule: 'morphine 1 mg/mL',
+        what: 'Demand dose, soft max',
+        from: '2 mg',
+        to: '1.8 mg',
+        direction: 'lowered',
+      },
+      {
+        key: 'morphine 1 mg/mL-1',
+        rule: 'morphine 1 mg/mL',
+        what: '4-hour limit, hard max',
+        from: '40 mg',
+        to: '45 mg',
+        direction: 'raised',
+      },
+      {
+        key: 'morphine 1 mg/mL-2',
+        rule: 'morphine 1 mg/mL',
+        what: 'Loading dose, hard min',
+        from: 'Not set',
+        to: '0.5 mg',
+        direction: 'set',
+      },
+      {
+        key: 'morphine 1 mg/mL-3',
+        rule: 'morphine 1 mg/mL',
+        what: 'Lockout, soft min',
+        from: '6 min',
+        to: 'Not set',
+        direction: 'cleared',
+      },
     ]);
   });
 
   it('uses the new rule for per kg, and the old setting for old values when per kg changed', () => {
     const hydromorphone = { drugName: 'hydromorphone', concentrationPerMl: 0.2, doseUnit: 'mg' };
     const perKgRule: NamedRule = { ...morphine, drugId: 2, ...hydromorphone, doseUnit: 'mg', perKg: true };
-    expect(changeRows({ changed: [{ ...hydromorphone, changes: [{ field: 'demandDose', limit: 'softMax', from: 0.004, to: 0.003 }] }] }, [perKgRule])[0]).toMatchObject({
+    expect(
+      changeRows({ changed: [{ ...hydromorphone, changes: [{ field: 'demandDose', limit: 'softMax', from: 0.004, to: 0.003 }] }] }, [
+        perKgRule,
+      ])[0],
+    ).toMatchObject({
       rule: 'HYDROmorphone 0.2 mg/mL',
       from: '0.004 mg/kg',
       to: '0.003 mg/kg',
     });
     const switched = changeRows(
-      { changed: [{ ...hydromorphone, changes: [{ field: 'perKg', from: false, to: true }, { field: 'demandDose', limit: 'softMax', from: 0.4, to: 0.004 }] }] },
+      {
+        changed: [
+          {
+            ...hydromorphone,
+            changes: [
+              { field: 'perKg', from: false, to: true },
+              { field: 'demandDose', limit: 'softMax', from: 0.4, to: 0.004 },
+            ],
+          },
+        ],
+      },
       [],
     );
     expect(switched.map(({ what, from, to, direction }) => ({ what, from, to, direction }))).toEqual([

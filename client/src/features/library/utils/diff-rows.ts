@@ -18,7 +18,9 @@ export interface ChangeRow {
 const NOT_SET = 'Not set';
 
 function sameRule(rule: RuleView, changed: ChangedRule): boolean {
-  return rule.drugName.toLowerCase() === changed.drugName.toLowerCase() && Math.abs(rule.concentrationPerMl - changed.concentrationPerMl) < 1e-9;
+  return (
+    rule.drugName.toLowerCase() === changed.drugName.toLowerCase() && Math.abs(rule.concentrationPerMl - changed.concentrationPerMl) < 1e-9
+  );
 }
 
 function direction(from: number | null, to: number | null): ChangeDirection {
@@ -63,4 +65,3 @@ export function changeRows(diff: Pick<LibraryDiff, 'changed'>, rules: readonly R
   }
   return rows;
 }
-

@@ -2,7 +2,13 @@ import { describe, expect, it } from 'vitest';
 import type { LibraryVersion, Ward } from '@lockstep/shared';
 import { chooseWardId, openVersionOf, parseId } from './library-selection';
 
-const ward = (id: number, name: string): Ward => ({ id, code: name.slice(0, 3).toUpperCase(), name, specialty: 'x', weightBasedDosing: false });
+const ward = (id: number, name: string): Ward => ({
+  id,
+  code: name.slice(0, 3).toUpperCase(),
+  name,
+  specialty: 'x',
+  weightBasedDosing: false,
+});
 const wards = [ward(1, 'Harbour'), ward(2, 'Cedar')];
 
 describe('library selection', () => {

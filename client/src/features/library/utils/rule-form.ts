@@ -49,7 +49,14 @@ export function ruleToForm(rule: LimitRuleInput, key: string): RuleFormValue {
   for (const field of REGIMEN_FIELDS) {
     for (const limit of LIMIT_KEYS) limits[field][limit] = rule.limits[field]?.[limit] ?? '';
   }
-  return { key, drugId: String(rule.drugId), concentrationPerMl: rule.concentrationPerMl, doseUnit: rule.doseUnit, perKg: rule.perKg, limits };
+  return {
+    key,
+    drugId: String(rule.drugId),
+    concentrationPerMl: rule.concentrationPerMl,
+    doseUnit: rule.doseUnit,
+    perKg: rule.perKg,
+    limits,
+  };
 }
 
 /** '' is "not set" (null); anything else must be a finite number. */
@@ -82,7 +89,8 @@ export function readRulesForm(values: RulesFormValues, drugs: readonly Drug[]): 
       const fieldLimits: Limits = {};
       for (const key of LIMIT_KEYS) {
         const value = readNumber(rule.limits[field][key]);
-        if (value === undefined || (value !== null && value < 0)) errors[`${path}.limits.${field}.${key}`] = 'Enter a number of 0 or more, or leave empty';
+        if (value === undefined || (value !== null && value < 0))
+          errors[`${path}.limits.${field}.${key}`] = 'Enter a number of 0 or more, or leave empty';
         else if (value !== null) fieldLimits[key] = value;
       }
       if (Object.keys(fieldLimits).length > 0) limits[field] = fieldLimits;

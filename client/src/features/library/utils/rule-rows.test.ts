@@ -54,7 +54,12 @@ describe('parameterRows', () => {
   });
 
   it('uses thousands separators and no trailing zeros', () => {
-    const big: NamedRule = { ...hydromorphone, drugName: 'fentanyl', doseUnit: 'mcg', limits: { fourHourLimit: { softMax: 1200.5, hardMax: 1500 } } };
+    const big: NamedRule = {
+      ...hydromorphone,
+      drugName: 'fentanyl',
+      doseUnit: 'mcg',
+      limits: { fourHourLimit: { softMax: 1200.5, hardMax: 1500 } },
+    };
     expect(parameterRows(big)[0].limits).toMatchObject({ softMax: '1,200.5 mcg', hardMax: '1,500 mcg' });
   });
 });

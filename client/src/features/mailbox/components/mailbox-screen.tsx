@@ -24,7 +24,12 @@ export function MailboxScreen() {
               {count} {count === 1 ? 'message' : 'messages'} · checked {formatDateTime(new Date(mailbox.dataUpdatedAt).toISOString())}
             </Text>
           ) : null}
-          <Button variant="default" leftSection={<IconRefresh size={16} aria-hidden />} loading={mailbox.isFetching} onClick={() => void mailbox.refetch()}>
+          <Button
+            variant="default"
+            leftSection={<IconRefresh size={16} aria-hidden />}
+            loading={mailbox.isFetching}
+            onClick={() => void mailbox.refetch()}
+          >
             Refresh
           </Button>
         </Group>

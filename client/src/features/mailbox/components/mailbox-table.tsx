@@ -80,7 +80,12 @@ export function MailboxTable({ messages, isLoading }: MailboxTableProps) {
           {!isLoading && messages.length === 0 ? (
             <Table.Tr>
               <Table.Td colSpan={4}>
-                <EmptyState size="sm" icon={<IconMailOff aria-hidden />} title="No e-mail yet" description="Signing, returning and releasing send e-mail; it appears here." />
+                <EmptyState
+                  size="sm"
+                  icon={<IconMailOff aria-hidden />}
+                  title="No e-mail yet"
+                  description="Signing, returning and releasing send e-mail; it appears here."
+                />
               </Table.Td>
             </Table.Tr>
           ) : null}

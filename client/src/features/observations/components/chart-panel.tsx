@@ -20,7 +20,16 @@ export interface ChartPanelProps {
 export function ChartPanel({ id, title, summary, table, children }: ChartPanelProps) {
   const [showTable, setShowTable] = useState(false);
   return (
-    <Paper withBorder radius="md" p="md" component="figure" m={0} aria-labelledby={`${id}-title`} aria-describedby={`${id}-summary`} data-chart={id}>
+    <Paper
+      withBorder
+      radius="md"
+      p="md"
+      component="figure"
+      m={0}
+      aria-labelledby={`${id}-title`}
+      aria-describedby={`${id}-summary`}
+      data-chart={id}
+    >
       <Group justify="space-between" align="flex-start" wrap="wrap" gap="xs">
         <Title order={3} id={`${id}-title`}>
           {title}

@@ -24,7 +24,10 @@ export function FlagCard({ flag, footer, announce, muted }: FlagCardProps) {
       p="md"
       role={announce ? 'alert' : 'group'}
       aria-label={`${FLAG_SEVERITY_LABELS[flag.severity]} flag: ${flag.message}`}
-      style={{ borderLeft: `6px solid var(--mantine-color-${color}-filled)`, background: muted ? undefined : `var(--mantine-color-${color}-light)` }}
+      style={{
+        borderLeft: `6px solid var(--mantine-color-${color}-filled)`,
+        background: muted ? undefined : `var(--mantine-color-${color}-light)`,
+      }}
     >
       <Stack gap={6}>
         <Group justify="space-between" gap="sm" wrap="wrap">

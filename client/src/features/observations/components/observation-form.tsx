@@ -29,9 +29,24 @@ export interface ObservationFormProps {
 }
 
 // Sedation and breathing are assessed before the patient is woken to be asked about pain.
-const FOCUS_ORDER: readonly (keyof ObservationFormValues)[] = ['sedationLevel', 'respiratoryRate', 'spo2', 'painScore', 'attempts', 'delivered', 'volumeInfusedMl', 'syringeRemainingMl', 'at', 'note'];
+const FOCUS_ORDER: readonly (keyof ObservationFormValues)[] = [
+  'sedationLevel',
+  'respiratoryRate',
+  'spo2',
+  'painScore',
+  'attempts',
+  'delivered',
+  'volumeInfusedMl',
+  'syringeRemainingMl',
+  'at',
+  'note',
+];
 
-const PUMP_LABELS: Record<PumpTotalField, string> = { attempts: 'Attempts', delivered: 'Delivered', volumeInfusedMl: 'Volume infused (mL)' };
+const PUMP_LABELS: Record<PumpTotalField, string> = {
+  attempts: 'Attempts',
+  delivered: 'Delivered',
+  volumeInfusedMl: 'Volume infused (mL)',
+};
 
 /** The typed time said back in words, so day and month can never be read the wrong way round. */
 function observedAtHint(value: string): string {
@@ -58,8 +73,7 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
   });
   const warnings = observationWarnings(form.values, thresholds);
   const { floor } = pumpBounds(observations, running?.id ?? null, new Date());
-  const pumpHint = (field: PumpTotalField) =>
-    floor ? `At least ${floor[field]} (at ${formatClock(floor.at)})` : 'New syringe: from 0';
+  const pumpHint = (field: PumpTotalField) => (floor ? `At least ${floor[field]} (at ${formatClock(floor.at)})` : 'New syringe: from 0');
 
   const submit = form.onSubmit(
     (values) => {
@@ -95,9 +109,26 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
               warning={warnings.sedationLevel}
             />
             <SimpleGrid cols={{ base: 1, sm: 3 }} spacing="lg">
-              <ObservationNumberInput field="respiratoryRate" label="Respiratory rate (/min)" description="Breaths per minute, counted for a full minute" warning={warnings.respiratoryRate} inputProps={form.getInputProps('respiratoryRate')} />
-              <ObservationNumberInput field="spo2" label="SpO2 (%)" description="0 to 100" warning={warnings.spo2} inputProps={form.getInputProps('spo2')} />
-              <ObservationNumberInput field="painScore" label="Pain score (0–10)" description="0 no pain, 10 worst imaginable" inputProps={form.getInputProps('painScore')} />
+              <ObservationNumberInput
+                field="respiratoryRate"
+                label="Respiratory rate (/min)"
+                description="Breaths per minute, counted for a full minute"
+                warning={warnings.respiratoryRate}
+                inputProps={form.getInputProps('respiratoryRate')}
+              />
+              <ObservationNumberInput
+                field="spo2"
+                label="SpO2 (%)"
+                description="0 to 100"
+                warning={warnings.spo2}
+                inputProps={form.getInputProps('spo2')}
+              />
+              <ObservationNumberInput
+                field="painScore"
+                label="Pain score (0–10)"
+                description="0 no pain, 10 worst imaginable"
+                inputProps={form.getInputProps('painScore')}
+              />
             </SimpleGrid>
           </Stack>
         </Paper>
@@ -107,7 +138,13 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
           </Title>
           <SimpleGrid cols={{ base: 1, sm: 2, lg: 4 }} spacing="lg">
             {(['attempts', 'delivered', 'volumeInfusedMl'] as const).map((field) => (
-              <ObservationNumberInput key={field} field={field} label={PUMP_LABELS[field]} description={pumpHint(field)} inputProps={form.getInputProps(field)} />
+              <ObservationNumberInput
+                key={field}
+                field={field}
+                label={PUMP_LABELS[field]}
+                description={pumpHint(field)}
+                inputProps={form.getInputProps(field)}
+              />
             ))}
             <ObservationNumberInput
               field="syringeRemainingMl"
@@ -118,8 +155,24 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
           </SimpleGrid>
         </Paper>
         <SimpleGrid cols={{ base: 1, sm: 2 }} spacing="lg">
-          <TextInput id="observation-at" type="datetime-local" label="Time observed" description={observedAtHint(form.values.at)} size="lg" {...form.getInputProps('at')} />
-          <Textarea id="observation-note" label="Note" description="Optional" size="lg" autosize minRows={1} maxRows={4} {...form.getInputProps('note')} />
+          <TextInput
+            id="observation-at"
+            type="datetime-local"
+            label="Time observed"
+            description={observedAtHint(form.values.at)}
+            size="lg"
+            {...form.getInputProps('at')}
+          />
+          <Textarea
+            id="observation-note"
+            label="Note"
+            description="Optional"
+            size="lg"
+            autosize
+            minRows={1}
+            maxRows={4}
+            {...form.getInputProps('note')}
+          />
         </SimpleGrid>
         <Group justify="flex-end">
           <Button type="submit" size="lg" loading={record.isPending} leftSection={<IconDeviceFloppy size={22} aria-hidden />}>

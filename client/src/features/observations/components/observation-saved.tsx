@@ -40,7 +40,8 @@ export function ObservationSaved({ orderId, observation, onRecordAnother }: Obse
             <FlagCard key={flag.id} flag={flag} announce />
           ))}
           <Text size="sm" c="dimmed">
-            Act on each flag now. Urgent flags were e-mailed to the prescriber and the nurse in charge; acknowledge each one on the PCA page once it is dealt with.
+            Act on each flag now. Urgent flags were e-mailed to the prescriber and the nurse in charge; acknowledge each one on the PCA page
+            once it is dealt with.
           </Text>
         </Stack>
       ) : (

@@ -54,7 +54,13 @@ export function ObserveScreen({ orderId }: { orderId: number }) {
   if (orderQuery.isError || observations.isError) {
     const error = orderQuery.error ?? observations.error;
     const notFound = isApiRequestError(error) && error.status === 404;
-    body = <QueryErrorAlert title={notFound ? 'PCA order not found' : 'The PCA could not be loaded'} error={error} onRetry={notFound ? undefined : () => void Promise.all([orderQuery.refetch(), observations.refetch()])} />;
+    body = (
+      <QueryErrorAlert
+        title={notFound ? 'PCA order not found' : 'The PCA could not be loaded'}
+        error={error}
+        onRetry={notFound ? undefined : () => void Promise.all([orderQuery.refetch(), observations.refetch()])}
+      />
+    );
   } else if (!order || !observations.data) {
     body = <Skeleton height={600} aria-label="Loading the PCA" />;
   } else {
@@ -63,7 +69,14 @@ export function ObserveScreen({ orderId }: { orderId: number }) {
       <>
         <Context order={order} last={observations.data.at(-1)} />
         {saved ? (
-          <ObservationSaved orderId={order.id} observation={saved} onRecordAnother={() => { setSaved(null); setFormKey((key) => key + 1); }} />
+          <ObservationSaved
+            orderId={order.id}
+            observation={saved}
+            onRecordAnother={() => {
+              setSaved(null);
+              setFormKey((key) => key + 1);
+            }}
+          />
         ) : order.status !== 'active' || !running ? (
           <Alert color="gray" variant="light" icon={<IconInfoCircle aria-hidden />} title="No observation can be recorded">
             {order.status !== 'active'

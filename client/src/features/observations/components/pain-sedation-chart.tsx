@@ -25,7 +25,13 @@ function PointTooltip({ point }: { point: ObservationPoint | undefined }) {
 }
 
 /** Pain (0–10, left axis) and sedation (S, 1–4, right axis; S drawn as 0) at each observation. */
-export function PainSedationChart({ observations, window }: { observations: readonly Observation[]; window: { start: string; end: string } | null }) {
+export function PainSedationChart({
+  observations,
+  window,
+}: {
+  observations: readonly Observation[];
+  window: { start: string; end: string } | null;
+}) {
   const points = painAndSedation(observations, window);
   const summary = painAndSedationSummary(points);
   const table = (

@@ -31,11 +31,21 @@ export function PatientPcaOrders({ patientId }: { patientId: number }) {
             </div>
             <Group gap="xs">
               {mayObserve ? (
-                <Button component={Link} to={paths.pcaObserve.getHref(order.id)} variant="default" leftSection={<IconClipboardPlus size={16} aria-hidden />}>
+                <Button
+                  component={Link}
+                  to={paths.pcaObserve.getHref(order.id)}
+                  variant="default"
+                  leftSection={<IconClipboardPlus size={16} aria-hidden />}
+                >
                   Record observation
                 </Button>
               ) : null}
-              <Button component={Link} to={paths.pca.getHref(order.id)} leftSection={<IconChartLine size={16} aria-hidden />} aria-label={`PCA page: ${drugAndConcentration(order)}`}>
+              <Button
+                component={Link}
+                to={paths.pca.getHref(order.id)}
+                leftSection={<IconChartLine size={16} aria-hidden />}
+                aria-label={`PCA page: ${drugAndConcentration(order)}`}
+              >
                 PCA page
               </Button>
             </Group>

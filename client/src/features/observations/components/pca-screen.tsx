@@ -62,7 +62,12 @@ export function PcaScreen({ orderId, hours, onHoursChange }: PcaScreenProps) {
         order={order}
         actions={
           mayObserve ? (
-            <Button component={Link} to={paths.pcaObserve.getHref(order.id)} size="md" leftSection={<IconClipboardPlus size={20} aria-hidden />}>
+            <Button
+              component={Link}
+              to={paths.pcaObserve.getHref(order.id)}
+              size="md"
+              leftSection={<IconClipboardPlus size={20} aria-hidden />}
+            >
               Record observation
             </Button>
           ) : null
@@ -75,7 +80,11 @@ export function PcaScreen({ orderId, hours, onHoursChange }: PcaScreenProps) {
           Observations
         </Title>
         {observations.isError ? (
-          <QueryErrorAlert title="Observations could not be loaded" error={observations.error} onRetry={() => void observations.refetch()} />
+          <QueryErrorAlert
+            title="Observations could not be loaded"
+            error={observations.error}
+            onRetry={() => void observations.refetch()}
+          />
         ) : observations.data ? (
           <ObservationsTable observations={observations.data} />
         ) : (

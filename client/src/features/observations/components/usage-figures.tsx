@@ -35,7 +35,11 @@ export function UsageFigures({ usage, now }: { usage: PcaUsage; now: Date }) {
           value={formatDose(windowDose, unit)}
           detail={`${usage.totals.attempts} attempts, ${usage.totals.delivered} delivered${usage.totals.bolusDose > 0 ? `, boluses ${formatDose(usage.totals.bolusDose, unit)}` : ''}`}
         />
-        <Figure label="Average per hour" value={formatDose(usage.averageDosePerHour, `${unit}/h`)} detail={`Over the last ${usage.hours} hours`} />
+        <Figure
+          label="Average per hour"
+          value={formatDose(usage.averageDosePerHour, `${unit}/h`)}
+          detail={`Over the last ${usage.hours} hours`}
+        />
         <Figure label="Syringe projected empty" {...describeProjectedEmpty(usage.projectedEmptyAt, now)} />
       </SimpleGrid>
       <Alert color="gray" variant="light" icon={<IconInfoCircle aria-hidden />} title="Oral morphine equivalent of the last 24 hours">

@@ -12,7 +12,13 @@ import {
 } from './chart-data';
 
 const UTC = 'UTC';
-const bucket = (start: string, attempts: number, delivered: number, dose: number, bolusDose = 0): UsageBucket => ({ start, attempts, delivered, dose, bolusDose });
+const bucket = (start: string, attempts: number, delivered: number, dose: number, bolusDose = 0): UsageBucket => ({
+  start,
+  attempts,
+  delivered,
+  dose,
+  bolusDose,
+});
 const BUCKETS = [
   bucket('2026-03-03T12:00:00.000Z', 0, 0, 0),
   bucket('2026-03-03T13:00:00.000Z', 6, 4, 0.1 + 0.2, 0.2),
@@ -20,7 +26,21 @@ const BUCKETS = [
 ];
 
 function observation(at: string, painScore: number, sedationLevel: Observation['sedationLevel']): Observation {
-  return { id: 1, releaseId: 1, at, painScore, sedationLevel, respiratoryRate: 14, spo2: 96, attempts: 0, delivered: 0, volumeInfusedMl: 0, syringeRemainingMl: 50, note: '', recordedByName: 'Kai Mendes' };
+  return {
+    id: 1,
+    releaseId: 1,
+    at,
+    painScore,
+    sedationLevel,
+    respiratoryRate: 14,
+    spo2: 96,
+    attempts: 0,
+    delivered: 0,
+    volumeInfusedMl: 0,
+    syringeRemainingMl: 50,
+    note: '',
+    recordedByName: 'Kai Mendes',
+  };
 }
 
 describe('attempts and delivered per hour', () => {
@@ -33,7 +53,9 @@ describe('attempts and delivered per hour', () => {
   });
 
   it('sums the window in words', () => {
-    expect(attemptsSummary(attemptsPerHour(BUCKETS, UTC))).toBe('In the 3 hours shown: 8 attempts, 6 doses delivered. Most attempts in the hour from 13:00 (6).');
+    expect(attemptsSummary(attemptsPerHour(BUCKETS, UTC))).toBe(
+      'In the 3 hours shown: 8 attempts, 6 doses delivered. Most attempts in the hour from 13:00 (6).',
+    );
     expect(attemptsSummary(attemptsPerHour([BUCKETS[0]], UTC))).toBe('In the 1 hour shown: no attempts and no doses delivered.');
   });
 });
@@ -73,7 +95,9 @@ describe('pain and sedation over time', () => {
       { at: '2026-03-03T12:15:00.000Z', time: '12:15', pain: 6, sedation: 0, sedationLevel: 'S' },
       { at: '2026-03-03T14:30:00.000Z', time: '14:30', pain: 4, sedation: 3, sedationLevel: '3' },
     ]);
-    expect(painAndSedationSummary(points)).toBe('2 observations in the hours shown. Latest at 14:30: pain 4/10, sedation 3. Highest pain 6/10; most sedated: 3 at 14:30.');
+    expect(painAndSedationSummary(points)).toBe(
+      '2 observations in the hours shown. Latest at 14:30: pain 4/10, sedation 3. Highest pain 6/10; most sedated: 3 at 14:30.',
+    );
     expect(painAndSedationSummary([])).toBe('No observations in the hours shown.');
     expect(painAndSedation([observation('2026-03-03T12:15:00.000Z', 6, 'S')], null)).toEqual([]);
   });

@@ -13,7 +13,12 @@ export type ObservationPoint = { at: string; time: string; pain: number; sedatio
 
 /** Attempts and delivered doses in each hour of the window, labelled by the hour's start. */
 export function attemptsPerHour(buckets: readonly UsageBucket[], timeZone?: string): HourBar[] {
-  return buckets.map((bucket) => ({ start: bucket.start, hour: formatClock(bucket.start, timeZone), attempts: bucket.attempts, delivered: bucket.delivered }));
+  return buckets.map((bucket) => ({
+    start: bucket.start,
+    hour: formatClock(bucket.start, timeZone),
+    attempts: bucket.attempts,
+    delivered: bucket.delivered,
+  }));
 }
 
 /**
@@ -43,7 +48,11 @@ export function bucketWindow(buckets: readonly UsageBucket[]): { start: string; 
 }
 
 /** Pain and sedation of the observations inside the window, oldest first; sedation S is 0. */
-export function painAndSedation(observations: readonly Observation[], window: { start: string; end: string } | null, timeZone?: string): ObservationPoint[] {
+export function painAndSedation(
+  observations: readonly Observation[],
+  window: { start: string; end: string } | null,
+  timeZone?: string,
+): ObservationPoint[] {
   if (!window) return [];
   const [from, to] = [Date.parse(window.start), Date.parse(window.end)];
   return observations

@@ -3,7 +3,17 @@ import type { FlagResponse } from '@lockstep/shared';
 import { acknowledgeNoteError, splitFlags } from './flags';
 
 function flag(id: number, severity: FlagResponse['severity'], raisedAt: string, acknowledgedAt: string | null = null): FlagResponse {
-  return { id, severity, code: 'x', message: 'm', action: 'a', raisedAt, acknowledgedAt, acknowledgedByName: acknowledgedAt ? 'Kai Mendes' : null, acknowledgeNote: acknowledgedAt ? 'Seen' : null };
+  return {
+    id,
+    severity,
+    code: 'x',
+    message: 'm',
+    action: 'a',
+    raisedAt,
+    acknowledgedAt,
+    acknowledgedByName: acknowledgedAt ? 'Kai Mendes' : null,
+    acknowledgeNote: acknowledgedAt ? 'Seen' : null,
+  };
 }
 
 describe('splitFlags', () => {

@@ -16,7 +16,21 @@ import { observationWarnings } from './observation-warnings';
 const NOW = new Date('2026-03-03T14:00:00.000Z');
 
 function observation(id: number, at: string, releaseId: number, attempts: number, delivered: number, volumeInfusedMl: number): Observation {
-  return { id, releaseId, at, painScore: 3, sedationLevel: '1', respiratoryRate: 14, spo2: 96, attempts, delivered, volumeInfusedMl, syringeRemainingMl: 40, note: '', recordedByName: 'Kai Mendes' };
+  return {
+    id,
+    releaseId,
+    at,
+    painScore: 3,
+    sedationLevel: '1',
+    respiratoryRate: 14,
+    spo2: 96,
+    attempts,
+    delivered,
+    volumeInfusedMl,
+    syringeRemainingMl: 40,
+    note: '',
+    recordedByName: 'Kai Mendes',
+  };
 }
 
 const OBSERVATIONS = [
@@ -28,7 +42,12 @@ const OBSERVATIONS = [
 /** A moment as a `datetime-local` input shows it in this machine's time zone. */
 const localInput = (date: Date) => new Date(date.getTime() - date.getTimezoneOffset() * 60_000).toISOString().slice(0, 16);
 
-const CONTEXT: ObservationCheckContext = { observations: OBSERVATIONS, release: { id: 8, volumeMl: 50 }, startedAt: '2026-03-03T09:00:00.000Z', now: NOW };
+const CONTEXT: ObservationCheckContext = {
+  observations: OBSERVATIONS,
+  release: { id: 8, volumeMl: 50 },
+  startedAt: '2026-03-03T09:00:00.000Z',
+  now: NOW,
+};
 
 const FILLED: ObservationFormValues = {
   ...emptyObservationForm(),
@@ -81,7 +100,10 @@ describe('pump totals', () => {
   it('finds the observations of the running syringe just before and after a time', () => {
     expect(pumpBounds(OBSERVATIONS, 8, NOW).floor).toMatchObject({ attempts: 9, delivered: 6, volumeInfusedMl: 3 });
     expect(pumpBounds(OBSERVATIONS, 8, NOW).ceiling).toBeNull();
-    expect(pumpBounds(OBSERVATIONS, 8, new Date('2026-03-03T12:30:00.000Z'))).toMatchObject({ floor: { attempts: 6 }, ceiling: { attempts: 9 } });
+    expect(pumpBounds(OBSERVATIONS, 8, new Date('2026-03-03T12:30:00.000Z'))).toMatchObject({
+      floor: { attempts: 6 },
+      ceiling: { attempts: 9 },
+    });
     // A new syringe starts from zero: the previous syringe's totals do not count.
     expect(pumpBounds(OBSERVATIONS, 9, NOW)).toEqual({ floor: null, ceiling: null });
   });
@@ -108,7 +130,9 @@ describe('the time of the observation', () => {
   it('is never in the future nor before the PCA started', () => {
     const future = new Date(NOW.getTime() + 10 * 60_000);
     expect(validateObservationForm({ ...FILLED, at: localInput(future) }, CONTEXT).at).toBe('An observation cannot be in the future');
-    expect(validateObservationForm({ ...FILLED, at: localInput(new Date('2026-03-03T08:00:00.000Z')) }, CONTEXT).at).toBe('An observation cannot be before the PCA started');
+    expect(validateObservationForm({ ...FILLED, at: localInput(new Date('2026-03-03T08:00:00.000Z')) }, CONTEXT).at).toBe(
+      'An observation cannot be before the PCA started',
+    );
     expect(validateObservationForm({ ...FILLED, at: 'yesterday' }, CONTEXT).at).toBe('Enter the date and time of the observation');
   });
 });

@@ -5,7 +5,15 @@ import type { Observation } from '../api/pca-schemas';
 /** A NumberInput's value: a number, or text while empty ('') or half-typed. */
 export type NumberFieldValue = number | string;
 
-export const NUMBER_FIELDS = ['painScore', 'respiratoryRate', 'spo2', 'attempts', 'delivered', 'volumeInfusedMl', 'syringeRemainingMl'] as const;
+export const NUMBER_FIELDS = [
+  'painScore',
+  'respiratoryRate',
+  'spo2',
+  'attempts',
+  'delivered',
+  'volumeInfusedMl',
+  'syringeRemainingMl',
+] as const;
 export type NumberField = (typeof NUMBER_FIELDS)[number];
 
 export const PUMP_TOTAL_FIELDS = ['attempts', 'delivered', 'volumeInfusedMl'] as const;
@@ -23,7 +31,18 @@ export type ObservationFormValues = Record<NumberField, NumberFieldValue> & {
 export type ObservationFormErrors = Partial<Record<keyof ObservationFormValues, string>>;
 
 export function emptyObservationForm(): ObservationFormValues {
-  return { painScore: '', sedationLevel: '', respiratoryRate: '', spo2: '', attempts: '', delivered: '', volumeInfusedMl: '', syringeRemainingMl: '', at: '', note: '' };
+  return {
+    painScore: '',
+    sedationLevel: '',
+    respiratoryRate: '',
+    spo2: '',
+    attempts: '',
+    delivered: '',
+    volumeInfusedMl: '',
+    syringeRemainingMl: '',
+    at: '',
+    note: '',
+  };
 }
 
 interface NumberRule {
@@ -38,13 +57,69 @@ interface NumberRule {
 
 // Plausible ranges, the same as the server's, with the same words.
 export const NUMBER_RULES: Record<NumberField, NumberRule> = {
-  painScore: { min: 0, max: 10, integer: true, empty: 'Enter the pain score', notWhole: 'Pain score is a whole number from 0 to 10', below: 'Pain score is 0 to 10', above: 'Pain score is 0 to 10' },
-  respiratoryRate: { min: 0, max: 80, integer: true, empty: 'Enter the respiratory rate', notWhole: 'Respiratory rate is a whole number per minute', below: 'Respiratory rate is 0 to 80 per minute', above: 'Respiratory rate is 0 to 80 per minute' },
-  spo2: { min: 0, max: 100, integer: true, empty: 'Enter the SpO2', notWhole: 'SpO2 is a whole number of %', below: 'SpO2 is 0 to 100 %', above: 'SpO2 is 0 to 100 %' },
-  attempts: { min: 0, max: 100_000, integer: true, empty: 'Enter the attempts from the pump', notWhole: 'Attempts is a whole number from the pump', below: 'Attempts cannot be negative', above: 'Attempts looks too large: check the pump' },
-  delivered: { min: 0, max: 100_000, integer: true, empty: 'Enter the doses delivered from the pump', notWhole: 'Delivered is a whole number from the pump', below: 'Delivered cannot be negative', above: 'Delivered looks too large: check the pump' },
-  volumeInfusedMl: { min: 0, max: 1000, integer: false, empty: 'Enter the volume infused from the pump', notWhole: '', below: 'Volume infused cannot be negative', above: 'Volume infused looks too large: check the pump' },
-  syringeRemainingMl: { min: 0, max: 1000, integer: false, empty: 'Enter the volume left in the syringe', notWhole: '', below: 'Syringe remaining cannot be negative', above: 'Syringe remaining looks too large: check the syringe' },
+  painScore: {
+    min: 0,
+    max: 10,
+    integer: true,
+    empty: 'Enter the pain score',
+    notWhole: 'Pain score is a whole number from 0 to 10',
+    below: 'Pain score is 0 to 10',
+    above: 'Pain score is 0 to 10',
+  },
+  respiratoryRate: {
+    min: 0,
+    max: 80,
+    integer: true,
+    empty: 'Enter the respiratory rate',
+    notWhole: 'Respiratory rate is a whole number per minute',
+    below: 'Respiratory rate is 0 to 80 per minute',
+    above: 'Respiratory rate is 0 to 80 per minute',
+  },
+  spo2: {
+    min: 0,
+    max: 100,
+    integer: true,
+    empty: 'Enter the SpO2',
+    notWhole: 'SpO2 is a whole number of %',
+    below: 'SpO2 is 0 to 100 %',
+    above: 'SpO2 is 0 to 100 %',
+  },
+  attempts: {
+    min: 0,
+    max: 100_000,
+    integer: true,
+    empty: 'Enter the attempts from the pump',
+    notWhole: 'Attempts is a whole number from the pump',
+    below: 'Attempts cannot be negative',
+    above: 'Attempts looks too large: check the pump',
+  },
+  delivered: {
+    min: 0,
+    max: 100_000,
+    integer: true,
+    empty: 'Enter the doses delivered from the pump',
+    notWhole: 'Delivered is a whole number from the pump',
+    below: 'Delivered cannot be negative',
+    above: 'Delivered looks too large: check the pump',
+  },
+  volumeInfusedMl: {
+    min: 0,
+    max: 1000,
+    integer: false,
+    empty: 'Enter the volume infused from the pump',
+    notWhole: '',
+    below: 'Volume infused cannot be negative',
+    above: 'Volume infused looks too large: check the pump',
+  },
+  syringeRemainingMl: {
+    min: 0,
+    max: 1000,
+    integer: false,
+    empty: 'Enter the volume left in the syringe',
+    notWhole: '',
+    below: 'Syringe remaining cannot be negative',
+    above: 'Syringe remaining looks too large: check the syringe',
+  },
 };
 
 /** '' is "not entered" (null); plain decimals only ("1e2" is not read off a pump); otherwise undefined. */
@@ -84,12 +159,21 @@ export interface PumpBounds {
 
 /** What the running syringe's earlier and later observations allow for pump totals at `at`. */
 export function pumpBounds(observations: readonly Observation[], releaseId: number | null, at: Date): PumpBounds {
-  const sameSyringe = observations.filter((observation) => observation.releaseId === releaseId).sort((a, b) => Date.parse(a.at) - Date.parse(b.at));
+  const sameSyringe = observations
+    .filter((observation) => observation.releaseId === releaseId)
+    .sort((a, b) => Date.parse(a.at) - Date.parse(b.at));
   const time = at.getTime();
   const before = sameSyringe.filter((observation) => Date.parse(observation.at) <= time).at(-1);
   const after = sameSyringe.find((observation) => Date.parse(observation.at) > time);
   const totals = (observation: Observation | undefined) =>
-    observation ? { at: observation.at, attempts: observation.attempts, delivered: observation.delivered, volumeInfusedMl: observation.volumeInfusedMl } : null;
+    observation
+      ? {
+          at: observation.at,
+          attempts: observation.attempts,
+          delivered: observation.delivered,
+          volumeInfusedMl: observation.volumeInfusedMl,
+        }
+      : null;
   return { floor: totals(before), ceiling: totals(after) };
 }
 
@@ -118,7 +202,8 @@ export function validateObservationForm(values: ObservationFormValues, context: 
     const typed = readLocalDateTime(values.at.trim());
     if (!typed) errors.at = 'Enter the date and time of the observation';
     else if (typed.getTime() > context.now.getTime() + CLOCK_SKEW_MS) errors.at = 'An observation cannot be in the future';
-    else if (context.startedAt && typed.getTime() < Date.parse(context.startedAt)) errors.at = 'An observation cannot be before the PCA started';
+    else if (context.startedAt && typed.getTime() < Date.parse(context.startedAt))
+      errors.at = 'An observation cannot be before the PCA started';
     else at = typed;
   }
 
@@ -127,7 +212,8 @@ export function validateObservationForm(values: ObservationFormValues, context: 
     const value = readNumber(values[field]);
     if (errors[field] || typeof value !== 'number') continue;
     if (floor && value < floor[field]) errors[field] = `At least ${floor[field]}: pump totals never go down within one syringe`;
-    else if (ceiling && value > ceiling[field]) errors[field] = `At most ${ceiling[field]}: a later observation of this syringe has ${ceiling[field]}`;
+    else if (ceiling && value > ceiling[field])
+      errors[field] = `At most ${ceiling[field]}: a later observation of this syringe has ${ceiling[field]}`;
   }
   const syringeMl = context.release?.volumeMl;
   for (const field of ['volumeInfusedMl', 'syringeRemainingMl'] as const) {

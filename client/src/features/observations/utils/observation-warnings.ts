@@ -7,7 +7,10 @@ export type ObservationWarnings = Partial<Record<'sedationLevel' | 'respiratoryR
  * What saving will raise as urgent, said while the nurse types: the sedation scale's action for
  * 3 and 4, and breathing below the ward's thresholds. Warnings, not errors: the value is saved.
  */
-export function observationWarnings(values: ObservationFormValues, thresholds: Pick<WardPolicy, 'respiratoryRateThreshold' | 'spo2Threshold'> | undefined): ObservationWarnings {
+export function observationWarnings(
+  values: ObservationFormValues,
+  thresholds: Pick<WardPolicy, 'respiratoryRateThreshold' | 'spo2Threshold'> | undefined,
+): ObservationWarnings {
   const warnings: ObservationWarnings = {};
   if (values.sedationLevel === '3' || values.sedationLevel === '4') warnings.sedationLevel = SEDATION_ACTIONS[values.sedationLevel];
   if (!thresholds) return warnings;

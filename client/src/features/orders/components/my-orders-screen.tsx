@@ -28,7 +28,12 @@ export function MyOrdersScreen() {
     <Stack gap="md">
       <Title order={1}>My orders</Title>
       {returned > 0 ? (
-        <Alert color="grape" variant="light" icon={<IconArrowBackUp aria-hidden />} title={`${returned} ${returned === 1 ? 'order' : 'orders'} returned with a query`}>
+        <Alert
+          color="grape"
+          variant="light"
+          icon={<IconArrowBackUp aria-hidden />}
+          title={`${returned} ${returned === 1 ? 'order' : 'orders'} returned with a query`}
+        >
           <Text size="sm">Read the pharmacist&apos;s query, then revise and sign the order again, or cancel it.</Text>
         </Alert>
       ) : null}

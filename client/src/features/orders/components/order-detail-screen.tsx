@@ -48,7 +48,13 @@ export function OrderDetailScreen({ orderId, weightKg, patientBanner, story }: O
   if (orderQuery.isPending) return <OrderLoading />;
   if (orderQuery.isError) {
     const notFound = isApiRequestError(orderQuery.error) && orderQuery.error.status === 404;
-    return <QueryErrorAlert title={notFound ? 'Order not found' : 'The order could not be loaded'} error={orderQuery.error} onRetry={notFound ? undefined : () => void orderQuery.refetch()} />;
+    return (
+      <QueryErrorAlert
+        title={notFound ? 'Order not found' : 'The order could not be loaded'}
+        error={orderQuery.error}
+        onRetry={notFound ? undefined : () => void orderQuery.refetch()}
+      />
+    );
   }
   const order = orderQuery.data;
   const pharmacist = user.role === 'pharmacist';
@@ -71,7 +77,12 @@ export function OrderDetailScreen({ orderId, weightKg, patientBanner, story }: O
   }
   if (pharmacist && order.status === 'awaiting_verification') {
     actions.push(
-      <Button key="verify" component={Link} to={paths.verification.getHref(order.id)} leftSection={<IconClipboardCheck size={16} aria-hidden />}>
+      <Button
+        key="verify"
+        component={Link}
+        to={paths.verification.getHref(order.id)}
+        leftSection={<IconClipboardCheck size={16} aria-hidden />}
+      >
         Open in verification
       </Button>,
     );
@@ -87,7 +98,14 @@ export function OrderDetailScreen({ orderId, weightKg, patientBanner, story }: O
     <Stack gap="md">
       <OrderHeader order={order} title={`PCA order ${order.id}`} actions={actions.length > 0 ? actions : undefined} />
       {patientBanner}
-      <OrderReview order={order} previous={previousQuery.data ?? null} weightKg={weightKg} canPrint={pharmacist} releaseAction={releaseAction} story={story} />
+      <OrderReview
+        order={order}
+        previous={previousQuery.data ?? null}
+        weightKg={weightKg}
+        canPrint={pharmacist}
+        releaseAction={releaseAction}
+        story={story}
+      />
       {modal === 'cancel' ? <CancelOrderModal order={order} onClose={() => setModal(null)} /> : null}
       {modal === 'release' ? <ReleaseModal order={order} onClose={() => setModal(null)} /> : null}
     </Stack>

@@ -65,7 +65,9 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
       return;
     }
     if (blocking.length > 0) {
-      setFormAlert([`Signing is blocked: correct ${blocking.length === 1 ? 'the value' : `the ${blocking.length} values`} marked as an error or outside a hard limit.`]);
+      setFormAlert([
+        `Signing is blocked: correct ${blocking.length === 1 ? 'the value' : `the ${blocking.length} values`} marked as an error or outside a hard limit.`,
+      ]);
       return;
     }
     const { signature: _unused, ...request } = orderRequest(check.fields, values, soft, '');
@@ -132,7 +134,12 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
               <Paper withBorder radius="md" p="md">
                 <Stack gap="md">
                   <Title order={2}>Indication and review</Title>
-                  <TextInput label="Indication" description="Optional, e.g. pain after laparotomy" size="md" {...form.getInputProps('indication')} />
+                  <TextInput
+                    label="Indication"
+                    description="Optional, e.g. pain after laparotomy"
+                    size="md"
+                    {...form.getInputProps('indication')}
+                  />
                   <TextInput label="Review date" type="date" size="md" withAsterisk maw={260} {...form.getInputProps('reviewDate')} />
                 </Stack>
               </Paper>

@@ -22,7 +22,8 @@ export interface OrderHeaderProps {
 
 /** The order's title, status, who signed and verified it, and why it was returned or ended. */
 export function OrderHeader({ order, title, actions }: OrderHeaderProps) {
-  const reasonLook = order.status === 'returned' || order.status === 'rejected' || order.status === 'cancelled' ? REASON_LOOK[order.status] : null;
+  const reasonLook =
+    order.status === 'returned' || order.status === 'rejected' || order.status === 'cancelled' ? REASON_LOOK[order.status] : null;
   return (
     <Stack gap="sm">
       <Group justify="space-between" align="flex-start" wrap="wrap">
@@ -32,9 +33,12 @@ export function OrderHeader({ order, title, actions }: OrderHeaderProps) {
             <OrderStatusBadge status={order.status} size="lg" />
           </Group>
           <Text size="sm" c="dimmed" className="tabular-nums">
-            Version {order.version} · {REGIMEN_TYPE_LABELS[order.regimenType]} · signed by {order.prescriberName}, {formatDateTime(order.signedAt)}
-            {order.verifiedByName && order.verifiedAt ? ` · verified by ${order.verifiedByName}, ${formatDateTime(order.verifiedAt)}` : ''} · review{' '}
-            {formatCalendarDate(order.reviewDate)}
+            Version {order.version} · {REGIMEN_TYPE_LABELS[order.regimenType]} · signed by {order.prescriberName},{' '}
+            {formatDateTime(order.signedAt)}
+            {order.verifiedByName && order.verifiedAt
+              ? ` · verified by ${order.verifiedByName}, ${formatDateTime(order.verifiedAt)}`
+              : ''}{' '}
+            · review {formatCalendarDate(order.reviewDate)}
           </Text>
           {order.supersedesId !== null ? (
             <Text size="sm">

@@ -51,7 +51,12 @@ export function OrderReview({ order, previous, weightKg, canPrint, releaseAction
   return (
     <Stack gap="md">
       {query && previous ? (
-        <Alert color="grape" variant="light" icon={<IconArrowBackUp aria-hidden />} title={`Query on version ${previous.version} (order ${previous.id})`}>
+        <Alert
+          color="grape"
+          variant="light"
+          icon={<IconArrowBackUp aria-hidden />}
+          title={`Query on version ${previous.version} (order ${previous.id})`}
+        >
           <Text size="sm">{query}</Text>
         </Alert>
       ) : null}

@@ -96,12 +96,23 @@ export function OrdersTable({ orders, label, isLoading, empty, showPatient, onOp
                 return (
                   <Group gap={6} wrap="nowrap" onClick={(event) => event.stopPropagation()} onKeyDown={(event) => event.stopPropagation()}>
                     {order.status === 'returned' ? (
-                      <Button size="xs" leftSection={<IconPencil size={14} aria-hidden />} onClick={() => actions.onRevise(order)} aria-label={`Revise ${describe}`}>
+                      <Button
+                        size="xs"
+                        leftSection={<IconPencil size={14} aria-hidden />}
+                        onClick={() => actions.onRevise(order)}
+                        aria-label={`Revise ${describe}`}
+                      >
                         Revise
                       </Button>
                     ) : null}
                     {CANCELLABLE_STATUSES.includes(order.status) ? (
-                      <Button size="xs" variant="default" leftSection={<IconSquareX size={14} aria-hidden />} onClick={() => actions.onCancel(order)} aria-label={`Cancel ${describe}`}>
+                      <Button
+                        size="xs"
+                        variant="default"
+                        leftSection={<IconSquareX size={14} aria-hidden />}
+                        onClick={() => actions.onCancel(order)}
+                        aria-label={`Cancel ${describe}`}
+                      >
                         Cancel
                       </Button>
                     ) : null}

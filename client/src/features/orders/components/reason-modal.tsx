@@ -21,7 +21,18 @@ export interface ReasonModalProps {
 }
 
 /** An action that records why: return with a query, reject, cancel. Ten characters at least. */
-export function ReasonModal({ title, children, label, description, confirmLabel, confirmColor, pending, refusal, onConfirm, onClose }: ReasonModalProps) {
+export function ReasonModal({
+  title,
+  children,
+  label,
+  description,
+  confirmLabel,
+  confirmColor,
+  pending,
+  refusal,
+  onConfirm,
+  onClose,
+}: ReasonModalProps) {
   const form = useForm({ initialValues: { reason: '' }, validate: zod4Resolver(reasonRequestSchema) });
   const submit = form.onSubmit(({ reason }) => onConfirm(reason.trim()));
   return (

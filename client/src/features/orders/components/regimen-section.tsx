@@ -1,6 +1,13 @@
 import { Paper, SimpleGrid, Stack, Text, Title } from '@mantine/core';
 import type { UseFormReturnType } from '@mantine/form';
-import { REGIMEN_FIELDS, regimenFieldUnit, type Finding, type LimitRuleResponse, type OrderSummary, type RegimenField } from '@lockstep/shared';
+import {
+  REGIMEN_FIELDS,
+  regimenFieldUnit,
+  type Finding,
+  type LimitRuleResponse,
+  type OrderSummary,
+  type RegimenField,
+} from '@lockstep/shared';
 import { findingsFor } from '../utils/findings';
 import { readAmount, REQUIRED_FIELDS, type OrderFormValues } from '../utils/order-form';
 import { fieldValueText, limitRangeText } from '../utils/regimen-format';

@@ -72,7 +72,11 @@ export function RegimenTable({ order, previous, weightKg, caption }: RegimenTabl
             <Table.Tr
               key={row.field}
               data-changed={row.changed || undefined}
-              style={row.changed ? { background: 'var(--mantine-color-yellow-0)', boxShadow: 'inset 4px 0 0 var(--mantine-color-yellow-6)' } : undefined}
+              style={
+                row.changed
+                  ? { background: 'var(--mantine-color-yellow-0)', boxShadow: 'inset 4px 0 0 var(--mantine-color-yellow-6)' }
+                  : undefined
+              }
             >
               <Table.Th scope="row" fw={500}>
                 <Group gap={6} wrap="nowrap">

@@ -18,7 +18,8 @@ export interface ReleaseLabelScreenProps {
 export function ReleaseLabelScreen({ orderId, releaseId }: ReleaseLabelScreenProps) {
   const orderQuery = useOrder(orderId);
   if (orderQuery.isPending) return <OrderLoading />;
-  if (orderQuery.isError) return <QueryErrorAlert title="The label could not be loaded" error={orderQuery.error} onRetry={() => void orderQuery.refetch()} />;
+  if (orderQuery.isError)
+    return <QueryErrorAlert title="The label could not be loaded" error={orderQuery.error} onRetry={() => void orderQuery.refetch()} />;
   const order = orderQuery.data;
   const release = order.releases.find((candidate) => candidate.id === releaseId);
 

@@ -2,7 +2,14 @@ import { useState } from 'react';
 import { Alert, Button, Group, Modal, SimpleGrid, Stack, Text, Textarea, TextInput } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconAlertCircle, IconPackageExport } from '@tabler/icons-react';
-import { DECISION_SUPPORT_CAUTION, formatDose, MIN_REASON_LENGTH, USUAL_SYRINGE_ML, type OrderSummary, type SyringeReleaseResponse } from '@lockstep/shared';
+import {
+  DECISION_SUPPORT_CAUTION,
+  formatDose,
+  MIN_REASON_LENGTH,
+  USUAL_SYRINGE_ML,
+  type OrderSummary,
+  type SyringeReleaseResponse,
+} from '@lockstep/shared';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateRelease } from '../api/create-release';
@@ -39,7 +46,8 @@ export function ReleaseModal({ order, onClose }: ReleaseModalProps) {
       { orderId: order.id, request },
       {
         onSuccess: setReleased,
-        onError: (error) => setFormAlert(isApiRequestError(error) && error.status === 400 ? applyServerErrors(form, error) : [errorMessage(error)]),
+        onError: (error) =>
+          setFormAlert(isApiRequestError(error) && error.status === 400 ? applyServerErrors(form, error) : [errorMessage(error)]),
       },
     );
   });
@@ -82,15 +90,30 @@ export function ReleaseModal({ order, onClose }: ReleaseModalProps) {
             />
             <TextInput
               label="Volume"
-              description={total ? `Holds ${total} in ${formatDose(volume ?? Number.NaN, 'mL')}` : `Usually ${USUAL_SYRINGE_ML.min}–${USUAL_SYRINGE_ML.max} mL`}
-              rightSection={<Text size="sm" c="dimmed">mL</Text>}
+              description={
+                total
+                  ? `Holds ${total} in ${formatDose(volume ?? Number.NaN, 'mL')}`
+                  : `Usually ${USUAL_SYRINGE_ML.min}–${USUAL_SYRINGE_ML.max} mL`
+              }
+              rightSection={
+                <Text size="sm" c="dimmed">
+                  mL
+                </Text>
+              }
               inputMode="decimal"
               size="md"
               withAsterisk
               {...form.getInputProps('volumeMl')}
             />
             <TextInput label="Batch" size="md" withAsterisk autoComplete="off" {...form.getInputProps('batch')} />
-            <TextInput label="Expiry" description="Date and time" type="datetime-local" size="md" withAsterisk {...form.getInputProps('expiresAt')} />
+            <TextInput
+              label="Expiry"
+              description="Date and time"
+              type="datetime-local"
+              size="md"
+              withAsterisk
+              {...form.getInputProps('expiresAt')}
+            />
             <TextInput label="Prepared by" size="md" withAsterisk autoComplete="off" {...form.getInputProps('preparedBy')} />
             <TextInput label="Checked by" size="md" withAsterisk autoComplete="off" {...form.getInputProps('checkedBy')} />
           </SimpleGrid>

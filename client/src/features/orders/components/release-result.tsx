@@ -13,14 +13,7 @@ export function ReleaseResult({ release, onDone }: { release: SyringeReleaseResp
         <Text size="sm" c="dimmed">
           Release code
         </Text>
-        <Text
-          ff="monospace"
-          fw={700}
-          fz={44}
-          lh={1.2}
-          style={{ letterSpacing: '0.12em' }}
-          data-testid="release-code"
-        >
+        <Text ff="monospace" fw={700} fz={44} lh={1.2} style={{ letterSpacing: '0.12em' }} data-testid="release-code">
           {release.releaseCode}
         </Text>
         <Text size="sm" className="tabular-nums">
@@ -33,7 +26,11 @@ export function ReleaseResult({ release, onDone }: { release: SyringeReleaseResp
         <Button variant="default" onClick={onDone}>
           Done
         </Button>
-        <Button component={Link} to={paths.releaseLabel.getHref(release.orderId, release.id)} leftSection={<IconPrinter size={16} aria-hidden />}>
+        <Button
+          component={Link}
+          to={paths.releaseLabel.getHref(release.orderId, release.id)}
+          leftSection={<IconPrinter size={16} aria-hidden />}
+        >
           Print label
         </Button>
       </Group>

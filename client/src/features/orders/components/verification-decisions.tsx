@@ -80,7 +80,11 @@ export function VerificationDecision({ order, decision, onDone, onConflict, onCl
     <ReasonModal
       title={returning ? `Return order ${order.id} with a query` : `Reject order ${order.id}`}
       label={returning ? 'Query for the prescriber' : 'Reason for rejecting'}
-      description={returning ? 'The prescriber reads this, revises the order and signs it again. At least 10 characters.' : 'The prescriber reads this. At least 10 characters.'}
+      description={
+        returning
+          ? 'The prescriber reads this, revises the order and signs it again. At least 10 characters.'
+          : 'The prescriber reads this. At least 10 characters.'
+      }
       confirmLabel={returning ? 'Return to prescriber' : 'Reject order'}
       confirmColor={returning ? undefined : 'red'}
       pending={mutation.isPending}

@@ -32,7 +32,10 @@ export function VerificationQueueScreen({ wards, wardsLoading }: VerificationQue
   const [searchParams, setSearchParams] = useSearchParams();
   const ward = searchParams.get('ward') ?? ALL_WARDS;
   const wardId = ward === ALL_WARDS ? undefined : Number(ward);
-  const ordersQuery = useOrders({ status: AWAITING, wardId: Number.isInteger(wardId) ? wardId : undefined }, { refetchInterval: QUEUE_REFRESH_MS });
+  const ordersQuery = useOrders(
+    { status: AWAITING, wardId: Number.isInteger(wardId) ? wardId : undefined },
+    { refetchInterval: QUEUE_REFRESH_MS },
+  );
   const [sorting, setSorting] = useState<SortingState>([{ id: 'waiting', desc: false }]);
 
   const columns = useMemo(
@@ -64,7 +67,11 @@ export function VerificationQueueScreen({ wards, wardsLoading }: VerificationQue
           </div>
         ),
       }),
-      column.accessor((order) => `${order.wardName} ${order.bed}`, { id: 'ward', header: 'Ward and bed', cell: ({ row }) => `${row.original.wardName}, bed ${row.original.bed}` }),
+      column.accessor((order) => `${order.wardName} ${order.bed}`, {
+        id: 'ward',
+        header: 'Ward and bed',
+        cell: ({ row }) => `${row.original.wardName}, bed ${row.original.bed}`,
+      }),
       column.accessor((order) => regimenSummary(order), {
         id: 'regimen',
         header: 'Regimen',
@@ -120,7 +127,14 @@ export function VerificationQueueScreen({ wards, wardsLoading }: VerificationQue
           label="Orders awaiting verification"
           isLoading={ordersQuery.isPending}
           onRowOpen={(order) => navigate(paths.verification.getHref(order.id))}
-          empty={<EmptyState size="sm" icon={<IconClipboardCheck aria-hidden />} title="Nothing to verify" description="No order is awaiting verification on this ward." />}
+          empty={
+            <EmptyState
+              size="sm"
+              icon={<IconClipboardCheck aria-hidden />}
+              title="Nothing to verify"
+              description="No order is awaiting verification on this ward."
+            />
+          }
         />
       )}
     </Stack>

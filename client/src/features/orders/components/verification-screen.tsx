@@ -32,7 +32,13 @@ export function VerificationScreen({ orderId, weightKg, patientBanner }: Verific
   if (orderQuery.isPending) return <OrderLoading />;
   if (orderQuery.isError) {
     const notFound = isApiRequestError(orderQuery.error) && orderQuery.error.status === 404;
-    return <QueryErrorAlert title={notFound ? 'Order not found' : 'The order could not be loaded'} error={orderQuery.error} onRetry={notFound ? undefined : () => void orderQuery.refetch()} />;
+    return (
+      <QueryErrorAlert
+        title={notFound ? 'Order not found' : 'The order could not be loaded'}
+        error={orderQuery.error}
+        onRetry={notFound ? undefined : () => void orderQuery.refetch()}
+      />
+    );
   }
   const order = orderQuery.data;
   const awaiting = order.status === 'awaiting_verification';

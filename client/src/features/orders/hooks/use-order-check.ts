@@ -1,6 +1,13 @@
 import { useMemo } from 'react';
 import { useDebouncedValue } from '@mantine/hooks';
-import { deriveOrderValues, type Finding, type LimitRuleResponse, type OrderDerivedValues, type OrderFields, type Patient } from '@lockstep/shared';
+import {
+  deriveOrderValues,
+  type Finding,
+  type LimitRuleResponse,
+  type OrderDerivedValues,
+  type OrderFields,
+  type Patient,
+} from '@lockstep/shared';
 import { useOrderPreview } from '../api/preview-order';
 import { sameFindings } from '../utils/findings';
 import { localFindings, patientFactors, readOrderForm, type OrderFormValues } from '../utils/order-form';

@@ -2,7 +2,12 @@ import { describe, expect, it } from 'vitest';
 import type { Finding } from '@lockstep/shared';
 import { blockingFindings, countBySeverity, findingsByField, findingsFor, generalFindings, sameFindings, softFields } from './findings';
 
-const finding = (field: string, severity: Finding['severity'], code = `${severity}.${field}`): Finding => ({ field, severity, code, message: `${field} ${severity}` });
+const finding = (field: string, severity: Finding['severity'], code = `${severity}.${field}`): Finding => ({
+  field,
+  severity,
+  code,
+  message: `${field} ${severity}`,
+});
 
 const findings: Finding[] = [
   finding('oneHourLimit', 'error'),
@@ -30,11 +35,9 @@ describe('findings by field', () => {
   });
 
   it('keeps findings with no input of their own for the panel', () => {
-    expect(generalFindings([...findings, finding('weightKg', 'error'), finding('concentrationPerMl', 'hard')]).map((f) => f.field)).toEqual([
-      'patient',
-      'patient',
-      'weightKg',
-    ]);
+    expect(generalFindings([...findings, finding('weightKg', 'error'), finding('concentrationPerMl', 'hard')]).map((f) => f.field)).toEqual(
+      ['patient', 'patient', 'weightKg'],
+    );
   });
 
   it('compares two checks by what they found, not by wording or order', () => {

@@ -7,7 +7,9 @@ describe('placing order errors on the form', () => {
     expect(orderFormPath('lockoutMinutes', [], [])).toBe('lockoutMinutes');
     expect(orderFormPath('demandDose', [], ['demandDose'])).toBe('reasons.demandDose');
     expect(orderFormPath('concentrationPerMl', [], [])).toBe('ruleId');
-    expect(orderFormPath('overrides.1.reason', ['demandDose', 'fourHourLimit'], ['demandDose', 'fourHourLimit'])).toBe('reasons.fourHourLimit');
+    expect(orderFormPath('overrides.1.reason', ['demandDose', 'fourHourLimit'], ['demandDose', 'fourHourLimit'])).toBe(
+      'reasons.fourHourLimit',
+    );
     expect(orderFormPath('overrides.4.reason', ['demandDose'], [])).toBeNull();
     expect(orderFormPath('weightKg', [], [])).toBeNull();
   });
@@ -30,15 +32,32 @@ describe('placing order errors on the form', () => {
   });
 
   it('checks reasons and the review date with the shared schema before the password is asked for', () => {
-    const values = { ...emptyOrderForm(new Date(2026, 2, 5)), reviewDate: '', reasons: { ...emptyOrderForm(new Date()).reasons, demandDose: 'too short' } };
-    const fields = { patientId: 1, drugId: 1, concentrationPerMl: 1, doseUnit: 'mg' as const, demandDose: 2.5, lockoutMinutes: 10, basalRatePerHour: 0 };
+    const values = {
+      ...emptyOrderForm(new Date(2026, 2, 5)),
+      reviewDate: '',
+      reasons: { ...emptyOrderForm(new Date()).reasons, demandDose: 'too short' },
+    };
+    const fields = {
+      patientId: 1,
+      drugId: 1,
+      concentrationPerMl: 1,
+      doseUnit: 'mg' as const,
+      demandDose: 2.5,
+      lockoutMinutes: 10,
+      basalRatePerHour: 0,
+    };
     const { signature: _signature, ...unsigned } = orderRequest(fields, values, ['demandDose'], '');
     expect(unsigned.overrides).toEqual([{ field: 'demandDose', reason: 'too short' }]);
     expect(unsignedOrderErrors(unsigned, ['demandDose'])).toEqual({
       reviewDate: 'Enter the review date',
       'reasons.demandDose': 'Give a reason of at least 10 characters',
     });
-    const fixed = orderRequest(fields, { ...values, reviewDate: '2026-03-06', reasons: { ...values.reasons, demandDose: 'Tolerated 2.5 mg in recovery' } }, ['demandDose'], 'pw');
+    const fixed = orderRequest(
+      fields,
+      { ...values, reviewDate: '2026-03-06', reasons: { ...values.reasons, demandDose: 'Tolerated 2.5 mg in recovery' } },
+      ['demandDose'],
+      'pw',
+    );
     expect(unsignedOrderErrors(fixed, ['demandDose'])).toEqual({});
   });
 });

@@ -1,4 +1,11 @@
-import { createOrderSchema, REGIMEN_FIELDS, type CreateOrderRequest, type FieldError, type OrderFields, type RegimenField } from '@lockstep/shared';
+import {
+  createOrderSchema,
+  REGIMEN_FIELDS,
+  type CreateOrderRequest,
+  type FieldError,
+  type OrderFields,
+  type RegimenField,
+} from '@lockstep/shared';
 import type { OrderFormValues } from './order-form';
 
 const RULE_FIELDS: ReadonlySet<string> = new Set(['concentrationPerMl', 'drugId', 'doseUnit']);
@@ -31,7 +38,11 @@ export interface PlacedOrderErrors {
 }
 
 /** A 400's `[{field, message}]` placed beside the order form's inputs; the rest for an alert. */
-export function placeOrderErrors(errors: readonly FieldError[], overrideFields: readonly string[], softFields: readonly string[]): PlacedOrderErrors {
+export function placeOrderErrors(
+  errors: readonly FieldError[],
+  overrideFields: readonly string[],
+  softFields: readonly string[],
+): PlacedOrderErrors {
   const fieldErrors: Record<string, string> = {};
   const otherErrors: string[] = [];
   for (const { field, message } of errors) {
@@ -43,7 +54,12 @@ export function placeOrderErrors(errors: readonly FieldError[], overrideFields: 
 }
 
 /** What signing sends, short of the password: the fields, review date and a reason per soft finding. */
-export function orderRequest(fields: OrderFields, values: OrderFormValues, soft: readonly RegimenField[], password: string): CreateOrderRequest {
+export function orderRequest(
+  fields: OrderFields,
+  values: OrderFormValues,
+  soft: readonly RegimenField[],
+  password: string,
+): CreateOrderRequest {
   return {
     ...fields,
     reviewDate: values.reviewDate,

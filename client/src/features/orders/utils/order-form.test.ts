@@ -1,6 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import type { LimitRuleResponse, OrderDetail, Patient } from '@lockstep/shared';
-import { emptyOrderForm, localFindings, nextDay, patientFactors, readAmount, readOrderForm, valuesFromOrder, type OrderFormValues } from './order-form';
+import {
+  emptyOrderForm,
+  localFindings,
+  nextDay,
+  patientFactors,
+  readAmount,
+  readOrderForm,
+  valuesFromOrder,
+  type OrderFormValues,
+} from './order-form';
 
 // The demo Harbour morphine 1 mg/mL rule (invented demo values).
 const morphine: LimitRuleResponse = {
@@ -10,7 +19,10 @@ const morphine: LimitRuleResponse = {
   concentrationPerMl: 1,
   doseUnit: 'mg',
   perKg: false,
-  limits: { demandDose: { hardMin: 0.2, softMin: 0.5, softMax: 2, hardMax: 3 }, lockoutMinutes: { hardMin: 5, softMin: 6, softMax: 15, hardMax: 30 } },
+  limits: {
+    demandDose: { hardMin: 0.2, softMin: 0.5, softMax: 2, hardMax: 3 },
+    lockoutMinutes: { hardMin: 5, softMin: 6, softMax: 15, hardMax: 30 },
+  },
 };
 
 const noah: Patient = {
@@ -31,7 +43,13 @@ const noah: Patient = {
 };
 
 const today = new Date(2026, 2, 5, 9, 30);
-const form = (changes: Partial<OrderFormValues>): OrderFormValues => ({ ...emptyOrderForm(today), ruleId: '4', demandDose: '1', lockoutMinutes: '10', ...changes });
+const form = (changes: Partial<OrderFormValues>): OrderFormValues => ({
+  ...emptyOrderForm(today),
+  ruleId: '4',
+  demandDose: '1',
+  lockoutMinutes: '10',
+  ...changes,
+});
 
 describe('reading the order form', () => {
   it('reads digits with one decimal point and nothing else', () => {
@@ -77,7 +95,9 @@ describe('reading the order form', () => {
     const factors = patientFactors(noah, today);
     expect(factors).toEqual({ weightKg: 82, ageYears: 57, opioidTolerant: false, sleepApnoea: false, otherSedatives: false });
     const soft = localFindings(readOrderForm(form({ demandDose: '2.5' }), morphine, 1), morphine, factors);
-    expect(soft).toEqual([expect.objectContaining({ field: 'demandDose', severity: 'soft', message: 'Demand dose 2.5 mg is above the soft maximum 2 mg' })]);
+    expect(soft).toEqual([
+      expect.objectContaining({ field: 'demandDose', severity: 'soft', message: 'Demand dose 2.5 mg is above the soft maximum 2 mg' }),
+    ]);
     const hard = localFindings(readOrderForm(form({ demandDose: '3.5' }), morphine, 1), morphine, factors);
     expect(hard[0]).toMatchObject({ field: 'demandDose', severity: 'hard' });
   });
@@ -100,7 +120,14 @@ describe('revising a returned order', () => {
       overrides: [{ field: 'demandDose', reason: 'Tolerated 2.5 mg in recovery' }],
     } as unknown as OrderDetail;
     const values = valuesFromOrder(returned, [morphine], today);
-    expect(values).toMatchObject({ ruleId: '4', demandDose: '2.5', loadingDose: '', fourHourLimit: '30', clinicianBolusDose: '2', reviewDate: '2026-03-06' });
+    expect(values).toMatchObject({
+      ruleId: '4',
+      demandDose: '2.5',
+      loadingDose: '',
+      fourHourLimit: '30',
+      clinicianBolusDose: '2',
+      reviewDate: '2026-03-06',
+    });
     expect(values.reasons.demandDose).toBe('Tolerated 2.5 mg in recovery');
     expect(valuesFromOrder({ ...returned, reviewDate: '2026-03-09' }, [morphine], today).reviewDate).toBe('2026-03-09');
   });

@@ -19,15 +19,59 @@ export type OrderSet = {
 export const ORDER_SETS: readonly OrderSet[] = [
   // ASHP Standardize 4 Safety, PCA standards (2023): adult opioid-naive starting demand doses,
   // no basal rate, lockout 10 minutes, at the standard concentrations.
-  { id: 'adult-morphine', label: 'Adult morphine', drugName: 'morphine', concentrationPerMl: 1, doseUnit: 'mg', perKg: false, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0, fourHourLimit: 30 },
+  {
+    id: 'adult-morphine',
+    label: 'Adult morphine',
+    drugName: 'morphine',
+    concentrationPerMl: 1,
+    doseUnit: 'mg',
+    perKg: false,
+    demandDose: 1,
+    lockoutMinutes: 10,
+    basalRatePerHour: 0,
+    fourHourLimit: 30,
+  },
   // ASHP Standardize 4 Safety, PCA standards (2023).
-  { id: 'adult-hydromorphone', label: 'Adult hydromorphone', drugName: 'hydromorphone', concentrationPerMl: 0.2, doseUnit: 'mg', perKg: false, demandDose: 0.2, lockoutMinutes: 10, basalRatePerHour: 0, fourHourLimit: 6 },
+  {
+    id: 'adult-hydromorphone',
+    label: 'Adult hydromorphone',
+    drugName: 'hydromorphone',
+    concentrationPerMl: 0.2,
+    doseUnit: 'mg',
+    perKg: false,
+    demandDose: 0.2,
+    lockoutMinutes: 10,
+    basalRatePerHour: 0,
+    fourHourLimit: 6,
+  },
   // ASHP Standardize 4 Safety, PCA standards (2023).
-  { id: 'adult-fentanyl', label: 'Adult fentanyl', drugName: 'fentanyl', concentrationPerMl: 10, doseUnit: 'mcg', perKg: false, demandDose: 10, lockoutMinutes: 10, basalRatePerHour: 0, fourHourLimit: 300 },
+  {
+    id: 'adult-fentanyl',
+    label: 'Adult fentanyl',
+    drugName: 'fentanyl',
+    concentrationPerMl: 10,
+    doseUnit: 'mcg',
+    perKg: false,
+    demandDose: 10,
+    lockoutMinutes: 10,
+    basalRatePerHour: 0,
+    fourHourLimit: 300,
+  },
   // Association of Paediatric Anaesthetists of Great Britain and Ireland, Good Practice in
   // Postoperative and Procedural Pain Management: morphine PCA bolus 10–20 mcg/kg; 0.02 mg/kg
   // is 20 mcg/kg, lockout 10 minutes, no background infusion.
-  { id: 'paediatric-morphine', label: 'Paediatric morphine (per kg)', drugName: 'morphine', concentrationPerMl: 1, doseUnit: 'mg', perKg: true, demandDose: 0.02, lockoutMinutes: 10, basalRatePerHour: 0, fourHourLimit: null },
+  {
+    id: 'paediatric-morphine',
+    label: 'Paediatric morphine (per kg)',
+    drugName: 'morphine',
+    concentrationPerMl: 1,
+    doseUnit: 'mg',
+    perKg: true,
+    demandDose: 0.02,
+    lockoutMinutes: 10,
+    basalRatePerHour: 0,
+    fourHourLimit: null,
+  },
 ];
 
 const SAME_CONCENTRATION = 1e-9;
@@ -39,7 +83,11 @@ export type AvailableOrderSet = { set: OrderSet; rule: LimitRuleResponse };
  * unit with limits of the same kind (per kg or not), and the set is weight-based exactly when the
  * ward doses by weight.
  */
-export function availableOrderSets(rules: readonly LimitRuleResponse[], weightBasedWard: boolean, sets: readonly OrderSet[] = ORDER_SETS): AvailableOrderSet[] {
+export function availableOrderSets(
+  rules: readonly LimitRuleResponse[],
+  weightBasedWard: boolean,
+  sets: readonly OrderSet[] = ORDER_SETS,
+): AvailableOrderSet[] {
   const available: AvailableOrderSet[] = [];
   for (const set of sets) {
     if (set.perKg !== weightBasedWard) continue;

@@ -1,4 +1,13 @@
-import { formatDose, regimenFieldUnit, tallMan, type DoseUnit, type LimitRuleResponse, type Limits, type OrderSummary, type RegimenField } from '@lockstep/shared';
+import {
+  formatDose,
+  regimenFieldUnit,
+  tallMan,
+  type DoseUnit,
+  type LimitRuleResponse,
+  type Limits,
+  type OrderSummary,
+  type RegimenField,
+} from '@lockstep/shared';
 
 /** "HYDROmorphone 0.2 mg/mL": tall-man name and safe concentration. */
 export function drugWithConcentration(drugName: string, concentrationPerMl: number, doseUnit: DoseUnit): string {
@@ -49,7 +58,13 @@ export function formatRange(low: number | null | undefined, high: number | null 
  * The limits as a prescriber reads them beside the input: "Soft 0.5–2 mg · hard 0.2–3 mg". With a
  * per-kg rule and a weight, the soft range is also worked out for this patient.
  */
-export function limitRangeText(field: RegimenField, limits: Limits | undefined, doseUnit: DoseUnit, perKg: boolean, weightKg: number | null): string | null {
+export function limitRangeText(
+  field: RegimenField,
+  limits: Limits | undefined,
+  doseUnit: DoseUnit,
+  perKg: boolean,
+  weightKg: number | null,
+): string | null {
   if (!limits) return null;
   const isPerKg = perKg && field !== 'lockoutMinutes';
   const unit = regimenFieldUnit(field, doseUnit, isPerKg);

@@ -28,7 +28,9 @@ const base = {
   indication: 'Pain after laparotomy',
   reviewDate: '2026-03-06',
   rule,
-  findings: [{ field: 'demandDose', severity: 'soft', code: 'limit.soft-high', message: 'Demand dose 2.5 mg is above the soft maximum 2 mg' }],
+  findings: [
+    { field: 'demandDose', severity: 'soft', code: 'limit.soft-high', message: 'Demand dose 2.5 mg is above the soft maximum 2 mg' },
+  ],
 } as unknown as OrderDetail;
 
 describe('regimenRows', () => {
@@ -74,8 +76,16 @@ describe('regimenRows', () => {
   });
 
   it('works the amount per kg for a per-kg rule', () => {
-    const perKg = { ...base, demandDose: 0.49, rule: { ...rule, perKg: true, limits: { demandDose: { softMax: 0.02 } } }, findings: [] } as OrderDetail;
-    expect(regimenRows(perKg, null, 24.5).find((row) => row.field === 'demandDose')).toMatchObject({ perKg: '0.02 mg/kg', soft: 'up to 0.02 mg/kg' });
+    const perKg = {
+      ...base,
+      demandDose: 0.49,
+      rule: { ...rule, perKg: true, limits: { demandDose: { softMax: 0.02 } } },
+      findings: [],
+    } as OrderDetail;
+    expect(regimenRows(perKg, null, 24.5).find((row) => row.field === 'demandDose')).toMatchObject({
+      perKg: '0.02 mg/kg',
+      soft: 'up to 0.02 mg/kg',
+    });
     expect(regimenRows(perKg, null, null).find((row) => row.field === 'demandDose')?.perKg).toBeNull();
   });
 });

@@ -1,4 +1,14 @@
-import { formatDose, REGIMEN_FIELD_LABELS, REGIMEN_FIELDS, regimenFieldUnit, tallMan, type Finding, type FindingSeverity, type OrderDetail, type OrderSummary } from '@lockstep/shared';
+import {
+  formatDose,
+  REGIMEN_FIELD_LABELS,
+  REGIMEN_FIELDS,
+  regimenFieldUnit,
+  tallMan,
+  type Finding,
+  type FindingSeverity,
+  type OrderDetail,
+  type OrderSummary,
+} from '@lockstep/shared';
 import { formatCalendarDate } from '@/utils/format-date';
 import { changedFields, type DiffField } from './order-diff';
 import { fieldValueText, formatRange } from './regimen-format';
@@ -26,10 +36,16 @@ export type RegimenRow = {
 const OTHER_LABELS = { drug: 'Drug', concentrationPerMl: 'Concentration', indication: 'Indication', reviewDate: 'Review date' } as const;
 
 const SEVERITY_RANK: Record<FindingSeverity, number> = { error: 0, hard: 1, soft: 2, caution: 3 };
-const FIELD_OF_FINDING: Partial<Record<string, DiffField>> = { concentrationPerMl: 'concentrationPerMl', doseUnit: 'concentrationPerMl', drugId: 'drug' };
+const FIELD_OF_FINDING: Partial<Record<string, DiffField>> = {
+  concentrationPerMl: 'concentrationPerMl',
+  doseUnit: 'concentrationPerMl',
+  drugId: 'drug',
+};
 
 function worstFinding(findings: readonly Finding[], field: DiffField): FindingSeverity | null {
-  const severities = findings.filter((finding) => (FIELD_OF_FINDING[finding.field] ?? finding.field) === field).map((finding) => finding.severity);
+  const severities = findings
+    .filter((finding) => (FIELD_OF_FINDING[finding.field] ?? finding.field) === field)
+    .map((finding) => finding.severity);
   if (severities.length === 0) return null;
   return severities.sort((a, b) => SEVERITY_RANK[a] - SEVERITY_RANK[b])[0];
 }

@@ -2,7 +2,13 @@ import { describe, expect, it } from 'vitest';
 import { isUnusualVolume, localDateTimeToIso, readReleaseForm, releaseFormValues } from './release-form';
 
 const now = new Date(2026, 2, 5, 9, 0);
-const filled = { ...releaseFormValues({ concentrationPerMl: 1 }), batch: 'B2403-17', expiresAt: '2026-03-12T18:00', preparedBy: 'Lin Park', checkedBy: 'Tomas Ortiz' };
+const filled = {
+  ...releaseFormValues({ concentrationPerMl: 1 }),
+  batch: 'B2403-17',
+  expiresAt: '2026-03-12T18:00',
+  preparedBy: 'Lin Park',
+  checkedBy: 'Tomas Ortiz',
+};
 
 describe('syringe release form', () => {
   it('starts from the order’s concentration and a 50 mL syringe', () => {
@@ -31,10 +37,14 @@ describe('syringe release form', () => {
   });
 
   it('asks for a reason outside 20–60 mL, and for an expiry in the future', () => {
-    expect(readReleaseForm({ ...filled, volumeMl: '10' }, now).errors).toEqual({ overrideReason: 'Outside the usual 20–60 mL: give a reason' });
+    expect(readReleaseForm({ ...filled, volumeMl: '10' }, now).errors).toEqual({
+      overrideReason: 'Outside the usual 20–60 mL: give a reason',
+    });
     const withReason = readReleaseForm({ ...filled, volumeMl: '10', overrideReason: 'Short course before theatre' }, now);
     expect(withReason.request?.overrideReason).toBe('Short course before theatre');
-    expect(readReleaseForm({ ...filled, expiresAt: '2026-03-01T08:00' }, now).errors).toEqual({ expiresAt: 'The expiry must be later than now' });
+    expect(readReleaseForm({ ...filled, expiresAt: '2026-03-01T08:00' }, now).errors).toEqual({
+      expiresAt: 'The expiry must be later than now',
+    });
   });
 
   it('names every missing field', () => {

@@ -67,7 +67,8 @@ export function readReleaseForm(values: ReleaseFormValues, now: Date): ReadRelea
       errors[field] ??= notANumber ? 'Enter a number more than 0' : issue.message;
     }
   }
-  if (unusual && reason === '') errors.overrideReason = `Outside the usual ${USUAL_SYRINGE_ML.min}–${USUAL_SYRINGE_ML.max} mL: give a reason`;
+  if (unusual && reason === '')
+    errors.overrideReason = `Outside the usual ${USUAL_SYRINGE_ML.min}–${USUAL_SYRINGE_ML.max} mL: give a reason`;
   if (expiresAt && new Date(expiresAt).getTime() <= now.getTime()) errors.expiresAt ??= 'The expiry must be later than now';
   return { request: parsed.success && Object.keys(errors).length === 0 ? parsed.data : null, errors };
 }

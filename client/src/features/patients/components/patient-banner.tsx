@@ -12,7 +12,9 @@ function Fact({ label, children, risk = false }: { label: string; children: Reac
       </Text>
       <Group gap={4} wrap="nowrap" align="flex-start">
         {/* A risk is marked by an icon and the word, not by colour alone. */}
-        {risk ? <IconAlertTriangle size={16} color="var(--mantine-color-orange-7)" aria-hidden style={{ marginTop: 3, flex: 'none' }} /> : null}
+        {risk ? (
+          <IconAlertTriangle size={16} color="var(--mantine-color-orange-7)" aria-hidden style={{ marginTop: 3, flex: 'none' }} />
+        ) : null}
         <Text size="sm" fw={risk ? 600 : 500}>
           {children}
         </Text>

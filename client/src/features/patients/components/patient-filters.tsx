@@ -14,10 +14,7 @@ export interface PatientFiltersProps {
 }
 
 export function PatientFilters({ wards, wardsLoading, ward, search, onWardChange, onSearchChange }: PatientFiltersProps) {
-  const wardOptions = [
-    { value: ALL_WARDS, label: 'All wards' },
-    ...wards.map((w) => ({ value: String(w.id), label: w.name })),
-  ];
+  const wardOptions = [{ value: ALL_WARDS, label: 'All wards' }, ...wards.map((w) => ({ value: String(w.id), label: w.name }))];
   return (
     <Group gap="sm" align="flex-end" wrap="wrap">
       <Select

@@ -1,13 +1,7 @@
 import { useMemo, useState } from 'react';
 import { Anchor, EmptyState } from '@mantine/core';
 import { IconUserSearch } from '@tabler/icons-react';
-import {
-  createColumnHelper,
-  getCoreRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type SortingState,
-} from '@tanstack/react-table';
+import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
 import { ageInYears, type Patient } from '@lockstep/shared';
 import { DataTable } from '@/components/ui/data-table';

@@ -27,7 +27,10 @@ const NO_ALLERGY_PHRASES = new Set(['', 'none', 'nil', 'nka', 'nkda', 'none know
 
 /** True when the allergy text records an actual allergy rather than "none known". */
 export function hasAllergies(allergies: string): boolean {
-  const normalised = allergies.trim().toLowerCase().replace(/[.\s]+$/, '');
+  const normalised = allergies
+    .trim()
+    .toLowerCase()
+    .replace(/[.\s]+$/, '');
   return !NO_ALLERGY_PHRASES.has(normalised);
 }
 

@@ -62,7 +62,14 @@ export function CreateUserModal({ opened, onClose, wards }: CreateUserModalProps
               {formAlert.join(' ')}
             </Alert>
           ) : null}
-          <TextInput label="Username" description="Lower-case letters, digits, dots, dashes and underscores" autoComplete="off" withAsterisk data-autofocus {...form.getInputProps('username')} />
+          <TextInput
+            label="Username"
+            description="Lower-case letters, digits, dots, dashes and underscores"
+            autoComplete="off"
+            withAsterisk
+            data-autofocus
+            {...form.getInputProps('username')}
+          />
           <TextInput label="Display name" autoComplete="off" withAsterisk {...form.getInputProps('displayName')} />
           <RoleSelect
             label="Role"

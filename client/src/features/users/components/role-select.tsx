@@ -14,12 +14,6 @@ export interface RoleSelectProps extends Omit<SelectProps, 'data' | 'value' | 'o
 
 export function RoleSelect({ value, onChange, ...props }: RoleSelectProps) {
   return (
-    <Select
-      {...props}
-      data={ROLE_OPTIONS}
-      value={value}
-      onChange={(next) => onChange(isRole(next) ? next : null)}
-      allowDeselect={false}
-    />
+    <Select {...props} data={ROLE_OPTIONS} value={value} onChange={(next) => onChange(isRole(next) ? next : null)} allowDeselect={false} />
   );
 }

@@ -55,7 +55,7 @@ export function UsersScreen({ wards, wardsLoading }: UsersScreenProps) {
         <TextInput
           label="Search"
           placeholder="Username or name"
-            value={search}
+          value={search}
           onChange={(event) => setSearch(event.currentTarget.value)}
           leftSection={<IconSearch size={16} aria-hidden />}
           w={280}

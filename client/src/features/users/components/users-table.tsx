@@ -1,13 +1,7 @@
 import { useMemo, useState } from 'react';
 import { Button, EmptyState, Group, Text } from '@mantine/core';
 import { IconUsers } from '@tabler/icons-react';
-import {
-  createColumnHelper,
-  getCoreRowModel,
-  getSortedRowModel,
-  useReactTable,
-  type SortingState,
-} from '@tanstack/react-table';
+import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { ROLE_LABELS, type User, type Ward } from '@lockstep/shared';
 import { DataTable } from '@/components/ui/data-table';
 import { UserStatusBadge } from './user-status-badge';
@@ -46,7 +40,12 @@ export function UsersTable({ users, totalCount, wards, isLoading, currentUserId,
       column.accessor(wardsOf, {
         id: 'wards',
         header: 'Wards',
-        cell: ({ getValue }) => getValue() || <Text span size="sm" c="dimmed">None</Text>,
+        cell: ({ getValue }) =>
+          getValue() || (
+            <Text span size="sm" c="dimmed">
+              None
+            </Text>
+          ),
       }),
       column.accessor((user) => (user.active ? 'Active' : 'Inactive'), {
         id: 'status',
@@ -55,7 +54,11 @@ export function UsersTable({ users, totalCount, wards, isLoading, currentUserId,
       }),
       column.display({
         id: 'actions',
-        header: () => <Text span size="sm" fw={600}>Actions</Text>,
+        header: () => (
+          <Text span size="sm" fw={600}>
+            Actions
+          </Text>
+        ),
         cell: ({ row }) => {
           const user = row.original;
           const isSelf = user.id === currentUserId;
@@ -101,7 +104,9 @@ export function UsersTable({ users, totalCount, wards, isLoading, currentUserId,
       label="Users"
       caption={isLoading ? undefined : `Showing ${users.length} of ${totalCount} users`}
       isLoading={isLoading}
-      empty={<EmptyState size="sm" icon={<IconUsers aria-hidden />} title="No users to show" description="No user matches these filters." />}
+      empty={
+        <EmptyState size="sm" icon={<IconUsers aria-hidden />} title="No users to show" description="No user matches these filters." />
+      }
     />
   );
 }

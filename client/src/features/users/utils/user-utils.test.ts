@@ -25,7 +25,13 @@ describe('filterUsers', () => {
 
 describe('user forms', () => {
   it('asks for a role in words when none is chosen', () => {
-    const result = createUserFormSchema.safeParse({ username: 'new.user', displayName: 'New User', role: null, wardIds: [], password: 'long-enough-pass' });
+    const result = createUserFormSchema.safeParse({
+      username: 'new.user',
+      displayName: 'New User',
+      role: null,
+      wardIds: [],
+      password: 'long-enough-pass',
+    });
     expect(result.success).toBe(false);
     expect(result.error?.issues.map((i) => [i.path.join('.'), i.message])).toEqual([['role', 'Choose a role']]);
   });

@@ -32,7 +32,15 @@ export function PolicyNumberInput({ field, savedValue, inputProps }: PolicyNumbe
         classNames={{ input: 'tabular-nums' }}
         {...inputProps}
       />
-      <Paper bg="var(--mantine-color-gray-0)" px="sm" py={6} radius="sm" w={220} style={{ flexShrink: 0 }} data-testid={`default-${field.key}`}>
+      <Paper
+        bg="var(--mantine-color-gray-0)"
+        px="sm"
+        py={6}
+        radius="sm"
+        w={220}
+        style={{ flexShrink: 0 }}
+        data-testid={`default-${field.key}`}
+      >
         <Text size="xs" c="dimmed">
           Shipped default
         </Text>
@@ -41,7 +49,13 @@ export function PolicyNumberInput({ field, savedValue, inputProps }: PolicyNumbe
             {shippedDefault(field)}
           </Text>
           {local ? (
-            <Badge size="xs" variant="light" color="lagoon" leftSection={<IconAdjustments size={10} aria-hidden />} title="This ward's saved value differs from the shipped default">
+            <Badge
+              size="xs"
+              variant="light"
+              color="lagoon"
+              leftSection={<IconAdjustments size={10} aria-hidden />}
+              title="This ward's saved value differs from the shipped default"
+            >
               Changed locally
             </Badge>
           ) : null}

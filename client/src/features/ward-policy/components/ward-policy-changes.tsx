@@ -13,9 +13,11 @@ export function WardPolicyChanges({ wardId }: { wardId: number }) {
   const changes = useAuditEvents({ entityType: 'ward', entityId: String(wardId), action: 'ward.policy-update', limit: SHOWN });
 
   let body;
-  if (changes.isError) body = <QueryErrorAlert title="The changes could not be loaded" error={changes.error} onRetry={() => void changes.refetch()} />;
+  if (changes.isError)
+    body = <QueryErrorAlert title="The changes could not be loaded" error={changes.error} onRetry={() => void changes.refetch()} />;
   else if (!changes.data) body = <Skeleton height={120} aria-label="Loading the changes" />;
-  else if (changes.data.events.length === 0) body = <Text c="dimmed">No changes since the ward was set up: every value is as shipped or as first loaded.</Text>;
+  else if (changes.data.events.length === 0)
+    body = <Text c="dimmed">No changes since the ward was set up: every value is as shipped or as first loaded.</Text>;
   else {
     body = (
       <Stack gap="sm">

@@ -6,7 +6,15 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { notifySuccess } from '@/lib/notify';
 import { useUpdateWardPolicy } from '../api/update-ward-policy';
 import type { WardPolicySettings } from '../api/ward-policy-schemas';
-import { POLICY_EMAIL_FIELDS, POLICY_NUMBER_FIELDS, policyChanges, policyToForm, validatePolicyForm, type PolicyFormValues, type PolicyGroup } from '../utils/policy-form';
+import {
+  POLICY_EMAIL_FIELDS,
+  POLICY_NUMBER_FIELDS,
+  policyChanges,
+  policyToForm,
+  validatePolicyForm,
+  type PolicyFormValues,
+  type PolicyGroup,
+} from '../utils/policy-form';
 import { PolicyNumberInput } from './policy-number-input';
 
 const GROUP_TITLES: Record<PolicyGroup, string> = {
@@ -63,7 +71,12 @@ export function WardPolicyForm({ wardId, wardName, policy }: WardPolicyFormProps
             </Title>
             <Stack gap="md">
               {POLICY_NUMBER_FIELDS.filter((field) => field.group === group).map((field) => (
-                <PolicyNumberInput key={field.key} field={field} savedValue={policy[field.key]} inputProps={form.getInputProps(field.key)} />
+                <PolicyNumberInput
+                  key={field.key}
+                  field={field}
+                  savedValue={policy[field.key]}
+                  inputProps={form.getInputProps(field.key)}
+                />
               ))}
             </Stack>
           </Paper>
@@ -74,7 +87,16 @@ export function WardPolicyForm({ wardId, wardName, policy }: WardPolicyFormProps
           </Title>
           <Stack gap="md">
             {POLICY_EMAIL_FIELDS.map((field) => (
-              <TextInput key={field.key} id={`policy-${field.key}`} type="email" label={`${field.label} e-mail`} description={`${field.help}. Leave empty for none.`} autoComplete="off" maw={560} {...form.getInputProps(field.key)} />
+              <TextInput
+                key={field.key}
+                id={`policy-${field.key}`}
+                type="email"
+                label={`${field.label} e-mail`}
+                description={`${field.help}. Leave empty for none.`}
+                autoComplete="off"
+                maw={560}
+                {...form.getInputProps(field.key)}
+              />
             ))}
           </Stack>
         </Paper>
@@ -82,7 +104,14 @@ export function WardPolicyForm({ wardId, wardName, policy }: WardPolicyFormProps
           <Button type="submit" loading={update.isPending} disabled={!changed} leftSection={<IconDeviceFloppy size={18} aria-hidden />}>
             Save
           </Button>
-          <Button variant="default" disabled={!changed} onClick={() => { form.reset(); setFormAlert([]); }}>
+          <Button
+            variant="default"
+            disabled={!changed}
+            onClick={() => {
+              form.reset();
+              setFormAlert([]);
+            }}
+          >
             Undo changes
           </Button>
         </Group>

@@ -22,7 +22,8 @@ export function WardPolicyScreen({ wards, wardsLoading, wardId, onWardChange }: 
   let body;
   if (wardsLoading) body = <Skeleton height={480} />;
   else if (!ward) body = <Text>No wards yet.</Text>;
-  else if (policy.isError) body = <QueryErrorAlert title="The policy could not be loaded" error={policy.error} onRetry={() => void policy.refetch()} />;
+  else if (policy.isError)
+    body = <QueryErrorAlert title="The policy could not be loaded" error={policy.error} onRetry={() => void policy.refetch()} />;
   else if (!policy.data) body = <Skeleton height={480} aria-label="Loading the policy" />;
   // Keyed by ward so that moving to another ward starts from that ward's saved values.
   else {
@@ -38,8 +39,8 @@ export function WardPolicyScreen({ wards, wardsLoading, wardId, onWardChange }: 
     <Stack gap="lg" maw={760}>
       <Title order={1}>Ward policies</Title>
       <Alert color="lagoon" variant="light" icon={<IconAdjustments aria-hidden />} title="Local settings">
-        These values are this ward&apos;s own policy: observation intervals, the thresholds that raise flags, when a syringe counts as low and the
-        tolerance for reconciliation. {LOCAL_POLICY_CAUTION} Each value shows the default Lockstep shipped with.
+        These values are this ward&apos;s own policy: observation intervals, the thresholds that raise flags, when a syringe counts as low
+        and the tolerance for reconciliation. {LOCAL_POLICY_CAUTION} Each value shows the default Lockstep shipped with.
       </Alert>
       <Select
         label="Ward"

@@ -1,7 +1,16 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_WARD_POLICY } from '@lockstep/shared';
 import type { WardPolicySettings } from '../api/ward-policy-schemas';
-import { emailError, formatPolicyValue, POLICY_NUMBER_FIELDS, policyChanges, policyNumberError, policyToForm, shippedDefault, validatePolicyForm } from './policy-form';
+import {
+  emailError,
+  formatPolicyValue,
+  POLICY_NUMBER_FIELDS,
+  policyChanges,
+  policyNumberError,
+  policyToForm,
+  shippedDefault,
+  validatePolicyForm,
+} from './policy-form';
 
 const SAVED: WardPolicySettings = { ...DEFAULT_WARD_POLICY, pharmacyEmail: 'pharmacy.harbour@kestrelbay.example', nurseInChargeEmail: '' };
 const field = (key: string) => {
@@ -16,7 +25,16 @@ describe('policy fields', () => {
   });
 
   it('show the shipped defaults with their units', () => {
-    expect(POLICY_NUMBER_FIELDS.map(shippedDefault)).toEqual(['60 min', '120 min', '8/min', '90 %', '7/10', '2 attempts per dose', '2 h', '0.5 mL']);
+    expect(POLICY_NUMBER_FIELDS.map(shippedDefault)).toEqual([
+      '60 min',
+      '120 min',
+      '8/min',
+      '90 %',
+      '7/10',
+      '2 attempts per dose',
+      '2 h',
+      '0.5 mL',
+    ]);
     expect(formatPolicyValue(field('syringeLowThresholdHours'), 1.5)).toBe('1.5 h');
   });
 });
@@ -44,13 +62,19 @@ describe('range checks, in the server’s words', () => {
 
   it('checks the whole form', () => {
     expect(validatePolicyForm(policyToForm(SAVED))).toEqual({});
-    expect(validatePolicyForm({ ...policyToForm(SAVED), spo2Threshold: 20, pharmacyEmail: 'x' })).toEqual({ spo2Threshold: 'At least 70 %', pharmacyEmail: 'Enter an e-mail address (or leave empty)' });
+    expect(validatePolicyForm({ ...policyToForm(SAVED), spo2Threshold: 20, pharmacyEmail: 'x' })).toEqual({
+      spo2Threshold: 'At least 70 %',
+      pharmacyEmail: 'Enter an e-mail address (or leave empty)',
+    });
   });
 });
 
 describe('policyChanges', () => {
   it('sends only what changed, numbers as numbers and e-mails trimmed', () => {
     expect(policyChanges(policyToForm(SAVED), SAVED)).toEqual({});
-    expect(policyChanges({ ...policyToForm(SAVED), spo2Threshold: '92', nurseInChargeEmail: ' nic@kestrelbay.example ' }, SAVED)).toEqual({ spo2Threshold: 92, nurseInChargeEmail: 'nic@kestrelbay.example' });
+    expect(policyChanges({ ...policyToForm(SAVED), spo2Threshold: '92', nurseInChargeEmail: ' nic@kestrelbay.example ' }, SAVED)).toEqual({
+      spo2Threshold: 92,
+      nurseInChargeEmail: 'nic@kestrelbay.example',
+    });
   });
 });
