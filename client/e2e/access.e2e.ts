@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { openBrowser, signIn, signInHome, type BrowserSession } from './support/browser.js';
+import { openBrowser, signInHome, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 
 describe('roles are enforced by the API, not only by the screens', () => {

@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD, openBrowser, openPatients, signIn, signInHome, snapshot, type BrowserSession } from './support/browser.js';
+import { DEMO_PASSWORD, openBrowser, openPatients, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 
 // An active morphine PCA for NOAH ACHTERBERG (KB100231, born 1968-03-14, Harbour bed H02), set up

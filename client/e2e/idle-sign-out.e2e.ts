@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { openBrowser, openPatients, signIn, signInHome, snapshot, type BrowserSession } from './support/browser.js';
+import { openBrowser, openPatients, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 
 // The built client uses the default idle sign-out: 15 minutes, with a warning a minute before.

@@ -1,5 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { openBrowser, openPatients, signIn, signInHome, snapshot, type BrowserSession } from './support/browser.js';
+import { openBrowser, openPatients, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 
 // The demo hospital's admitted patients, on every ward (server/src/database/seed/demo-data.ts).

@@ -2,7 +2,7 @@ import { createRequire } from 'node:module';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { activeOrder, ORDER, ROSA, SETTINGS } from './support/pca.js';
-import { createTestApp, DEMO_PASSWORD, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
+import { createTestApp, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
 
 // The typed slices of the two outside checkers. Both ship CommonJS without the types used here.
 type FhirValidation = { valid: boolean; messages: { location?: string; severity?: string; message?: string }[] };
@@ -45,7 +45,6 @@ describe('FHIR R4 export', () => {
   const tokens = {} as Record<Role, string>;
   const as = (role: Role) => ({ Authorization: `Bearer ${tokens[role]}` });
   const pcaTokens = () => ({ prescriber: tokens.prescriber, pharmacist: tokens.pharmacist, nurse: tokens.nurse });
-  const signed = { signature: { password: DEMO_PASSWORD } };
   const ids = {} as Record<
     'worked' | 'returned' | 'superseded' | 'revision' | 'rejected' | 'cancelled' | 'discontinued' | 'verified',
     number

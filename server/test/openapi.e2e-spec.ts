@@ -197,8 +197,12 @@ describe('OpenAPI document at /api/docs-json', () => {
   });
 });
 
+/** A DTO class, as Nest's route metadata and class-validator's storage hold it. */
+// eslint-disable-next-line @typescript-eslint/no-unsafe-function-type -- class-validator's own parameter type
+type DtoClass = Function;
+
 /** The schema has exactly the validated properties, the right ones required, and each rule's bounds. */
-function expectMatchesValidators(document: OpenAPIObject, name: string, dto: Function, schema: SchemaObject): void {
+function expectMatchesValidators(document: OpenAPIObject, name: string, dto: DtoClass, schema: SchemaObject): void {
   const rules = getMetadataStorage().getTargetValidationMetadatas(dto, '', true, false);
   expect(Object.keys(schema.properties ?? {}).sort(), `${name} properties`).toEqual(
     [...new Set(rules.map((rule) => rule.propertyName))].sort(),
@@ -279,7 +283,7 @@ function resolveProperty(document: OpenAPIObject, schema: SchemaObject | Referen
 }
 
 /** The class of the handler's parameter of this kind (@Body, @Query), read from Nest's route metadata. */
-function handlerArgument(t: TestApp, operationId: string, kind: RouteParamtypes): Function | undefined {
+function handlerArgument(t: TestApp, operationId: string, kind: RouteParamtypes): DtoClass | undefined {
   for (const module of t.app.get(ModulesContainer).values()) {
     for (const { metatype } of module.controllers.values()) {
       if (!metatype || !operationId.startsWith(`${metatype.name}_`)) continue;
@@ -287,7 +291,7 @@ function handlerArgument(t: TestApp, operationId: string, kind: RouteParamtypes)
       const args = (Reflect.getMetadata(ROUTE_ARGS_METADATA, metatype, method) ?? {}) as Record<string, { index: number }>;
       const entry = Object.entries(args).find(([argKey]) => argKey.startsWith(`${kind}:`));
       if (!entry) return undefined;
-      return (Reflect.getMetadata('design:paramtypes', metatype.prototype, method) as Function[])[entry[1].index];
+      return (Reflect.getMetadata('design:paramtypes', metatype.prototype, method) as DtoClass[])[entry[1].index];
     }
   }
   throw new Error(`No handler for ${operationId}`);

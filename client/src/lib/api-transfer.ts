@@ -37,7 +37,7 @@ function safeFilename(name: string, fallback: string): string {
  * `onUnauthorized` as any other call would.
  */
 export function readUploadAnswer<T>(status: number, responseText: string, schema: z.ZodType<T>, onUnauthorized: () => void): T {
-  let body: unknown = null;
+  let body: unknown;
   try {
     body = responseText ? (JSON.parse(responseText) as unknown) : null;
   } catch {

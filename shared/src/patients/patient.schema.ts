@@ -21,8 +21,3 @@ export const patientSchema = z.object({
   bed: z.string(),
 });
 export type Patient = z.infer<typeof patientSchema>;
-
-export const patientQuerySchema = z.object({
-  wardId: z.coerce.number().int().positive('wardId must be a positive whole number').optional(),
-});
-export type PatientQuery = z.infer<typeof patientQuerySchema>;

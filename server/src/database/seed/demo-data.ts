@@ -1,8 +1,6 @@
 import type { DoseUnit, Sex } from '@lockstep/shared';
 
-// Everything here is invented for the demo: the hospital, wards, people and values.
-
-export const DEMO_HOSPITAL = 'Kestrel Bay Hospital';
+// Everything here is invented for the demo: the hospital (Kestrel Bay), wards, people and values.
 
 const wardMail = (ward: string) => ({
   pharmacyEmail: `pharmacy.${ward}@kestrelbay.example`,

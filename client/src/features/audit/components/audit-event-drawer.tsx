@@ -2,9 +2,9 @@ import { Anchor, Code, DataList, Drawer, Stack, Text, Title } from '@mantine/cor
 import { Link } from 'react-router-dom';
 import { auditActionLabel, type AuditEvent, type Role } from '@lockstep/shared';
 import { formatDateTime } from '@/utils/format-date';
-import { actorText } from '../utils/audit-actor';
+import { actorText } from '@/components/audit/audit-actor';
 import { entityHref, entityLabel, entitySearchHref, shortHash } from '../utils/audit-entity';
-import { AuditSummaryList } from './audit-summary-list';
+import { AuditSummaryList } from '@/components/audit/audit-summary-list';
 
 export interface AuditEventDrawerProps {
   event: AuditEvent | null;

@@ -6,9 +6,9 @@ import { Link } from 'react-router-dom';
 import { auditActionLabel, type AuditEvent, type Role } from '@lockstep/shared';
 import { DataTable } from '@/components/ui/data-table';
 import { formatDateTime } from '@/utils/format-date';
-import { actorText } from '../utils/audit-actor';
+import { actorText } from '@/components/audit/audit-actor';
 import { entityHref, entityLabel } from '../utils/audit-entity';
-import { summaryFacts } from '../utils/audit-summary';
+import { summaryFacts } from '@/components/audit/audit-summary';
 
 export interface AuditEventsTableProps {
   events: AuditEvent[];

@@ -5,8 +5,8 @@ import type { AuditEvent } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/lib/auth/use-session';
-import { useAuditEvents } from '../api/get-audit-events';
-import { useVerifyAuditChain } from '../api/verify-audit-chain';
+import { useAuditEvents } from '@/api/audit/get-audit-events';
+import { useVerifyAuditChain } from '@/api/audit/verify-audit-chain';
 import {
   AUDIT_PAGE_SIZE,
   entityTypesFor,

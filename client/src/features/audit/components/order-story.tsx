@@ -3,9 +3,9 @@ import { EmptyState, Group, SegmentedControl, Skeleton, Stack, Text, Timeline } 
 import { IconHistoryOff } from '@tabler/icons-react';
 import { auditActionLabel } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
-import { useOrderAudit } from '../api/get-order-audit';
-import { AuditEventByline } from './audit-event-byline';
-import { AuditSummaryList } from './audit-summary-list';
+import { useOrderAudit } from '@/api/audit/get-order-audit';
+import { AuditEventByline } from '@/components/audit/audit-event-byline';
+import { AuditSummaryList } from '@/components/audit/audit-summary-list';
 
 type Order = 'oldest' | 'newest';
 

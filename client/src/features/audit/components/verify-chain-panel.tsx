@@ -2,7 +2,7 @@ import { Alert, Button, Text } from '@mantine/core';
 import { IconAlertCircle, IconShieldCheck, IconShieldX } from '@tabler/icons-react';
 import type { AuditVerifyResult } from '@lockstep/shared';
 import { errorMessage } from '@/lib/api-error';
-import type { useVerifyAuditChain } from '../api/verify-audit-chain';
+import type { useVerifyAuditChain } from '@/api/audit/verify-audit-chain';
 
 type VerifyChain = ReturnType<typeof useVerifyAuditChain>;
 

@@ -95,4 +95,3 @@ export const wardChangeSchema = z.object({
   orderId: z.number().int(),
   at: z.string(),
 });
-export type WardChange = z.infer<typeof wardChangeSchema>;

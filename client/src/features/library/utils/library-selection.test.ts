@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import type { LibraryVersion, Ward } from '@lockstep/shared';
-import { chooseWardId, openVersionOf, parseId } from './library-selection';
+import type { Ward } from '@lockstep/shared';
+import { chooseWardId, parseId } from './library-selection';
 
 const ward = (id: number, name: string): Ward => ({
   id,
@@ -25,11 +25,5 @@ describe('library selection', () => {
     expect(chooseWardId(9, wards)).toBe(1);
     expect(chooseWardId(null, wards)).toBe(1);
     expect(chooseWardId(2, [])).toBeNull();
-  });
-
-  it("finds the ward's open version", () => {
-    const version = (id: number, status: LibraryVersion['status']) => ({ id, status }) as LibraryVersion;
-    expect(openVersionOf([version(2, 'pending_approval'), version(1, 'active')])?.id).toBe(2);
-    expect(openVersionOf([version(1, 'active'), version(0, 'retired')])).toBeUndefined();
   });
 });

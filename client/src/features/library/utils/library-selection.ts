@@ -1,4 +1,4 @@
-import type { LibraryVersion, Ward } from '@lockstep/shared';
+import type { Ward } from '@lockstep/shared';
 
 /** A positive whole number from the address, or null. */
 export function parseId(text: string | null): number | null {
@@ -11,9 +11,4 @@ export function parseId(text: string | null): number | null {
 export function chooseWardId(requested: number | null, wards: readonly Ward[]): number | null {
   if (requested !== null && wards.some((ward) => ward.id === requested)) return requested;
   return wards[0]?.id ?? null;
-}
-
-/** The ward's draft or version awaiting approval: a ward has at most one. */
-export function openVersionOf(versions: readonly LibraryVersion[]): LibraryVersion | undefined {
-  return versions.find((version) => version.status === 'draft' || version.status === 'pending_approval');
 }

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Finding } from '@lockstep/shared';
-import { blockingFindings, countBySeverity, findingsByField, findingsFor, generalFindings, sameFindings, softFields } from './findings';
+import { blockingFindings, countBySeverity, findingsFor, sameFindings, softFields } from './findings';
 
 const finding = (field: string, severity: Finding['severity'], code = `${severity}.${field}`): Finding => ({
   field,
@@ -20,10 +20,7 @@ const findings: Finding[] = [
 ];
 
 describe('findings by field', () => {
-  it('groups findings by the field they name, keeping their order', () => {
-    const grouped = findingsByField(findings);
-    expect([...grouped.keys()]).toEqual(['oneHourLimit', 'lockoutMinutes', 'fourHourLimit', 'demandDose', 'basalRatePerHour', 'patient']);
-    expect(grouped.get('patient')?.map((f) => f.code)).toEqual(['caution.sleep-apnoea', 'caution.age-70-or-over']);
+  it('finds the findings on one field', () => {
     expect(findingsFor(findings, 'demandDose')).toHaveLength(1);
     expect(findingsFor(findings, 'loadingDose')).toEqual([]);
   });
@@ -32,12 +29,6 @@ describe('findings by field', () => {
     expect(blockingFindings(findings).map((f) => f.field)).toEqual(['oneHourLimit', 'lockoutMinutes']);
     expect(softFields(findings)).toEqual(['demandDose', 'fourHourLimit']);
     expect(countBySeverity(findings)).toEqual({ error: 1, hard: 1, soft: 2, caution: 3 });
-  });
-
-  it('keeps findings with no input of their own for the panel', () => {
-    expect(generalFindings([...findings, finding('weightKg', 'error'), finding('concentrationPerMl', 'hard')]).map((f) => f.field)).toEqual(
-      ['patient', 'patient', 'weightKg'],
-    );
   });
 
   it('compares two checks by what they found, not by wording or order', () => {

@@ -15,28 +15,10 @@ export function findingsFor(findings: readonly Finding[], field: string): Findin
   return findings.filter((finding) => finding.field === field);
 }
 
-/** Findings grouped by the field they name, keeping their order. */
-export function findingsByField(findings: readonly Finding[]): Map<string, Finding[]> {
-  const grouped = new Map<string, Finding[]>();
-  for (const finding of findings) {
-    const list = grouped.get(finding.field) ?? [];
-    list.push(finding);
-    grouped.set(finding.field, list);
-  }
-  return grouped;
-}
-
 /** Fields outside a soft limit, each needing a reason to sign, in the form's order. */
 export function softFields(findings: readonly Finding[]): RegimenField[] {
   const soft = new Set(findings.filter((finding) => finding.severity === 'soft').map((finding) => finding.field));
   return REGIMEN_FIELDS.filter((field) => soft.has(field));
-}
-
-const FORM_FIELDS: ReadonlySet<string> = new Set<string>([...REGIMEN_FIELDS, 'concentrationPerMl', 'doseUnit', 'drugId']);
-
-/** Findings with no input of their own (the patient's risk factors, the weight): shown in the panel. */
-export function generalFindings(findings: readonly Finding[]): Finding[] {
-  return findings.filter((finding) => !FORM_FIELDS.has(finding.field));
 }
 
 function findingKey(finding: Finding): string {

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiRequest } from '@/lib/api-client';
-import { auditKeys } from '@/features/audit/api/audit-keys';
+import { auditKeys } from '@/api/audit/audit-keys';
 import { wardPolicyKeys } from './ward-policy-keys';
 import { wardPolicySettingsSchema, type WardPolicySettings, type WardPolicyUpdate } from './ward-policy-schemas';
 

@@ -1,8 +1,8 @@
 import { Anchor, Card, Group, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { Link } from 'react-router-dom';
-import { useAuditEvents } from '@/features/audit/api/get-audit-events';
-import { AuditEventByline } from '@/features/audit/components/audit-event-byline';
-import { AuditSummaryList } from '@/features/audit/components/audit-summary-list';
+import { useAuditEvents } from '@/api/audit/get-audit-events';
+import { AuditEventByline } from '@/components/audit/audit-event-byline';
+import { AuditSummaryList } from '@/components/audit/audit-summary-list';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 

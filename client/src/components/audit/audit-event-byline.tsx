@@ -1,7 +1,7 @@
 import { Text, type TextProps } from '@mantine/core';
 import type { AuditEvent } from '@lockstep/shared';
 import { formatDateTime } from '@/utils/format-date';
-import { actorText } from '../utils/audit-actor';
+import { actorText } from './audit-actor';
 
 /** "Lin Park · 2 Dec 2026, 08:29": who made the change, and when. */
 export function AuditEventByline({ event, ...textProps }: { event: Pick<AuditEvent, 'actorName' | 'userId' | 'at'> } & TextProps) {

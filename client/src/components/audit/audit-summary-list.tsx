@@ -1,5 +1,5 @@
 import { DataList, Text } from '@mantine/core';
-import { summaryFacts } from '../utils/audit-summary';
+import { summaryFacts } from './audit-summary';
 
 /** What an event recorded, one label and value a line; "from → to" for a change. */
 export function AuditSummaryList({ summary }: { summary: Record<string, unknown> }) {
