@@ -1,6 +1,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { checkOrder, hasBlockingFinding } from './check-order.js';
+import { checkOrder } from './check-order.js';
+import { hasBlockingFinding } from './signing-findings.js';
 import { withoutFloatNoise } from './float-noise.js';
 import { DOSE_FIELDS, REGIMEN_FIELDS } from './regimen-fields.js';
 import type { Finding, LimitRule, Limits, PatientFactors, Regimen, RegimenField } from './types.js';

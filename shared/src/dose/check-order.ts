@@ -69,8 +69,3 @@ export function checkOrder(r: Regimen, rule: LimitRule, p: PatientFactors): Find
   ];
   return findings.sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity]);
 }
-
-/** Whether any finding blocks signing: an error or a hard limit. */
-export function hasBlockingFinding(findings: readonly Finding[]): boolean {
-  return findings.some((f) => f.severity === 'error' || f.severity === 'hard');
-}

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { canTransition, ORDER_STATUSES, ORDER_TRANSITIONS } from './order-status.js';
+import { canCancel, canTransition, ORDER_STATUSES, ORDER_TRANSITIONS } from './order-status.js';
+import { regimenTypeOf } from './order.schema.js';
 
 // The lifecycle is Lockstep's own design (BRIEF §3); these checks pin it down.
 describe('order lifecycle', () => {
@@ -18,6 +19,14 @@ describe('order lifecycle', () => {
   it('never verifies twice, nor cancels a running order', () => {
     expect(canTransition('verified', 'verified')).toBe(false);
     expect(canTransition('active', 'cancelled')).toBe(false);
+  });
+
+  it('lets the prescriber cancel until the order runs, as the lifecycle says', () => {
+    expect(ORDER_STATUSES.filter(canCancel)).toEqual(['awaiting_verification', 'verified', 'returned']);
+  });
+
+  it('calls a regimen with a basal rate demand + basal', () => {
+    expect([regimenTypeOf(0), regimenTypeOf(0.5)]).toEqual(['demand_only', 'demand_basal']);
   });
 
   it('names only known statuses', () => {

@@ -44,5 +44,10 @@ export function canTransition(from: OrderStatus, to: OrderStatus): boolean {
   return ORDER_TRANSITIONS[from].includes(to);
 }
 
+/** A prescriber may cancel an order until it is running: wherever the lifecycle allows it. */
+export function canCancel(status: OrderStatus): boolean {
+  return canTransition(status, 'cancelled');
+}
+
 /** Statuses in which an order still needs someone's action or is running. */
 export const OPEN_ORDER_STATUSES: readonly OrderStatus[] = ['awaiting_verification', 'verified', 'active', 'returned'];

@@ -10,6 +10,11 @@ export const REGIMEN_TYPES = ['demand_only', 'demand_basal'] as const;
 export type RegimenType = (typeof REGIMEN_TYPES)[number];
 export const REGIMEN_TYPE_LABELS: Record<RegimenType, string> = { demand_only: 'Demand only', demand_basal: 'Demand + basal' };
 
+/** Demand + basal when a basal rate runs; demand only otherwise. */
+export function regimenTypeOf(basalRatePerHour: number): RegimenType {
+  return basalRatePerHour > 0 ? 'demand_basal' : 'demand_only';
+}
+
 export const MIN_REASON_LENGTH = 10;
 const reason = z.string().trim().min(MIN_REASON_LENGTH, `Give a reason of at least ${MIN_REASON_LENGTH} characters`).max(1000);
 
