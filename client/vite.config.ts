@@ -19,6 +19,8 @@ export default defineConfig({
   build: {
     outDir: 'dist',
     emptyOutDir: true,
+    // dist/.vite/manifest.json: which chunks each entry loads (the bundle-budget test reads it).
+    manifest: true,
     rolldownOptions: {
       output: {
         // Name the libraries every screen needs so they cache across releases; everything

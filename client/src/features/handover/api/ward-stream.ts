@@ -1,5 +1,6 @@
+import { createParser, type EventSourceMessage } from 'eventsource-parser';
 import { appApiConfig, type ApiClientConfig } from '@/lib/api-client';
-import { createSseParser, type SseEvent } from './sse-parser';
+import { wardChangeSchema } from './handover-schemas';
 
 /** What the board says about its live connection. */
 export type StreamStatus = 'connecting' | 'live' | 'reconnecting' | 'stopped';
@@ -8,7 +9,8 @@ export interface WardStreamOptions {
   wardId: number;
   /** Aborting it closes the connection and ends the loop (the board unmounted or changed ward). */
   signal: AbortSignal;
-  onEvent: (event: SseEvent) => void;
+  /** Something on this ward changed: the board should be read again. */
+  onWardChange: () => void;
   onStatus: (status: StreamStatus) => void;
   /** Each time the stream opens; `reconnected` after a drop, when changes may have been missed. */
   onOpen?: (reconnected: boolean) => void;
@@ -28,6 +30,17 @@ export function reconnectDelayMs(failures: number, random: () => number = Math.r
   return Math.round(base * (0.8 + 0.4 * random()));
 }
 
+/** A `ward-change` for this ward. One that cannot be read counts too: refetching is always safe. */
+function isWardChange(message: EventSourceMessage, wardId: number): boolean {
+  if (message.event !== 'ward-change') return false;
+  try {
+    const parsed = wardChangeSchema.safeParse(JSON.parse(message.data));
+    return !parsed.success || parsed.data.wardId === wardId;
+  } catch {
+    return true;
+  }
+}
+
 function sleep(ms: number, signal: AbortSignal): Promise<void> {
   return new Promise((resolve) => {
     const timer = setTimeout(done, ms);
@@ -42,7 +55,10 @@ function sleep(ms: number, signal: AbortSignal): Promise<void> {
 
 type Outcome = 'ended' | 'unauthorized' | 'refused';
 
-/** One connection: resolves when it ends; reports 'refused' for answers asking again cannot fix. */
+/**
+ * One connection: resolves when it ends; reports 'refused' for answers asking again cannot fix.
+ * The browser's EventSource cannot send a bearer token, so the stream is read with fetch.
+ */
 async function connectOnce(
   options: WardStreamOptions,
   connection: NonNullable<WardStreamOptions['connection']>,
@@ -72,12 +88,16 @@ async function connectOnce(
     feed();
     const reader = response.body.getReader();
     const decoder = new TextDecoder();
-    const parser = createSseParser();
+    const parser = createParser({
+      onEvent: (message) => {
+        if (isWardChange(message, options.wardId)) options.onWardChange();
+      },
+    });
     for (;;) {
       const { done, value } = await reader.read();
       if (done) return 'ended';
       feed();
-      for (const event of parser.push(decoder.decode(value, { stream: true }))) options.onEvent(event);
+      parser.feed(decoder.decode(value, { stream: true }));
     }
   } catch {
     // A network failure, the watchdog or the caller's abort: the loop decides what comes next.

@@ -1,20 +1,7 @@
 import { useEffect, useState } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
 import { handoverKeys } from '../api/handover-keys';
-import { wardChangeSchema } from '../api/handover-schemas';
-import type { SseEvent } from '../api/sse-parser';
 import { followWardStream, type StreamStatus } from '../api/ward-stream';
-
-function isWardChange(event: SseEvent, wardId: number): boolean {
-  if (event.event !== 'ward-change') return false;
-  try {
-    const parsed = wardChangeSchema.safeParse(JSON.parse(event.data));
-    // An unreadable change still means "something changed": refetching is always safe.
-    return !parsed.success || parsed.data.wardId === wardId;
-  } catch {
-    return true;
-  }
-}
 
 /**
  * Keeps a ward's board live: each `ward-change` invalidates the board query (TanStack Query
@@ -33,9 +20,7 @@ export function useWardStream(wardId: number | null): StreamStatus {
       wardId,
       signal: controller.signal,
       onStatus: setStatus,
-      onEvent: (event) => {
-        if (isWardChange(event, wardId)) refetchBoard();
-      },
+      onWardChange: refetchBoard,
       // Whatever changed while no stream was open (before the first, or during a drop) was not
       // announced: read the board again.
       onOpen: refetchBoard,
