@@ -1,19 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { formatClock, formatMinutes } from './clock';
 import { describeNextObservation } from './next-observation';
 
 const NOW = new Date('2026-03-03T14:00:00.000Z');
 const UTC = 'UTC';
-
-describe('clock and spans', () => {
-  it('writes times on a 24-hour clock and spans in hours and minutes', () => {
-    expect(formatClock('2026-03-03T09:05:00.000Z', UTC)).toBe('09:05');
-    expect(formatClock('2026-03-03T00:00:00.000Z', UTC)).toBe('00:00');
-    expect(formatMinutes(45)).toBe('45 min');
-    expect(formatMinutes(120)).toBe('2 h');
-    expect(formatMinutes(190)).toBe('3 h 10 min');
-  });
-});
 
 describe('describeNextObservation', () => {
   it('says when the next one is due', () => {

@@ -3,11 +3,11 @@ import { Anchor, Button, Group, Skeleton, Stack, Table, Text } from '@mantine/co
 import { IconClipboardCheck, IconClipboardHeart, IconDroplet, IconPlayerStop, IconReplace, type IconProps } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
 import type { ObservationDue, OrderSummary } from '@lockstep/shared';
+import { OrderStatusBadge } from '@/components/ui/order-status-badge';
 import { paths } from '@/config/paths';
 import { drugAndConcentration, regimenParts } from '../utils/regimen-line';
 import { bedsideActions, bedsideHint, type BedsideAction, type SyringeState } from '../utils/syringe-state';
 import { NextObservationHint } from './next-observation-hint';
-import { OrderStatusBadge } from './order-status-badge';
 
 const ACTIONS: Record<
   BedsideAction,
@@ -136,7 +136,7 @@ export function BedsideOrdersTable({ orders, syringes, nextObservations, now, is
                     </Table.Td>
                     <Table.Td miw={170}>
                       <Stack gap={4} align="flex-start">
-                        <OrderStatusBadge status={order.status} />
+                        <OrderStatusBadge status={order.status} size="md" />
                         {hint ? (
                           <Text size="xs" c="dimmed">
                             {hint}

@@ -2,11 +2,11 @@ import { Anchor, Button, Group, Stack, Table, Text, ThemeIcon } from '@mantine/c
 import { IconAlertTriangle, IconCircleCheck, IconRefresh } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
 import type { Drug, SecondCheckResponse } from '@lockstep/shared';
+import { OrderStatusBadge } from '@/components/ui/order-status-badge';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/utils/format-date';
 import type { BedsideOrder } from '../api/bedside-schemas';
 import { differenceRows, type CheckNurses } from '../utils/setting-differences';
-import { OrderStatusBadge } from './order-status-badge';
 import { StepPanel } from './step-panel';
 
 export interface CheckResultProps {

@@ -1,10 +1,10 @@
 import { Button, Group, Stack, Text } from '@mantine/core';
 import { Link } from 'react-router-dom';
+import { OrderStatusBadge } from '@/components/ui/order-status-badge';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/utils/format-date';
 import type { DiscontinueResponse } from '../api/discontinue-order';
 import { DonePanel } from './done-panel';
-import { OrderStatusBadge } from './order-status-badge';
 import { ReconciliationSummary } from './reconciliation-summary';
 
 /** The PCA has ended: its status, the last syringe's reconciliation and any flag for pharmacy. */

@@ -1,13 +1,6 @@
-import type { ComponentType } from 'react';
 import { Alert, Text } from '@mantine/core';
-import { IconAlertOctagon, IconAlertTriangle, IconInfoCircle, type IconProps } from '@tabler/icons-react';
-import { FLAG_SEVERITY_LABELS, type FlagResponse, type FlagSeverity } from '@lockstep/shared';
-
-const SEVERITY_LOOK: Record<FlagSeverity, { color: string; icon: ComponentType<IconProps> }> = {
-  urgent: { color: 'red', icon: IconAlertOctagon },
-  review: { color: 'orange', icon: IconAlertTriangle },
-  info: { color: 'blue', icon: IconInfoCircle },
-};
+import { FLAG_SEVERITY_LABELS, type FlagResponse } from '@lockstep/shared';
+import { SEVERITY_LOOK } from '@/components/ui/severity-look';
 
 /** A flag: severity as icon + word + colour, what happened, and what to do. */
 export function FlagAlert({ flag }: { flag: Pick<FlagResponse, 'severity' | 'message' | 'action'> }) {

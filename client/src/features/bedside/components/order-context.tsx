@@ -1,9 +1,9 @@
 import type { ReactNode } from 'react';
 import { Group, Paper, Stack, Text } from '@mantine/core';
 import { tallMan } from '@lockstep/shared';
+import { OrderStatusBadge } from '@/components/ui/order-status-badge';
 import type { BedsideOrder } from '../api/bedside-schemas';
 import { drugAndConcentration, regimenParts } from '../utils/regimen-line';
-import { OrderStatusBadge } from './order-status-badge';
 
 function Fact({ label, children }: { label: string; children: ReactNode }) {
   return (

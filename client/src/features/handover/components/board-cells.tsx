@@ -9,9 +9,11 @@ import {
   SEDATION_DESCRIPTIONS,
   type HandoverRow,
 } from '@lockstep/shared';
+import { SeverityLabel } from '@/components/ui/severity-label';
+import { formatNearTime } from '@/utils/clock';
+import { formatElapsed } from '@/utils/duration';
 import { hasOpenFlags, rowSeverity } from '../utils/board-filters';
-import { drugLine, formatElapsed, formatNearTime, lastFourHours, patientFacts, regimenSummary } from '../utils/board-format';
-import { SeverityLabel } from './severity';
+import { drugLine, lastFourHours, patientFacts, regimenSummary } from '../utils/board-format';
 
 // The board's cells, shared by the live table and the printed sheet. Each says in words what it
 // shows, so a cell read on its own (or on paper) needs no colour to be understood.

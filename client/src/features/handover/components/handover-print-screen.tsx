@@ -3,12 +3,13 @@ import { IconArrowLeft, IconPrinter } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
+import { formatClockSeconds } from '@/utils/clock';
 import { formatDateTime } from '@/utils/format-date';
 import { useHandoverBoard } from '../api/get-handover-board';
 import { signoffProgress, signoffProgressText } from '../utils/board-filters';
-import { formatClockSeconds, formatShift } from '../utils/board-format';
-import { PrintTable } from './print-table';
+import { formatShift } from '../utils/board-format';
 import classes from './handover-print.module.css';
+import { PrintTable } from './print-table';
 
 export interface HandoverPrintScreenProps {
   wardId: number;

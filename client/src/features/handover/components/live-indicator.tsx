@@ -1,8 +1,8 @@
 import type { ComponentType } from 'react';
 import { Group, Text } from '@mantine/core';
 import { IconPlugConnected, IconPlugConnectedX, IconRefresh, type IconProps } from '@tabler/icons-react';
+import { formatClockSeconds } from '@/utils/clock';
 import type { StreamStatus } from '../api/ward-stream';
-import { formatClockSeconds } from '../utils/board-format';
 
 const STATUS_LOOK: Record<StreamStatus, { word: string; color: string; icon: ComponentType<IconProps>; hint: string }> = {
   connecting: { word: 'Connecting', color: 'slate.7', icon: IconRefresh, hint: 'Opening the live connection' },

@@ -10,7 +10,7 @@ import {
   type IconProps,
 } from '@tabler/icons-react';
 import type { HandoverRow, PendingTask, SignoffRole } from '@lockstep/shared';
-import { formatSince } from '../utils/board-format';
+import { formatSince } from '@/utils/clock';
 
 const TASK_LOOK: Record<PendingTask['code'], { label: string; color: string; bg: string; icon: ComponentType<IconProps> }> = {
   awaiting_verification: { label: 'Awaiting verification', color: 'slate.9', bg: 'slate.1', icon: IconHourglass },

@@ -1,18 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { HandoverRow } from '@lockstep/shared';
-import {
-  drugLine,
-  formatClock,
-  formatNearTime,
-  formatClockSeconds,
-  formatElapsed,
-  formatShift,
-  formatSince,
-  lastFourHours,
-  patientFacts,
-  regimenLines,
-  regimenSummary,
-} from './board-format';
+import { drugLine, formatShift, lastFourHours, patientFacts, regimenLines, regimenSummary } from './board-format';
 
 // The demo's hydromorphone order (BRIEF §7, Harbour H07).
 const hydromorphone: Pick<HandoverRow, 'drugName' | 'concentrationPerMl' | 'doseUnit' | 'regimen' | 'last4h'> = {
@@ -59,32 +47,7 @@ describe('regimen formatting', () => {
   });
 });
 
-describe('time formatting', () => {
-  it('reads clock times on the 24-hour clock', () => {
-    expect(formatClock('2026-12-02T06:05:09.000Z', 'UTC')).toBe('06:05');
-    expect(formatClock('2026-12-02T19:45:00.000Z', 'UTC')).toBe('19:45');
-    expect(formatClockSeconds('2026-12-02T06:05:09.000Z', 'UTC')).toBe('06:05:09');
-    expect(formatClock('2026-12-02T06:05:09.000Z', 'Pacific/Auckland')).toBe('19:05');
-    expect(formatClock('not a time')).toBe('—');
-  });
-
-  it('gives a moment more than 12 hours away its date', () => {
-    const now = new Date('2026-12-02T06:00:00.000Z');
-    expect(formatNearTime('2026-12-02T14:20:00.000Z', now, 'UTC')).toBe('14:20');
-    expect(formatNearTime('2026-12-01T22:00:00.000Z', now, 'UTC')).toBe('22:00');
-    expect(formatNearTime('2026-12-06T06:05:57.177Z', now, 'UTC')).toBe('6 Dec 2026, 06:05');
-  });
-
-  it('writes elapsed time in minutes, hours and days', () => {
-    expect(formatElapsed(0)).toBe('under 1 min');
-    expect(formatElapsed(45)).toBe('45 min');
-    expect(formatElapsed(60)).toBe('1 h');
-    expect(formatElapsed(185)).toBe('3 h 5 min');
-    expect(formatElapsed(24 * 60)).toBe('1 d');
-    expect(formatElapsed(52 * 60 + 10)).toBe('2 d 4 h');
-    expect(formatElapsed(-3)).toBe('under 1 min');
-  });
-
+describe('shift formatting', () => {
   it('names the shift with its date and hours', () => {
     const night = {
       shift: 'night' as const,
@@ -96,12 +59,5 @@ describe('time formatting', () => {
     expect(formatShift({ ...night, shift: 'day', startsAt: '2026-12-01T07:00:00.000Z', endsAt: '2026-12-01T19:00:00.000Z' }, 'UTC')).toBe(
       'Day shift, 1 Dec 2026, 07:00–19:00',
     );
-  });
-
-  it('says since when a task has waited: the time today, the date before that', () => {
-    const now = new Date('2026-12-02T06:00:00.000Z');
-    expect(formatSince('2026-12-02T05:10:51.420Z', now, 'UTC')).toBe('since 05:10');
-    expect(formatSince('2026-11-30T05:10:00.000Z', now, 'UTC')).toBe('since 30 Nov 2026, 05:10');
-    expect(formatSince('2026-12-01', now, 'UTC')).toBe('since 1 Dec 2026');
   });
 });

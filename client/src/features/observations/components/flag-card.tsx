@@ -1,8 +1,9 @@
 import type { ReactNode } from 'react';
 import { Group, Paper, Stack, Text } from '@mantine/core';
 import { FLAG_SEVERITY_LABELS, type FlagResponse } from '@lockstep/shared';
+import { SeverityBadge } from '@/components/ui/severity-badge';
+import { SEVERITY_LOOK } from '@/components/ui/severity-look';
 import { formatDateTime } from '@/utils/format-date';
-import { SEVERITY_LOOK, SeverityBadge } from '@/components/ui/severity-badge';
 
 export interface FlagCardProps {
   flag: Pick<FlagResponse, 'severity' | 'message' | 'action'> & Partial<Pick<FlagResponse, 'raisedAt'>>;

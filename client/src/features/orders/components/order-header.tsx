@@ -3,9 +3,9 @@ import { Alert, Anchor, Group, Stack, Text, Title } from '@mantine/core';
 import { IconArrowBackUp, IconBan, IconSquareX } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
 import { REGIMEN_TYPE_LABELS, type OrderDetail } from '@lockstep/shared';
+import { OrderStatusBadge } from '@/components/ui/order-status-badge';
 import { paths } from '@/config/paths';
 import { formatCalendarDate, formatDateTime } from '@/utils/format-date';
-import { OrderStatusBadge } from './order-status-badge';
 
 const REASON_LOOK = {
   returned: { title: "Pharmacist's query", color: 'grape', Icon: IconArrowBackUp },

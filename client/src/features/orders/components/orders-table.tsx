@@ -5,10 +5,10 @@ import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, 
 import { Link } from 'react-router-dom';
 import type { OrderStatus, OrderSummary } from '@lockstep/shared';
 import { DataTable } from '@/components/ui/data-table';
+import { OrderStatusBadge } from '@/components/ui/order-status-badge';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/utils/format-date';
 import { regimenSummary } from '../utils/regimen-format';
-import { OrderStatusBadge } from './order-status-badge';
 
 /** A prescriber may cancel an order until it is running. */
 export const CANCELLABLE_STATUSES: readonly OrderStatus[] = ['awaiting_verification', 'verified', 'returned'];

@@ -7,11 +7,12 @@ import type { OrderSummary, Ward } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { DataTable } from '@/components/ui/data-table';
 import { paths } from '@/config/paths';
+import { useNow } from '@/hooks/use-now';
+import { minutesSince } from '@/utils/clock';
+import { formatElapsed } from '@/utils/duration';
 import { formatDateTime } from '@/utils/format-date';
 import { useOrders } from '../api/get-orders';
-import { useNow } from '@/hooks/use-now';
 import { regimenSummary } from '../utils/regimen-format';
-import { formatWaitingTime } from '../utils/waiting-time';
 
 const ALL_WARDS = 'all';
 // Others sign orders all the time: look again twice a minute.
@@ -46,7 +47,7 @@ export function VerificationQueueScreen({ wards, wardsLoading }: VerificationQue
         cell: ({ getValue }) => (
           <div>
             <Text size="sm" fw={600}>
-              {formatWaitingTime(getValue(), now)}
+              {formatElapsed(minutesSince(getValue(), now))}
             </Text>
             <Text size="xs" c="dimmed">
               since {formatDateTime(getValue())}

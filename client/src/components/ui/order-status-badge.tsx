@@ -32,7 +32,7 @@ export function OrderStatusBadge({ status, size = 'sm' }: { status: OrderStatus;
       color={color}
       variant="light"
       size={size}
-      leftSection={<Icon size={size === 'lg' ? 14 : 12} aria-hidden />}
+      leftSection={<Icon size={size === 'sm' || size === 'xs' ? 12 : 14} aria-hidden />}
       // The status is read in full, never cut to "Returned with a q…".
       style={{ flexShrink: 0, overflow: 'visible' }}
       styles={{ label: { overflow: 'visible' } }}
