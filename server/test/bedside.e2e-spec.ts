@@ -183,6 +183,13 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
         mustReport: false,
         releaseCode: order.code,
       });
+      // Between syringes only the new syringe's bedside check may happen (the shared bedside-action rule).
+      const bolus = await request(t.http)
+        .post(`/api/orders/${order.id}/boluses`)
+        .set(as('kai'))
+        .send({ amount: 1, reason: 'Pain on moving', witness: ROSA })
+        .expect(409);
+      expect(bolus.body.message).toBe('No syringe is running: finish the bedside check first');
       const first = await firstCheck(order.id, { ...IDENTITY, releaseCode: next.releaseCode, settings: SETTINGS }).expect(201);
       await secondCheck(order.id, first.body.id, { ...ROSA, settings: SETTINGS }).expect(200);
       const detail = await request(t.http).get(`/api/orders/${order.id}`).set(as('kai'));

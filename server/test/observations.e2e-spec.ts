@@ -62,6 +62,15 @@ describe('observations, flags, usage and ward policy', () => {
     await observe(order.id, { ...CALM, attempts: 10, delivered: 8, volumeInfusedMl: 8 }).expect(201);
     const response = await observe(order.id, { ...CALM, attempts: 9, delivered: 8, volumeInfusedMl: 7 }).expect(400);
     expect(response.body.errors.map((e: { field: string }) => e.field)).toEqual(['attempts', 'volumeInfusedMl']);
+    expect(response.body.errors[0].message).toBe('At least 10: pump totals never go down within one syringe');
+  });
+
+  it('refuses more out of the syringe than it held, or more doses than attempts, with the words the form shows', async () => {
+    const order = await start();
+    const tooMuch = await observe(order.id, { ...CALM, volumeInfusedMl: 80, syringeRemainingMl: 0 }).expect(400);
+    expect(tooMuch.body.errors).toEqual([{ field: 'volumeInfusedMl', message: 'More than the 50 mL the syringe held: check the pump' }]);
+    const doses = await observe(order.id, { ...CALM, attempts: 2, delivered: 3 }).expect(400);
+    expect(doses.body.errors).toEqual([{ field: 'delivered', message: 'More doses delivered than attempts: check the pump' }]);
   });
 
   it('sedation 3 raises an urgent flag with the scale’s action (Pasero & McCaffery, 2011) and e-mails the prescriber and nurse in charge', async () => {

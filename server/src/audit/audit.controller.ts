@@ -1,5 +1,5 @@
 import { Controller, Get, Param, Query } from '@nestjs/common';
-import type { AuditEvent, AuditPage, AuditVerifyResult } from '@lockstep/shared';
+import { AUDIT_ROLES, type AuditEvent, type AuditPage, type AuditVerifyResult } from '@lockstep/shared';
 import { ApiOperation } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
@@ -15,7 +15,7 @@ export class AuditController {
 
   @ApiOperation({ summary: 'Search the audit trail (pharmacists: orders and library only)' })
   @Get()
-  @Roles('admin', 'pharmacist')
+  @Roles(...AUDIT_ROLES)
   search(@Query() query: AuditQueryDto, @CurrentUser() user: AuthUser): Promise<AuditPage> {
     return this.audit.search(query, user);
   }

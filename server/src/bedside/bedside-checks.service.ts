@@ -2,7 +2,9 @@ import { BadRequestException, ConflictException, Injectable, NotFoundException }
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource, EntityManager } from 'typeorm';
 import {
+  BEDSIDE_ROLES,
   compareSettings,
+  wristbandErrors,
   normaliseReleaseCode,
   type FirstCheckResponse,
   type PumpSettings,
@@ -16,7 +18,7 @@ import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
 import { UsersService } from '../users/users.service.js';
 import type { FirstCheckDto, SecondCheckDto } from './dto/bedside-check.dto.js';
 import { BedsideCheck } from './entities/bedside-check.entity.js';
-import { BEDSIDE_ROLES } from './nurse-roles.js';
+import { requireBedsideAction } from './bedside-state.js';
 import { WardEventsService } from '../handover/ward-events.service.js';
 import { recordAudit } from '../audit/record-audit.js';
 
@@ -40,11 +42,7 @@ export class BedsideChecksService {
       if (order.status !== 'verified' && order.status !== 'active') throw statusConflict(order.status, 'active');
       checkIdentity(order, dto);
       const release = await readyRelease(manager, order, dto.releaseCode, 'releaseCode');
-      if (order.status === 'active' && (await manager.existsBy(SyringeRelease, { orderId, status: 'in_use' }))) {
-        throw new ConflictException(
-          'A syringe is still running for this order: record the syringe change (old syringe and witnessed waste) first',
-        );
-      }
+      await requireBedsideAction(manager, order, 'check');
       const check = await manager.save(
         manager.create(BedsideCheck, {
           orderId,
@@ -132,13 +130,7 @@ export class BedsideChecksService {
 }
 
 function checkIdentity(order: PcaOrder, dto: FirstCheckDto): void {
-  const errors = [];
-  if (dto.patientMrn.trim().toUpperCase() !== order.patient.mrn.toUpperCase()) {
-    errors.push({ field: 'patientMrn', message: 'This MRN is not this order’s patient: check the wristband' });
-  }
-  if (dto.patientDateOfBirth !== order.patient.dateOfBirth) {
-    errors.push({ field: 'patientDateOfBirth', message: 'This date of birth is not this order’s patient: check the wristband' });
-  }
+  const errors = wristbandErrors(dto, order.patient);
   if (errors.length > 0)
     throw new BadRequestException({
       statusCode: 400,

@@ -1,5 +1,5 @@
 import { Body, Controller, HttpCode, Param, Post } from '@nestjs/common';
-import type { FirstCheckResponse, SecondCheckResponse } from '@lockstep/shared';
+import { BEDSIDE_ROLES, type FirstCheckResponse, type SecondCheckResponse } from '@lockstep/shared';
 import { ApiOperation } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
@@ -14,7 +14,7 @@ import { type DiscontinueResponse, type SyringeChangeResponse, SyringeEndService
 
 /** What nurses do at the bedside. Every route needs a second nurse's signature in the body. */
 @Controller('orders/:orderId')
-@Roles('nurse', 'charge_nurse')
+@Roles(...BEDSIDE_ROLES)
 export class BedsideController {
   constructor(
     private readonly checks: BedsideChecksService,

@@ -1,14 +1,14 @@
 import { BadRequestException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
-import { checkAgainstRule, formatDose } from '@lockstep/shared';
+import { BEDSIDE_ROLES, checkAgainstRule, formatDose } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { statusConflict } from '../orders/order-transitions.js';
 import { OrdersService } from '../orders/orders.service.js';
 import { UsersService } from '../users/users.service.js';
 import type { BolusDto } from './dto/bedside-actions.dto.js';
+import { requireBedsideAction } from './bedside-state.js';
 import { ClinicianBolus } from './entities/clinician-bolus.entity.js';
-import { BEDSIDE_ROLES } from './nurse-roles.js';
 import { recordAudit } from '../audit/record-audit.js';
 
 export type BolusResponse = {
@@ -37,6 +37,7 @@ export class BolusesService {
     return this.dataSource.transaction(async (manager) => {
       const order = await this.orders.load(manager, orderId);
       if (order.status !== 'active') throw statusConflict(order.status, 'active');
+      await requireBedsideAction(manager, order, 'bolus');
       const unit = order.doseUnit;
       if (order.clinicianBolusDose === null) throw amountProblem('This order has no clinician bolus: ask the prescriber');
       if (dto.amount > order.clinicianBolusDose + 1e-9) {

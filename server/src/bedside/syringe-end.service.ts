@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource, EntityManager } from 'typeorm';
-import type { OrderDetail, ReconciliationResponse } from '@lockstep/shared';
+import { BEDSIDE_ROLES, type OrderDetail, type ReconciliationResponse } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { FlagsService } from '../flags/flags.service.js';
 import { MailService } from '../mail/mail.service.js';
@@ -11,7 +11,7 @@ import { OrdersService } from '../orders/orders.service.js';
 import { UsersService } from '../users/users.service.js';
 import { readyRelease } from './bedside-checks.service.js';
 import type { DiscontinueDto, SyringeChangeDto } from './dto/bedside-actions.dto.js';
-import { BEDSIDE_ROLES } from './nurse-roles.js';
+import { requireBedsideAction } from './bedside-state.js';
 import { finishRunningSyringe } from './reconcile-release.js';
 import { discrepancyFlag, discrepancyMail, reconciliationAuditSummary } from './reconciliation-records.js';
 import { WardEventsService } from '../handover/ward-events.service.js';
@@ -37,6 +37,7 @@ export class SyringeEndService {
     const { order, reconciliation, newReleaseCode } = await this.dataSource.transaction(async (manager) => {
       const found = await this.orders.load(manager, orderId);
       if (found.status !== 'active') throw statusConflict(found.status, 'active');
+      await requireBedsideAction(manager, found, 'syringe-change');
       const next = await readyRelease(manager, found, dto.newReleaseCode, 'newReleaseCode');
       const result = await this.finish(manager, found, dto, nurse.id, witness.id);
       await recordAudit(manager, nurse, {
@@ -57,6 +58,7 @@ export class SyringeEndService {
     const { order, reconciliation } = await this.dataSource.transaction(async (manager) => {
       const found = await this.orders.load(manager, orderId);
       if (found.status !== 'active') throw statusConflict(found.status, 'discontinued');
+      await requireBedsideAction(manager, found, 'discontinue');
       const result = await this.finish(manager, found, dto, nurse.id, witness.id);
       await transitionOrder(manager, found, 'discontinued', nurse.id, dto.reason.trim());
       await recordAudit(manager, nurse, {

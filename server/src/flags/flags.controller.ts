@@ -1,5 +1,5 @@
 import { Body, Controller, HttpCode, Param, Post } from '@nestjs/common';
-import type { FlagResponse } from '@lockstep/shared';
+import { CLINICAL_ROLES, type FlagResponse } from '@lockstep/shared';
 import { ApiOperation } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
@@ -18,7 +18,7 @@ export class FlagsController {
   @ApiErrors(404, 409)
   @Post(':id/acknowledge')
   @HttpCode(200)
-  @Roles('nurse', 'charge_nurse', 'prescriber', 'pharmacist')
+  @Roles(...CLINICAL_ROLES)
   acknowledge(
     @Param('id', ParseIdPipe) id: number,
     @Body() body: AcknowledgeFlagDto,

@@ -1,4 +1,12 @@
-import { ageInYears, compareHandoverRows, riskTier, type HandoverRow, type PendingTask, type WardPolicy } from '@lockstep/shared';
+import {
+  ageInYears,
+  compareHandoverRows,
+  type HandoverRow,
+  patientDisplayName,
+  type PendingTask,
+  riskTier,
+  type WardPolicy,
+} from '@lockstep/shared';
 import { toFlagResponse } from '../flags/flags.service.js';
 import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { toSignoffResponse } from './dto/signoff-response.js';
@@ -32,7 +40,7 @@ export function boardRows(
       bed: order.patient.bed,
       patient: {
         id: order.patientId,
-        name: `${order.patient.familyName.toUpperCase()}, ${order.patient.givenName}`,
+        name: patientDisplayName(order.patient),
         mrn: order.patient.mrn,
         ageYears: ageInYears(order.patient.dateOfBirth, now),
         weightKg: order.patient.weightKg,

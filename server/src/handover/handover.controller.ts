@@ -1,6 +1,6 @@
 import { Body, Controller, Get, Param, Post, Sse, type MessageEvent } from '@nestjs/common';
 import type { Observable } from 'rxjs';
-import type { HandoverBoard, HandoverSignoffResponse } from '@lockstep/shared';
+import { BEDSIDE_ROLES, CLINICAL_ROLES, type HandoverBoard, type HandoverSignoffResponse } from '@lockstep/shared';
 import { ApiOperation, ApiProduces } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
@@ -13,7 +13,7 @@ import { HandoverSignoffsService } from './handover-signoffs.service.js';
 import { WardEventsService } from './ward-events.service.js';
 
 @Controller('wards/:wardId/handover')
-@Roles('nurse', 'charge_nurse', 'prescriber', 'pharmacist')
+@Roles(...CLINICAL_ROLES)
 export class HandoverController {
   constructor(
     private readonly boards: HandoverBoardService,
@@ -46,7 +46,7 @@ export class HandoverController {
   @ApiOperation({ summary: 'Confirm an active PCA at handover (outgoing or incoming nurse)' })
   @ApiErrors(404, 409)
   @Post('signoffs')
-  @Roles('nurse', 'charge_nurse')
+  @Roles(...BEDSIDE_ROLES)
   signOff(
     @Param('wardId', ParseIdPipe) wardId: number,
     @Body() body: CreateSignoffDto,

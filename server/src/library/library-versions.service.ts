@@ -2,11 +2,13 @@ import { BadRequestException, ConflictException, ForbiddenException, Injectable 
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In } from 'typeorm';
 import {
+  canDoLibraryAction,
   LIBRARY_STATUS_LABELS,
-  validateLimitRules,
-  type LibraryStatus,
+  LIBRARY_VERSION_ACTIONS,
+  type LibraryVersionAction,
   type LibraryVersionDetail,
   type LimitRuleInput,
+  validateLimitRules,
 } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { Drug } from '../drugs/entities/drug.entity.js';
@@ -83,7 +85,7 @@ export class LibraryVersionsService {
 
   async replaceRules(id: number, rules: LimitRuleInput[], author: AuthUser): Promise<LibraryVersionDetail> {
     return this.dataSource.transaction(async (manager) => {
-      const version = await this.lockedVersion(manager, id, ['draft'], 'change its rules');
+      const version = await this.lockedVersion(manager, id, 'edit');
       await manager.delete(LimitRule, { versionId: version.id });
       await this.writeRules(manager, version.id, rules);
       await recordAudit(manager, author, {
@@ -98,7 +100,7 @@ export class LibraryVersionsService {
 
   async submit(id: number, note: string | undefined, author: AuthUser): Promise<LibraryVersionDetail> {
     return this.dataSource.transaction(async (manager) => {
-      const version = await this.lockedVersion(manager, id, ['draft'], 'submit it');
+      const version = await this.lockedVersion(manager, id, 'submit');
       if ((await manager.countBy(LimitRule, { versionId: id })) === 0) {
         throw fieldError('rules', 'A library version needs at least one rule before it is submitted');
       }
@@ -120,7 +122,7 @@ export class LibraryVersionsService {
   /** Back to draft, for changes after a colleague's query. */
   async withdraw(id: number, user: AuthUser): Promise<LibraryVersionDetail> {
     return this.dataSource.transaction(async (manager) => {
-      await this.lockedVersion(manager, id, ['pending_approval'], 'withdraw it');
+      await this.lockedVersion(manager, id, 'withdraw');
       await manager.update(LibraryVersion, { id }, { status: 'draft', submittedAt: null });
       await recordAudit(manager, user, {
         action: 'library-version.withdraw',
@@ -135,7 +137,7 @@ export class LibraryVersionsService {
   /** A draft that is not wanted is removed; versions that were ever active are kept for the record. */
   async discard(id: number, user: AuthUser): Promise<void> {
     await this.dataSource.transaction(async (manager) => {
-      const version = await this.lockedVersion(manager, id, ['draft'], 'discard it');
+      const version = await this.lockedVersion(manager, id, 'discard');
       await manager.delete(LibraryVersion, { id });
       await recordAudit(manager, user, {
         action: 'library-version.delete',
@@ -150,7 +152,7 @@ export class LibraryVersionsService {
   async approve(id: number, approver: AuthUser, password: string, reviewedSubmission: string): Promise<LibraryVersionDetail> {
     await this.users.verifySignature(approver.id, password);
     return this.dataSource.transaction(async (manager) => {
-      const version = await this.lockedVersion(manager, id, ['pending_approval'], 'approve it');
+      const version = await this.lockedVersion(manager, id, 'approve');
       if (version.authorId === approver.id) {
         throw new ForbiddenException('A second pharmacist must approve: you wrote this version');
       }
@@ -172,11 +174,12 @@ export class LibraryVersionsService {
     });
   }
 
-  private async lockedVersion(manager: EntityManager, id: number, allowed: LibraryStatus[], action: string): Promise<LibraryVersion> {
+  /** The version, if the library lifecycle allows `action` in its status; 409 naming the status otherwise. */
+  private async lockedVersion(manager: EntityManager, id: number, action: LibraryVersionAction): Promise<LibraryVersion> {
     const version = await this.library.loadVersion(manager, id);
-    if (!allowed.includes(version.status)) {
+    if (!canDoLibraryAction(action, version.status)) {
       throw new ConflictException(
-        `Version ${version.number} is ${LIBRARY_STATUS_LABELS[version.status].toLowerCase()}, so you cannot ${action}`,
+        `Version ${version.number} is ${LIBRARY_STATUS_LABELS[version.status].toLowerCase()}, so you cannot ${LIBRARY_VERSION_ACTIONS[action].what}`,
       );
     }
     return version;

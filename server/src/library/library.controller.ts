@@ -16,7 +16,7 @@ import {
 } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
 import type { Response } from 'express';
-import type { LibraryDiff, LibraryVersion, LibraryVersionDetail } from '@lockstep/shared';
+import { type LibraryDiff, type LibraryVersion, type LibraryVersionDetail, PHARMACY_ROLES } from '@lockstep/shared';
 import { ApiBody, ApiConsumes, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiProduces } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
@@ -78,7 +78,7 @@ export class LibraryController {
   @ApiOperation({ summary: 'Start a draft from the ward’s active version' })
   @ApiErrors(409)
   @Post('versions')
-  @Roles('pharmacist')
+  @Roles(...PHARMACY_ROLES)
   createDraft(@Body() body: CreateDraftDto, @CurrentUser() user: AuthUser): Promise<LibraryVersionDetail> {
     return this.versions.createDraft(body.wardId, body.note, user);
   }
@@ -86,7 +86,7 @@ export class LibraryController {
   @ApiOperation({ summary: 'Replace a draft’s rules' })
   @ApiErrors(404, 409)
   @Put('versions/:id/rules')
-  @Roles('pharmacist')
+  @Roles(...PHARMACY_ROLES)
   replaceRules(
     @Param('id', ParseIdPipe) id: number,
     @Body() body: ReplaceRulesDto,
@@ -99,7 +99,7 @@ export class LibraryController {
   @ApiErrors(404, 409)
   @Post('versions/:id/submit')
   @HttpCode(200)
-  @Roles('pharmacist')
+  @Roles(...PHARMACY_ROLES)
   submit(
     @Param('id', ParseIdPipe) id: number,
     @Body() body: SubmitVersionDto,
@@ -112,7 +112,7 @@ export class LibraryController {
   @ApiErrors(404, 409)
   @Post('versions/:id/withdraw')
   @HttpCode(200)
-  @Roles('pharmacist')
+  @Roles(...PHARMACY_ROLES)
   withdraw(@Param('id', ParseIdPipe) id: number, @CurrentUser() user: AuthUser): Promise<LibraryVersionDetail> {
     return this.versions.withdraw(id, user);
   }
@@ -121,7 +121,7 @@ export class LibraryController {
   @ApiErrors(404, 409)
   @Post('versions/:id/approve')
   @HttpCode(200)
-  @Roles('pharmacist')
+  @Roles(...PHARMACY_ROLES)
   approve(
     @Param('id', ParseIdPipe) id: number,
     @Body() body: ApproveVersionDto,
@@ -134,7 +134,7 @@ export class LibraryController {
   @ApiErrors(404, 409)
   @Delete('versions/:id')
   @HttpCode(204)
-  @Roles('pharmacist')
+  @Roles(...PHARMACY_ROLES)
   discard(@Param('id', ParseIdPipe) id: number, @CurrentUser() user: AuthUser): Promise<void> {
     return this.versions.discard(id, user);
   }
@@ -147,7 +147,7 @@ export class LibraryController {
   @ApiOkResponse({ description: 'With dryRun: the rules the file holds and its problems; nothing written' })
   @ApiErrors(409)
   @Post('import')
-  @Roles('pharmacist')
+  @Roles(...PHARMACY_ROLES)
   @UseFilters(UploadTooLargeFilter)
   @UseInterceptors(FileInterceptor('file', { limits: { fileSize: MAX_LIBRARY_CSV_BYTES, files: 1 } }))
   async import(

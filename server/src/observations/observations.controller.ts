@@ -10,6 +10,7 @@ import type { ObservationResponse } from './dto/observation-response.js';
 import { UsageQueryDto } from './dto/usage-query.dto.js';
 import { ObservationsService } from './observations.service.js';
 import { type UsageResponse, UsageService } from './usage.service.js';
+import { BEDSIDE_ROLES } from '@lockstep/shared';
 
 @Controller('orders/:orderId')
 export class ObservationsController {
@@ -21,7 +22,7 @@ export class ObservationsController {
   @ApiOperation({ summary: 'Record an observation; the answer lists the flags it raised' })
   @ApiErrors(404, 409)
   @Post('observations')
-  @Roles('nurse', 'charge_nurse')
+  @Roles(...BEDSIDE_ROLES)
   record(
     @Param('orderId', ParseIdPipe) orderId: number,
     @Body() body: CreateObservationDto,

@@ -1,7 +1,7 @@
 import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, LessThanOrEqual, MoreThan } from 'typeorm';
-import { observationFlags, ORDER_STATUS_LABELS, type FieldError, type FlagDraft } from '@lockstep/shared';
+import { observationFlags, observationTimelineErrors, ORDER_STATUS_LABELS, type FlagDraft } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { Flag } from '../flags/entities/flag.entity.js';
 import { FlagsService } from '../flags/flags.service.js';
@@ -17,10 +17,7 @@ import { observationAuditSummary } from './observation-audit.js';
 import { syringeLowMail, urgentFlagsMail } from './observation-notifications.js';
 import { WardEventsService } from '../handover/ward-events.service.js';
 import { recordAudit } from '../audit/record-audit.js';
-
-// A device clock a little ahead of the server's is not "the future".
-const CLOCK_SKEW_MS = 60_000;
-const PUMP_COUNTERS = ['attempts', 'delivered', 'volumeInfusedMl'] as const;
+import { requireBedsideAction } from '../bedside/bedside-state.js';
 
 @Injectable()
 export class ObservationsService {
@@ -42,10 +39,10 @@ export class ObservationsService {
           currentStatus: found.status,
         });
       }
-      const release = await manager.findOneBy(SyringeRelease, { orderId, status: 'in_use' });
-      if (!release) throw new ConflictException('No syringe is running: finish the bedside check first');
+      await requireBedsideAction(manager, found, 'observe');
+      const release = await manager.findOneByOrFail(SyringeRelease, { orderId, status: 'in_use' });
       const at = dto.at ? new Date(dto.at) : new Date();
-      const { previous } = await checkTimeline(manager, found, release.id, at, dto);
+      const { previous } = await checkTimeline(manager, found, release, at, dto);
 
       const saved = await manager.save(
         manager.create(Observation, { ...dto, at, orderId, releaseId: release.id, note: dto.note?.trim() ?? '', recordedById: nurse.id }),
@@ -97,29 +94,20 @@ export class ObservationsService {
   }
 }
 
-/** Not in the future, not before the start, and pump totals that never go down within one syringe. */
-async function checkTimeline(manager: EntityManager, order: PcaOrder, releaseId: number, at: Date, dto: CreateObservationDto) {
-  const errors: FieldError[] = [];
-  if (at.getTime() > Date.now() + CLOCK_SKEW_MS) errors.push({ field: 'at', message: 'An observation cannot be in the future' });
-  if (order.startedAt && at < order.startedAt) errors.push({ field: 'at', message: 'An observation cannot be before the PCA started' });
-  const previous = await manager.findOne(Observation, {
-    where: { orderId: order.id, releaseId, at: LessThanOrEqual(at) },
-    order: { at: 'DESC', id: 'DESC' },
+/** The observation against its PCA's timeline, by the shared rule the form checks with too. */
+async function checkTimeline(manager: EntityManager, order: PcaOrder, release: SyringeRelease, at: Date, dto: CreateObservationDto) {
+  const where = { orderId: order.id, releaseId: release.id };
+  const previous = await manager.findOne(Observation, { where: { ...where, at: LessThanOrEqual(at) }, order: { at: 'DESC', id: 'DESC' } });
+  const next = await manager.findOne(Observation, { where: { ...where, at: MoreThan(at) }, order: { at: 'ASC', id: 'ASC' } });
+  const errors = observationTimelineErrors({
+    at,
+    values: dto,
+    before: previous,
+    after: next,
+    syringeVolumeMl: release.volumeMl,
+    startedAt: order.startedAt,
+    now: new Date(),
   });
-  const next = await manager.findOne(Observation, {
-    where: { orderId: order.id, releaseId, at: MoreThan(at) },
-    order: { at: 'ASC', id: 'ASC' },
-  });
-  for (const counter of PUMP_COUNTERS) {
-    if (previous && dto[counter] < previous[counter]) {
-      errors.push({
-        field: counter,
-        message: `The pump total cannot go down within one syringe: it was ${previous[counter]} at the last observation`,
-      });
-    } else if (next && dto[counter] > next[counter]) {
-      errors.push({ field: counter, message: `The pump total cannot be more than the later observation's ${next[counter]}` });
-    }
-  }
   if (errors.length > 0) throw new BadRequestException({ statusCode: 400, message: 'The observation needs correcting', errors });
   return { previous };
 }

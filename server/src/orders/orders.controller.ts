@@ -1,5 +1,5 @@
 import { Body, Controller, Get, HttpCode, Param, Post, Query } from '@nestjs/common';
-import type { OrderDetail, OrderPreview, OrderSummary } from '@lockstep/shared';
+import { type OrderDetail, type OrderPreview, type OrderSummary, PHARMACY_ROLES, PRESCRIBING_ROLES } from '@lockstep/shared';
 import { ApiOperation } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
@@ -33,7 +33,7 @@ export class OrdersController {
 
   @ApiOperation({ summary: 'Sign a new order: hard findings refuse it, each soft finding needs a reason' })
   @Post()
-  @Roles('prescriber')
+  @Roles(...PRESCRIBING_ROLES)
   create(@Body() body: CreateOrderDto, @CurrentUser() user: AuthUser): Promise<OrderDetail> {
     return this.orders.create(body, user);
   }
@@ -55,7 +55,7 @@ export class OrdersController {
   @ApiOperation({ summary: 'Revise a returned order as a new signed version; the old one is superseded' })
   @ApiErrors(404, 409)
   @Post(':id/revise')
-  @Roles('prescriber')
+  @Roles(...PRESCRIBING_ROLES)
   revise(@Param('id', ParseIdPipe) id: number, @Body() body: CreateOrderDto, @CurrentUser() user: AuthUser): Promise<OrderDetail> {
     return this.orders.create(body, user, id);
   }
@@ -64,7 +64,7 @@ export class OrdersController {
   @ApiErrors(404, 409)
   @Post(':id/cancel')
   @HttpCode(200)
-  @Roles('prescriber')
+  @Roles(...PRESCRIBING_ROLES)
   cancel(@Param('id', ParseIdPipe) id: number, @Body() body: ReasonDto, @CurrentUser() user: AuthUser): Promise<OrderDetail> {
     return this.orders.cancel(id, body.reason, user);
   }
@@ -73,7 +73,7 @@ export class OrdersController {
   @ApiErrors(404, 409)
   @Post(':id/verify')
   @HttpCode(200)
-  @Roles('pharmacist')
+  @Roles(...PHARMACY_ROLES)
   verify(@Param('id', ParseIdPipe) id: number, @Body() body: SignedRequestDto, @CurrentUser() user: AuthUser): Promise<OrderDetail> {
     return this.review.verify(id, user, body.signature.password);
   }
@@ -82,7 +82,7 @@ export class OrdersController {
   @ApiErrors(404, 409)
   @Post(':id/return')
   @HttpCode(200)
-  @Roles('pharmacist')
+  @Roles(...PHARMACY_ROLES)
   returnWithQuery(@Param('id', ParseIdPipe) id: number, @Body() body: ReasonDto, @CurrentUser() user: AuthUser): Promise<OrderDetail> {
     return this.review.return(id, user, body.reason);
   }
@@ -91,7 +91,7 @@ export class OrdersController {
   @ApiErrors(404, 409)
   @Post(':id/reject')
   @HttpCode(200)
-  @Roles('pharmacist')
+  @Roles(...PHARMACY_ROLES)
   reject(@Param('id', ParseIdPipe) id: number, @Body() body: ReasonDto, @CurrentUser() user: AuthUser): Promise<OrderDetail> {
     return this.review.reject(id, user, body.reason);
   }

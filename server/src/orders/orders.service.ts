@@ -1,7 +1,16 @@
 import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In } from 'typeorm';
-import type { Finding, OrderDetail, OrderStatus, OrderSummary } from '@lockstep/shared';
+import {
+  blockingFindings,
+  type Finding,
+  type OrderDetail,
+  type OrderStatus,
+  type OrderSummary,
+  reasonsToKeep,
+  regimenTypeOf,
+  unexplainedSoftFindings,
+} from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { Flag } from '../flags/entities/flag.entity.js';
 import { Observation } from '../observations/entities/observation.entity.js';
@@ -49,7 +58,7 @@ export class OrdersService {
         prescriberId: prescriber.id,
         drugId: dto.drugId,
         status: 'awaiting_verification',
-        regimenType: dto.basalRatePerHour > 0 ? 'demand_basal' : 'demand_only',
+        regimenType: regimenTypeOf(dto.basalRatePerHour),
         version: previous ? previous.version + 1 : 1,
         supersedesId: previous?.id ?? null,
         concentrationPerMl: dto.concentrationPerMl,
@@ -173,7 +182,7 @@ export class OrdersService {
 
 /** Refuses hard and error findings; demands a reason for each soft one. Answers the overrides to keep. */
 function checkSignable(findings: Finding[], dto: CreateOrderDto): CreateOrderDto['overrides'] {
-  const blocking = findings.filter((finding) => finding.severity === 'hard' || finding.severity === 'error');
+  const blocking = blockingFindings(findings);
   if (blocking.length > 0) {
     throw new BadRequestException({
       statusCode: 400,
@@ -181,8 +190,7 @@ function checkSignable(findings: Finding[], dto: CreateOrderDto): CreateOrderDto
       errors: blocking.map((finding) => ({ field: finding.field, message: finding.message })),
     });
   }
-  const soft = findings.filter((finding) => finding.severity === 'soft');
-  const unexplained = soft.filter((finding) => !dto.overrides.some((override) => override.field === finding.field));
+  const unexplained = unexplainedSoftFindings(findings, dto.overrides);
   if (unexplained.length > 0) {
     throw new BadRequestException({
       statusCode: 400,
@@ -190,7 +198,5 @@ function checkSignable(findings: Finding[], dto: CreateOrderDto): CreateOrderDto
       errors: unexplained.map((finding) => ({ field: finding.field, message: `Reason needed: ${finding.message}` })),
     });
   }
-  return dto.overrides
-    .filter((override) => soft.some((finding) => finding.field === override.field))
-    .map(({ field, reason }) => ({ field, reason: reason.trim() }));
+  return reasonsToKeep(findings, dto.overrides);
 }

@@ -1,5 +1,5 @@
 import { Body, Controller, Param, Post } from '@nestjs/common';
-import type { SyringeReleaseResponse } from '@lockstep/shared';
+import { PHARMACY_ROLES, type SyringeReleaseResponse } from '@lockstep/shared';
 import { ApiOperation } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
@@ -16,7 +16,7 @@ export class ReleasesController {
   @ApiOperation({ summary: 'Release a labelled syringe for a verified or active order' })
   @ApiErrors(404, 409)
   @Post()
-  @Roles('pharmacist')
+  @Roles(...PHARMACY_ROLES)
   release(
     @Param('orderId', ParseIdPipe) orderId: number,
     @Body() body: CreateReleaseDto,

@@ -1,4 +1,4 @@
-import { shiftWindow, type OrderStatus, type PatientFactors } from '@lockstep/shared';
+import { type OrderStatus, type PatientFactors, regimenTypeOf, shiftWindow } from '@lockstep/shared';
 import type { Random } from './random.js';
 import type { Drugs, Staff, WrittenWard } from './scale-reference.js';
 import { pickRegimen, signingRecord, type ScaleRegimen } from './scale-regimen.js';
@@ -201,7 +201,7 @@ function writeOrder(
     prescriberId: staff.prescriber,
     drugId: ctx.drugs.get(regimen.drug)!.id,
     status: last.to,
-    regimenType: regimen.basalRatePerHour > 0 ? 'demand_basal' : 'demand_only',
+    regimenType: regimenTypeOf(regimen.basalRatePerHour),
     version: 1,
     concentrationPerMl: regimen.concentrationPerMl,
     doseUnit: regimen.doseUnit,

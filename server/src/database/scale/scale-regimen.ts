@@ -1,11 +1,12 @@
 import {
+  blockingFindings,
   checkOrder,
-  hasBlockingFinding,
   type Finding,
   type LimitRuleResponse,
   type Override,
   type PatientFactors,
   type Regimen,
+  softFindingFields,
 } from '@lockstep/shared';
 import type { Random } from './random.js';
 
@@ -94,13 +95,10 @@ export function signingRecord(
   reason = 'Agreed with the acute pain team (invented)',
 ): { findings: Finding[]; overrides: Override[] } {
   const findings = checkOrder(regimen, { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits }, patient);
-  if (hasBlockingFinding(findings))
-    throw new Error(
-      `A seeded ${regimen.drug} order would be refused at signing: ${findings
-        .filter((f) => f.severity === 'error' || f.severity === 'hard')
-        .map((f) => f.message)
-        .join('; ')}`,
-    );
-  const overrides = findings.filter((finding) => finding.severity === 'soft').map((finding) => ({ field: finding.field, reason }));
+  const blocking = blockingFindings(findings);
+  if (blocking.length > 0) {
+    throw new Error(`A seeded ${regimen.drug} order would be refused at signing: ${blocking.map((f) => f.message).join('; ')}`);
+  }
+  const overrides = softFindingFields(findings).map((field) => ({ field, reason }));
   return { findings, overrides };
 }

@@ -1,4 +1,4 @@
-import { deriveOrderValues, type ObservationDue, type OrderDetail, type OrderSummary } from '@lockstep/shared';
+import { deriveOrderValues, type ObservationDue, type OrderDetail, type OrderSummary, patientDisplayName } from '@lockstep/shared';
 import type { Flag } from '../../flags/entities/flag.entity.js';
 import type { SyringeRelease } from '../../releases/entities/syringe-release.entity.js';
 import { toReleaseResponse } from '../../releases/dto/release-response.js';
@@ -17,7 +17,7 @@ export function toOrderSummary(order: PcaOrder): OrderSummary {
     status: order.status,
     regimenType: order.regimenType,
     patientId: order.patientId,
-    patientName: `${patient.familyName.toUpperCase()}, ${patient.givenName}`,
+    patientName: patientDisplayName(patient),
     patientMrn: patient.mrn,
     wardId: patient.wardId,
     wardName: patient.ward.name,
