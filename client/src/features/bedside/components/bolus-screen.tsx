@@ -1,12 +1,13 @@
 import { useState, type FormEvent } from 'react';
-import { NumberInput, Stack, Textarea } from '@mantine/core';
+import { Stack, Textarea } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconSignature } from '@tabler/icons-react';
 import { formatDose, MIN_REASON_LENGTH, tallMan } from '@lockstep/shared';
+import { NumberField } from '@/components/ui/number-field';
 import { isApiRequestError } from '@/lib/api-error';
-import { useGiveBolus, type BolusResponse } from '../api/give-bolus';
+import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 import type { BedsideOrder } from '../api/bedside-schemas';
-import { readNumber } from '../utils/pump-settings-form';
+import { useGiveBolus, type BolusResponse } from '../api/give-bolus';
 import { placeServerErrors } from '../utils/server-errors';
 import { stepWithErrors, validateStepFields } from '../utils/step-form';
 import { syringeState } from '../utils/syringe-state';
@@ -19,7 +20,7 @@ import { StepActions } from './step-actions';
 import { StepAlert } from './step-alert';
 import { StepPanel } from './step-panel';
 
-type BolusValues = { amount: number | string; reason: string; overrideReason: string; witness: { username: string; password: string } };
+type BolusValues = { amount: NumberFieldValue; reason: string; overrideReason: string; witness: { username: string; password: string } };
 
 const STEPS = [
   { label: 'Bolus', description: 'Amount and reason' },
@@ -119,19 +120,11 @@ function Bolus({ order }: { order: BedsideOrder }) {
         <StepPanel key="bolus" number={1} of={3} title="Bolus and reason">
           <form onSubmit={submit} noValidate>
             <Stack gap="lg">
-              <NumberInput
+              <NumberField
                 label={`Bolus (${unit})`}
                 description={`Ordered clinician bolus: at most ${formatDose(maximum, unit)} of ${tallMan(order.drugName)}`}
                 size="lg"
                 maw={420}
-                hideControls
-                allowNegative={false}
-                decimalSeparator="."
-                thousandSeparator={false}
-                inputMode="decimal"
-                autoComplete="off"
-                withAsterisk
-                classNames={{ input: 'tabular-nums' }}
                 {...form.getInputProps('amount')}
               />
               <Textarea

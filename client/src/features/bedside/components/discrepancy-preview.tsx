@@ -1,6 +1,6 @@
 import { Paper, Text } from '@mantine/core';
 import { formatDose } from '@lockstep/shared';
-import { readNumber, type NumberFieldValue } from '../utils/pump-settings-form';
+import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 import { discrepancyText, previewDiscrepancy } from '../utils/reconciliation-display';
 
 export interface DiscrepancyPreviewProps {

@@ -1,6 +1,7 @@
-import { NumberInput, Select, SimpleGrid, Stack } from '@mantine/core';
+import { Select, SimpleGrid, Stack } from '@mantine/core';
 import type { GetInputPropsReturnType } from '@mantine/form';
 import { PUMP_SETTING_LABELS, tallMan, type DoseUnit, type Drug } from '@lockstep/shared';
+import { NumberField } from '@/components/ui/number-field';
 import {
   NUMERIC_SETTING_FIELDS,
   OPTIONAL_SETTING_FIELDS,
@@ -53,19 +54,12 @@ export function PumpSettingsFields({ drugs, drugId, fallbackUnit, inputProps }: 
       />
       <SimpleGrid cols={{ base: 1, sm: 2, lg: 3 }} spacing="lg" verticalSpacing="lg">
         {NUMERIC_SETTING_FIELDS.map((field) => (
-          <NumberInput
+          <NumberField
             key={field}
             label={`${PUMP_SETTING_LABELS[field]} (${pumpSettingUnit(field, unit)})`}
             description={DESCRIPTIONS[field]}
             size="lg"
-            hideControls
-            allowNegative={false}
-            decimalSeparator="."
-            thousandSeparator={false}
-            inputMode="decimal"
-            autoComplete="off"
             withAsterisk={!OPTIONAL_SETTING_FIELDS.includes(field)}
-            classNames={{ input: 'tabular-nums' }}
             {...inputProps(field)}
           />
         ))}

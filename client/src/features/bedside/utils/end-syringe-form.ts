@@ -1,4 +1,4 @@
-import { readNumber, type NumberFieldValue } from './pump-settings-form';
+import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 
 /** The part every end of a syringe shares: the two volumes and the witness. */
 export type EndSyringeValues = {

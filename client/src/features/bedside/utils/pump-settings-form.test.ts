@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { emptyPumpSettingsForm, readNumber, readPumpSettingsForm, type PumpSettingsFormValues } from './pump-settings-form';
+import { emptyPumpSettingsForm, readPumpSettingsForm, type PumpSettingsFormValues } from './pump-settings-form';
 
 // The demo order's pump (Harbour, bed H07): HYDROmorphone 0.2 mg/mL, demand 0.2 mg, lockout 10 min,
 // basal 0.1 mg/h, 4-hour limit 6 mg, 50 mL syringe, no loading dose and no 1-hour limit.
@@ -59,19 +59,6 @@ describe('readPumpSettingsForm', () => {
       concentrationPerMl: 'Concentration must be more than 0',
       fourHourLimit: '4-hour limit must be a number',
     });
-  });
-});
-
-describe('readNumber', () => {
-  it('reads what a NumberInput holds while typing', () => {
-    expect(readNumber('')).toBeNull();
-    expect(readNumber('  ')).toBeNull();
-    expect(readNumber('0.5')).toBe(0.5);
-    expect(readNumber('.5')).toBe(0.5);
-    expect(readNumber('5.')).toBe(5);
-    expect(readNumber(2)).toBe(2);
-    expect(readNumber('-1')).toBeUndefined();
-    expect(readNumber(Number.NaN)).toBeUndefined();
   });
 });
 

@@ -1,10 +1,8 @@
 import { PUMP_SETTING_FIELDS, PUMP_SETTING_LABELS, type PumpSettings } from '@lockstep/shared';
+import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 
 // One nurse's entry of what the pump is programmed with. Every entry starts empty: nothing is
 // ever filled in from the order or from the other nurse's entry (that would defeat the check).
-
-/** A NumberInput's value: a number, or text while empty ('') or half-typed. */
-export type NumberFieldValue = number | string;
 
 export type NumericSettingField = Exclude<keyof PumpSettings, 'drugId'>;
 
@@ -32,16 +30,6 @@ export function emptyPumpSettingsForm(): PumpSettingsFormValues {
     oneHourLimit: '',
     fourHourLimit: '',
   };
-}
-
-/** '' is "not set" (null); anything else must be a finite number, or it is undefined. */
-export function readNumber(value: NumberFieldValue): number | null | undefined {
-  if (typeof value === 'number') return Number.isFinite(value) ? value : undefined;
-  const text = value.trim();
-  if (text === '') return null;
-  // Only plain decimals: "1e2" or "0x10" are not what anyone reads off a pump.
-  if (!/^\d*\.?\d+$|^\d+\.$/.test(text)) return undefined;
-  return Number(text);
 }
 
 export interface ReadPumpSettings {

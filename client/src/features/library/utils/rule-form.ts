@@ -11,12 +11,10 @@ import {
   type Limits,
   type RegimenField,
 } from '@lockstep/shared';
+import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 
 // The rules editor's form. Its paths are the API's (`rules.2.limits.demandDose.softMax`), so a
 // problem found here, by `validateLimitRules` or by the server lands on the same input.
-
-/** A NumberInput's value: a number, or text while empty ('') or half-typed. */
-export type NumberFieldValue = number | string;
 
 export type RuleFormLimits = Record<RegimenField, Record<LimitKey, NumberFieldValue>>;
 
@@ -57,14 +55,6 @@ export function ruleToForm(rule: LimitRuleInput, key: string): RuleFormValue {
     perKg: rule.perKg,
     limits,
   };
-}
-
-/** '' is "not set" (null); anything else must be a finite number. */
-function readNumber(value: NumberFieldValue): number | null | undefined {
-  if (typeof value === 'number') return Number.isFinite(value) ? value : undefined;
-  if (value.trim() === '') return null;
-  const number = Number(value);
-  return Number.isFinite(number) ? number : undefined;
 }
 
 export interface ReadRules {

@@ -1,11 +1,12 @@
 import type { ReactNode } from 'react';
-import { Group, NumberInput, Text } from '@mantine/core';
+import { Group, Text } from '@mantine/core';
 import type { GetInputPropsReturnType } from '@mantine/form';
 import { IconAlertOctagon } from '@tabler/icons-react';
-import { NUMBER_RULES, type NumberField } from '../utils/observation-form';
+import { NumberField } from '@/components/ui/number-field';
+import { NUMBER_RULES, type NumberField as ObservationField } from '../utils/observation-form';
 
 export interface ObservationNumberInputProps {
-  field: NumberField;
+  field: ObservationField;
   label: string;
   description: ReactNode;
   /** What saving this value will raise, said before it is saved. */
@@ -17,7 +18,7 @@ export interface ObservationNumberInputProps {
 export function ObservationNumberInput({ field, label, description, warning, inputProps }: ObservationNumberInputProps) {
   const rule = NUMBER_RULES[field];
   return (
-    <NumberInput
+    <NumberField
       id={`observation-${field}`}
       label={label}
       description={
@@ -33,15 +34,7 @@ export function ObservationNumberInput({ field, label, description, warning, inp
         )
       }
       size="lg"
-      hideControls
-      allowNegative={false}
-      allowDecimal={!rule.integer}
-      decimalSeparator="."
-      thousandSeparator={false}
-      inputMode={rule.integer ? 'numeric' : 'decimal'}
-      autoComplete="off"
-      withAsterisk
-      classNames={{ input: 'tabular-nums' }}
+      integer={rule.integer}
       {...inputProps}
     />
   );

@@ -5,7 +5,6 @@ import {
   numberFieldError,
   pumpBounds,
   readLocalDateTime,
-  readNumber,
   toObservationRequest,
   validateObservationForm,
   type ObservationCheckContext,
@@ -60,17 +59,6 @@ const FILLED: ObservationFormValues = {
   volumeInfusedMl: 3.5,
   syringeRemainingMl: 46.5,
 };
-
-describe('reading numbers as typed', () => {
-  it('takes numbers and plain decimals; empty is null; anything else undefined', () => {
-    expect(readNumber(4)).toBe(4);
-    expect(readNumber(' 2.5 ')).toBe(2.5);
-    expect(readNumber('')).toBeNull();
-    expect(readNumber('1e2')).toBeUndefined();
-    expect(readNumber('abc')).toBeUndefined();
-    expect(readNumber(Number.NaN)).toBeUndefined();
-  });
-});
 
 describe('plausible ranges', () => {
   it('checks pain 0–10, respiratory rate 0–80 and SpO2 0–100, whole numbers, with the server’s words', () => {

@@ -1,9 +1,7 @@
 import { SEDATION_LEVELS, type SedationLevel } from '@lockstep/shared';
-import type { CreateObservationRequest } from '../api/record-observation';
+import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 import type { Observation } from '../api/pca-schemas';
-
-/** A NumberInput's value: a number, or text while empty ('') or half-typed. */
-export type NumberFieldValue = number | string;
+import type { CreateObservationRequest } from '../api/record-observation';
 
 export const NUMBER_FIELDS = [
   'painScore',
@@ -121,15 +119,6 @@ export const NUMBER_RULES: Record<NumberField, NumberRule> = {
     above: 'Syringe remaining looks too large: check the syringe',
   },
 };
-
-/** '' is "not entered" (null); plain decimals only ("1e2" is not read off a pump); otherwise undefined. */
-export function readNumber(value: NumberFieldValue): number | null | undefined {
-  if (typeof value === 'number') return Number.isFinite(value) ? value : undefined;
-  const text = value.trim();
-  if (text === '') return null;
-  if (!/^-?(\d+\.?\d*|\.\d+)$/.test(text)) return undefined;
-  return Number(text);
-}
 
 /** The range check of one number field, as typed. */
 export function numberFieldError(field: NumberField, value: NumberFieldValue): string | null {

@@ -1,5 +1,6 @@
 import { SEDATION_ACTIONS, type WardPolicy } from '@lockstep/shared';
-import { readNumber, type ObservationFormValues } from './observation-form';
+import { readNumber } from '@/lib/number-input';
+import type { ObservationFormValues } from './observation-form';
 
 export type ObservationWarnings = Partial<Record<'sedationLevel' | 'respiratoryRate' | 'spo2', string>>;
 

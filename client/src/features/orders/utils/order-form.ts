@@ -12,6 +12,7 @@ import {
   type Regimen,
   type RegimenField,
 } from '@lockstep/shared';
+import { readNumber } from '@/lib/number-input';
 
 // The order form holds what was typed, as text: a dose is never silently rounded, stepped by an
 // arrow key or reformatted while it is being entered. Reading turns it into numbers once.
@@ -95,13 +96,10 @@ export function valuesFromOrder(order: OrderDetail, rules: readonly LimitRuleRes
   };
 }
 
-const DECIMAL = /^(\d+(\.\d*)?|\.\d+)$/;
-
-/** '' is "not entered" (null); digits with one decimal point are a number; anything else is NaN. */
+/** '' is "not entered" (null); a plain decimal is a number; anything else is NaN, so the order check shows it. */
 export function readAmount(value: string): number | null {
-  const trimmed = value.trim();
-  if (trimmed === '') return null;
-  return DECIMAL.test(trimmed) ? Number(trimmed) : Number.NaN;
+  const amount = readNumber(value);
+  return amount === undefined ? Number.NaN : amount;
 }
 
 export type ReadOrderForm = {

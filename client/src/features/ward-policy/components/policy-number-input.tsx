@@ -1,7 +1,8 @@
-import { Badge, Group, NumberInput, Paper, Text } from '@mantine/core';
+import { Badge, Group, Paper, Text } from '@mantine/core';
 import type { GetInputPropsReturnType } from '@mantine/form';
 import { IconAdjustments } from '@tabler/icons-react';
 import { DEFAULT_WARD_POLICY } from '@lockstep/shared';
+import { NumberField } from '@/components/ui/number-field';
 import { shippedDefault, type PolicyNumberField } from '../utils/policy-form';
 
 export interface PolicyNumberInputProps {
@@ -16,20 +17,12 @@ export function PolicyNumberInput({ field, savedValue, inputProps }: PolicyNumbe
   const local = savedValue !== DEFAULT_WARD_POLICY[field.key];
   return (
     <Group align="flex-start" gap="md" wrap="nowrap">
-      <NumberInput
+      <NumberField
         id={`policy-${field.key}`}
         label={`${field.label} (${field.unit})`}
         description={`${field.help}.`}
-        hideControls
-        allowNegative={false}
-        allowDecimal={!field.integer}
-        decimalSeparator="."
-        thousandSeparator={false}
-        inputMode={field.integer ? 'numeric' : 'decimal'}
-        autoComplete="off"
-        withAsterisk
+        integer={field.integer}
         style={{ flex: 1 }}
-        classNames={{ input: 'tabular-nums' }}
         {...inputProps}
       />
       <Paper

@@ -1,11 +1,9 @@
 import { DEFAULT_WARD_POLICY, formatDose, type WardPolicy } from '@lockstep/shared';
+import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 import type { WardPolicySettings, WardPolicyUpdate } from '../api/ward-policy-schemas';
 
 export type PolicyNumberKey = keyof WardPolicy;
 export type PolicyEmailKey = 'pharmacyEmail' | 'nurseInChargeEmail';
-
-/** A NumberInput's value: a number, or text while empty ('') or half-typed. */
-export type NumberFieldValue = number | string;
 
 export type PolicyFormValues = Record<PolicyNumberKey, NumberFieldValue> & Record<PolicyEmailKey, string>;
 
@@ -153,15 +151,6 @@ export function shippedDefault(field: PolicyNumberField): string {
 
 export function policyToForm(policy: WardPolicySettings): PolicyFormValues {
   return { ...policy };
-}
-
-/** '' is "not entered" (null); plain decimals only; otherwise undefined. */
-export function readNumber(value: NumberFieldValue): number | null | undefined {
-  if (typeof value === 'number') return Number.isFinite(value) ? value : undefined;
-  const text = value.trim();
-  if (text === '') return null;
-  if (!/^-?(\d+\.?\d*|\.\d+)$/.test(text)) return undefined;
-  return Number(text);
 }
 
 export function policyNumberError(field: PolicyNumberField, value: NumberFieldValue): string | null {
