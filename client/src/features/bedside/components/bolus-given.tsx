@@ -1,10 +1,9 @@
-import { Button, DataList, Group, Stack } from '@mantine/core';
-import { Link } from 'react-router-dom';
+import { DataList, Group, Stack } from '@mantine/core';
 import { formatDose, tallMan } from '@lockstep/shared';
-import { paths } from '@/config/paths';
 import { formatDateTime } from '@/utils/format-date';
 import type { BedsideOrder } from '../api/bedside-schemas';
 import type { BolusResponse } from '../api/give-bolus';
+import { BackToOrdersButton } from './back-to-orders-button';
 import { DonePanel } from './done-panel';
 
 /** The recorded clinician bolus: how much, when, why, and who gave and witnessed it. */
@@ -43,9 +42,7 @@ export function BolusGiven({ order, bolus }: { order: BedsideOrder; bolus: Bolus
           ) : null}
         </DataList>
         <Group>
-          <Button component={Link} to={paths.bedside.getHref({ wardId: order.wardId })} size="lg">
-            Back to PCA orders
-          </Button>
+          <BackToOrdersButton wardId={order.wardId} />
         </Group>
       </Stack>
     </DonePanel>

@@ -7,6 +7,7 @@ import { paths } from '@/config/paths';
 import { formatDateTime } from '@/utils/format-date';
 import type { BedsideOrder } from '../api/bedside-schemas';
 import { differenceRows, type CheckNurses } from '../utils/setting-differences';
+import { BackToOrdersButton } from './back-to-orders-button';
 import { StepPanel } from './step-panel';
 
 export interface CheckResultProps {
@@ -49,9 +50,7 @@ function Matched({ order, newSyringe, completedAt, stepCount }: CheckResultProps
         </Group>
         <Text c="dimmed">Hand the button to the patient and start observations as the ward plan says.</Text>
         <Group>
-          <Button component={Link} to={paths.bedside.getHref({ wardId: order.wardId })} size="lg">
-            Back to PCA orders
-          </Button>
+          <BackToOrdersButton wardId={order.wardId} />
           <Anchor component={Link} to={paths.patient.getHref(order.patientId)}>
             Open the patient
           </Anchor>

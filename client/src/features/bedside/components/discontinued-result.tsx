@@ -1,9 +1,8 @@
-import { Button, Group, Stack, Text } from '@mantine/core';
-import { Link } from 'react-router-dom';
+import { Group, Stack, Text } from '@mantine/core';
 import { OrderStatusBadge } from '@/components/ui/order-status-badge';
-import { paths } from '@/config/paths';
 import { formatDateTime } from '@/utils/format-date';
 import type { DiscontinueResponse } from '../api/discontinue-order';
+import { BackToOrdersButton } from './back-to-orders-button';
 import { DonePanel } from './done-panel';
 import { ReconciliationSummary } from './reconciliation-summary';
 
@@ -22,9 +21,7 @@ export function DiscontinuedResult({ done }: { done: DiscontinueResponse }) {
         </Group>
         <ReconciliationSummary reconciliation={reconciliation} flags={order.flags} />
         <Group>
-          <Button component={Link} to={paths.bedside.getHref({ wardId: order.wardId })} size="lg">
-            Back to PCA orders
-          </Button>
+          <BackToOrdersButton wardId={order.wardId} />
         </Group>
       </Stack>
     </DonePanel>

@@ -1,9 +1,9 @@
-import { Stack, TextInput } from '@mantine/core';
+import { Stack } from '@mantine/core';
 import { useForm } from '@mantine/form';
-import { IconBarcode } from '@tabler/icons-react';
 import { normaliseReleaseCode, type SyringeReleaseResponse } from '@lockstep/shared';
 import type { BouncedErrors } from '../hooks/use-bedside-check';
 import { releaseCodeProblem } from '../utils/identity-check';
+import { ReleaseCodeInput } from './release-code-input';
 import { StepActions } from './step-actions';
 import { StepAlert } from './step-alert';
 import { StepPanel } from './step-panel';
@@ -34,18 +34,10 @@ export function SyringeStep({ releases, initialCode, bounced, stepCount, onNext,
     >
       <form onSubmit={form.onSubmit(({ releaseCode }) => onNext(normaliseReleaseCode(releaseCode)))} noValidate>
         <Stack gap="lg">
-          <TextInput
+          <ReleaseCodeInput
             label="Release code"
             description="On the pharmacy label, e.g. K7M-4QX"
-            size="lg"
-            maw={420}
-            autoComplete="off"
-            autoCapitalize="characters"
-            spellCheck={false}
-            withAsterisk
-            leftSection={<IconBarcode size={22} aria-hidden />}
-            classNames={{ input: 'tabular-nums' }}
-            {...form.getInputProps('releaseCode')}
+            inputProps={form.getInputProps('releaseCode')}
           />
           <StepAlert title="This syringe cannot be used">{bounced?.alert}</StepAlert>
           <StepActions next="Next: first check" onBack={onBack} />

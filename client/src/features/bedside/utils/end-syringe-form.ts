@@ -1,10 +1,11 @@
 import { readNumber, type NumberFieldValue } from '@/lib/number-input';
+import type { Colleague } from '../api/bedside-schemas';
 
 /** The part every end of a syringe shares: the two volumes and the witness. */
 export type EndSyringeValues = {
   volumeInfusedMl: NumberFieldValue;
   wastedMl: NumberFieldValue;
-  witness: { username: string; password: string };
+  witness: Colleague;
 };
 
 /** A volume in mL: required, a plain number, not negative. */

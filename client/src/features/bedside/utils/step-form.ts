@@ -1,5 +1,5 @@
 /** The part of a Mantine form a stepped task needs. */
-interface StepForm {
+export interface StepForm {
   validateField: (path: string) => { hasError: boolean };
 }
 
