@@ -1,9 +1,9 @@
 import type { ReactNode } from 'react';
-import { Alert, Button, Group, Modal, Stack, Textarea } from '@mantine/core';
+import { Textarea } from '@mantine/core';
 import { useForm } from '@mantine/form';
-import { IconAlertCircle } from '@tabler/icons-react';
 import { zod4Resolver } from 'mantine-form-zod-resolver';
 import { MIN_REASON_LENGTH, reasonRequestSchema } from '@lockstep/shared';
+import { FormModal } from '@/components/dialogs/form-modal';
 
 export interface ReasonModalProps {
   title: string;
@@ -34,37 +34,28 @@ export function ReasonModal({
   onClose,
 }: ReasonModalProps) {
   const form = useForm({ initialValues: { reason: '' }, validate: zod4Resolver(reasonRequestSchema) });
-  const submit = form.onSubmit(({ reason }) => onConfirm(reason.trim()));
   return (
-    <Modal opened onClose={onClose} title={title} size="lg">
-      <form onSubmit={submit} noValidate>
-        <Stack gap="md">
-          {children}
-          {refusal ? (
-            <Alert color="red" variant="light" icon={<IconAlertCircle aria-hidden />} title="Not done" role="alert">
-              {refusal}
-            </Alert>
-          ) : null}
-          <Textarea
-            label={label}
-            description={description ?? `At least ${MIN_REASON_LENGTH} characters`}
-            autosize
-            minRows={3}
-            size="md"
-            withAsterisk
-            data-autofocus
-            {...form.getInputProps('reason')}
-          />
-          <Group justify="flex-end">
-            <Button variant="default" onClick={onClose}>
-              Back
-            </Button>
-            <Button type="submit" color={confirmColor} loading={pending}>
-              {confirmLabel}
-            </Button>
-          </Group>
-        </Stack>
-      </form>
-    </Modal>
+    <FormModal
+      title={title}
+      onClose={onClose}
+      onSubmit={form.onSubmit(({ reason }) => onConfirm(reason.trim()))}
+      refusal={refusal}
+      refusalTitle="Not done"
+      confirm={{ label: confirmLabel, color: confirmColor, pending }}
+      field={
+        <Textarea
+          label={label}
+          description={description ?? `At least ${MIN_REASON_LENGTH} characters`}
+          autosize
+          minRows={3}
+          size="md"
+          withAsterisk
+          data-autofocus
+          {...form.getInputProps('reason')}
+        />
+      }
+    >
+      {children}
+    </FormModal>
   );
 }

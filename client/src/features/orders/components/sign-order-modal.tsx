@@ -1,11 +1,11 @@
 import { useState } from 'react';
 import { List, Stack, Text } from '@mantine/core';
 import { REGIMEN_FIELD_LABELS, type CreateOrderRequest, type OrderDetail, type RegimenField } from '@lockstep/shared';
-import { errorMessage, isApiRequestError, isSignatureError } from '@/lib/api-error';
+import { SignatureModal, type SignatureHandlers } from '@/components/dialogs/signature-modal';
+import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { useCreateOrder } from '../api/create-order';
 import { useReviseOrder } from '../api/revise-order';
 import { regimenSummary } from '../utils/regimen-format';
-import { SignatureModal } from './signature-modal';
 
 export interface SignOrderModalProps {
   /** The order as it will be sent, short of the password. */
@@ -26,14 +26,14 @@ export function SignOrderModal({ unsigned, drugName, revisingId, onSigned, onRef
   const [refusal, setRefusal] = useState<string | null>(null);
   const pending = create.isPending || revise.isPending;
 
-  const sign = (password: string, { wrongPassword }: { wrongPassword: (message: string) => void }) => {
+  const sign = (password: string, { passwordRefused }: SignatureHandlers) => {
     setRefusal(null);
     const request: CreateOrderRequest = { ...unsigned, signature: { password } };
     const handlers = {
       onSuccess: onSigned,
       onError: (error: unknown) => {
-        if (isSignatureError(error) && isApiRequestError(error)) wrongPassword(error.message);
-        else if (isApiRequestError(error) && error.status === 400) onRefusedFields(error);
+        if (passwordRefused(error)) return;
+        if (isApiRequestError(error) && error.status === 400) onRefusedFields(error);
         else setRefusal(errorMessage(error));
       },
     };

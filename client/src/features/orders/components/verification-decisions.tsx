@@ -1,14 +1,14 @@
 import { useState } from 'react';
 import { Text } from '@mantine/core';
 import type { OrderDetail } from '@lockstep/shared';
-import { errorMessage, isApiRequestError, isSignatureError } from '@/lib/api-error';
+import { SignatureModal } from '@/components/dialogs/signature-modal';
+import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
 import { useRejectOrder } from '../api/reject-order';
 import { useReturnOrder } from '../api/return-order';
 import { useVerifyOrder } from '../api/verify-order';
 import { regimenSummary } from '../utils/regimen-format';
 import { ReasonModal } from './reason-modal';
-import { SignatureModal } from './signature-modal';
 
 export type Decision = 'verify' | 'return' | 'reject';
 
@@ -54,7 +54,7 @@ export function VerificationDecision({ order, decision, onDone, onConflict, onCl
         pending={verify.isPending}
         refusal={refusal}
         onClose={onClose}
-        onSign={(password, { wrongPassword }) => {
+        onSign={(password, { passwordRefused }) => {
           setRefusal(null);
           verify.mutate(
             { orderId: order.id, password },
@@ -63,7 +63,9 @@ export function VerificationDecision({ order, decision, onDone, onConflict, onCl
                 notifySuccess('Order verified', `Order ${order.id} is verified: a syringe can be released.`);
                 onDone('verify');
               },
-              onError: (error) => (isSignatureError(error) && isApiRequestError(error) ? wrongPassword(error.message) : onError(error)),
+              onError: (error) => {
+                if (!passwordRefused(error)) onError(error);
+              },
             },
           );
         }}
