@@ -3,6 +3,7 @@ import { DocumentBuilder, type OpenAPIObject, SwaggerModule } from '@nestjs/swag
 import { ApiErrorModel } from './api-error.model.js';
 import { addAccessAndCommonErrors } from './document-access.js';
 import { fillDocumentDefaults } from './document-defaults.js';
+import { addResponseSchemas } from './response-schemas.js';
 import { operationIdOf, readRouteFacts } from './route-facts.js';
 
 export const OPENAPI_UI_PATH = 'api/docs';
@@ -25,5 +26,5 @@ export function buildOpenApiDocument(app: INestApplication): OpenAPIObject {
     .build();
   const document = SwaggerModule.createDocument(app, config, { extraModels: [ApiErrorModel], operationIdFactory: operationIdOf });
   const facts = readRouteFacts(app);
-  return addAccessAndCommonErrors(fillDocumentDefaults(document, facts), facts);
+  return addAccessAndCommonErrors(addResponseSchemas(fillDocumentDefaults(document, facts)), facts);
 }

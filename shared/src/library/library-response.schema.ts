@@ -1,0 +1,42 @@
+import { z } from 'zod';
+import { answer } from '../api/response-registry.js';
+import { REGIMEN_FIELDS } from '../dose/regimen-fields.js';
+import type { RegimenField } from '../dose/types.js';
+import type { LibraryDiff, NamedRule, RuleChange } from './diff-library.js';
+import { LIMIT_KEYS, libraryVersionDetailSchema, libraryVersionSchema, limitRuleInputSchema, limitRuleSchema } from './library.schema.js';
+
+answer('LimitRule', limitRuleSchema);
+answer('LibraryVersion', libraryVersionSchema);
+answer('LibraryVersionDetail', libraryVersionDetailSchema);
+
+export const namedRuleSchema: z.ZodType<NamedRule> = answer('NamedRule', limitRuleInputSchema.extend({ drugName: z.string() }));
+
+const limitValue = z.number().nullable();
+const ruleChangeSchema: z.ZodType<RuleChange> = z.union([
+  z.object({
+    field: z.enum(REGIMEN_FIELDS as [RegimenField, ...RegimenField[]]),
+    limit: z.enum(LIMIT_KEYS),
+    from: limitValue,
+    to: limitValue,
+  }),
+  z.object({ field: z.literal('perKg'), from: z.boolean(), to: z.boolean() }),
+  z.object({ field: z.literal('doseUnit'), from: z.string(), to: z.string() }),
+]);
+
+const diffShape = {
+  added: z.array(namedRuleSchema),
+  removed: z.array(namedRuleSchema),
+  changed: z.array(
+    z.object({ drugName: z.string(), concentrationPerMl: z.number(), doseUnit: z.string(), changes: z.array(ruleChangeSchema) }),
+  ),
+};
+
+export const libraryDiffSchema: z.ZodType<LibraryDiff> = answer('LibraryDiff', z.object(diffShape));
+
+/** A version's changes against the ward's active version (null when there is none to compare with). */
+export const versionDiffSchema = answer('LibraryVersionDiff', z.object({ ...diffShape, againstVersionId: z.number().int().nullable() }));
+export type VersionDiff = z.infer<typeof versionDiffSchema>;
+
+/** The answer to an import with `dryRun`: the file's rules and their diff against the active version. */
+export const importPreviewSchema = answer('LibraryImportPreview', z.object({ rules: z.array(namedRuleSchema), diff: libraryDiffSchema }));
+export type ImportPreview = z.infer<typeof importPreviewSchema>;

@@ -1,0 +1,56 @@
+import { z } from 'zod';
+import { answer } from '../api/response-registry.js';
+import { flagSeveritySchema } from '../orders/order-response.schema.js';
+import { observationDueSchema } from './observation-due.js';
+import { SEDATION_LEVELS } from './sedation-scale.js';
+
+const observationShape = {
+  id: z.number().int(),
+  orderId: z.number().int(),
+  releaseId: z.number().int(),
+  at: z.string(),
+  painScore: z.number(),
+  sedationLevel: z.enum(SEDATION_LEVELS),
+  respiratoryRate: z.number(),
+  spo2: z.number(),
+  attempts: z.number(),
+  delivered: z.number(),
+  volumeInfusedMl: z.number(),
+  syringeRemainingMl: z.number(),
+  note: z.string(),
+  recordedByName: z.string(),
+};
+
+export const observationSchema = answer('Observation', z.object(observationShape));
+export type ObservationResponse = z.infer<typeof observationSchema>;
+
+/** A flag as the observation that raised it answers it. */
+export const raisedFlagSchema = z.object({
+  id: z.number().int(),
+  severity: flagSeveritySchema,
+  code: z.string(),
+  message: z.string(),
+  action: z.string(),
+});
+export type RaisedFlag = z.infer<typeof raisedFlagSchema>;
+
+export const recordedObservationSchema = answer('RecordedObservation', z.object({ ...observationShape, flags: z.array(raisedFlagSchema) }));
+export type RecordedObservation = z.infer<typeof recordedObservationSchema>;
+
+const totalsSchema = z.object({ attempts: z.number(), delivered: z.number(), dose: z.number(), bolusDose: z.number() });
+
+export const usageSchema = answer(
+  'Usage',
+  z.object({
+    hours: z.number(),
+    buckets: z.array(totalsSchema.extend({ start: z.string() })),
+    totals: totalsSchema,
+    rolling24hDose: z.number(),
+    averageDosePerHour: z.number(),
+    oralMorphineEquivalent24hMg: z.number().nullable(),
+    doseUnit: z.string(),
+    projectedEmptyAt: z.string().nullable(),
+    nextObservation: observationDueSchema.nullable(),
+  }),
+);
+export type UsageResponse = z.infer<typeof usageSchema>;
