@@ -39,6 +39,7 @@ export * from './orders/derive-order-values.js';
 export * from './orders/order-status.js';
 export * from './orders/order.schema.js';
 export * from './orders/release-code.js';
+export * from './orders/format-regimen.js';
 export * from './bedside/bedside.schema.js';
 export * from './bedside/compare-settings.js';
 export * from './bedside/wristband.js';

@@ -1,4 +1,4 @@
-import { formatDose, tallMan } from '@lockstep/shared';
+import { formatDose, formatRegimen } from '@lockstep/shared';
 import type { OutgoingMail } from '../mail/mail.service.js';
 import type { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
 import type { PcaOrder } from './entities/pca-order.entity.js';
@@ -8,9 +8,7 @@ import type { PcaOrder } from './entities/pca-order.entity.js';
 
 /** Expects patient (with ward), drug and prescriber loaded. */
 function regimenLine(order: PcaOrder): string {
-  const unit = order.doseUnit;
-  const basal = order.basalRatePerHour > 0 ? `, basal ${formatDose(order.basalRatePerHour, `${unit}/h`)}` : '';
-  return `${tallMan(order.drug.genericName)} ${formatDose(order.concentrationPerMl, `${unit}/mL`)}: demand ${formatDose(order.demandDose, unit)}, lockout ${formatDose(order.lockoutMinutes, 'min')}${basal}`;
+  return formatRegimen({ ...order, drugName: order.drug.genericName });
 }
 
 function where(order: PcaOrder): string {
