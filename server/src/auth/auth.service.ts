@@ -9,7 +9,7 @@ import type { LoginDto } from './dto/login.dto.js';
 import { TokenRevocationService } from './token-revocation.service.js';
 
 /** One message for every failed sign-in, so nobody can learn which usernames exist. */
-export const BAD_CREDENTIALS = 'Username or password is incorrect';
+const BAD_CREDENTIALS = 'Username or password is incorrect';
 
 @Injectable()
 export class AuthService {

@@ -1,11 +1,10 @@
-import { BadRequestException, ConflictException, Injectable, NotFoundException } from '@nestjs/common';
+import { ConflictException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource, EntityManager } from 'typeorm';
 import {
   BEDSIDE_ROLES,
   compareSettings,
   wristbandErrors,
-  normaliseReleaseCode,
   type FirstCheckResponse,
   type PumpSettings,
   type SecondCheckResponse,
@@ -19,8 +18,10 @@ import { UsersService } from '../users/users.service.js';
 import type { FirstCheckDto, SecondCheckDto } from './dto/bedside-check.dto.js';
 import { BedsideCheck } from './entities/bedside-check.entity.js';
 import { requireBedsideAction } from './bedside-state.js';
-import { WardEventsService } from '../handover/ward-events.service.js';
+import { WardEventsService } from '../ward-events/ward-events.service.js';
 import { recordAudit } from '../audit/record-audit.js';
+import { fieldErrors } from '../common/errors/field-error.js';
+import { readyRelease } from './ready-release.js';
 
 /**
  * The independent double-check. The first nurse identifies the patient and syringe and enters the
@@ -131,26 +132,7 @@ export class BedsideChecksService {
 
 function checkIdentity(order: PcaOrder, dto: FirstCheckDto): void {
   const errors = wristbandErrors(dto, order.patient);
-  if (errors.length > 0)
-    throw new BadRequestException({
-      statusCode: 400,
-      message: 'The patient does not match this order: stop and check the wristband',
-      errors,
-    });
-}
-
-/** A `ready` syringe released for this very order, from the code on its label. */
-export async function readyRelease(manager: EntityManager, order: PcaOrder, typedCode: string, field: string): Promise<SyringeRelease> {
-  const release = await manager.findOneBy(SyringeRelease, { releaseCode: normaliseReleaseCode(typedCode) });
-  const problem = !release
-    ? 'No syringe has this release code: check the label'
-    : release.orderId !== order.id
-      ? 'This syringe was released for another order: do not use it'
-      : release.status !== 'ready'
-        ? `This syringe is ${release.status === 'in_use' ? 'already in use' : 'finished'}: use a new, ready syringe`
-        : null;
-  if (problem) throw new BadRequestException({ statusCode: 400, message: problem, errors: [{ field, message: problem }] });
-  return release!;
+  if (errors.length > 0) throw fieldErrors('The patient does not match this order: stop and check the wristband', errors);
 }
 
 function orderedSettings(order: PcaOrder, release: SyringeRelease): PumpSettings {

@@ -1,13 +1,14 @@
 import { Module } from '@nestjs/common';
 import { OrdersModule } from '../orders/orders.module.js';
 import { UsersModule } from '../users/users.module.js';
+import { WardEventsModule } from '../ward-events/ward-events.module.js';
 import { BedsideChecksService } from './bedside-checks.service.js';
 import { BedsideController } from './bedside.controller.js';
 import { BolusesService } from './boluses.service.js';
 import { SyringeEndService } from './syringe-end.service.js';
 
 @Module({
-  imports: [OrdersModule, UsersModule],
+  imports: [OrdersModule, UsersModule, WardEventsModule],
   controllers: [BedsideController],
   providers: [BedsideChecksService, BolusesService, SyringeEndService],
 })

@@ -1,4 +1,4 @@
-import { BadRequestException, Injectable } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
 import { BEDSIDE_ROLES, checkAgainstRule, formatDose } from '@lockstep/shared';
@@ -10,6 +10,7 @@ import type { BolusDto } from './dto/bedside-actions.dto.js';
 import { requireBedsideAction } from './bedside-state.js';
 import { ClinicianBolus } from './entities/clinician-bolus.entity.js';
 import { recordAudit } from '../audit/record-audit.js';
+import { fieldError } from '../common/errors/field-error.js';
 
 export type BolusResponse = {
   id: number;
@@ -39,9 +40,10 @@ export class BolusesService {
       if (order.status !== 'active') throw statusConflict(order.status, 'active');
       await requireBedsideAction(manager, order, 'bolus');
       const unit = order.doseUnit;
-      if (order.clinicianBolusDose === null) throw amountProblem('This order has no clinician bolus: ask the prescriber');
+      if (order.clinicianBolusDose === null) throw fieldError('amount', 'This order has no clinician bolus: ask the prescriber');
       if (dto.amount > order.clinicianBolusDose + 1e-9) {
-        throw amountProblem(
+        throw fieldError(
+          'amount',
           `${formatDose(dto.amount, unit)} is more than the ordered clinician bolus of ${formatDose(order.clinicianBolusDose, unit)}`,
         );
       }
@@ -52,10 +54,10 @@ export class BolusesService {
         const value = rule.perKg && weight ? dto.amount / weight : dto.amount;
         const result = checkAgainstRule(value, limits);
         if (result === 'hard-high' || result === 'hard-low')
-          throw amountProblem(`${formatDose(dto.amount, unit)} is outside the ward's hard limit for a clinician bolus`);
+          throw fieldError('amount', `${formatDose(dto.amount, unit)} is outside the ward's hard limit for a clinician bolus`);
         if ((result === 'soft-high' || result === 'soft-low') && !dto.overrideReason?.trim()) {
           const message = `${formatDose(dto.amount, unit)} is outside the ward's soft limit for a clinician bolus: give a reason`;
-          throw new BadRequestException({ statusCode: 400, message, errors: [{ field: 'overrideReason', message }] });
+          throw fieldError('overrideReason', message);
         }
       }
       const bolus = await manager.save(
@@ -95,8 +97,4 @@ export class BolusesService {
       };
     });
   }
-}
-
-function amountProblem(message: string): BadRequestException {
-  return new BadRequestException({ statusCode: 400, message, errors: [{ field: 'amount', message }] });
 }

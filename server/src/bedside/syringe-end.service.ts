@@ -9,12 +9,12 @@ import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { statusConflict, transitionOrder } from '../orders/order-transitions.js';
 import { OrdersService } from '../orders/orders.service.js';
 import { UsersService } from '../users/users.service.js';
-import { readyRelease } from './bedside-checks.service.js';
+import { readyRelease } from './ready-release.js';
 import type { DiscontinueDto, SyringeChangeDto } from './dto/bedside-actions.dto.js';
 import { requireBedsideAction } from './bedside-state.js';
 import { finishRunningSyringe } from './reconcile-release.js';
 import { discrepancyFlag, discrepancyMail, reconciliationAuditSummary } from './reconciliation-records.js';
-import { WardEventsService } from '../handover/ward-events.service.js';
+import { WardEventsService } from '../ward-events/ward-events.service.js';
 import { recordAudit } from '../audit/record-audit.js';
 
 export type SyringeChangeResponse = { reconciliation: ReconciliationResponse; newReleaseCode: string; nextStep: string };

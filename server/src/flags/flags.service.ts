@@ -3,8 +3,9 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, IsNull } from 'typeorm';
 import type { FlagResponse, FlagSeverity } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
+import { toFlagResponse } from './dto/flag-response.js';
 import { Flag } from './entities/flag.entity.js';
-import { WardEventsService } from '../handover/ward-events.service.js';
+import { WardEventsService } from '../ward-events/ward-events.service.js';
 import { recordAudit } from '../audit/record-audit.js';
 
 export type NewFlag = { orderId: number; releaseId?: number | null; severity: FlagSeverity; code: string; message: string; action: string };
@@ -51,18 +52,4 @@ export class FlagsService {
     this.events.publishForOrder(flag.orderId, 'flag');
     return toFlagResponse(flag);
   }
-}
-
-export function toFlagResponse(flag: Flag): FlagResponse {
-  return {
-    id: flag.id,
-    severity: flag.severity,
-    code: flag.code,
-    message: flag.message,
-    action: flag.action,
-    raisedAt: flag.raisedAt.toISOString(),
-    acknowledgedAt: flag.acknowledgedAt?.toISOString() ?? null,
-    acknowledgedByName: flag.acknowledgedBy?.displayName ?? null,
-    acknowledgeNote: flag.acknowledgeNote,
-  };
 }

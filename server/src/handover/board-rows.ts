@@ -7,7 +7,7 @@ import {
   riskTier,
   type WardPolicy,
 } from '@lockstep/shared';
-import { toFlagResponse } from '../flags/flags.service.js';
+import { toFlagResponse } from '../flags/dto/flag-response.js';
 import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { toSignoffResponse } from './dto/signoff-response.js';
 import { type BoardInputs, emptyInputs, inputsByOrder, type OrderInputs, rowFigures } from './row-figures.js';

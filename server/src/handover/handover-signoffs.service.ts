@@ -8,7 +8,7 @@ import { Ward } from '../wards/entities/ward.entity.js';
 import type { CreateSignoffDto } from './dto/create-signoff.dto.js';
 import { toSignoffResponse } from './dto/signoff-response.js';
 import { HandoverSignoff } from './entities/handover-signoff.entity.js';
-import { WardEventsService } from './ward-events.service.js';
+import { WardEventsService } from '../ward-events/ward-events.service.js';
 import { fieldError } from '../common/errors/field-error.js';
 import { recordAudit } from '../audit/record-audit.js';
 

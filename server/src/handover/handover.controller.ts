@@ -10,7 +10,7 @@ import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
 import { CreateSignoffDto } from './dto/create-signoff.dto.js';
 import { HandoverBoardService } from './handover-board.service.js';
 import { HandoverSignoffsService } from './handover-signoffs.service.js';
-import { WardEventsService } from './ward-events.service.js';
+import { WardEventsService } from '../ward-events/ward-events.service.js';
 
 @Controller('wards/:wardId/handover')
 @Roles(...CLINICAL_ROLES)

@@ -1,14 +1,12 @@
-import { Global, Module } from '@nestjs/common';
+import { Module } from '@nestjs/common';
+import { WardEventsModule } from '../ward-events/ward-events.module.js';
 import { HandoverBoardService } from './handover-board.service.js';
 import { HandoverSignoffsService } from './handover-signoffs.service.js';
 import { HandoverController } from './handover.controller.js';
-import { WardEventsService } from './ward-events.service.js';
 
-/** Global so that every clinical service can announce ward changes. */
-@Global()
 @Module({
+  imports: [WardEventsModule],
   controllers: [HandoverController],
-  providers: [HandoverBoardService, HandoverSignoffsService, WardEventsService],
-  exports: [WardEventsService],
+  providers: [HandoverBoardService, HandoverSignoffsService],
 })
 export class HandoverModule {}

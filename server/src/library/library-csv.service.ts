@@ -1,4 +1,4 @@
-import { BadRequestException, Injectable } from '@nestjs/common';
+import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { parse } from 'csv-parse/sync';
 import { stringify } from 'csv-stringify/sync';
@@ -15,14 +15,14 @@ import {
   type NamedRule,
 } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
-import { fieldError } from '../common/errors/field-error.js';
+import { fieldError, fieldErrors } from '../common/errors/field-error.js';
 import { Drug } from '../drugs/entities/drug.entity.js';
 import { Ward } from '../wards/entities/ward.entity.js';
 import { LibraryVersion } from './entities/library-version.entity.js';
 import { LibraryVersionsService } from './library-versions.service.js';
-import { LibraryService, toNamedRule } from './library.service.js';
-
-export const MAX_LIBRARY_CSV_BYTES = 1024 * 1024;
+import { FILE_TOO_LARGE, MAX_LIBRARY_CSV_BYTES } from './library-csv-limit.js';
+import { LibraryService } from './library.service.js';
+import { toNamedRule } from './named-rule.js';
 
 export type UploadedCsv = { originalname: string; mimetype: string; size: number; buffer: Buffer };
 export type ImportPreview = { rules: NamedRule[]; diff: LibraryDiff };
@@ -85,7 +85,7 @@ export class LibraryCsvService {
 function checkedText(file: UploadedCsv | undefined): string {
   if (!file) throw fileProblem('Choose a CSV file to upload (form field "file")');
   if (file.size === 0) throw fileProblem('The file is empty');
-  if (file.size > MAX_LIBRARY_CSV_BYTES) throw fileProblem('The file is over 1 MB; a dose-limit library CSV is far smaller');
+  if (file.size > MAX_LIBRARY_CSV_BYTES) throw fileProblem(FILE_TOO_LARGE);
   const looksLikeCsv = /\.csv$/i.test(file.originalname) || /^text\/(csv|plain)$|^application\/vnd\.ms-excel$/.test(file.mimetype);
   if (!looksLikeCsv) throw fileProblem('Only CSV files (.csv) can be imported');
   if (file.buffer.includes(0)) throw fileProblem('The file is not text: save it as CSV (comma-separated values) and try again');
@@ -94,23 +94,21 @@ function checkedText(file: UploadedCsv | undefined): string {
   return text;
 }
 
-function fileProblem(message: string): BadRequestException {
-  return new BadRequestException({ statusCode: 400, message, errors: [{ field: 'file', message }] });
+function fileProblem(message: string) {
+  return fieldError('file', message);
 }
 
 // A file that is wrong throughout would otherwise answer megabytes of the same few mistakes.
 const PROBLEMS_LISTED = 200;
 
-function rowProblems(problems: CsvProblem[]): BadRequestException {
+function rowProblems(problems: CsvProblem[]) {
   const rows = new Set(problems.map((problem) => problem.row)).size;
   const more = problems.length - PROBLEMS_LISTED;
-  return new BadRequestException({
-    statusCode: 400,
-    message:
-      `The file has ${problems.length} problem${problems.length === 1 ? '' : 's'} in ${rows} row${rows === 1 ? '' : 's'}; nothing was imported` +
+  return fieldErrors(
+    `The file has ${problems.length} problem${problems.length === 1 ? '' : 's'} in ${rows} row${rows === 1 ? '' : 's'}; nothing was imported` +
       (more > 0 ? ` (the first ${PROBLEMS_LISTED} are listed)` : ''),
-    errors: problems
+    problems
       .slice(0, PROBLEMS_LISTED)
       .map(({ row, column, message }) => ({ field: 'file', row, column, message: `Row ${row}, ${column}: ${message}` })),
-  });
+  );
 }

@@ -1,4 +1,4 @@
-import { BadRequestException, ConflictException, ForbiddenException, Injectable } from '@nestjs/common';
+import { ConflictException, ForbiddenException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In } from 'typeorm';
 import {
@@ -18,7 +18,7 @@ import { toLibraryVersionDetail } from './dto/library-response.js';
 import { LibraryVersion } from './entities/library-version.entity.js';
 import { LimitRule } from './entities/limit-rule.entity.js';
 import { LibraryService } from './library.service.js';
-import { fieldError } from '../common/errors/field-error.js';
+import { fieldError, fieldErrors } from '../common/errors/field-error.js';
 import { recordAudit } from '../audit/record-audit.js';
 
 /**
@@ -199,11 +199,10 @@ export class LibraryVersionsService {
       }
     });
     if (problems.length > 0) {
-      throw new BadRequestException({
-        statusCode: 400,
-        message: 'Some limit rules need correcting',
-        errors: problems.map((problem) => ({ field: problem.path, message: problem.message })),
-      });
+      throw fieldErrors(
+        'Some limit rules need correcting',
+        problems.map((problem) => ({ field: problem.path, message: problem.message })),
+      );
     }
     if (rules.length > 0) {
       await manager.insert(

@@ -1,17 +1,12 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In } from 'typeorm';
-import {
-  diffLibrary,
-  type LibraryDiff,
-  type LibraryVersion as LibraryVersionResponse,
-  type LibraryVersionDetail,
-  type NamedRule,
-} from '@lockstep/shared';
+import { diffLibrary, type LibraryDiff, type LibraryVersion as LibraryVersionResponse, type LibraryVersionDetail } from '@lockstep/shared';
 import { Ward } from '../wards/entities/ward.entity.js';
-import { toLibraryVersionDetail, toLibraryVersionResponse, toLimitRuleResponse } from './dto/library-response.js';
+import { toLibraryVersionDetail, toLibraryVersionResponse } from './dto/library-response.js';
 import { LibraryVersion } from './entities/library-version.entity.js';
 import { LimitRule } from './entities/limit-rule.entity.js';
+import { toNamedRule } from './named-rule.js';
 
 const VERSION_RELATIONS = { ward: true, author: true, approver: true, rules: { drug: true } } as const;
 
@@ -89,9 +84,4 @@ export class LibraryService {
       .getRawMany();
     return new Map(rows.map((row) => [Number(row.versionId), Number(row.count)]));
   }
-}
-
-export function toNamedRule(rule: LimitRule): NamedRule {
-  const { id: _id, ...named } = toLimitRuleResponse(rule);
-  return named;
 }

@@ -1,11 +1,12 @@
 import { Module } from '@nestjs/common';
 import { OrdersModule } from '../orders/orders.module.js';
+import { WardEventsModule } from '../ward-events/ward-events.module.js';
 import { ObservationsController } from './observations.controller.js';
 import { ObservationsService } from './observations.service.js';
 import { UsageService } from './usage.service.js';
 
 @Module({
-  imports: [OrdersModule],
+  imports: [OrdersModule, WardEventsModule],
   controllers: [ObservationsController],
   providers: [ObservationsService, UsageService],
 })

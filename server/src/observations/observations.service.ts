@@ -1,4 +1,4 @@
-import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
+import { ConflictException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, LessThanOrEqual, MoreThan } from 'typeorm';
 import { observationFlags, observationTimelineErrors, ORDER_STATUS_LABELS, type FlagDraft } from '@lockstep/shared';
@@ -15,8 +15,9 @@ import { type ObservationResponse, toObservationResponse } from './dto/observati
 import { Observation } from './entities/observation.entity.js';
 import { observationAuditSummary } from './observation-audit.js';
 import { syringeLowMail, urgentFlagsMail } from './observation-notifications.js';
-import { WardEventsService } from '../handover/ward-events.service.js';
+import { WardEventsService } from '../ward-events/ward-events.service.js';
 import { recordAudit } from '../audit/record-audit.js';
+import { fieldErrors } from '../common/errors/field-error.js';
 import { requireBedsideAction } from '../bedside/bedside-state.js';
 
 @Injectable()
@@ -108,6 +109,6 @@ async function checkTimeline(manager: EntityManager, order: PcaOrder, release: S
     startedAt: order.startedAt,
     now: new Date(),
   });
-  if (errors.length > 0) throw new BadRequestException({ statusCode: 400, message: 'The observation needs correcting', errors });
+  if (errors.length > 0) throw fieldErrors('The observation needs correcting', errors);
   return { previous };
 }

@@ -9,7 +9,7 @@ import { orderRejectedMail, orderReturnedMail } from './order-notifications.js';
 import { transitionOrder } from './order-transitions.js';
 import { recordAudit } from '../audit/record-audit.js';
 import { OrdersService } from './orders.service.js';
-import { WardEventsService } from '../handover/ward-events.service.js';
+import { WardEventsService } from '../ward-events/ward-events.service.js';
 
 /** Pharmacy's decisions on an order awaiting verification: verify, return with a query, reject. */
 @Injectable()

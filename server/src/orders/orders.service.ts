@@ -1,4 +1,4 @@
-import { BadRequestException, Injectable, NotFoundException } from '@nestjs/common';
+import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In } from 'typeorm';
 import {
@@ -29,7 +29,8 @@ import { OrderPreviewService } from './order-preview.service.js';
 import { statusConflict, transitionOrder } from './order-transitions.js';
 import { orderAuditSummary } from './order-audit.js';
 import { recordAudit } from '../audit/record-audit.js';
-import { WardEventsService } from '../handover/ward-events.service.js';
+import { fieldErrors } from '../common/errors/field-error.js';
+import { WardEventsService } from '../ward-events/ward-events.service.js';
 
 const DETAIL_RELATIONS = { ...ORDER_SUMMARY_RELATIONS, verifiedBy: true } as const;
 
@@ -170,11 +171,9 @@ export class OrdersService {
     const previous = await this.load(manager, id);
     if (previous.status !== 'returned') throw statusConflict(previous.status, 'superseded' satisfies OrderStatus);
     if (previous.patientId !== patientId) {
-      throw new BadRequestException({
-        statusCode: 400,
-        message: 'A revision is for the same patient',
-        errors: [{ field: 'patientId', message: 'A revision is for the same patient as the order it revises' }],
-      });
+      throw fieldErrors('A revision is for the same patient', [
+        { field: 'patientId', message: 'A revision is for the same patient as the order it revises' },
+      ]);
     }
     return previous;
   }
@@ -184,19 +183,17 @@ export class OrdersService {
 function checkSignable(findings: Finding[], dto: CreateOrderDto): CreateOrderDto['overrides'] {
   const blocking = blockingFindings(findings);
   if (blocking.length > 0) {
-    throw new BadRequestException({
-      statusCode: 400,
-      message: 'This order cannot be signed: correct the values outside the hard limits',
-      errors: blocking.map((finding) => ({ field: finding.field, message: finding.message })),
-    });
+    throw fieldErrors(
+      'This order cannot be signed: correct the values outside the hard limits',
+      blocking.map((finding) => ({ field: finding.field, message: finding.message })),
+    );
   }
   const unexplained = unexplainedSoftFindings(findings, dto.overrides);
   if (unexplained.length > 0) {
-    throw new BadRequestException({
-      statusCode: 400,
-      message: 'Give a reason for each value outside a soft limit',
-      errors: unexplained.map((finding) => ({ field: finding.field, message: `Reason needed: ${finding.message}` })),
-    });
+    throw fieldErrors(
+      'Give a reason for each value outside a soft limit',
+      unexplained.map((finding) => ({ field: finding.field, message: `Reason needed: ${finding.message}` })),
+    );
   }
   return reasonsToKeep(findings, dto.overrides);
 }

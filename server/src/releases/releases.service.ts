@@ -1,4 +1,4 @@
-import { BadRequestException, ConflictException, Injectable } from '@nestjs/common';
+import { ConflictException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { randomInt } from 'node:crypto';
 import type { DataSource, EntityManager } from 'typeorm';
@@ -18,8 +18,9 @@ import { toReleaseResponse } from './dto/release-response.js';
 import { releaseAuditSummary } from './release-audit.js';
 import type { CreateReleaseDto } from './dto/create-release.dto.js';
 import { SyringeRelease } from './entities/syringe-release.entity.js';
-import { WardEventsService } from '../handover/ward-events.service.js';
+import { WardEventsService } from '../ward-events/ward-events.service.js';
 import { recordAudit } from '../audit/record-audit.js';
+import { fieldErrors } from '../common/errors/field-error.js';
 
 // Concentrations are decimals; compare them with a tolerance, never bit for bit.
 const SAME_CONCENTRATION = 1e-9;
@@ -93,7 +94,7 @@ function checkRelease(dto: CreateReleaseDto, orderedConcentration: number, doseU
   if (new Date(dto.expiresAt).getTime() <= Date.now()) {
     errors.push({ field: 'expiresAt', message: 'The expiry must be later than now' });
   }
-  if (errors.length > 0) throw new BadRequestException({ statusCode: 400, message: 'The syringe release needs correcting', errors });
+  if (errors.length > 0) throw fieldErrors('The syringe release needs correcting', errors);
 }
 
 async function uniqueCode(manager: EntityManager): Promise<string> {

@@ -1,12 +1,4 @@
-import {
-  BadRequestException,
-  ConflictException,
-  ForbiddenException,
-  Inject,
-  Injectable,
-  NotFoundException,
-  UnauthorizedException,
-} from '@nestjs/common';
+import { ConflictException, ForbiddenException, Inject, Injectable, NotFoundException, UnauthorizedException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
 import { DataSource, In, type Repository } from 'typeorm';
 import { ROLE_LABELS, type Role, type SessionProfile, type SessionUser, type User as UserResponse } from '@lockstep/shared';
@@ -19,6 +11,7 @@ import { hashPassword, passwordMatches } from './passwords.js';
 import { PasswordAttemptsService } from '../common/throttling/password-attempts.service.js';
 import type { AuthUser } from '../auth/auth-user.js';
 import { changedFields, recordAudit } from '../audit/record-audit.js';
+import { fieldError, fieldErrors } from '../common/errors/field-error.js';
 
 @Injectable()
 export class UsersService {
@@ -68,11 +61,9 @@ export class UsersService {
       });
     }
     if (colleague.id === notUserId) {
-      throw new BadRequestException({
-        statusCode: 400,
-        message: 'A second, different person must sign',
-        errors: [{ field: at('username'), message: 'You cannot be both people: a different colleague signs here' }],
-      });
+      throw fieldErrors('A second, different person must sign', [
+        { field: at('username'), message: 'You cannot be both people: a different colleague signs here' },
+      ]);
     }
     if (!roles.includes(colleague.role)) {
       throw new ForbiddenException(
@@ -159,11 +150,7 @@ async function findWards(wards: Repository<Ward>, ids: number[]): Promise<Ward[]
   const found = await wards.findBy({ id: In(unique) });
   const missing = unique.filter((id) => !found.some((ward) => ward.id === id));
   if (missing.length > 0) {
-    throw new BadRequestException({
-      statusCode: 400,
-      message: `No ward with id ${missing.join(', ')}`,
-      errors: [{ field: 'wardIds', message: `No ward with id ${missing.join(', ')}` }],
-    });
+    throw fieldError('wardIds', `No ward with id ${missing.join(', ')}`);
   }
   return found;
 }

@@ -1,5 +1,6 @@
-import { BadRequestException, type ValidationError } from '@nestjs/common';
+import type { BadRequestException, ValidationError } from '@nestjs/common';
 import type { FieldError } from '@lockstep/shared';
+import { fieldErrors } from '../errors/field-error.js';
 
 /** Flattens class-validator's nested errors into `{field, message}` with dotted paths. */
 export function flattenValidationErrors(errors: ValidationError[], parent = ''): FieldError[] {
@@ -11,11 +12,7 @@ export function flattenValidationErrors(errors: ValidationError[], parent = ''):
 }
 
 export function validationExceptionFactory(errors: ValidationError[]): BadRequestException {
-  const fieldErrors = flattenValidationErrors(errors);
-  const fields = [...new Set(fieldErrors.map((e) => e.field))].join(', ');
-  return new BadRequestException({
-    statusCode: 400,
-    message: `Please correct: ${fields}`,
-    errors: fieldErrors,
-  });
+  const flat = flattenValidationErrors(errors);
+  const fields = [...new Set(flat.map((e) => e.field))].join(', ');
+  return fieldErrors(`Please correct: ${fields}`, flat);
 }

@@ -13,8 +13,8 @@ const HEARTBEAT_MS = 20_000;
 
 /**
  * Announces changes on a ward (one process; several instances would fan out through the
- * database, see docs). Services publish after their transaction commits, so a listener that
- * refetches sees the change.
+ * database, see docs/scaling.md). Services publish after their transaction commits, so a
+ * listener that refetches sees the change. The handover controller serves the stream.
  */
 @Injectable()
 export class WardEventsService {
