@@ -1,5 +1,4 @@
-import type { ComponentType } from 'react';
-import { Badge, type BadgeProps } from '@mantine/core';
+import type { BadgeProps } from '@mantine/core';
 import {
   IconArrowBackUp,
   IconBan,
@@ -9,11 +8,11 @@ import {
   IconPlayerPlay,
   IconSquareX,
   IconVersions,
-  type IconProps,
 } from '@tabler/icons-react';
 import { ORDER_STATUS_LABELS, type OrderStatus } from '@lockstep/shared';
+import { StatusBadge, type StatusLook } from './status-badge';
 
-const STATUS_LOOK: Record<OrderStatus, { Icon: ComponentType<IconProps>; color: string }> = {
+const STATUS_LOOK: Record<OrderStatus, StatusLook> = {
   awaiting_verification: { Icon: IconHourglassHigh, color: 'orange' },
   verified: { Icon: IconCircleCheck, color: 'teal' },
   active: { Icon: IconPlayerPlay, color: 'green' },
@@ -25,19 +24,6 @@ const STATUS_LOOK: Record<OrderStatus, { Icon: ComponentType<IconProps>; color: 
 };
 
 /** An order's status as icon, word and colour. */
-export function OrderStatusBadge({ status, size = 'sm' }: { status: OrderStatus; size?: BadgeProps['size'] }) {
-  const { Icon, color } = STATUS_LOOK[status];
-  return (
-    <Badge
-      color={color}
-      variant="light"
-      size={size}
-      leftSection={<Icon size={size === 'sm' || size === 'xs' ? 12 : 14} aria-hidden />}
-      // The status is read in full, never cut to "Returned with a q…".
-      style={{ flexShrink: 0, overflow: 'visible' }}
-      styles={{ label: { overflow: 'visible' } }}
-    >
-      {ORDER_STATUS_LABELS[status]}
-    </Badge>
-  );
+export function OrderStatusBadge({ status, size }: { status: OrderStatus; size?: BadgeProps['size'] }) {
+  return <StatusBadge look={STATUS_LOOK[status]} label={ORDER_STATUS_LABELS[status]} size={size} />;
 }

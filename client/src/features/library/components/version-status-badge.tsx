@@ -1,9 +1,9 @@
-import type { ComponentType } from 'react';
-import { Badge, type BadgeProps } from '@mantine/core';
-import { IconArchive, IconCircleCheck, IconHourglassHigh, IconPencil, type IconProps } from '@tabler/icons-react';
+import type { BadgeProps } from '@mantine/core';
+import { IconArchive, IconCircleCheck, IconHourglassHigh, IconPencil } from '@tabler/icons-react';
 import { LIBRARY_STATUS_LABELS, type LibraryStatus } from '@lockstep/shared';
+import { StatusBadge, type StatusLook } from '@/components/ui/status-badge';
 
-const STATUS_LOOK: Record<LibraryStatus, { Icon: ComponentType<IconProps>; color: string }> = {
+const STATUS_LOOK: Record<LibraryStatus, StatusLook> = {
   draft: { Icon: IconPencil, color: 'blue' },
   pending_approval: { Icon: IconHourglassHigh, color: 'orange' },
   active: { Icon: IconCircleCheck, color: 'green' },
@@ -11,11 +11,6 @@ const STATUS_LOOK: Record<LibraryStatus, { Icon: ComponentType<IconProps>; color
 };
 
 /** A version's status as icon, word and colour. */
-export function VersionStatusBadge({ status, size = 'sm' }: { status: LibraryStatus; size?: BadgeProps['size'] }) {
-  const { Icon, color } = STATUS_LOOK[status];
-  return (
-    <Badge color={color} variant="light" size={size} leftSection={<Icon size={size === 'lg' ? 14 : 12} aria-hidden />}>
-      {LIBRARY_STATUS_LABELS[status]}
-    </Badge>
-  );
+export function VersionStatusBadge({ status, size }: { status: LibraryStatus; size?: BadgeProps['size'] }) {
+  return <StatusBadge look={STATUS_LOOK[status]} label={LIBRARY_STATUS_LABELS[status]} size={size} />;
 }

@@ -1,10 +1,9 @@
 import { useState } from 'react';
-import { Text } from '@mantine/core';
 import type { OrderSummary } from '@lockstep/shared';
 import { errorMessage } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
 import { useCancelOrder } from '../api/cancel-order';
-import { regimenSummary } from '../utils/regimen-format';
+import { OrderInBrief } from './order-in-brief';
 import { ReasonModal } from './reason-modal';
 
 /** The prescriber cancels an order that has not started, saying why. */
@@ -33,12 +32,7 @@ export function CancelOrderModal({ order, onClose }: { order: OrderSummary; onCl
         )
       }
     >
-      <Text size="sm">
-        {order.patientName}, {order.wardName} bed {order.bed}
-      </Text>
-      <Text size="sm" fw={600} className="tabular-nums">
-        {regimenSummary(order)}
-      </Text>
+      <OrderInBrief order={order} withMrn={false} />
     </ReasonModal>
   );
 }

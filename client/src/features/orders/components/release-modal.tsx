@@ -14,8 +14,8 @@ import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateRelease } from '../api/create-release';
 import { readAmount } from '../utils/order-form';
-import { regimenSummary } from '../utils/regimen-format';
 import { isUnusualVolume, readReleaseForm, releaseFormValues, type ReleaseFormValues } from '../utils/release-form';
+import { OrderInBrief } from './order-in-brief';
 import { ReleaseResult } from './release-result';
 
 export interface ReleaseModalProps {
@@ -65,12 +65,7 @@ export function ReleaseModal({ order, onClose }: ReleaseModalProps) {
       <form onSubmit={submit} noValidate>
         <Stack gap="md">
           <div>
-            <Text size="sm">
-              {order.patientName}, MRN {order.patientMrn}, {order.wardName} bed {order.bed}
-            </Text>
-            <Text size="sm" fw={600} className="tabular-nums">
-              {regimenSummary(order)}
-            </Text>
+            <OrderInBrief order={order} />
           </div>
           {formAlert.length > 0 ? (
             <Alert color="red" variant="light" icon={<IconAlertCircle aria-hidden />} title="Not released" role="alert">

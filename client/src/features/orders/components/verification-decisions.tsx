@@ -7,7 +7,7 @@ import { notifySuccess } from '@/lib/notify';
 import { useRejectOrder } from '../api/reject-order';
 import { useReturnOrder } from '../api/return-order';
 import { useVerifyOrder } from '../api/verify-order';
-import { regimenSummary } from '../utils/regimen-format';
+import { OrderInBrief } from './order-in-brief';
 import { ReasonModal } from './reason-modal';
 
 export type Decision = 'verify' | 'return' | 'reject';
@@ -31,16 +31,7 @@ export function VerificationDecision({ order, decision, onDone, onConflict, onCl
   const returnOrder = useReturnOrder();
   const reject = useRejectOrder();
   const [refusal, setRefusal] = useState<string | null>(null);
-  const summary = (
-    <>
-      <Text size="sm">
-        {order.patientName}, MRN {order.patientMrn}, {order.wardName} bed {order.bed}
-      </Text>
-      <Text size="sm" fw={600} className="tabular-nums">
-        {regimenSummary(order)}
-      </Text>
-    </>
-  );
+  const summary = <OrderInBrief order={order} />;
   const onError = (error: unknown) => {
     if (isConflict(error)) onConflict();
     else setRefusal(errorMessage(error));

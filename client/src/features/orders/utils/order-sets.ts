@@ -1,4 +1,4 @@
-import { withoutFloatNoise, type DoseUnit, type LimitRuleResponse } from '@lockstep/shared';
+import { withoutFloatNoise, type DoseUnit, type LimitRuleResponse, type RegimenField } from '@lockstep/shared';
 
 /** A standard starting regimen a prescriber can load into the form and then adjust. */
 export type OrderSet = {
@@ -104,16 +104,7 @@ export function availableOrderSets(
 }
 
 /** The regimen values a set puts into the form, as the text the inputs hold. */
-export type OrderSetPrefill = {
-  ruleId: string;
-  loadingDose: string;
-  demandDose: string;
-  lockoutMinutes: string;
-  basalRatePerHour: string;
-  oneHourLimit: string;
-  fourHourLimit: string;
-  clinicianBolusDose: string;
-};
+export type OrderSetPrefill = { ruleId: string } & Record<RegimenField, string>;
 
 function amountText(value: number | null): string {
   return value === null ? '' : String(withoutFloatNoise(value));
