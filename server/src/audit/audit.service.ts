@@ -1,6 +1,6 @@
 import { ForbiddenException, Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource } from 'typeorm';
+import { type DataSource, MoreThan } from 'typeorm';
 import {
   PHARMACY_AUDIT_ENTITY_TYPES,
   type AuditEvent as AuditEventResponse,
@@ -27,6 +27,7 @@ export class AuditService {
     if (allowedTypes && query.entityType && !allowedTypes.includes(query.entityType)) {
       throw new ForbiddenException(`Pharmacists may read the audit of ${allowedTypes.join(' and ')} records only`);
     }
+    // A query builder: the filters are optional, and times compare as the stored text (below).
     const builder = this.dataSource.manager.createQueryBuilder(AuditEvent, 'event');
     if (query.entityType) builder.andWhere('event.entityType = :entityType', { entityType: query.entityType });
     else if (allowedTypes) builder.andWhere('event.entityType IN (:...allowedTypes)', { allowedTypes });
@@ -62,12 +63,11 @@ export class AuditService {
     let previous = { id: 0, hash: GENESIS_HASH };
     let checked = 0;
     for (;;) {
-      const batch = await this.dataSource.manager
-        .createQueryBuilder(AuditEvent, 'event')
-        .where('event.id > :after', { after: previous.id })
-        .orderBy('event.id', 'ASC')
-        .take(VERIFY_BATCH)
-        .getMany();
+      const batch = await this.dataSource.manager.find(AuditEvent, {
+        where: { id: MoreThan(previous.id) },
+        order: { id: 'ASC' },
+        take: VERIFY_BATCH,
+      });
       for (const event of batch) {
         const { prevHash, hash, ...content } = event;
         const intact = event.id === previous.id + 1 && prevHash === previous.hash && auditHash(prevHash, content) === hash;

@@ -120,12 +120,11 @@ export class HandoverBoardService {
         select: { id: true, orderId: true, amount: true, at: true },
         where: { orderId: In(ids), at: MoreThanOrEqual(since) },
       }),
-      manager
-        .createQueryBuilder(ReleaseReconciliation, 'r')
-        .select(['r.id', 'r.at', 'release.id', 'release.orderId'])
-        .innerJoin('r.release', 'release')
-        .where('release.orderId IN (:...ids) AND r.mustReport = 1', { ids })
-        .getMany(),
+      manager.find(ReleaseReconciliation, {
+        select: { id: true, at: true, release: { id: true, orderId: true } },
+        where: { mustReport: true, release: { orderId: In(ids) } },
+        relations: { release: true },
+      }),
       manager.find(HandoverSignoff, {
         select: SIGNOFF_COLUMNS,
         where: { wardId, shiftDate: shift.shiftDate, shift: shift.shift as 'day' | 'night' },

@@ -18,16 +18,11 @@ export async function transitionOrder(
 ): Promise<void> {
   if (!canTransition(order.status, to)) throw statusConflict(order.status, to);
   const at = new Date();
-  const result = await manager
-    .createQueryBuilder()
-    .update(PcaOrder)
-    .set({ ...changes, status: to, statusChangedAt: at, statusReason: reason, rowVersion: order.rowVersion + 1 })
-    .where('id = :id AND rowVersion = :rowVersion AND status = :status', {
-      id: order.id,
-      rowVersion: order.rowVersion,
-      status: order.status,
-    })
-    .execute();
+  const result = await manager.update(
+    PcaOrder,
+    { id: order.id, rowVersion: order.rowVersion, status: order.status },
+    { ...changes, status: to, statusChangedAt: at, statusReason: reason, rowVersion: order.rowVersion + 1 },
+  );
   if (result.affected !== 1) {
     const current = await manager.findOneByOrFail(PcaOrder, { id: order.id });
     throw statusConflict(current.status, to);

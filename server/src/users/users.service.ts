@@ -1,6 +1,6 @@
-import { ConflictException, ForbiddenException, Inject, Injectable, NotFoundException, UnauthorizedException } from '@nestjs/common';
+import { ConflictException, ForbiddenException, Injectable, NotFoundException, UnauthorizedException } from '@nestjs/common';
 import { InjectDataSource, InjectRepository } from '@nestjs/typeorm';
-import { DataSource, In, type Repository } from 'typeorm';
+import { DataSource, type EntityManager, In, type Repository } from 'typeorm';
 import { ROLE_LABELS, type Role, type SessionProfile, type SessionUser, type User as UserResponse } from '@lockstep/shared';
 import { Ward } from '../wards/entities/ward.entity.js';
 import type { CreateUserDto } from './dto/create-user.dto.js';
@@ -18,10 +18,9 @@ export class UsersService {
   constructor(
     @InjectRepository(User) private readonly users: Repository<User>,
     @InjectDataSource() private readonly dataSource: DataSource,
+    // Counts wrong signature and colleague passwords (ThrottlingModule is global).
+    private readonly attempts: PasswordAttemptsService,
   ) {}
-
-  // Injected as a property so the constructor stays as it was; counts wrong signature passwords.
-  @Inject(PasswordAttemptsService) private readonly attempts: PasswordAttemptsService;
 
   /** The signed-in person if the credentials are right and the account is active. */
   async verifyCredentials(username: string, password: string): Promise<SessionUser | null> {
@@ -106,7 +105,7 @@ export class UsersService {
         role: dto.role,
         active: true,
         passwordHash,
-        wards: await findWards(manager.getRepository(Ward), dto.wardIds),
+        wards: await findWards(manager, dto.wardIds),
       });
       const created = toUserResponse(await manager.save(user));
       await recordAudit(manager, admin, {
@@ -129,7 +128,7 @@ export class UsersService {
       if (dto.role !== undefined) user.role = dto.role;
       if (dto.active !== undefined) user.active = dto.active;
       if (passwordHash !== undefined) user.passwordHash = passwordHash;
-      if (dto.wardIds !== undefined) user.wards = await findWards(manager.getRepository(Ward), dto.wardIds);
+      if (dto.wardIds !== undefined) user.wards = await findWards(manager, dto.wardIds);
       const after = toUserResponse(await manager.save(user));
       await recordAudit(manager, admin, {
         action: 'user.update',
@@ -145,9 +144,9 @@ export class UsersService {
   }
 }
 
-async function findWards(wards: Repository<Ward>, ids: number[]): Promise<Ward[]> {
+async function findWards(manager: EntityManager, ids: number[]): Promise<Ward[]> {
   const unique = [...new Set(ids)];
-  const found = await wards.findBy({ id: In(unique) });
+  const found = await manager.findBy(Ward, { id: In(unique) });
   const missing = unique.filter((id) => !found.some((ward) => ward.id === id));
   if (missing.length > 0) {
     throw fieldError('wardIds', `No ward with id ${missing.join(', ')}`);
