@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { BASAL_OPIOID_NAIVE_CAUTION, CROSS_TOLERANCE_CAUTION, DECISION_SUPPORT_CAUTION } from './cautions.js';
 
 describe('caution texts', () => {
-  it('carries the decision-support wording of the product brief', () => {
+  it('carries the decision-support wording of docs/design.md', () => {
     expect(DECISION_SUPPORT_CAUTION).toBe(
       "Decision support only: check every value against the prescriber's order, local policy and licensed clinical judgement.",
     );

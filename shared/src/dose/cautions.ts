@@ -1,10 +1,10 @@
 // Caution texts the screens show beside calculated values. Plain sentences; sources in comments.
 
-/** Brief §1: every screen that shows a dose calculation carries this. */
+/** docs/design.md, "Decision support": every screen that shows a dose calculation carries this. */
 export const DECISION_SUPPORT_CAUTION =
   "Decision support only: check every value against the prescriber's order, local policy and licensed clinical judgement.";
 
-/** Brief §1: the limits and defaults shipped with Lockstep give way to the ward's own protocols. */
+/** docs/design.md, "Decision support": the limits and defaults shipped with Lockstep give way to the ward's own protocols. */
 export const LOCAL_POLICY_CAUTION = 'Local protocols override the default limits and values shipped with Lockstep.';
 
 /**

@@ -3,7 +3,7 @@ import { consistencyFindings } from './order-consistency-findings.js';
 import type { Regimen } from './types.js';
 
 // ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg demand, lockout 10 minutes.
-// The limits below are arithmetic on the definitions in the brief §4.
+// The limits below are arithmetic on the definitions in docs/design.md, "Order fields and dosing conventions".
 const ashpMorphine: Regimen = { doseUnit: 'mg', concentrationPerMl: 1, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0 };
 
 describe('consistencyFindings', () => {

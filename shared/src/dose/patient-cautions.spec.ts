@@ -18,7 +18,7 @@ describe('patientCautions', () => {
   });
 
   it('cautions for sleep apnoea, age 70 or over and other sedatives on the patient', () => {
-    // Risk factors named in the product brief §4 [practice].
+    // Risk factors listed in docs/design.md, "Order fields and dosing conventions" [practice].
     const findings = patientCautions(demandOnly, { opioidTolerant: true, sleepApnoea: true, ageYears: 70, otherSedatives: true });
     expect(findings.map((f) => [f.field, f.severity, f.code])).toEqual([
       ['patient', 'caution', 'caution.sleep-apnoea'],

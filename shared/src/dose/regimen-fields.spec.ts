@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { DOSE_FIELDS, REGIMEN_FIELDS, regimenFieldUnit } from './regimen-fields.js';
 
-// Field units follow the dosing conventions in the product brief §4 (definition, no outside source).
+// Field units follow docs/design.md, "Order fields and dosing conventions" (definition, no outside source).
 describe('regimen fields', () => {
   it('treats every field but the lockout as an amount of drug', () => {
     expect(DOSE_FIELDS).toHaveLength(REGIMEN_FIELDS.length - 1);

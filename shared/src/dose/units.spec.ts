@@ -21,8 +21,8 @@ function ucumConvert(from: string, value: number, to: string): number {
   return result.toVal ?? Number.NaN;
 }
 
-// Source for every check below: UCUM [lib, @lhncbc/ucum-lhc] (REFERENCES.md "Standards and
-// reference libraries"). UCUM results are floats, so they are compared with a tolerance.
+// Source for every check below: UCUM, via the npm package @lhncbc/ucum-lhc [lib]. UCUM results are
+// floats, so they are compared with a tolerance.
 describe('unit factors against UCUM', () => {
   it('1 mg is 1000 mcg (UCUM code ug)', () => {
     expect(ucumConvert('mg', 1, 'ug')).toBeCloseTo(MCG_PER_MG, 9);

@@ -11,7 +11,8 @@ const reading = (at: string, attempts: number, delivered: number, volumeInfusedM
 });
 
 // Differences of cumulative pump totals are the definition; attempts, delivered and volume
-// infused are the pump readings the brief names. Usage kept as 24-hour rolling figures [practice].
+// infused are the pump totals a nurse records with each observation. Usage kept as 24-hour
+// rolling figures [practice].
 describe('usageBetween', () => {
   it('gives attempts, delivered, their ratio, volume and hours between two readings', () => {
     const usage = usageBetween(reading('2026-03-01T08:00:00Z', 10, 8, 8.4), reading('2026-03-01T12:00:00Z', 40, 20, 20.1));

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { type PcaRegimenSource, pcaDosageInstructions } from './pca-dosage.js';
 
 // Hydromorphone 0.2 mg demand, lockout 10 minutes: ASHP Standardize 4 Safety, PCA standards
-// (2023); 4-hour limit 6 mg: a widely used clinical reference table (REFERENCES.md).
+// (2023); 4-hour limit 6 mg: a widely used clinical reference table [practice].
 const REGIMEN: PcaRegimenSource = {
   doseUnit: 'mg',
   loadingDose: null,

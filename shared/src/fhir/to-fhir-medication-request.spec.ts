@@ -3,7 +3,7 @@ import { type FhirOrderSource, toFhirMedicationRequest } from './to-fhir-medicat
 
 // A worked example. Morphine 1 mg/mL, demand 1 mg, lockout 10 minutes: ASHP Standardize 4 Safety,
 // PCA standards (2023); 4-hour limit 30 mg: the typical ranges of a widely used clinical
-// reference table (REFERENCES.md). The loading dose, basal rate, 1-hour limit and clinician bolus
+// reference table [practice]. The loading dose, basal rate, 1-hour limit and clinician bolus
 // are invented for the example: the mapping does not depend on their clinical values.
 const WORKED_EXAMPLE: FhirOrderSource = {
   id: 12,

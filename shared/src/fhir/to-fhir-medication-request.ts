@@ -56,7 +56,8 @@ export function toFhirMedicationRequest(order: FhirOrderSource): FhirMedicationR
     ...(order.indication.trim() ? { reasonCode: [{ text: order.indication.trim() }] } : {}),
     note: [{ text: `Review by ${order.reviewDate}` }],
     dosageInstruction: pcaDosageInstructions(order),
-    // A revision (BRIEF §3: a changed regimen is a new order version) points at the order it replaces.
+    // A revision (a changed regimen is a new order version: docs/design.md, "Order lifecycle") points
+    // at the order it replaces.
     ...(order.supersedesId !== null ? { priorPrescription: { reference: `MedicationRequest/${order.supersedesId}` } } : {}),
   };
 }

@@ -7,7 +7,7 @@ type UcumUtils = { validateUnitString(unit: string): { status: string; ucumCode:
 const require = createRequire(import.meta.url);
 const ucum = (require('@lhncbc/ucum-lhc') as { UcumLhcUtils: { getInstance(): UcumUtils } }).UcumLhcUtils.getInstance();
 
-// Source: UCUM [lib, @lhncbc/ucum-lhc] (REFERENCES.md "Standards and reference libraries");
+// Source: UCUM, via the npm package @lhncbc/ucum-lhc [lib];
 // FHIR R4 Quantity (datatypes.html): `unit` for display, `system` + `code` for the coded unit.
 describe('UCUM quantities', () => {
   it('keeps Lockstep’s display unit and sends the UCUM code', () => {

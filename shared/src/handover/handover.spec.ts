@@ -8,7 +8,7 @@ const calm = {
   syringe: { remainingMl: 30, projectedEmptyAt: null, emptiesThisShift: false },
 };
 
-// The risk order is Lockstep's own design (BRIEF §5, handover board), not a published scale.
+// The risk order is Lockstep's own design (docs/design.md, "Handover board"), not a published scale.
 describe('handover risk order', () => {
   it('puts urgent flags first, then overdue observations, then syringes running out this shift', () => {
     expect(riskTier({ ...calm, flags: { ...calm.flags, urgent: 1 } })).toBe(0);

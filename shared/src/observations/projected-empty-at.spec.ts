@@ -1,8 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { projectedEmptyAt } from './projected-empty-at.js';
 
-// Worked example (arithmetic by definition, BRIEF §4 hoursUntilEmpty): 1 mL/h basal; 5 mL infused
-// over the last hour, so 4 mL/h demand; 10 mL left → 10 ÷ 5 = 2 h after the last reading.
+// Worked example (arithmetic by definition: hours until empty, docs/design.md "Order fields and
+// dosing conventions"): 1 mL/h basal; 5 mL infused over the last hour, so 4 mL/h demand; 10 mL
+// left → 10 ÷ 5 = 2 h after the last reading.
 describe('projectedEmptyAt', () => {
   it('uses basal plus recent demand use', () => {
     const readings = [

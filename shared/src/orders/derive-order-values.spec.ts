@@ -16,7 +16,7 @@ describe('deriveOrderValues', () => {
     expect(derived).toEqual({
       demandDoseMl: 1,
       basalRateMlPerHour: 0,
-      maxDemandsPerHour: 6, // ceil(60 / 10), by definition (BRIEF §4)
+      maxDemandsPerHour: 6, // ceil(60 / 10), by definition (docs/design.md, "Order fields and dosing conventions")
       maxHourlyDose: 6,
       maxFourHourDose: 24, // 1 mg × ceil(240 / 10), under the 30 mg limit
     });

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { canCancel, canTransition, ORDER_STATUSES, ORDER_TRANSITIONS } from './order-status.js';
 import { regimenTypeOf } from './order.schema.js';
 
-// The lifecycle is Lockstep's own design (BRIEF §3); these checks pin it down.
+// The lifecycle is Lockstep's own design (docs/design.md, "Order lifecycle"); these checks pin it down.
 describe('order lifecycle', () => {
   it('runs the main path', () => {
     expect(canTransition('awaiting_verification', 'verified')).toBe(true);

@@ -25,9 +25,10 @@ export const ORDER_STATUS_LABELS: Record<OrderStatus, string> = {
 };
 
 /**
- * The order lifecycle (BRIEF §3): awaiting_verification → verified → active → discontinued, with
- * side exits. A returned order is revised as a new version, which supersedes it; an active order
- * is superseded when the changed regimen that replaces it starts.
+ * The order lifecycle (docs/design.md, "Order lifecycle"): awaiting_verification → verified →
+ * active → discontinued, with side exits. A returned order is revised as a new version, which
+ * supersedes it. The table also lets an active order be superseded by a changed regimen; no
+ * route does that yet.
  */
 export const ORDER_TRANSITIONS: Readonly<Record<OrderStatus, readonly OrderStatus[]>> = {
   awaiting_verification: ['verified', 'returned', 'rejected', 'cancelled'],
