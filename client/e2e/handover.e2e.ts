@@ -1,9 +1,6 @@
-import { writeFileSync } from 'node:fs';
-import path from 'node:path';
-import { fileURLToPath } from 'node:url';
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD, openBrowser, signInHome, snapshot, type BrowserSession } from './support/browser.js';
+import { DEMO_PASSWORD, openBrowser, saveArtifact, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 
 // The demo's Harbour ward mid-shift: six running PCAs (VALDIVIA, H05, with an urgent flag), NOAH
@@ -124,7 +121,7 @@ describe('handover board', () => {
     expect(await rowOf(page, 'ACHTERBERG').innerText()).toMatch(/Awaiting verification\s+since \d\d:\d\d/);
     expect(await rowOf(page, 'FALEOLO').innerText()).toContain('Awaiting bedside check');
     expect(await rowOf(page, 'FALEOLO').innerText()).toContain('HYDROmorphone 0.2 mg/mL');
-    expect(await rowOf(page, 'FALEOLO').innerText()).toContain('0.2 mg / 10 min, basal 0.1 mg/h, 4-h limit 6 mg');
+    expect(await rowOf(page, 'FALEOLO').innerText()).toContain('demand 0.2 mg · lockout 10 min · basal 0.1 mg/h · 4-hour limit 6 mg');
     await page.getByRole('status').filter({ hasText: 'Connected' }).waitFor();
     await page
       .getByTestId('board-updated')
@@ -249,7 +246,7 @@ describe('handover board', () => {
     expect(await page.getByRole('button', { name: 'Print' }).isVisible()).toBe(false);
     await snapshot(page, 'handover-print');
     const pdf = await page.pdf({ preferCSSPageSize: true, printBackground: true });
-    writeFileSync(path.join(path.dirname(fileURLToPath(import.meta.url)), 'artifacts', 'handover-sheet.pdf'), pdf);
+    saveArtifact('handover-sheet.pdf', pdf);
     const pages = [...pdf.toString('latin1').matchAll(/\/MediaBox\s*\[\s*0 0 ([\d.]+) ([\d.]+)\s*\]/g)].map((box) => [
       Math.round(Number(box[1])),
       Math.round(Number(box[2])),

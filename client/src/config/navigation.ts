@@ -1,17 +1,18 @@
-import { CLINICAL_ROLES, type Role } from '@lockstep/shared';
+import { AUDIT_ROLES, BEDSIDE_ROLES, CLINICAL_ROLES, PHARMACY_ROLES, PRESCRIBING_ROLES, type Role } from '@lockstep/shared';
 import { isSafeRedirect, paths } from './paths';
 
 /** Groups of screens; each route is guarded by one of these. */
 export type Area = 'clinical' | 'prescribing' | 'bedside' | 'pharmacy' | 'admin' | 'audit';
 
+// The same role groups the server's @Roles use (shared), so a screen shows exactly what the API allows.
 export const AREA_ROLES: Record<Area, readonly Role[]> = {
   clinical: CLINICAL_ROLES,
-  prescribing: ['prescriber'],
-  bedside: ['nurse', 'charge_nurse'],
-  pharmacy: ['pharmacist'],
+  prescribing: PRESCRIBING_ROLES,
+  bedside: BEDSIDE_ROLES,
+  pharmacy: PHARMACY_ROLES,
   admin: ['admin'],
   // The server narrows what a pharmacist may read to orders and library versions.
-  audit: ['admin', 'pharmacist'],
+  audit: AUDIT_ROLES,
 };
 
 export type NavIcon =

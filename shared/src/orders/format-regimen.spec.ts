@@ -47,6 +47,10 @@ describe('formatRegimen', () => {
       { label: 'Basal rate', value: 'None' },
       { label: '4-hour limit', value: '6 mg' },
     ]);
+    expect(regimenParts(hydromorphone, { showUnset: true }).slice(-2)).toEqual([
+      { label: '1-hour limit', value: 'Not set' },
+      { label: '4-hour limit', value: '6 mg' },
+    ]);
     expect(drugAndConcentration(hydromorphone)).toBe('HYDROmorphone 0.2 mg/mL');
   });
 });

@@ -22,11 +22,19 @@ export function drugAndConcentration(order: Pick<RegimenDisplay, 'drugName' | 'c
 
 /**
  * The regimen part by part, each value in the safe dose format: loading dose (when ordered),
- * demand dose, lockout, basal rate ("None" without one), and the 1-hour and 4-hour limits when set.
+ * demand dose, lockout, basal rate ("None" without one), and the 1-hour and 4-hour limits when
+ * set, or always ("Not set") with `showUnset`, for comparing with a pump field by field.
  */
-export function regimenParts(order: Omit<RegimenDisplay, 'drugName' | 'concentrationPerMl'>): { label: string; value: string }[] {
+export function regimenParts(
+  order: Omit<RegimenDisplay, 'drugName' | 'concentrationPerMl'>,
+  options: { showUnset?: boolean } = {},
+): { label: string; value: string }[] {
   const unit = order.doseUnit;
   const parts: { label: string; value: string }[] = [];
+  const limit = (label: string, value: number | null) => {
+    if (value !== null) parts.push({ label, value: formatDose(value, unit) });
+    else if (options.showUnset) parts.push({ label, value: 'Not set' });
+  };
   if (order.loadingDose !== null && order.loadingDose !== undefined)
     parts.push({ label: 'Loading dose', value: formatDose(order.loadingDose, unit) });
   parts.push(
@@ -34,8 +42,8 @@ export function regimenParts(order: Omit<RegimenDisplay, 'drugName' | 'concentra
     { label: 'Lockout', value: formatDose(order.lockoutMinutes, 'min') },
     { label: 'Basal rate', value: order.basalRatePerHour > 0 ? formatDose(order.basalRatePerHour, `${unit}/h`) : 'None' },
   );
-  if (order.oneHourLimit !== null) parts.push({ label: '1-hour limit', value: formatDose(order.oneHourLimit, unit) });
-  if (order.fourHourLimit !== null) parts.push({ label: '4-hour limit', value: formatDose(order.fourHourLimit, unit) });
+  limit('1-hour limit', order.oneHourLimit);
+  limit('4-hour limit', order.fourHourLimit);
   return parts;
 }
 
@@ -47,13 +55,18 @@ const SHORT_LABELS: Record<string, string> = {
 };
 
 /**
- * The regimen on one line, as lists, dialogs, the board and e-mails write it:
- * "morphine 1 mg/mL · demand 1 mg · lockout 10 min · 4-hour limit 30 mg" (the drug left out with
- * `withDrug: false`; no basal rate is left out rather than written "None").
+ * The regimen as short phrases, in order: "demand 1 mg", "lockout 10 min", "basal 0.5 mg/h",
+ * "4-hour limit 30 mg" (no basal rate is left out rather than written "None"); the drug first
+ * unless `withDrug: false`.
  */
-export function formatRegimen(order: RegimenDisplay, options: { withDrug?: boolean } = {}): string {
+export function regimenPhrases(order: RegimenDisplay, options: { withDrug?: boolean } = {}): string[] {
   const parts = regimenParts(order)
     .filter((part) => !(part.label === 'Basal rate' && part.value === 'None'))
     .map((part) => `${SHORT_LABELS[part.label] ?? part.label} ${part.value}`);
-  return (options.withDrug === false ? parts : [drugAndConcentration(order), ...parts]).join(' · ');
+  return options.withDrug === false ? parts : [drugAndConcentration(order), ...parts];
+}
+
+/** The regimen on one line, as lists, dialogs, the board and e-mails write it: "morphine 1 mg/mL · demand 1 mg · lockout 10 min · 4-hour limit 30 mg". */
+export function formatRegimen(order: RegimenDisplay, options: { withDrug?: boolean } = {}): string {
+  return regimenPhrases(order, options).join(' · ');
 }

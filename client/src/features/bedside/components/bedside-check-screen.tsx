@@ -1,11 +1,10 @@
-import type { Drug } from '@lockstep/shared';
+import { type Drug, syringeState } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/lib/auth/use-session';
 import type { BedsideOrder } from '../api/bedside-schemas';
 import { useCheckPatient } from '../api/get-check-patient';
 import { CHECK_STEPS, useBedsideCheck } from '../hooks/use-bedside-check';
-import { syringeState } from '../utils/syringe-state';
 import { BedsideOrderPage } from './bedside-order-page';
 import { BedsideSteps, type BedsideStep } from './bedside-steps';
 import { CheckResult } from './check-result';

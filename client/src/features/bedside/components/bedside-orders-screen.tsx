@@ -1,13 +1,12 @@
 import { useMemo } from 'react';
 import { Anchor, Group, Select, Stack, Text, Title } from '@mantine/core';
 import { Link, useSearchParams } from 'react-router-dom';
-import type { ObservationDue, Ward } from '@lockstep/shared';
+import { type ObservationDue, syringeState, type SyringeState, type Ward } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { useNow } from '@/hooks/use-now';
 import { BEDSIDE_STATUSES, useBedsideOrderDetails, useBedsideOrders } from '../api/get-bedside-orders';
 import { byWardAndBed } from '../utils/order-sort';
-import { syringeState, type SyringeState } from '../utils/syringe-state';
 import { BedsideCaution } from './bedside-caution';
 import { BedsideOrdersTable } from './bedside-orders-table';
 

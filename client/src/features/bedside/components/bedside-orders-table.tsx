@@ -2,11 +2,18 @@ import type { ComponentType } from 'react';
 import { Anchor, Button, Group, Skeleton, Stack, Table, Text } from '@mantine/core';
 import { IconClipboardCheck, IconClipboardHeart, IconDroplet, IconPlayerStop, IconReplace, type IconProps } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
-import type { ObservationDue, OrderSummary } from '@lockstep/shared';
+import {
+  type BedsideAction,
+  bedsideActions,
+  drugAndConcentration,
+  type ObservationDue,
+  type OrderSummary,
+  regimenPhrases,
+  type SyringeState,
+} from '@lockstep/shared';
 import { OrderStatusBadge } from '@/components/ui/order-status-badge';
 import { paths } from '@/config/paths';
-import { drugAndConcentration, regimenParts } from '../utils/regimen-line';
-import { bedsideActions, bedsideHint, type BedsideAction, type SyringeState } from '../utils/syringe-state';
+import { bedsideHint } from '../utils/syringe-state';
 import { NextObservationHint } from './next-observation-hint';
 
 const ACTIONS: Record<
@@ -130,7 +137,7 @@ export function BedsideOrdersTable({ orders, syringes, nextObservations, now, is
                           </Text>
                         )}
                         <Text size="xs" c="dimmed">
-                          <RegimenParts parts={regimenParts(order)} />
+                          <RegimenParts parts={regimenPhrases(order, { withDrug: false })} />
                         </Text>
                       </Stack>
                     </Table.Td>

@@ -1,13 +1,12 @@
 import { useState } from 'react';
 import { Textarea } from '@mantine/core';
 import { useForm } from '@mantine/form';
-import { formatDose, MIN_REASON_LENGTH, tallMan } from '@lockstep/shared';
+import { formatDose, MIN_REASON_LENGTH, syringeState, tallMan } from '@lockstep/shared';
 import { NumberField } from '@/components/ui/number-field';
 import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 import type { BedsideOrder } from '../api/bedside-schemas';
 import { useGiveBolus } from '../api/give-bolus';
 import { emptyWitness, useWitnessedStep, WITNESS_RULES, type WitnessedValues } from '../hooks/use-witnessed-step';
-import { syringeState } from '../utils/syringe-state';
 import { BedsideOrderPage } from './bedside-order-page';
 import { BolusGiven } from './bolus-given';
 import { OrderNotice } from './order-notice';

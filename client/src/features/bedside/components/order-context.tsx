@@ -1,9 +1,8 @@
 import type { ReactNode } from 'react';
 import { Group, Paper, Stack, Text } from '@mantine/core';
-import { tallMan } from '@lockstep/shared';
+import { drugAndConcentration, formatRegimen, tallMan } from '@lockstep/shared';
 import { OrderStatusBadge } from '@/components/ui/order-status-badge';
 import type { BedsideOrder } from '../api/bedside-schemas';
-import { drugAndConcentration, regimenParts } from '../utils/regimen-line';
 
 function Fact({ label, children }: { label: string; children: ReactNode }) {
   return (
@@ -46,7 +45,7 @@ export function OrderContext({ order, showRegimen = false }: OrderContextProps) 
       </Group>
       {showRegimen ? (
         <Text size="sm" mt="sm" className="tabular-nums">
-          {regimenParts(order).join(' · ')}
+          {formatRegimen(order, { withDrug: false })}
         </Text>
       ) : null}
     </Paper>

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { DOB_MISMATCH, identityErrors, MRN_MISMATCH, releaseCodeProblem } from './identity-check';
+import { DOB_MISMATCH, MRN_MISMATCH } from '@lockstep/shared';
+import { identityErrors, releaseCodeProblem } from './identity-check';
 
 const patient = { mrn: 'KB100672', dateOfBirth: '1979-07-28' };
 

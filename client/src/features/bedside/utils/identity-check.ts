@@ -1,25 +1,16 @@
-import { normaliseReleaseCode, type Patient, type SyringeReleaseResponse } from '@lockstep/shared';
+import { normaliseReleaseCode, wristbandErrors, type Patient, type SyringeReleaseResponse, type WristbandEntry } from '@lockstep/shared';
 
-export type IdentityValues = { patientMrn: string; patientDateOfBirth: string };
-
-export const MRN_MISMATCH = 'This MRN is not this order’s patient: check the wristband';
-export const DOB_MISMATCH = 'This date of birth is not this order’s patient: check the wristband';
+export type IdentityValues = WristbandEntry;
 
 /**
- * The wristband against the order's patient, before anything else is entered. The server checks
- * again when the first check is sent; this only saves a nurse entering the pump for nothing.
+ * The wristband against the order's patient, before anything else is entered, by the shared rule
+ * the server checks again when the first check is sent: this only saves entering the pump for nothing.
  */
 export function identityErrors(
   values: IdentityValues,
   patient: Pick<Patient, 'mrn' | 'dateOfBirth'>,
 ): Partial<Record<keyof IdentityValues, string>> {
-  const errors: Partial<Record<keyof IdentityValues, string>> = {};
-  const mrn = values.patientMrn.trim();
-  if (!mrn) errors.patientMrn = 'Enter the MRN from the wristband';
-  else if (mrn.toUpperCase() !== patient.mrn.toUpperCase()) errors.patientMrn = MRN_MISMATCH;
-  if (!/^\d{4}-\d{2}-\d{2}$/.test(values.patientDateOfBirth)) errors.patientDateOfBirth = 'Enter the date of birth from the wristband';
-  else if (values.patientDateOfBirth !== patient.dateOfBirth) errors.patientDateOfBirth = DOB_MISMATCH;
-  return errors;
+  return Object.fromEntries(wristbandErrors(values, patient).map((error) => [error.field, error.message]));
 }
 
 /**

@@ -2,18 +2,20 @@ import type { ReactNode } from 'react';
 import { Group, Stack, Text, VisuallyHidden } from '@mantine/core';
 import { IconAlertTriangle, IconClock, IconHourglassLow } from '@tabler/icons-react';
 import {
+  drugAndConcentration,
   FLAG_SEVERITY_LABELS,
   formatDose,
+  formatRegimen,
+  type HandoverRow,
   isAcceptableSedation,
   ORDER_STATUS_LABELS,
   SEDATION_DESCRIPTIONS,
-  type HandoverRow,
 } from '@lockstep/shared';
 import { SeverityLabel } from '@/components/ui/severity-label';
 import { formatNearTime } from '@/utils/clock';
 import { formatElapsed } from '@/utils/duration';
 import { hasOpenFlags, rowSeverity } from '../utils/board-filters';
-import { drugLine, lastFourHours, patientFacts, regimenSummary } from '../utils/board-format';
+import { lastFourHours, patientFacts } from '../utils/board-format';
 
 // The board's cells, shared by the live table and the printed sheet. Each says in words what it
 // shows, so a cell read on its own (or on paper) needs no colour to be understood.
@@ -58,9 +60,9 @@ export function PcaCell({ row, now }: { row: HandoverRow; now: Date }) {
   return (
     <Stack gap={0}>
       <Text size="sm" fw={600}>
-        {drugLine(row)}
+        {drugAndConcentration(row)}
       </Text>
-      <Text size="xs">{regimenSummary(row)}</Text>
+      <Text size="xs">{formatRegimen({ ...row, ...row.regimen }, { withDrug: false })}</Text>
       <Dimmed>{started}</Dimmed>
     </Stack>
   );

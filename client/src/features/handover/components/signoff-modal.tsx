@@ -4,11 +4,10 @@ import { useForm } from '@mantine/form';
 import { IconAlertCircle } from '@tabler/icons-react';
 import { zod4Resolver } from 'mantine-form-zod-resolver';
 import { z } from 'zod';
-import { DECISION_SUPPORT_CAUTION, type HandoverRow, type SignoffRole } from '@lockstep/shared';
+import { DECISION_SUPPORT_CAUTION, drugAndConcentration, type HandoverRow, regimenParts, type SignoffRole } from '@lockstep/shared';
 import { applyServerErrors } from '@/lib/form-errors';
 import { notifySuccess } from '@/lib/notify';
 import { useSignOff } from '../api/sign-off';
-import { regimenLines } from '../utils/board-format';
 
 // The server's own words for the same refusal (handover-signoffs.service.ts).
 export const PUMP_CONFIRM_MESSAGE = 'Confirm the pump settings match the order; if they do not, stop and escalate before taking over';
@@ -61,7 +60,10 @@ export function SignoffModal({ wardId, row, role, onClose }: SignoffModalProps) 
           </Text>
           <Table withTableBorder tabularNums aria-label="The order's regimen" verticalSpacing={4}>
             <Table.Tbody>
-              {regimenLines(row).map((line) => (
+              {[
+                { label: 'Drug and concentration', value: drugAndConcentration(row) },
+                ...regimenParts({ ...row, ...row.regimen }, { showUnset: true }),
+              ].map((line) => (
                 <Table.Tr key={line.label}>
                   <Table.Th scope="row" w="45%" fw={500}>
                     {line.label}

@@ -1,7 +1,7 @@
 import { useId, useState } from 'react';
 import { Button, Group, Text } from '@mantine/core';
 import { IconArrowBackUp, IconDownload, IconEdit, IconInfoCircle, IconSend, IconSignature, IconTrash } from '@tabler/icons-react';
-import type { Drug, LibraryVersionDetail } from '@lockstep/shared';
+import { canDoLibraryAction, type Drug, type LibraryVersionAction, type LibraryVersionDetail } from '@lockstep/shared';
 import { errorMessage } from '@/lib/api-error';
 import { notifyError, notifySuccess } from '@/lib/notify';
 import { useExportLibraryVersion } from '../api/export-library-version';
@@ -32,6 +32,8 @@ export function VersionActions({ version, drugs, currentUserId, weightBased, onD
   const withdraw = useWithdrawVersion();
   const exportCsv = useExportLibraryVersion();
   const ownVersion = version.authorId === currentUserId;
+  // What the version's status allows, by the same lifecycle table the server enforces.
+  const can = (action: LibraryVersionAction) => canDoLibraryAction(action, version.status);
 
   const doWithdraw = () =>
     withdraw.mutate(version.id, {
@@ -47,44 +49,46 @@ export function VersionActions({ version, drugs, currentUserId, weightBased, onD
   return (
     <>
       <Group gap="xs" wrap="wrap">
-        {version.status === 'draft' ? (
-          <>
-            <Button leftSection={<IconEdit size={16} aria-hidden />} onClick={() => setDialog('edit')} disabled={drugs.length === 0}>
-              Edit rules
-            </Button>
-            <Button variant="default" leftSection={<IconSend size={16} aria-hidden />} onClick={() => setDialog('submit')}>
-              Submit for approval
-            </Button>
-            <Button variant="subtle" color="red" leftSection={<IconTrash size={16} aria-hidden />} onClick={() => setDialog('discard')}>
-              Discard draft
-            </Button>
-          </>
+        {can('edit') ? (
+          <Button leftSection={<IconEdit size={16} aria-hidden />} onClick={() => setDialog('edit')} disabled={drugs.length === 0}>
+            Edit rules
+          </Button>
         ) : null}
-        {version.status === 'pending_approval' ? (
-          <>
-            <Button
-              leftSection={<IconSignature size={16} aria-hidden />}
-              onClick={() => setDialog('approve')}
-              disabled={ownVersion}
-              aria-describedby={ownVersion ? reasonId : undefined}
-            >
-              Approve
-            </Button>
-            <Button
-              variant="default"
-              leftSection={<IconArrowBackUp size={16} aria-hidden />}
-              onClick={doWithdraw}
-              loading={withdraw.isPending}
-            >
-              Withdraw to draft
-            </Button>
-          </>
+        {can('submit') ? (
+          <Button variant="default" leftSection={<IconSend size={16} aria-hidden />} onClick={() => setDialog('submit')}>
+            Submit for approval
+          </Button>
+        ) : null}
+        {can('discard') ? (
+          <Button variant="subtle" color="red" leftSection={<IconTrash size={16} aria-hidden />} onClick={() => setDialog('discard')}>
+            Discard draft
+          </Button>
+        ) : null}
+        {can('approve') ? (
+          <Button
+            leftSection={<IconSignature size={16} aria-hidden />}
+            onClick={() => setDialog('approve')}
+            disabled={ownVersion}
+            aria-describedby={ownVersion ? reasonId : undefined}
+          >
+            Approve
+          </Button>
+        ) : null}
+        {can('withdraw') ? (
+          <Button
+            variant="default"
+            leftSection={<IconArrowBackUp size={16} aria-hidden />}
+            onClick={doWithdraw}
+            loading={withdraw.isPending}
+          >
+            Withdraw to draft
+          </Button>
         ) : null}
         <Button variant="default" leftSection={<IconDownload size={16} aria-hidden />} onClick={doExport} loading={exportCsv.isPending}>
           Export CSV
         </Button>
       </Group>
-      {version.status === 'pending_approval' && ownVersion ? (
+      {can('approve') && ownVersion ? (
         <Group gap={6} wrap="nowrap" mt={6}>
           <IconInfoCircle size={16} aria-hidden color="var(--mantine-color-dimmed)" />
           <Text id={reasonId} size="sm" c="dimmed">

@@ -15,11 +15,11 @@ import {
   toObservationRequest,
   validateObservationForm,
   type ObservationFormValues,
-  type PumpTotalField,
 } from '../utils/observation-form';
 import { observationWarnings } from '../utils/observation-warnings';
 import { ObservationNumberInput } from './observation-number-input';
 import { SedationField } from './sedation-field';
+import { type PumpTotalField } from '@lockstep/shared';
 
 export interface ObservationFormProps {
   order: PcaOrder;

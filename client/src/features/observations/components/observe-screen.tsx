@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Alert, Anchor, Group, Paper, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { IconArrowLeft, IconInfoCircle } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
-import { DECISION_SUPPORT_CAUTION, formatDose, ORDER_STATUS_LABELS } from '@lockstep/shared';
+import { DECISION_SUPPORT_CAUTION, drugAndConcentration, formatDose, ORDER_STATUS_LABELS } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { isApiRequestError } from '@/lib/api-error';
@@ -11,7 +11,6 @@ import { useObservations } from '../api/get-observations';
 import { usePcaOrder } from '../api/get-pca-order';
 import { useWardThresholds } from '../api/get-ward-thresholds';
 import type { Observation, PcaOrder, RecordedObservation } from '../api/pca-schemas';
-import { drugAndConcentration } from '../utils/regimen';
 import { ObservationForm } from './observation-form';
 import { ObservationSaved } from './observation-saved';
 

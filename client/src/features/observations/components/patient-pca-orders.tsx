@@ -5,7 +5,7 @@ import { canAccess } from '@/config/navigation';
 import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/lib/auth/use-session';
 import { usePatientPcaOrders } from '../api/get-patient-pca-orders';
-import { drugAndConcentration, regimenParts } from '../utils/regimen';
+import { drugAndConcentration, regimenParts } from '@lockstep/shared';
 
 /** On the patient page: each running PCA, one click from its page (and, for nurses, its observation). */
 export function PatientPcaOrders({ patientId }: { patientId: number }) {

@@ -1,10 +1,9 @@
 import type { ReactNode } from 'react';
 import { Badge, Group, Paper, Stack, Text, Title } from '@mantine/core';
 import { IconCircleOff, IconPlayerPlay } from '@tabler/icons-react';
-import { ORDER_STATUS_LABELS, REGIMEN_TYPE_LABELS } from '@lockstep/shared';
+import { drugAndConcentration, ORDER_STATUS_LABELS, REGIMEN_TYPE_LABELS, regimenParts } from '@lockstep/shared';
 import { formatDateTime } from '@/utils/format-date';
 import type { PcaOrder } from '../api/pca-schemas';
-import { drugAndConcentration, regimenParts } from '../utils/regimen';
 
 export interface PcaHeaderProps {
   order: PcaOrder;

@@ -1,4 +1,4 @@
-import { SEDATION_LEVELS, type SedationLevel } from '@lockstep/shared';
+import { observationTimelineErrors, pumpTotalsAround, SEDATION_LEVELS, type SedationLevel } from '@lockstep/shared';
 import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 import type { Observation } from '../api/pca-schemas';
 import type { CreateObservationRequest } from '../api/record-observation';
@@ -14,9 +14,7 @@ export const NUMBER_FIELDS = [
 ] as const;
 export type NumberField = (typeof NUMBER_FIELDS)[number];
 
-export const PUMP_TOTAL_FIELDS = ['attempts', 'delivered', 'volumeInfusedMl'] as const;
-export type PumpTotalField = (typeof PUMP_TOTAL_FIELDS)[number];
-export type PumpTotals = Record<PumpTotalField, number>;
+const TIMELINE_FIELDS = ['attempts', 'delivered', 'volumeInfusedMl', 'syringeRemainingMl'] as const;
 
 /** The form's fields carry the API's names, so a 400's field errors land beside them. */
 export type ObservationFormValues = Record<NumberField, NumberFieldValue> & {
@@ -139,31 +137,14 @@ export function readLocalDateTime(value: string): Date | null {
   return Number.isNaN(date.getTime()) ? null : date;
 }
 
-export interface PumpBounds {
-  /** Totals of the observation just before (same syringe): the new ones cannot be lower. */
-  floor: (PumpTotals & { at: string }) | null;
-  /** Totals of an observation after it (same syringe), when one is entered late: cannot be higher. */
-  ceiling: (PumpTotals & { at: string }) | null;
-}
-
-/** What the running syringe's earlier and later observations allow for pump totals at `at`. */
-export function pumpBounds(observations: readonly Observation[], releaseId: number | null, at: Date): PumpBounds {
-  const sameSyringe = observations
-    .filter((observation) => observation.releaseId === releaseId)
-    .sort((a, b) => Date.parse(a.at) - Date.parse(b.at));
-  const time = at.getTime();
-  const before = sameSyringe.filter((observation) => Date.parse(observation.at) <= time).at(-1);
-  const after = sameSyringe.find((observation) => Date.parse(observation.at) > time);
-  const totals = (observation: Observation | undefined) =>
-    observation
-      ? {
-          at: observation.at,
-          attempts: observation.attempts,
-          delivered: observation.delivered,
-          volumeInfusedMl: observation.volumeInfusedMl,
-        }
-      : null;
-  return { floor: totals(before), ceiling: totals(after) };
+/** The running syringe's observations just before and after `at`: the new pump totals lie between them. */
+export function pumpBounds(
+  observations: readonly Observation[],
+  releaseId: number | null,
+  at: Date,
+): { floor: Observation | null; ceiling: Observation | null } {
+  const { before, after } = pumpTotalsAround(observations, releaseId, at);
+  return { floor: before, ceiling: after };
 }
 
 export interface ObservationCheckContext {
@@ -173,9 +154,6 @@ export interface ObservationCheckContext {
   startedAt: string | null;
   now: Date;
 }
-
-// A device clock a little ahead of the server's is not "the future" (the server allows a minute).
-const CLOCK_SKEW_MS = 60_000;
 
 /** Every problem with the observation as typed, by field; an empty object when it can be saved. */
 export function validateObservationForm(values: ObservationFormValues, context: ObservationCheckContext): ObservationFormErrors {
@@ -190,26 +168,24 @@ export function validateObservationForm(values: ObservationFormValues, context: 
   if (values.at.trim() !== '') {
     const typed = readLocalDateTime(values.at.trim());
     if (!typed) errors.at = 'Enter the date and time of the observation';
-    else if (typed.getTime() > context.now.getTime() + CLOCK_SKEW_MS) errors.at = 'An observation cannot be in the future';
-    else if (context.startedAt && typed.getTime() < Date.parse(context.startedAt))
-      errors.at = 'An observation cannot be before the PCA started';
     else at = typed;
   }
-
-  const { floor, ceiling } = pumpBounds(context.observations, context.release?.id ?? null, at);
-  for (const field of PUMP_TOTAL_FIELDS) {
-    const value = readNumber(values[field]);
-    if (errors[field] || typeof value !== 'number') continue;
-    if (floor && value < floor[field]) errors[field] = `At least ${floor[field]}: pump totals never go down within one syringe`;
-    else if (ceiling && value > ceiling[field])
-      errors[field] = `At most ${ceiling[field]}: a later observation of this syringe has ${ceiling[field]}`;
-  }
-  const syringeMl = context.release?.volumeMl;
-  for (const field of ['volumeInfusedMl', 'syringeRemainingMl'] as const) {
-    const value = readNumber(values[field]);
-    if (!errors[field] && syringeMl !== undefined && typeof value === 'number' && value > syringeMl) {
-      errors[field] = `More than the ${syringeMl} mL the syringe held: check the ${field === 'volumeInfusedMl' ? 'pump' : 'syringe'}`;
-    }
+  // The timeline rules are the server's own (shared): checked once every number reads as one.
+  const numbers = TIMELINE_FIELDS.map((field) => readNumber(values[field]));
+  if (!errors.at && numbers.every((value) => typeof value === 'number')) {
+    const [attempts, delivered, volumeInfusedMl, syringeRemainingMl] = numbers as number[];
+    const { floor, ceiling } = pumpBounds(context.observations, context.release?.id ?? null, at);
+    const timeline = observationTimelineErrors({
+      at,
+      values: { attempts, delivered, volumeInfusedMl, syringeRemainingMl },
+      before: floor,
+      after: ceiling,
+      syringeVolumeMl: context.release?.volumeMl ?? null,
+      startedAt: context.startedAt ? new Date(context.startedAt) : null,
+      now: context.now,
+    });
+    for (const { field, message } of timeline)
+      if (!errors[field as keyof ObservationFormValues]) errors[field as keyof ObservationFormValues] = message;
   }
   if (values.note.length > 2000) errors.note = 'The note is at most 2,000 characters';
   return errors;

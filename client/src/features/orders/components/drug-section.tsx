@@ -1,9 +1,9 @@
 import type { ReactNode } from 'react';
 import { Button, Group, Paper, Select, Stack, Text, Title } from '@mantine/core';
 import { IconListCheck } from '@tabler/icons-react';
-import type { Finding, LimitRuleResponse } from '@lockstep/shared';
+import { drugAndConcentration, type Finding, type LimitRuleResponse } from '@lockstep/shared';
 import type { AvailableOrderSet } from '../utils/order-sets';
-import { drugWithConcentration, ruleLabel } from '../utils/regimen-format';
+import { ruleLabel } from '../utils/regimen-format';
 import { FindingLine } from './finding-line';
 
 export interface DrugSectionProps {
@@ -49,7 +49,7 @@ export function DrugSection({ rules, sets, weightKg, ruleId, ruleError, findings
                     onClick={() => onPickSet(available)}
                     title={noWeight ? "Needs the patient's weight" : undefined}
                   >
-                    {set.label}, {drugWithConcentration(rule.drugName, rule.concentrationPerMl, rule.doseUnit)}
+                    {set.label}, {drugAndConcentration(rule)}
                   </Button>
                 );
               })}

@@ -2,7 +2,7 @@ import { useState, type ReactNode } from 'react';
 import { Button, Skeleton, Stack } from '@mantine/core';
 import { IconClipboardCheck, IconPackageExport, IconPencil, IconSquareX } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
-import type { OrderDetail } from '@lockstep/shared';
+import { canCancel, type OrderDetail } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { isApiRequestError } from '@/lib/api-error';
@@ -11,7 +11,6 @@ import { useOrder } from '../api/get-order';
 import { CancelOrderModal } from './cancel-order-modal';
 import { OrderHeader } from './order-header';
 import { OrderReview } from './order-review';
-import { CANCELLABLE_STATUSES } from './orders-table';
 import { ReleaseModal } from './release-modal';
 
 export interface OrderDetailScreenProps {
@@ -68,7 +67,7 @@ export function OrderDetailScreen({ orderId, weightKg, patientBanner, story }: O
       </Button>,
     );
   }
-  if (prescriber && CANCELLABLE_STATUSES.includes(order.status)) {
+  if (prescriber && canCancel(order.status)) {
     actions.push(
       <Button key="cancel" variant="default" leftSection={<IconSquareX size={16} aria-hidden />} onClick={() => setModal('cancel')}>
         Cancel order

@@ -3,12 +3,19 @@ import { Alert, Button, Grid, Group, Paper, Stack, Text, TextInput, Title } from
 import { useForm } from '@mantine/form';
 import { IconAlertCircle, IconArrowBackUp, IconSignature } from '@tabler/icons-react';
 import { useNavigate } from 'react-router-dom';
-import type { CreateOrderRequest, Finding, LimitRuleResponse, OrderDetail, Patient } from '@lockstep/shared';
+import {
+  blockingFindings,
+  type CreateOrderRequest,
+  type Finding,
+  type LimitRuleResponse,
+  type OrderDetail,
+  type Patient,
+  softFindingFields,
+} from '@lockstep/shared';
 import { paths } from '@/config/paths';
 import { isApiRequestError } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
 import { useOrderCheck } from '../hooks/use-order-check';
-import { blockingFindings, softFields } from '../utils/findings';
 import { orderRequest, placeOrderErrors, unsignedOrderErrors } from '../utils/order-errors';
 import { emptyOrderForm, valuesFromOrder, type OrderFormValues } from '../utils/order-form';
 import { availableOrderSets, prefillFromSet, type AvailableOrderSet } from '../utils/order-sets';
@@ -43,7 +50,7 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
 
   const rule = rules.find((candidate) => String(candidate.id) === form.values.ruleId) ?? null;
   const check = useOrderCheck(form.values, rule, patient);
-  const soft = softFields(check.findings);
+  const soft = softFindingFields(check.findings);
   const blocking = blockingFindings(check.findings);
   const sets = useMemo(() => availableOrderSets(rules, weightBasedWard), [rules, weightBasedWard]);
   const showFinding = (finding: Finding) => finding.code !== 'number.missing' || attempted || form.isTouched(finding.field);

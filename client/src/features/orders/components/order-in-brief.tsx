@@ -1,6 +1,5 @@
 import { Text } from '@mantine/core';
-import type { OrderSummary } from '@lockstep/shared';
-import { regimenSummary } from '../utils/regimen-format';
+import { formatRegimen, type OrderSummary } from '@lockstep/shared';
 
 /** Whose order it is and its regimen, at the top of a dialog that acts on it. */
 export function OrderInBrief({ order, withMrn = true }: { order: OrderSummary; withMrn?: boolean }) {
@@ -11,7 +10,7 @@ export function OrderInBrief({ order, withMrn = true }: { order: OrderSummary; w
         {withMrn ? `, MRN ${order.patientMrn}` : ''}, {order.wardName} bed {order.bed}
       </Text>
       <Text size="sm" fw={600} className="tabular-nums">
-        {regimenSummary(order)}
+        {formatRegimen(order)}
       </Text>
     </>
   );

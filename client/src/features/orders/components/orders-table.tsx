@@ -3,15 +3,11 @@ import { Anchor, Button, EmptyState, Group, Stack, Text } from '@mantine/core';
 import { IconArrowBackUp, IconClipboardList, IconPencil, IconSquareX } from '@tabler/icons-react';
 import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
-import type { OrderStatus, OrderSummary } from '@lockstep/shared';
+import { canCancel, formatRegimen, type OrderSummary } from '@lockstep/shared';
 import { DataTable } from '@/components/ui/data-table';
 import { OrderStatusBadge } from '@/components/ui/order-status-badge';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/utils/format-date';
-import { regimenSummary } from '../utils/regimen-format';
-
-/** A prescriber may cancel an order until it is running. */
-export const CANCELLABLE_STATUSES: readonly OrderStatus[] = ['awaiting_verification', 'verified', 'returned'];
 
 export interface OrdersTableProps {
   orders: OrderSummary[];
@@ -75,7 +71,7 @@ export function OrdersTable({ orders, label, isLoading, empty, showPatient, onOp
             }),
           ]
         : []),
-      column.accessor((order) => regimenSummary(order), { id: 'regimen', header: 'Regimen', enableSorting: false }),
+      column.accessor((order) => formatRegimen(order), { id: 'regimen', header: 'Regimen', enableSorting: false }),
       ...(showPatient ? [] : [column.accessor('prescriberName', { header: 'Prescriber' })]),
       column.accessor('signedAt', {
         header: 'Signed',
@@ -105,7 +101,7 @@ export function OrdersTable({ orders, label, isLoading, empty, showPatient, onOp
                         Revise
                       </Button>
                     ) : null}
-                    {CANCELLABLE_STATUSES.includes(order.status) ? (
+                    {canCancel(order.status) ? (
                       <Button
                         size="xs"
                         variant="default"

@@ -1,8 +1,7 @@
 import type { ReactNode } from 'react';
 import { Group, Stack, Text, Textarea, TextInput } from '@mantine/core';
 import { IconPencil } from '@tabler/icons-react';
-import { MIN_REASON_LENGTH, REGIMEN_FIELD_LABELS, type Finding, type RegimenField } from '@lockstep/shared';
-import { isBlocking } from '../utils/findings';
+import { type Finding, isBlockingFinding, MIN_REASON_LENGTH, REGIMEN_FIELD_LABELS, type RegimenField } from '@lockstep/shared';
 import { FindingLine } from './finding-line';
 
 type InputProps = {
@@ -31,7 +30,7 @@ export interface RegimenFieldInputProps {
 /** One regimen amount, its limits, each of its findings beside it, and a reason when one is needed. */
 export function RegimenFieldInput({ field, unit, limitsText, required, input, findings, reason, was }: RegimenFieldInputProps) {
   const label = REGIMEN_FIELD_LABELS[field];
-  const blocked = findings.some(isBlocking);
+  const blocked = findings.some(isBlockingFinding);
   return (
     <Stack gap={6}>
       <TextInput

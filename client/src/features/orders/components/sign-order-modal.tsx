@@ -1,11 +1,10 @@
 import { useState } from 'react';
 import { List, Stack, Text } from '@mantine/core';
-import { REGIMEN_FIELD_LABELS, type CreateOrderRequest, type OrderDetail, type RegimenField } from '@lockstep/shared';
+import { type CreateOrderRequest, formatRegimen, type OrderDetail, REGIMEN_FIELD_LABELS, type RegimenField } from '@lockstep/shared';
 import { SignatureModal, type SignatureHandlers } from '@/components/dialogs/signature-modal';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { useCreateOrder } from '../api/create-order';
 import { useReviseOrder } from '../api/revise-order';
-import { regimenSummary } from '../utils/regimen-format';
 
 export interface SignOrderModalProps {
   /** The order as it will be sent, short of the password. */
@@ -45,6 +44,7 @@ export function SignOrderModal({ unsigned, drugName, revisingId, onSigned, onRef
     drugName,
     concentrationPerMl: unsigned.concentrationPerMl,
     doseUnit: unsigned.doseUnit,
+    loadingDose: unsigned.loadingDose ?? null,
     demandDose: unsigned.demandDose,
     lockoutMinutes: unsigned.lockoutMinutes,
     basalRatePerHour: unsigned.basalRatePerHour,
@@ -64,7 +64,7 @@ export function SignOrderModal({ unsigned, drugName, revisingId, onSigned, onRef
       <Stack gap="xs">
         <Text size="sm">You are signing this regimen; pharmacy verifies it before a syringe is released.</Text>
         <Text fw={600} className="tabular-nums" data-testid="signing-regimen">
-          {regimenSummary(regimen)}
+          {formatRegimen(regimen)}
         </Text>
         {unsigned.overrides.length > 0 ? (
           <>

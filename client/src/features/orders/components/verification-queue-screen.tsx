@@ -3,7 +3,7 @@ import { Badge, EmptyState, Group, Select, Stack, Text, Title } from '@mantine/c
 import { IconClipboardCheck, IconVersions } from '@tabler/icons-react';
 import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { useNavigate, useSearchParams } from 'react-router-dom';
-import type { OrderSummary, Ward } from '@lockstep/shared';
+import { formatRegimen, type OrderSummary, type Ward } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { DataTable } from '@/components/ui/data-table';
 import { paths } from '@/config/paths';
@@ -12,7 +12,6 @@ import { minutesSince } from '@/utils/clock';
 import { formatElapsed } from '@/utils/duration';
 import { formatDateTime } from '@/utils/format-date';
 import { useOrders } from '../api/get-orders';
-import { regimenSummary } from '../utils/regimen-format';
 
 const ALL_WARDS = 'all';
 // Others sign orders all the time: look again twice a minute.
@@ -73,7 +72,7 @@ export function VerificationQueueScreen({ wards, wardsLoading }: VerificationQue
         header: 'Ward and bed',
         cell: ({ row }) => `${row.original.wardName}, bed ${row.original.bed}`,
       }),
-      column.accessor((order) => regimenSummary(order), {
+      column.accessor((order) => formatRegimen(order), {
         id: 'regimen',
         header: 'Regimen',
         enableSorting: false,

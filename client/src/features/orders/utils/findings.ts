@@ -1,24 +1,11 @@
-import type { Finding, FindingSeverity, RegimenField } from '@lockstep/shared';
-import { REGIMEN_FIELDS } from '@lockstep/shared';
+import type { Finding, FindingSeverity } from '@lockstep/shared';
 
-/** Errors and hard-limit findings block signing (and verifying). */
-export function isBlocking(finding: Finding): boolean {
-  return finding.severity === 'error' || finding.severity === 'hard';
-}
-
-export function blockingFindings(findings: readonly Finding[]): Finding[] {
-  return findings.filter(isBlocking);
-}
+// Which findings block signing and which need a reason are shared rules (isBlockingFinding,
+// blockingFindings, softFindingFields); these only arrange findings for the screen.
 
 /** The findings on one field, worst first as `checkOrder` sorts them. */
 export function findingsFor(findings: readonly Finding[], field: string): Finding[] {
   return findings.filter((finding) => finding.field === field);
-}
-
-/** Fields outside a soft limit, each needing a reason to sign, in the form's order. */
-export function softFields(findings: readonly Finding[]): RegimenField[] {
-  const soft = new Set(findings.filter((finding) => finding.severity === 'soft').map((finding) => finding.field));
-  return REGIMEN_FIELDS.filter((field) => soft.has(field));
 }
 
 function findingKey(finding: Finding): string {

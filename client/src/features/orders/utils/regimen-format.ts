@@ -1,21 +1,15 @@
 import {
   formatDose,
   regimenFieldUnit,
-  tallMan,
+  drugAndConcentration,
   type DoseUnit,
   type LimitRuleResponse,
   type Limits,
-  type OrderSummary,
   type RegimenField,
 } from '@lockstep/shared';
 
-/** "HYDROmorphone 0.2 mg/mL": tall-man name and safe concentration. */
-export function drugWithConcentration(drugName: string, concentrationPerMl: number, doseUnit: DoseUnit): string {
-  return `${tallMan(drugName)} ${formatDose(concentrationPerMl, `${doseUnit}/mL`)}`;
-}
-
 export function ruleLabel(rule: LimitRuleResponse): string {
-  const label = drugWithConcentration(rule.drugName, rule.concentrationPerMl, rule.doseUnit);
+  const label = drugAndConcentration(rule);
   return rule.perKg ? `${label} (limits per kg)` : label;
 }
 
@@ -23,25 +17,6 @@ export function ruleLabel(rule: LimitRuleResponse): string {
 export function fieldValueText(field: RegimenField, value: number | null | undefined, doseUnit: DoseUnit): string {
   if (value === null || value === undefined) return 'Not set';
   return formatDose(value, regimenFieldUnit(field, doseUnit, false));
-}
-
-type RegimenLine = Pick<
-  OrderSummary,
-  'drugName' | 'concentrationPerMl' | 'doseUnit' | 'demandDose' | 'lockoutMinutes' | 'basalRatePerHour' | 'oneHourLimit' | 'fourHourLimit'
->;
-
-/** One line for a list: "morphine 1 mg/mL · demand 1 mg · lockout 10 min · 4-hour limit 30 mg". */
-export function regimenSummary(order: RegimenLine): string {
-  const unit = order.doseUnit;
-  const parts = [
-    drugWithConcentration(order.drugName, order.concentrationPerMl, unit),
-    `demand ${formatDose(order.demandDose, unit)}`,
-    `lockout ${formatDose(order.lockoutMinutes, 'min')}`,
-  ];
-  if (order.basalRatePerHour > 0) parts.push(`basal ${formatDose(order.basalRatePerHour, `${unit}/h`)}`);
-  if (order.oneHourLimit !== null) parts.push(`1-hour limit ${formatDose(order.oneHourLimit, unit)}`);
-  if (order.fourHourLimit !== null) parts.push(`4-hour limit ${formatDose(order.fourHourLimit, unit)}`);
-  return parts.join(' · ');
 }
 
 /** "0.5–2 mg", "up to 30 mg", "from 5 min"; null when neither end is set. */

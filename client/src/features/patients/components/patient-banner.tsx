@@ -1,8 +1,8 @@
 import type { ReactNode } from 'react';
 import { Group, Paper, SimpleGrid, Stack, Text } from '@mantine/core';
 import { IconAlertTriangle } from '@tabler/icons-react';
-import { ageInYears, type Patient } from '@lockstep/shared';
-import { formatPatientName, formatSex, formatWeight, hasAllergies } from '../utils/patient-format';
+import { ageInYears, hasAllergies, type Patient, patientDisplayName } from '@lockstep/shared';
+import { formatSex, formatWeight } from '../utils/patient-format';
 
 function Fact({ label, children, risk = false }: { label: string; children: ReactNode; risk?: boolean }) {
   return (
@@ -35,7 +35,7 @@ export function PatientBanner({ patient }: { patient: Patient }) {
       <Stack gap="sm">
         <Group gap="md" align="baseline" wrap="wrap">
           <Text fz="xl" fw={700} data-testid="patient-banner-name">
-            {formatPatientName(patient)}
+            {patientDisplayName(patient)}
           </Text>
           <Text c="dimmed" className="tabular-nums">
             MRN {patient.mrn}

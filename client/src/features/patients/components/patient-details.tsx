@@ -1,8 +1,8 @@
 import type { ReactNode } from 'react';
 import { DataList, Group, Paper, SimpleGrid, Stack, Text, Title } from '@mantine/core';
-import { ageInYears, type Patient } from '@lockstep/shared';
+import { ageInYears, hasAllergies, type Patient, patientDisplayName } from '@lockstep/shared';
 import { formatCalendarDate } from '@/utils/format-date';
-import { formatPatientName, formatSex, formatWeight, hasAllergies } from '../utils/patient-format';
+import { formatSex, formatWeight } from '../utils/patient-format';
 import { RiskMarkers } from './risk-markers';
 
 function Fact({ label, children }: { label: string; children: ReactNode }) {
@@ -20,7 +20,7 @@ export function PatientDetails({ patient }: { patient: Patient }) {
   return (
     <Stack gap="md">
       <Group gap="md" align="baseline" wrap="wrap">
-        <Title order={1}>{formatPatientName(patient)}</Title>
+        <Title order={1}>{patientDisplayName(patient)}</Title>
         <Text c="dimmed" className="tabular-nums">
           MRN {patient.mrn}
         </Text>

@@ -3,17 +3,17 @@ import { Anchor, EmptyState } from '@mantine/core';
 import { IconUserSearch } from '@tabler/icons-react';
 import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
-import { ageInYears, type Patient } from '@lockstep/shared';
+import { ageInYears, type Patient, patientDisplayName } from '@lockstep/shared';
 import { DataTable } from '@/components/ui/data-table';
 import { paths } from '@/config/paths';
-import { formatPatientName, formatWeight } from '../utils/patient-format';
+import { formatWeight } from '../utils/patient-format';
 import { RiskMarkers } from './risk-markers';
 
 const column = createColumnHelper<Patient>();
 
 const columns = [
   column.accessor('bed', { header: 'Bed', sortingFn: 'alphanumeric' }),
-  column.accessor((patient) => formatPatientName(patient), {
+  column.accessor((patient) => patientDisplayName(patient), {
     id: 'name',
     header: 'Name',
     cell: ({ row, getValue }) => (

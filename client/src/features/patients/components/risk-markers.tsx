@@ -1,8 +1,7 @@
 import type { ComponentType } from 'react';
 import { Badge, Group, Text } from '@mantine/core';
 import { IconAlertTriangle, IconMoonStars, IconPill, IconZzz, type IconProps } from '@tabler/icons-react';
-import type { Patient } from '@lockstep/shared';
-import { hasAllergies } from '../utils/patient-format';
+import { type Patient, PATIENT_RISK_FACTOR_LABELS, type PatientRiskFactor, patientRiskFactors } from '@lockstep/shared';
 
 interface RiskMarker {
   key: string;
@@ -12,18 +11,21 @@ interface RiskMarker {
   detail?: string;
 }
 
-/** The patient's risk markers, each with its own icon and word so colour is never the only cue. */
+const MARKER_LOOK: Record<PatientRiskFactor, Pick<RiskMarker, 'Icon' | 'color'>> = {
+  allergies: { Icon: IconAlertTriangle, color: 'red' },
+  'opioid-tolerant': { Icon: IconPill, color: 'indigo' },
+  'sleep-apnoea': { Icon: IconZzz, color: 'orange' },
+  'other-sedatives': { Icon: IconMoonStars, color: 'orange' },
+};
+
+/** The patient's risk markers (the shared list of risk factors), each with its own icon and word so colour is never the only cue. */
 export function riskMarkersOf(patient: Patient): RiskMarker[] {
-  const markers: RiskMarker[] = [];
-  if (hasAllergies(patient.allergies)) {
-    markers.push({ key: 'allergies', label: 'Allergies', Icon: IconAlertTriangle, color: 'red', detail: patient.allergies });
-  }
-  if (patient.opioidTolerant) markers.push({ key: 'opioid', label: 'Opioid tolerant', Icon: IconPill, color: 'indigo' });
-  if (patient.sleepApnoea) markers.push({ key: 'apnoea', label: 'Sleep apnoea', Icon: IconZzz, color: 'orange' });
-  if (patient.otherSedatives) {
-    markers.push({ key: 'sedatives', label: 'Other sedatives', Icon: IconMoonStars, color: 'orange' });
-  }
-  return markers;
+  return patientRiskFactors(patient).map((factor) => ({
+    key: factor,
+    label: PATIENT_RISK_FACTOR_LABELS[factor],
+    ...MARKER_LOOK[factor],
+    ...(factor === 'allergies' ? { detail: patient.allergies } : {}),
+  }));
 }
 
 export interface RiskMarkersProps {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Patient } from '@lockstep/shared';
-import { formatPatientName, formatWeight, hasAllergies, matchesPatientSearch } from './patient-format';
+import { formatWeight, matchesPatientSearch } from './patient-format';
 
 const patient: Patient = {
   id: 1,
@@ -20,21 +20,10 @@ const patient: Patient = {
 };
 
 describe('patient formatting', () => {
-  it('writes the family name in capitals first', () => {
-    expect(formatPatientName(patient)).toBe('OKAFOR, Grace');
-  });
-
   it('writes weight in kg as recorded', () => {
     expect(formatWeight(72)).toBe('72 kg');
     expect(formatWeight(18.65)).toBe('18.65 kg');
     expect(formatWeight(null)).toBe('Not recorded');
-  });
-
-  it('tells a recorded allergy from "none known"', () => {
-    expect(hasAllergies('Penicillin (rash)')).toBe(true);
-    expect(hasAllergies('')).toBe(false);
-    expect(hasAllergies('NKDA')).toBe(false);
-    expect(hasAllergies('None known.')).toBe(false);
   });
 });
 

@@ -1,10 +1,5 @@
 import type { Patient, Sex } from '@lockstep/shared';
 
-/** "OKAFOR, Grace": family name in capitals, so it cannot be mistaken for a given name. */
-export function formatPatientName(patient: Pick<Patient, 'familyName' | 'givenName'>): string {
-  return `${patient.familyName.toLocaleUpperCase('en-GB')}, ${patient.givenName}`;
-}
-
 // Two decimals at most: weight drives weight-based limits, so it is shown as recorded.
 const weightFormat = new Intl.NumberFormat('en-GB', { maximumFractionDigits: 2 });
 
@@ -21,17 +16,6 @@ const SEX_LABELS: Record<Sex, string> = {
 
 export function formatSex(sex: Sex): string {
   return SEX_LABELS[sex];
-}
-
-const NO_ALLERGY_PHRASES = new Set(['', 'none', 'nil', 'nka', 'nkda', 'none known', 'no known allergies', 'no known drug allergies']);
-
-/** True when the allergy text records an actual allergy rather than "none known". */
-export function hasAllergies(allergies: string): boolean {
-  const normalised = allergies
-    .trim()
-    .toLowerCase()
-    .replace(/[.\s]+$/, '');
-  return !NO_ALLERGY_PHRASES.has(normalised);
 }
 
 /** Case-insensitive match on given name, family name (either order) or MRN. */
