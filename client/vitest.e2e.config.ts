@@ -1,7 +1,8 @@
 import { defineConfig } from 'vitest/config';
 
-// Browser tests: playwright-core drives Debian's chromium against the built app. Files run one at
-// a time (each starts its own server) to stay within a two-core machine.
+// Browser tests: playwright-core drives Debian's chromium against the built app, which
+// `npm run test:browser` builds first. Each file starts its own server on a fresh database, so
+// files stand alone in any order; they run one at a time to stay within a two-core machine.
 export default defineConfig({
   test: {
     include: ['e2e/**/*.e2e.ts'],

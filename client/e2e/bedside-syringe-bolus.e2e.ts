@@ -1,43 +1,18 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { CreateOrderRequest } from '@lockstep/shared';
+import { IDENTITY, ORDER as PCA_ORDER, RELEASE, ROSA, SETTINGS } from '../../server/test/support/pca.js';
 import { DEMO_PASSWORD, openBrowser, openPatients, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 
 // An active morphine PCA for NOAH ACHTERBERG (KB100231, born 1968-03-14, Harbour bed H02), set up
-// through the API: 1 mg/mL, demand 1 mg, lockout 10 min, 4-hour limit 30 mg and a clinician bolus
-// of up to 3 mg (over the demo library's soft maximum of 2 mg, so the prescriber gave a reason).
-const ORDER = {
-  patientId: 1,
-  drugId: 1,
-  concentrationPerMl: 1,
-  doseUnit: 'mg',
-  demandDose: 1,
-  lockoutMinutes: 10,
-  basalRatePerHour: 0,
-  fourHourLimit: 30,
+// through the API: the PCA of server/test/support/pca.ts (1 mg/mL, demand 1 mg, lockout 10 min,
+// 4-hour limit 30 mg) with a clinician bolus of up to 3 mg (over the demo library's soft maximum
+// of 2 mg, so the prescriber gave a reason).
+const ORDER: CreateOrderRequest = {
+  ...PCA_ORDER,
   clinicianBolusDose: 3,
-  reviewDate: '2030-01-02',
   overrides: [{ field: 'clinicianBolusDose', reason: 'Larger boluses agreed with the acute pain team' }],
-  signature: { password: DEMO_PASSWORD },
-};
-const SETTINGS = {
-  drugId: 1,
-  concentrationPerMl: 1,
-  syringeVolumeMl: 50,
-  loadingDose: null,
-  demandDose: 1,
-  lockoutMinutes: 10,
-  basalRatePerHour: 0,
-  oneHourLimit: null,
-  fourHourLimit: 30,
-};
-const RELEASE = {
-  concentrationPerMl: 1,
-  volumeMl: 50,
-  batch: 'E2E-1',
-  expiresAt: '2030-01-01T12:00:00Z',
-  preparedBy: 'Lin Park',
-  checkedBy: 'Tomas Ortiz',
 };
 
 async function api<T>(baseUrl: string, token: string | null, path: string, body?: object): Promise<T> {
@@ -61,16 +36,11 @@ async function activeOrderWithSpareSyringe(baseUrl: string): Promise<{ id: numbe
   await api(baseUrl, lin, `/orders/${order.id}/verify`, { signature: { password: DEMO_PASSWORD } });
   const first = await api<{ releaseCode: string }>(baseUrl, lin, `/orders/${order.id}/releases`, RELEASE);
   const check = await api<{ id: number }>(baseUrl, kai, `/orders/${order.id}/bedside-checks`, {
-    patientMrn: 'KB100231',
-    patientDateOfBirth: '1968-03-14',
+    ...IDENTITY,
     releaseCode: first.releaseCode,
     settings: SETTINGS,
   });
-  await api(baseUrl, kai, `/orders/${order.id}/bedside-checks/${check.id}/second`, {
-    username: 'rosa.adeyemi',
-    password: DEMO_PASSWORD,
-    settings: SETTINGS,
-  });
+  await api(baseUrl, kai, `/orders/${order.id}/bedside-checks/${check.id}/second`, { ...ROSA, settings: SETTINGS });
   const spare = await api<{ releaseCode: string }>(baseUrl, lin, `/orders/${order.id}/releases`, RELEASE);
   return { id: order.id, spareCode: spare.releaseCode };
 }

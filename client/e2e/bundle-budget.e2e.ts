@@ -7,6 +7,8 @@ import { describe, expect, it } from 'vitest';
 // The JavaScript a browser must fetch before the first screen: the entry chunk of the production
 // build and every chunk it imports statically, as Vite's build manifest lists them. Screens load
 // their own code later (route-level splitting), so this stays small however many screens there are.
+// It reads client/dist, which `npm run test:browser` builds before any test file runs (for this
+// file alone, `npm run build -w client`); no test file builds or changes it.
 const DIST = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..', 'dist');
 const MANIFEST = path.join(DIST, '.vite', 'manifest.json');
 const BUDGET_GZIP_BYTES = 300 * 1024;
@@ -45,7 +47,7 @@ const kb = (bytes: number) => (bytes / 1024).toFixed(1);
 
 describe('production bundle', () => {
   it(`loads at most ${BUDGET_GZIP_BYTES / 1024} KB of JavaScript (gzip) before the first screen`, () => {
-    expect(existsSync(MANIFEST), 'client/dist is missing: run `npm run build` first').toBe(true);
+    expect(existsSync(MANIFEST), 'client/dist is missing: run `npm run build -w client` first (`npm run test:browser` does)').toBe(true);
     const { manifest, entry } = readManifest();
     // The manifest describes this build: its entry is the script index.html starts.
     expect(readFileSync(path.join(DIST, 'index.html'), 'utf8')).toContain(`src="/${entry.file}"`);
@@ -60,7 +62,7 @@ describe('production bundle', () => {
   });
 
   it("loads each screen's own code only when the screen opens", () => {
-    expect(existsSync(MANIFEST), 'client/dist is missing: run `npm run build` first').toBe(true);
+    expect(existsSync(MANIFEST), 'client/dist is missing: run `npm run build -w client` first (`npm run test:browser` does)').toBe(true);
     const { manifest, entry } = readManifest();
     const initial = staticFiles(manifest, [entry]);
     const routes = (entry.dynamicImports ?? []).map((key) => manifest[key]);

@@ -1,8 +1,7 @@
-import { type ChildProcess, spawn } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
-import { closeSync, mkdirSync, openSync, readFileSync } from 'node:fs';
-import { createServer } from 'node:net';
+import { mkdirSync } from 'node:fs';
 import path from 'node:path';
+import { spawnServer } from '../test/support/spawn-server.js';
 import { SERVER_ROOT } from './paths.js';
 
 export type RunningServer = { baseUrl: string; logFile: string; stop(): Promise<void> };
@@ -32,53 +31,8 @@ export function startBaseline(databasePath: string): Promise<RunningServer> {
 }
 
 async function start(name: string, script: string, args: string[], env: (port: number) => Record<string, string>): Promise<RunningServer> {
-  const port = await freePort();
   mkdirSync(logDirectory, { recursive: true });
   const logFile = path.join(logDirectory, `${name}.log`);
-  const log = openSync(logFile, 'w');
-  const child = spawn(process.execPath, [script, ...args], {
-    cwd: SERVER_ROOT,
-    env: { ...process.env, ...env(port) },
-    stdio: ['ignore', log, log],
-  });
-  closeSync(log);
-  const baseUrl = `http://127.0.0.1:${port}`;
-  await waitForHealth(baseUrl, child, logFile);
-  return { baseUrl, logFile, stop: () => stop(child) };
-}
-
-async function waitForHealth(baseUrl: string, child: ChildProcess, logFile: string): Promise<void> {
-  const deadline = Date.now() + 60_000;
-  while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`The server exited early:\n${readFileSync(logFile, 'utf8')}`);
-    try {
-      if ((await fetch(`${baseUrl}/api/health`)).ok) return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((resolve) => setTimeout(resolve, 200));
-  }
-  child.kill('SIGKILL');
-  throw new Error(`The server did not answer /api/health within 60 s; its log: ${logFile}`);
-}
-
-function stop(child: ChildProcess): Promise<void> {
-  if (child.exitCode !== null || child.signalCode !== null) return Promise.resolve();
-  return new Promise((resolve) => {
-    child.once('exit', () => resolve());
-    child.kill('SIGTERM');
-    setTimeout(() => child.kill('SIGKILL'), 10_000).unref();
-  });
-}
-
-function freePort(): Promise<number> {
-  return new Promise((resolve, reject) => {
-    const server = createServer();
-    server.unref();
-    server.on('error', reject);
-    server.listen(0, '127.0.0.1', () => {
-      const address = server.address();
-      server.close(() => (typeof address === 'object' && address ? resolve(address.port) : reject(new Error('no port'))));
-    });
-  });
+  const server = await spawnServer({ script, args, cwd: SERVER_ROOT, env, logFile, startupMs: 60_000, killAfterMs: 10_000 });
+  return { baseUrl: server.baseUrl, logFile, stop: server.stop };
 }

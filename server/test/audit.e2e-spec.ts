@@ -2,7 +2,7 @@ import Database from 'better-sqlite3';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { AuditEvent, AuditPage } from '@lockstep/shared';
-import { activeOrder, type PcaTokens } from './support/pca.js';
+import { activeOrder, type PcaTokens } from './support/pca-steps.js';
 import { createTestApp, DEMO_PASSWORD, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
 
 describe('audit trail', () => {

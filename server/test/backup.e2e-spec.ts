@@ -6,21 +6,9 @@ import Database from 'better-sqlite3';
 import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { backupDatabase, backupFileName } from '../src/database/backup.js';
-import { activeOrder } from './support/pca.js';
+import { CALM_OBSERVATION as OBSERVATION } from './support/pca.js';
+import { activeOrder } from './support/pca-steps.js';
 import { createTestApp, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
-
-// Invented, unremarkable observations: no flag is raised and the pump totals stay put, so any
-// number of them can be written in any order.
-const OBSERVATION = {
-  painScore: 3,
-  sedationLevel: '1',
-  respiratoryRate: 14,
-  spo2: 97,
-  attempts: 4,
-  delivered: 3,
-  volumeInfusedMl: 3,
-  syringeRemainingMl: 47,
-};
 
 describe('database backup (npm run db:backup)', () => {
   let t: TestApp;

@@ -18,7 +18,8 @@ import {
   SYRINGE_CHANGE,
 } from './support/bad-input-specs.js';
 import { type BadInputApp, badInputSuite, type BadInputRoute } from './support/bad-input-harness.js';
-import { activeOrder, IDENTITY, RELEASE, ROSA, SETTINGS, verifiedOrderWithSyringe } from './support/pca.js';
+import { CALM_OBSERVATION, IDENTITY, RELEASE, ROSA, SETTINGS } from './support/pca.js';
+import { activeOrder, verifiedOrderWithSyringe } from './support/pca-steps.js';
 
 const HARBOUR = 1; // the ward of patient 1, whose orders support/pca.ts writes
 
@@ -51,17 +52,7 @@ async function setUp({ t, tokens }: BadInputApp): Promise<void> {
   state.flagId = sedated.body.flags[0].id;
 }
 
-const OBSERVATION_BODY = {
-  painScore: 3,
-  sedationLevel: '1',
-  respiratoryRate: 14,
-  spo2: 97,
-  attempts: 4,
-  delivered: 3,
-  volumeInfusedMl: 3,
-  syringeRemainingMl: 47,
-  note: 'Comfortable, settled',
-};
+const OBSERVATION_BODY = { ...CALM_OBSERVATION, note: 'Comfortable, settled' };
 
 const ROUTES: BadInputRoute[] = [
   {

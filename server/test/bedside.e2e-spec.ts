@@ -3,15 +3,8 @@ import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { waitForMail } from './support/mailbox.js';
-import {
-  activeOrder as startOrder,
-  IDENTITY,
-  ORDER,
-  RELEASE,
-  ROSA,
-  SETTINGS,
-  verifiedOrderWithSyringe as releasedOrder,
-} from './support/pca.js';
+import { IDENTITY, ORDER, RELEASE, ROSA, SETTINGS } from './support/pca.js';
+import { activeOrder as startOrder, verifiedOrderWithSyringe as releasedOrder } from './support/pca-steps.js';
 import { createTestApp, DEMO_PASSWORD, type TestApp } from './support/test-app.js';
 
 // Regimen, patient and syringe are in support/pca.ts (ASHP Standardize 4 Safety, PCA standards, 2023).

@@ -7,62 +7,16 @@ import { promisify } from 'node:util';
 import Database from 'better-sqlite3';
 import { afterAll, describe, expect, it } from 'vitest';
 import { backupDatabase } from '../src/database/backup.js';
-import { type ServerProcess, startBuiltServer } from './support/server-process.js';
+import { DEMO_PASSWORD } from './support/demo-accounts.js';
+import { CALM_OBSERVATION as OBSERVATION, IDENTITY, ORDER, RELEASE, ROSA, SETTINGS } from './support/pca.js';
+import { startBuiltServer } from './support/server-process.js';
+import type { SpawnedServer } from './support/spawn-server.js';
 
 // The real built server as a child process, killed with SIGKILL while observation writes are in
-// flight and restarted on the same file. Run by `npm run test:crash` after the build.
+// flight and restarted on the same file. Run by `npm run test:crash` after the build. The PCA and
+// its calm observations are support/pca.ts's, plain data: the app is only ever reached over HTTP.
 const CYCLES = 5;
 const WORKERS = 8;
-const PASSWORD = 'lockstep-demo';
-
-// The same invented morphine PCA as test/support/pca.ts (patient 1 on Harbour, drug 1), written
-// out here so this test loads no application code: everything goes through HTTP.
-const ORDER = {
-  patientId: 1,
-  drugId: 1,
-  concentrationPerMl: 1,
-  doseUnit: 'mg',
-  demandDose: 1,
-  lockoutMinutes: 10,
-  basalRatePerHour: 0,
-  fourHourLimit: 30,
-  clinicianBolusDose: 2,
-  reviewDate: '2030-01-02',
-  overrides: [],
-  signature: { password: PASSWORD },
-};
-const SETTINGS = {
-  drugId: 1,
-  concentrationPerMl: 1,
-  syringeVolumeMl: 50,
-  loadingDose: null,
-  demandDose: 1,
-  lockoutMinutes: 10,
-  basalRatePerHour: 0,
-  oneHourLimit: null,
-  fourHourLimit: 30,
-};
-const RELEASE = {
-  concentrationPerMl: 1,
-  volumeMl: 50,
-  batch: 'KB-77',
-  expiresAt: '2030-01-01T12:00:00Z',
-  preparedBy: 'Lin Park',
-  checkedBy: 'Tomas Ortiz',
-};
-const IDENTITY = { patientMrn: 'KB100231', patientDateOfBirth: '1968-03-14' };
-// Unremarkable values that raise no flag; pump totals that stay put, so the order in which the
-// server takes overlapping requests never matters.
-const OBSERVATION = {
-  painScore: 3,
-  sedationLevel: '1',
-  respiratoryRate: 14,
-  spo2: 97,
-  attempts: 4,
-  delivered: 3,
-  volumeInfusedMl: 3,
-  syringeRemainingMl: 47,
-};
 
 type Json = Record<string, unknown>;
 
@@ -85,7 +39,7 @@ async function api<T = Json>(
 }
 
 const signIn = async (baseUrl: string, username: string): Promise<string> =>
-  (await api<{ accessToken: string }>(baseUrl, 'POST', '/auth/login', null, { username, password: PASSWORD }, 200)).accessToken;
+  (await api<{ accessToken: string }>(baseUrl, 'POST', '/auth/login', null, { username, password: DEMO_PASSWORD }, 200)).accessToken;
 
 /** Signed, verified, a syringe released and a matching two-nurse check: an active PCA. */
 async function activePca(baseUrl: string): Promise<number> {
@@ -93,17 +47,10 @@ async function activePca(baseUrl: string): Promise<number> {
     ['amara.osei', 'lin.park', 'kai.mendes'].map((username) => signIn(baseUrl, username)),
   );
   const { id } = await api(baseUrl, 'POST', '/orders', prescriber, ORDER, 201);
-  await api(baseUrl, 'POST', `/orders/${id}/verify`, pharmacist, { signature: { password: PASSWORD } }, 200);
+  await api(baseUrl, 'POST', `/orders/${id}/verify`, pharmacist, { signature: { password: DEMO_PASSWORD } }, 200);
   const { releaseCode } = await api(baseUrl, 'POST', `/orders/${id}/releases`, pharmacist, RELEASE, 201);
   const first = await api(baseUrl, 'POST', `/orders/${id}/bedside-checks`, nurse, { ...IDENTITY, releaseCode, settings: SETTINGS }, 201);
-  await api(
-    baseUrl,
-    'POST',
-    `/orders/${id}/bedside-checks/${first.id}/second`,
-    nurse,
-    { username: 'rosa.adeyemi', password: PASSWORD, settings: SETTINGS },
-    200,
-  );
+  await api(baseUrl, 'POST', `/orders/${id}/bedside-checks/${first.id}/second`, nurse, { ...ROSA, settings: SETTINGS }, 200);
   return id as number;
 }
 
@@ -183,7 +130,7 @@ function storedObservationIds(file: string, orderId: number): { integrity: unkno
 describe('crash safety of the built server', () => {
   const directory = mkdtempSync(path.join(tmpdir(), 'lockstep-crash-'));
   const databasePath = path.join(directory, 'crash.sqlite');
-  let server: ServerProcess | undefined;
+  let server: SpawnedServer | undefined;
   let orderId = 0;
   const answered: number[] = [];
   let cliBackup = '';
@@ -199,7 +146,7 @@ describe('crash safety of the built server', () => {
     const cycles: string[] = [];
 
     for (let cycle = 1; cycle <= CYCLES; cycle++) {
-      const running: ServerProcess = server;
+      const running: SpawnedServer = server;
       const nurse = await signIn(running.baseUrl, 'kai.mendes');
       const thisBurst: number[] = [];
       const killAfter = 10 + Math.floor(Math.random() * 40);

@@ -1,7 +1,8 @@
 import { createRequire } from 'node:module';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { activeOrder, ORDER, ROSA, SETTINGS } from './support/pca.js';
+import { ORDER, ROSA, SETTINGS } from './support/pca.js';
+import { activeOrder } from './support/pca-steps.js';
 import { createTestApp, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
 
 // The typed slices of the two outside checkers. Both ship CommonJS without the types used here.
@@ -26,7 +27,7 @@ type Resource = { resourceType: string } & Record<string, unknown>;
 
 // A worked example on patient 1 (support/pca.ts). Morphine 1 mg/mL, demand 1 mg, lockout 10
 // minutes: ASHP Standardize 4 Safety, PCA standards (2023); 4-hour limit 30 mg: the typical
-// ranges of a widely used clinical reference table (REFERENCES.md). Loading dose, basal rate,
+// ranges of a widely used clinical reference table [practice]. Loading dose, basal rate,
 // 1-hour limit and clinician bolus are invented for the example (inside the demo library's soft
 // limits): the mapping does not depend on their clinical values.
 const WORKED = {
@@ -65,7 +66,7 @@ describe('FHIR R4 export', () => {
     validated.resources += 1;
     walk(resource, (node) => {
       if (node.system === UCUM && typeof node.code === 'string') {
-        // Source: UCUM [lib, @lhncbc/ucum-lhc] (REFERENCES.md).
+        // Source: UCUM, via the npm package @lhncbc/ucum-lhc [lib].
         expect(ucum.validateUnitString(node.code), node.code).toMatchObject({ status: 'valid', ucumCode: node.code });
         validated.unitCodes.add(node.code);
         validated.unitChecks += 1;
@@ -347,7 +348,7 @@ describe('FHIR R4 export', () => {
   });
 
   it('checked every UCUM code the export uses', () => {
-    // Source: UCUM [lib] (REFERENCES.md): mcg is exchanged as ug, and never sent as a code.
+    // Source: UCUM, via the npm package @lhncbc/ucum-lhc [lib]: mcg is exchanged as ug, and never sent as a code.
     expect([...validated.unitCodes].sort()).toEqual(['h', 'mL', 'mg', 'mg/h', 'min', 'ug']);
   });
 });

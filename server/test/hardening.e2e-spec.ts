@@ -3,7 +3,8 @@ import { JwtService } from '@nestjs/jwt';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
-import { IDENTITY, ROSA, SETTINGS, verifiedOrderWithSyringe, ORDER as PCA_ORDER } from './support/pca.js';
+import { IDENTITY, ROSA, SETTINGS, ORDER as PCA_ORDER } from './support/pca.js';
+import { verifiedOrderWithSyringe } from './support/pca-steps.js';
 import { createTestApp, DEMO_PASSWORD, type TestApp } from './support/test-app.js';
 
 // Settings are read when the app is first imported. The per-username limit keeps its default (5);

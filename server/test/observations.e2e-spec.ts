@@ -2,19 +2,9 @@ import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type MailboxMessage, waitForMail } from './support/mailbox.js';
-import { activeOrder, ORDER, SETTINGS } from './support/pca.js';
+import { CALM_OBSERVATION as CALM, ORDER, SETTINGS } from './support/pca.js';
+import { activeOrder } from './support/pca-steps.js';
 import { createTestApp, type TestApp } from './support/test-app.js';
-
-const CALM = {
-  painScore: 3,
-  sedationLevel: '1',
-  respiratoryRate: 14,
-  spo2: 97,
-  attempts: 4,
-  delivered: 3,
-  volumeInfusedMl: 3,
-  syringeRemainingMl: 47,
-};
 
 describe('observations, flags, usage and ward policy', () => {
   let t: TestApp;

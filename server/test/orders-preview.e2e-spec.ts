@@ -1,5 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { REGIMEN as ASHP_MORPHINE } from './support/pca.js';
 import { createTestApp, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
 
 type Role = keyof typeof DEMO_USER_BY_ROLE;
@@ -7,17 +8,8 @@ const ROLES = Object.keys(DEMO_USER_BY_ROLE) as Role[];
 
 // Demo ids (seed order): patient 1 is an adult on Harbour, patient 9 a 24.5 kg child on Wren;
 // drug 1 morphine (mg), drug 3 fentanyl (mcg). The limits they meet are the demo library's.
-// ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg/mL, demand 1 mg, lockout 10 min.
-const ASHP_MORPHINE = {
-  patientId: 1,
-  drugId: 1,
-  concentrationPerMl: 1,
-  doseUnit: 'mg',
-  demandDose: 1,
-  lockoutMinutes: 10,
-  basalRatePerHour: 0,
-  fourHourLimit: 30,
-};
+// ASHP_MORPHINE is support/pca.ts's regimen: ASHP Standardize 4 Safety, PCA standards (2023),
+// morphine 1 mg/mL, demand 1 mg, lockout 10 min.
 
 describe('POST /api/orders/preview', () => {
   let t: TestApp;

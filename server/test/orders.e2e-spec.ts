@@ -1,36 +1,17 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { CreateOrderRequest } from '@lockstep/shared';
 import { waitForMail } from './support/mailbox.js';
+import { REGIMEN, RELEASE, SIGNING } from './support/pca.js';
 import { createTestApp, DEMO_PASSWORD, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
 
 type Role = keyof typeof DEMO_USER_BY_ROLE;
 const ROLES = Object.keys(DEMO_USER_BY_ROLE) as Role[];
 
-// Patient 1: adult on Harbour; drug 1 morphine. ASHP Standardize 4 Safety, PCA standards (2023):
-// morphine 1 mg/mL, demand 1 mg, lockout 10 min. Limits met are the demo library's (invented).
-const ORDER = {
-  patientId: 1,
-  drugId: 1,
-  concentrationPerMl: 1,
-  doseUnit: 'mg',
-  demandDose: 1,
-  lockoutMinutes: 10,
-  basalRatePerHour: 0,
-  fourHourLimit: 30,
-  indication: 'Pain after open abdominal surgery',
-  reviewDate: '2030-01-02',
-  overrides: [] as { field: string; reason: string }[],
-  signature: { password: DEMO_PASSWORD },
-};
+// The regimen of support/pca.ts (ASHP Standardize 4 Safety, PCA standards, 2023) with an
+// indication and no clinician bolus.
+const ORDER: CreateOrderRequest = { ...REGIMEN, indication: 'Pain after open abdominal surgery', ...SIGNING };
 const SOFT = { ...ORDER, demandDose: 2.5, overrides: [{ field: 'demandDose', reason: 'Opioid use before surgery; pain team agreed' }] };
-const RELEASE = {
-  concentrationPerMl: 1,
-  volumeMl: 50,
-  batch: 'KB-24-0117',
-  expiresAt: '2030-01-01T12:00:00Z',
-  preparedBy: 'Lin Park',
-  checkedBy: 'Tomas Ortiz',
-};
 
 describe('orders, verification and syringe release', () => {
   let t: TestApp;

@@ -1,9 +1,10 @@
-import { existsSync, mkdtempSync, rmSync } from 'node:fs';
+import { existsSync, mkdirSync, mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import { type BrowserContext, chromium, type Page } from 'playwright-core';
+import { DEMO_PASSWORD } from '../../../server/test/support/demo-accounts.js';
 
-export const DEMO_PASSWORD = 'lockstep-demo';
+export { DEMO_PASSWORD };
 
 // The flags keep headless chromium quiet on a machine with no outside network.
 const CHROMIUM_ARGS = [
@@ -88,8 +89,16 @@ export async function openPatients(page: Page): Promise<void> {
   await page.getByRole('heading', { name: 'Patients', level: 1 }).waitFor();
 }
 
+// Ignored by git; made by whichever test file saves something first.
+const ARTIFACTS = path.resolve(path.dirname(new URL(import.meta.url).pathname), '..', 'artifacts');
+
 /** Saves a screenshot under client/e2e/artifacts for a person to look at after a run. */
 export async function snapshot(page: Page, name: string): Promise<void> {
-  const directory = path.resolve(path.dirname(new URL(import.meta.url).pathname), '..', 'artifacts');
-  await page.screenshot({ path: path.join(directory, `${name}.png`), fullPage: true });
+  await page.screenshot({ path: path.join(ARTIFACTS, `${name}.png`), fullPage: true });
+}
+
+/** Saves a file (a printed PDF, say) under client/e2e/artifacts, making the folder if need be. */
+export function saveArtifact(file: string, data: Buffer): void {
+  mkdirSync(ARTIFACTS, { recursive: true });
+  writeFileSync(path.join(ARTIFACTS, file), data);
 }

@@ -6,6 +6,7 @@ import { PcaOrder } from '../../src/orders/entities/pca-order.entity.js';
 import { Patient } from '../../src/patients/entities/patient.entity.js';
 import { SyringeRelease } from '../../src/releases/entities/syringe-release.entity.js';
 import { Ward } from '../../src/wards/entities/ward.entity.js';
+import { SETTINGS } from './pca.js';
 
 export type FixtureBed = {
   bed: string;
@@ -89,27 +90,16 @@ export async function seedBoardWard(dataSource: DataSource, code: string, beds: 
           releasedAt: startedAt,
         }),
       );
-      const settings = {
-        drugId: 1,
-        concentrationPerMl: 1,
-        syringeVolumeMl: 50,
-        loadingDose: null,
-        demandDose: 1,
-        lockoutMinutes: 10,
-        basalRatePerHour: 0,
-        oneHourLimit: null,
-        fourHourLimit: 30,
-      };
       await manager.save(
         manager.create(BedsideCheck, {
           orderId: order.id,
           releaseId: release.id,
           status: 'matched',
           firstNurseId: 4,
-          firstSettings: settings,
+          firstSettings: SETTINGS,
           firstAt: startedAt,
           secondNurseId: 5,
-          secondSettings: settings,
+          secondSettings: SETTINGS,
           secondAt: startedAt,
           differences: [],
         }),

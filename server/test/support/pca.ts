@@ -1,10 +1,22 @@
-import request from 'supertest';
-import type { App } from 'supertest/types.js';
-import { DEMO_PASSWORD } from './test-app.js';
+import type {
+  CreateOrderRequest,
+  CreateReleaseRequest,
+  LoginRequest,
+  ObservationValues,
+  OrderFields,
+  PumpSettings,
+  WristbandEntry,
+} from '@lockstep/shared';
+import { DEMO_PASSWORD } from './demo-accounts.js';
 
-// Patient 1 (KB100231, born 1968-03-14) on Harbour; drug 1 morphine. Regimen after ASHP
-// Standardize 4 Safety, PCA standards (2023): 1 mg/mL, demand 1 mg, lockout 10 min.
-export const ORDER = {
+// The invented morphine PCA the API, crash and browser tests share: patient 1 (NOAH ACHTERBERG,
+// KB100231, born 1968-03-14) on Harbour; drug 1 morphine. Regimen after ASHP Standardize 4
+// Safety, PCA standards (2023): 1 mg/mL, demand 1 mg, lockout 10 min; the limits it meets are
+// the demo library's (invented). Plain data and types only, so tests that reach the app over HTTP
+// alone (the crash test, the browser tests by a relative path) can use it too.
+
+/** The regimen alone, as the order form's live check (`POST /api/orders/preview`) takes it. */
+export const REGIMEN: OrderFields = {
   patientId: 1,
   drugId: 1,
   concentrationPerMl: 1,
@@ -13,12 +25,20 @@ export const ORDER = {
   lockoutMinutes: 10,
   basalRatePerHour: 0,
   fourHourLimit: 30,
-  clinicianBolusDose: 2,
+};
+
+/** What the prescriber adds to sign: a review date, no soft-limit reasons, their password. */
+export const SIGNING: Pick<CreateOrderRequest, 'reviewDate' | 'overrides' | 'signature'> = {
   reviewDate: '2030-01-02',
   overrides: [],
   signature: { password: DEMO_PASSWORD },
 };
-export const SETTINGS = {
+
+/** The signed order, with a clinician bolus of up to 2 mg. */
+export const ORDER: CreateOrderRequest = { ...REGIMEN, clinicianBolusDose: 2, ...SIGNING };
+
+/** The pump programmed as ordered, with a 50 mL syringe. */
+export const SETTINGS: PumpSettings = {
   drugId: 1,
   concentrationPerMl: 1,
   syringeVolumeMl: 50,
@@ -29,8 +49,12 @@ export const SETTINGS = {
   oneHourLimit: null,
   fourHourLimit: 30,
 };
-export const IDENTITY = { patientMrn: 'KB100231', patientDateOfBirth: '1968-03-14' };
-export const RELEASE = {
+
+/** Patient 1's wristband. */
+export const IDENTITY: WristbandEntry = { patientMrn: 'KB100231', patientDateOfBirth: '1968-03-14' };
+
+/** A 50 mL syringe of the ordered concentration. */
+export const RELEASE: CreateReleaseRequest = {
   concentrationPerMl: 1,
   volumeMl: 50,
   batch: 'KB-77',
@@ -38,44 +62,21 @@ export const RELEASE = {
   preparedBy: 'Lin Park',
   checkedBy: 'Tomas Ortiz',
 };
-export const ROSA = { username: 'rosa.adeyemi', password: DEMO_PASSWORD };
 
-export type PcaTokens = { prescriber: string; pharmacist: string; nurse: string };
-const bearer = (token: string) => ({ Authorization: `Bearer ${token}` });
+/** The second nurse (bedside checks) and witness. */
+export const ROSA: LoginRequest = { username: 'rosa.adeyemi', password: DEMO_PASSWORD };
 
-/** Signed by the prescriber, verified by the pharmacist, with a ready 50 mL syringe. */
-export async function verifiedOrderWithSyringe(http: App, tokens: PcaTokens, order: object = ORDER): Promise<{ id: number; code: string }> {
-  const { body: created } = await request(http).post('/api/orders').set(bearer(tokens.prescriber)).send(order).expect(201);
-  await request(http)
-    .post(`/api/orders/${created.id}/verify`)
-    .set(bearer(tokens.pharmacist))
-    .send({ signature: { password: DEMO_PASSWORD } })
-    .expect(200);
-  const { body: release } = await request(http)
-    .post(`/api/orders/${created.id}/releases`)
-    .set(bearer(tokens.pharmacist))
-    .send(RELEASE)
-    .expect(201);
-  return { id: created.id, code: release.releaseCode };
-}
-
-/** As above, then started by a matching two-nurse bedside check (kai.mendes, then rosa.adeyemi). */
-export async function activeOrder(
-  http: App,
-  tokens: PcaTokens,
-  order: object = ORDER,
-  settings: object = SETTINGS,
-): Promise<{ id: number; code: string }> {
-  const started = await verifiedOrderWithSyringe(http, tokens, order);
-  const first = await request(http)
-    .post(`/api/orders/${started.id}/bedside-checks`)
-    .set(bearer(tokens.nurse))
-    .send({ ...IDENTITY, releaseCode: started.code, settings })
-    .expect(201);
-  await request(http)
-    .post(`/api/orders/${started.id}/bedside-checks/${first.body.id}/second`)
-    .set(bearer(tokens.nurse))
-    .send({ ...ROSA, settings })
-    .expect(200);
-  return started;
-}
+/**
+ * An unremarkable hourly observation of the running 50 mL syringe: it raises no flag, and its pump
+ * totals stay put, so any number of them can be written in any order.
+ */
+export const CALM_OBSERVATION: Omit<ObservationValues, 'at'> = {
+  painScore: 3,
+  sedationLevel: '1',
+  respiratoryRate: 14,
+  spo2: 97,
+  attempts: 4,
+  delivered: 3,
+  volumeInfusedMl: 3,
+  syringeRemainingMl: 47,
+};

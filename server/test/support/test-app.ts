@@ -6,8 +6,9 @@ import request from 'supertest';
 import type { App } from 'supertest/types.js';
 import { AppModule } from '../../src/app.module.js';
 import { configureApp } from '../../src/app.setup.js';
+import { DEMO_PASSWORD } from './demo-accounts.js';
 
-export const DEMO_PASSWORD = 'lockstep-demo';
+export { DEMO_PASSWORD, DEMO_USER_BY_ROLE } from './demo-accounts.js';
 
 export interface TestApp {
   app: INestApplication;
@@ -46,12 +47,3 @@ export async function createTestApp(): Promise<TestApp> {
     },
   };
 }
-
-/** Demo accounts by role, one each (see BRIEF §7). */
-export const DEMO_USER_BY_ROLE = {
-  prescriber: 'amara.osei',
-  pharmacist: 'lin.park',
-  nurse: 'kai.mendes',
-  charge_nurse: 'mei.tan',
-  admin: 'sam.rivera',
-} as const;
