@@ -14,7 +14,7 @@ export interface SeverityLook {
   icon: ComponentType<IconProps>;
 }
 
-// Severity is always icon + word + colour (BRIEF, "Look and feel"): the shapes differ as well as
+// Severity is always icon + word + colour (docs/design.md, "Screens and wording"): the shapes differ as well as
 // the colours, so a black-and-white print or a colour-blind reader loses nothing.
 export const SEVERITY_LOOK: Record<Severity, SeverityLook> = {
   urgent: { label: FLAG_SEVERITY_LABELS.urgent, color: 'red', textColor: 'red.8', icon: IconAlertOctagon },

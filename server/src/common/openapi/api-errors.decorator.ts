@@ -2,7 +2,7 @@ import { applyDecorators } from '@nestjs/common';
 import { ApiResponse } from '@nestjs/swagger';
 import { ApiErrorModel } from './api-error.model.js';
 
-/** What each error answer means in Lockstep (BRIEF §6); the body is always ApiErrorModel. */
+/** What each error answer means in Lockstep (docs/design.md, "API error conventions"); the body is always ApiErrorModel. */
 export const ERROR_DESCRIPTIONS = {
   400: 'Bad input: `errors` names each failing field',
   401: 'No valid sign-in token',
