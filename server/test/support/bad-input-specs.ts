@@ -15,9 +15,9 @@ const password: FieldSpec = { type: 'string', min: 1, max: 256 };
 const note1000: FieldSpec = { type: 'string', max: 1000, presence: 'optional' };
 
 const SIGNATURE: BodySpec = { password };
-const COLLEAGUE: BodySpec = { username: { type: 'string', min: 1, max: 64 }, password };
+const COLLEAGUE: BodySpec = { username: { type: 'string', min: 1, max: 64, trimmed: true }, password };
 
-export const LOGIN: BodySpec = { username: { type: 'string', min: 1, max: 64 }, password };
+export const LOGIN: BodySpec = { username: { type: 'string', min: 1, max: 64, trimmed: true }, password };
 
 export const ORDER_FIELDS: BodySpec = {
   patientId: id,
@@ -78,7 +78,7 @@ const releaseCode: FieldSpec = { type: 'string', min: 1, max: 16 };
 
 export const FIRST_CHECK: BodySpec = {
   patientMrn: { type: 'string', min: 1, max: 32 },
-  patientDateOfBirth: { type: 'iso8601' },
+  patientDateOfBirth: { type: 'date' },
   releaseCode,
   settings,
 };
@@ -109,7 +109,7 @@ export const SIGNOFF: BodySpec = {
 
 export const CREATE_DRAFT: BodySpec = { wardId: id, note: note1000 };
 const LIMITS: BodySpec = { hardMin: optionalAmount, softMin: optionalAmount, softMax: optionalAmount, hardMax: optionalAmount };
-const limits: FieldSpec = { type: 'object', fields: LIMITS, presence: 'optional' };
+const limits: FieldSpec = { type: 'object', fields: LIMITS, presence: 'partial' };
 const RULE: BodySpec = {
   drugId: id,
   concentrationPerMl: positive,
@@ -137,6 +137,8 @@ export const REPLACE_RULES: BodySpec = {
   },
 };
 export const SUBMIT_VERSION: BodySpec = { note: note1000 };
+/** The text fields of the CSV import's multipart body (the file is multer's); bad-input-uploads sends them as a form. */
+export const IMPORT_FIELDS: BodySpec = { wardId: id, note: note1000, dryRun: { type: 'boolean', presence: 'optional' } };
 
 export const CREATE_USER: BodySpec = {
   username: { type: 'string', min: 3, max: 64, pattern: /^[a-z0-9._-]+$/ },

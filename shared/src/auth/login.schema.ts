@@ -1,9 +1,17 @@
 import { z } from 'zod';
+import { atLeast, atMost, must } from '../api/request-rules.js';
 import { roleSchema } from './roles.js';
 
-export const loginSchema = z.object({
-  username: z.string().trim().min(1, 'Enter your username').max(64, 'Username is at most 64 characters'),
-  password: z.string().min(1, 'Enter your password').max(256, 'Password is at most 256 characters'),
+export const loginSchema = z.strictObject({
+  username: z
+    .string(must('username is required', 'username must be text'))
+    .trim()
+    .refine(atLeast(1), 'Enter your username')
+    .refine(atMost(64), 'Username is at most 64 characters'),
+  password: z
+    .string(must('password is required', 'password must be text'))
+    .refine(atLeast(1), 'Enter your password')
+    .refine(atMost(256), 'Password is at most 256 characters'),
 });
 export type LoginRequest = z.infer<typeof loginSchema>;
 

@@ -1,17 +1,9 @@
+import type { z } from 'zod';
 import type { Reconciliation } from '../dose/reconcile.js';
+import type { pumpSettingsSchema } from './bedside-requests.schema.js';
 
 /** What a nurse reads off the programmed pump and the syringe, entered independently by each nurse. */
-export type PumpSettings = {
-  drugId: number;
-  concentrationPerMl: number;
-  syringeVolumeMl: number;
-  loadingDose: number | null;
-  demandDose: number;
-  lockoutMinutes: number;
-  basalRatePerHour: number;
-  oneHourLimit: number | null;
-  fourHourLimit: number | null;
-};
+export type PumpSettings = z.infer<typeof pumpSettingsSchema>;
 
 export const PUMP_SETTING_FIELDS: readonly (keyof PumpSettings)[] = [
   'drugId',

@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import { doseUnitSchema } from '../drugs/drug.schema.js';
+import { isWhole, must } from '../api/request-rules.js';
+import { DOSE_UNITS, doseUnitSchema } from '../drugs/drug.schema.js';
 import { REGIMEN_FIELDS } from '../dose/regimen-fields.js';
 import type { RegimenField } from '../dose/types.js';
 
@@ -17,27 +18,65 @@ export const LIBRARY_STATUS_LABELS: Record<LibraryStatus, string> = {
 export const LIMIT_KEYS = ['hardMin', 'softMin', 'softMax', 'hardMax'] as const;
 export type LimitKey = (typeof LIMIT_KEYS)[number];
 
-const limitValue = z.number().finite().nonnegative().nullable().optional();
-export const limitsSchema = z.object({
-  hardMin: limitValue,
-  softMin: limitValue,
-  softMax: limitValue,
-  hardMax: limitValue,
+const limitValue = (key: LimitKey) =>
+  z
+    .number(must(`${key} must be a number`))
+    .min(0, `${key} must be 0 or more`)
+    .nullish();
+/** One regimen field's limits; a limit left out or null is not checked. */
+export const limitsSchema = z.strictObject({
+  hardMin: limitValue('hardMin'),
+  softMin: limitValue('softMin'),
+  softMax: limitValue('softMax'),
+  hardMax: limitValue('hardMax'),
 });
 
 export const regimenFieldSchema = z.enum(REGIMEN_FIELDS as [RegimenField, ...RegimenField[]]);
 
+export type LimitsInput = z.infer<typeof limitsSchema>;
+
+/** A field's limits may be left out (not checked), never null. */
+const fieldLimits = (field: RegimenField) => z.strictObject(limitsSchema.shape, must(`${field} must be an object`)).optional();
+
+/** Limits per regimen field; a field left out is not checked. */
+export const ruleLimitsSchema = z.strictObject(
+  {
+    loadingDose: fieldLimits('loadingDose'),
+    demandDose: fieldLimits('demandDose'),
+    lockoutMinutes: fieldLimits('lockoutMinutes'),
+    basalRatePerHour: fieldLimits('basalRatePerHour'),
+    oneHourLimit: fieldLimits('oneHourLimit'),
+    fourHourLimit: fieldLimits('fourHourLimit'),
+    clinicianBolusDose: fieldLimits('clinicianBolusDose'),
+  } satisfies Record<RegimenField, z.ZodType>,
+  must('limits is required', 'limits must be an object of parameter limits'),
+);
+export type RuleLimitsInput = z.infer<typeof ruleLimitsSchema>;
+
 /** A limit rule as written by a pharmacist (editor or CSV), before it has an id. */
-export const limitRuleInputSchema = z.object({
-  drugId: z.number().int().positive(),
-  concentrationPerMl: z.number().finite().positive('Concentration must be more than 0'),
-  doseUnit: doseUnitSchema,
-  perKg: z.boolean(),
-  limits: z.partialRecord(regimenFieldSchema, limitsSchema),
+export const limitRuleInputSchema = z.strictObject({
+  drugId: z
+    .number(must('drugId is required', 'drugId must be a whole number'))
+    .refine(isWhole, 'drugId must be a whole number')
+    .positive('drugId must be positive'),
+  concentrationPerMl: z
+    .number(must('concentrationPerMl is required', 'concentrationPerMl must be a number'))
+    .positive('Concentration must be more than 0'),
+  doseUnit: z.enum(DOSE_UNITS, must('doseUnit is required', 'doseUnit must be mg or mcg')),
+  perKg: z.boolean(must('perKg is required', 'perKg must be true or false')),
+  limits: ruleLimitsSchema,
 });
 export type LimitRuleInput = z.infer<typeof limitRuleInputSchema>;
 
-export const limitRuleSchema = limitRuleInputSchema.extend({
+// An answer's rule keeps its own, looser shape: a request's strictness and words are not an answer's.
+const answeredLimit = z.number().finite().nonnegative().nullable().optional();
+const answeredLimits = z.object({ hardMin: answeredLimit, softMin: answeredLimit, softMax: answeredLimit, hardMax: answeredLimit });
+export const limitRuleSchema = z.object({
+  drugId: z.number().int().positive(),
+  concentrationPerMl: z.number().finite().positive(),
+  doseUnit: doseUnitSchema,
+  perKg: z.boolean(),
+  limits: z.partialRecord(regimenFieldSchema, answeredLimits),
   id: z.number().int(),
   drugName: z.string(),
 });

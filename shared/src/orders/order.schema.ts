@@ -1,4 +1,6 @@
 import { z } from 'zod';
+import { calendarDaySchema, momentSchema } from '../api/date-time.js';
+import { atLeast, atMost, isPlainObject, listOf, must } from '../api/request-rules.js';
 import type { DoseUnit } from '../drugs/drug.schema.js';
 import type { Finding } from '../dose/types.js';
 import type { LimitRuleResponse } from '../library/library.schema.js';
@@ -16,22 +18,50 @@ export function regimenTypeOf(basalRatePerHour: number): RegimenType {
 }
 
 export const MIN_REASON_LENGTH = 10;
-const reason = z.string().trim().min(MIN_REASON_LENGTH, `Give a reason of at least ${MIN_REASON_LENGTH} characters`).max(1000);
 
-export const overrideSchema = z.object({ field: z.string().min(1), reason });
+/** A reason: trimmed, then at least MIN_REASON_LENGTH and at most 1,000 characters; the DTO's words for missing and too long. */
+export const reasonText = (required: string, wrongType: string, tooLong = 'The reason is at most 1,000 characters') =>
+  z
+    .string(must(required, wrongType))
+    .trim()
+    .refine(atLeast(MIN_REASON_LENGTH), `Give a reason of at least ${MIN_REASON_LENGTH} characters`)
+    .refine(atMost(1000), tooLong);
+
+export const overrideSchema = z.strictObject({
+  field: z.string(must('field is required', 'field must name the order field')).refine(atMost(64), 'field is at most 64 characters'),
+  reason: reasonText('Give a reason for going past the soft limit', 'reason must be text'),
+});
 export type Override = z.infer<typeof overrideSchema>;
 
-export const signatureSchema = z.object({ password: z.string().min(1, 'Enter your password to sign') });
+const signatureFields = {
+  password: z
+    .string(must('Enter your password to sign', 'signature.password must be text'))
+    .refine(atLeast(1), 'Enter your password to sign')
+    .refine(atMost(256), 'Password is at most 256 characters'),
+};
+const NOT_A_SIGNATURE = 'signature must be an object with your password';
+
+/** A signature is the signed-in person's password, typed again at the moment of signing. */
+export const signatureSchema = z.strictObject(signatureFields, must('signature is required: enter your password to sign', NOT_A_SIGNATURE));
+export type Signature = z.infer<typeof signatureSchema>;
 
 /** What a prescriber signs: the regimen, a review date, a reason for each soft finding, the password. */
 export const createOrderSchema = orderFieldsSchema.extend({
-  reviewDate: z.iso.date('Enter the review date'),
-  overrides: z.array(overrideSchema).max(20),
-  signature: signatureSchema,
+  reviewDate: calendarDaySchema('Enter the review date', 'Enter the review date (yyyy-mm-dd)'),
+  overrides: listOf(
+    overrideSchema,
+    {
+      required: 'overrides is required (an empty list when there are no soft findings)',
+      type: 'overrides must be a list of {field, reason}',
+      max: [20, 'At most 20 overrides'],
+    },
+    [[isPlainObject, 'Each override is {field, reason}']],
+  ),
+  signature: z.strictObject(signatureFields, must('Sign with your password', NOT_A_SIGNATURE)),
 });
 export type CreateOrderRequest = z.infer<typeof createOrderSchema>;
 
-export const reasonRequestSchema = z.object({ reason });
+export const reasonRequestSchema = z.strictObject({ reason: reasonText('Give a reason', 'reason must be text') });
 export type ReasonRequest = z.infer<typeof reasonRequestSchema>;
 
 export type OrderEventResponse = {
@@ -112,14 +142,26 @@ export const RELEASE_STATUS_LABELS: Record<ReleaseStatus, string> = { ready: 'Re
 
 export const USUAL_SYRINGE_ML = { min: 20, max: 60 } as const;
 
-export const createReleaseSchema = z.object({
-  concentrationPerMl: z.number().finite().positive(),
-  volumeMl: z.number().finite().positive().max(100, 'A PCA syringe holds at most 100 mL'),
-  batch: z.string().trim().min(1, 'Enter the batch').max(40),
-  expiresAt: z.iso.datetime({ offset: true, error: 'Enter the expiry date and time' }),
-  preparedBy: z.string().trim().min(1, 'Enter who prepared the syringe').max(120),
-  checkedBy: z.string().trim().min(1, 'Enter who checked the syringe').max(120),
-  overrideReason: reason.optional(),
+const name = (required: string, wrongType: string) =>
+  z.string(must(required, wrongType)).trim().refine(atLeast(1), required).refine(atMost(120), 'At most 120 characters');
+
+export const createReleaseSchema = z.strictObject({
+  concentrationPerMl: z
+    .number(must('Enter the concentration on the label', 'Concentration must be a number'))
+    .positive('Concentration must be more than 0'),
+  volumeMl: z
+    .number(must('Enter the syringe volume in mL', 'Volume must be a number of mL'))
+    .positive('Volume must be more than 0')
+    .max(100, 'A PCA syringe holds at most 100 mL'),
+  batch: z
+    .string(must('Enter the batch', 'Batch must be text'))
+    .trim()
+    .refine(atLeast(1), 'Enter the batch')
+    .refine(atMost(40), 'Batch is at most 40 characters'),
+  expiresAt: momentSchema('Enter the expiry', 'Enter the expiry as a date and time'),
+  preparedBy: name('Enter who prepared the syringe', 'preparedBy must be text'),
+  checkedBy: name('Enter who checked the syringe', 'checkedBy must be text'),
+  overrideReason: reasonText('overrideReason must be text', 'overrideReason must be text').nullish(),
 });
 export type CreateReleaseRequest = z.infer<typeof createReleaseSchema>;
 

@@ -11,7 +11,7 @@ import {
   MinLength,
   ValidateNested,
 } from 'class-validator';
-import { MIN_REASON_LENGTH } from '@lockstep/shared';
+import { MIN_REASON_LENGTH, type BolusRequest, type DiscontinueRequest, type SyringeChangeRequest } from '@lockstep/shared';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 import { Trim } from '../../common/validation/trim.decorator.js';
 import { ColleagueDto } from './bedside-check.dto.js';
@@ -27,7 +27,7 @@ class WitnessedDto {
   witness: ColleagueDto;
 }
 
-export class BolusDto extends WitnessedDto {
+export class BolusDto extends WitnessedDto implements BolusRequest {
   @ApiProperty({
     minimum: 0,
     exclusiveMinimum: true,
@@ -66,7 +66,7 @@ export class BolusDto extends WitnessedDto {
   overrideReason?: string;
 }
 
-export class SyringeChangeDto extends WitnessedDto {
+export class SyringeChangeDto extends WitnessedDto implements SyringeChangeRequest {
   /** The pump's volume infused from the old syringe. */
   @ApiProperty({ minimum: 0, example: 42, description: 'The pump’s volume infused from the old syringe, in mL' })
   @Min(0, { message: 'Volume infused cannot be negative' })
@@ -89,7 +89,7 @@ export class SyringeChangeDto extends WitnessedDto {
   newReleaseCode: string;
 }
 
-export class DiscontinueDto extends WitnessedDto {
+export class DiscontinueDto extends WitnessedDto implements DiscontinueRequest {
   @ApiProperty({
     minLength: MIN_REASON_LENGTH,
     maxLength: 1000,

@@ -1,10 +1,11 @@
 import { Type } from 'class-transformer';
-import { IsDefined, IsISO8601, IsObject, IsString, MaxLength, MinLength, ValidateNested } from 'class-validator';
+import { IsDefined, IsISO8601, IsObject, IsString, Matches, MaxLength, MinLength, ValidateNested } from 'class-validator';
+import type { ColleagueRequest, FirstCheckRequest, SecondCheckRequest } from '@lockstep/shared';
 import { ApiProperty } from '@nestjs/swagger';
 import { Trim } from '../../common/validation/trim.decorator.js';
 import { PumpSettingsDto } from './pump-settings.dto.js';
 
-export class FirstCheckDto {
+export class FirstCheckDto implements FirstCheckRequest {
   @ApiProperty({ minLength: 1, maxLength: 32, example: 'KB100231', description: 'MRN from the patient’s wristband' })
   @MaxLength(32, { message: 'MRN is at most 32 characters' })
   @MinLength(1, { message: 'Enter the MRN from the wristband' })
@@ -12,7 +13,14 @@ export class FirstCheckDto {
   @IsDefined({ message: 'Enter the MRN from the wristband' })
   patientMrn: string;
 
-  @ApiProperty({ format: 'date', example: '1968-03-14', description: 'Date of birth from the wristband (yyyy-mm-dd)' })
+  // ISO 8601 alone also takes 1968, 1968-W11-4 or a date and time: a wristband shows a day.
+  @ApiProperty({
+    format: 'date',
+    pattern: '^\\d{4}-\\d{2}-\\d{2}$',
+    example: '1968-03-14',
+    description: 'Date of birth from the wristband (yyyy-mm-dd)',
+  })
+  @Matches(/^\d{4}-\d{2}-\d{2}$/, { message: 'Enter the date of birth from the wristband (yyyy-mm-dd)' })
   @IsISO8601({ strict: true }, { message: 'Enter the date of birth from the wristband (yyyy-mm-dd)' })
   @IsDefined({ message: 'Enter the date of birth from the wristband' })
   patientDateOfBirth: string;
@@ -33,7 +41,7 @@ export class FirstCheckDto {
 }
 
 /** A colleague signs in on the same screen: username and password. */
-export class ColleagueDto {
+export class ColleagueDto implements ColleagueRequest {
   @ApiProperty({ minLength: 1, maxLength: 64, example: 'rosa.adeyemi', description: 'The colleague’s username' })
   @Trim()
   @MaxLength(64, { message: 'Username is at most 64 characters' })
@@ -50,7 +58,7 @@ export class ColleagueDto {
   password: string;
 }
 
-export class SecondCheckDto extends ColleagueDto {
+export class SecondCheckDto extends ColleagueDto implements SecondCheckRequest {
   @ApiProperty({ type: () => PumpSettingsDto, description: 'What the second nurse reads off the pump, independently' })
   @ValidateNested()
   @Type(() => PumpSettingsDto)

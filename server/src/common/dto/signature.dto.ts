@@ -1,9 +1,10 @@
 import { Type } from 'class-transformer';
 import { IsDefined, IsObject, IsString, MaxLength, MinLength, ValidateNested } from 'class-validator';
+import type { Signature, SignedRequest } from '@lockstep/shared';
 import { ApiProperty } from '@nestjs/swagger';
 
 /** A signature is the signed-in person's password, typed again at the moment of signing. */
-export class SignatureDto {
+export class SignatureDto implements Signature {
   @ApiProperty({ format: 'password', minLength: 1, maxLength: 256, description: 'The signed-in user’s own password, typed again to sign' })
   @MaxLength(256, { message: 'Password is at most 256 characters' })
   @MinLength(1, { message: 'Enter your password to sign' })
@@ -12,7 +13,7 @@ export class SignatureDto {
   password: string;
 }
 
-export class SignedRequestDto {
+export class SignedRequestDto implements SignedRequest {
   @ApiProperty({ type: () => SignatureDto })
   @ValidateNested()
   @Type(() => SignatureDto)

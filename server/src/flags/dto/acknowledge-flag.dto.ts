@@ -1,8 +1,9 @@
 import { IsDefined, IsString, MaxLength, MinLength } from 'class-validator';
+import type { AcknowledgeFlagRequest } from '@lockstep/shared';
 import { ApiProperty } from '@nestjs/swagger';
 import { Trim } from '../../common/validation/trim.decorator.js';
 
-export class AcknowledgeFlagDto {
+export class AcknowledgeFlagDto implements AcknowledgeFlagRequest {
   @ApiProperty({
     minLength: 5,
     maxLength: 1000,

@@ -1,8 +1,8 @@
 import { IsBoolean, IsDefined, IsIn, IsInt, IsOptional, IsPositive } from 'class-validator';
-import { SIGNOFF_ROLES, type SignoffRole } from '@lockstep/shared';
+import { SIGNOFF_ROLES, type CreateSignoffRequest, type SignoffRole } from '@lockstep/shared';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 
-export class CreateSignoffDto {
+export class CreateSignoffDto implements CreateSignoffRequest {
   @ApiProperty({ type: 'integer', minimum: 1, example: 2, description: 'The PCA order being confirmed' })
   @IsPositive({ message: 'orderId must be positive' })
   @IsInt({ message: 'orderId must be a whole number' })

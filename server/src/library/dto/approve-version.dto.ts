@@ -1,4 +1,5 @@
 import { IsDefined, IsISO8601, IsRFC3339 } from 'class-validator';
+import type { ApproveVersionRequest } from '@lockstep/shared';
 import { ApiProperty } from '@nestjs/swagger';
 import { SignedRequestDto } from '../../common/dto/signature.dto.js';
 
@@ -7,7 +8,7 @@ import { SignedRequestDto } from '../../common/dto/signature.dto.js';
  * submitted again while a second pharmacist has it open; naming the submission makes the server
  * refuse an approval of rules its signer never saw.
  */
-export class ApproveVersionDto extends SignedRequestDto {
+export class ApproveVersionDto extends SignedRequestDto implements ApproveVersionRequest {
   @ApiProperty({
     format: 'date-time',
     example: '2030-01-01T10:00:00.000Z',

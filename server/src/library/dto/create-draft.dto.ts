@@ -1,7 +1,8 @@
 import { IsDefined, IsInt, IsOptional, IsPositive, IsString, MaxLength } from 'class-validator';
+import type { CreateDraftRequest } from '@lockstep/shared';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 
-export class CreateDraftDto {
+export class CreateDraftDto implements CreateDraftRequest {
   @ApiProperty({ type: 'integer', minimum: 1, example: 1, description: 'The ward whose library the draft copies' })
   @IsPositive({ message: 'wardId must be positive' })
   @IsInt({ message: 'wardId must be a whole number' })

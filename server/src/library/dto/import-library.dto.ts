@@ -1,9 +1,10 @@
 import { Transform, Type } from 'class-transformer';
 import { IsBoolean, IsDefined, IsInt, IsOptional, IsPositive, IsString, MaxLength } from 'class-validator';
+import type { ImportLibraryFields } from '@lockstep/shared';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 
 /** The text fields of the multipart upload (the file itself arrives through multer). */
-export class ImportLibraryDto {
+export class ImportLibraryDto implements ImportLibraryFields {
   @ApiProperty({ type: 'integer', minimum: 1, example: 1 })
   @IsPositive({ message: 'wardId must be positive' })
   @IsInt({ message: 'wardId must be a whole number' })

@@ -1,11 +1,23 @@
 import { Type } from 'class-transformer';
-import { IsBoolean, IsDefined, IsIn, IsInt, IsNumber, IsObject, IsOptional, IsPositive, Min, ValidateNested } from 'class-validator';
-import { DOSE_UNITS, type DoseUnit, type LimitRuleInput } from '@lockstep/shared';
+import {
+  IsBoolean,
+  IsDefined,
+  IsIn,
+  IsInt,
+  IsNumber,
+  IsObject,
+  IsOptional,
+  IsPositive,
+  Min,
+  ValidateIf,
+  ValidateNested,
+} from 'class-validator';
+import { DOSE_UNITS, type DoseUnit, type LimitRuleInput, type LimitsInput, type RuleLimitsInput } from '@lockstep/shared';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 
 const finiteNumber = { allowNaN: false, allowInfinity: false };
 
-export class LimitsDto {
+export class LimitsDto implements LimitsInput {
   @ApiPropertyOptional({ type: 'number', nullable: true, minimum: 0, description: 'Below this the order is refused' })
   @Min(0, { message: 'hardMin must be 0 or more' })
   @IsNumber(finiteNumber, { message: 'hardMin must be a number' })
@@ -32,15 +44,17 @@ export class LimitsDto {
 }
 
 const limits = ApiPropertyOptional({ type: () => LimitsDto });
+// A field's limits may be left out (not checked); a null is refused, not stored as a field without limits.
+const unlessAbsent = ValidateIf((_object, value) => value !== undefined);
 
-export class RuleLimitsDto {
-  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() loadingDose?: LimitsDto;
-  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() demandDose?: LimitsDto;
-  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() lockoutMinutes?: LimitsDto;
-  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() basalRatePerHour?: LimitsDto;
-  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() oneHourLimit?: LimitsDto;
-  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() fourHourLimit?: LimitsDto;
-  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @IsOptional() clinicianBolusDose?: LimitsDto;
+export class RuleLimitsDto implements RuleLimitsInput {
+  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @unlessAbsent loadingDose?: LimitsDto;
+  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @unlessAbsent demandDose?: LimitsDto;
+  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @unlessAbsent lockoutMinutes?: LimitsDto;
+  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @unlessAbsent basalRatePerHour?: LimitsDto;
+  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @unlessAbsent oneHourLimit?: LimitsDto;
+  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @unlessAbsent fourHourLimit?: LimitsDto;
+  @limits @ValidateNested() @Type(() => LimitsDto) @IsObject() @unlessAbsent clinicianBolusDose?: LimitsDto;
 }
 
 export class LimitRuleInputDto implements LimitRuleInput {

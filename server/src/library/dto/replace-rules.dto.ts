@@ -1,9 +1,10 @@
 import { Type } from 'class-transformer';
 import { ArrayMaxSize, IsArray, IsDefined, IsObject, ValidateNested } from 'class-validator';
+import type { ReplaceRulesRequest } from '@lockstep/shared';
 import { ApiProperty } from '@nestjs/swagger';
 import { LimitRuleInputDto } from './limit-rule-input.dto.js';
 
-export class ReplaceRulesDto {
+export class ReplaceRulesDto implements ReplaceRulesRequest {
   @ValidateNested({ each: true })
   @Type(() => LimitRuleInputDto)
   // ValidateNested alone walks into a nested list ([[]]) and finds nothing wrong with it.

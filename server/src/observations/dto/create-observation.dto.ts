@@ -1,10 +1,10 @@
 import { IsDefined, IsIn, IsInt, IsISO8601, IsNumber, IsOptional, IsRFC3339, IsString, Max, MaxLength, Min } from 'class-validator';
-import { SEDATION_LEVELS, type SedationLevel } from '@lockstep/shared';
+import { SEDATION_LEVELS, type CreateObservationRequest, type SedationLevel } from '@lockstep/shared';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 
 const finite = { allowNaN: false, allowInfinity: false };
 
-export class CreateObservationDto {
+export class CreateObservationDto implements CreateObservationRequest {
   /** Defaults to now; never in the future, never before the PCA started. */
   // ISO 8601 alone lets through week dates (2030-W01-1) and compact forms that Date cannot read.
   @ApiPropertyOptional({

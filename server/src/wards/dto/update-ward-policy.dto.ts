@@ -1,4 +1,5 @@
-import { IsEmail, IsInt, IsNumber, Max, Min, ValidateIf } from 'class-validator';
+import { IS_EMAIL, isEmail, IsInt, IsNumber, Max, Min, ValidateBy, ValidateIf } from 'class-validator';
+import type { UpdateWardPolicyRequest } from '@lockstep/shared';
 import { ApiPropertyOptional } from '@nestjs/swagger';
 
 const finite = { allowNaN: false, allowInfinity: false };
@@ -6,9 +7,15 @@ const finite = { allowNaN: false, allowInfinity: false };
 // @IsOptional would, so it can never blank a column that must hold a value.
 const unlessAbsent = ValidateIf((_object, value) => value !== undefined);
 const emailOrEmpty = ValidateIf((_object, value) => value !== undefined && value !== '');
+/** @IsEmail(), except that text holding a lone surrogate, on which validator.js throws (a 500), is refused. */
+const IsEmailAddress = () =>
+  ValidateBy(
+    { name: IS_EMAIL, validator: { validate: (value) => typeof value === 'string' && !/\p{Surrogate}/u.test(value) && isEmail(value) } },
+    { message: 'Enter an e-mail address (or leave empty)' },
+  );
 
 /** Local monitoring and escalation settings; each change is the ward's own policy. */
-export class UpdateWardPolicyDto {
+export class UpdateWardPolicyDto implements UpdateWardPolicyRequest {
   @ApiPropertyOptional({
     type: 'integer',
     minimum: 15,
@@ -112,7 +119,7 @@ export class UpdateWardPolicyDto {
     example: 'pharmacy@hospital.example',
     description: 'Where Lockstep e-mails the ward’s pharmacy; empty for none',
   })
-  @IsEmail({}, { message: 'Enter an e-mail address (or leave empty)' })
+  @IsEmailAddress()
   @emailOrEmpty
   pharmacyEmail?: string;
 
@@ -121,7 +128,7 @@ export class UpdateWardPolicyDto {
     example: 'harbour.nic@hospital.example',
     description: 'Where Lockstep e-mails the nurse in charge (urgent flags among others); empty for none',
   })
-  @IsEmail({}, { message: 'Enter an e-mail address (or leave empty)' })
+  @IsEmailAddress()
   @emailOrEmpty
   nurseInChargeEmail?: string;
 }
