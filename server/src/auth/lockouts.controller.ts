@@ -1,11 +1,11 @@
 import { Controller, Delete, Get, HttpCode, Param } from '@nestjs/common';
 import { ApiOperation } from '@nestjs/swagger';
 import { ApiErrors } from '../common/openapi/api-errors.decorator.js';
-import type { Lockout } from '../common/throttling/password-attempts.service.js';
 import type { AuthUser } from './auth-user.js';
 import { CurrentUser } from './decorators/current-user.decorator.js';
 import { Roles } from './decorators/roles.decorator.js';
 import { LockoutsService } from './lockouts.service.js';
+import { type Lockout } from '@lockstep/shared';
 
 /** Usernames and addresses locked after wrong passwords, and the admin's unlock. */
 @Controller('auth/lockouts')

@@ -2,8 +2,9 @@ import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
 import { recordAudit } from '../audit/record-audit.js';
-import { type Lockout, PasswordAttemptsService } from '../common/throttling/password-attempts.service.js';
+import { PasswordAttemptsService } from '../common/throttling/password-attempts.service.js';
 import type { AuthUser } from './auth-user.js';
+import { type Lockout } from '@lockstep/shared';
 
 /** An admin's unlock of a username or address, audited like any other change. */
 @Injectable()

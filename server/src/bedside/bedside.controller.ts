@@ -1,5 +1,12 @@
 import { Body, Controller, HttpCode, Param, Post } from '@nestjs/common';
-import { BEDSIDE_ROLES, type FirstCheckResponse, type SecondCheckResponse } from '@lockstep/shared';
+import {
+  BEDSIDE_ROLES,
+  type BolusResponse,
+  type DiscontinueResponse,
+  type FirstCheckResponse,
+  type SecondCheckResponse,
+  type SyringeChangeResponse,
+} from '@lockstep/shared';
 import { ApiOperation } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
@@ -7,10 +14,10 @@ import { Roles } from '../auth/decorators/roles.decorator.js';
 import { ApiErrors } from '../common/openapi/api-errors.decorator.js';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
 import { BedsideChecksService } from './bedside-checks.service.js';
-import { type BolusResponse, BolusesService } from './boluses.service.js';
+import { BolusesService } from './boluses.service.js';
 import { BolusDto, DiscontinueDto, SyringeChangeDto } from './dto/bedside-actions.dto.js';
 import { FirstCheckDto, SecondCheckDto } from './dto/bedside-check.dto.js';
-import { type DiscontinueResponse, type SyringeChangeResponse, SyringeEndService } from './syringe-end.service.js';
+import { SyringeEndService } from './syringe-end.service.js';
 
 /** What nurses do at the bedside. Every route needs a second nurse's signature in the body. */
 @Controller('orders/:orderId')

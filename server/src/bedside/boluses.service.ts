@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
-import { BEDSIDE_ROLES, checkAgainstRule, formatDose } from '@lockstep/shared';
+import { BEDSIDE_ROLES, type BolusResponse, checkAgainstRule, formatDose } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { statusConflict } from '../orders/order-transitions.js';
 import { OrdersService } from '../orders/orders.service.js';
@@ -11,18 +11,6 @@ import { requireBedsideAction } from './bedside-state.js';
 import { ClinicianBolus } from './entities/clinician-bolus.entity.js';
 import { recordAudit } from '../audit/record-audit.js';
 import { fieldError } from '../common/errors/field-error.js';
-
-export type BolusResponse = {
-  id: number;
-  orderId: number;
-  amount: number;
-  doseUnit: string;
-  reason: string;
-  overrideReason: string | null;
-  givenByName: string;
-  witnessName: string;
-  at: string;
-};
 
 /** A clinician bolus: within the order's bolus dose and the ward rule, co-signed by a second nurse. */
 @Injectable()

@@ -1,7 +1,7 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource, EntityManager } from 'typeorm';
-import { BEDSIDE_ROLES, type OrderDetail, type ReconciliationResponse } from '@lockstep/shared';
+import { BEDSIDE_ROLES, type DiscontinueResponse, type ReconciliationResponse, type SyringeChangeResponse } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { FlagsService } from '../flags/flags.service.js';
 import { MailService } from '../mail/mail.service.js';
@@ -16,9 +16,6 @@ import { finishRunningSyringe } from './reconcile-release.js';
 import { discrepancyFlag, discrepancyMail, reconciliationAuditSummary } from './reconciliation-records.js';
 import { WardEventsService } from '../ward-events/ward-events.service.js';
 import { recordAudit } from '../audit/record-audit.js';
-
-export type SyringeChangeResponse = { reconciliation: ReconciliationResponse; newReleaseCode: string; nextStep: string };
-export type DiscontinueResponse = { order: OrderDetail; reconciliation: ReconciliationResponse };
 
 /** The end of a syringe: a change to a new one, or discontinuing the PCA. Both reconcile with witnessed waste. */
 @Injectable()

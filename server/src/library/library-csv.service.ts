@@ -5,14 +5,14 @@ import { stringify } from 'csv-stringify/sync';
 import type { DataSource } from 'typeorm';
 import {
   checkCsvHeader,
+  type CsvProblem,
   csvRowsFromRules,
   diffLibrary,
-  rulesFromCsvRecords,
-  validateLimitRules,
-  type CsvProblem,
-  type LibraryDiff,
+  type ImportPreview,
   type LibraryVersionDetail,
   type NamedRule,
+  rulesFromCsvRecords,
+  validateLimitRules,
 } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { fieldError, fieldErrors } from '../common/errors/field-error.js';
@@ -25,7 +25,6 @@ import { LibraryService } from './library.service.js';
 import { toNamedRule } from './named-rule.js';
 
 export type UploadedCsv = { originalname: string; mimetype: string; size: number; buffer: Buffer };
-export type ImportPreview = { rules: NamedRule[]; diff: LibraryDiff };
 
 /** CSV in and out of the dose-limit library (format: docs/library-csv.md). */
 @Injectable()

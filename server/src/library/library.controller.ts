@@ -16,7 +16,7 @@ import {
 } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
 import type { Response } from 'express';
-import { type LibraryDiff, type LibraryVersion, type LibraryVersionDetail, PHARMACY_ROLES } from '@lockstep/shared';
+import { type ImportPreview, type LibraryDiff, type LibraryVersion, type LibraryVersionDetail, PHARMACY_ROLES } from '@lockstep/shared';
 import { ApiBody, ApiConsumes, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiProduces } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
@@ -30,7 +30,7 @@ import { ImportLibraryDto } from './dto/import-library.dto.js';
 import { LibraryQueryDto } from './dto/library-query.dto.js';
 import { ReplaceRulesDto } from './dto/replace-rules.dto.js';
 import { SubmitVersionDto } from './dto/submit-version.dto.js';
-import { type ImportPreview, LibraryCsvService, type UploadedCsv } from './library-csv.service.js';
+import { LibraryCsvService, type UploadedCsv } from './library-csv.service.js';
 import { MAX_LIBRARY_CSV_BYTES } from './library-csv-limit.js';
 import { LibraryVersionsService } from './library-versions.service.js';
 import { LibraryService } from './library.service.js';

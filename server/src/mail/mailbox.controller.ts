@@ -4,8 +4,7 @@ import type { DataSource } from 'typeorm';
 import { ApiOperation } from '@nestjs/swagger';
 import { Roles } from '../auth/decorators/roles.decorator.js';
 import { MailboxMessage } from './entities/mailbox-message.entity.js';
-
-export type MailboxMessageResponse = { id: number; to: string; subject: string; text: string; at: string };
+import type { MailboxMessage as MailboxMessageResponse } from '@lockstep/shared';
 
 /** The local mailbox: what Lockstep has e-mailed, as the embedded catcher received it. */
 @Controller('dev/mailbox')

@@ -6,11 +6,10 @@ import { Roles } from '../auth/decorators/roles.decorator.js';
 import { ApiErrors } from '../common/openapi/api-errors.decorator.js';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
 import { CreateObservationDto } from './dto/create-observation.dto.js';
-import type { ObservationResponse } from './dto/observation-response.js';
 import { UsageQueryDto } from './dto/usage-query.dto.js';
 import { ObservationsService } from './observations.service.js';
-import { type UsageResponse, UsageService } from './usage.service.js';
-import { BEDSIDE_ROLES } from '@lockstep/shared';
+import { UsageService } from './usage.service.js';
+import { BEDSIDE_ROLES, type ObservationResponse, type RecordedObservation, type UsageResponse } from '@lockstep/shared';
 
 @Controller('orders/:orderId')
 export class ObservationsController {
@@ -27,7 +26,7 @@ export class ObservationsController {
     @Param('orderId', ParseIdPipe) orderId: number,
     @Body() body: CreateObservationDto,
     @CurrentUser() user: AuthUser,
-  ): Promise<ObservationResponse> {
+  ): Promise<RecordedObservation> {
     return this.observations.record(orderId, body, user);
   }
 

@@ -1,7 +1,14 @@
 import { ConflictException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, LessThanOrEqual, MoreThan } from 'typeorm';
-import { observationFlags, observationTimelineErrors, ORDER_STATUS_LABELS, type FlagDraft } from '@lockstep/shared';
+import {
+  type FlagDraft,
+  observationFlags,
+  type ObservationResponse,
+  observationTimelineErrors,
+  ORDER_STATUS_LABELS,
+  type RecordedObservation,
+} from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { Flag } from '../flags/entities/flag.entity.js';
 import { FlagsService } from '../flags/flags.service.js';
@@ -11,7 +18,7 @@ import { OrdersService } from '../orders/orders.service.js';
 import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
 import { wardPolicy } from '../wards/ward-policy.js';
 import type { CreateObservationDto } from './dto/create-observation.dto.js';
-import { type ObservationResponse, toObservationResponse } from './dto/observation-response.js';
+import { toObservationResponse } from './dto/observation-response.js';
 import { Observation } from './entities/observation.entity.js';
 import { observationAuditSummary } from './observation-audit.js';
 import { syringeLowMail, urgentFlagsMail } from './observation-notifications.js';
@@ -30,7 +37,7 @@ export class ObservationsService {
     private readonly events: WardEventsService,
   ) {}
 
-  async record(orderId: number, dto: CreateObservationDto, nurse: AuthUser): Promise<ObservationResponse> {
+  async record(orderId: number, dto: CreateObservationDto, nurse: AuthUser): Promise<RecordedObservation> {
     const { order, observation, raised } = await this.dataSource.transaction(async (manager) => {
       const found = await this.orders.load(manager, orderId);
       if (found.status !== 'active') {

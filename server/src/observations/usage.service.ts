@@ -1,18 +1,12 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, In, MoreThanOrEqual } from 'typeorm';
-import { projectedEmptyAt, usageSummary, type ObservationDue, type SyringeReading, type UsageSummary } from '@lockstep/shared';
+import { projectedEmptyAt, type SyringeReading, type UsageResponse, usageSummary } from '@lockstep/shared';
 import { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
 import { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
 import { OrdersService } from '../orders/orders.service.js';
 import { Observation } from './entities/observation.entity.js';
 import { nextObservationFor } from './next-observation.js';
-
-export type UsageResponse = UsageSummary & {
-  doseUnit: string;
-  projectedEmptyAt: string | null;
-  nextObservation: ObservationDue | null;
-};
 
 /** Hourly use, the 24-hour total, oral-morphine equivalent, projected syringe-empty time and the next observation due. */
 @Injectable()

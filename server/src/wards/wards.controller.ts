@@ -1,11 +1,11 @@
 import { Body, Controller, Get, Param, Patch } from '@nestjs/common';
-import type { Ward } from '@lockstep/shared';
+import { type Ward, type WardPolicySettings } from '@lockstep/shared';
 import { ApiOperation } from '@nestjs/swagger';
 import { Roles } from '../auth/decorators/roles.decorator.js';
 import { ApiErrors } from '../common/openapi/api-errors.decorator.js';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
 import { UpdateWardPolicyDto } from './dto/update-ward-policy.dto.js';
-import { type WardPolicySettings, WardsService } from './wards.service.js';
+import { WardsService } from './wards.service.js';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 

@@ -1,7 +1,7 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import type { Repository } from 'typeorm';
-import type { Ward as WardResponse, WardPolicy } from '@lockstep/shared';
+import { type Ward as WardResponse, type WardPolicySettings } from '@lockstep/shared';
 import type { UpdateWardPolicyDto } from './dto/update-ward-policy.dto.js';
 import { wardPolicy } from './ward-policy.js';
 import { toWardResponse } from './dto/ward-response.js';
@@ -36,5 +36,3 @@ export class WardsService {
     return this.policy(wardId);
   }
 }
-
-export type WardPolicySettings = WardPolicy & { pharmacyEmail: string; nurseInChargeEmail: string };

@@ -3,13 +3,14 @@ import { answer } from '../api/response-registry.js';
 import { REGIMEN_FIELDS } from '../dose/regimen-fields.js';
 import type { RegimenField } from '../dose/types.js';
 import type { LibraryDiff, NamedRule, RuleChange } from './diff-library.js';
-import { LIMIT_KEYS, libraryVersionDetailSchema, libraryVersionSchema, limitRuleInputSchema, limitRuleSchema } from './library.schema.js';
+import { LIMIT_KEYS, libraryVersionDetailSchema, libraryVersionSchema, limitRuleSchema } from './library.schema.js';
 
 answer('LimitRule', limitRuleSchema);
 answer('LibraryVersion', libraryVersionSchema);
 answer('LibraryVersionDetail', libraryVersionDetailSchema);
 
-export const namedRuleSchema: z.ZodType<NamedRule> = answer('NamedRule', limitRuleInputSchema.extend({ drugName: z.string() }));
+// An answered rule without its id: built from the answer's own (loose) shape, not the request's.
+export const namedRuleSchema: z.ZodType<NamedRule> = answer('NamedRule', limitRuleSchema.omit({ id: true }));
 
 const limitValue = z.number().nullable();
 const ruleChangeSchema: z.ZodType<RuleChange> = z.union([

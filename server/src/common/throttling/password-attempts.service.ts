@@ -4,13 +4,7 @@ import type { Env } from '../../config/env.validation.js';
 import { currentAddress } from '../request-context/request-context.js';
 import { FailureCounter } from './failure-counter.js';
 import { minutesText, TooManyAttemptsException } from './too-many-attempts.exception.js';
-
-export interface Lockout {
-  kind: 'username' | 'address';
-  key: string;
-  failures: number;
-  retryAfterSeconds: number;
-}
+import { type Lockout } from '@lockstep/shared';
 
 /**
  * Counts wrong passwords per username and per network address, for sign-in, signatures and a

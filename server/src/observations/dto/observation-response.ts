@@ -1,23 +1,5 @@
-import type { FlagDraft, SedationLevel } from '@lockstep/shared';
+import type { ObservationResponse } from '@lockstep/shared';
 import type { Observation } from '../entities/observation.entity.js';
-
-export type ObservationResponse = {
-  id: number;
-  orderId: number;
-  releaseId: number;
-  at: string;
-  painScore: number;
-  sedationLevel: SedationLevel;
-  respiratoryRate: number;
-  spo2: number;
-  attempts: number;
-  delivered: number;
-  volumeInfusedMl: number;
-  syringeRemainingMl: number;
-  note: string;
-  recordedByName: string;
-  flags?: (FlagDraft & { id: number })[];
-};
 
 /** Expects `recordedBy` loaded. */
 export function toObservationResponse(observation: Observation): ObservationResponse {

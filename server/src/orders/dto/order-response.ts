@@ -1,4 +1,5 @@
 import { deriveOrderValues, type ObservationDue, type OrderDetail, type OrderSummary, patientDisplayName } from '@lockstep/shared';
+import { toFlagResponse } from '../../flags/dto/flag-response.js';
 import type { Flag } from '../../flags/entities/flag.entity.js';
 import type { SyringeRelease } from '../../releases/entities/syringe-release.entity.js';
 import { toReleaseResponse } from '../../releases/dto/release-response.js';
@@ -69,17 +70,7 @@ export function toOrderDetail(
       reason: event.reason,
     })),
     releases: releases.map((release) => toReleaseResponse(release, order.doseUnit)),
-    flags: flags.map((flag) => ({
-      id: flag.id,
-      severity: flag.severity,
-      code: flag.code,
-      message: flag.message,
-      action: flag.action,
-      raisedAt: flag.raisedAt.toISOString(),
-      acknowledgedAt: flag.acknowledgedAt?.toISOString() ?? null,
-      acknowledgedByName: flag.acknowledgedBy?.displayName ?? null,
-      acknowledgeNote: flag.acknowledgeNote,
-    })),
+    flags: flags.map(toFlagResponse),
     startedAt: order.startedAt?.toISOString() ?? null,
     nextObservation,
   };
