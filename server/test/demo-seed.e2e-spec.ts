@@ -4,7 +4,7 @@ import path from 'node:path';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { HandoverBoard, OrderDetail, OrderSummary } from '@lockstep/shared';
+import { syringeState, type HandoverBoard, type OrderDetail, type OrderListEntry, type OrderSummary } from '@lockstep/shared';
 import { dataSourceOptions } from '../src/database/data-source-options.js';
 import { seedDemoDataIfEmpty } from '../src/database/seed/demo-seed.js';
 import { HandoverBoardService } from '../src/handover/handover-board.service.js';
@@ -60,6 +60,16 @@ describe('the demo hospital, caught in the middle of a shift', () => {
       expect(detail.nextObservation?.dueAt ?? null, `order ${row.orderId}`).toBe(row.nextObservation?.dueAt ?? null);
       expect(detail.nextObservation?.severity ?? null).toBe(row.nextObservation?.severity ?? null);
       if (row.status !== 'active') expect(detail.nextObservation).toBeNull();
+    }
+  });
+
+  it('the list of a ward’s orders says where each one’s syringes stand and when it is next observed, as its detail does', async () => {
+    const list = (await get('kai', `/api/orders?wardId=${HARBOUR}&status=verified,active`)).body as OrderListEntry[];
+    expect(list.map((entry) => entry.syringeState).sort()).toEqual(expect.arrayContaining(['ready', 'running']));
+    for (const entry of list) {
+      const detail = (await get('kai', `/api/orders/${entry.id}`)).body as OrderDetail;
+      expect(entry.syringeState, `order ${entry.id}`).toBe(syringeState(detail.releases));
+      expect(entry.nextObservation?.dueAt ?? null).toBe(detail.nextObservation?.dueAt ?? null);
     }
   });
 

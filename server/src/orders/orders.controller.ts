@@ -1,5 +1,5 @@
 import { Body, Controller, Get, HttpCode, Param, Post, Query } from '@nestjs/common';
-import { type OrderDetail, type OrderPreview, type OrderSummary, PHARMACY_ROLES, PRESCRIBING_ROLES } from '@lockstep/shared';
+import { type OrderDetail, type OrderListEntry, type OrderPreview, PHARMACY_ROLES, PRESCRIBING_ROLES } from '@lockstep/shared';
 import { ApiOperation } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
@@ -40,7 +40,7 @@ export class OrdersController {
 
   @ApiOperation({ summary: 'Orders, newest first' })
   @Get()
-  list(@Query() query: OrderQueryDto, @CurrentUser() user: AuthUser): Promise<OrderSummary[]> {
+  list(@Query() query: OrderQueryDto, @CurrentUser() user: AuthUser): Promise<OrderListEntry[]> {
     return this.orders.list(query, user);
   }
 

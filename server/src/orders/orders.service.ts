@@ -5,10 +5,11 @@ import {
   blockingFindings,
   type Finding,
   type OrderDetail,
+  type OrderListEntry,
   type OrderStatus,
-  type OrderSummary,
   reasonsToKeep,
   regimenTypeOf,
+  syringeState,
   unexplainedSoftFindings,
 } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
@@ -21,6 +22,7 @@ import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
 import { UsersService } from '../users/users.service.js';
 import type { CreateOrderDto } from './dto/create-order.dto.js';
 import { ORDER_SUMMARY_RELATIONS, toOrderDetail, toOrderSummary } from './dto/order-response.js';
+import { storedDate } from '../database/stored-date.js';
 import type { OrderQueryDto } from './dto/order-query.dto.js';
 import { OrderEvent } from './entities/order-event.entity.js';
 import { PcaOrder } from './entities/pca-order.entity.js';
@@ -128,8 +130,10 @@ export class OrdersService {
     return this.get(id);
   }
 
-  async list(query: OrderQueryDto, user: AuthUser): Promise<OrderSummary[]> {
-    const orders = await this.dataSource.manager.find(PcaOrder, {
+  /** Newest first, each with its syringe state and next observation: three queries however many orders. */
+  async list(query: OrderQueryDto, user: AuthUser, now = new Date()): Promise<OrderListEntry[]> {
+    const manager = this.dataSource.manager;
+    const orders = await manager.find(PcaOrder, {
       where: {
         ...(query.status ? { status: In(query.status) } : {}),
         ...(query.patientId ? { patientId: query.patientId } : {}),
@@ -140,7 +144,31 @@ export class OrdersService {
       order: { id: 'DESC' },
       take: 1000,
     });
-    return orders.map(toOrderSummary);
+    const ids = orders.map((order) => order.id);
+    const running = orders.filter((order) => order.status === 'active').map((order) => order.id);
+    const [releases, latest] = await Promise.all([
+      ids.length === 0
+        ? []
+        : manager.find(SyringeRelease, {
+            select: { id: true, orderId: true, status: true },
+            where: { orderId: In(ids), status: In(['ready', 'in_use']) },
+          }),
+      running.length === 0
+        ? []
+        : manager
+            .createQueryBuilder(Observation, 'o')
+            .select('o.orderId', 'orderId')
+            .addSelect('max(o.at)', 'at')
+            .where('o.orderId IN (:...running)', { running })
+            .groupBy('o.orderId')
+            .getRawMany<{ orderId: number; at: string }>(),
+    ]);
+    const lastObservedAt = new Map(latest.map((row) => [Number(row.orderId), storedDate(row.at)]));
+    return orders.map((order) => ({
+      ...toOrderSummary(order),
+      syringeState: syringeState(releases.filter((release) => release.orderId === order.id)),
+      nextObservation: nextObservationFor(order, lastObservedAt.get(order.id) ?? null, now),
+    }));
   }
 
   async get(id: number): Promise<OrderDetail> {

@@ -12,6 +12,7 @@ import {
   type FlagResponse,
   type OrderDetail,
   type OrderEventResponse,
+  type OrderListEntry,
   type OrderSummary,
   type SyringeReleaseResponse,
 } from './order.schema.js';
@@ -117,6 +118,11 @@ const summaryShape = {
 };
 
 export const orderSummarySchema: z.ZodType<OrderSummary> = answer('OrderSummary', z.object(summaryShape));
+
+export const orderListEntrySchema: z.ZodType<OrderListEntry> = answer(
+  'OrderListEntry',
+  z.object({ ...summaryShape, syringeState: z.enum(['running', 'ready', 'none']), nextObservation: observationDueSchema.nullable() }),
+);
 
 export const orderDetailSchema: z.ZodType<OrderDetail> = answer(
   'OrderDetail',

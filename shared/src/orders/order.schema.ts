@@ -5,6 +5,7 @@ import type { DoseUnit } from '../drugs/drug.schema.js';
 import type { Finding } from '../dose/types.js';
 import type { LimitRuleResponse } from '../library/library.schema.js';
 import type { ObservationDue } from '../observations/observation-due.js';
+import type { SyringeState } from '../bedside/bedside-actions.js';
 import { orderFieldsSchema, type OrderDerivedValues } from './order-fields.schema.js';
 import type { OrderStatus } from './order-status.js';
 
@@ -105,6 +106,12 @@ export type OrderSummary = {
   statusChangedAt: string;
   statusReason: string | null;
 };
+
+/**
+ * An order as `GET /api/orders` lists it: the summary, where its syringes stand and when its next
+ * observation is due, so a ward's list of PCAs is one request.
+ */
+export type OrderListEntry = OrderSummary & { syringeState: SyringeState; nextObservation: ObservationDue | null };
 
 export type OrderDetail = OrderSummary & {
   derived: OrderDerivedValues;
