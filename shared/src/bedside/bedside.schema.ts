@@ -1,32 +1,28 @@
 import type { z } from 'zod';
 import type { Reconciliation } from '../dose/reconcile.js';
+import { REGIMEN_FIELD_LABELS, REGIMEN_FIELDS } from '../dose/regimen-fields.js';
+import type { RegimenField } from '../dose/types.js';
 import type { pumpSettingsSchema } from './bedside-requests.schema.js';
 
 /** What a nurse reads off the programmed pump and the syringe, entered independently by each nurse. */
 export type PumpSettings = z.infer<typeof pumpSettingsSchema>;
 
+/** What the pump holds of the order: the drug, concentration and syringe, then the regimen fields a pump is set with (every one but the clinician bolus, which a nurse gives). */
 export const PUMP_SETTING_FIELDS: readonly (keyof PumpSettings)[] = [
   'drugId',
   'concentrationPerMl',
   'syringeVolumeMl',
-  'loadingDose',
-  'demandDose',
-  'lockoutMinutes',
-  'basalRatePerHour',
-  'oneHourLimit',
-  'fourHourLimit',
+  ...REGIMEN_FIELDS.filter((field): field is Exclude<RegimenField, 'clinicianBolusDose'> => field !== 'clinicianBolusDose'),
 ];
 
 export const PUMP_SETTING_LABELS: Record<keyof PumpSettings, string> = {
   drugId: 'Drug',
   concentrationPerMl: 'Concentration',
   syringeVolumeMl: 'Syringe volume',
-  loadingDose: 'Loading dose',
-  demandDose: 'Demand dose',
-  lockoutMinutes: 'Lockout',
-  basalRatePerHour: 'Basal rate',
-  oneHourLimit: '1-hour limit',
-  fourHourLimit: '4-hour limit',
+  ...(Object.fromEntries(PUMP_SETTING_FIELDS.slice(3).map((field) => [field, REGIMEN_FIELD_LABELS[field as RegimenField]])) as Record<
+    Exclude<RegimenField, 'clinicianBolusDose'>,
+    string
+  >),
 };
 
 export type CheckStatus = 'awaiting_second' | 'matched' | 'mismatch';

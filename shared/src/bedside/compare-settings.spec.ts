@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { PumpSettings } from './bedside.schema.js';
+import { PUMP_SETTING_FIELDS, PUMP_SETTING_LABELS, type PumpSettings } from './bedside.schema.js';
 import { compareSettings } from './compare-settings.js';
 
 // An independent double-check compares each clinician's reading of the pump with the order, at
@@ -41,5 +41,20 @@ describe('compareSettings', () => {
       field: 'fourHourLimit',
       differs: 'first',
     });
+  });
+
+  it('compares every setting a pump holds: drug, concentration, syringe, then the regimen fields but the clinician bolus', () => {
+    expect(PUMP_SETTING_FIELDS).toEqual([
+      'drugId',
+      'concentrationPerMl',
+      'syringeVolumeMl',
+      'loadingDose',
+      'demandDose',
+      'lockoutMinutes',
+      'basalRatePerHour',
+      'oneHourLimit',
+      'fourHourLimit',
+    ]);
+    expect(PUMP_SETTING_LABELS.lockoutMinutes).toBe('Lockout');
   });
 });
