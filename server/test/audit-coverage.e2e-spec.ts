@@ -1,6 +1,7 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { AuditAction, AuditPage } from '@lockstep/shared';
+import { type AnswerCheck, answerChecker } from './support/answer-checker.js';
 import { appRoutes, routeKey } from './support/app-routes.js';
 import { IDENTITY, ORDER, RELEASE, ROSA, SETTINGS } from './support/pca.js';
 import { createTestApp, DEMO_PASSWORD, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
@@ -22,11 +23,13 @@ describe('every state-changing route writes its audit event', () => {
   let t: TestApp;
   const tokens: Record<string, string> = {};
   const exercised = new Set<string>();
+  let checkAnswer: AnswerCheck;
 
   beforeAll(async () => {
     t = await createTestApp();
     for (const [role, username] of Object.entries(DEMO_USER_BY_ROLE)) tokens[role] = await t.tokenFor(username);
     tokens.secondPharmacist = await t.tokenFor('tomas.ortiz');
+    checkAnswer = (await answerChecker(t.http)).check;
   });
   afterAll(() => t.close());
 
@@ -47,6 +50,8 @@ describe('every state-changing route writes its audit event', () => {
     const before = await latestEvent();
     const response = await request(t.http)[method](url).set('Authorization', `Bearer ${tokens[as]}`).send(body);
     expect(response.status, `${method} ${url}: ${JSON.stringify(response.body)}`).toBe(status);
+    // Each write answer fits its schema in the API document (written from the shared zod schemas).
+    expect(checkAnswer(method, route, status, response.body)).toBeNull();
     const after = await latestEvent();
     expect(after.id, `${method} ${url} wrote no audit event`).toBeGreaterThan(before?.id ?? 0);
     expect(after.action).toBe(action);
