@@ -49,7 +49,7 @@ describe('placing order errors on the form', () => {
     const { signature: _signature, ...unsigned } = orderRequest(fields, values, ['demandDose'], '');
     expect(unsigned.overrides).toEqual([{ field: 'demandDose', reason: 'too short' }]);
     expect(unsignedOrderErrors(unsigned, ['demandDose'])).toEqual({
-      reviewDate: 'Enter the review date',
+      reviewDate: 'Enter the review date (yyyy-mm-dd)',
       'reasons.demandDose': 'Give a reason of at least 10 characters',
     });
     const fixed = orderRequest(

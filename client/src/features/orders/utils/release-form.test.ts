@@ -53,7 +53,7 @@ describe('syringe release form', () => {
     expect(errors).toEqual({
       volumeMl: 'Enter a number more than 0',
       batch: 'Enter the batch',
-      expiresAt: 'Enter the expiry date and time',
+      expiresAt: 'Enter the expiry as a date and time',
       preparedBy: 'Enter who prepared the syringe',
       checkedBy: 'Enter who checked the syringe',
     });
