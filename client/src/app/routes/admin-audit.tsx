@@ -1,8 +1,8 @@
 import { useMemo } from 'react';
 import { useQuery } from '@tanstack/react-query';
 import { AuditSearchScreen } from '@/features/audit/components/audit-search-screen';
-import { usersQueryOptions } from '@/features/users/api/get-users';
-import { useWards } from '@/features/wards/api/get-wards';
+import { usersQueryOptions } from '@/api/users/get-users';
+import { useWards } from '@/api/wards/get-wards';
 import { usePageTitle } from '@/hooks/use-page-title';
 import { useCurrentUser } from '@/lib/auth/use-session';
 

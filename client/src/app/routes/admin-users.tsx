@@ -1,5 +1,5 @@
 import { UsersScreen } from '@/features/users/components/users-screen';
-import { useWards } from '@/features/wards/api/get-wards';
+import { useWards } from '@/api/wards/get-wards';
 import { usePageTitle } from '@/hooks/use-page-title';
 
 export function Component() {

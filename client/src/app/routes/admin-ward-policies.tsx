@@ -1,12 +1,11 @@
 import { useSearchParams } from 'react-router-dom';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { WardPolicyScreen } from '@/features/ward-policy/components/ward-policy-screen';
-import { useWards } from '@/features/wards/api/get-wards';
+import { useWards } from '@/api/wards/get-wards';
 import { usePageTitle } from '@/hooks/use-page-title';
 
 export function Component() {
   usePageTitle('Ward policies');
-  // The ward list is loaded here so the ward-policy feature needs no other feature.
   const wards = useWards();
   const [search, setSearch] = useSearchParams();
   const wardId = Number(search.get('ward'));

@@ -1,13 +1,13 @@
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { BedsideCheckScreen } from '@/features/bedside/components/bedside-check-screen';
-import { useDrugs } from '@/features/drugs/api/get-drugs';
+import { useDrugs } from '@/api/drugs/get-drugs';
 import { usePageTitle } from '@/hooks/use-page-title';
 import { NotAnOrder, useBedsideOrderId } from './bedside-order-id';
 
 export function Component() {
   usePageTitle('Bedside check');
   const orderId = useBedsideOrderId();
-  // The drug choices of each nurse's entry; loaded here so the bedside feature needs no other feature.
+  // The drug choices of each nurse's entry.
   const drugs = useDrugs();
   if (orderId === null) return <NotAnOrder />;
   if (drugs.isError) return <QueryErrorAlert title="Drugs could not be loaded" error={drugs.error} onRetry={() => void drugs.refetch()} />;

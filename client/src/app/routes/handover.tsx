@@ -1,5 +1,5 @@
 import { HandoverScreen } from '@/features/handover/components/handover-screen';
-import { useWards } from '@/features/wards/api/get-wards';
+import { useWards } from '@/api/wards/get-wards';
 import { usePageTitle } from '@/hooks/use-page-title';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { useCurrentUser } from '@/lib/auth/use-session';

@@ -1,13 +1,13 @@
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
-import { useDrugs } from '@/features/drugs/api/get-drugs';
+import { useDrugs } from '@/api/drugs/get-drugs';
 import { LibraryScreen } from '@/features/library/components/library-screen';
-import { useWards } from '@/features/wards/api/get-wards';
+import { useWards } from '@/api/wards/get-wards';
 import { usePageTitle } from '@/hooks/use-page-title';
 
 export function Component() {
   usePageTitle('Dose-limit library');
   const wards = useWards();
-  // The rules editor's drug choices; loaded here so the library feature needs no other feature.
+  // The rules editor's drug choices.
   const drugs = useDrugs();
   if (wards.isError) return <QueryErrorAlert title="Wards could not be loaded" error={wards.error} onRetry={() => void wards.refetch()} />;
   return <LibraryScreen wards={wards.data ?? []} wardsLoading={wards.isPending} drugs={drugs.data ?? []} />;

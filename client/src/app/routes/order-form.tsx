@@ -1,16 +1,15 @@
 import { Anchor, Group, Stack, Text, Title } from '@mantine/core';
-import { useQuery } from '@tanstack/react-query';
 import { IconArrowLeft } from '@tabler/icons-react';
 import { Link, useParams } from 'react-router-dom';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';
-import { useActiveLibrary } from '@/features/library/api/get-active-library';
+import { useActiveLibrary } from '@/api/library/get-active-library';
 import { useOrder } from '@/features/orders/api/get-order';
 import { OrderFormScreen } from '@/features/orders/components/order-form-screen';
-import { patientQueryOptions } from '@/features/patients/api/get-patient';
+import { usePatient } from '@/api/patients/get-patient';
 import { PatientBanner } from '@/features/patients/components/patient-banner';
-import { useWards } from '@/features/wards/api/get-wards';
+import { useWards } from '@/api/wards/get-wards';
 import { usePageTitle } from '@/hooks/use-page-title';
 import { isApiRequestError } from '@/lib/api-error';
 
@@ -20,14 +19,14 @@ function positiveId(value: string | undefined): number | null {
 }
 
 // New order (/patients/:patientId/orders/new) and revision (/orders/:orderId/revise) share the
-// form; this route gathers what it needs from the patients, library and wards features.
+// form; this route gathers the order being revised, the patient, the ward's active library and the wards.
 export function Component() {
   const params = useParams();
   const revisingId = positiveId(params.orderId);
   usePageTitle(revisingId ? 'Revise PCA order' : 'New PCA order');
   const revising = useOrder(revisingId);
   const patientId = revisingId ? (revising.data?.patientId ?? null) : positiveId(params.patientId);
-  const patient = useQuery({ ...patientQueryOptions(patientId ?? 0), enabled: patientId !== null });
+  const patient = usePatient(patientId);
   const wards = useWards();
   const library = useActiveLibrary(patient.data?.wardId ?? null);
 

@@ -1,10 +1,9 @@
 import { Skeleton } from '@mantine/core';
-import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
 import { OrderStory } from '@/features/audit/components/order-story';
 import { useOrder } from '@/features/orders/api/get-order';
 import { OrderDetailScreen } from '@/features/orders/components/order-detail-screen';
-import { patientQueryOptions } from '@/features/patients/api/get-patient';
+import { usePatient } from '@/api/patients/get-patient';
 import { PatientBanner } from '@/features/patients/components/patient-banner';
 import { usePageTitle } from '@/hooks/use-page-title';
 import { NotAnOrder } from './not-an-order';
@@ -13,10 +12,10 @@ export function Component() {
   usePageTitle('PCA order');
   const id = Number(useParams().orderId);
   const valid = Number.isInteger(id) && id > 0;
-  // The screen reads the order from the same cache; the patient comes from the patients feature.
+  // The screen reads the order from the same cache; the story rereads whenever the order does.
   const order = useOrder(valid ? id : null);
   const patientId = order.data?.patientId ?? null;
-  const patient = useQuery({ ...patientQueryOptions(patientId ?? 0), enabled: patientId !== null });
+  const patient = usePatient(patientId);
   if (!valid) return <NotAnOrder />;
   return (
     <OrderDetailScreen

@@ -1,9 +1,8 @@
 import { Skeleton } from '@mantine/core';
-import { useQuery } from '@tanstack/react-query';
 import { useParams } from 'react-router-dom';
 import { useOrder } from '@/features/orders/api/get-order';
 import { VerificationScreen } from '@/features/orders/components/verification-screen';
-import { patientQueryOptions } from '@/features/patients/api/get-patient';
+import { usePatient } from '@/api/patients/get-patient';
 import { PatientBanner } from '@/features/patients/components/patient-banner';
 import { usePageTitle } from '@/hooks/use-page-title';
 import { NotAnOrder } from './not-an-order';
@@ -14,7 +13,7 @@ export function Component() {
   const valid = Number.isInteger(id) && id > 0;
   const order = useOrder(valid ? id : null);
   const patientId = order.data?.patientId ?? null;
-  const patient = useQuery({ ...patientQueryOptions(patientId ?? 0), enabled: patientId !== null });
+  const patient = usePatient(patientId);
   if (!valid) return <NotAnOrder />;
   return (
     <VerificationScreen

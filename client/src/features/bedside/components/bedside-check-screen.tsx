@@ -1,9 +1,9 @@
 import { type Drug, syringeState } from '@lockstep/shared';
+import { usePatient } from '@/api/patients/get-patient';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/lib/auth/use-session';
 import type { BedsideOrder } from '../api/bedside-schemas';
-import { useCheckPatient } from '../api/get-check-patient';
 import { CHECK_STEPS, useBedsideCheck } from '../hooks/use-bedside-check';
 import { BedsideOrderPage } from './bedside-order-page';
 import { BedsideSteps, type BedsideStep } from './bedside-steps';
@@ -53,7 +53,9 @@ function notCheckable(order: BedsideOrder) {
 
 function BedsideCheck({ order, drugs }: { order: BedsideOrder; drugs: readonly Drug[] }) {
   const user = useCurrentUser();
-  const patient = useCheckPatient(order.patientId);
+  // For comparing the wristband as soon as it is typed; never shown: the identifiers must come
+  // from the wristband, not from the screen.
+  const patient = usePatient(order.patientId);
   const check = useBedsideCheck();
   const { state } = check;
 

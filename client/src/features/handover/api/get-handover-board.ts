@@ -1,8 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { HandoverBoard } from '@lockstep/shared';
+import { handoverBoardSchema, type HandoverBoard } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { handoverKeys } from './handover-keys';
-import { handoverBoardSchema } from './handover-schemas';
 
 // The stream announces every change on the ward, but nothing announces the clock: an
 // observation becomes overdue with no event. A slow poll keeps "overdue" honest between events.

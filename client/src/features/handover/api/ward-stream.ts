@@ -1,6 +1,6 @@
 import { createParser, type EventSourceMessage } from 'eventsource-parser';
 import { appApiConfig, type ApiClientConfig } from '@/lib/api-client';
-import { wardChangeSchema } from './handover-schemas';
+import { wardChangeSchema } from './ward-change';
 
 /** What the board says about its live connection. */
 export type StreamStatus = 'connecting' | 'live' | 'reconnecting' | 'stopped';

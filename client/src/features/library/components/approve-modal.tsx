@@ -4,7 +4,7 @@ import type { LibraryVersion } from '@lockstep/shared';
 import { SignatureModal } from '@/components/dialogs/signature-modal';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
-import { useApproveVersion } from '../api/approve-version';
+import { useApproveVersion } from '@/api/library/approve-version';
 
 export interface ApproveModalProps {
   version: LibraryVersion;

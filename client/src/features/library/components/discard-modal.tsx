@@ -3,7 +3,7 @@ import { IconAlertCircle, IconTrash } from '@tabler/icons-react';
 import type { LibraryVersion } from '@lockstep/shared';
 import { errorMessage } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
-import { useDiscardVersion } from '../api/discard-version';
+import { useDiscardVersion } from '@/api/library/discard-version';
 
 export interface DiscardModalProps {
   version: LibraryVersion;

@@ -1,11 +1,10 @@
 import { useState } from 'react';
 import { Alert, Button, Group, List, Loader, Modal, Progress, Select, Stack, Text, Textarea } from '@mantine/core';
 import { IconAlertCircle, IconFilePlus } from '@tabler/icons-react';
-import type { LibraryVersionDetail, Ward } from '@lockstep/shared';
+import type { ImportPreview, LibraryVersionDetail, Ward } from '@lockstep/shared';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
-import { useImportLibrary, usePreviewLibraryImport } from '../api/import-library';
-import type { ImportPreview } from '../api/library-schemas';
+import { useImportLibrary, usePreviewLibraryImport } from '@/api/library/import-library';
 import { importProblemRows, type ImportProblemRow } from '../utils/import-problems';
 import { ImportDropzone } from './import-dropzone';
 import { ImportPreviewView } from './import-preview-view';

@@ -1,6 +1,6 @@
 import { Alert, Stack, Tabs, Text } from '@mantine/core';
 import { IconCircleCheck } from '@tabler/icons-react';
-import type { ImportPreview } from '../api/library-schemas';
+import type { ImportPreview } from '@lockstep/shared';
 import { LibraryDiffView } from './library-diff-view';
 import { RulesTable } from './rules-table';
 

@@ -5,7 +5,7 @@ import { IconAlertCircle, IconDeviceFloppy, IconPlus } from '@tabler/icons-react
 import type { Drug, LibraryVersionDetail } from '@lockstep/shared';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
-import { useReplaceRules } from '../api/replace-rules';
+import { useReplaceRules } from '@/api/library/replace-rules';
 import { emptyRuleForm, placeRuleErrors, readRulesForm, ruleToForm, type RulesFormValues } from '../utils/rule-form';
 import { RuleFieldset } from './rule-fieldset';
 

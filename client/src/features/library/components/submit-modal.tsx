@@ -4,7 +4,7 @@ import { IconAlertCircle, IconSend } from '@tabler/icons-react';
 import type { LibraryVersion } from '@lockstep/shared';
 import { errorMessage } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
-import { useSubmitVersion } from '../api/submit-version';
+import { useSubmitVersion } from '@/api/library/submit-version';
 
 const NOTE_MAX = 1000;
 

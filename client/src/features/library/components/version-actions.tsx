@@ -4,8 +4,8 @@ import { IconArrowBackUp, IconDownload, IconEdit, IconInfoCircle, IconSend, Icon
 import { canDoLibraryAction, type Drug, type LibraryVersionAction, type LibraryVersionDetail } from '@lockstep/shared';
 import { errorMessage } from '@/lib/api-error';
 import { notifyError, notifySuccess } from '@/lib/notify';
-import { useExportLibraryVersion } from '../api/export-library-version';
-import { useWithdrawVersion } from '../api/withdraw-version';
+import { useExportLibraryVersion } from '@/api/library/export-library-version';
+import { useWithdrawVersion } from '@/api/library/withdraw-version';
 import { ApproveModal } from './approve-modal';
 import { DiscardModal } from './discard-modal';
 import { RulesEditorDrawer } from './rules-editor-drawer';

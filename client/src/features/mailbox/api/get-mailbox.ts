@@ -1,17 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { z } from 'zod';
+import { mailboxMessageSchema, type MailboxMessage } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { mailboxKeys } from './mailbox-keys';
-
-// The server types this answer locally (a development aid, not part of the shared contract).
-export const mailboxMessageSchema = z.object({
-  id: z.number().int(),
-  to: z.string(),
-  subject: z.string(),
-  text: z.string(),
-  at: z.string(),
-});
-export type MailboxMessage = z.infer<typeof mailboxMessageSchema>;
 
 /** What Lockstep has e-mailed, newest first, as the local mail catcher received it. */
 export function getMailbox(signal?: AbortSignal): Promise<MailboxMessage[]> {

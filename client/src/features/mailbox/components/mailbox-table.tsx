@@ -2,7 +2,7 @@ import { Fragment, useState } from 'react';
 import { ActionIcon, Code, EmptyState, Skeleton, Table, VisuallyHidden } from '@mantine/core';
 import { IconChevronDown, IconChevronRight, IconMailOff } from '@tabler/icons-react';
 import { formatDateTime } from '@/utils/format-date';
-import type { MailboxMessage } from '../api/get-mailbox';
+import type { MailboxMessage } from '@lockstep/shared';
 
 export interface MailboxTableProps {
   messages: MailboxMessage[];

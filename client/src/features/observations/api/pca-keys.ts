@@ -11,5 +11,4 @@ export const pcaKeys = {
   usages: (orderId: number) => [...pcaKeys.order(orderId), 'usage'] as const,
   usage: (orderId: number, hours: number) => [...pcaKeys.usages(orderId), hours] as const,
   patientOrders: (patientId: number) => [...pcaKeys.all, 'patient', patientId] as const,
-  wardPolicy: (wardId: number) => [...pcaKeys.all, 'ward-policy', wardId] as const,
 };

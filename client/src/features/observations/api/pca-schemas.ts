@@ -13,7 +13,6 @@ import {
   type SedationLevel,
   type SyringeReleaseResponse,
   type UsageSummary,
-  type WardPolicy,
 } from '@lockstep/shared';
 
 // The shared package types these answers without schemas, so the PCA page checks them here,
@@ -129,12 +128,4 @@ export const usageSchema: z.ZodType<PcaUsage> = z.object({
   doseUnit: z.string(),
   projectedEmptyAt: z.string().nullable(),
   nextObservation: observationDueSchema.nullable(),
-});
-
-/** The ward's escalation thresholds, for warnings while an observation is typed. */
-export type WardThresholds = Pick<WardPolicy, 'respiratoryRateThreshold' | 'spo2Threshold'>;
-
-export const wardThresholdsSchema: z.ZodType<WardThresholds> = z.object({
-  respiratoryRateThreshold: z.number(),
-  spo2Threshold: z.number(),
 });

@@ -5,7 +5,7 @@ import { IconAlertCircle, IconDeviceFloppy } from '@tabler/icons-react';
 import { applyServerErrors } from '@/lib/form-errors';
 import { formatDateTime } from '@/utils/format-date';
 import { useRecordObservation } from '../api/record-observation';
-import type { Observation, PcaOrder, RecordedObservation, WardThresholds } from '../api/pca-schemas';
+import type { Observation, PcaOrder, RecordedObservation } from '../api/pca-schemas';
 import { formatClock } from '@/utils/clock';
 import {
   emptyObservationForm,
@@ -19,12 +19,13 @@ import {
 import { observationWarnings } from '../utils/observation-warnings';
 import { ObservationNumberInput } from './observation-number-input';
 import { SedationField } from './sedation-field';
-import { type PumpTotalField } from '@lockstep/shared';
+import type { PumpTotalField, WardPolicy } from '@lockstep/shared';
 
 export interface ObservationFormProps {
   order: PcaOrder;
   observations: readonly Observation[];
-  thresholds: WardThresholds | undefined;
+  /** The ward's breathing thresholds (from its policy), to warn before an urgent flag is raised. */
+  thresholds: Pick<WardPolicy, 'respiratoryRateThreshold' | 'spo2Threshold'> | undefined;
   onSaved: (observation: RecordedObservation) => void;
 }
 

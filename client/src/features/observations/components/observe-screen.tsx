@@ -3,13 +3,13 @@ import { Alert, Anchor, Group, Paper, Skeleton, Stack, Text, Title } from '@mant
 import { IconArrowLeft, IconInfoCircle } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
 import { DECISION_SUPPORT_CAUTION, drugAndConcentration, formatDose, ORDER_STATUS_LABELS } from '@lockstep/shared';
+import { useWardPolicy } from '@/api/wards/get-ward-policy';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { isApiRequestError } from '@/lib/api-error';
 import { formatDateTime } from '@/utils/format-date';
 import { useObservations } from '../api/get-observations';
 import { usePcaOrder } from '../api/get-pca-order';
-import { useWardThresholds } from '../api/get-ward-thresholds';
 import type { Observation, PcaOrder, RecordedObservation } from '../api/pca-schemas';
 import { ObservationForm } from './observation-form';
 import { ObservationSaved } from './observation-saved';
@@ -43,7 +43,7 @@ function Context({ order, last }: { order: PcaOrder; last: Observation | undefin
 export function ObserveScreen({ orderId }: { orderId: number }) {
   const orderQuery = usePcaOrder(orderId);
   const observations = useObservations(orderId);
-  const thresholds = useWardThresholds(orderQuery.data?.wardId);
+  const policy = useWardPolicy(orderQuery.data?.wardId ?? null);
   const [saved, setSaved] = useState<RecordedObservation | null>(null);
   // A new key gives "Record another" an empty form.
   const [formKey, setFormKey] = useState(0);
@@ -83,7 +83,7 @@ export function ObserveScreen({ orderId }: { orderId: number }) {
               : 'No syringe is running: finish the bedside check first.'}
           </Alert>
         ) : (
-          <ObservationForm key={formKey} order={order} observations={observations.data} thresholds={thresholds.data} onSaved={setSaved} />
+          <ObservationForm key={formKey} order={order} observations={observations.data} thresholds={policy.data} onSaved={setSaved} />
         )}
       </>
     );

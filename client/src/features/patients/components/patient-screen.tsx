@@ -5,7 +5,7 @@ import { Link } from 'react-router-dom';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { isApiRequestError } from '@/lib/api-error';
-import { usePatient } from '../api/get-patient';
+import { usePatient } from '@/api/patients/get-patient';
 import { PatientDetails } from './patient-details';
 
 function BackLink() {

@@ -4,7 +4,7 @@ import { useNavigate, useSearchParams } from 'react-router-dom';
 import type { Ward } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
-import { usePatients } from '../api/get-patients';
+import { usePatients } from '@/api/patients/get-patients';
 import { matchesPatientSearch } from '../utils/patient-format';
 import { ALL_WARDS, PatientFilters } from './patient-filters';
 import { PatientsTable } from './patients-table';

@@ -7,7 +7,7 @@ import { createUserSchema, PASSWORD_MIN_LENGTH, type Ward } from '@lockstep/shar
 import { isApiRequestError } from '@/lib/api-error';
 import { applyServerErrors } from '@/lib/form-errors';
 import { notifySuccess } from '@/lib/notify';
-import { useCreateUser } from '../api/create-user';
+import { useCreateUser } from '@/api/users/create-user';
 import { createUserFormSchema, emptyCreateUserForm, type CreateUserFormValues } from '../utils/user-form-schemas';
 import { RoleSelect } from './role-select';
 import { WardMultiSelect } from './ward-multi-select';

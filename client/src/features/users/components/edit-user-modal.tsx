@@ -6,7 +6,7 @@ import { zod4Resolver } from 'mantine-form-zod-resolver';
 import { PASSWORD_MIN_LENGTH, type User, type Ward } from '@lockstep/shared';
 import { applyServerErrors } from '@/lib/form-errors';
 import { notifySuccess } from '@/lib/notify';
-import { useUpdateUser } from '../api/update-user';
+import { useUpdateUser } from '@/api/users/update-user';
 import { editFormValuesOf, editUserFormSchema, userChanges, type EditUserFormValues } from '../utils/user-form-schemas';
 import { RoleSelect } from './role-select';
 import { WardMultiSelect } from './ward-multi-select';

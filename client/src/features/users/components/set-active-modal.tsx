@@ -3,7 +3,7 @@ import { IconAlertCircle } from '@tabler/icons-react';
 import type { User } from '@lockstep/shared';
 import { errorMessage } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
-import { useUpdateUser } from '../api/update-user';
+import { useUpdateUser } from '@/api/users/update-user';
 
 export interface SetActiveModalProps {
   user: User;

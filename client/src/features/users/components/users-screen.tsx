@@ -4,7 +4,7 @@ import { IconPlus, IconSearch } from '@tabler/icons-react';
 import type { Role, User, Ward } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { useCurrentUser } from '@/lib/auth/use-session';
-import { useUsers } from '../api/get-users';
+import { useUsers } from '@/api/users/get-users';
 import { filterUsers } from '../utils/filter-users';
 import { CreateUserModal } from './create-user-modal';
 import { EditUserModal } from './edit-user-modal';

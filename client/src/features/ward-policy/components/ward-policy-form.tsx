@@ -4,8 +4,8 @@ import { useForm } from '@mantine/form';
 import { IconAlertCircle, IconDeviceFloppy } from '@tabler/icons-react';
 import { applyServerErrors } from '@/lib/form-errors';
 import { notifySuccess } from '@/lib/notify';
-import { useUpdateWardPolicy } from '../api/update-ward-policy';
-import type { WardPolicySettings } from '../api/ward-policy-schemas';
+import type { WardPolicySettings } from '@lockstep/shared';
+import { useUpdateWardPolicy } from '@/api/wards/update-ward-policy';
 import {
   POLICY_EMAIL_FIELDS,
   POLICY_NUMBER_FIELDS,

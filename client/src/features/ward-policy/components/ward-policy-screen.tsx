@@ -2,7 +2,7 @@ import { Alert, Select, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { IconAdjustments } from '@tabler/icons-react';
 import { LOCAL_POLICY_CAUTION, type Ward } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
-import { useWardPolicy } from '../api/get-ward-policy';
+import { useWardPolicy } from '@/api/wards/get-ward-policy';
 import { WardPolicyChanges } from './ward-policy-changes';
 import { WardPolicyForm } from './ward-policy-form';
 

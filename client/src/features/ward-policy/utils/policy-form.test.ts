@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_WARD_POLICY } from '@lockstep/shared';
-import type { WardPolicySettings } from '../api/ward-policy-schemas';
+import { DEFAULT_WARD_POLICY, type WardPolicySettings } from '@lockstep/shared';
 import {
   emailError,
   formatPolicyValue,

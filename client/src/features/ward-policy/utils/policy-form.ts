@@ -1,6 +1,5 @@
-import { DEFAULT_WARD_POLICY, formatDose, type WardPolicy } from '@lockstep/shared';
+import { DEFAULT_WARD_POLICY, formatDose, type UpdateWardPolicyRequest, type WardPolicy, type WardPolicySettings } from '@lockstep/shared';
 import { readNumber, type NumberFieldValue } from '@/lib/number-input';
-import type { WardPolicySettings, WardPolicyUpdate } from '../api/ward-policy-schemas';
 
 export type PolicyNumberKey = keyof WardPolicy;
 export type PolicyEmailKey = 'pharmacyEmail' | 'nurseInChargeEmail';
@@ -184,8 +183,8 @@ export function validatePolicyForm(values: PolicyFormValues): Partial<Record<key
 }
 
 /** Only what differs from the saved policy, as the PATCH body; call after the form is valid. */
-export function policyChanges(values: PolicyFormValues, saved: WardPolicySettings): WardPolicyUpdate {
-  const changes: WardPolicyUpdate = {};
+export function policyChanges(values: PolicyFormValues, saved: WardPolicySettings): UpdateWardPolicyRequest {
+  const changes: UpdateWardPolicyRequest = {};
   for (const { key } of POLICY_NUMBER_FIELDS) {
     const value = readNumber(values[key]);
     if (typeof value === 'number' && value !== saved[key]) changes[key] = value;

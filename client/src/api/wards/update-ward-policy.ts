@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { wardPolicySettingsSchema, type UpdateWardPolicyRequest, type WardPolicySettings } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { auditKeys } from '@/api/audit/audit-keys';
-import { wardPolicyKeys } from './ward-policy-keys';
-import { wardPolicySettingsSchema, type WardPolicySettings, type WardPolicyUpdate } from './ward-policy-schemas';
+import { wardKeys } from './ward-keys';
 
 export interface UpdateWardPolicyVariables {
   wardId: number;
-  changes: WardPolicyUpdate;
+  changes: UpdateWardPolicyRequest;
 }
 
 /** Admin only. Any subset of the values; a 400 names each field out of range. */
@@ -19,7 +19,7 @@ export function useUpdateWardPolicy() {
   return useMutation({
     mutationFn: updateWardPolicy,
     onSuccess: (policy, { wardId }) => {
-      queryClient.setQueryData(wardPolicyKeys.detail(wardId), policy);
+      queryClient.setQueryData(wardKeys.policy(wardId), policy);
       // The change is now in the audit trail ("Recent changes" below the form).
       void queryClient.invalidateQueries({ queryKey: auditKeys.all });
     },

@@ -14,6 +14,7 @@ export function patientQueryOptions(id: number) {
   });
 }
 
-export function usePatient(id: number) {
-  return useQuery(patientQueryOptions(id));
+/** `null` waits (e.g. for the order that names the patient). */
+export function usePatient(id: number | null) {
+  return useQuery({ ...patientQueryOptions(id ?? 0), enabled: id !== null });
 }

@@ -1,15 +1,16 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { libraryVersionDetailSchema, type LibraryVersionDetail } from '@lockstep/shared';
+import {
+  importPreviewSchema,
+  libraryVersionDetailSchema,
+  type ImportLibraryFields,
+  type ImportPreview,
+  type LibraryVersionDetail,
+} from '@lockstep/shared';
 import { apiUpload } from '@/lib/api-transfer';
 import { libraryKeys } from './library-keys';
-import { importPreviewSchema, type ImportPreview } from './library-schemas';
 
-export interface ImportLibraryInput {
-  wardId: number;
-  file: File;
-  note?: string;
-  onProgress?: (fraction: number) => void;
-}
+/** The multipart body's text fields (`dryRun` is set by the call) and the file. */
+export type ImportLibraryInput = Pick<ImportLibraryFields, 'wardId' | 'note'> & { file: File; onProgress?: (fraction: number) => void };
 
 function importForm({ wardId, file, note }: ImportLibraryInput, dryRun: boolean): FormData {
   const form = new FormData();

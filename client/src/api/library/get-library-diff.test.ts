@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { versionDiffSchema } from './library-schemas';
+import { versionDiffSchema } from '@lockstep/shared';
 
 // The shape the server sends for GET /library/versions/:id/diff (demo values).
 const answer = {

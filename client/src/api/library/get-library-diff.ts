@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { versionDiffSchema, type VersionDiff } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { libraryKeys } from './library-keys';
-import { versionDiffSchema, type VersionDiff } from './library-schemas';
 
 /** The version's changes against the ward's active version. */
 export function getLibraryDiff(id: number, signal?: AbortSignal): Promise<VersionDiff> {

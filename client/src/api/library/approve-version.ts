@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { libraryVersionDetailSchema, type LibraryVersionDetail } from '@lockstep/shared';
+import { libraryVersionDetailSchema, type ApproveVersionRequest, type LibraryVersionDetail } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { isApiRequestError } from '@/lib/api-error';
 import { libraryKeys } from './library-keys';
@@ -17,9 +17,10 @@ export interface ApproveVersionVariables {
  * was withdrawn and submitted again after it was opened.
  */
 export function approveVersion({ versionId, submittedAt, password }: ApproveVersionVariables): Promise<LibraryVersionDetail> {
+  const body: ApproveVersionRequest = { signature: { password }, submittedAt };
   return apiRequest(`/library/versions/${versionId}/approve`, {
     method: 'POST',
-    body: { signature: { password }, submittedAt },
+    body,
     schema: libraryVersionDetailSchema,
     signed: true,
   });

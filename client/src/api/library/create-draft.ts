@@ -1,16 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { libraryVersionDetailSchema, type LibraryVersionDetail } from '@lockstep/shared';
+import { libraryVersionDetailSchema, type CreateDraftRequest, type LibraryVersionDetail } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { libraryKeys } from './library-keys';
 
-export interface CreateDraftInput {
-  wardId: number;
-  note?: string;
-}
-
 /** A new draft, copied from the ward's active version. 409 while the ward has an open version. */
-export function createDraft(input: CreateDraftInput): Promise<LibraryVersionDetail> {
-  return apiRequest('/library/versions', { method: 'POST', body: input, schema: libraryVersionDetailSchema });
+export function createDraft(request: CreateDraftRequest): Promise<LibraryVersionDetail> {
+  return apiRequest('/library/versions', { method: 'POST', body: request, schema: libraryVersionDetailSchema });
 }
 
 export function useCreateDraft() {

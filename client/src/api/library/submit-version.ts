@@ -1,12 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { libraryVersionDetailSchema, type LibraryVersionDetail } from '@lockstep/shared';
+import { libraryVersionDetailSchema, type LibraryVersionDetail, type SubmitVersionRequest } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { libraryKeys } from './library-keys';
 
-export interface SubmitVersionVariables {
-  versionId: number;
-  note?: string;
-}
+export type SubmitVersionVariables = SubmitVersionRequest & { versionId: number };
 
 /** Draft → awaiting approval. */
 export function submitVersion({ versionId, note }: SubmitVersionVariables): Promise<LibraryVersionDetail> {

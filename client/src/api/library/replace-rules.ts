@@ -1,12 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { libraryVersionDetailSchema, type LibraryVersionDetail, type LimitRuleInput } from '@lockstep/shared';
+import { libraryVersionDetailSchema, type LibraryVersionDetail, type ReplaceRulesRequest } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { libraryKeys } from './library-keys';
 
-export interface ReplaceRulesVariables {
-  versionId: number;
-  rules: LimitRuleInput[];
-}
+export type ReplaceRulesVariables = ReplaceRulesRequest & { versionId: number };
 
 /** Draft only. A 400 names each field as `rules.<index>.…`. */
 export function replaceRules({ versionId, rules }: ReplaceRulesVariables): Promise<LibraryVersionDetail> {

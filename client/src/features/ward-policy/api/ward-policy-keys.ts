@@ -1,5 +1,0 @@
-export const wardPolicyKeys = {
-  all: ['ward-policy'] as const,
-  details: () => [...wardPolicyKeys.all, 'detail'] as const,
-  detail: (wardId: number) => [...wardPolicyKeys.details(), wardId] as const,
-};

@@ -1,4 +1,0 @@
-export const wardKeys = {
-  all: ['wards'] as const,
-  lists: () => [...wardKeys.all, 'list'] as const,
-};
