@@ -5,7 +5,7 @@ import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { PageLoader } from '@/components/ui/page-loader';
 import { paths } from '@/config/paths';
 import { useActiveLibrary } from '@/api/library/get-active-library';
-import { useOrder } from '@/features/orders/api/get-order';
+import { useOrder } from '@/api/orders/get-order';
 import { OrderFormScreen } from '@/features/orders/components/order-form-screen';
 import { usePatient } from '@/api/patients/get-patient';
 import { PatientBanner } from '@/features/patients/components/patient-banner';

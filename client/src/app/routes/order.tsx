@@ -1,7 +1,7 @@
 import { Skeleton } from '@mantine/core';
 import { useParams } from 'react-router-dom';
 import { OrderStory } from '@/features/audit/components/order-story';
-import { useOrder } from '@/features/orders/api/get-order';
+import { useOrder } from '@/api/orders/get-order';
 import { OrderDetailScreen } from '@/features/orders/components/order-detail-screen';
 import { usePatient } from '@/api/patients/get-patient';
 import { PatientBanner } from '@/features/patients/components/patient-banner';

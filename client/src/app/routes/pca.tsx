@@ -1,5 +1,5 @@
 import { useSearchParams } from 'react-router-dom';
-import { USAGE_WINDOWS, type UsageWindow } from '@/features/observations/api/get-usage';
+import { USAGE_WINDOWS, type UsageWindow } from '@/features/observations/utils/usage-windows';
 import { PcaScreen } from '@/features/observations/components/pca-screen';
 import { usePageTitle } from '@/hooks/use-page-title';
 import { NotAPcaOrder, usePcaOrderId } from './pca-order-id';

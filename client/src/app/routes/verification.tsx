@@ -1,6 +1,6 @@
 import { Skeleton } from '@mantine/core';
 import { useParams } from 'react-router-dom';
-import { useOrder } from '@/features/orders/api/get-order';
+import { useOrder } from '@/api/orders/get-order';
 import { VerificationScreen } from '@/features/orders/components/verification-screen';
 import { usePatient } from '@/api/patients/get-patient';
 import { PatientBanner } from '@/features/patients/components/patient-banner';

@@ -3,7 +3,7 @@ import { EmptyState, Group, SegmentedControl, Skeleton, Stack, Text, Timeline } 
 import { IconHistoryOff } from '@tabler/icons-react';
 import { auditActionLabel } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
-import { useOrderAudit } from '@/api/audit/get-order-audit';
+import { useOrderAudit } from '@/api/orders/get-order-audit';
 import { AuditEventByline } from '@/components/audit/audit-event-byline';
 import { AuditSummaryList } from '@/components/audit/audit-summary-list';
 

@@ -1,9 +1,8 @@
-import { type Drug, syringeState } from '@lockstep/shared';
+import { type Drug, syringeState, type OrderDetail } from '@lockstep/shared';
 import { usePatient } from '@/api/patients/get-patient';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/lib/auth/use-session';
-import type { BedsideOrder } from '../api/bedside-schemas';
 import { CHECK_STEPS, useBedsideCheck } from '../hooks/use-bedside-check';
 import { BedsideOrderPage } from './bedside-order-page';
 import { BedsideSteps, type BedsideStep } from './bedside-steps';
@@ -29,7 +28,7 @@ export function BedsideCheckScreen({ orderId, drugs }: BedsideCheckScreenProps) 
 }
 
 /** Why this order cannot be checked now, or null when it can. Only asked before a check begins. */
-function notCheckable(order: BedsideOrder) {
+function notCheckable(order: OrderDetail) {
   if (order.status !== 'verified' && order.status !== 'active') {
     return <OrderNotice title="No bedside check for this order">This order is not waiting for a bedside check.</OrderNotice>;
   }
@@ -51,7 +50,7 @@ function notCheckable(order: BedsideOrder) {
   return null;
 }
 
-function BedsideCheck({ order, drugs }: { order: BedsideOrder; drugs: readonly Drug[] }) {
+function BedsideCheck({ order, drugs }: { order: OrderDetail; drugs: readonly Drug[] }) {
   const user = useCurrentUser();
   // For comparing the wristband as soon as it is typed; never shown: the identifiers must come
   // from the wristband, not from the screen.

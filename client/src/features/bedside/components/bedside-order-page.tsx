@@ -2,11 +2,11 @@ import type { ReactNode } from 'react';
 import { Anchor, Group, Skeleton, Stack, Title } from '@mantine/core';
 import { IconArrowLeft } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
+import type { OrderDetail } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { isApiRequestError } from '@/lib/api-error';
-import { useBedsideOrder } from '../api/get-bedside-order';
-import type { BedsideOrder } from '../api/bedside-schemas';
+import { useOrder } from '@/api/orders/get-order';
 import { BedsideCaution } from './bedside-caution';
 import { OrderContext } from './order-context';
 
@@ -15,12 +15,13 @@ export interface BedsideOrderPageProps {
   title: string;
   /** Shows the ordered regimen beside the patient (never during a bedside check). */
   showRegimen?: boolean;
-  children: (order: BedsideOrder) => ReactNode;
+  children: (order: OrderDetail) => ReactNode;
 }
 
 /** The frame of every bedside task: the way back, the task's name, whose order it is, the caution. */
 export function BedsideOrderPage({ orderId, title, showRegimen, children }: BedsideOrderPageProps) {
-  const orderQuery = useBedsideOrder(orderId);
+  // At the bedside the status and syringe must be current: always ask again on opening.
+  const orderQuery = useOrder(orderId, { staleTime: 0 });
   const order = orderQuery.data;
 
   let body: ReactNode;

@@ -5,7 +5,9 @@ import { type ObservationDue, syringeState, type SyringeState, type Ward } from 
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { useNow } from '@/hooks/use-now';
-import { BEDSIDE_STATUSES, useBedsideOrderDetails, useBedsideOrders } from '../api/get-bedside-orders';
+import { useOrderDetails } from '@/api/orders/get-order';
+import { useOrders } from '@/api/orders/get-orders';
+import { BEDSIDE_STATUSES } from '../utils/bedside-statuses';
 import { byWardAndBed } from '../utils/order-sort';
 import { BedsideCaution } from './bedside-caution';
 import { BedsideOrdersTable } from './bedside-orders-table';
@@ -29,9 +31,13 @@ export function BedsideOrdersScreen({ wards, wardsLoading }: BedsideOrdersScreen
   const wardId = positiveId(searchParams.get('ward'));
   const patientId = positiveId(searchParams.get('patient'));
 
-  const ordersQuery = useBedsideOrders({ wardId, patientId, status: BEDSIDE_STATUSES });
+  const ordersQuery = useOrders({ wardId, patientId, status: BEDSIDE_STATUSES });
   const orders = useMemo(() => [...(ordersQuery.data ?? [])].sort(byWardAndBed), [ordersQuery.data]);
-  const details = useBedsideOrderDetails(orders.map((order) => order.id));
+  // Each order's syringes: the list answer does not say whether one is ready or running.
+  const details = useOrderDetails(
+    orders.map((order) => order.id),
+    { staleTime: 0 },
+  );
   const now = useNow(30_000);
   const syringes = new Map<number, SyringeState>();
   const nextObservations = new Map<number, ObservationDue>();

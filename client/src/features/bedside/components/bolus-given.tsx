@@ -1,13 +1,11 @@
 import { DataList, Group, Stack } from '@mantine/core';
-import { formatDose, tallMan } from '@lockstep/shared';
+import { formatDose, tallMan, type OrderDetail, type BolusResponse } from '@lockstep/shared';
 import { formatDateTime } from '@/utils/format-date';
-import type { BedsideOrder } from '../api/bedside-schemas';
-import type { BolusResponse } from '../api/give-bolus';
 import { BackToOrdersButton } from './back-to-orders-button';
 import { DonePanel } from './done-panel';
 
 /** The recorded clinician bolus: how much, when, why, and who gave and witnessed it. */
-export function BolusGiven({ order, bolus }: { order: BedsideOrder; bolus: BolusResponse }) {
+export function BolusGiven({ order, bolus }: { order: OrderDetail; bolus: BolusResponse }) {
   return (
     <DonePanel number={3} title="Clinician bolus recorded">
       <Stack gap="md">

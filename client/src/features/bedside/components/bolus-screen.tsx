@@ -1,11 +1,10 @@
 import { useState } from 'react';
 import { Textarea } from '@mantine/core';
 import { useForm } from '@mantine/form';
-import { formatDose, MIN_REASON_LENGTH, syringeState, tallMan } from '@lockstep/shared';
+import { formatDose, MIN_REASON_LENGTH, syringeState, tallMan, type OrderDetail } from '@lockstep/shared';
 import { NumberField } from '@/components/ui/number-field';
 import { readNumber, type NumberFieldValue } from '@/lib/number-input';
-import type { BedsideOrder } from '../api/bedside-schemas';
-import { useGiveBolus } from '../api/give-bolus';
+import { useGiveBolus } from '@/api/orders/give-bolus';
 import { emptyWitness, useWitnessedStep, WITNESS_RULES, type WitnessedValues } from '../hooks/use-witnessed-step';
 import { BedsideOrderPage } from './bedside-order-page';
 import { BolusGiven } from './bolus-given';
@@ -33,7 +32,7 @@ export function BolusScreen({ orderId }: { orderId: number }) {
   );
 }
 
-function Bolus({ order }: { order: BedsideOrder }) {
+function Bolus({ order }: { order: OrderDetail }) {
   const bolus = useGiveBolus(order.id);
   const [needsOverride, setNeedsOverride] = useState(false);
   const unit = order.doseUnit;

@@ -1,17 +1,16 @@
 import { Anchor, Button, Group, Stack, Table, Text, ThemeIcon } from '@mantine/core';
 import { IconAlertTriangle, IconCircleCheck, IconRefresh } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
-import type { Drug, SecondCheckResponse } from '@lockstep/shared';
+import type { Drug, SecondCheckResponse, OrderDetail } from '@lockstep/shared';
 import { OrderStatusBadge } from '@/components/ui/order-status-badge';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/utils/format-date';
-import type { BedsideOrder } from '../api/bedside-schemas';
 import { differenceRows, type CheckNurses } from '../utils/setting-differences';
 import { BackToOrdersButton } from './back-to-orders-button';
 import { StepPanel } from './step-panel';
 
 export interface CheckResultProps {
-  order: BedsideOrder;
+  order: OrderDetail;
   result: SecondCheckResponse;
   /** The order was already running: this check started a new syringe, not the PCA. */
   newSyringe: boolean;

@@ -1,10 +1,9 @@
 import { Alert, Textarea } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconAlertTriangle } from '@tabler/icons-react';
-import { formatDose, MIN_REASON_LENGTH, tallMan } from '@lockstep/shared';
+import { formatDose, MIN_REASON_LENGTH, tallMan, type OrderDetail } from '@lockstep/shared';
 import { readNumber } from '@/lib/number-input';
-import type { BedsideOrder } from '../api/bedside-schemas';
-import { useDiscontinueOrder } from '../api/discontinue-order';
+import { useDiscontinueOrder } from '@/api/orders/discontinue-order';
 import { emptyWitness, useWitnessedStep, WITNESS_RULES } from '../hooks/use-witnessed-step';
 import { volumeRule, type EndSyringeValues } from '../utils/end-syringe-form';
 import { runningSyringe } from '../utils/syringe-state';
@@ -36,7 +35,7 @@ export function DiscontinueScreen({ orderId }: { orderId: number }) {
   );
 }
 
-function Discontinue({ order }: { order: BedsideOrder }) {
+function Discontinue({ order }: { order: OrderDetail }) {
   const discontinue = useDiscontinueOrder(order.id);
   const running = runningSyringe(order.releases);
   const form = useForm<DiscontinueValues>({

@@ -1,7 +1,7 @@
 import { Group, Stack, Text } from '@mantine/core';
+import type { DiscontinueResponse } from '@lockstep/shared';
 import { OrderStatusBadge } from '@/components/ui/order-status-badge';
 import { formatDateTime } from '@/utils/format-date';
-import type { DiscontinueResponse } from '../api/discontinue-order';
 import { BackToOrdersButton } from './back-to-orders-button';
 import { DonePanel } from './done-panel';
 import { ReconciliationSummary } from './reconciliation-summary';

@@ -1,9 +1,8 @@
 import { useState } from 'react';
 import { Stack } from '@mantine/core';
 import { useForm } from '@mantine/form';
-import type { Drug } from '@lockstep/shared';
-import type { BedsideOrder } from '../api/bedside-schemas';
-import { useStartFirstCheck } from '../api/start-first-check';
+import type { Drug, OrderDetail } from '@lockstep/shared';
+import { useStartFirstCheck } from '@/api/orders/start-first-check';
 import type { BouncedErrors, CheckStep } from '../hooks/use-bedside-check';
 import type { IdentityValues } from '../utils/identity-check';
 import { emptyPumpSettingsForm, readPumpSettingsForm, type PumpSettingsFormValues } from '../utils/pump-settings-form';
@@ -14,7 +13,7 @@ import { StepAlert } from './step-alert';
 import { StepPanel } from './step-panel';
 
 export interface FirstCheckStepProps {
-  order: BedsideOrder;
+  order: OrderDetail;
   drugs: readonly Drug[];
   nurseName: string;
   identity: IdentityValues;

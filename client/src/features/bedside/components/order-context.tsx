@@ -1,8 +1,7 @@
 import type { ReactNode } from 'react';
 import { Group, Paper, Stack, Text } from '@mantine/core';
-import { drugAndConcentration, formatRegimen, tallMan } from '@lockstep/shared';
+import { drugAndConcentration, formatRegimen, tallMan, type OrderDetail } from '@lockstep/shared';
 import { OrderStatusBadge } from '@/components/ui/order-status-badge';
-import type { BedsideOrder } from '../api/bedside-schemas';
 
 function Fact({ label, children }: { label: string; children: ReactNode }) {
   return (
@@ -18,7 +17,7 @@ function Fact({ label, children }: { label: string; children: ReactNode }) {
 }
 
 export interface OrderContextProps {
-  order: BedsideOrder;
+  order: OrderDetail;
   /**
    * Shows the ordered regimen. Off during a bedside check: the nurses read the pump, never the
    * order, until both entries are compared.

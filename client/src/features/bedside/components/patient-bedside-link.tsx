@@ -4,13 +4,14 @@ import { Link } from 'react-router-dom';
 import { canAccess } from '@/config/navigation';
 import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/lib/auth/use-session';
-import { BEDSIDE_STATUSES, useBedsideOrders } from '../api/get-bedside-orders';
+import { useOrders } from '@/api/orders/get-orders';
+import { BEDSIDE_STATUSES } from '../utils/bedside-statuses';
 
 /** On the patient page, for nurses: this patient's PCA orders that need the bedside, one click away. */
 export function PatientBedsideLink({ patientId }: { patientId: number }) {
   const user = useCurrentUser();
   const mayAct = canAccess(user.role, 'bedside');
-  const orders = useBedsideOrders({ patientId, status: BEDSIDE_STATUSES });
+  const orders = useOrders({ patientId, status: BEDSIDE_STATUSES });
   const count = orders.data?.length ?? 0;
   if (!mayAct || count === 0) return null;
   const wardId = orders.data?.[0]?.wardId;

@@ -1,12 +1,11 @@
 import { Group, Stack, Table, Text } from '@mantine/core';
 import { IconCircleCheck } from '@tabler/icons-react';
-import { formatDose, type FlagResponse } from '@lockstep/shared';
-import type { BedsideReconciliation } from '../api/bedside-schemas';
+import { formatDose, type FlagResponse, type ReleaseReconciliation } from '@lockstep/shared';
 import { reconciliationFlag, reconciliationRows } from '../utils/reconciliation-display';
 import { FlagAlert } from './flag-alert';
 
 export interface ReconciliationSummaryProps {
-  reconciliation: BedsideReconciliation;
+  reconciliation: ReleaseReconciliation;
   /** The order's flags, to show the review flag the server raised for a discrepancy. */
   flags: readonly FlagResponse[];
 }

@@ -2,10 +2,9 @@ import { useState } from 'react';
 import { Button, Divider, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconSignature } from '@tabler/icons-react';
-import type { Drug, SecondCheckResponse } from '@lockstep/shared';
+import type { Drug, SecondCheckResponse, OrderDetail } from '@lockstep/shared';
 import { isApiRequestError } from '@/lib/api-error';
-import type { BedsideOrder } from '../api/bedside-schemas';
-import { useCompleteSecondCheck } from '../api/complete-second-check';
+import { useCompleteSecondCheck } from '@/api/orders/complete-second-check';
 import { emptyPumpSettingsForm, readPumpSettingsForm, type PumpSettingsFormValues } from '../utils/pump-settings-form';
 import { placeServerErrors } from '../utils/server-errors';
 import { ColleagueFields } from './colleague-fields';
@@ -17,7 +16,7 @@ import { StepPanel } from './step-panel';
 type SecondCheckValues = PumpSettingsFormValues & { username: string; password: string };
 
 export interface SecondCheckStepProps {
-  order: BedsideOrder;
+  order: OrderDetail;
   drugs: readonly Drug[];
   checkId: number;
   firstNurseName: string;

@@ -1,9 +1,8 @@
 import { Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
-import { formatDose, normaliseReleaseCode } from '@lockstep/shared';
+import { formatDose, normaliseReleaseCode, type OrderDetail } from '@lockstep/shared';
 import { readNumber } from '@/lib/number-input';
-import type { BedsideOrder } from '../api/bedside-schemas';
-import { useChangeSyringe } from '../api/change-syringe';
+import { useChangeSyringe } from '@/api/orders/change-syringe';
 import { emptyWitness, useWitnessedStep, WITNESS_RULES } from '../hooks/use-witnessed-step';
 import { volumeRule, type EndSyringeValues } from '../utils/end-syringe-form';
 import { releaseCodeProblem } from '../utils/identity-check';
@@ -37,7 +36,7 @@ export function SyringeChangeScreen({ orderId }: { orderId: number }) {
   );
 }
 
-function SyringeChange({ order }: { order: BedsideOrder }) {
+function SyringeChange({ order }: { order: OrderDetail }) {
   const change = useChangeSyringe(order.id);
   const running = runningSyringe(order.releases);
   const form = useForm<ChangeValues>({

@@ -1,14 +1,13 @@
 import { Button, Group, Stack, Text } from '@mantine/core';
 import { IconClipboardCheck } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
+import type { OrderDetail, SyringeChangeResponse } from '@lockstep/shared';
 import { paths } from '@/config/paths';
-import type { BedsideOrder } from '../api/bedside-schemas';
-import type { SyringeChangeResponse } from '../api/change-syringe';
 import { DonePanel } from './done-panel';
 import { ReconciliationSummary } from './reconciliation-summary';
 
 /** The old syringe reconciled; the new one waits for its own bedside check. */
-export function SyringeChanged({ order, changed }: { order: BedsideOrder; changed: SyringeChangeResponse }) {
+export function SyringeChanged({ order, changed }: { order: OrderDetail; changed: SyringeChangeResponse }) {
   return (
     <DonePanel number={3} title={`Old syringe ${changed.reconciliation.releaseCode} finished`}>
       <Stack gap="lg">

@@ -1,13 +1,13 @@
 import { useState, type FormEvent } from 'react';
+import type { ColleagueRequest } from '@lockstep/shared';
 import { isApiRequestError } from '@/lib/api-error';
-import type { Colleague } from '../api/bedside-schemas';
 import { placeServerErrors } from '../utils/server-errors';
 import { stepWithErrors, validateStepFields, type StepForm } from '../utils/step-form';
 
 /** A witnessed task's form holds the witness's username and password beside its own fields. */
-export type WitnessedValues = { witness: Colleague };
+export type WitnessedValues = { witness: ColleagueRequest };
 
-export function emptyWitness(): Colleague {
+export function emptyWitness(): ColleagueRequest {
   return { username: '', password: '' };
 }
 
@@ -35,7 +35,7 @@ export interface WitnessedStepOptions<Values extends WitnessedValues, Request, R
   stepFields: readonly (readonly string[])[];
   mutation: WitnessedMutation<Request, Result>;
   /** The request from the checked form, with the witness as typed (username trimmed). */
-  toRequest: (values: Values, witness: Colleague) => Request;
+  toRequest: (values: Values, witness: ColleagueRequest) => Request;
   /** Sees a refusal's field errors before they are shown, e.g. to show a field the server asked for. */
   onRefused?: (fieldErrors: Record<string, string>) => void;
 }

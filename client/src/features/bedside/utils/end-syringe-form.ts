@@ -1,11 +1,11 @@
+import type { ColleagueRequest } from '@lockstep/shared';
 import { readNumber, type NumberFieldValue } from '@/lib/number-input';
-import type { Colleague } from '../api/bedside-schemas';
 
 /** The part every end of a syringe shares: the two volumes and the witness. */
 export type EndSyringeValues = {
   volumeInfusedMl: NumberFieldValue;
   wastedMl: NumberFieldValue;
-  witness: Colleague;
+  witness: ColleagueRequest;
 };
 
 /** A volume in mL: required, a plain number, not negative. */

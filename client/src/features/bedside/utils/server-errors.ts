@@ -9,10 +9,10 @@ export interface PlacedErrors {
 }
 
 /**
- * Puts a server error's field messages on a form's fields. `prefixes` maps the API's paths onto
- * the form's names (`settings.lockoutMinutes` → `lockoutMinutes`, `witness.password` →
- * `witnessPassword`). A 401/403 about the colleague lands on the named field; anything without
- * a field becomes the alert.
+ * Puts a server error's field messages on a form's fields. `renames` maps the API's paths onto
+ * the form's names, whole or by a prefix ending in '.' (`{ 'settings.': '' }` puts
+ * `settings.lockoutMinutes` on `lockoutMinutes`). A 401/403 about the colleague lands on the
+ * field it names; anything without a field becomes the alert.
  */
 export function placeServerErrors(
   error: unknown,

@@ -4,7 +4,7 @@ import { IconAlertCircle } from '@tabler/icons-react';
 import type { FlagResponse } from '@lockstep/shared';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
-import { useAcknowledgeFlag } from '../api/acknowledge-flag';
+import { useAcknowledgeFlag } from '@/api/orders/acknowledge-flag';
 import { acknowledgeNoteError } from '../utils/flags';
 import { SeverityBadge } from '@/components/ui/severity-badge';
 

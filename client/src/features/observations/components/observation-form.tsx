@@ -4,8 +4,7 @@ import { useForm } from '@mantine/form';
 import { IconAlertCircle, IconDeviceFloppy } from '@tabler/icons-react';
 import { applyServerErrors } from '@/lib/form-errors';
 import { formatDateTime } from '@/utils/format-date';
-import { useRecordObservation } from '../api/record-observation';
-import type { Observation, PcaOrder, RecordedObservation } from '../api/pca-schemas';
+import { useRecordObservation } from '@/api/orders/record-observation';
 import { formatClock } from '@/utils/clock';
 import {
   emptyObservationForm,
@@ -19,11 +18,11 @@ import {
 import { observationWarnings } from '../utils/observation-warnings';
 import { ObservationNumberInput } from './observation-number-input';
 import { SedationField } from './sedation-field';
-import type { PumpTotalField, WardPolicy } from '@lockstep/shared';
+import type { PumpTotalField, WardPolicy, ObservationResponse, OrderDetail, RecordedObservation } from '@lockstep/shared';
 
 export interface ObservationFormProps {
-  order: PcaOrder;
-  observations: readonly Observation[];
+  order: OrderDetail;
+  observations: readonly ObservationResponse[];
   /** The ward's breathing thresholds (from its policy), to warn before an urgent flag is raised. */
   thresholds: Pick<WardPolicy, 'respiratoryRateThreshold' | 'spo2Threshold'> | undefined;
   onSaved: (observation: RecordedObservation) => void;

@@ -1,9 +1,9 @@
 import { Button, Group, Paper, Stack, Text, ThemeIcon, Title } from '@mantine/core';
 import { IconArrowLeft, IconCircleCheck, IconClipboardPlus } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
+import type { RecordedObservation } from '@lockstep/shared';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/utils/format-date';
-import type { RecordedObservation } from '../api/pca-schemas';
 import { bySeverityThenNewest } from '../utils/flags';
 import { FlagCard } from './flag-card';
 

@@ -1,12 +1,11 @@
 import { Badge, Table, Text } from '@mantine/core';
 import { IconAlertOctagon } from '@tabler/icons-react';
-import { formatDose } from '@lockstep/shared';
+import { formatDose, type ObservationResponse } from '@lockstep/shared';
 import { formatDateTime } from '@/utils/format-date';
-import type { Observation } from '../api/pca-schemas';
 import { isUnacceptableSedation } from '../utils/sedation';
 
 /** The observations, newest first, every figure in its own column. */
-export function ObservationsTable({ observations }: { observations: readonly Observation[] }) {
+export function ObservationsTable({ observations }: { observations: readonly ObservationResponse[] }) {
   if (observations.length === 0) {
     return <Text c="dimmed">No observations recorded yet.</Text>;
   }

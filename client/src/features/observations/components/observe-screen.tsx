@@ -2,19 +2,26 @@ import { useState } from 'react';
 import { Alert, Anchor, Group, Paper, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { IconArrowLeft, IconInfoCircle } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
-import { DECISION_SUPPORT_CAUTION, drugAndConcentration, formatDose, ORDER_STATUS_LABELS } from '@lockstep/shared';
+import {
+  DECISION_SUPPORT_CAUTION,
+  drugAndConcentration,
+  formatDose,
+  ORDER_STATUS_LABELS,
+  type ObservationResponse,
+  type OrderDetail,
+  type RecordedObservation,
+} from '@lockstep/shared';
 import { useWardPolicy } from '@/api/wards/get-ward-policy';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { isApiRequestError } from '@/lib/api-error';
 import { formatDateTime } from '@/utils/format-date';
-import { useObservations } from '../api/get-observations';
-import { usePcaOrder } from '../api/get-pca-order';
-import type { Observation, PcaOrder, RecordedObservation } from '../api/pca-schemas';
+import { useObservations } from '@/api/orders/get-observations';
+import { useOrder } from '@/api/orders/get-order';
 import { ObservationForm } from './observation-form';
 import { ObservationSaved } from './observation-saved';
 
-function Context({ order, last }: { order: PcaOrder; last: Observation | undefined }) {
+function Context({ order, last }: { order: OrderDetail; last: ObservationResponse | undefined }) {
   return (
     <Paper withBorder radius="md" p="md">
       <Group justify="space-between" wrap="wrap" gap="xs">
@@ -41,7 +48,8 @@ function Context({ order, last }: { order: PcaOrder; last: Observation | undefin
 
 /** The bedside task of recording one observation, and the flags it raised. */
 export function ObserveScreen({ orderId }: { orderId: number }) {
-  const orderQuery = usePcaOrder(orderId);
+  // Flags are raised by anyone's observation: ask again on opening and every minute.
+  const orderQuery = useOrder(orderId, { staleTime: 0, refetchInterval: 60_000 });
   const observations = useObservations(orderId);
   const policy = useWardPolicy(orderQuery.data?.wardId ?? null);
   const [saved, setSaved] = useState<RecordedObservation | null>(null);

@@ -1,7 +1,6 @@
 import { LineChart } from '@mantine/charts';
 import { Center, Paper, Table, Text } from '@mantine/core';
-import { SEDATION_DESCRIPTIONS } from '@lockstep/shared';
-import type { Observation } from '../api/pca-schemas';
+import { SEDATION_DESCRIPTIONS, type ObservationResponse } from '@lockstep/shared';
 import { painAndSedation, painAndSedationSummary, type ObservationPoint } from '../utils/chart-data';
 import { formatClock } from '@/utils/clock';
 import { sedationTick } from '../utils/sedation';
@@ -29,7 +28,7 @@ export function PainSedationChart({
   observations,
   window,
 }: {
-  observations: readonly Observation[];
+  observations: readonly ObservationResponse[];
   window: { start: string; end: string } | null;
 }) {
   const points = painAndSedation(observations, window);

@@ -4,13 +4,16 @@ import { Link } from 'react-router-dom';
 import { canAccess } from '@/config/navigation';
 import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/lib/auth/use-session';
-import { usePatientPcaOrders } from '../api/get-patient-pca-orders';
-import { drugAndConcentration, regimenParts } from '@lockstep/shared';
+import { drugAndConcentration, regimenParts, type OrderStatus } from '@lockstep/shared';
+import { useOrders } from '@/api/orders/get-orders';
+
+const RUNNING: readonly OrderStatus[] = ['active'];
 
 /** On the patient page: each running PCA, one click from its page (and, for nurses, its observation). */
 export function PatientPcaOrders({ patientId }: { patientId: number }) {
   const user = useCurrentUser();
-  const orders = usePatientPcaOrders(patientId);
+  // The patient's running PCAs, asked afresh each time the page opens.
+  const orders = useOrders({ patientId, status: RUNNING }, { staleTime: 0 });
   if (!orders.data || orders.data.length === 0) return null;
   const mayObserve = canAccess(user.role, 'bedside');
   return (

@@ -1,12 +1,11 @@
 import type { ReactNode } from 'react';
 import { Badge, Group, Paper, Stack, Text, Title } from '@mantine/core';
 import { IconCircleOff, IconPlayerPlay } from '@tabler/icons-react';
-import { drugAndConcentration, ORDER_STATUS_LABELS, REGIMEN_TYPE_LABELS, regimenParts } from '@lockstep/shared';
+import { drugAndConcentration, ORDER_STATUS_LABELS, REGIMEN_TYPE_LABELS, regimenParts, type OrderDetail } from '@lockstep/shared';
 import { formatDateTime } from '@/utils/format-date';
-import type { PcaOrder } from '../api/pca-schemas';
 
 export interface PcaHeaderProps {
-  order: PcaOrder;
+  order: OrderDetail;
   /** "Record observation", for those who may. */
   actions?: ReactNode;
 }

@@ -6,9 +6,9 @@ import { canAccess } from '@/config/navigation';
 import { paths } from '@/config/paths';
 import { isApiRequestError } from '@/lib/api-error';
 import { useCurrentUser } from '@/lib/auth/use-session';
-import { useObservations } from '../api/get-observations';
-import { usePcaOrder } from '../api/get-pca-order';
-import type { UsageWindow } from '../api/get-usage';
+import { useObservations } from '@/api/orders/get-observations';
+import { useOrder } from '@/api/orders/get-order';
+import type { UsageWindow } from '../utils/usage-windows';
 import { useNow } from '@/hooks/use-now';
 import { FlagsPanel } from './flags-panel';
 import { ObservationsTable } from './observations-table';
@@ -25,7 +25,8 @@ export interface PcaScreenProps {
 export function PcaScreen({ orderId, hours, onHoursChange }: PcaScreenProps) {
   const user = useCurrentUser();
   const now = useNow(30_000);
-  const orderQuery = usePcaOrder(orderId);
+  // Flags are raised by anyone's observation: ask again on opening and every minute.
+  const orderQuery = useOrder(orderId, { staleTime: 0, refetchInterval: 60_000 });
   const observations = useObservations(orderId);
   const order = orderQuery.data;
 

@@ -1,14 +1,14 @@
 import { memo } from 'react';
 import { SimpleGrid } from '@mantine/core';
-import type { Observation, PcaUsage } from '../api/pca-schemas';
+import type { ObservationResponse, UsageResponse } from '@lockstep/shared';
 import { bucketWindow } from '../utils/chart-data';
 import { AttemptsChart } from './attempts-chart';
 import { CumulativeDoseChart } from './cumulative-dose-chart';
 import { PainSedationChart } from './pain-sedation-chart';
 
 export interface UsageChartsProps {
-  usage: PcaUsage;
-  observations: readonly Observation[];
+  usage: UsageResponse;
+  observations: readonly ObservationResponse[];
 }
 
 /**

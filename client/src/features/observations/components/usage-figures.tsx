@@ -1,7 +1,6 @@
 import { Alert, Paper, SimpleGrid, Stack, Text } from '@mantine/core';
 import { IconInfoCircle } from '@tabler/icons-react';
-import { CROSS_TOLERANCE_CAUTION, formatDose, withoutFloatNoise } from '@lockstep/shared';
-import type { PcaUsage } from '../api/pca-schemas';
+import { CROSS_TOLERANCE_CAUTION, formatDose, withoutFloatNoise, type UsageResponse } from '@lockstep/shared';
 import { describeProjectedEmpty } from '../utils/usage-display';
 
 function Figure({ label, value, detail }: { label: string; value: string; detail?: string }) {
@@ -23,7 +22,7 @@ function Figure({ label, value, detail }: { label: string; value: string; detail
 }
 
 /** The figures a nurse or prescriber reads first; each dose through formatDose. */
-export function UsageFigures({ usage, now }: { usage: PcaUsage; now: Date }) {
+export function UsageFigures({ usage, now }: { usage: UsageResponse; now: Date }) {
   const unit = usage.doseUnit;
   const windowDose = withoutFloatNoise(usage.totals.dose + usage.totals.bolusDose);
   return (

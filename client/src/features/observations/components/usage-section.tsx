@@ -2,8 +2,9 @@ import { lazy, Suspense } from 'react';
 import { Group, SegmentedControl, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { DECISION_SUPPORT_CAUTION } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
-import { useObservations } from '../api/get-observations';
-import { USAGE_WINDOWS, useUsage, type UsageWindow } from '../api/get-usage';
+import { useObservations } from '@/api/orders/get-observations';
+import { useUsage } from '@/api/orders/get-usage';
+import { USAGE_WINDOWS, type UsageWindow } from '../utils/usage-windows';
 import { NextObservation } from './next-observation';
 import { UsageFigures } from './usage-figures';
 

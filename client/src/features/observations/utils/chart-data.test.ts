@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { UsageBucket } from '@lockstep/shared';
-import type { Observation } from '../api/pca-schemas';
+import type { UsageBucket, ObservationResponse } from '@lockstep/shared';
 import {
   attemptsPerHour,
   attemptsSummary,
@@ -25,9 +24,10 @@ const BUCKETS = [
   bucket('2026-03-03T14:00:00.000Z', 2, 2, 0.4),
 ];
 
-function observation(at: string, painScore: number, sedationLevel: Observation['sedationLevel']): Observation {
+function observation(at: string, painScore: number, sedationLevel: ObservationResponse['sedationLevel']): ObservationResponse {
   return {
     id: 1,
+    orderId: 1,
     releaseId: 1,
     at,
     painScore,

@@ -1,5 +1,4 @@
-import { formatDose, withoutFloatNoise, type SedationLevel, type UsageBucket } from '@lockstep/shared';
-import type { Observation } from '../api/pca-schemas';
+import { formatDose, withoutFloatNoise, type SedationLevel, type UsageBucket, type ObservationResponse } from '@lockstep/shared';
 import { formatClock } from '@/utils/clock';
 import { sedationToNumber } from './sedation';
 
@@ -49,7 +48,7 @@ export function bucketWindow(buckets: readonly UsageBucket[]): { start: string; 
 
 /** Pain and sedation of the observations inside the window, oldest first; sedation S is 0. */
 export function painAndSedation(
-  observations: readonly Observation[],
+  observations: readonly ObservationResponse[],
   window: { start: string; end: string } | null,
   timeZone?: string,
 ): ObservationPoint[] {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { Observation } from '../api/pca-schemas';
+import type { ObservationResponse } from '@lockstep/shared';
 import {
   emptyObservationForm,
   numberFieldError,
@@ -14,9 +14,17 @@ import { observationWarnings } from './observation-warnings';
 
 const NOW = new Date('2026-03-03T14:00:00.000Z');
 
-function observation(id: number, at: string, releaseId: number, attempts: number, delivered: number, volumeInfusedMl: number): Observation {
+function observation(
+  id: number,
+  at: string,
+  releaseId: number,
+  attempts: number,
+  delivered: number,
+  volumeInfusedMl: number,
+): ObservationResponse {
   return {
     id,
+    orderId: 1,
     releaseId,
     at,
     painScore: 3,

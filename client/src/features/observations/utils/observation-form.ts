@@ -1,7 +1,12 @@
-import { observationTimelineErrors, pumpTotalsAround, SEDATION_LEVELS, type SedationLevel } from '@lockstep/shared';
+import {
+  observationTimelineErrors,
+  pumpTotalsAround,
+  SEDATION_LEVELS,
+  type CreateObservationRequest,
+  type ObservationResponse,
+  type SedationLevel,
+} from '@lockstep/shared';
 import { readNumber, type NumberFieldValue } from '@/lib/number-input';
-import type { Observation } from '../api/pca-schemas';
-import type { CreateObservationRequest } from '../api/record-observation';
 
 export const NUMBER_FIELDS = [
   'painScore',
@@ -139,16 +144,16 @@ export function readLocalDateTime(value: string): Date | null {
 
 /** The running syringe's observations just before and after `at`: the new pump totals lie between them. */
 export function pumpBounds(
-  observations: readonly Observation[],
+  observations: readonly ObservationResponse[],
   releaseId: number | null,
   at: Date,
-): { floor: Observation | null; ceiling: Observation | null } {
+): { floor: ObservationResponse | null; ceiling: ObservationResponse | null } {
   const { before, after } = pumpTotalsAround(observations, releaseId, at);
   return { floor: before, ceiling: after };
 }
 
 export interface ObservationCheckContext {
-  observations: readonly Observation[];
+  observations: readonly ObservationResponse[];
   /** The syringe running now, or null when none is. */
   release: { id: number; volumeMl: number } | null;
   startedAt: string | null;

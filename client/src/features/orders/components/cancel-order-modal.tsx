@@ -2,7 +2,7 @@ import { useState } from 'react';
 import type { OrderSummary } from '@lockstep/shared';
 import { errorMessage } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
-import { useCancelOrder } from '../api/cancel-order';
+import { useCancelOrder } from '@/api/orders/cancel-order';
 import { OrderInBrief } from './order-in-brief';
 import { ReasonModal } from './reason-modal';
 

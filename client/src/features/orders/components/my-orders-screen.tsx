@@ -5,7 +5,7 @@ import { useNavigate } from 'react-router-dom';
 import { OPEN_ORDER_STATUSES, type OrderSummary } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
-import { useOrders } from '../api/get-orders';
+import { useOrders } from '@/api/orders/get-orders';
 import { CancelOrderModal } from './cancel-order-modal';
 import { OrdersTable } from './orders-table';
 

@@ -7,7 +7,7 @@ import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { isApiRequestError } from '@/lib/api-error';
 import { useCurrentUser } from '@/lib/auth/use-session';
-import { useOrder } from '../api/get-order';
+import { useOrder } from '@/api/orders/get-order';
 import { CancelOrderModal } from './cancel-order-modal';
 import { OrderHeader } from './order-header';
 import { OrderReview } from './order-review';

@@ -4,7 +4,7 @@ import { Link, useNavigate } from 'react-router-dom';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { useCurrentUser } from '@/lib/auth/use-session';
-import { useOrders } from '../api/get-orders';
+import { useOrders } from '@/api/orders/get-orders';
 import { OrdersTable } from './orders-table';
 
 /** The patient page's PCA orders, newest first, and the way to write a new one. */

@@ -5,7 +5,7 @@ import { formatDose, tallMan } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/utils/format-date';
-import { useOrder } from '../api/get-order';
+import { useOrder } from '@/api/orders/get-order';
 import { OrderLoading } from './order-detail-screen';
 import classes from './release-label.module.css';
 

@@ -12,7 +12,7 @@ import {
 } from '@lockstep/shared';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { applyServerErrors } from '@/lib/form-errors';
-import { useCreateRelease } from '../api/create-release';
+import { useCreateRelease } from '@/api/orders/create-release';
 import { readAmount } from '../utils/order-form';
 import { isUnusualVolume, readReleaseForm, releaseFormValues, type ReleaseFormValues } from '../utils/release-form';
 import { OrderInBrief } from './order-in-brief';

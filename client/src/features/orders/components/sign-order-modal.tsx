@@ -3,8 +3,8 @@ import { List, Stack, Text } from '@mantine/core';
 import { type CreateOrderRequest, formatRegimen, type OrderDetail, REGIMEN_FIELD_LABELS, type RegimenField } from '@lockstep/shared';
 import { SignatureModal, type SignatureHandlers } from '@/components/dialogs/signature-modal';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
-import { useCreateOrder } from '../api/create-order';
-import { useReviseOrder } from '../api/revise-order';
+import { useCreateOrder } from '@/api/orders/create-order';
+import { useReviseOrder } from '@/api/orders/revise-order';
 
 export interface SignOrderModalProps {
   /** The order as it will be sent, short of the password. */

@@ -4,9 +4,9 @@ import type { OrderDetail } from '@lockstep/shared';
 import { SignatureModal } from '@/components/dialogs/signature-modal';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
-import { useRejectOrder } from '../api/reject-order';
-import { useReturnOrder } from '../api/return-order';
-import { useVerifyOrder } from '../api/verify-order';
+import { useRejectOrder } from '@/api/orders/reject-order';
+import { useReturnOrder } from '@/api/orders/return-order';
+import { useVerifyOrder } from '@/api/orders/verify-order';
 import { OrderInBrief } from './order-in-brief';
 import { ReasonModal } from './reason-modal';
 

@@ -11,7 +11,7 @@ import { useNow } from '@/hooks/use-now';
 import { minutesSince } from '@/utils/clock';
 import { formatElapsed } from '@/utils/duration';
 import { formatDateTime } from '@/utils/format-date';
-import { useOrders } from '../api/get-orders';
+import { useOrders } from '@/api/orders/get-orders';
 
 const ALL_WARDS = 'all';
 // Others sign orders all the time: look again twice a minute.

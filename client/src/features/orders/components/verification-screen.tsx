@@ -6,7 +6,7 @@ import { ORDER_STATUS_LABELS } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { isApiRequestError } from '@/lib/api-error';
-import { useOrder } from '../api/get-order';
+import { useOrder } from '@/api/orders/get-order';
 import { isReleasable, OrderLoading } from './order-detail-screen';
 import { OrderHeader } from './order-header';
 import { OrderReview } from './order-review';

@@ -8,7 +8,7 @@ import {
   type OrderFields,
   type Patient,
 } from '@lockstep/shared';
-import { useOrderPreview } from '../api/preview-order';
+import { useOrderPreview } from '@/api/orders/preview-order';
 import { sameFindings } from '../utils/findings';
 import { localFindings, patientFactors, readOrderForm, type OrderFormValues } from '../utils/order-form';
 

@@ -1,14 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { z } from 'zod';
+import { discontinueResponseSchema, type DiscontinueRequest, type DiscontinueResponse } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
-import { bedsideOrderSchema, reconciliationSchema, type Colleague } from './bedside-schemas';
-import { bedsideKeys } from './bedside-keys';
-import { invalidateAfterBedsideAction } from './invalidate-order';
-
-export type DiscontinueRequest = { reason: string; volumeInfusedMl: number; wastedMl: number; witness: Colleague };
-
-export const discontinueResponseSchema = z.object({ order: bedsideOrderSchema, reconciliation: reconciliationSchema });
-export type DiscontinueResponse = z.infer<typeof discontinueResponseSchema>;
+import { orderKeys } from './order-keys';
 
 /** Ends the PCA on the prescriber's decision: the last syringe is reconciled with witnessed waste. */
 export function discontinueOrder(orderId: number, request: DiscontinueRequest): Promise<DiscontinueResponse> {
@@ -19,9 +12,10 @@ export function useDiscontinueOrder(orderId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (request: DiscontinueRequest) => discontinueOrder(orderId, request),
+    // The answer is the order as it is now; its status changes on every order screen and list.
     onSuccess: (answer) => {
-      queryClient.setQueryData(bedsideKeys.detail(orderId), answer.order);
-      return invalidateAfterBedsideAction(queryClient);
+      queryClient.setQueryData(orderKeys.detail(orderId), answer.order);
+      return queryClient.invalidateQueries({ queryKey: orderKeys.all });
     },
   });
 }

@@ -1,22 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { SedationLevel } from '@lockstep/shared';
+import { recordedObservationSchema, type CreateObservationRequest, type RecordedObservation } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
-import { pcaKeys } from './pca-keys';
-import { recordedObservationSchema, type RecordedObservation } from './pca-schemas';
-
-export type CreateObservationRequest = {
-  /** ISO time; left out for "now". */
-  at?: string;
-  painScore: number;
-  sedationLevel: SedationLevel;
-  respiratoryRate: number;
-  spo2: number;
-  attempts: number;
-  delivered: number;
-  volumeInfusedMl: number;
-  syringeRemainingMl: number;
-  note?: string;
-};
+import { orderKeys } from './order-keys';
 
 export interface RecordObservationVariables {
   orderId: number;
@@ -32,7 +17,7 @@ export function useRecordObservation() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: recordObservation,
-    // The order's flags, observations, charts and "next due" all change.
-    onSuccess: (_observation, { orderId }) => queryClient.invalidateQueries({ queryKey: pcaKeys.order(orderId) }),
+    // The order's flags and "next due", its observations, charts and story all change.
+    onSuccess: (_observation, { orderId }) => queryClient.invalidateQueries({ queryKey: orderKeys.detail(orderId) }),
   });
 }

@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { CreateOrderRequest, OrderDetail } from '@lockstep/shared';
+import { orderDetailSchema, type CreateOrderRequest, type OrderDetail } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { orderKeys } from './order-keys';
-import { orderDetailSchema } from './order-schemas';
 
 export interface ReviseOrderVariables {
   /** The returned order; the new version supersedes it. */

@@ -1,8 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { OrderSummary } from '@lockstep/shared';
+import { orderSummarySchema, type OrderSummary } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { orderKeys, type OrderListFilters } from './order-keys';
-import { orderSummarySchema } from './order-schemas';
 
 export function getOrders(filters: OrderListFilters, signal?: AbortSignal): Promise<OrderSummary[]> {
   return apiRequest('/orders', {
@@ -27,9 +26,11 @@ export function ordersQueryOptions(filters: OrderListFilters) {
 export interface UseOrdersOptions {
   /** Polls the list, for a queue that others add to. */
   refetchInterval?: number;
+  /** 0 asks again each time the list is shown. */
+  staleTime?: number;
 }
 
 export function useOrders(filters: OrderListFilters, options: UseOrdersOptions = {}) {
   // Keep the current rows on screen while another ward's list loads.
-  return useQuery({ ...ordersQueryOptions(filters), placeholderData: keepPreviousData, refetchInterval: options.refetchInterval });
+  return useQuery({ ...ordersQueryOptions(filters), placeholderData: keepPreviousData, ...options });
 }

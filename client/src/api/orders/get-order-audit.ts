@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { auditEventSchema, type AuditEvent } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
-import { auditKeys } from './audit-keys';
+import { orderKeys } from './order-keys';
 
 /** Everything that happened to one order, oldest first. */
 export function getOrderAudit(orderId: number, signal?: AbortSignal): Promise<AuditEvent[]> {
@@ -10,7 +10,7 @@ export function getOrderAudit(orderId: number, signal?: AbortSignal): Promise<Au
 
 export function orderAuditQueryOptions(orderId: number) {
   return queryOptions({
-    queryKey: auditKeys.order(orderId),
+    queryKey: orderKeys.audit(orderId),
     queryFn: ({ signal }) => getOrderAudit(orderId, signal),
     // The story grows while the page is open (a release, a check); read it afresh each visit.
     staleTime: 0,

@@ -1,10 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { PumpSettings, SecondCheckResponse } from '@lockstep/shared';
+import { secondCheckResponseSchema, type SecondCheckRequest, type SecondCheckResponse } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
-import { secondCheckResponseSchema, type Colleague } from './bedside-schemas';
-import { invalidateAfterBedsideAction } from './invalidate-order';
-
-export type SecondCheckRequest = Colleague & { settings: PumpSettings };
+import { orderKeys } from './order-keys';
 
 /**
  * Step 2: the second nurse signs in on the same screen and enters the pump blind. `signed`: a
@@ -23,6 +20,7 @@ export function useCompleteSecondCheck(orderId: number) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ checkId, request }: { checkId: number; request: SecondCheckRequest }) => completeSecondCheck(orderId, checkId, request),
-    onSuccess: () => invalidateAfterBedsideAction(queryClient),
+    // A matched check starts the syringe (and the PCA): every order screen and list follows.
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: orderKeys.all }),
   });
 }

@@ -1,16 +1,16 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import { observationSchema, type ObservationResponse } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
-import { pcaKeys } from './pca-keys';
-import { observationSchema, type Observation } from './pca-schemas';
+import { orderKeys } from './order-keys';
 
 /** Oldest first. */
-export function getObservations(orderId: number, signal?: AbortSignal): Promise<Observation[]> {
+export function getObservations(orderId: number, signal?: AbortSignal): Promise<ObservationResponse[]> {
   return apiRequest(`/orders/${orderId}/observations`, { schema: observationSchema.array(), signal });
 }
 
 export function observationsQueryOptions(orderId: number) {
   return queryOptions({
-    queryKey: pcaKeys.observations(orderId),
+    queryKey: orderKeys.observations(orderId),
     queryFn: ({ signal }) => getObservations(orderId, signal),
     // The form checks pump totals against the last one: it must be current.
     staleTime: 0,

@@ -1,8 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { CreateReleaseRequest, SyringeReleaseResponse } from '@lockstep/shared';
+import { syringeReleaseSchema, type CreateReleaseRequest, type SyringeReleaseResponse } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { orderKeys } from './order-keys';
-import { releaseSchema } from './order-schemas';
 
 export interface CreateReleaseVariables {
   orderId: number;
@@ -14,13 +13,14 @@ export interface CreateReleaseVariables {
  * concentration must be the order's; outside 20–60 mL needs a reason; expiry in the future).
  */
 export function createRelease({ orderId, request }: CreateReleaseVariables): Promise<SyringeReleaseResponse> {
-  return apiRequest(`/orders/${orderId}/releases`, { method: 'POST', body: request, schema: releaseSchema });
+  return apiRequest(`/orders/${orderId}/releases`, { method: 'POST', body: request, schema: syringeReleaseSchema });
 }
 
 export function useCreateRelease() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createRelease,
-    onSuccess: (_release, { orderId }) => queryClient.invalidateQueries({ queryKey: orderKeys.detail(orderId) }),
+    // The order's syringes, wherever it is shown; its story rereads when the order does.
+    onSuccess: (_release, { orderId }) => queryClient.invalidateQueries({ queryKey: orderKeys.detail(orderId), exact: true }),
   });
 }

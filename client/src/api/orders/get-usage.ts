@@ -1,19 +1,16 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { usageSchema, type UsageResponse } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
-import { pcaKeys } from './pca-keys';
-import { usageSchema, type PcaUsage } from './pca-schemas';
+import { orderKeys } from './order-keys';
 
-/** The chart windows offered on the PCA page, in hours. */
-export const USAGE_WINDOWS = [8, 12, 24] as const;
-export type UsageWindow = (typeof USAGE_WINDOWS)[number];
-
-export function getUsage(orderId: number, hours: number, signal?: AbortSignal): Promise<PcaUsage> {
+/** Attempts, doses and boluses over the last `hours`, by hour, with the syringe's projection and the next observation. */
+export function getUsage(orderId: number, hours: number, signal?: AbortSignal): Promise<UsageResponse> {
   return apiRequest(`/orders/${orderId}/usage`, { schema: usageSchema, params: { hours }, signal });
 }
 
 export function usageQueryOptions(orderId: number, hours: number) {
   return queryOptions({
-    queryKey: pcaKeys.usage(orderId, hours),
+    queryKey: orderKeys.usage(orderId, hours),
     queryFn: ({ signal }) => getUsage(orderId, hours, signal),
     // "Next observation due" and "overdue" move with the clock.
     staleTime: 0,

@@ -1,8 +1,7 @@
 import { keepPreviousData, queryOptions, skipToken, useQuery } from '@tanstack/react-query';
-import type { OrderFields, OrderPreview } from '@lockstep/shared';
+import { orderPreviewSchema, type OrderFields, type OrderPreview } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { orderKeys } from './order-keys';
-import { orderPreviewSchema } from './order-schemas';
 
 /** The server's own check of an unsigned order: derived values and findings; nothing is written. */
 export function previewOrder(fields: OrderFields, signal?: AbortSignal): Promise<OrderPreview> {
