@@ -111,6 +111,15 @@ describe('pump totals', () => {
     expect(errors.volumeInfusedMl).toBe('At least 3: pump totals never go down within one syringe');
   });
 
+  it('are checked each as soon as it is typed, before the others', () => {
+    const empty = { ...FILLED, attempts: '', delivered: '', volumeInfusedMl: '', syringeRemainingMl: '' };
+    const errors = validateObservationForm({ ...empty, attempts: 8 }, CONTEXT);
+    expect(errors.attempts).toBe('At least 9: pump totals never go down within one syringe');
+    expect(errors.delivered).toBe('Enter the doses delivered from the pump');
+    // Delivered above the floor, attempts not typed yet: nothing to compare it with.
+    expect(validateObservationForm({ ...empty, delivered: 7 }, CONTEXT).delivered).toBeUndefined();
+  });
+
   it('entered late, are not above a later observation', () => {
     const errors = validateObservationForm({ ...FILLED, at: localInput(new Date('2026-03-03T12:30:00.000Z')), attempts: 10 }, CONTEXT);
     expect(errors.attempts).toBe('At most 9: a later observation of this syringe has 9');

@@ -20,6 +20,11 @@ export const NUMBER_FIELDS = [
 export type NumberField = (typeof NUMBER_FIELDS)[number];
 
 const TIMELINE_FIELDS = ['attempts', 'delivered', 'volumeInfusedMl', 'syringeRemainingMl'] as const;
+type TimelineField = (typeof TIMELINE_FIELDS)[number];
+
+// A total not typed yet stands in as a value that makes no typed field wrong (attempts unbounded,
+// the rest 0), so each total is checked as soon as it is typed; the stand-ins' own errors are dropped.
+const NOT_TYPED_YET: Record<TimelineField, number> = { attempts: Infinity, delivered: 0, volumeInfusedMl: 0, syringeRemainingMl: 0 };
 
 /** The form's fields carry the API's names, so a 400's field errors land beside them. */
 export type ObservationFormValues = Record<NumberField, NumberFieldValue> & {
@@ -175,22 +180,30 @@ export function validateObservationForm(values: ObservationFormValues, context: 
     if (!typed) errors.at = 'Enter the date and time of the observation';
     else at = typed;
   }
-  // The timeline rules are the server's own (shared): checked once every number reads as one.
-  const numbers = TIMELINE_FIELDS.map((field) => readNumber(values[field]));
-  if (!errors.at && numbers.every((value) => typeof value === 'number')) {
-    const [attempts, delivered, volumeInfusedMl, syringeRemainingMl] = numbers as number[];
+  // The timeline rules are the server's own (shared).
+  if (!errors.at) {
+    const typed = new Set<string>(['at']);
+    const totals = { ...NOT_TYPED_YET };
+    for (const field of TIMELINE_FIELDS) {
+      const value = readNumber(values[field]);
+      if (typeof value !== 'number') continue;
+      totals[field] = value;
+      typed.add(field);
+    }
     const { floor, ceiling } = pumpBounds(context.observations, context.release?.id ?? null, at);
     const timeline = observationTimelineErrors({
       at,
-      values: { attempts, delivered, volumeInfusedMl, syringeRemainingMl },
+      values: totals,
       before: floor,
       after: ceiling,
       syringeVolumeMl: context.release?.volumeMl ?? null,
       startedAt: context.startedAt ? new Date(context.startedAt) : null,
       now: context.now,
     });
-    for (const { field, message } of timeline)
-      if (!errors[field as keyof ObservationFormValues]) errors[field as keyof ObservationFormValues] = message;
+    for (const { field, message } of timeline) {
+      const key = field as keyof ObservationFormValues;
+      if (typed.has(field) && !errors[key]) errors[key] = message;
+    }
   }
   if (values.note.length > 2000) errors.note = 'The note is at most 2,000 characters';
   return errors;
