@@ -1,4 +1,4 @@
-import { queryOptions, useQueries, useQuery } from '@tanstack/react-query';
+import { queryOptions, useQuery } from '@tanstack/react-query';
 import { orderDetailSchema, type OrderDetail } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { orderKeys } from './order-keys';
@@ -24,12 +24,4 @@ export interface UseOrderOptions {
 /** One order with its history; `null` waits (e.g. for the previous version of an order that has none). */
 export function useOrder(id: number | null, options: UseOrderOptions = {}) {
   return useQuery({ ...orderQueryOptions(id ?? 0), enabled: id !== null, ...options });
-}
-
-/**
- * Each listed order's detail, one request per order: the list answer does not say whether a
- * syringe is ready or running, and a ward holds only a handful of PCAs.
- */
-export function useOrderDetails(ids: readonly number[], options: UseOrderOptions = {}) {
-  return useQueries({ queries: ids.map((id) => ({ ...orderQueryOptions(id), ...options })) });
 }

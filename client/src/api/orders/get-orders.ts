@@ -1,11 +1,12 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import { orderSummarySchema, type OrderSummary } from '@lockstep/shared';
+import { orderListEntrySchema, type OrderListEntry } from '@lockstep/shared';
 import { apiRequest } from '@/lib/api-client';
 import { orderKeys, type OrderListFilters } from './order-keys';
 
-export function getOrders(filters: OrderListFilters, signal?: AbortSignal): Promise<OrderSummary[]> {
+/** The orders as the list answers them: each with its syringe state and next observation. */
+export function getOrders(filters: OrderListFilters, signal?: AbortSignal): Promise<OrderListEntry[]> {
   return apiRequest('/orders', {
-    schema: orderSummarySchema.array(),
+    schema: orderListEntrySchema.array(),
     params: {
       wardId: filters.wardId,
       patientId: filters.patientId,

@@ -1,11 +1,10 @@
 import { useMemo } from 'react';
 import { Anchor, Group, Select, Stack, Text, Title } from '@mantine/core';
 import { Link, useSearchParams } from 'react-router-dom';
-import { type ObservationDue, syringeState, type SyringeState, type Ward } from '@lockstep/shared';
+import type { Ward } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { useNow } from '@/hooks/use-now';
-import { useOrderDetails } from '@/api/orders/get-order';
 import { useOrders } from '@/api/orders/get-orders';
 import { BEDSIDE_STATUSES } from '../utils/bedside-statuses';
 import { byWardAndBed } from '../utils/order-sort';
@@ -31,21 +30,10 @@ export function BedsideOrdersScreen({ wards, wardsLoading }: BedsideOrdersScreen
   const wardId = positiveId(searchParams.get('ward'));
   const patientId = positiveId(searchParams.get('patient'));
 
-  const ordersQuery = useOrders({ wardId, patientId, status: BEDSIDE_STATUSES });
+  // One request: each order comes with its syringe state and next observation. Asked again each time the list is shown.
+  const ordersQuery = useOrders({ wardId, patientId, status: BEDSIDE_STATUSES }, { staleTime: 0 });
   const orders = useMemo(() => [...(ordersQuery.data ?? [])].sort(byWardAndBed), [ordersQuery.data]);
-  // Each order's syringes: the list answer does not say whether one is ready or running.
-  const details = useOrderDetails(
-    orders.map((order) => order.id),
-    { staleTime: 0 },
-  );
   const now = useNow(30_000);
-  const syringes = new Map<number, SyringeState>();
-  const nextObservations = new Map<number, ObservationDue>();
-  for (const { data } of details) {
-    if (!data) continue;
-    syringes.set(data.id, syringeState(data.releases));
-    if (data.nextObservation) nextObservations.set(data.id, data.nextObservation);
-  }
 
   const wardOptions = [{ value: ALL_WARDS, label: 'All wards' }, ...wards.map((ward) => ({ value: String(ward.id), label: ward.name }))];
   const chooseWard = (value: string | null) => setSearchParams(value && value !== ALL_WARDS ? { ward: value } : {}, { replace: true });
@@ -77,8 +65,6 @@ export function BedsideOrdersScreen({ wards, wardsLoading }: BedsideOrdersScreen
       ) : (
         <BedsideOrdersTable
           orders={orders}
-          syringes={syringes}
-          nextObservations={nextObservations}
           now={now}
           isLoading={ordersQuery.isPending}
           emptyMessage="No PCA order here is waiting for a bedside check or running."

@@ -2,15 +2,7 @@ import type { ComponentType } from 'react';
 import { Anchor, Button, Group, Skeleton, Stack, Table, Text } from '@mantine/core';
 import { IconClipboardCheck, IconClipboardHeart, IconDroplet, IconPlayerStop, IconReplace, type IconProps } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
-import {
-  type BedsideAction,
-  bedsideActions,
-  drugAndConcentration,
-  type ObservationDue,
-  type OrderSummary,
-  regimenPhrases,
-  type SyringeState,
-} from '@lockstep/shared';
+import { type BedsideAction, bedsideActions, drugAndConcentration, type OrderListEntry, regimenPhrases } from '@lockstep/shared';
 import { OrderStatusBadge } from '@/components/ui/order-status-badge';
 import { paths } from '@/config/paths';
 import { bedsideHint } from '../utils/syringe-state';
@@ -33,17 +25,15 @@ const ACTIONS: Record<
 };
 
 export interface BedsideOrdersTableProps {
-  orders: readonly OrderSummary[];
-  /** Each order's syringes, once its details have loaded. */
-  syringes: ReadonlyMap<number, SyringeState>;
-  /** Each running order's next observation, once its details have loaded. */
-  nextObservations: ReadonlyMap<number, ObservationDue>;
+  /** Each with its syringe state and next observation, as the list answers them. */
+  orders: readonly OrderListEntry[];
   now: Date;
   isLoading: boolean;
   emptyMessage: string;
 }
 
-function OrderActions({ order, syringes }: { order: OrderSummary; syringes: SyringeState | undefined }) {
+function OrderActions({ order }: { order: OrderListEntry }) {
+  const syringes = order.syringeState;
   return (
     <Group gap="xs" wrap="wrap">
       {bedsideActions(order.status, syringes).map((action) => {
@@ -79,7 +69,7 @@ function RegimenParts({ parts }: { parts: readonly string[] }) {
 }
 
 /** The ward's PCA orders at the bedside: who, where, what runs, and what to do next. */
-export function BedsideOrdersTable({ orders, syringes, nextObservations, now, isLoading, emptyMessage }: BedsideOrdersTableProps) {
+export function BedsideOrdersTable({ orders, now, isLoading, emptyMessage }: BedsideOrdersTableProps) {
   return (
     <Table.ScrollContainer minWidth={900}>
       <Table aria-label="PCA orders" aria-busy={isLoading || undefined} tabularNums verticalSpacing="sm" fz="sm">
@@ -104,8 +94,8 @@ export function BedsideOrdersTable({ orders, syringes, nextObservations, now, is
                 </Table.Tr>
               ))
             : orders.map((order) => {
-                const hint = bedsideHint(order.status, syringes.get(order.id));
-                const due = nextObservations.get(order.id);
+                const hint = bedsideHint(order.status, order.syringeState);
+                const due = order.nextObservation;
                 return (
                   <Table.Tr key={order.id}>
                     <Table.Td>
@@ -153,7 +143,7 @@ export function BedsideOrdersTable({ orders, syringes, nextObservations, now, is
                       </Stack>
                     </Table.Td>
                     <Table.Td>
-                      <OrderActions order={order} syringes={syringes.get(order.id)} />
+                      <OrderActions order={order} />
                     </Table.Td>
                   </Table.Tr>
                 );
