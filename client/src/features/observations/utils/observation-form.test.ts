@@ -128,6 +128,9 @@ describe('pump totals', () => {
   it('are not more than the syringe held', () => {
     const errors = validateObservationForm({ ...FILLED, syringeRemainingMl: 60 }, CONTEXT);
     expect(errors.syringeRemainingMl).toBe('More than the 50 mL the syringe held: check the syringe');
+    // The API refuses the same observation with the same words (server/test/observations.e2e-spec.ts).
+    const tooMuch = validateObservationForm({ ...FILLED, volumeInfusedMl: 80, syringeRemainingMl: 0 }, CONTEXT);
+    expect(tooMuch.volumeInfusedMl).toBe('More than the 50 mL the syringe held: check the pump');
   });
 });
 
