@@ -1,6 +1,7 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD, openBrowser, signIn, signInHome, snapshot, type BrowserSession } from './support/browser.js';
+import { apiToken, callApi } from './support/api.js';
 import { startServer, type RunningServer } from './support/server.js';
 
 // The demo's Harbour ward (id 1) keeps SpO2 below 90 % as its shipped threshold; the demo order
@@ -9,22 +10,6 @@ import { startServer, type RunningServer } from './support/server.js';
 const HARBOUR = 1;
 
 type OrderSummary = { id: number; status: string };
-
-async function api<T>(server: RunningServer, token: string | null, method: string, route: string, body?: unknown): Promise<T> {
-  const response = await fetch(`${server.baseUrl}/api${route}`, {
-    method,
-    headers: { 'Content-Type': 'application/json', ...(token ? { Authorization: `Bearer ${token}` } : {}) },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-  const text = await response.text();
-  if (!response.ok) throw new Error(`${method} ${route} answered ${response.status}: ${text}`);
-  return JSON.parse(text) as T;
-}
-
-async function login(server: RunningServer, username: string): Promise<string> {
-  const { accessToken } = await api<{ accessToken: string }>(server, null, 'POST', '/auth/login', { username, password: DEMO_PASSWORD });
-  return accessToken;
-}
 
 async function openAudit(page: Page): Promise<void> {
   await page.getByRole('navigation').getByRole('link', { name: 'Audit', exact: true }).click();
@@ -46,14 +31,14 @@ describe('audit trail', () => {
   beforeAll(async () => {
     server = await startServer();
     browser = await openBrowser(server.baseUrl);
-    const lin = await login(server, 'lin.park');
-    const waiting = await api<OrderSummary[]>(server, lin, 'GET', '/orders?status=awaiting_verification');
+    const lin = await apiToken(server.baseUrl, 'lin.park');
+    const waiting = await callApi<OrderSummary[]>(server.baseUrl, lin, 'GET', '/orders?status=awaiting_verification');
     const order = waiting[0];
     if (!order) throw new Error('The demo has no order awaiting verification');
     verifiedId = order.id;
-    await api(server, lin, 'POST', `/orders/${verifiedId}/verify`, { signature: { password: DEMO_PASSWORD } });
-    const sam = await login(server, 'sam.rivera');
-    await api(server, sam, 'PATCH', `/wards/${HARBOUR}/policy`, { spo2Threshold: 92 });
+    await callApi(server.baseUrl, lin, 'POST', `/orders/${verifiedId}/verify`, { signature: { password: DEMO_PASSWORD } });
+    const sam = await apiToken(server.baseUrl, 'sam.rivera');
+    await callApi(server.baseUrl, sam, 'PATCH', `/wards/${HARBOUR}/policy`, { spo2Threshold: 92 });
   });
   afterAll(async () => {
     await browser?.close();
@@ -101,8 +86,8 @@ describe('audit trail', () => {
     await verifyRow.waitFor();
     expect(await verifyRow.innerText()).toContain('Lin Park');
 
-    const sam = await login(server, 'sam.rivera');
-    const { total } = await api<{ total: number }>(server, sam, 'GET', '/audit?limit=1');
+    const sam = await apiToken(server.baseUrl, 'sam.rivera');
+    const { total } = await callApi<{ total: number }>(server.baseUrl, sam, 'GET', '/audit?limit=1');
     await page.getByRole('button', { name: 'Verify chain' }).click();
     await page.getByText(`All ${total} events verified`).waitFor();
     await snapshot(page, 'audit-chain-verified');

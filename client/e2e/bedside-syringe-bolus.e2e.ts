@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CreateOrderRequest } from '@lockstep/shared';
 import { IDENTITY, ORDER as PCA_ORDER, RELEASE, ROSA, SETTINGS } from '../../server/test/support/pca.js';
 import { DEMO_PASSWORD, openBrowser, openPatients, signInHome, snapshot, type BrowserSession } from './support/browser.js';
+import { apiToken, callApi } from './support/api.js';
 import { startServer, type RunningServer } from './support/server.js';
 
 // An active morphine PCA for NOAH ACHTERBERG (KB100231, born 1968-03-14, Harbour bed H02), set up
@@ -15,33 +16,19 @@ const ORDER: CreateOrderRequest = {
   overrides: [{ field: 'clinicianBolusDose', reason: 'Larger boluses agreed with the acute pain team' }],
 };
 
-async function api<T>(baseUrl: string, token: string | null, path: string, body?: object): Promise<T> {
-  const response = await fetch(`${baseUrl}/api${path}`, {
-    method: body ? 'POST' : 'GET',
-    headers: { 'Content-Type': 'application/json', ...(token ? { Authorization: `Bearer ${token}` } : {}) },
-    body: body ? JSON.stringify(body) : undefined,
-  });
-  if (!response.ok) throw new Error(`${path}: ${response.status} ${await response.text()}`);
-  return (await response.json()) as T;
-}
-
-async function tokenFor(baseUrl: string, username: string): Promise<string> {
-  return (await api<{ accessToken: string }>(baseUrl, null, '/auth/login', { username, password: DEMO_PASSWORD })).accessToken;
-}
-
 /** Prescribed, verified, released, started by kai and rosa; then a second syringe is released. */
 async function activeOrderWithSpareSyringe(baseUrl: string): Promise<{ id: number; spareCode: string }> {
-  const [amara, lin, kai] = await Promise.all(['amara.osei', 'lin.park', 'kai.mendes'].map((name) => tokenFor(baseUrl, name)));
-  const order = await api<{ id: number }>(baseUrl, amara, '/orders', ORDER);
-  await api(baseUrl, lin, `/orders/${order.id}/verify`, { signature: { password: DEMO_PASSWORD } });
-  const first = await api<{ releaseCode: string }>(baseUrl, lin, `/orders/${order.id}/releases`, RELEASE);
-  const check = await api<{ id: number }>(baseUrl, kai, `/orders/${order.id}/bedside-checks`, {
+  const [amara, lin, kai] = await Promise.all(['amara.osei', 'lin.park', 'kai.mendes'].map((name) => apiToken(baseUrl, name)));
+  const order = await callApi<{ id: number }>(baseUrl, amara, 'POST', '/orders', ORDER);
+  await callApi(baseUrl, lin, 'POST', `/orders/${order.id}/verify`, { signature: { password: DEMO_PASSWORD } });
+  const first = await callApi<{ releaseCode: string }>(baseUrl, lin, 'POST', `/orders/${order.id}/releases`, RELEASE);
+  const check = await callApi<{ id: number }>(baseUrl, kai, 'POST', `/orders/${order.id}/bedside-checks`, {
     ...IDENTITY,
     releaseCode: first.releaseCode,
     settings: SETTINGS,
   });
-  await api(baseUrl, kai, `/orders/${order.id}/bedside-checks/${check.id}/second`, { ...ROSA, settings: SETTINGS });
-  const spare = await api<{ releaseCode: string }>(baseUrl, lin, `/orders/${order.id}/releases`, RELEASE);
+  await callApi(baseUrl, kai, 'POST', `/orders/${order.id}/bedside-checks/${check.id}/second`, { ...ROSA, settings: SETTINGS });
+  const spare = await callApi<{ releaseCode: string }>(baseUrl, lin, 'POST', `/orders/${order.id}/releases`, RELEASE);
   return { id: order.id, spareCode: spare.releaseCode };
 }
 

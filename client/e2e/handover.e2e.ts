@@ -1,23 +1,14 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD, openBrowser, saveArtifact, signInHome, snapshot, type BrowserSession } from './support/browser.js';
+import { openBrowser, saveArtifact, signInHome, snapshot, type BrowserSession } from './support/browser.js';
+import { apiToken, callApi } from './support/api.js';
+import { FALEOLO, startFaleoloPca } from './support/demo-pca.js';
 import { startServer, type RunningServer } from './support/server.js';
 
 // The demo's Harbour ward mid-shift: six running PCAs (VALDIVIA, H05, with an urgent flag), NOAH
 // ACHTERBERG (H02) awaiting verification, and TAVITA FALEOLO (H07) with a verified HYDROmorphone
-// order and a ready syringe, release code HK3-7QT. Counts are read from the API's own answer.
+// order and a ready syringe (support/demo-pca.ts). Counts are read from the API's own answer.
 const HARBOUR = 1;
-const PUMP = {
-  drugId: 2,
-  concentrationPerMl: 0.2,
-  syringeVolumeMl: 50,
-  loadingDose: null,
-  demandDose: 0.2,
-  lockoutMinutes: 10,
-  basalRatePerHour: 0.1,
-  oneHourLimit: null,
-  fourHourLimit: 6,
-};
 // Sedation 3 on the Pasero scale: an urgent flag.
 const URGENT_OBSERVATION = {
   painScore: 4,
@@ -50,26 +41,6 @@ function confirmedText(answer: BoardAnswer): string {
   return `${confirmed.length} of ${running.length} PCAs confirmed`;
 }
 
-async function login(baseUrl: string, username: string): Promise<string> {
-  const response = await fetch(`${baseUrl}/api/auth/login`, {
-    method: 'POST',
-    headers: { 'Content-Type': 'application/json' },
-    body: JSON.stringify({ username, password: DEMO_PASSWORD }),
-  });
-  if (!response.ok) throw new Error(`Sign-in of ${username} failed: ${response.status}`);
-  return ((await response.json()) as { accessToken: string }).accessToken;
-}
-
-async function api<T>(baseUrl: string, token: string, route: string, body?: unknown): Promise<T> {
-  const response = await fetch(`${baseUrl}/api${route}`, {
-    method: body === undefined ? 'GET' : 'POST',
-    headers: { Authorization: `Bearer ${token}`, ...(body === undefined ? {} : { 'Content-Type': 'application/json' }) },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-  if (!response.ok) throw new Error(`${route} answered ${response.status}: ${await response.text()}`);
-  return (await response.json()) as T;
-}
-
 const board = (page: Page) => page.getByRole('table', { name: 'Handover board' });
 const bodyRows = (page: Page) => board(page).locator('tbody tr');
 const rowOf = (page: Page, name: string) => bodyRows(page).filter({ hasText: name });
@@ -91,7 +62,7 @@ describe('handover board', () => {
     server = await startServer();
     mei = await openBrowser(server.baseUrl);
     await signInHome(mei.page, 'mei.tan');
-    kaiToken = await login(server.baseUrl, 'kai.mendes');
+    kaiToken = await apiToken(server.baseUrl, 'kai.mendes');
   });
   afterAll(async () => {
     await nurse?.close();
@@ -110,13 +81,13 @@ describe('handover board', () => {
       .filter({ hasText: /^Harbour · (Day|Night) shift, / })
       .waitFor();
 
-    const answer = await api<BoardAnswer>(server.baseUrl, kaiToken, `/wards/${HARBOUR}/handover`);
+    const answer = await callApi<BoardAnswer>(server.baseUrl, kaiToken, 'GET', `/wards/${HARBOUR}/handover`);
     const names = answer.rows.map((row) => row.patient.name);
     expect(names).toEqual(expect.arrayContaining(['VALDIVIA, Ines', 'ACHTERBERG, Noah', 'FALEOLO, Tavita']));
     expect(names[0]).toBe('VALDIVIA, Ines');
     await expect.poll(() => bodyRows(page).count()).toBe(names.length);
     for (const [index, name] of names.entries()) expect(await bodyRows(page).nth(index).innerText()).toContain(name);
-    faleoloOrderId = answer.rows.find((row) => row.patient.name === 'FALEOLO, Tavita')!.orderId;
+    faleoloOrderId = answer.rows.find((row) => row.patient.name === FALEOLO.name)!.orderId;
 
     expect(await rowOf(page, 'ACHTERBERG').innerText()).toMatch(/Awaiting verification\s+since \d\d:\d\d/);
     expect(await rowOf(page, 'FALEOLO').innerText()).toContain('Awaiting bedside check');
@@ -135,20 +106,10 @@ describe('handover board', () => {
     // A mark on the window: a page reload would wipe it.
     await page.evaluate(() => Object.assign(window, { handoverMark: 'kept' }));
 
-    const first = await api<{ id: number }>(server.baseUrl, kaiToken, `/orders/${faleoloOrderId}/bedside-checks`, {
-      patientMrn: 'KB100672',
-      patientDateOfBirth: '1979-07-28',
-      releaseCode: 'HK3-7QT',
-      settings: PUMP,
-    });
-    await api(server.baseUrl, kaiToken, `/orders/${faleoloOrderId}/bedside-checks/${first.id}/second`, {
-      username: 'rosa.adeyemi',
-      password: DEMO_PASSWORD,
-      settings: PUMP,
-    });
+    await startFaleoloPca(server.baseUrl, kaiToken, faleoloOrderId);
     await expect.poll(() => rowOf(page, 'FALEOLO').innerText(), { timeout: 2500 }).toContain('Outgoing: not signed');
 
-    await api(server.baseUrl, kaiToken, `/orders/${faleoloOrderId}/observations`, URGENT_OBSERVATION);
+    await callApi(server.baseUrl, kaiToken, 'POST', `/orders/${faleoloOrderId}/observations`, URGENT_OBSERVATION);
     const saved = Date.now();
     // Up among the urgent rows, after VALDIVIA in bed H05.
     await expect
@@ -162,7 +123,7 @@ describe('handover board', () => {
 
     // Mantine's chip is a visually hidden checkbox: the label is what a person clicks.
     const onlyFlagged = page.getByRole('checkbox', { name: 'Only flagged' });
-    const answer = await api<BoardAnswer>(server.baseUrl, kaiToken, `/wards/${HARBOUR}/handover`);
+    const answer = await callApi<BoardAnswer>(server.baseUrl, kaiToken, 'GET', `/wards/${HARBOUR}/handover`);
     const flagged = flaggedCount(answer);
     expect(flagged).toBeLessThan(answer.rows.length);
     await page.locator('label', { hasText: /^Only flagged$/ }).click();
@@ -216,7 +177,7 @@ describe('handover board', () => {
 
     await expect.poll(() => rowOf(mei.page, 'FALEOLO').innerText(), { timeout: 2500 }).toContain('Incoming ✓ Rosa Adeyemi (pump checked)');
     expect(await rowOf(mei.page, 'FALEOLO').innerText()).toContain('Outgoing ✓ Kai Mendes');
-    const answer = await api<BoardAnswer>(server.baseUrl, kaiToken, `/wards/${HARBOUR}/handover`);
+    const answer = await callApi<BoardAnswer>(server.baseUrl, kaiToken, 'GET', `/wards/${HARBOUR}/handover`);
     await mei.page
       .getByTestId('signoff-progress')
       .filter({ hasText: confirmedText(answer) })
@@ -234,7 +195,7 @@ describe('handover board', () => {
       .filter({ hasText: /(Day|Night) shift, .* · Printed .* by Mei Tan · / })
       .waitFor();
     const sheet = page.getByRole('table', { name: 'Handover sheet' });
-    const answer = await api<BoardAnswer>(server.baseUrl, kaiToken, `/wards/${HARBOUR}/handover`);
+    const answer = await callApi<BoardAnswer>(server.baseUrl, kaiToken, 'GET', `/wards/${HARBOUR}/handover`);
     expect(await sheet.locator('tbody tr').count()).toBe(answer.rows.length);
     expect(await sheet.locator('tbody tr').nth(1).innerText()).toMatch(/^H07\s+Urgent[\s\S]*FALEOLO, Tavita/);
     await sheet.getByText(/^Decision support only:/).waitFor();

@@ -1,61 +1,24 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD, openBrowser, signIn, signInHome, snapshot as saveSnapshot, type BrowserSession } from './support/browser.js';
+import { openBrowser, signIn, signInHome, snapshot as saveSnapshot, type BrowserSession } from './support/browser.js';
+import { apiToken, callApi } from './support/api.js';
+import { startFaleoloPca } from './support/demo-pca.js';
 import { startServer, type RunningServer } from './support/server.js';
 import { readyDialog } from './support/dialog.js';
 
-// The demo's verified order: FALEOLO, Tavita (Harbour bed H07), HYDROmorphone 0.2 mg/mL, demand
-// 0.2 mg, lockout 10 min, basal 0.1 mg/h, 4-hour limit 6 mg, a ready 50 mL syringe HK3-7QT.
-// The demo has no running PCA, so the API starts this one (both bedside checks) before the UI.
-const PUMP = {
-  drugId: 2,
-  concentrationPerMl: 0.2,
-  syringeVolumeMl: 50,
-  loadingDose: null,
-  demandDose: 0.2,
-  lockoutMinutes: 10,
-  basalRatePerHour: 0.1,
-  oneHourLimit: null,
-  fourHourLimit: 6,
-};
-
+// The demo's verified order for FALEOLO, Tavita (support/demo-pca.ts): the API starts it (both
+// bedside checks) before the UI, so each observation here is the first of a fresh syringe.
 type OrderSummary = { id: number; patientId: number; drugName: string; status: string };
 type Message = { subject: string; to: string };
 
-async function api<T>(server: RunningServer, token: string | null, method: string, path: string, body?: unknown): Promise<T> {
-  const response = await fetch(`${server.baseUrl}/api${path}`, {
-    method,
-    headers: { 'Content-Type': 'application/json', ...(token ? { Authorization: `Bearer ${token}` } : {}) },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-  const json = (await response.json()) as T;
-  if (!response.ok) throw new Error(`${method} ${path} answered ${response.status}: ${JSON.stringify(json)}`);
-  return json;
-}
-
-async function login(server: RunningServer, username: string): Promise<string> {
-  const { accessToken } = await api<{ accessToken: string }>(server, null, 'POST', '/auth/login', { username, password: DEMO_PASSWORD });
-  return accessToken;
-}
-
 /** Both bedside checks through the API: the order becomes active with its syringe in use. */
 async function startDemoPca(server: RunningServer): Promise<OrderSummary> {
-  const kai = await login(server, 'kai.mendes');
-  const verified = await api<OrderSummary[]>(server, kai, 'GET', '/orders?status=verified');
+  const kai = await apiToken(server.baseUrl, 'kai.mendes');
+  const verified = await callApi<OrderSummary[]>(server.baseUrl, kai, 'GET', '/orders?status=verified');
   const order = verified.find((candidate) => candidate.drugName === 'hydromorphone');
   if (!order) throw new Error('The demo has no verified hydromorphone order');
-  const check = await api<{ id: number }>(server, kai, 'POST', `/orders/${order.id}/bedside-checks`, {
-    patientMrn: 'KB100672',
-    patientDateOfBirth: '1979-07-28',
-    releaseCode: 'HK3-7QT',
-    settings: PUMP,
-  });
-  await api(server, kai, 'POST', `/orders/${order.id}/bedside-checks/${check.id}/second`, {
-    username: 'rosa.adeyemi',
-    password: DEMO_PASSWORD,
-    settings: PUMP,
-  });
-  const started = await api<OrderSummary>(server, kai, 'GET', `/orders/${order.id}`);
+  await startFaleoloPca(server.baseUrl, kai, order.id);
+  const started = await callApi<OrderSummary>(server.baseUrl, kai, 'GET', `/orders/${order.id}`);
   expect(started.status).toBe('active');
   return started;
 }
@@ -164,11 +127,11 @@ describe('observations: flags, usage charts and acknowledgement', () => {
   });
 
   it('e-mails the urgent flag', async () => {
-    const token = await login(server, 'sam.rivera');
+    const token = await apiToken(server.baseUrl, 'sam.rivera');
     await expect
       .poll(
         async () =>
-          (await api<Message[]>(server, token, 'GET', '/dev/mailbox')).find((message) =>
+          (await callApi<Message[]>(server.baseUrl, token, 'GET', '/dev/mailbox')).find((message) =>
             message.subject.startsWith('URGENT: Sedation level 3'),
           )?.subject,
         {
@@ -280,9 +243,9 @@ describe('observations: flags, usage charts and acknowledgement', () => {
     await page.getByRole('button', { name: 'Save' }).click();
     await page.getByText('Ward policy saved').waitFor();
     await page.getByTestId('default-spo2Threshold').getByText('Changed locally').waitFor();
-    const token = await login(server, 'sam.rivera');
+    const token = await apiToken(server.baseUrl, 'sam.rivera');
     const wardId = Number(new URL(page.url()).searchParams.get('ward'));
-    expect((await api<{ spo2Threshold: number }>(server, token, 'GET', `/wards/${wardId}/policy`)).spo2Threshold).toBe(92);
+    expect((await callApi<{ spo2Threshold: number }>(server.baseUrl, token, 'GET', `/wards/${wardId}/policy`)).spo2Threshold).toBe(92);
     // The change is audited, and the screen shows who changed what beneath the form.
     const recent = page.getByRole('region', { name: 'Recent changes' });
     await recent.getByText('90 → 92').waitFor();
