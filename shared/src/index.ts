@@ -5,6 +5,7 @@ export * from './wards/ward.schema.js';
 export * from './patients/patient.schema.js';
 export * from './patients/age.js';
 export * from './patients/patient-display.js';
+export * from './patients/patient-factors.js';
 export * from './drugs/drug.schema.js';
 export * from './api/api-error.schema.js';
 export * from './auth/demo-accounts.schema.js';

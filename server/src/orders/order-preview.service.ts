@@ -2,10 +2,10 @@ import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import type { DataSource } from 'typeorm';
 import {
-  ageInYears,
   checkOrder,
   deriveOrderValues,
   formatDose,
+  patientFactorsOf,
   tallMan,
   type Finding,
   type OrderDerivedValues,
@@ -41,17 +41,13 @@ export class OrderPreviewService {
     if (!drug) throw fieldError('drugId', `No drug with id ${fields.drugId}`);
 
     const regimen: Regimen = { ...fields };
-    const factors = {
-      weightKg: patient.weightKg,
-      ageYears: ageInYears(patient.dateOfBirth),
-      opioidTolerant: patient.opioidTolerant,
-      sleepApnoea: patient.sleepApnoea,
-      otherSedatives: patient.otherSedatives,
-    };
+    const now = new Date();
+    const factors = patientFactorsOf(patient, now);
+    const context = { drug: { id: drug.id, genericName: drug.genericName }, today: now.toISOString().slice(0, 10) };
     const rule = await this.library.findActiveRule(patient.wardId, drug.id, fields.concentrationPerMl);
     const findings: Finding[] = rule
-      ? checkOrder(regimen, { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits }, factors)
-      : [missingRuleFinding(drug, fields), ...checkOrder(regimen, { doseUnit: drug.doseUnit, perKg: false, limits: {} }, factors)];
+      ? checkOrder(regimen, { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits }, factors, context)
+      : [missingRuleFinding(drug, fields), ...checkOrder(regimen, { doseUnit: drug.doseUnit, perKg: false, limits: {} }, factors, context)];
     return { patient, drug, rule, findings, derived: deriveOrderValues(regimen) };
   }
 }

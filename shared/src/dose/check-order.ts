@@ -1,9 +1,11 @@
 import { DOSE_UNITS, type DoseUnit } from '../drugs/drug.schema.js';
+import { allergyFindings } from './allergy-findings.js';
+import { childFindings } from './child-findings.js';
 import { consistencyFindings } from './order-consistency-findings.js';
 import { limitFindings } from './order-limit-findings.js';
 import { invalidNumberFindings } from './order-number-findings.js';
 import { patientCautions } from './patient-cautions.js';
-import type { Finding, FindingSeverity, LimitRule, PatientFactors, Regimen } from './types.js';
+import type { Finding, FindingSeverity, LimitRule, OrderCheckContext, PatientFactors, Regimen } from './types.js';
 
 // Worst first, so a screen can show findings in the order they must be dealt with.
 const SEVERITY_ORDER: Readonly<Record<FindingSeverity, number>> = { error: 0, hard: 1, soft: 2, caution: 3 };
@@ -50,10 +52,11 @@ function weightFindings(p: PatientFactors): Finding[] {
 /**
  * Every finding for an order against its limit rule and patient: errors (unusable numbers, dose
  * unit, weight for a per-kg rule, contradictions within the regimen), hard and soft limit
- * findings per field (per kg where the rule is), and cautions from patient risk factors.
+ * findings per field (per kg where the rule is), cautions from patient risk factors, recorded
+ * allergies to the drug, and the checks that protect children and weight-based dosing.
  * Sorted worst first: error, hard, soft, caution.
  */
-export function checkOrder(r: Regimen, rule: LimitRule, p: PatientFactors): Finding[] {
+export function checkOrder(r: Regimen, rule: LimitRule, p: PatientFactors, context: OrderCheckContext = {}): Finding[] {
   const unitErrors = doseUnitFindings(r, rule);
   const weightErrors = rule.perKg ? weightFindings(p) : [];
   const findings = [
@@ -66,6 +69,8 @@ export function checkOrder(r: Regimen, rule: LimitRule, p: PatientFactors): Find
       doseUnitMatches: unitErrors.length === 0,
     }),
     ...patientCautions(r, p),
+    ...allergyFindings(context.drug, p.allergies),
+    ...childFindings(r, rule, p, context),
   ];
   return findings.sort((a, b) => SEVERITY_ORDER[a.severity] - SEVERITY_ORDER[b.severity]);
 }

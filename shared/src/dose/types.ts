@@ -34,12 +34,40 @@ export type LimitRule = {
   limits: Partial<Record<RegimenField, Limits>>;
 };
 
+export type AllergySeverity = 'intolerance' | 'allergy' | 'anaphylaxis';
+
+/** One recorded allergy: a formulary drug (by id) or free text, the reaction and how bad it was. */
+export type PatientAllergy = {
+  drugId: number | null;
+  substance: string;
+  reaction: string;
+  severity: AllergySeverity;
+};
+
 export type PatientFactors = {
   weightKg?: number | null;
+  /** yyyy-mm-dd the weight was measured; null when not recorded. */
+  weightMeasuredOn?: string | null;
   ageYears?: number | null;
+  /** Whole months of age, for growth references in children. */
+  ageMonths?: number | null;
+  sex?: 'female' | 'male' | 'other' | 'unknown';
   opioidTolerant: boolean;
+  /** The tolerance's basis: oral morphine mg a day taken for at least a week; null when naive or not recorded. */
+  toleranceOralMorphineMgPerDay?: number | null;
   sleepApnoea?: boolean;
   otherSedatives?: boolean;
+  allergies?: readonly PatientAllergy[];
+};
+
+/** What the check needs beyond regimen, rule and patient. Every field is optional so pure regimen checks stay simple. */
+export type OrderCheckContext = {
+  /** The ordered drug, matched against allergies by formulary id and name. */
+  drug?: { id: number; genericName: string };
+  /** yyyy-mm-dd the check runs on (weight age). */
+  today?: string;
+  /** The ward's rule for how old a weight may be, in days; null means the ward has none. */
+  weightMaxAgeDays?: number | null;
 };
 
 /** `hard` blocks signing, `soft` needs a reason, `error` is an order that cannot be right, `caution` informs. */

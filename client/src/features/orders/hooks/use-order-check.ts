@@ -7,10 +7,11 @@ import {
   type OrderDerivedValues,
   type OrderFields,
   type Patient,
+  patientFactorsOf,
 } from '@lockstep/shared';
 import { useOrderPreview } from '@/api/orders/preview-order';
 import { sameFindings } from '../utils/findings';
-import { localFindings, patientFactors, readOrderForm, type OrderFormValues } from '../utils/order-form';
+import { localFindings, readOrderForm, type OrderFormValues } from '../utils/order-form';
 
 /** Where the server's confirmation of the local check stands. */
 export type ServerCheck = 'waiting' | 'checking' | 'agrees' | 'differs' | 'failed';
@@ -41,7 +42,8 @@ export function useOrderCheck(values: OrderFormValues, rule: LimitRuleResponse |
   const local = useMemo(() => {
     if (!rule) return null;
     const today = new Date();
-    return { derived: deriveOrderValues(read.regimen), findings: localFindings(read, rule, patientFactors(patient, today)) };
+    const context = { drug: { id: rule.drugId, genericName: rule.drugName }, today: today.toISOString().slice(0, 10) };
+    return { derived: deriveOrderValues(read.regimen), findings: localFindings(read, rule, patientFactorsOf(patient, today), context) };
   }, [read, rule, patient]);
 
   const [settledFields] = useDebouncedValue(read.fields, SERVER_CHECK_DELAY_MS);

@@ -1,15 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import type { LimitRuleResponse, OrderDetail, Patient } from '@lockstep/shared';
-import {
-  emptyOrderForm,
-  localFindings,
-  nextDay,
-  patientFactors,
-  readAmount,
-  readOrderForm,
-  valuesFromOrder,
-  type OrderFormValues,
-} from './order-form';
+import { patientFactorsOf, type LimitRuleResponse, type OrderDetail, type Patient } from '@lockstep/shared';
+import { emptyOrderForm, localFindings, nextDay, readAmount, readOrderForm, valuesFromOrder, type OrderFormValues } from './order-form';
 
 // The demo Harbour morphine 1 mg/mL rule (invented demo values).
 const morphine: LimitRuleResponse = {
@@ -43,6 +34,7 @@ const noah: Patient = {
 };
 
 const today = new Date(2026, 2, 5, 9, 30);
+const context = { drug: { id: morphine.drugId, genericName: morphine.drugName }, today: '2026-03-05' };
 const form = (changes: Partial<OrderFormValues>): OrderFormValues => ({
   ...emptyOrderForm(today),
   ruleId: '4',
@@ -87,18 +79,18 @@ describe('reading the order form', () => {
     const read = readOrderForm(form({ demandDose: '' }), morphine, 1);
     expect(read.missing).toEqual(['demandDose']);
     expect(read.fields).toBeNull();
-    const findings = localFindings(read, morphine, patientFactors(noah, today));
+    const findings = localFindings(read, morphine, patientFactorsOf(noah, today), context);
     expect(findings.find((f) => f.field === 'demandDose')).toMatchObject({ severity: 'error', message: 'Demand dose is required' });
   });
 
   it('checks as the server does: 2.5 mg demand is past the soft maximum, 3.5 mg past the hard one', () => {
-    const factors = patientFactors(noah, today);
-    expect(factors).toEqual({ weightKg: 82, ageYears: 57, opioidTolerant: false, sleepApnoea: false, otherSedatives: false });
-    const soft = localFindings(readOrderForm(form({ demandDose: '2.5' }), morphine, 1), morphine, factors);
+    const factors = patientFactorsOf(noah, today);
+    expect(factors).toMatchObject({ weightKg: 82, ageYears: 57, opioidTolerant: false, sleepApnoea: false, otherSedatives: false });
+    const soft = localFindings(readOrderForm(form({ demandDose: '2.5' }), morphine, 1), morphine, factors, context);
     expect(soft).toEqual([
       expect.objectContaining({ field: 'demandDose', severity: 'soft', message: 'Demand dose 2.5 mg is above the soft maximum 2 mg' }),
     ]);
-    const hard = localFindings(readOrderForm(form({ demandDose: '3.5' }), morphine, 1), morphine, factors);
+    const hard = localFindings(readOrderForm(form({ demandDose: '3.5' }), morphine, 1), morphine, factors, context);
     expect(hard[0]).toMatchObject({ field: 'demandDose', severity: 'hard' });
   });
 });

@@ -1,5 +1,4 @@
 import {
-  ageInYears,
   checkOrder,
   REGIMEN_FIELD_LABELS,
   REGIMEN_FIELDS,
@@ -7,7 +6,7 @@ import {
   type LimitRuleResponse,
   type OrderDetail,
   type OrderFields,
-  type Patient,
+  type OrderCheckContext,
   type PatientFactors,
   type Regimen,
   type RegimenField,
@@ -147,22 +146,17 @@ export function readOrderForm(values: OrderFormValues, rule: LimitRuleResponse |
   return { regimen, missing, fields };
 }
 
-export function patientFactors(patient: Patient, today: Date): PatientFactors {
-  return {
-    weightKg: patient.weightKg,
-    ageYears: ageInYears(patient.dateOfBirth, today),
-    opioidTolerant: patient.opioidTolerant,
-    sleepApnoea: patient.sleepApnoea,
-    otherSedatives: patient.otherSedatives,
-  };
-}
-
 /**
  * The same check the server runs, here on every keystroke: `checkOrder` against the rule and the
  * patient. A required field left empty reads "… is required" rather than "… must be a number".
  */
-export function localFindings(read: ReadOrderForm, rule: LimitRuleResponse, factors: PatientFactors): Finding[] {
-  const findings = checkOrder(read.regimen, { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits }, factors);
+export function localFindings(
+  read: ReadOrderForm,
+  rule: LimitRuleResponse,
+  factors: PatientFactors,
+  context: OrderCheckContext,
+): Finding[] {
+  const findings = checkOrder(read.regimen, { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits }, factors, context);
   return findings.map((finding) =>
     read.missing.includes(finding.field as RegimenField) && finding.code === 'number.not-finite'
       ? { ...finding, code: 'number.missing', message: `${REGIMEN_FIELD_LABELS[finding.field as RegimenField]} is required` }
