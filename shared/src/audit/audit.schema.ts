@@ -23,6 +23,7 @@ export const AUDIT_ACTION_LABELS = {
   'library-version.submit': 'Library submitted for approval',
   'library-version.withdraw': 'Library submission withdrawn',
   'library-version.approve': 'Library approved and made active',
+  'library-version.send-back': 'Library sent back to draft with a comment',
   'library-version.delete': 'Library draft deleted',
   'order.create': 'Order written',
   'order.revise': 'Order revised',

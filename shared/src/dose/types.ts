@@ -6,6 +6,11 @@ export type Limits = {
   softMin?: number | null;
   softMax?: number | null;
   hardMax?: number | null;
+  /**
+   * Per-kg rules only: the most this field may ever be, in the dose unit itself (not per kg),
+   * whatever the weight. Never above the adult rule's hard maximum for the same drug and concentration.
+   */
+  ceiling?: number | null;
 };
 
 export type RegimenField =

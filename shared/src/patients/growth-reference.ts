@@ -1,0 +1,138 @@
+/**
+ * Weight-for-age reference for children from 2 to 20 years: the CDC 2000 growth charts
+ * (National Center for Health Statistics, CDC; Kuczmarski RJ et al., "2000 CDC Growth Charts for
+ * the United States: Methods and Development", Vital Health Stat 11(246), 2002), LMS parameters as
+ * published in the chart data file `wtage.csv` ("Weight-for-age charts, 2 to 20 years, LMS
+ * parameters and selected smoothed weight percentiles in kilograms, by sex and age").
+ *
+ * Only the yearly rows are embedded (the file has one row per half month); between rows L, M and S
+ * are interpolated linearly. `ageMonths` in the rows is the file's `Agemos`: 24.5 is the middle of
+ * the month from 24 to 25 months, so a child of whole months m is looked up at m + 0.5.
+ */
+
+export type GrowthSex = 'male' | 'female';
+
+/** One row of `wtage.csv`: age in months (Agemos), the Box-Cox power L, the median M (kg), the coefficient of variation S. */
+export type LmsRow = { ageMonths: number; l: number; m: number; s: number };
+
+/** CDC 2000 `wtage.csv`, Sex = 1 (male), rows at Agemos 24, 36.5, 48.5 … 228.5 and 240. */
+const CDC_WEIGHT_FOR_AGE_MALE: readonly LmsRow[] = [
+  { ageMonths: 24, l: -0.20615245, m: 12.6707633, s: 0.108125811 },
+  { ageMonths: 36.5, l: -0.621319726, m: 14.40262749, s: 0.111874514 },
+  { ageMonths: 48.5, l: -0.915241589, m: 16.31676727, s: 0.11995532 },
+  { ageMonths: 60.5, l: -1.000453886, m: 18.48592413, s: 0.129879257 },
+  { ageMonths: 72.5, l: -1.087471249, m: 20.77769565, s: 0.139142773 },
+  { ageMonths: 84.5, l: -1.236497304, m: 23.16741888, s: 0.147337375 },
+  { ageMonths: 96.5, l: -1.351813296, m: 25.75256528, s: 0.155973912 },
+  { ageMonths: 108.5, l: -1.339405453, m: 28.68130005, s: 0.166659247 },
+  { ageMonths: 120.5, l: -1.206688407, m: 32.08799062, s: 0.17892874 },
+  { ageMonths: 132.5, l: -1.019277299, m: 36.07262569, s: 0.190029545 },
+  { ageMonths: 144.5, l: -0.836961905, m: 40.67443658, s: 0.196591612 },
+  { ageMonths: 156.5, l: -0.698166437, m: 45.81336172, s: 0.196662115 },
+  { ageMonths: 168.5, l: -0.631876912, m: 51.23096332, s: 0.190808471 },
+  { ageMonths: 180.5, l: -0.665609025, m: 56.49095862, s: 0.181665781 },
+  { ageMonths: 192.5, l: -0.801993069, m: 61.09536847, s: 0.172459052 },
+  { ageMonths: 204.5, l: -0.973244762, m: 64.69961427, s: 0.16564009 },
+  { ageMonths: 216.5, l: -1.066224038, m: 67.28992603, s: 0.161922819 },
+  { ageMonths: 228.5, l: -1.023291946, m: 69.19467288, s: 0.160138158 },
+  { ageMonths: 240, l: -0.91648762, m: 70.59761453, s: 0.161476792 },
+];
+
+/** CDC 2000 `wtage.csv`, Sex = 2 (female), the same ages. */
+const CDC_WEIGHT_FOR_AGE_FEMALE: readonly LmsRow[] = [
+  { ageMonths: 24, l: -0.73533951, m: 12.05503983, s: 0.107399495 },
+  { ageMonths: 36.5, l: -1.024471278, m: 13.94108332, s: 0.119491669 },
+  { ageMonths: 48.5, l: -1.177029925, m: 15.87823668, s: 0.131802186 },
+  { ageMonths: 60.5, l: -1.287691525, m: 18.02313904, s: 0.141190842 },
+  { ageMonths: 72.5, l: -1.326763834, m: 20.33635961, s: 0.149589838 },
+  { ageMonths: 84.5, l: -1.265548787, m: 22.86804258, s: 0.159693163 },
+  { ageMonths: 96.5, l: -1.127684095, m: 25.7570168, s: 0.172147043 },
+  { ageMonths: 108.5, l: -0.970685789, m: 29.14291171, s: 0.185201039 },
+  { ageMonths: 120.5, l: -0.846872805, m: 33.06392318, s: 0.195947008 },
+  { ageMonths: 132.5, l: -0.787374433, m: 37.39088668, s: 0.201971282 },
+  { ageMonths: 144.5, l: -0.807599577, m: 41.82797963, s: 0.202298783 },
+  { ageMonths: 156.5, l: -0.915513542, m: 45.98368656, s: 0.197363191 },
+  { ageMonths: 168.5, l: -1.111606122, m: 49.49075409, s: 0.188559804 },
+  { ageMonths: 180.5, l: -1.376478254, m: 52.13568193, s: 0.177946804 },
+  { ageMonths: 192.5, l: -1.651248208, m: 53.94543725, s: 0.168124538 },
+  { ageMonths: 204.5, l: -1.838091576, m: 55.18216811, s: 0.161752634 },
+  { ageMonths: 216.5, l: -1.850946286, m: 56.22969564, s: 0.16036959 },
+  { ageMonths: 228.5, l: -1.693267093, m: 57.35175792, s: 0.163138124 },
+  { ageMonths: 240, l: -1.51336185, m: 58.21897289, s: 0.166644749 },
+];
+
+const TABLES: Readonly<Record<GrowthSex, readonly LmsRow[]>> = { male: CDC_WEIGHT_FOR_AGE_MALE, female: CDC_WEIGHT_FOR_AGE_FEMALE };
+
+/** The reference's name, for messages. */
+export const WEIGHT_FOR_AGE_REFERENCE = 'CDC 2000 weight-for-age (2 to 20 years)';
+
+/** The youngest and oldest whole-month ages the table covers (24 months up to, not including, 240). */
+export const WEIGHT_FOR_AGE_MIN_MONTHS = 24;
+export const WEIGHT_FOR_AGE_MAX_MONTHS = 239;
+
+/**
+ * A weight whose z-score is beyond ±3 (outside about the 0.1st to 99.9th centile) is asked to be
+ * checked. Common practice for a re-check prompt, not a published cut-off: the WHO calls weight-
+ * for-age below −3 z "severely underweight" (WHO Training Course on Child Growth Assessment, 2008),
+ * and the CDC's own cut-offs for biologically implausible weights (modified z below −5 or above +8;
+ * CDC, "Cut-offs to define outliers in the 2000 CDC Growth Charts", from memory) are meant for
+ * cleaning survey data and would let a weight typed in pounds through.
+ */
+export const IMPLAUSIBLE_WEIGHT_Z = 3;
+
+/** L, M and S for an age in months (Agemos), interpolated linearly between the embedded rows; null outside 24–240. */
+export function weightForAgeLms(sex: GrowthSex, ageMonths: number): LmsRow | null {
+  const rows = TABLES[sex];
+  if (!Number.isFinite(ageMonths) || ageMonths < rows[0].ageMonths || ageMonths > rows[rows.length - 1].ageMonths) return null;
+  const upper = rows.findIndex((row) => row.ageMonths >= ageMonths);
+  const b = rows[upper];
+  if (b.ageMonths === ageMonths || upper === 0) return b;
+  const a = rows[upper - 1];
+  const t = (ageMonths - a.ageMonths) / (b.ageMonths - a.ageMonths);
+  const mix = (x: number, y: number) => x + (y - x) * t;
+  return { ageMonths, l: mix(a.l, b.l), m: mix(a.m, b.m), s: mix(a.s, b.s) };
+}
+
+/**
+ * The LMS z-score of a measurement: ((X/M)^L − 1) / (L·S), or ln(X/M)/S when L is 0 (Cole TJ,
+ * "The LMS method for constructing normalized growth standards", Eur J Clin Nutr 1990;44:45-60).
+ */
+export function lmsZScore(value: number, lms: LmsRow): number {
+  if (lms.l === 0) return Math.log(value / lms.m) / lms.s;
+  return ((value / lms.m) ** lms.l - 1) / (lms.l * lms.s);
+}
+
+/** The weight at a z-score: M·(1 + L·S·z)^(1/L) (the inverse of `lmsZScore`). */
+export function lmsValueAt(z: number, lms: LmsRow): number {
+  if (lms.l === 0) return lms.m * Math.exp(lms.s * z);
+  return lms.m * (1 + lms.l * lms.s * z) ** (1 / lms.l);
+}
+
+export type WeightPlausibility =
+  | { kind: 'plausible'; zScore: number }
+  | { kind: 'implausible'; zScore: number; low: number; high: number; median: number }
+  /** The age is outside the reference (under 2 years or 20 and over): the weight is not checked. */
+  | { kind: 'not-checked'; reason: string };
+
+/**
+ * Whether a child's weight is plausible for their age (whole months) and sex against the CDC 2000
+ * weight-for-age reference: outside ±3 z is implausible. With a sex other than female or male the
+ * weight is plausible if it is plausible for either. Never answers "plausible" for an age the
+ * table does not cover.
+ */
+export function weightPlausibility(weightKg: number, ageMonths: number, sex: string | null | undefined): WeightPlausibility {
+  if (!Number.isFinite(ageMonths) || ageMonths < WEIGHT_FOR_AGE_MIN_MONTHS || ageMonths > WEIGHT_FOR_AGE_MAX_MONTHS) {
+    return { kind: 'not-checked', reason: `the ${WEIGHT_FOR_AGE_REFERENCE} reference covers ages 2 to 20 years` };
+  }
+  const sexes: GrowthSex[] = sex === 'male' || sex === 'female' ? [sex] : ['female', 'male'];
+  const results = sexes.map((s) => {
+    const lms = weightForAgeLms(s, ageMonths + 0.5)!;
+    return { lms, z: lmsZScore(weightKg, lms) };
+  });
+  const plausible = results.find((result) => Number.isFinite(result.z) && Math.abs(result.z) <= IMPLAUSIBLE_WEIGHT_Z);
+  if (plausible) return { kind: 'plausible', zScore: plausible.z };
+  const closest = results.reduce((a, b) => (Math.abs(a.z) <= Math.abs(b.z) ? a : b));
+  const low = Math.min(...results.map((result) => lmsValueAt(-IMPLAUSIBLE_WEIGHT_Z, result.lms)));
+  const high = Math.max(...results.map((result) => lmsValueAt(IMPLAUSIBLE_WEIGHT_Z, result.lms)));
+  return { kind: 'implausible', zScore: closest.z, low, high, median: closest.lms.m };
+}
