@@ -39,6 +39,8 @@ export * from './library/diff-library.js';
 export * from './library/library-csv.js';
 export * from './library/limit-bounds.js';
 export * from './library/large-change.js';
+export * from './library/limit-bounds.js';
+export * from './library/large-change.js';
 export * from './orders/order-fields.schema.js';
 export * from './orders/derive-order-values.js';
 export * from './orders/order-status.js';

@@ -24,6 +24,7 @@ export const AUDIT_ACTION_LABELS = {
   'library-version.withdraw': 'Library submission withdrawn',
   'library-version.approve': 'Library approved and made active',
   'library-version.send-back': 'Library sent back to draft with a comment',
+  'library-version.send-back': 'Library sent back to draft with a comment',
   'library-version.delete': 'Library draft deleted',
   'order.create': 'Order written',
   'order.revise': 'Order revised',

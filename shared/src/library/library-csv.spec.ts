@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Drug } from '../drugs/drug.schema.js';
+import type { NamedRule } from './diff-library.js';
 import { checkCsvHeader, csvRowsFromRules, LIBRARY_CSV_COLUMNS, rulesFromCsvRecords, type CsvRecord } from './library-csv.js';
 
 const drugs: Drug[] = [
@@ -84,6 +85,52 @@ describe('library CSV', () => {
       'hard_max',
     ]);
     expect(problems.map((p) => p.column)).toEqual(['concentration_per_ml', 'concentration']);
+  });
+
+  it('refuses a limit too long to be a number, or outside its bound, naming the cell (never read as no limit)', () => {
+    const { rules, problems } = rulesFromCsvRecords(
+      [
+        row({ hard_max: '9'.repeat(400) }),
+        row({ parameter: 'lockout_minutes', soft_min: '5', soft_max: '10', hard_max: '100000' }),
+        row({ concentration_per_ml: '1'.repeat(400) }),
+      ],
+      drugs,
+    );
+    expect(rules).toEqual([]);
+    expect(problems).toEqual([
+      { row: 2, column: 'hard_max', message: '400 digits is too long to be a limit' },
+      { row: 3, column: 'hard_max', message: 'lockout_minutes: a limit is at most 1440 minutes; this is 100000' },
+      { row: 4, column: 'concentration_per_ml', message: 'Concentration must be a number more than 0' },
+    ]);
+  });
+
+  it('holds at most 500 rules, said once at the row starting rule 501', () => {
+    const records = Array.from({ length: 999 }, (_, i) => row({ concentration_per_ml: String(i + 1) }));
+    const { problems } = rulesFromCsvRecords(records, drugs);
+    expect(problems).toEqual([
+      {
+        row: 502,
+        column: 'drug',
+        message: 'A library version holds at most 500 rules (one per drug and concentration); this row starts rule 501',
+      },
+    ]);
+  });
+
+  it('exports tiny and large values as plain decimals that import back to the same rules', () => {
+    const tiny: NamedRule = {
+      drugId: 1,
+      drugName: 'morphine',
+      concentrationPerMl: 0.0000001,
+      doseUnit: 'mg',
+      perKg: true,
+      limits: { demandDose: { hardMin: 0.0000001, softMax: 0.1 + 0.2, hardMax: 10_000 }, lockoutMinutes: { hardMax: 1440 } },
+    };
+    const [header, ...body] = csvRowsFromRules([tiny]);
+    expect(body[0]).toEqual(['morphine', '0.0000001', 'mg', 'yes', 'demand_dose', '0.0000001', '', '0.30000000000000004', '10000']);
+    const records = body.map((cells) => Object.fromEntries(header.map((column, i) => [column, cells[i]])));
+    const back = rulesFromCsvRecords(records, drugs);
+    expect(back.problems).toEqual([]);
+    expect(back.rules).toEqual([tiny]);
   });
 
   it('exports rows that import back to the same rules', () => {

@@ -3,6 +3,7 @@ import { REGIMEN_FIELDS } from '../dose/regimen-fields.js';
 import type { Limits, RegimenField } from '../dose/types.js';
 import type { NamedRule } from './diff-library.js';
 import { LIMIT_KEYS, type LimitKey } from './library.schema.js';
+import { concentrationProblem, LIBRARY_MAX_RULES, limitValueProblem, plainDecimal } from './limit-bounds.js';
 import { ruleKey } from './rule-key.js';
 import { limitOrderProblems } from './validate-limit-rules.js';
 
@@ -74,8 +75,8 @@ export function rulesFromCsvRecords(records: readonly CsvRecord[], drugs: readon
         cell('drug') ? `Unknown drug ${cell('drug')}; known: ${drugs.map((d) => d.genericName).join(', ')}` : 'Enter the drug',
       );
     const concentration = parseNumber(cell('concentration_per_ml'));
-    if (concentration === undefined || concentration === null || concentration <= 0)
-      problem('concentration_per_ml', 'Concentration must be a number more than 0');
+    const badConcentration = concentration == null ? 'Concentration must be a number more than 0' : concentrationProblem(concentration);
+    if (badConcentration) problem('concentration_per_ml', badConcentration);
     const doseUnit = cell('dose_unit');
     if (doseUnit !== 'mg' && doseUnit !== 'mcg') problem('dose_unit', 'Dose unit must be mg or mcg');
     else if (drug && drug.doseUnit !== doseUnit) problem('dose_unit', `${drug.genericName} is dosed in ${drug.doseUnit}, not ${doseUnit}`);
@@ -90,7 +91,14 @@ export function rulesFromCsvRecords(records: readonly CsvRecord[], drugs: readon
       const value = parseNumber(cell(LIMIT_COLUMNS[key]));
       if (value === undefined || (value !== null && value < 0))
         problem(LIMIT_COLUMNS[key], 'A limit must be empty or a number of 0 or more');
-      else if (value !== null) limits[key] = value;
+      else if (value === null) continue;
+      // Too many digits read as Infinity, which must never be stored (it would read as "no limit").
+      else if (!Number.isFinite(value)) problem(LIMIT_COLUMNS[key], `${cell(LIMIT_COLUMNS[key]).length} digits is too long to be a limit`);
+      else {
+        const outOfRange = field ? limitValueProblem(field, value, cell('parameter')) : null;
+        if (outOfRange) problem(LIMIT_COLUMNS[key], outOfRange);
+        else limits[key] = value;
+      }
     }
     if (LIMIT_KEYS.every((key) => limits[key] === undefined) && !problems.some((p) => p.row === row)) {
       problem('hard_min', 'The row sets no limit: fill at least one of hard_min, soft_min, soft_max, hard_max');
@@ -104,6 +112,15 @@ export function rulesFromCsvRecords(records: readonly CsvRecord[], drugs: readon
     const key = ruleKey({ drugId: drug.id, concentrationPerMl: concentration });
     const existing = rules.get(key);
     if (!existing) {
+      if (rules.size === LIBRARY_MAX_RULES) {
+        // Said once, at the row that would start one rule too many.
+        if (!problems.some((p) => p.message.startsWith('A library version holds at most')))
+          problem(
+            'drug',
+            `A library version holds at most ${LIBRARY_MAX_RULES} rules (one per drug and concentration); this row starts rule ${LIBRARY_MAX_RULES + 1}`,
+          );
+        return;
+      }
       const rule: NamedRule = {
         drugId: drug.id,
         drugName: drug.genericName,
@@ -137,11 +154,12 @@ export function csvRowsFromRules(rules: readonly NamedRule[]): string[][] {
       if (!limits || LIMIT_KEYS.every((key) => limits[key] == null)) continue;
       rows.push([
         rule.drugName,
-        String(rule.concentrationPerMl),
+        plainDecimal(rule.concentrationPerMl),
         rule.doseUnit,
         rule.perKg ? 'yes' : 'no',
         CSV_PARAMETERS[field],
-        ...LIMIT_KEYS.map((key) => (limits[key] == null ? '' : String(limits[key]))),
+        // Plain decimals with every digit: 1e-7 is written 0.0000001, which the importer reads back exactly.
+        ...LIMIT_KEYS.map((key) => (limits[key] == null ? '' : plainDecimal(limits[key]))),
       ]);
     }
   }

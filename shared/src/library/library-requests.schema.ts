@@ -1,8 +1,10 @@
 import { z } from 'zod';
 import { momentSchema } from '../api/date-time.js';
 import { atMost, isPlainObject, isWhole, listOf, must } from '../api/request-rules.js';
+import { reasonText } from '../orders/order.schema.js';
 import { signedRequestSchema } from '../orders/orders-requests.schema.js';
 import { limitRuleInputSchema } from './library.schema.js';
+import { LIBRARY_MAX_RULES } from './limit-bounds.js';
 
 const note = z.string('note must be text').refine(atMost(1000), 'The note is at most 1,000 characters').nullish();
 const wardId = z
@@ -18,7 +20,7 @@ export type CreateDraftRequest = z.infer<typeof createDraftSchema>;
 export const replaceRulesSchema = z.strictObject({
   rules: listOf(
     limitRuleInputSchema,
-    { required: 'rules is required', type: 'rules must be a list', max: [500, 'A library version holds at most 500 rules'] },
+    { required: 'rules is required', type: 'rules must be a list', max: [LIBRARY_MAX_RULES, 'A library version holds at most 500 rules'] },
     [[isPlainObject, 'Each rule must be an object']],
   ),
 });
@@ -35,6 +37,12 @@ export const approveVersionSchema = signedRequestSchema.extend({
   ),
 });
 export type ApproveVersionRequest = z.infer<typeof approveVersionSchema>;
+
+/** A reviewing pharmacist sends a submitted version back to draft, signed, saying what to change. */
+export const sendBackVersionSchema = signedRequestSchema.extend({
+  comment: reasonText('Say what needs changing', 'comment must be text', 'The comment is at most 1,000 characters'),
+});
+export type SendBackVersionRequest = z.infer<typeof sendBackVersionSchema>;
 
 /** A multipart field repeated is a list of texts; a single one is read as a number, as the server's @Type(() => Number) does. */
 const asNumber = (value: unknown) => (value === null || value === undefined || Array.isArray(value) ? value : Number(value));

@@ -3,9 +3,11 @@ import { canDoLibraryAction, LIBRARY_TRANSITIONS, LIBRARY_VERSION_ACTIONS, libra
 import { LIBRARY_STATUSES } from './library.schema.js';
 
 describe('library version lifecycle', () => {
-  it('lets a draft be edited, submitted or discarded, and a submitted version be withdrawn or approved; nothing else', () => {
+  it('lets a draft be edited, submitted or discarded, and a submitted version be withdrawn, approved or sent back; nothing else', () => {
     expect(libraryVersionActions('draft')).toEqual(['edit', 'submit', 'discard']);
-    expect(libraryVersionActions('pending_approval')).toEqual(['withdraw', 'approve']);
+    expect(libraryVersionActions('pending_approval')).toEqual(['withdraw', 'approve', 'sendBack']);
+    expect(LIBRARY_VERSION_ACTIONS.sendBack.to).toBe('draft');
+    expect(canDoLibraryAction('sendBack', 'draft')).toBe(false);
     expect(libraryVersionActions('active')).toEqual([]);
     expect(libraryVersionActions('retired')).toEqual([]);
     expect(canDoLibraryAction('approve', 'draft')).toBe(false);

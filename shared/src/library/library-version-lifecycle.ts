@@ -1,11 +1,12 @@
 import type { LibraryStatus } from './library.schema.js';
 
-export type LibraryVersionAction = 'edit' | 'submit' | 'withdraw' | 'discard' | 'approve';
+export type LibraryVersionAction = 'edit' | 'submit' | 'withdraw' | 'discard' | 'approve' | 'sendBack';
 
 /**
  * The dose-limit library version lifecycle, as a table like the order one: draft → awaiting
- * approval → active → retired (when a newer version is approved), back to draft by withdrawing,
- * or discarded while a draft. What each action needs and leads to; `null` is "deleted".
+ * approval → active → retired (when a newer version is approved), back to draft by withdrawing
+ * (its authors) or by being sent back with a comment (a reviewing pharmacist), or discarded while
+ * a draft. What each action needs and leads to; `null` is "deleted".
  */
 export const LIBRARY_VERSION_ACTIONS: Readonly<
   Record<LibraryVersionAction, { from: LibraryStatus; to: LibraryStatus | null; what: string }>
@@ -15,6 +16,7 @@ export const LIBRARY_VERSION_ACTIONS: Readonly<
   withdraw: { from: 'pending_approval', to: 'draft', what: 'withdraw it' },
   discard: { from: 'draft', to: null, what: 'discard it' },
   approve: { from: 'pending_approval', to: 'active', what: 'approve it' },
+  sendBack: { from: 'pending_approval', to: 'draft', what: 'send it back' },
 };
 
 /** Statuses a version moves between; an active version retires when another is approved for its ward. */

@@ -101,8 +101,37 @@ export const libraryVersionSchema = z.object({
 });
 export type LibraryVersion = z.infer<typeof libraryVersionSchema>;
 
+/** What a pharmacist did to a version's content; none of them may approve it. */
+export const LIBRARY_CONTRIBUTIONS = ['created', 'imported', 'edited', 'submitted'] as const;
+export type LibraryContribution = (typeof LIBRARY_CONTRIBUTIONS)[number];
+export const LIBRARY_CONTRIBUTION_LABELS: Record<LibraryContribution, string> = {
+  created: 'Created',
+  imported: 'Imported',
+  edited: 'Edited the rules',
+  submitted: 'Submitted',
+};
+export const libraryContributorSchema = z.object({
+  userId: z.number().int(),
+  userName: z.string(),
+  action: z.enum(LIBRARY_CONTRIBUTIONS),
+  at: z.string(),
+});
+export type LibraryContributor = z.infer<typeof libraryContributorSchema>;
+
+/** The last time a reviewing pharmacist sent the version back to draft, with their comment. */
+export const librarySendBackSchema = z.object({
+  byId: z.number().int(),
+  byName: z.string(),
+  at: z.string(),
+  comment: z.string(),
+});
+export type LibrarySendBack = z.infer<typeof librarySendBackSchema>;
+
 export const libraryVersionDetailSchema = libraryVersionSchema.extend({
   rules: z.array(limitRuleSchema),
+  /** Everyone who created, imported, edited or submitted it, oldest first. */
+  contributors: z.array(libraryContributorSchema),
+  sentBack: librarySendBackSchema.nullable(),
 });
 export type LibraryVersionDetail = z.infer<typeof libraryVersionDetailSchema>;
 

@@ -26,6 +26,15 @@ describe('validateLimitRules', () => {
     ]);
   });
 
+  it('refuses a limit or concentration that is infinite or beyond its bound, by path (never stored as no limit)', () => {
+    const wild = { ...morphine, concentrationPerMl: 1e6, limits: { demandDose: { hardMax: Infinity }, lockoutMinutes: { hardMin: 5000 } } };
+    expect(validateLimitRules([wild])).toEqual([
+      { path: 'rules.0.concentrationPerMl', message: 'Concentration is at most 10000 per mL; this is 1000000' },
+      { path: 'rules.0.limits.demandDose.hardMax', message: 'Demand dose: a limit must be a finite number' },
+      { path: 'rules.0.limits.lockoutMinutes.hardMin', message: 'Lockout: a limit is at most 1440 minutes; this is 5000' },
+    ]);
+  });
+
   it('refuses two rules for one drug at one concentration, but allows another concentration', () => {
     const other = { ...morphine, concentrationPerMl: 2 };
     expect(validateLimitRules([morphine, other])).toEqual([]);

@@ -1,13 +1,15 @@
 import { REGIMEN_FIELD_LABELS } from '../dose/regimen-fields.js';
 import type { Limits, RegimenField } from '../dose/types.js';
 import { LIMIT_KEYS, type LimitRuleInput, type RuleProblem } from './library.schema.js';
+import { concentrationProblem, limitValueProblem } from './limit-bounds.js';
 import { ruleKey } from './rule-key.js';
 
 const LIMIT_LABELS = { hardMin: 'hard minimum', softMin: 'soft minimum', softMax: 'soft maximum', hardMax: 'hard maximum' };
 
 /**
- * Problems that a well-typed set of rules can still have: limits out of order (hard minimum ≤
- * soft minimum ≤ soft maximum ≤ hard maximum, where present) and two rules for one drug at one
+ * Problems that a well-typed set of rules can still have: a limit or concentration that is not a
+ * finite number within its bound (limit-bounds.ts), limits out of order (hard minimum ≤ soft
+ * minimum ≤ soft maximum ≤ hard maximum, where present) and two rules for one drug at one
  * concentration. Paths are `rules.<index>.…`, so a form or CSV importer can point at the cell.
  */
 export function validateLimitRules(rules: readonly LimitRuleInput[]): RuleProblem[] {
@@ -22,11 +24,27 @@ export function validateLimitRules(rules: readonly LimitRuleInput[]): RuleProble
         message: `Rule ${index + 1} repeats rule ${first + 1}: one rule per drug and concentration`,
       });
     } else firstIndexByKey.set(key, index);
-
+    const badConcentration = concentrationProblem(rule.concentrationPerMl);
+    if (badConcentration) problems.push({ path: `rules.${index}.concentrationPerMl`, message: badConcentration });
     for (const [field, limits] of Object.entries(rule.limits) as [RegimenField, Limits | undefined][]) {
-      if (limits) problems.push(...limitOrderProblems(limits, `rules.${index}.limits.${field}`, REGIMEN_FIELD_LABELS[field]));
+      if (!limits) continue;
+      const path = `rules.${index}.limits.${field}`;
+      const outOfRange = limitRangeProblems(field, limits, path);
+      problems.push(...(outOfRange.length > 0 ? outOfRange : limitOrderProblems(limits, path, REGIMEN_FIELD_LABELS[field])));
     }
   });
+  return problems;
+}
+
+/** Each present limit must be a finite number from 0 to its field's bound (limit-bounds.ts). */
+export function limitRangeProblems(field: RegimenField, limits: Limits, path: string, label?: string): RuleProblem[] {
+  const problems: RuleProblem[] = [];
+  for (const key of LIMIT_KEYS) {
+    const value = limits[key];
+    if (value === null || value === undefined) continue;
+    const problem = limitValueProblem(field, value, label);
+    if (problem) problems.push({ path: `${path}.${key}`, message: problem });
+  }
   return problems;
 }
 
