@@ -4,6 +4,7 @@ import type { DataSource } from 'typeorm';
 import {
   checkOrder,
   deriveOrderValues,
+  duplicatePcaFinding,
   formatDose,
   patientFactorsOf,
   tallMan,
@@ -19,6 +20,7 @@ import { LibraryService } from '../library/library.service.js';
 import { Patient } from '../patients/entities/patient.entity.js';
 import type { OrderFieldsDto } from './dto/order-fields.dto.js';
 import { fieldError } from '../common/errors/field-error.js';
+import { findOpenPca } from './open-pca.js';
 
 /** Derived values and findings for an order against its ward's active library. Writes nothing. */
 @Injectable()
@@ -30,7 +32,9 @@ export class OrderPreviewService {
 
   async preview(fields: OrderFieldsDto): Promise<OrderPreview> {
     const { derived, findings, rule } = await this.evaluate(fields);
-    return { derived, findings, rule: rule ? toLimitRuleResponse(rule) : null };
+    // Signing answers 409 for a second open PCA; the preview shows the same refusal as a finding first.
+    const open = await findOpenPca(this.dataSource.manager, fields.patientId);
+    return { derived, findings: open ? [duplicatePcaFinding(open), ...findings] : findings, rule: rule ? toLimitRuleResponse(rule) : null };
   }
 
   /** Everything signing needs: the patient, drug, active rule, findings and derived values. */

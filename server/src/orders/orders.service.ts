@@ -29,6 +29,7 @@ import { PcaOrder } from './entities/pca-order.entity.js';
 import { orderAwaitingVerificationMail } from './order-notifications.js';
 import { OrderPreviewService } from './order-preview.service.js';
 import { statusConflict, transitionOrder } from './order-transitions.js';
+import { duplicatePcaConflict, findOpenPca } from './open-pca.js';
 import { orderAuditSummary } from './order-audit.js';
 import { recordAudit } from '../audit/record-audit.js';
 import { fieldErrors } from '../common/errors/field-error.js';
@@ -50,11 +51,14 @@ export class OrdersService {
   /** The server re-checks the order itself; hard and error findings refuse it, soft ones need a reason. */
   async create(dto: CreateOrderDto, prescriber: AuthUser, revising?: number): Promise<OrderDetail> {
     await this.users.verifySignature(prescriber.id, dto.signature.password);
+    await this.refuseSecondPca(this.dataSource.manager, dto.patientId, revising);
     const { findings, rule } = await this.previews.evaluate(dto);
     const overrides = checkSignable(findings, dto);
 
     const id = await this.dataSource.transaction(async (manager) => {
       const previous = revising === undefined ? null : await this.revisable(manager, revising, dto.patientId);
+      // Again inside the transaction: another prescriber may have signed one since the check above.
+      await this.refuseSecondPca(manager, dto.patientId, revising);
       const now = new Date();
       const { identifiers } = await manager.insert(PcaOrder, {
         patientId: dto.patientId,
@@ -193,6 +197,11 @@ export class OrdersService {
     const order = await manager.findOne(PcaOrder, { where: { id }, relations: DETAIL_RELATIONS });
     if (!order) throw new NotFoundException(`No order with id ${id}`);
     return order;
+  }
+
+  private async refuseSecondPca(manager: EntityManager, patientId: number, revising?: number): Promise<void> {
+    const open = await findOpenPca(manager, patientId, revising);
+    if (open) throw duplicatePcaConflict(open);
   }
 
   private async revisable(manager: EntityManager, id: number, patientId: number): Promise<PcaOrder> {
