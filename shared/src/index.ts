@@ -42,6 +42,8 @@ export * from './library/rule-key.js';
 export * from './library/validate-limit-rules.js';
 export * from './library/diff-library.js';
 export * from './library/library-csv.js';
+export * from './library/rule-population.js';
+export * from './library/choose-rule.js';
 export * from './library/limit-bounds.js';
 export * from './library/large-change.js';
 export * from './orders/order-fields.schema.js';

@@ -122,11 +122,14 @@ describe('library CSV', () => {
       drugName: 'morphine',
       concentrationPerMl: 0.0000001,
       doseUnit: 'mg',
-      perKg: true,
+      perKg: false,
       limits: { demandDose: { hardMin: 0.0000001, softMax: 0.1 + 0.2, hardMax: 10_000 }, lockoutMinutes: { hardMax: 1440 } },
     };
     const [header, ...body] = csvRowsFromRules([tiny]);
-    expect(body[0]).toEqual(['morphine', '0.0000001', 'mg', 'yes', 'demand_dose', '0.0000001', '', '0.30000000000000004', '10000']);
+    expect(body[0]).toEqual([
+      ...['morphine', '0.0000001', 'mg', 'no', 'demand_dose', '0.0000001', '', '0.30000000000000004', '10000'],
+      ...['adult', '', '', '', '', ''],
+    ]);
     const records = body.map((cells) => Object.fromEntries(header.map((column, i) => [column, cells[i]])));
     const back = rulesFromCsvRecords(records, drugs);
     expect(back.problems).toEqual([]);

@@ -5,6 +5,7 @@ import type { NamedRule } from './diff-library.js';
 import { LIMIT_KEYS, type LimitKey } from './library.schema.js';
 import { concentrationProblem, LIBRARY_MAX_RULES, limitValueProblem, plainDecimal } from './limit-bounds.js';
 import { ruleKey } from './rule-key.js';
+import { BAND_FIELDS, type BandField, type RulePopulation, populationProblems, rulePopulationOf } from './rule-population.js';
 import { limitOrderProblems } from './validate-limit-rules.js';
 
 // The dose-limit library CSV format: one row per drug, concentration and parameter. Documented
@@ -20,6 +21,26 @@ export const LIBRARY_CSV_COLUMNS = [
   'soft_max',
   'hard_max',
 ] as const;
+
+/**
+ * Columns a file may leave out: who the rule is for (blank or missing: adult, no band) and, for
+ * per-kg rules, the absolute ceiling of the row's parameter in the dose unit. Export writes them all.
+ */
+export const LIBRARY_CSV_OPTIONAL_COLUMNS = [
+  'population',
+  'min_age_years',
+  'max_age_years',
+  'min_weight_kg',
+  'max_weight_kg',
+  'ceiling',
+] as const;
+const ALL_COLUMNS: readonly string[] = [...LIBRARY_CSV_COLUMNS, ...LIBRARY_CSV_OPTIONAL_COLUMNS];
+const BAND_COLUMNS: Record<BandField, string> = {
+  minAgeYears: 'min_age_years',
+  maxAgeYears: 'max_age_years',
+  minWeightKg: 'min_weight_kg',
+  maxWeightKg: 'max_weight_kg',
+};
 
 const LIMIT_COLUMNS: Record<LimitKey, string> = { hardMin: 'hard_min', softMin: 'soft_min', softMax: 'soft_max', hardMax: 'hard_max' };
 
@@ -46,8 +67,8 @@ export function checkCsvHeader(header: readonly string[]): CsvProblem[] {
   }
   const seen = new Set<string>();
   for (const column of header) {
-    if (!(LIBRARY_CSV_COLUMNS as readonly string[]).includes(column)) {
-      problems.push({ row: 1, column, message: `Unknown column ${column}; the columns are ${LIBRARY_CSV_COLUMNS.join(', ')}` });
+    if (!ALL_COLUMNS.includes(column)) {
+      problems.push({ row: 1, column, message: `Unknown column ${column}; the columns are ${ALL_COLUMNS.join(', ')}` });
     } else if (seen.has(column)) {
       // Which copy would win is a guess about a limit: refuse rather than pick one.
       problems.push({ row: 1, column, message: `The column ${column} appears more than once; keep one` });
@@ -107,9 +128,21 @@ export function rulesFromCsvRecords(records: readonly CsvRecord[], drugs: readon
       const key = orderProblem.path.split('.').pop() as LimitKey;
       problem(LIMIT_COLUMNS[key], orderProblem.message);
     }
-    if (problems.some((p) => p.row === row) || !drug || !field || concentration == null || perKg === undefined) return;
+    const population = populationCells(cell, problem);
+    const ceiling = parseNumber(cell('ceiling'));
+    if (ceiling === undefined) problem('ceiling', 'A ceiling must be empty or a plain decimal number more than 0');
+    else if (ceiling !== null) limits.ceiling = ceiling;
+    if (field && perKg !== undefined && concentration != null && doseUnit !== '' && population) {
+      // The row's own population and ceiling problems, at its cells; across rows, validateLimitRules.
+      const rowRule = { drugId: 0, concentrationPerMl: concentration, doseUnit, perKg, ...population, limits: { [field]: limits } };
+      for (const rowProblem of populationProblems([rowRule])) {
+        const name = rowProblem.path.split('.').pop()!;
+        problem(name === 'ceiling' ? 'ceiling' : (BAND_COLUMNS[name as BandField] ?? 'population'), rowProblem.message);
+      }
+    }
+    if (problems.some((p) => p.row === row) || !drug || !field || concentration == null || perKg === undefined || !population) return;
 
-    const key = ruleKey({ drugId: drug.id, concentrationPerMl: concentration });
+    const key = ruleKey({ drugId: drug.id, concentrationPerMl: concentration, ...population });
     const existing = rules.get(key);
     if (!existing) {
       if (rules.size === LIBRARY_MAX_RULES) {
@@ -127,6 +160,8 @@ export function rulesFromCsvRecords(records: readonly CsvRecord[], drugs: readon
         concentrationPerMl: concentration,
         doseUnit: drug.doseUnit,
         perKg,
+        // An adult rule is written as before, without population fields (absent means adult).
+        ...(population.population === 'adult' ? {} : population),
         limits: { [field]: limits },
       };
       rules.set(key, { rule, firstRow: row, rows: new Map([[field, row]]) });
@@ -147,7 +182,7 @@ export function rulesFromCsvRecords(records: readonly CsvRecord[], drugs: readon
 
 /** Rows for export, header first, in the same format the importer reads. */
 export function csvRowsFromRules(rules: readonly NamedRule[]): string[][] {
-  const rows: string[][] = [[...LIBRARY_CSV_COLUMNS]];
+  const rows: string[][] = [[...LIBRARY_CSV_COLUMNS, ...LIBRARY_CSV_OPTIONAL_COLUMNS]];
   for (const rule of rules) {
     for (const field of REGIMEN_FIELDS) {
       const limits = rule.limits[field];
@@ -160,10 +195,37 @@ export function csvRowsFromRules(rules: readonly NamedRule[]): string[][] {
         CSV_PARAMETERS[field],
         // Plain decimals with every digit: 1e-7 is written 0.0000001, which the importer reads back exactly.
         ...LIMIT_KEYS.map((key) => (limits[key] == null ? '' : plainDecimal(limits[key]))),
+        ...populationRow(rule),
+        limits.ceiling == null ? '' : plainDecimal(limits.ceiling),
       ]);
     }
   }
   return rows;
+}
+
+/** The population cells of a row (blank population: adult), or undefined after saying what is wrong. */
+function populationCells(cell: (column: string) => string, problem: (column: string, message: string) => void): RulePopulation | undefined {
+  const text = cell('population').toLowerCase();
+  const population = text === '' || text === 'adult' ? 'adult' : text === 'paediatric' || text === 'pediatric' ? 'paediatric' : undefined;
+  if (!population) {
+    problem('population', 'population must be adult or paediatric (or empty for adult)');
+    return undefined;
+  }
+  const result: RulePopulation = { population, minAgeYears: null, maxAgeYears: null, minWeightKg: null, maxWeightKg: null };
+  let ok = true;
+  for (const field of BAND_FIELDS) {
+    const value = parseNumber(cell(BAND_COLUMNS[field]));
+    if (value === undefined || (value !== null && !Number.isFinite(value))) {
+      problem(BAND_COLUMNS[field], `${BAND_COLUMNS[field]} must be empty (no bound) or a plain decimal number`);
+      ok = false;
+    } else result[field] = value;
+  }
+  return ok ? result : undefined;
+}
+
+function populationRow(rule: NamedRule): string[] {
+  const p = rulePopulationOf(rule);
+  return [p.population, ...BAND_FIELDS.map((field) => (p[field] === null ? '' : plainDecimal(p[field])))];
 }
 
 /** null for an empty cell, undefined for text that is not a plain decimal number. */

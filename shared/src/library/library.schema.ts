@@ -3,6 +3,7 @@ import { isWhole, must } from '../api/request-rules.js';
 import { DOSE_UNITS, doseUnitSchema } from '../drugs/drug.schema.js';
 import { REGIMEN_FIELDS } from '../dose/regimen-fields.js';
 import type { RegimenField } from '../dose/types.js';
+import { type BandField, POPULATIONS } from './rule-population.js';
 
 export const LIBRARY_STATUSES = ['draft', 'pending_approval', 'active', 'retired'] as const;
 export const libraryStatusSchema = z.enum(LIBRARY_STATUSES);
@@ -29,6 +30,8 @@ export const limitsSchema = z.strictObject({
   softMin: limitValue('softMin'),
   softMax: limitValue('softMax'),
   hardMax: limitValue('hardMax'),
+  /** Per-kg rules: the most the field may ever be, in the dose unit (rule-population.ts checks it). */
+  ceiling: z.number(must('ceiling must be a number')).min(0, 'ceiling must be 0 or more').nullish(),
 });
 
 export const regimenFieldSchema = z.enum(REGIMEN_FIELDS as [RegimenField, ...RegimenField[]]);
@@ -53,6 +56,12 @@ export const ruleLimitsSchema = z.strictObject(
 );
 export type RuleLimitsInput = z.infer<typeof ruleLimitsSchema>;
 
+const bandValue = (key: BandField) =>
+  z
+    .number(must(`${key} must be a number`))
+    .min(0, `${key} must be 0 or more`)
+    .nullish();
+
 /** A limit rule as written by a pharmacist (editor or CSV), before it has an id. */
 export const limitRuleInputSchema = z.strictObject({
   drugId: z
@@ -64,18 +73,35 @@ export const limitRuleInputSchema = z.strictObject({
     .positive('Concentration must be more than 0'),
   doseUnit: z.enum(DOSE_UNITS, must('doseUnit is required', 'doseUnit must be mg or mcg')),
   perKg: z.boolean(must('perKg is required', 'perKg must be true or false')),
+  // Who the rule is for (rule-population.ts); left out, an adult rule with no band.
+  population: z.enum(POPULATIONS, must('population must be adult or paediatric')).optional(),
+  minAgeYears: bandValue('minAgeYears'),
+  maxAgeYears: bandValue('maxAgeYears'),
+  minWeightKg: bandValue('minWeightKg'),
+  maxWeightKg: bandValue('maxWeightKg'),
   limits: ruleLimitsSchema,
 });
 export type LimitRuleInput = z.infer<typeof limitRuleInputSchema>;
 
 // An answer's rule keeps its own, looser shape: a request's strictness and words are not an answer's.
 const answeredLimit = z.number().finite().nonnegative().nullable().optional();
-const answeredLimits = z.object({ hardMin: answeredLimit, softMin: answeredLimit, softMax: answeredLimit, hardMax: answeredLimit });
+const answeredLimits = z.object({
+  hardMin: answeredLimit,
+  softMin: answeredLimit,
+  softMax: answeredLimit,
+  hardMax: answeredLimit,
+  ceiling: answeredLimit,
+});
 export const limitRuleSchema = z.object({
   drugId: z.number().int().positive(),
   concentrationPerMl: z.number().finite().positive(),
   doseUnit: doseUnitSchema,
   perKg: z.boolean(),
+  population: z.enum(POPULATIONS),
+  minAgeYears: z.number().finite().nullable(),
+  maxAgeYears: z.number().finite().nullable(),
+  minWeightKg: z.number().finite().nullable(),
+  maxWeightKg: z.number().finite().nullable(),
   limits: z.partialRecord(regimenFieldSchema, answeredLimits),
   id: z.number().int(),
   drugName: z.string(),

@@ -40,7 +40,7 @@ describe('validateLimitRules', () => {
     expect(validateLimitRules([morphine, other])).toEqual([]);
     const problems = validateLimitRules([morphine, other, { ...morphine }]);
     expect(problems).toEqual([
-      { path: 'rules.2.concentrationPerMl', message: 'Rule 3 repeats rule 1: one rule per drug and concentration' },
+      { path: 'rules.2.concentrationPerMl', message: 'Rule 3 repeats rule 1: one rule per drug, concentration and population' },
     ]);
   });
 });

@@ -3,6 +3,7 @@ import type { Limits, RegimenField } from '../dose/types.js';
 import { LIMIT_KEYS, type LimitRuleInput, type RuleProblem } from './library.schema.js';
 import { concentrationProblem, limitValueProblem } from './limit-bounds.js';
 import { ruleKey } from './rule-key.js';
+import { populationProblems } from './rule-population.js';
 
 const LIMIT_LABELS = { hardMin: 'hard minimum', softMin: 'soft minimum', softMax: 'soft maximum', hardMax: 'hard maximum' };
 
@@ -21,7 +22,7 @@ export function validateLimitRules(rules: readonly LimitRuleInput[]): RuleProble
     if (first !== undefined) {
       problems.push({
         path: `rules.${index}.concentrationPerMl`,
-        message: `Rule ${index + 1} repeats rule ${first + 1}: one rule per drug and concentration`,
+        message: `Rule ${index + 1} repeats rule ${first + 1}: one rule per drug, concentration and population`,
       });
     } else firstIndexByKey.set(key, index);
     const badConcentration = concentrationProblem(rule.concentrationPerMl);
@@ -33,6 +34,7 @@ export function validateLimitRules(rules: readonly LimitRuleInput[]): RuleProble
       problems.push(...(outOfRange.length > 0 ? outOfRange : limitOrderProblems(limits, path, REGIMEN_FIELD_LABELS[field])));
     }
   });
+  problems.push(...populationProblems(rules));
   return problems;
 }
 

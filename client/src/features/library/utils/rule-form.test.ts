@@ -42,7 +42,7 @@ describe('rules form', () => {
       'rules.0.concentrationPerMl': 'Enter the concentration, a number more than 0',
       'rules.0.limits.demandDose.softMax': 'Enter a number of 0 or more, or leave empty',
       'rules.1.limits.demandDose.hardMax': 'Demand dose: the hard maximum (1.5) is below the soft maximum (2)',
-      'rules.2.concentrationPerMl': 'Rule 3 repeats rule 2: one rule per drug and concentration',
+      'rules.2.concentrationPerMl': 'Rule 3 repeats rule 2: one rule per drug, concentration and population',
     });
   });
 });
