@@ -13,9 +13,10 @@ describe('caution texts', () => {
     expect(CROSS_TOLERANCE_CAUTION).toContain('25–50 %');
   });
 
-  it('limits basal infusions to opioid-tolerant patients', () => {
-    // ASHP Standardize 4 Safety, PCA standards (2023): basal rate only for opioid-tolerant patients.
-    expect(BASAL_OPIOID_NAIVE_CAUTION).toMatch(/only for opioid-tolerant patients/);
+  it('advises against a routine basal infusion in opioid-naive adults, naming the guideline', () => {
+    // Chou R et al., Management of Postoperative Pain, APS/ASRA/ASA guideline, J Pain 2016;17(2):131-157.
+    // Written wrong before: it cited ASHP Standardize 4 Safety, which is not a source for this rule.
+    expect(BASAL_OPIOID_NAIVE_CAUTION).toMatch(/not recommended in opioid-naive adults \(APS\/ASRA\/ASA guideline, 2016\)/);
   });
 
   it('uses safe symbols: no µg, no cc', () => {

@@ -14,17 +14,34 @@ export const LOCAL_POLICY_CAUTION = 'Local protocols override the default limits
 export const CROSS_TOLERANCE_CAUTION =
   'Planning aid only. Cross-tolerance between opioids is incomplete: when switching opioids, reduce the calculated dose by 25–50 % and review the patient closely.';
 
-// Patient-factor cautions raised by checkOrder.
+// Patient risk texts raised by checkOrder (patient-cautions.ts). Sources in docs/clinical-sources.md.
 
-/** ASHP Standardize 4 Safety, PCA standards (2023): basal rate only for opioid-tolerant patients. */
+/**
+ * Chou R et al., Management of Postoperative Pain: a clinical practice guideline from the American
+ * Pain Society, ASRA and ASA, J Pain 2016;17(2):131-157: recommends against routine basal infusion
+ * of opioids with IV PCA in opioid-naive adults (strong recommendation).
+ */
 export const BASAL_OPIOID_NAIVE_CAUTION =
-  'Basal rate ordered for an opioid-naive patient: a basal infusion is recommended only for opioid-tolerant patients. Confirm it is intended.';
+  'Basal rate ordered for an opioid-naive patient: routine basal infusion with PCA is not recommended in opioid-naive adults (APS/ASRA/ASA guideline, 2016). Give the reason it is needed.';
 
+/**
+ * The Joint Commission, Sentinel Event Alert 49, Safe use of opioids in hospitals (2012): sleep
+ * apnoea raises the risk of opioid-induced respiratory depression (from memory for the wording).
+ */
 export const SLEEP_APNOEA_CAUTION =
   'Sleep apnoea: higher risk of opioid-induced respiratory depression. Monitor sedation, breathing and SpO2 closely.';
 
-export const AGE_70_OR_OVER_CAUTION =
-  'Age 70 or over: higher risk of opioid-induced sedation and respiratory depression. Consider a lower dose and monitor closely.';
+/**
+ * The Joint Commission, Sentinel Event Alert 49 (2012), citing Cepeda MS et al., Clin Pharmacol
+ * Ther 2003;74(2):102-112: the risk of respiratory depression rises from the sixties (2.8 times
+ * in ages 61–70). A caution from 65 is common practice.
+ */
+export const AGE_65_OR_OVER_CAUTION =
+  'Age 65 or over: higher risk of opioid-induced sedation and respiratory depression. Consider a lower dose and monitor closely.';
 
+/**
+ * The Joint Commission, Sentinel Event Alert 49 (2012): other sedating medicines taken with opioids
+ * raise the risk of oversedation (from memory for the wording).
+ */
 export const OTHER_SEDATIVES_CAUTION =
   'Other sedating medicines: opioid-induced sedation is more likely. Monitor sedation and breathing closely.';

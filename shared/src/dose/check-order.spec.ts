@@ -19,8 +19,8 @@ const ashpMorphine: Regimen = {
   fourHourLimit: 30,
 };
 
-// Typical ranges [read, a widely used clinical reference table]: morphine demand 0.5–2 mg,
-// lockout 5–10 min, 4-hour limit 30 mg, as soft limits; hard limits illustrative, not published.
+// Morphine demand 0.5–2 mg, lockout 5–10 min, 4-hour limit 30 mg as soft limits: common practice
+// (docs/clinical-sources.md, "Typical ranges"); hard limits illustrative, not published.
 const morphineRule: LimitRule = {
   doseUnit: 'mg',
   perKg: false,
@@ -66,10 +66,11 @@ describe('checkOrder: adult morphine', () => {
     expect(hasBlockingFinding(findings)).toBe(false);
   });
 
-  it('cautions about a basal rate for an opioid-naive patient', () => {
-    // ASHP Standardize 4 Safety, PCA standards (2023): basal rate only for opioid-tolerant patients.
+  it('needs a reason for a basal rate in an opioid-naive adult', () => {
+    // Chou R et al., Management of Postoperative Pain, APS/ASRA/ASA guideline, J Pain 2016;17(2):131-157:
+    // no routine basal infusion in opioid-naive adults. Written wrong before: a caution needing no reason.
     expect(codes(checkOrder({ ...ashpMorphine, basalRatePerHour: 1 }, morphineRule, adult))).toEqual([
-      'basalRatePerHour:caution.basal-opioid-naive',
+      'basalRatePerHour:risk.basal-opioid-naive',
     ]);
     expect(checkOrder({ ...ashpMorphine, basalRatePerHour: 1 }, morphineRule, { ...adult, opioidTolerant: true })).toEqual([]);
   });
@@ -81,9 +82,11 @@ describe('checkOrder: adult morphine', () => {
       'oneHourLimit:consistency.one-hour-limit-below-basal-and-demand',
       'lockoutMinutes:limit.hard-low',
       'demandDose:limit.soft-high',
-      'basalRatePerHour:caution.basal-opioid-naive',
+      'basalRatePerHour:risk.basal-opioid-naive',
+      'basalRatePerHour:risk.older-with-basal',
+      'demandDose:risk.naive-apnoea-sedatives',
       'patient:caution.sleep-apnoea',
-      'patient:caution.age-70-or-over',
+      'patient:caution.age-65-or-over',
       'patient:caution.other-sedatives',
     ]);
   });
@@ -187,9 +190,119 @@ describe('checkOrder: properties', () => {
             if (raw === null || raw === undefined || hard === undefined) continue;
             const value = perKg && DOSE_FIELDS.includes(field) ? withoutFloatNoise(raw / weightKg) : raw;
             const outside = (hard.hardMin != null && value < hard.hardMin) || (hard.hardMax != null && value > hard.hardMax);
-            const flagged = findings.some((f) => f.field === field && f.severity === 'hard');
+            // The stated value's own check (the pump's possible totals have findings of their own).
+            const flagged = findings.some((f) => f.field === field && f.severity === 'hard' && f.code.startsWith('limit.'));
             expect(flagged, `${field} ${value} against ${JSON.stringify(hard)}`).toBe(outside);
           }
+        },
+      ),
+    );
+  });
+});
+
+describe('checkOrder: what the pump could give against the rule', () => {
+  // The demo Cedar library's morphine 1 mg/mL rule (invented demo values, server/src/database/seed):
+  // 1-hour soft 10 mg, hard 15 mg; 4-hour soft 30 mg, hard 40 mg.
+  const cedar: LimitRule = {
+    doseUnit: 'mg',
+    perKg: false,
+    limits: {
+      demandDose: { hardMin: 0.2, softMin: 0.5, softMax: 2, hardMax: 3 },
+      lockoutMinutes: { hardMin: 5, softMin: 6, softMax: 15, hardMax: 30 },
+      oneHourLimit: { softMax: 10, hardMax: 15 },
+      fourHourLimit: { softMax: 30, hardMax: 40 },
+    },
+  };
+
+  it('blocks demand 2 mg every 6 min with both limit fields empty: 20 mg an hour, 80 mg in 4 hours', () => {
+    // Arithmetic on the definitions (docs/design.md): 2 mg × ceil(60 ÷ 6) = 20; 2 mg × ceil(240 ÷ 6) = 80.
+    // Written wrong before: no findings, because the order stated no limits of its own.
+    const r: Regimen = { doseUnit: 'mg', concentrationPerMl: 1, demandDose: 2, lockoutMinutes: 6, basalRatePerHour: 0 };
+    const findings = checkOrder(r, cedar, adult);
+    expect(findings).toEqual([
+      {
+        field: 'oneHourLimit',
+        severity: 'hard',
+        code: 'possible.one-hour.hard-high',
+        message: 'The pump could give up to 20 mg in an hour (demand 2 mg every 6 min): above the hard maximum of 15 mg an hour',
+      },
+      {
+        field: 'fourHourLimit',
+        severity: 'hard',
+        code: 'possible.four-hour.hard-high',
+        message: 'The pump could give up to 80 mg in 4 hours (demand 2 mg every 6 min): above the hard maximum of 40 mg in 4 hours',
+      },
+    ]);
+    expect(hasBlockingFinding(findings)).toBe(true);
+  });
+
+  it("is held by the order's own limits, and each window by the other", () => {
+    const r: Regimen = { doseUnit: 'mg', concentrationPerMl: 1, demandDose: 2, lockoutMinutes: 6, basalRatePerHour: 0, fourHourLimit: 12 };
+    // Any hour ≤ the 4-hour limit (12 mg): over the 1-hour soft maximum only, needs a reason.
+    expect(codes(checkOrder(r, cedar, adult))).toEqual(['oneHourLimit:possible.one-hour.soft-high']);
+    expect(codes(checkOrder({ ...r, oneHourLimit: 8, fourHourLimit: null }, cedar, adult))).toEqual([
+      // 4 × 8 = 32 mg in 4 hours: over the 30 mg soft maximum.
+      'fourHourLimit:possible.four-hour.soft-high',
+    ]);
+  });
+
+  it('counts the loading dose in the first hour and a clinician bolus in every window', () => {
+    const r: Regimen = { doseUnit: 'mg', concentrationPerMl: 1, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0, fourHourLimit: 30 };
+    expect(checkOrder(r, cedar, adult)).toEqual([]); // 6 mg an hour, 24 mg in 4 hours
+    const findings = checkOrder({ ...r, loadingDose: 3, clinicianBolusDose: 2 }, cedar, adult);
+    expect(findings.map((f) => f.message)).toEqual([
+      'The pump could give up to 11 mg in the first hour (loading dose 3 mg, demand 1 mg every 10 min, one clinician bolus of 2 mg): above the soft maximum of 10 mg an hour',
+    ]);
+  });
+
+  it('blocks the 24.5 kg child whose possible 4-hour dose is 11.76 mg against 0.4 mg/kg (9.8 mg)', () => {
+    // The demo Wren library's per-kg morphine rule (invented demo values): 4-hour hard 0.4 mg/kg.
+    // 0.49 mg × ceil(240 ÷ 10) = 11.76 mg = 0.48 mg/kg. Written wrong before: no findings.
+    const wren: LimitRule = {
+      doseUnit: 'mg',
+      perKg: true,
+      limits: { oneHourLimit: { softMax: 0.1, hardMax: 0.12 }, fourHourLimit: { softMax: 0.3, hardMax: 0.4 } },
+    };
+    const r: Regimen = { doseUnit: 'mg', concentrationPerMl: 1, demandDose: 0.49, lockoutMinutes: 10, basalRatePerHour: 0 };
+    const findings = checkOrder(r, wren, { ...child20kg, weightKg: 24.5 }).filter((f) => f.code.startsWith('possible.'));
+    expect(findings.map((f) => [f.field, f.severity, f.message])).toEqual([
+      [
+        'fourHourLimit',
+        'hard',
+        'The pump could give up to 11.76 mg (0.48 mg/kg for 24.5 kg) in 4 hours (demand 0.49 mg every 10 min): above the hard maximum of 0.4 mg/kg (9.8 mg for this weight) in 4 hours',
+      ],
+      [
+        'oneHourLimit',
+        'soft',
+        'The pump could give up to 2.94 mg (0.12 mg/kg for 24.5 kg) in an hour (demand 0.49 mg every 10 min): above the soft maximum of 0.1 mg/kg (2.45 mg for this weight) an hour',
+      ],
+    ]);
+  });
+
+  it("property: a possible total over the rule's hard maximum always blocks", () => {
+    const typed = fc.integer({ min: 0, max: 5_000 }).map((n) => n / 100);
+    fc.assert(
+      fc.property(
+        typed,
+        fc.integer({ min: 1, max: 60 }),
+        typed,
+        fc.option(typed, { nil: null }),
+        (demandDose, lockoutMinutes, basal, bolus) => {
+          const r: Regimen = {
+            doseUnit: 'mg',
+            concentrationPerMl: 1,
+            demandDose,
+            lockoutMinutes,
+            basalRatePerHour: basal,
+            clinicianBolusDose: bolus,
+          };
+          const hourly = basal + demandDose * Math.ceil(60 / lockoutMinutes) + (bolus ?? 0);
+          const findings = checkOrder(
+            r,
+            { doseUnit: 'mg', perKg: false, limits: { oneHourLimit: { hardMax: 15 } } },
+            { opioidTolerant: true },
+          );
+          if (hourly > 15 + 1e-9) expect(hasBlockingFinding(findings)).toBe(true);
         },
       ),
     );

@@ -5,6 +5,7 @@ import { consistencyFindings } from './order-consistency-findings.js';
 import { limitFindings } from './order-limit-findings.js';
 import { invalidNumberFindings } from './order-number-findings.js';
 import { patientCautions } from './patient-cautions.js';
+import { possibleTotalFindings } from './possible-totals.js';
 import type { Finding, FindingSeverity, LimitRule, OrderCheckContext, PatientFactors, Regimen } from './types.js';
 
 // Worst first, so a screen can show findings in the order they must be dealt with.
@@ -52,22 +53,26 @@ function weightFindings(p: PatientFactors): Finding[] {
 /**
  * Every finding for an order against its limit rule and patient: errors (unusable numbers, dose
  * unit, weight for a per-kg rule, contradictions within the regimen), hard and soft limit
- * findings per field (per kg where the rule is), cautions from patient risk factors, recorded
+ * findings per field (per kg where the rule is), what the pump could give in 1 and 4 hours
+ * against the rule's maxima (`possibleTotalFindings`), patient risk findings, recorded
  * allergies to the drug, and the checks that protect children and weight-based dosing.
  * Sorted worst first: error, hard, soft, caution.
  */
 export function checkOrder(r: Regimen, rule: LimitRule, p: PatientFactors, context: OrderCheckContext = {}): Finding[] {
   const unitErrors = doseUnitFindings(r, rule);
   const weightErrors = rule.perKg ? weightFindings(p) : [];
+  const doseUnit = isDoseUnit(r.doseUnit) ? r.doseUnit : 'mg';
+  const limitContext = {
+    weightKg: rule.perKg && weightErrors.length === 0 ? (p.weightKg ?? null) : null,
+    doseUnitMatches: unitErrors.length === 0,
+  };
   const findings = [
     ...invalidNumberFindings(r),
     ...unitErrors,
     ...weightErrors,
     ...consistencyFindings(r),
-    ...limitFindings(r, rule, isDoseUnit(r.doseUnit) ? r.doseUnit : 'mg', {
-      weightKg: rule.perKg && weightErrors.length === 0 ? (p.weightKg ?? null) : null,
-      doseUnitMatches: unitErrors.length === 0,
-    }),
+    ...limitFindings(r, rule, doseUnit, limitContext),
+    ...possibleTotalFindings(r, rule, doseUnit, limitContext, { clinicianBolusesPerFourHours: context.clinicianBolusesPerFourHours }),
     ...patientCautions(r, p),
     ...allergyFindings(context.drug, p.allergies),
     ...childFindings(r, rule, p, context),

@@ -10,7 +10,7 @@ function regimen(overrides: Partial<Regimen>): Regimen {
 describe('maxFourHourDose', () => {
   it('morphine: 1 mg every 10 minutes under a 30 mg 4-hour limit', () => {
     // ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg demand, lockout 10 minutes.
-    // Typical ranges [read, a widely used clinical reference table]: morphine 4-hour limit 30 mg.
+    // Morphine 4-hour limit 30 mg: common practice (docs/clinical-sources.md, "Typical ranges").
     expect(maxFourHourDose(regimen({ fourHourLimit: 30 }))).toBe(24); // 1 × ceil(240 ÷ 10)
     // Same table, demand 2 mg and lockout 5 min: 96 mg uncapped, so the 30 mg limit binds.
     expect(maxFourHourDose(regimen({ demandDose: 2, lockoutMinutes: 5 }))).toBe(96);
@@ -18,15 +18,15 @@ describe('maxFourHourDose', () => {
   });
 
   it('hydromorphone: 0.2–0.4 mg every 10 minutes under a 6 mg 4-hour limit', () => {
-    // Typical ranges [read, a widely used clinical reference table]: hydromorphone demand
-    // 0.1–0.4 mg, lockout 10 min, 4-hour limit 6 mg.
+    // Hydromorphone demand 0.1–0.4 mg, lockout 10 min, 4-hour limit 6 mg: common practice
+    // (docs/clinical-sources.md, "Typical ranges").
     expect(maxFourHourDose(regimen({ demandDose: 0.2, fourHourLimit: 6 }))).toBe(4.8);
     expect(maxFourHourDose(regimen({ demandDose: 0.4, fourHourLimit: 6 }))).toBe(6);
   });
 
   it('fentanyl: 5–20 mcg every 4–10 minutes under a 300 mcg 4-hour limit', () => {
-    // Typical ranges [read, a widely used clinical reference table]: fentanyl demand 5–20 mcg,
-    // lockout 4–10 min, 4-hour limit 300 mcg.
+    // Fentanyl demand 5–20 mcg, lockout 4–10 min, 4-hour limit 300 mcg: common practice
+    // (docs/clinical-sources.md, "Typical ranges").
     const fentanyl = { doseUnit: 'mcg' as const, concentrationPerMl: 10, fourHourLimit: 300 };
     expect(maxFourHourDose(regimen({ ...fentanyl, demandDose: 10 }))).toBe(240);
     expect(maxFourHourDose(regimen({ ...fentanyl, demandDose: 20, lockoutMinutes: 4 }))).toBe(300);
@@ -35,6 +35,12 @@ describe('maxFourHourDose', () => {
   it('adds four hours of basal (definition)', () => {
     expect(maxFourHourDose(regimen({ basalRatePerHour: 0.5 }))).toBe(26);
     expect(maxFourHourDose(regimen({ demandDose: 0, basalRatePerHour: 0.1 }))).toBe(0.4);
+  });
+
+  it('adds the loading dose and one clinician bolus, and is held by 4 × the 1-hour limit (definition, docs/design.md)', () => {
+    // Written wrong before: the loading dose and clinician bolus were left out of the most in 4 hours.
+    expect(maxFourHourDose(regimen({ loadingDose: 2, clinicianBolusDose: 2 }))).toBe(28);
+    expect(maxFourHourDose(regimen({ demandDose: 2, lockoutMinutes: 5, oneHourLimit: 5 }))).toBe(20);
   });
 
   it('property: the capped maximum never exceeds the 4-hour limit', () => {

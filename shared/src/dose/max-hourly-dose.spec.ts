@@ -1,7 +1,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { withoutFloatNoise } from './float-noise.js';
-import { maxHourlyDose, uncappedWindowDose } from './max-hourly-dose.js';
+import { maxHourlyDose } from './max-hourly-dose.js';
+import { possibleTotals } from './possible-totals.js';
 import type { Regimen } from './types.js';
 
 function regimen(overrides: Partial<Regimen>): Regimen {
@@ -31,6 +32,14 @@ describe('maxHourlyDose', () => {
     expect(maxHourlyDose(regimen({ basalRatePerHour: 0.5, oneHourLimit: 5 }))).toBe(5);
     expect(maxHourlyDose(regimen({ oneHourLimit: 8 }))).toBe(6);
     expect(maxHourlyDose(regimen({ oneHourLimit: null }))).toBe(6);
+  });
+
+  it('adds the loading dose and one clinician bolus, and is held by the 4-hour limit too (definition, docs/design.md)', () => {
+    // Written wrong before: the loading dose and clinician bolus were left out of the most per hour.
+    expect(maxHourlyDose(regimen({ loadingDose: 2, clinicianBolusDose: 2 }))).toBe(10);
+    expect(maxHourlyDose(regimen({ clinicianBolusDose: 2 }))).toBe(8);
+    expect(maxHourlyDose(regimen({ clinicianBolusDose: 2 }), { clinicianBolusesPerFourHours: 2 })).toBe(10);
+    expect(maxHourlyDose(regimen({ demandDose: 2, lockoutMinutes: 6, fourHourLimit: 12 }))).toBe(12);
   });
 
   it('handles a zero demand dose and a missing lockout without NaN', () => {
@@ -66,8 +75,8 @@ describe('maxHourlyDose', () => {
   });
 });
 
-describe('uncappedWindowDose', () => {
+describe('the uncapped window figure', () => {
   it('counts basal per hour of the window (definition)', () => {
-    expect(uncappedWindowDose(regimen({ demandDose: 0, basalRatePerHour: 1.5 }), 240)).toBe(6);
+    expect(possibleTotals(regimen({ demandDose: 0, basalRatePerHour: 1.5 })).anyFourHours.uncapped).toBe(6);
   });
 });

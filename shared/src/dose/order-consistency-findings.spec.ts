@@ -8,7 +8,7 @@ const ashpMorphine: Regimen = { doseUnit: 'mg', concentrationPerMl: 1, demandDos
 
 describe('consistencyFindings', () => {
   it('accepts a consistent regimen', () => {
-    // Typical ranges [read, a widely used clinical reference table]: morphine 4-hour limit 30 mg.
+    // Morphine 4-hour limit 30 mg: common practice (docs/clinical-sources.md, "Typical ranges").
     expect(consistencyFindings({ ...ashpMorphine, oneHourLimit: 6, fourHourLimit: 30 })).toEqual([]);
   });
 
@@ -34,10 +34,39 @@ describe('consistencyFindings', () => {
     expect(consistencyFindings({ ...ashpMorphine, basalRatePerHour: 0.1, demandDose: 0.2, oneHourLimit: 0.3 })).toEqual([]);
   });
 
-  it('needs a 4-hour limit of at least four hours of basal', () => {
-    const findings = consistencyFindings({ ...ashpMorphine, doseUnit: 'mcg', basalRatePerHour: 25, fourHourLimit: 90 });
-    expect(findings.map((f) => f.message)).toEqual(['4-hour limit 90 mcg is less than four hours of basal rate (100 mcg)']);
-    expect(consistencyFindings({ ...ashpMorphine, basalRatePerHour: 0.1, fourHourLimit: 0.4 })).toEqual([]);
+  it('needs a 4-hour limit of at least four hours of basal plus one demand dose', () => {
+    // Written wrong before: only four hours of basal were needed, so a 4-hour limit could leave
+    // no room for a single demand dose. Arithmetic on the definitions (docs/design.md).
+    const findings = consistencyFindings({ ...ashpMorphine, doseUnit: 'mcg', demandDose: 10, basalRatePerHour: 25, fourHourLimit: 105 });
+    expect(findings).toEqual([
+      {
+        field: 'fourHourLimit',
+        severity: 'error',
+        code: 'consistency.four-hour-limit-below-basal-and-demand',
+        message: '4-hour limit 105 mcg is less than four hours of basal rate plus one demand dose (110 mcg)',
+      },
+    ]);
+    expect(consistencyFindings({ ...ashpMorphine, doseUnit: 'mcg', demandDose: 10, basalRatePerHour: 25, fourHourLimit: 110 })).toEqual([]);
+    expect(consistencyFindings({ ...ashpMorphine, basalRatePerHour: 0.1, fourHourLimit: 1.4 })).toEqual([]);
+  });
+
+  it('needs a 4-hour limit of at least the 1-hour limit (an hour is part of 4 hours: definition)', () => {
+    expect(consistencyFindings({ ...ashpMorphine, oneHourLimit: 10, fourHourLimit: 8 })).toEqual([
+      {
+        field: 'fourHourLimit',
+        severity: 'error',
+        code: 'consistency.four-hour-limit-below-one-hour-limit',
+        message: '4-hour limit 8 mg is less than the 1-hour limit 10 mg',
+      },
+    ]);
+    expect(consistencyFindings({ ...ashpMorphine, oneHourLimit: 10, fourHourLimit: 10 })).toEqual([]);
+  });
+
+  it('refuses a demand dose and a basal rate both 0: the pump would give nothing', () => {
+    expect(consistencyFindings({ ...ashpMorphine, demandDose: 0 }).map((f) => `${f.field}:${f.code}`)).toEqual([
+      'demandDose:consistency.nothing-to-give',
+    ]);
+    expect(consistencyFindings({ ...ashpMorphine, demandDose: 0, basalRatePerHour: 0.5 })).toEqual([]);
   });
 
   it('skips checks that need an unusable number', () => {

@@ -42,9 +42,24 @@ describe('limitFindings', () => {
   });
 
   it('says "just above" when the value and the limit print the same at 3 decimals', () => {
-    const rule: LimitRule = { perKg: true, limits: { demandDose: { hardMax: 0.02 } } };
-    const [finding] = limitFindings({ ...ashpMorphine, demandDose: 0.4002 }, rule, 'mg', { weightKg: 20, doseUnitMatches: true });
-    expect(finding.message).toBe('Demand dose is just above the hard maximum 0.02 mg/kg');
+    const rule: LimitRule = { perKg: true, limits: { demandDose: { hardMax: 20 } } };
+    const mcg = { ...ashpMorphine, doseUnit: 'mcg' as const, demandDose: 400.002 };
+    const [finding] = limitFindings(mcg, rule, 'mcg', { weightKg: 20, doseUnitMatches: true });
+    expect(finding.message).toBe('Demand dose is just above the hard maximum 20 mcg/kg');
+  });
+
+  it('shows a sub-milligram value in mcg where mg would lose digits, and the limit to its full precision', () => {
+    // ISMP List of Error-Prone Abbreviations, Symbols, and Dose Designations: mcg below 1 mg.
+    // Written wrong before: 0.02001 mg/kg printed as 0.02 mg/kg, the same as the limit.
+    const rule: LimitRule = { perKg: true, limits: { demandDose: { hardMax: 0.02 }, loadingDose: { hardMax: 0.0125 } } };
+    const findings = limitFindings({ ...ashpMorphine, demandDose: 0.4002, loadingDose: 0.3 }, rule, 'mg', {
+      weightKg: 20,
+      doseUnitMatches: true,
+    });
+    expect(findings.map((f) => f.message)).toEqual([
+      'Loading dose 0.015 mg/kg is above the hard maximum 0.0125 mg/kg',
+      'Demand dose 20.01 mcg/kg is above the hard maximum 0.02 mg/kg',
+    ]);
   });
 
   it('skips dose fields when the dose unit does not match, but still checks the lockout', () => {

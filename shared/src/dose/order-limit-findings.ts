@@ -1,7 +1,7 @@
 import type { DoseUnit } from '../drugs/drug.schema.js';
 import { type LimitCheck, checkAgainstRule } from './check-against-rule.js';
 import { withoutFloatNoise } from './float-noise.js';
-import { formatDose } from './format-dose.js';
+import { formatDose, formatLimit } from './format-dose.js';
 import { isUsableNumber } from './order-number-findings.js';
 import { DOSE_FIELDS, REGIMEN_FIELDS, REGIMEN_FIELD_LABELS, regimenFieldUnit } from './regimen-fields.js';
 import type { Finding, LimitRule, Limits, Regimen, RegimenField } from './types.js';
@@ -25,10 +25,11 @@ const LIMIT_WORDS: Readonly<Record<OutsideCheck, { side: string; limit: string; 
 function limitMessage(field: RegimenField, check: OutsideCheck, value: number, limit: number, unit: string): string {
   const { side, limit: limitName } = LIMIT_WORDS[check];
   const shownValue = formatDose(value, unit);
-  const shownLimit = formatDose(limit, unit);
+  // The limit to its full stored precision, never rounded.
+  const shownLimit = formatLimit(limit, unit);
   const label = REGIMEN_FIELD_LABELS[field];
-  // At 3 decimals a value just past a limit can print the same as the limit: say so plainly.
-  if (shownValue === shownLimit) return `${label} is just ${side} the ${limitName} ${shownLimit}`;
+  // Rounded for display, a value just past a limit can print the same as the limit: say so plainly.
+  if (shownValue === formatDose(limit, unit)) return `${label} is just ${side} the ${limitName} ${shownLimit}`;
   return `${label} ${shownValue} is ${side} the ${limitName} ${shownLimit}`;
 }
 

@@ -73,6 +73,8 @@ export type OrderCheckContext = {
   today?: string;
   /** The ward's rule for how old a weight may be, in days; null means the ward has none. */
   weightMaxAgeDays?: number | null;
+  /** Clinician boluses allowed in 4 hours, counted in the pump's possible totals; 1 when not given. */
+  clinicianBolusesPerFourHours?: number;
 };
 
 /** `hard` blocks signing, `soft` needs a reason, `error` is an order that cannot be right, `caution` informs. */

@@ -4,7 +4,7 @@ import { deriveOrderValues } from './derive-order-values.js';
 describe('deriveOrderValues', () => {
   it('works the ASHP adult morphine starting regimen', () => {
     // ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg demand, lockout 10 minutes,
-    // standard concentration 1 mg/mL; 4-hour limit 30 mg [read, a widely used clinical reference table].
+    // standard concentration 1 mg/mL; 4-hour limit 30 mg (common practice, docs/clinical-sources.md).
     const derived = deriveOrderValues({
       doseUnit: 'mg',
       concentrationPerMl: 1,
@@ -34,5 +34,20 @@ describe('deriveOrderValues', () => {
     });
     expect(derived.demandDoseMl).toBe(1);
     expect(derived.maxFourHourDose).toBeCloseTo(4.8, 10);
+  });
+
+  it('counts the loading dose and a clinician bolus in the maxima, the same figures the check uses', () => {
+    // Written wrong before: loading dose and clinician bolus were left out. Definition (docs/design.md).
+    const derived = deriveOrderValues({
+      doseUnit: 'mg',
+      concentrationPerMl: 1,
+      loadingDose: 2,
+      demandDose: 1,
+      lockoutMinutes: 10,
+      basalRatePerHour: 0,
+      clinicianBolusDose: 2,
+    });
+    expect(derived.maxHourlyDose).toBe(10); // 2 + 6 × 1 + 2
+    expect(derived.maxFourHourDose).toBe(28); // 2 + 24 × 1 + 2
   });
 });
