@@ -7,6 +7,7 @@ import { Drug } from '../drugs/entities/drug.entity.js';
 import { Flag } from '../flags/entities/flag.entity.js';
 import { HandoverSignoff } from '../handover/entities/handover-signoff.entity.js';
 import { LibraryVersion } from '../library/entities/library-version.entity.js';
+import { LibraryVersionEvent } from '../library/entities/library-version-event.entity.js';
 import { LimitRule } from '../library/entities/limit-rule.entity.js';
 import { MailboxMessage } from '../mail/entities/mailbox-message.entity.js';
 import { Observation } from '../observations/entities/observation.entity.js';
@@ -25,6 +26,7 @@ export const ENTITIES = [
   Drug,
   LibraryVersion,
   LimitRule,
+  LibraryVersionEvent,
   PcaOrder,
   OrderEvent,
   SyringeRelease,

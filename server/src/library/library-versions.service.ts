@@ -3,6 +3,7 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In } from 'typeorm';
 import {
   canDoLibraryAction,
+  LIBRARY_CONTRIBUTIONS,
   LIBRARY_STATUS_LABELS,
   LIBRARY_VERSION_ACTIONS,
   type LibraryVersionAction,
@@ -15,6 +16,7 @@ import { Drug } from '../drugs/entities/drug.entity.js';
 import { UsersService } from '../users/users.service.js';
 import { Ward } from '../wards/entities/ward.entity.js';
 import { toLibraryVersionDetail } from './dto/library-response.js';
+import { LibraryVersionEvent, type LibraryVersionEventKind } from './entities/library-version-event.entity.js';
 import { LibraryVersion } from './entities/library-version.entity.js';
 import { LimitRule } from './entities/limit-rule.entity.js';
 import { LibraryService } from './library.service.js';
@@ -24,6 +26,8 @@ import { recordAudit } from '../audit/record-audit.js';
 /**
  * The library's life: draft → pending_approval → active → retired. Every change is one
  * transaction; a second pharmacist approves, and the old active version retires in the same one.
+ * Everyone who created, imported, edited or submitted a version is recorded with it
+ * (LibraryVersionEvent), and none of them may approve it.
  */
 @Injectable()
 export class LibraryVersionsService {
@@ -67,6 +71,7 @@ export class LibraryVersionsService {
         })) ??
         [];
       await this.writeRules(manager, draft.id, startingRules);
+      await this.recordEvent(manager, draft.id, author, rules ? 'imported' : 'created');
       await recordAudit(manager, author, {
         action: rules ? 'library-version.import' : 'library-version.create',
         entityType: 'library-version',
@@ -88,6 +93,7 @@ export class LibraryVersionsService {
       const version = await this.lockedVersion(manager, id, 'edit');
       await manager.delete(LimitRule, { versionId: version.id });
       await this.writeRules(manager, version.id, rules);
+      await this.recordEvent(manager, version.id, author, 'edited');
       await recordAudit(manager, author, {
         action: 'library-version.rules-replace',
         entityType: 'library-version',
@@ -109,6 +115,7 @@ export class LibraryVersionsService {
         { id },
         { status: 'pending_approval', submittedAt: new Date(), ...(note?.trim() ? { note: note.trim() } : {}) },
       );
+      await this.recordEvent(manager, id, author, 'submitted');
       await recordAudit(manager, author, {
         action: 'library-version.submit',
         entityType: 'library-version',
@@ -153,8 +160,9 @@ export class LibraryVersionsService {
     await this.users.verifySignature(approver.id, password);
     return this.dataSource.transaction(async (manager) => {
       const version = await this.lockedVersion(manager, id, 'approve');
-      if (version.authorId === approver.id) {
-        throw new ForbiddenException('A second pharmacist must approve: you wrote this version');
+      const contributed = contributionsOf(version, approver.id);
+      if (contributed) {
+        throw new ForbiddenException(`A second pharmacist must approve: you ${contributed} this version`);
       }
       if (version.submittedAt?.getTime() !== Date.parse(reviewedSubmission)) {
         throw new ConflictException(
@@ -172,6 +180,43 @@ export class LibraryVersionsService {
       });
       return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
     });
+  }
+
+  /**
+   * A reviewing pharmacist (not one who wrote it) sends a submitted version back to draft, signed,
+   * with a comment saying what to change; its authors see the comment on the version.
+   */
+  async sendBack(id: number, reviewer: AuthUser, password: string, comment: string): Promise<LibraryVersionDetail> {
+    await this.users.verifySignature(reviewer.id, password);
+    return this.dataSource.transaction(async (manager) => {
+      const version = await this.lockedVersion(manager, id, 'sendBack');
+      const contributed = contributionsOf(version, reviewer.id);
+      if (contributed) {
+        throw new ForbiddenException(
+          `You ${contributed} this version: withdraw it to draft instead; sending back is for a reviewing pharmacist`,
+        );
+      }
+      const text = comment.trim();
+      await manager.update(LibraryVersion, { id }, { status: 'draft', submittedAt: null });
+      await this.recordEvent(manager, id, reviewer, 'sent-back', text);
+      await recordAudit(manager, reviewer, {
+        action: 'library-version.send-back',
+        entityType: 'library-version',
+        entityId: id,
+        summary: { status: { from: version.status, to: 'draft' }, comment: text, signed: true },
+      });
+      return toLibraryVersionDetail(await this.library.loadVersion(manager, id));
+    });
+  }
+
+  private async recordEvent(
+    manager: EntityManager,
+    versionId: number,
+    user: AuthUser,
+    kind: LibraryVersionEventKind,
+    comment: string | null = null,
+  ): Promise<void> {
+    await manager.insert(LibraryVersionEvent, { versionId, userId: user.id, kind, comment });
   }
 
   /** The version, if the library lifecycle allows `action` in its status; 409 naming the status otherwise. */
@@ -205,17 +250,33 @@ export class LibraryVersionsService {
       );
     }
     if (rules.length > 0) {
-      await manager.insert(
-        LimitRule,
-        rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }) => ({
-          versionId,
-          drugId,
-          concentrationPerMl,
-          doseUnit,
-          perKg,
-          limits,
-        })),
-      );
+      // Without updateEntity(false) TypeORM reads the inserted rows back with one `id = ? OR …`
+      // term per row, and SQLite refuses an expression that deep (over 1000 terms): a 500.
+      await manager
+        .createQueryBuilder()
+        .insert()
+        .into(LimitRule)
+        .values(
+          rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }) => ({
+            versionId,
+            drugId,
+            concentrationPerMl,
+            doseUnit,
+            perKg,
+            limits,
+          })),
+        )
+        .updateEntity(false)
+        .execute();
     }
   }
+}
+
+/** What `userId` did to the version's content ("created, edited and submitted"); empty if nothing. */
+function contributionsOf(version: LibraryVersion, userId: number): string {
+  const kinds = new Set(version.events.filter((event) => event.userId === userId && event.kind !== 'sent-back').map((event) => event.kind));
+  // Versions from before contributions were recorded still name their author.
+  if (version.authorId === userId && !kinds.has('imported')) kinds.add('created');
+  const done = LIBRARY_CONTRIBUTIONS.filter((kind) => kinds.has(kind));
+  return done.length <= 1 ? (done[0] ?? '') : `${done.slice(0, -1).join(', ')} and ${done[done.length - 1]}`;
 }

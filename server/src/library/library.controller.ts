@@ -16,7 +16,14 @@ import {
 } from '@nestjs/common';
 import { FileInterceptor } from '@nestjs/platform-express';
 import type { Response } from 'express';
-import { type ImportPreview, type LibraryDiff, type LibraryVersion, type LibraryVersionDetail, PHARMACY_ROLES } from '@lockstep/shared';
+import {
+  type ImportPreview,
+  type LibraryAffectedOrders,
+  type LibraryDiff,
+  type LibraryVersion,
+  type LibraryVersionDetail,
+  PHARMACY_ROLES,
+} from '@lockstep/shared';
 import { ApiBody, ApiConsumes, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiProduces } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
@@ -29,7 +36,9 @@ import { ImportLibraryUploadModel } from './dto/import-library-upload.model.js';
 import { ImportLibraryDto } from './dto/import-library.dto.js';
 import { LibraryQueryDto } from './dto/library-query.dto.js';
 import { ReplaceRulesDto } from './dto/replace-rules.dto.js';
+import { SendBackVersionDto } from './dto/send-back-version.dto.js';
 import { SubmitVersionDto } from './dto/submit-version.dto.js';
+import { AffectedOrdersService } from './affected-orders.service.js';
 import { LibraryCsvService, type UploadedCsv } from './library-csv.service.js';
 import { MAX_LIBRARY_CSV_BYTES } from './library-csv-limit.js';
 import { LibraryVersionsService } from './library-versions.service.js';
@@ -43,6 +52,7 @@ export class LibraryController {
     private readonly library: LibraryService,
     private readonly versions: LibraryVersionsService,
     private readonly csv: LibraryCsvService,
+    private readonly affected: AffectedOrdersService,
   ) {}
 
   @ApiOperation({ summary: 'Dose-limit library versions' })
@@ -63,6 +73,14 @@ export class LibraryController {
   @Get('versions/:id/diff')
   diff(@Param('id', ParseIdPipe) id: number): Promise<LibraryDiff & { againstVersionId: number | null }> {
     return this.library.diff(id);
+  }
+
+  @ApiOperation({ summary: 'Open orders on the ward (verified or running) that the version’s limits would put outside' })
+  @ApiErrors(404)
+  @Get('versions/:id/affected-orders')
+  @Roles(...PHARMACY_ROLES)
+  affectedOrders(@Param('id', ParseIdPipe) id: number): Promise<LibraryAffectedOrders> {
+    return this.affected.affectedOrders(id);
   }
 
   @ApiOperation({ summary: 'A version’s rules as CSV (docs/library-csv.md)' })
@@ -118,7 +136,24 @@ export class LibraryController {
     return this.versions.withdraw(id, user);
   }
 
-  @ApiOperation({ summary: 'Approve a submitted version (signed; a pharmacist other than its author); it becomes active' })
+  @ApiOperation({
+    summary: 'Send a submitted version back to draft with a comment (signed; a pharmacist who did not write it)',
+  })
+  @ApiErrors(404, 409)
+  @Post('versions/:id/send-back')
+  @HttpCode(200)
+  @Roles(...PHARMACY_ROLES)
+  sendBack(
+    @Param('id', ParseIdPipe) id: number,
+    @Body() body: SendBackVersionDto,
+    @CurrentUser() user: AuthUser,
+  ): Promise<LibraryVersionDetail> {
+    return this.versions.sendBack(id, user, body.signature.password, body.comment);
+  }
+
+  @ApiOperation({
+    summary: 'Approve a submitted version (signed; a pharmacist who did not create, import, edit or submit it); it becomes active',
+  })
   @ApiErrors(404, 409)
   @Post('versions/:id/approve')
   @HttpCode(200)

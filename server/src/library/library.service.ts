@@ -8,7 +8,7 @@ import { LibraryVersion } from './entities/library-version.entity.js';
 import { LimitRule } from './entities/limit-rule.entity.js';
 import { toNamedRule } from './named-rule.js';
 
-const VERSION_RELATIONS = { ward: true, author: true, approver: true, rules: { drug: true } } as const;
+const VERSION_RELATIONS = { ward: true, author: true, approver: true, rules: { drug: true }, events: { user: true } } as const;
 
 /** Reading the dose-limit library: active versions, version lists, single versions, diffs. */
 @Injectable()

@@ -1,6 +1,8 @@
 import { z } from 'zod';
 import { answer } from '../api/response-registry.js';
 import { REGIMEN_FIELDS } from '../dose/regimen-fields.js';
+import { findingSchema } from '../orders/order-response.schema.js';
+import { ORDER_STATUSES } from '../orders/order-status.js';
 import type { RegimenField } from '../dose/types.js';
 import type { LibraryDiff, NamedRule, RuleChange } from './diff-library.js';
 import { LIMIT_KEYS, libraryVersionDetailSchema, libraryVersionSchema, limitRuleSchema } from './library.schema.js';
@@ -41,3 +43,33 @@ export type VersionDiff = z.infer<typeof versionDiffSchema>;
 /** The answer to an import with `dryRun`: the file's rules and their diff against the active version. */
 export const importPreviewSchema = answer('LibraryImportPreview', z.object({ rules: z.array(namedRuleSchema), diff: libraryDiffSchema }));
 export type ImportPreview = z.infer<typeof importPreviewSchema>;
+
+/** An open order (verified or running) that a version's rules would put outside a limit, with the findings. */
+export const libraryAffectedOrderSchema = answer(
+  'LibraryAffectedOrder',
+  z.object({
+    orderId: z.number().int(),
+    status: z.enum(ORDER_STATUSES),
+    patientId: z.number().int(),
+    patientName: z.string(),
+    bed: z.string(),
+    drugName: z.string(),
+    concentrationPerMl: z.number(),
+    doseUnit: z.string(),
+    /** The hard and soft findings of the shared order check against this version's rule. */
+    findings: z.array(findingSchema),
+  }),
+);
+export type LibraryAffectedOrder = z.infer<typeof libraryAffectedOrderSchema>;
+
+export const libraryAffectedOrdersSchema = answer(
+  'LibraryAffectedOrders',
+  z.object({
+    versionId: z.number().int(),
+    wardId: z.number().int(),
+    /** How many open orders on the ward were checked. */
+    checked: z.number().int(),
+    orders: z.array(libraryAffectedOrderSchema),
+  }),
+);
+export type LibraryAffectedOrders = z.infer<typeof libraryAffectedOrdersSchema>;

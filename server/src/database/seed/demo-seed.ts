@@ -1,6 +1,7 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { Drug } from '../../drugs/entities/drug.entity.js';
 import { LibraryVersion } from '../../library/entities/library-version.entity.js';
+import { LibraryVersionEvent } from '../../library/entities/library-version-event.entity.js';
 import { LimitRule } from '../../library/entities/limit-rule.entity.js';
 import { Patient } from '../../patients/entities/patient.entity.js';
 import { User } from '../../users/entities/user.entity.js';
@@ -94,6 +95,10 @@ async function seedDemoLibraries(
       LimitRule,
       library.rules.map(({ drug, ...rule }) => ({ ...rule, versionId: version.id, drugId: drugId(drug) })),
     );
+    await manager.insert(LibraryVersionEvent, [
+      { versionId: version.id, userId: author.id, kind: 'created', at: version.createdAt },
+      { versionId: version.id, userId: author.id, kind: 'submitted', at: approvedAt },
+    ]);
     story.push({
       actor: approver,
       action: 'library-version.approve',
@@ -126,6 +131,10 @@ async function seedDemoLibraries(
       drugId: drugId(drug),
     })),
   );
+  await manager.insert(LibraryVersionEvent, [
+    { versionId: draft.id, userId: author.id, kind: 'created', at: draft.createdAt },
+    { versionId: draft.id, userId: author.id, kind: 'submitted', at: draft.submittedAt! },
+  ]);
   story.push({
     actor: author,
     action: 'library-version.submit',

@@ -1,4 +1,10 @@
-import type { LibraryVersion as LibraryVersionResponse, LibraryVersionDetail, LimitRuleResponse } from '@lockstep/shared';
+import type {
+  LibraryContributor,
+  LibrarySendBack,
+  LibraryVersion as LibraryVersionResponse,
+  LibraryVersionDetail,
+  LimitRuleResponse,
+} from '@lockstep/shared';
 import type { LibraryVersion } from '../entities/library-version.entity.js';
 import type { LimitRule } from '../entities/limit-rule.entity.js';
 
@@ -36,10 +42,20 @@ export function toLibraryVersionResponse(version: LibraryVersion, ruleCount: num
   };
 }
 
-/** Expects `rules.drug` loaded as well. Rules sorted by drug name, then concentration. */
+/** Expects `rules.drug` and `events.user` loaded as well. Rules sorted by drug name, then concentration. */
 export function toLibraryVersionDetail(version: LibraryVersion): LibraryVersionDetail {
   const rules = [...version.rules]
     .sort((a, b) => a.drug.genericName.localeCompare(b.drug.genericName) || a.concentrationPerMl - b.concentrationPerMl)
     .map(toLimitRuleResponse);
-  return { ...toLibraryVersionResponse(version, rules.length), rules };
+  const events = [...version.events].sort((a, b) => a.at.getTime() - b.at.getTime() || a.id - b.id);
+  const contributors: LibraryContributor[] = [];
+  let sentBack: LibrarySendBack | null = null;
+  for (const event of events) {
+    if (event.kind === 'sent-back') {
+      sentBack = { byId: event.userId, byName: event.user.displayName, at: event.at.toISOString(), comment: event.comment ?? '' };
+    } else {
+      contributors.push({ userId: event.userId, userName: event.user.displayName, action: event.kind, at: event.at.toISOString() });
+    }
+  }
+  return { ...toLibraryVersionResponse(version, rules.length), rules, contributors, sentBack };
 }

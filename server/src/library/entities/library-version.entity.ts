@@ -13,6 +13,7 @@ import {
 import type { LibraryStatus } from '@lockstep/shared';
 import { User } from '../../users/entities/user.entity.js';
 import { Ward } from '../../wards/entities/ward.entity.js';
+import { LibraryVersionEvent } from './library-version-event.entity.js';
 import { LimitRule } from './limit-rule.entity.js';
 
 /**
@@ -72,4 +73,8 @@ export class LibraryVersion {
 
   @OneToMany(() => LimitRule, (rule) => rule.version)
   rules: Relation<LimitRule>[];
+
+  /** Who created, imported, edited, submitted or sent it back, and when. */
+  @OneToMany(() => LibraryVersionEvent, (event) => event.version)
+  events: Relation<LibraryVersionEvent>[];
 }
