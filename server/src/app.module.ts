@@ -10,6 +10,7 @@ import { clientDistPath } from './config/paths.js';
 import { validateEnv } from './config/env.validation.js';
 import { DatabaseModule } from './database/database.module.js';
 import { DrugsModule } from './drugs/drugs.module.js';
+import { EquianalgesicModule } from './equianalgesic/equianalgesic.module.js';
 import { FhirModule } from './fhir/fhir.module.js';
 import { FlagsModule } from './flags/flags.module.js';
 import { HandoverModule } from './handover/handover.module.js';
@@ -39,6 +40,7 @@ function clientModules(): DynamicModule[] {
     WardsModule,
     PatientsModule,
     DrugsModule,
+    EquianalgesicModule,
     MailModule,
     LibraryModule,
     OrdersModule,

@@ -4,6 +4,7 @@ import { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
 import { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
 import { ReleaseReconciliation } from '../bedside/entities/release-reconciliation.entity.js';
 import { Drug } from '../drugs/entities/drug.entity.js';
+import { EquianalgesicFactor } from '../equianalgesic/entities/equianalgesic-factor.entity.js';
 import { Flag } from '../flags/entities/flag.entity.js';
 import { HandoverSignoff } from '../handover/entities/handover-signoff.entity.js';
 import { LibraryVersion } from '../library/entities/library-version.entity.js';
@@ -39,4 +40,5 @@ export const ENTITIES = [
   HandoverSignoff,
   AuditEvent,
   RevokedToken,
+  EquianalgesicFactor,
 ];

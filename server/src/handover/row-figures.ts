@@ -95,7 +95,8 @@ export function rowFigures(order: PcaOrder, mine: OrderInputs, policy: WardPolic
     .sort((x, y) => x.time - y.time)
     .map(({ reading }) => reading);
   const boluses = mine.boluses.map((bolus) => ({ at: bolus.at.toISOString(), amount: bolus.amount }));
-  const drug = { concentrationPerMl: order.concentrationPerMl, doseUnit: order.doseUnit, drug: order.drug.genericName };
+  // The board shows no oral-morphine figure, so it needs no equianalgesic factor.
+  const drug = { concentrationPerMl: order.concentrationPerMl, doseUnit: order.doseUnit, conversion: null };
   // Its rolling 24-hour total covers every reading given, whatever the hours of its buckets.
   const usage = usageSummary(readings, boluses, drug, now, 4);
   const recent = usage.totals;

@@ -4,6 +4,7 @@ import { type DataSource, In, MoreThanOrEqual } from 'typeorm';
 import { projectedEmptyAt, type SyringeReading, type UsageResponse, usageSummary } from '@lockstep/shared';
 import { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
 import { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
+import { EquianalgesicService } from '../equianalgesic/equianalgesic.service.js';
 import { OrdersService } from '../orders/orders.service.js';
 import { Observation } from './entities/observation.entity.js';
 import { nextObservationFor } from './next-observation.js';
@@ -14,6 +15,7 @@ export class UsageService {
   constructor(
     @InjectDataSource() private readonly dataSource: DataSource,
     private readonly orders: OrdersService,
+    private readonly equianalgesic: EquianalgesicService,
   ) {}
 
   async usage(orderId: number, hours: number, now = new Date()): Promise<UsageResponse> {
@@ -45,13 +47,25 @@ export class UsageService {
       })),
     ];
     const boluses = await manager.find(ClinicianBolus, { where: { orderId, at: MoreThanOrEqual(since) } });
+    // Pharmacy's equianalgesic table, read by the order's formulary drug id (never by its name).
+    const factors = await this.equianalgesic.factorsFor(manager, order.drugId);
     const summary = usageSummary(
       readings,
       boluses.map((bolus) => ({ at: bolus.at.toISOString(), amount: bolus.amount })),
-      { concentrationPerMl: order.concentrationPerMl, doseUnit: order.doseUnit, drug: order.drug.genericName },
+      { concentrationPerMl: order.concentrationPerMl, doseUnit: order.doseUnit, conversion: factors?.conversion ?? null },
       now,
       hours,
     );
+    const oralMorphineFactors =
+      factors && summary.oralMorphineEquivalent24hMg !== null
+        ? {
+            parenteralAmount: factors.conversion.parenteralAmount,
+            parenteralUnit: factors.conversion.parenteralUnit,
+            parenteralSource: factors.parenteralSource,
+            oralMorphineMg: factors.conversion.oralMorphineMg,
+            oralSource: factors.oralSource,
+          }
+        : null;
 
     const syringeReadings = last
       ? readings.filter((reading) => reading.syringeId === last.releaseId).sort((x, y) => Date.parse(x.at) - Date.parse(y.at))
@@ -61,6 +75,6 @@ export class UsageService {
         ? projectedEmptyAt(syringeReadings, last.syringeRemainingMl, order.basalRatePerHour / order.concentrationPerMl)
         : null;
     const nextObservation = nextObservationFor(order, last?.at ?? null, now);
-    return { ...summary, doseUnit: order.doseUnit, projectedEmptyAt: projected, nextObservation };
+    return { ...summary, oralMorphineFactors, doseUnit: order.doseUnit, projectedEmptyAt: projected, nextObservation };
   }
 }

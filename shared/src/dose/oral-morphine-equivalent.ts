@@ -2,31 +2,39 @@ import type { DoseUnit } from '../drugs/drug.schema.js';
 import { withoutFloatNoise } from './float-noise.js';
 import { convertDoseUnit } from './units.js';
 
-export type EquianalgesicDrug = 'morphine' | 'hydromorphone' | 'fentanyl';
-
-// IV amounts taken as equal to 10 mg IV morphine. Morphine and fentanyl: NCI PDQ Cancer Pain,
-// health professional version, equianalgesic table. Hydromorphone: Pennsylvania Patient Safety
-// Advisory, 2007.
-const IV_EQUIVALENT_OF_10_MG_IV_MORPHINE: Readonly<Record<EquianalgesicDrug, { amount: number; unit: DoseUnit }>> = {
-  morphine: { amount: 10, unit: 'mg' },
-  hydromorphone: { amount: 1.5, unit: 'mg' },
-  fentanyl: { amount: 100, unit: 'mcg' },
-};
-
-// NCI PDQ Cancer Pain, health professional version, equianalgesic table: 10 mg IV morphine
-// ≈ 30 mg oral morphine.
-const ORAL_MORPHINE_MG_PER_10_MG_IV_MORPHINE = 30;
+/** The parenteral morphine dose every equianalgesic factor is measured against. */
+export const REFERENCE_PARENTERAL_MORPHINE_MG = 10;
 
 /**
- * An IV amount (typically a 24-hour total) as oral morphine milligrams, for planning the step
- * down to oral analgesia: IV morphine × 3, IV hydromorphone × 20 per mg, IV fentanyl × 0.3 per
- * mcg. A planning aid only: always show it with CROSS_TOLERANCE_CAUTION. NaN for a negative or
- * non-finite amount, or a drug not in the table.
+ * The two factors one conversion uses, both read from pharmacy's equianalgesic table
+ * (`equianalgesic_factors`, edited on the pharmacy screen) by the order's formulary drug id:
+ * how much of the drug, given parenterally, is taken as equal to 10 mg parenteral morphine, and
+ * how much oral morphine is taken as equal to 10 mg parenteral morphine. No factor lives in this
+ * file: the client and the server pass the same table's values, so they compute the same figure.
  */
-export function oralMorphineEquivalent(drug: EquianalgesicDrug, amount: number, unit: DoseUnit): number {
-  const equivalent = IV_EQUIVALENT_OF_10_MG_IV_MORPHINE[drug];
-  if (equivalent === undefined || !Number.isFinite(amount) || amount < 0) return Number.NaN;
+export type OralMorphineConversion = {
+  /** Parenteral amount of the drug taken as equal to 10 mg parenteral morphine, e.g. hydromorphone 2 mg. */
+  parenteralAmount: number;
+  parenteralUnit: DoseUnit;
+  /** Oral morphine mg taken as equal to 10 mg parenteral morphine, e.g. 30. */
+  oralMorphineMg: number;
+};
+
+const usableFactor = (value: number) => Number.isFinite(value) && value > 0;
+
+/**
+ * A parenteral amount (typically a 24-hour total) as oral morphine milligrams, for planning the
+ * step down to oral analgesia: amount ÷ parenteral equivalent × oral morphine per 10 mg
+ * parenteral morphine. A planning aid only: always show it with CROSS_TOLERANCE_CAUTION and the
+ * factors used. NaN for a negative or non-finite amount, an unknown unit, or a factor that is not
+ * a finite number above 0 (never 0, which would read as "no opioid").
+ */
+export function oralMorphineEquivalent(amount: number, unit: DoseUnit, conversion: OralMorphineConversion): number {
+  if (!Number.isFinite(amount) || amount < 0) return Number.NaN;
   if (unit !== 'mg' && unit !== 'mcg') return Number.NaN;
-  const inTableUnit = convertDoseUnit(amount, unit, equivalent.unit);
-  return withoutFloatNoise((inTableUnit / equivalent.amount) * ORAL_MORPHINE_MG_PER_10_MG_IV_MORPHINE);
+  const { parenteralAmount, parenteralUnit, oralMorphineMg } = conversion;
+  if (!usableFactor(parenteralAmount) || !usableFactor(oralMorphineMg)) return Number.NaN;
+  if (parenteralUnit !== 'mg' && parenteralUnit !== 'mcg') return Number.NaN;
+  const inFactorUnit = convertDoseUnit(amount, unit, parenteralUnit);
+  return withoutFloatNoise((inFactorUnit / parenteralAmount) * oralMorphineMg);
 }

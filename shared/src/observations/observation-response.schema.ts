@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { answer } from '../api/response-registry.js';
+import { DOSE_UNITS } from '../drugs/drug.schema.js';
 import { flagSeveritySchema } from '../orders/order-response.schema.js';
 import { observationDueSchema } from './observation-due.js';
 import { SEDATION_LEVELS } from './sedation-scale.js';
@@ -48,6 +49,16 @@ export const usageSchema = answer(
     rolling24hDose: z.number(),
     averageDosePerHour: z.number(),
     oralMorphineEquivalent24hMg: z.number().nullable(),
+    /** The factors of pharmacy's equianalgesic table the figure used, each with its source; null when none is set. */
+    oralMorphineFactors: z
+      .object({
+        parenteralAmount: z.number(),
+        parenteralUnit: z.enum(DOSE_UNITS),
+        parenteralSource: z.string(),
+        oralMorphineMg: z.number(),
+        oralSource: z.string(),
+      })
+      .nullable(),
     doseUnit: z.string(),
     projectedEmptyAt: z.string().nullable(),
     nextObservation: observationDueSchema.nullable(),

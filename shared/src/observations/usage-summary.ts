@@ -1,5 +1,5 @@
 import { withoutFloatNoise } from '../dose/float-noise.js';
-import { oralMorphineEquivalent, type EquianalgesicDrug } from '../dose/oral-morphine-equivalent.js';
+import { oralMorphineEquivalent, type OralMorphineConversion } from '../dose/oral-morphine-equivalent.js';
 import type { PumpReading } from '../dose/types.js';
 import { usageBetween } from '../dose/usage-between.js';
 import type { DoseUnit } from '../drugs/drug.schema.js';
@@ -16,6 +16,7 @@ export type UsageSummary = {
   totals: { attempts: number; delivered: number; dose: number; bolusDose: number };
   rolling24hDose: number;
   averageDosePerHour: number;
+  /** Null when pharmacy has set no conversion factor for the drug (never 0). */
   oralMorphineEquivalent24hMg: number | null;
 };
 
@@ -24,12 +25,14 @@ const HOUR = 3_600_000;
 /**
  * Hourly use over the last `hours` from consecutive readings of the same syringe (each difference
  * counts in the hour of the later reading) plus clinician boluses; the 24-hour rolling total,
- * and that total as oral morphine for step-down planning (always shown with the cross-tolerance caution).
+ * and that total as oral morphine for step-down planning (always shown with the cross-tolerance caution
+ * and the factors used). `conversion` is the order's drug's row of pharmacy's equianalgesic table
+ * (`conversionFor`), or null when there is none: then there is no oral-morphine figure.
  */
 export function usageSummary(
   readings: readonly SyringeReading[],
   boluses: readonly BolusEntry[],
-  order: { concentrationPerMl: number; doseUnit: DoseUnit; drug: string },
+  order: { concentrationPerMl: number; doseUnit: DoseUnit; conversion: OralMorphineConversion | null },
   now: Date,
   hours: number,
 ): UsageSummary {
@@ -79,13 +82,13 @@ export function usageSummary(
     { attempts: 0, delivered: 0, dose: 0, bolusDose: 0 },
   );
   const rolling24hDose = withoutFloatNoise(rolling);
-  const known = ['morphine', 'hydromorphone', 'fentanyl'].includes(order.drug);
+  const oral = order.conversion ? oralMorphineEquivalent(rolling24hDose, order.doseUnit, order.conversion) : Number.NaN;
   return {
     hours,
     buckets,
     totals,
     rolling24hDose,
     averageDosePerHour: withoutFloatNoise((totals.dose + totals.bolusDose) / hours),
-    oralMorphineEquivalent24hMg: known ? oralMorphineEquivalent(order.drug as EquianalgesicDrug, rolling24hDose, order.doseUnit) : null,
+    oralMorphineEquivalent24hMg: Number.isFinite(oral) ? oral : null,
   };
 }

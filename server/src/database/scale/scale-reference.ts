@@ -1,4 +1,4 @@
-import { DEFAULT_WARD_POLICY, type LimitRuleResponse, type WardPolicy } from '@lockstep/shared';
+import { DEFAULT_EQUIANALGESIC_FACTORS, DEFAULT_WARD_POLICY, type LimitRuleResponse, type WardPolicy } from '@lockstep/shared';
 import { DEMO_DRUGS } from '../seed/demo-data.js';
 import { DEMO_LIBRARIES } from '../seed/demo-library.js';
 import { DEMO_STAFF } from '../seed/demo-staff.js';
@@ -29,6 +29,11 @@ export function writeStaffAndDrugs(
   passwordHash: string,
 ): { staff: Staff; drugs: Drugs; userIds: Map<string, number> } {
   const drugs: Drugs = new Map(DEMO_DRUGS.map((drug) => [drug.genericName, { id: writer.insert('drugs', drug), doseUnit: drug.doseUnit }]));
+  // Pharmacy's shipped equianalgesic table, so the usage page shows its oral-morphine figure.
+  for (const { genericName, ...factor } of DEFAULT_EQUIANALGESIC_FACTORS) {
+    const drug = drugs.get(genericName);
+    if (drug) writer.insert('equianalgesic_factors', { ...factor, drugId: drug.id, changedById: null, changedAt: sqlTime(Date.now()) });
+  }
   const userIds = new Map<string, number>();
   for (const person of DEMO_STAFF) {
     const id = writer.insert('users', {

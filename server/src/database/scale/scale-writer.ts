@@ -9,6 +9,7 @@ type Row = Record<string, string | number | null>;
 
 const TABLES = {
   drugs: ['genericName', 'doseUnit'],
+  equianalgesic_factors: ['drugId', 'route', 'amount', 'unit', 'source', 'changedById', 'changedAt'],
   wards: ['code', 'name', 'specialty', 'weightBasedDosing', 'pharmacyEmail', 'nurseInChargeEmail'],
   users: ['username', 'displayName', 'role', 'passwordHash', 'email'],
   user_wards: ['userId', 'wardId'],

@@ -1,5 +1,6 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { Drug } from '../../drugs/entities/drug.entity.js';
+import { writeDefaultEquianalgesicFactors } from '../../equianalgesic/default-factors.js';
 import { LibraryVersion } from '../../library/entities/library-version.entity.js';
 import { LibraryVersionEvent } from '../../library/entities/library-version-event.entity.js';
 import { LimitRule } from '../../library/entities/limit-rule.entity.js';
@@ -36,6 +37,7 @@ async function seedDemoData(manager: EntityManager, now: number): Promise<void> 
     Drug,
     DEMO_DRUGS.map((drug) => manager.create(Drug, drug)),
   );
+  await writeDefaultEquianalgesicFactors(manager, drugs, new Date(now - 30 * 24 * 3600 * 1000));
 
   // The demo accounts share one password, so one (slow, salted) hash serves them all.
   const passwordHash = await hashPassword(DEMO_PASSWORD);
