@@ -166,7 +166,7 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
           </Grid.Col>
           <Grid.Col span={{ base: 12, lg: 4 }}>
             <div style={{ position: 'sticky', top: 72 }}>
-              <OrderCheckPanel check={check} doseUnit={rule?.doseUnit ?? null} />
+              <OrderCheckPanel check={check} doseUnit={rule?.doseUnit ?? null} rule={rule} weightKg={patient.weightKg} />
             </div>
           </Grid.Col>
         </Grid>
