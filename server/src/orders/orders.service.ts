@@ -7,6 +7,9 @@ import {
   type OrderDetail,
   type OrderListEntry,
   type OrderStatus,
+  OPEN_ORDER_STATUSES,
+  otherOpioidOrders,
+  type OtherPcaOrder,
   reasonsToKeep,
   regimenTypeOf,
   syringeState,
@@ -168,11 +171,36 @@ export class OrdersService {
             .getRawMany<{ orderId: number; at: string }>(),
     ]);
     const lastObservedAt = new Map(latest.map((row) => [Number(row.orderId), storedDate(row.at)]));
+    const patientOrders = await this.unfinishedOrdersOf(manager, [...new Set(orders.map((order) => order.patientId))]);
     return orders.map((order) => ({
       ...toOrderSummary(order),
       syringeState: syringeState(releases.filter((release) => release.orderId === order.id)),
       nextObservation: nextObservationFor(order, lastObservedAt.get(order.id) ?? null, now),
+      otherOpenOrders: otherOpioidOrders(patientOrders.get(order.patientId) ?? [], order.id),
     }));
+  }
+
+  /** Each patient's unfinished orders, in one query, for the queue's duplicate-therapy mark. */
+  private async unfinishedOrdersOf(manager: EntityManager, patientIds: number[]): Promise<Map<number, OtherPcaOrder[]>> {
+    const byPatient = new Map<number, OtherPcaOrder[]>();
+    if (patientIds.length === 0) return byPatient;
+    const rows = await manager.find(PcaOrder, {
+      select: { id: true, patientId: true, status: true, doseUnit: true, concentrationPerMl: true, drug: { id: true, genericName: true } },
+      where: { patientId: In(patientIds), status: In(OPEN_ORDER_STATUSES) },
+      relations: { drug: true },
+      order: { id: 'ASC' },
+    });
+    for (const row of rows) {
+      const entry = {
+        id: row.id,
+        status: row.status,
+        drugName: row.drug.genericName,
+        doseUnit: row.doseUnit,
+        concentrationPerMl: row.concentrationPerMl,
+      };
+      byPatient.set(row.patientId, [...(byPatient.get(row.patientId) ?? []), entry]);
+    }
+    return byPatient;
   }
 
   async get(id: number): Promise<OrderDetail> {

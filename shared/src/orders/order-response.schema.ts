@@ -121,7 +121,20 @@ export const orderSummarySchema: z.ZodType<OrderSummary> = answer('OrderSummary'
 
 export const orderListEntrySchema: z.ZodType<OrderListEntry> = answer(
   'OrderListEntry',
-  z.object({ ...summaryShape, syringeState: z.enum(['running', 'ready', 'none']), nextObservation: observationDueSchema.nullable() }),
+  z.object({
+    ...summaryShape,
+    syringeState: z.enum(['running', 'ready', 'none']),
+    nextObservation: observationDueSchema.nullable(),
+    otherOpenOrders: z.array(
+      z.object({
+        id: z.number().int(),
+        status: orderStatusSchema,
+        drugName: z.string(),
+        doseUnit: doseUnitSchema,
+        concentrationPerMl: z.number(),
+      }),
+    ),
+  }),
 );
 
 export const orderDetailSchema: z.ZodType<OrderDetail> = answer(

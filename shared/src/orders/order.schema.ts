@@ -6,6 +6,7 @@ import type { Finding } from '../dose/types.js';
 import type { LimitRuleResponse } from '../library/library.schema.js';
 import type { ObservationDue } from '../observations/observation-due.js';
 import type { SyringeState } from '../bedside/bedside-actions.js';
+import type { OtherPcaOrder } from './duplicate-therapy.js';
 import { orderFieldsSchema, type OrderDerivedValues } from './order-fields.schema.js';
 import type { OrderStatus } from './order-status.js';
 
@@ -111,7 +112,12 @@ export type OrderSummary = {
  * An order as `GET /api/orders` lists it: the summary, where its syringes stand and when its next
  * observation is due, so a ward's list of PCAs is one request.
  */
-export type OrderListEntry = OrderSummary & { syringeState: SyringeState; nextObservation: ObservationDue | null };
+export type OrderListEntry = OrderSummary & {
+  syringeState: SyringeState;
+  nextObservation: ObservationDue | null;
+  /** The patient's other unfinished orders (shared `otherOpioidOrders`), for the pharmacist's queue. */
+  otherOpenOrders: OtherPcaOrder[];
+};
 
 export type OrderDetail = OrderSummary & {
   derived: OrderDerivedValues;

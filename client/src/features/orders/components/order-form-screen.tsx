@@ -2,6 +2,7 @@ import { useMemo, useState, type ReactNode } from 'react';
 import { Alert, Button, Grid, Group, Paper, Stack, Text, TextInput, Title } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconAlertCircle, IconArrowBackUp, IconSignature } from '@tabler/icons-react';
+import { OpenPcaAlert } from './open-pca-alert';
 import { useNavigate } from 'react-router-dom';
 import {
   blockingFindings,
@@ -49,7 +50,7 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
   const [unsigned, setUnsigned] = useState<Omit<CreateOrderRequest, 'signature'> | null>(null);
 
   const rule = rules.find((candidate) => String(candidate.id) === form.values.ruleId) ?? null;
-  const check = useOrderCheck(form.values, rule, patient);
+  const check = useOrderCheck(form.values, rule, patient, revising?.id);
   const soft = softFindingFields(check.findings);
   const blocking = blockingFindings(check.findings);
   const sets = useMemo(() => availableOrderSets(rules, weightBasedWard), [rules, weightBasedWard]);
@@ -110,6 +111,7 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
           <Text size="sm">{revising.statusReason}</Text>
         </Alert>
       ) : null}
+      {check.openPca ? <OpenPcaAlert open={check.openPca} /> : null}
       {formAlert.length > 0 ? (
         <Alert color="red" variant="light" icon={<IconAlertCircle aria-hidden />} title="The order is not signed yet" role="alert">
           {formAlert.join(' ')}

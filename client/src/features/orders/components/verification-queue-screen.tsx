@@ -3,7 +3,7 @@ import { Badge, EmptyState, Group, Select, Stack, Text, Title } from '@mantine/c
 import { IconClipboardCheck, IconVersions } from '@tabler/icons-react';
 import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { useNavigate, useSearchParams } from 'react-router-dom';
-import { formatRegimen, type OrderSummary, type Ward } from '@lockstep/shared';
+import { formatRegimen, type OrderListEntry, type Ward } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { DataTable } from '@/components/ui/data-table';
 import { paths } from '@/config/paths';
@@ -12,13 +12,14 @@ import { minutesSince } from '@/utils/clock';
 import { formatElapsed } from '@/utils/duration';
 import { formatDateTime } from '@/utils/format-date';
 import { useOrders } from '@/api/orders/get-orders';
+import { OtherOpioidOrdersMark } from './other-opioid-orders';
 
 const ALL_WARDS = 'all';
 // Others sign orders all the time: look again twice a minute.
 const QUEUE_REFRESH_MS = 30_000;
 const AWAITING = ['awaiting_verification'] as const;
 
-const column = createColumnHelper<OrderSummary>();
+const column = createColumnHelper<OrderListEntry>();
 
 export interface VerificationQueueScreenProps {
   wards: Ward[];
@@ -64,6 +65,7 @@ export function VerificationQueueScreen({ wards, wardsLoading }: VerificationQue
             <Text size="xs" c="dimmed">
               MRN {row.original.patientMrn}
             </Text>
+            <OtherOpioidOrdersMark others={row.original.otherOpenOrders} />
           </div>
         ),
       }),

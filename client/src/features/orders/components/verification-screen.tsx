@@ -10,6 +10,7 @@ import { useOrder } from '@/api/orders/get-order';
 import { isReleasable, OrderLoading } from './order-detail-screen';
 import { OrderHeader } from './order-header';
 import { OrderReview } from './order-review';
+import { OtherOpioidOrdersAlert } from './other-opioid-orders';
 import { ReleaseModal } from './release-modal';
 import { VerificationDecision, type Decision } from './verification-decisions';
 
@@ -77,6 +78,7 @@ export function VerificationScreen({ orderId, weightKg, patientBanner }: Verific
         </Text>
       ) : null}
       {patientBanner}
+      {awaiting ? <OtherOpioidOrdersAlert orderId={order.id} patientId={order.patientId} /> : null}
       <OrderReview order={order} previous={previousQuery.data ?? null} weightKg={weightKg} canPrint />
       {decision ? (
         <VerificationDecision

@@ -8,8 +8,13 @@ import {
   type OrderFields,
   type Patient,
   patientFactorsOf,
+  duplicatePcaFinding,
+  ONE_PCA_STATUSES,
+  openPcaFor,
+  type OtherPcaOrder,
 } from '@lockstep/shared';
 import { useOrderPreview } from '@/api/orders/preview-order';
+import { useOrders } from '@/api/orders/get-orders';
 import { sameFindings } from '../utils/findings';
 import { localFindings, readOrderForm, type OrderFormValues } from '../utils/order-form';
 
@@ -23,6 +28,8 @@ export interface OrderCheck {
   /** The findings to act on: the local check, or the server's where it differs. */
   findings: Finding[];
   server: ServerCheck;
+  /** The patient's open PCA that signing would duplicate (the API answers 409), or null. */
+  openPca: OtherPcaOrder | null;
 }
 
 // Long enough not to ask on every keystroke, short enough to answer before the hand leaves the keys.
@@ -37,19 +44,23 @@ function sameFields(a: OrderFields | null, b: OrderFields | null): boolean {
  * keystroke, confirmed by the server's preview once typing pauses. The server runs the same
  * functions on the same library; if it ever disagrees, its answer is the one shown.
  */
-export function useOrderCheck(values: OrderFormValues, rule: LimitRuleResponse | null, patient: Patient): OrderCheck {
+export function useOrderCheck(values: OrderFormValues, rule: LimitRuleResponse | null, patient: Patient, revisingId?: number): OrderCheck {
+  const openOrders = useOrders({ patientId: patient.id, status: ONE_PCA_STATUSES });
+  const openPca = openPcaFor(openOrders.data ?? [], revisingId);
   const read = useMemo(() => readOrderForm(values, rule, patient.id), [values, rule, patient.id]);
   const local = useMemo(() => {
     if (!rule) return null;
     const today = new Date();
     const context = { drug: { id: rule.drugId, genericName: rule.drugName }, today: today.toISOString().slice(0, 10) };
-    return { derived: deriveOrderValues(read.regimen), findings: localFindings(read, rule, patientFactorsOf(patient, today), context) };
-  }, [read, rule, patient]);
+    const findings = localFindings(read, rule, patientFactorsOf(patient, today), context);
+    // The preview puts the same refusal first, so the two lists stay comparable.
+    return { derived: deriveOrderValues(read.regimen), findings: openPca ? [duplicatePcaFinding(openPca), ...findings] : findings };
+  }, [read, rule, patient, openPca]);
 
   const [settledFields] = useDebouncedValue(read.fields, SERVER_CHECK_DELAY_MS);
   const preview = useOrderPreview(settledFields);
 
-  if (!local) return { fields: null, derived: null, findings: [], server: 'waiting' };
+  if (!local) return { fields: null, derived: null, findings: openPca ? [duplicatePcaFinding(openPca)] : [], server: 'waiting', openPca };
 
   const current = read.fields !== null && sameFields(settledFields, read.fields) && !preview.isPlaceholderData;
   let server: ServerCheck = 'waiting';
@@ -64,5 +75,5 @@ export function useOrderCheck(values: OrderFormValues, rule: LimitRuleResponse |
       findings = preview.data.findings;
     }
   }
-  return { fields: read.fields, derived: local.derived, findings, server };
+  return { fields: read.fields, derived: local.derived, findings, server, openPca };
 }
