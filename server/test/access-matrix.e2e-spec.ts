@@ -106,6 +106,21 @@ export const ACCESS_MATRIX: MatrixRow[] = [
     ok: 400,
     body: EMPTY,
   },
+  {
+    method: 'POST',
+    path: '/api/library/versions/:id/send-back',
+    url: '/api/library/versions/5/send-back',
+    access: ['pharmacist'],
+    ok: 400,
+    body: EMPTY,
+  },
+  {
+    method: 'GET',
+    path: '/api/library/versions/:id/affected-orders',
+    url: '/api/library/versions/5/affected-orders',
+    access: ['pharmacist'],
+    ok: 200,
+  },
   { method: 'DELETE', path: '/api/library/versions/:id', url: '/api/library/versions/1', access: ['pharmacist'], ok: 409 },
   { method: 'POST', path: '/api/library/import', url: '/api/library/import', access: ['pharmacist'], ok: 400, body: EMPTY },
 

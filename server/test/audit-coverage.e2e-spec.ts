@@ -239,7 +239,7 @@ describe('every state-changing route writes its audit event', () => {
       'order.cancel',
     );
 
-    // The library: import a draft, edit, submit, withdraw, resubmit, approve; create and discard another.
+    // The library: import a draft, edit, submit, withdraw, resubmit, send back, resubmit, approve; create and discard another.
     const beforeImport = await latestEvent();
     const imported = await request(t.http)
       .post('/api/library/import')
@@ -269,6 +269,17 @@ describe('every state-changing route writes its audit event', () => {
       undefined,
       200,
       'library-version.withdraw',
+    );
+    await step('post', '/api/library/versions/:id/submit', `${version}/submit`, 'pharmacist', {}, 200, 'library-version.submit');
+    // The reviewer sends it back with a comment, and the author submits again.
+    await step(
+      'post',
+      '/api/library/versions/:id/send-back',
+      `${version}/send-back`,
+      'secondPharmacist',
+      { signature: { password: DEMO_PASSWORD }, comment: 'Please check the lockout limits again' },
+      200,
+      'library-version.send-back',
     );
     const { submittedAt } = await step(
       'post',

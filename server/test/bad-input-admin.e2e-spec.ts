@@ -6,6 +6,7 @@ import { LoginDto } from '../src/auth/dto/login.dto.js';
 import { ApproveVersionDto } from '../src/library/dto/approve-version.dto.js';
 import { CreateDraftDto } from '../src/library/dto/create-draft.dto.js';
 import { ReplaceRulesDto } from '../src/library/dto/replace-rules.dto.js';
+import { SendBackVersionDto } from '../src/library/dto/send-back-version.dto.js';
 import { SubmitVersionDto } from '../src/library/dto/submit-version.dto.js';
 import { CreateUserDto } from '../src/users/dto/create-user.dto.js';
 import { UpdateUserDto } from '../src/users/dto/update-user.dto.js';
@@ -19,6 +20,7 @@ import {
   CREATE_USER,
   LOGIN,
   REPLACE_RULES,
+  SEND_BACK_VERSION,
   SUBMIT_VERSION,
   UPDATE_USER,
   WARD_POLICY,
@@ -149,6 +151,15 @@ const ROUTES: BadInputRoute[] = [
     spec: APPROVE_VERSION,
     dto: ApproveVersionDto,
     valid: () => ({ signature: { password: DEMO_PASSWORD }, submittedAt: state.pendingSubmittedAt }),
+  },
+  {
+    method: 'POST',
+    path: '/api/library/versions/:id/send-back',
+    url: () => `/api/library/versions/${PENDING_VERSION}/send-back`,
+    role: 'pharmacist',
+    spec: SEND_BACK_VERSION,
+    dto: SendBackVersionDto,
+    valid: () => ({ signature: { password: DEMO_PASSWORD }, comment: 'The morphine demand soft maximum needs a second look' }),
   },
 ];
 

@@ -17,6 +17,7 @@ const SAMPLE_URLS: Record<string, string> = {
   '/api/patients/{id}': '/api/patients/1',
   '/api/library/versions/{id}': '/api/library/versions/5',
   '/api/library/versions/{id}/diff': '/api/library/versions/5/diff',
+  '/api/library/versions/{id}/affected-orders': '/api/library/versions/5/affected-orders',
   '/api/wards/{wardId}/library': '/api/wards/3/library',
   '/api/orders/{id}': '/api/orders/4',
   '/api/orders/{orderId}/observations': '/api/orders/4/observations',

@@ -26,6 +26,7 @@ import {
   replaceRulesSchema,
   requestFieldErrors,
   secondCheckSchema,
+  sendBackVersionSchema,
   signedRequestSchema,
   submitVersionSchema,
   syringeChangeSchema,
@@ -45,6 +46,7 @@ import { ApproveVersionDto } from '../src/library/dto/approve-version.dto.js';
 import { CreateDraftDto } from '../src/library/dto/create-draft.dto.js';
 import { ImportLibraryDto } from '../src/library/dto/import-library.dto.js';
 import { ReplaceRulesDto } from '../src/library/dto/replace-rules.dto.js';
+import { SendBackVersionDto } from '../src/library/dto/send-back-version.dto.js';
 import { SubmitVersionDto } from '../src/library/dto/submit-version.dto.js';
 import { CreateObservationDto } from '../src/observations/dto/create-observation.dto.js';
 import { CreateOrderDto } from '../src/orders/dto/create-order.dto.js';
@@ -73,6 +75,7 @@ import {
   RELEASE,
   REPLACE_RULES,
   SECOND_CHECK,
+  SEND_BACK_VERSION,
   SIGNED,
   SIGNOFF,
   SUBMIT_VERSION,
@@ -118,6 +121,7 @@ const CONTRACTS: Record<string, Contract> = {
   'PUT /api/library/versions/:param/rules': { spec: REPLACE_RULES, dto: ReplaceRulesDto, schema: replaceRulesSchema },
   'POST /api/library/versions/:param/submit': { spec: SUBMIT_VERSION, dto: SubmitVersionDto, schema: submitVersionSchema },
   'POST /api/library/versions/:param/approve': { spec: APPROVE_VERSION, dto: ApproveVersionDto, schema: approveVersionSchema },
+  'POST /api/library/versions/:param/send-back': { spec: SEND_BACK_VERSION, dto: SendBackVersionDto, schema: sendBackVersionSchema },
   // Multipart: the text fields are checked here, the file by multer and the CSV reader.
   'POST /api/library/import': { spec: IMPORT_FIELDS, dto: ImportLibraryDto, schema: importLibraryFieldsSchema },
 };

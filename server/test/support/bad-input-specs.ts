@@ -50,6 +50,7 @@ export const CREATE_ORDER: BodySpec = {
 export const REASON: BodySpec = { reason };
 export const SIGNED: BodySpec = { signature: { type: 'object', fields: SIGNATURE } };
 export const APPROVE_VERSION: BodySpec = { ...SIGNED, submittedAt: { type: 'datetime' } };
+export const SEND_BACK_VERSION: BodySpec = { ...SIGNED, comment: reason };
 
 export const RELEASE: BodySpec = {
   concentrationPerMl: positive,
@@ -201,6 +202,7 @@ export const BAD_INPUT_COVERAGE: Record<string, string> = {
   'PUT /api/library/versions/:param/rules': 'bad-input-admin',
   'POST /api/library/versions/:param/submit': 'bad-input-admin',
   'POST /api/library/versions/:param/approve': 'bad-input-admin',
+  'POST /api/library/versions/:param/send-back': 'bad-input-admin',
   'POST /api/library/import': 'bad-input-uploads',
   // No body: the path names the thing, and the id pipe refuses a bad id.
   'POST /api/library/versions/:param/withdraw': 'no body',

@@ -13,6 +13,7 @@ import {
   handoverBoardSchema,
   healthSchema,
   importPreviewSchema,
+  libraryAffectedOrdersSchema,
   libraryVersionDetailSchema,
   libraryVersionSchema,
   lockoutSchema,
@@ -69,6 +70,8 @@ export const RESPONSE_SCHEMAS: Readonly<Record<string, Answer | Answer[]>> = {
   'POST /api/library/versions/{id}/submit': { schema: libraryVersionDetailSchema },
   'POST /api/library/versions/{id}/withdraw': { schema: libraryVersionDetailSchema },
   'POST /api/library/versions/{id}/approve': { schema: libraryVersionDetailSchema },
+  'POST /api/library/versions/{id}/send-back': { schema: libraryVersionDetailSchema },
+  'GET /api/library/versions/{id}/affected-orders': { schema: libraryAffectedOrdersSchema },
   'POST /api/library/import': [
     { schema: importPreviewSchema, status: '200' },
     { schema: libraryVersionDetailSchema, status: '201' },
