@@ -74,6 +74,15 @@ export const ACCESS_MATRIX: MatrixRow[] = [
   { method: 'GET', path: '/api/patients', url: '/api/patients?wardId=1', access: 'signed-in', ok: 200 },
   { method: 'GET', path: '/api/patients/:id', url: '/api/patients/1', access: 'signed-in', ok: 200 },
   { method: 'GET', path: '/api/drugs', url: '/api/drugs', access: 'signed-in', ok: 200 },
+  { method: 'GET', path: '/api/equianalgesic-factors', url: '/api/equianalgesic-factors', access: 'signed-in', ok: 200 },
+  {
+    method: 'PUT',
+    path: '/api/equianalgesic-factors/:drugId/:route',
+    url: '/api/equianalgesic-factors/2/parenteral',
+    access: ['pharmacist'],
+    ok: 400,
+    body: EMPTY,
+  },
 
   { method: 'GET', path: '/api/wards/:wardId/library', url: '/api/wards/2/library', access: 'signed-in', ok: 200 },
   { method: 'GET', path: '/api/library/versions', url: '/api/library/versions?wardId=1', access: 'signed-in', ok: 200 },

@@ -3,6 +3,7 @@ import './support/lift-password-rate-limit.js';
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import { LoginDto } from '../src/auth/dto/login.dto.js';
+import { UpdateEquianalgesicFactorDto } from '../src/equianalgesic/dto/update-equianalgesic-factor.dto.js';
 import { ApproveVersionDto } from '../src/library/dto/approve-version.dto.js';
 import { CreateDraftDto } from '../src/library/dto/create-draft.dto.js';
 import { ReplaceRulesDto } from '../src/library/dto/replace-rules.dto.js';
@@ -18,6 +19,7 @@ import {
   BAD_INPUT_COVERAGE,
   CREATE_DRAFT,
   CREATE_USER,
+  EQUIANALGESIC_FACTOR,
   LOGIN,
   REPLACE_RULES,
   SEND_BACK_VERSION,
@@ -151,6 +153,16 @@ const ROUTES: BadInputRoute[] = [
     spec: APPROVE_VERSION,
     dto: ApproveVersionDto,
     valid: () => ({ signature: { password: DEMO_PASSWORD }, submittedAt: state.pendingSubmittedAt }),
+  },
+  {
+    method: 'PUT',
+    path: '/api/equianalgesic-factors/:drugId/:route',
+    url: () => '/api/equianalgesic-factors/2/parenteral',
+    role: 'pharmacist',
+    spec: EQUIANALGESIC_FACTOR,
+    dto: UpdateEquianalgesicFactorDto,
+    // Hydromorphone after American Family Physician 2000;61(3):755.
+    valid: () => ({ amount: 1.5, unit: 'mg', source: 'American Family Physician 2000;61(3):755', signature: { password: DEMO_PASSWORD } }),
   },
   {
     method: 'POST',
