@@ -79,16 +79,6 @@ describe('every state-changing route writes its audit event', () => {
       200,
       'ward.policy-update',
     );
-    // Pharmacy's equianalgesic table: hydromorphone after American Family Physician 2000;61(3):755.
-    await step(
-      'put',
-      '/api/equianalgesic-factors/:drugId/:route',
-      '/api/equianalgesic-factors/2/parenteral',
-      'pharmacist',
-      { amount: 1.5, unit: 'mg', source: 'American Family Physician 2000;61(3):755', signature: { password: DEMO_PASSWORD } },
-      200,
-      'equianalgesic-factor.update',
-    );
 
     // One order from signature to a second syringe.
     const order = await step('post', '/api/orders', '/api/orders', 'prescriber', ORDER, 201, 'order.create');
@@ -326,6 +316,54 @@ describe('every state-changing route writes its audit event', () => {
       undefined,
       204,
       'library-version.delete',
+    );
+
+    // The patient record: an allergy entry added and removed, "no known allergies", the tolerance basis, a new weight.
+    const withAllergy = await step(
+      'post',
+      '/api/patients/:id/allergies',
+      '/api/patients/6/allergies',
+      'prescriber',
+      { substance: 'Chlorhexidine', reaction: 'hives', severity: 'allergy' },
+      201,
+      'patient.allergy-add',
+    );
+    const added = withAllergy.allergies.find((entry: { substance: string }) => entry.substance === 'Chlorhexidine');
+    await step(
+      'delete',
+      '/api/patients/:id/allergies/:allergyId',
+      `/api/patients/6/allergies/${added.id}`,
+      'pharmacist',
+      undefined,
+      200,
+      'patient.allergy-remove',
+    );
+    await step(
+      'post',
+      '/api/patients/:id/no-known-allergies',
+      '/api/patients/8/no-known-allergies',
+      'prescriber',
+      undefined,
+      200,
+      'patient.no-known-allergies',
+    );
+    await step(
+      'put',
+      '/api/patients/:id/opioid-tolerance',
+      '/api/patients/6/opioid-tolerance',
+      'pharmacist',
+      { opioidTolerant: true, oralMorphineMgPerDay: 90, days: 14 },
+      200,
+      'patient.tolerance-update',
+    );
+    await step(
+      'post',
+      '/api/patients/:id/weights',
+      '/api/patients/6/weights',
+      'nurse',
+      { weightKg: 87.5, measuredOn: new Date().toISOString().slice(0, 10) },
+      201,
+      'patient.weight-record',
     );
 
     // An admin clears the lock left by five wrong passwords.

@@ -6,6 +6,7 @@ import { describe, expect, it } from 'vitest';
 import type { z } from 'zod';
 import {
   acknowledgeFlagSchema,
+  addAllergySchema,
   approveVersionSchema,
   bolusSchema,
   createDraftSchema,
@@ -21,8 +22,10 @@ import {
   isEmailAddress,
   isMoment,
   loginSchema,
+  opioidToleranceSchema,
   orderFieldsSchema,
   reasonRequestSchema,
+  recordWeightSchema,
   replaceRulesSchema,
   requestFieldErrors,
   secondCheckSchema,
@@ -32,7 +35,6 @@ import {
   syringeChangeSchema,
   textLength,
   updateUserSchema,
-  updateEquianalgesicFactorSchema,
   updateWardPolicySchema,
   type FieldError,
 } from '@lockstep/shared';
@@ -41,7 +43,6 @@ import { BolusDto, DiscontinueDto, SyringeChangeDto } from '../src/bedside/dto/b
 import { FirstCheckDto, SecondCheckDto } from '../src/bedside/dto/bedside-check.dto.js';
 import { SignedRequestDto } from '../src/common/dto/signature.dto.js';
 import { createValidationPipe } from '../src/common/validation/validation.pipe.js';
-import { UpdateEquianalgesicFactorDto } from '../src/equianalgesic/dto/update-equianalgesic-factor.dto.js';
 import { AcknowledgeFlagDto } from '../src/flags/dto/acknowledge-flag.dto.js';
 import { CreateSignoffDto } from '../src/handover/dto/create-signoff.dto.js';
 import { ApproveVersionDto } from '../src/library/dto/approve-version.dto.js';
@@ -54,6 +55,7 @@ import { CreateObservationDto } from '../src/observations/dto/create-observation
 import { CreateOrderDto } from '../src/orders/dto/create-order.dto.js';
 import { OrderFieldsDto } from '../src/orders/dto/order-fields.dto.js';
 import { ReasonDto } from '../src/orders/dto/reason.dto.js';
+import { AddAllergyDto, OpioidToleranceDto, RecordWeightDto } from '../src/patients/dto/patient-record.dto.js';
 import { CreateReleaseDto } from '../src/releases/dto/create-release.dto.js';
 import { CreateUserDto } from '../src/users/dto/create-user.dto.js';
 import { UpdateUserDto } from '../src/users/dto/update-user.dto.js';
@@ -61,6 +63,7 @@ import { UpdateWardPolicyDto } from '../src/wards/dto/update-ward-policy.dto.js'
 import { type BadBody, badBodies, related, toJson } from './support/bad-bodies.js';
 import {
   ACKNOWLEDGE_FLAG,
+  ADD_ALLERGY,
   APPROVE_VERSION,
   BAD_INPUT_COVERAGE,
   BOLUS,
@@ -68,13 +71,14 @@ import {
   CREATE_ORDER,
   CREATE_USER,
   DISCONTINUE,
-  EQUIANALGESIC_FACTOR,
   FIRST_CHECK,
   IMPORT_FIELDS,
   LOGIN,
   OBSERVATION,
+  OPIOID_TOLERANCE,
   ORDER_FIELDS,
   REASON,
+  RECORD_WEIGHT,
   RELEASE,
   REPLACE_RULES,
   SECOND_CHECK,
@@ -124,12 +128,10 @@ const CONTRACTS: Record<string, Contract> = {
   'PUT /api/library/versions/:param/rules': { spec: REPLACE_RULES, dto: ReplaceRulesDto, schema: replaceRulesSchema },
   'POST /api/library/versions/:param/submit': { spec: SUBMIT_VERSION, dto: SubmitVersionDto, schema: submitVersionSchema },
   'POST /api/library/versions/:param/approve': { spec: APPROVE_VERSION, dto: ApproveVersionDto, schema: approveVersionSchema },
-  'PUT /api/equianalgesic-factors/:param/:param': {
-    spec: EQUIANALGESIC_FACTOR,
-    dto: UpdateEquianalgesicFactorDto,
-    schema: updateEquianalgesicFactorSchema,
-  },
   'POST /api/library/versions/:param/send-back': { spec: SEND_BACK_VERSION, dto: SendBackVersionDto, schema: sendBackVersionSchema },
+  'POST /api/patients/:param/allergies': { spec: ADD_ALLERGY, dto: AddAllergyDto, schema: addAllergySchema },
+  'PUT /api/patients/:param/opioid-tolerance': { spec: OPIOID_TOLERANCE, dto: OpioidToleranceDto, schema: opioidToleranceSchema },
+  'POST /api/patients/:param/weights': { spec: RECORD_WEIGHT, dto: RecordWeightDto, schema: recordWeightSchema },
   // Multipart: the text fields are checked here, the file by multer and the CSV reader.
   'POST /api/library/import': { spec: IMPORT_FIELDS, dto: ImportLibraryDto, schema: importLibraryFieldsSchema },
 };

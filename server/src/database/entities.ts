@@ -15,6 +15,7 @@ import { Observation } from '../observations/entities/observation.entity.js';
 import { OrderEvent } from '../orders/entities/order-event.entity.js';
 import { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { Patient } from '../patients/entities/patient.entity.js';
+import { PatientAllergy } from '../patients/entities/patient-allergy.entity.js';
 import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
 import { User } from '../users/entities/user.entity.js';
 import { Ward } from '../wards/entities/ward.entity.js';
@@ -24,6 +25,7 @@ export const ENTITIES = [
   Ward,
   User,
   Patient,
+  PatientAllergy,
   Drug,
   LibraryVersion,
   LimitRule,

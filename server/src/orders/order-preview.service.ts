@@ -39,7 +39,8 @@ export class OrderPreviewService {
 
   /** Everything signing needs: the patient, drug, active rule, findings and derived values. */
   async evaluate(fields: OrderFieldsDto): Promise<OrderEvaluation> {
-    const patient = await this.dataSource.manager.findOneBy(Patient, { id: fields.patientId });
+    // Allergy entries loaded: patientFactorsOf refuses a patient without them.
+    const patient = await this.dataSource.manager.findOne(Patient, { where: { id: fields.patientId }, relations: { allergies: true } });
     if (!patient) throw fieldError('patientId', `No patient with id ${fields.patientId}`);
     const drug = await this.dataSource.manager.findOneBy(Drug, { id: fields.drugId });
     if (!drug) throw fieldError('drugId', `No drug with id ${fields.drugId}`);

@@ -1,4 +1,12 @@
-import { DOSE_UNITS, MIN_REASON_LENGTH, PASSWORD_MIN_LENGTH, ROLES, SEDATION_LEVELS, SIGNOFF_ROLES } from '@lockstep/shared';
+import {
+  ALLERGY_SEVERITIES,
+  DOSE_UNITS,
+  MIN_REASON_LENGTH,
+  PASSWORD_MIN_LENGTH,
+  ROLES,
+  SEDATION_LEVELS,
+  SIGNOFF_ROLES,
+} from '@lockstep/shared';
 import type { BodySpec, FieldSpec } from './bad-values.js';
 
 // The rules of each request DTO (server/src/*/dto), written out so that bad bodies can be
@@ -50,12 +58,6 @@ export const CREATE_ORDER: BodySpec = {
 export const REASON: BodySpec = { reason };
 export const SIGNED: BodySpec = { signature: { type: 'object', fields: SIGNATURE } };
 export const APPROVE_VERSION: BodySpec = { ...SIGNED, submittedAt: { type: 'datetime' } };
-export const EQUIANALGESIC_FACTOR: BodySpec = {
-  ...SIGNED,
-  amount: { type: 'number', positive: true, max: 1_000_000 },
-  unit: { type: 'enum', values: DOSE_UNITS },
-  source: { type: 'string', min: 1, max: 500, trimmed: true },
-};
 export const SEND_BACK_VERSION: BodySpec = { ...SIGNED, comment: reason };
 
 export const RELEASE: BodySpec = {
@@ -179,6 +181,19 @@ export const WARD_POLICY: BodySpec = {
   nurseInChargeEmail: email,
 };
 
+export const ADD_ALLERGY: BodySpec = {
+  drugId: { ...id, presence: 'optional' },
+  substance: { type: 'string', min: 1, max: 120, trimmed: true },
+  reaction: { type: 'string', min: 1, max: 200, trimmed: true },
+  severity: { type: 'enum', values: ALLERGY_SEVERITIES },
+};
+export const OPIOID_TOLERANCE: BodySpec = {
+  opioidTolerant: { type: 'boolean' },
+  oralMorphineMgPerDay: { type: 'number', positive: true, max: 20_000, presence: 'nullable' },
+  days: { type: 'number', int: true, min: 1, max: 36_500, presence: 'nullable' },
+};
+export const RECORD_WEIGHT: BodySpec = { weightKg: { type: 'number', positive: true, max: 500 }, measuredOn: { type: 'date' } };
+
 /**
  * Every write route and where its bad input is tested; bad-input-admin checks this against the
  * app's routes, so a new write route fails until it has a place here (and its tests).
@@ -208,13 +223,17 @@ export const BAD_INPUT_COVERAGE: Record<string, string> = {
   'PUT /api/library/versions/:param/rules': 'bad-input-admin',
   'POST /api/library/versions/:param/submit': 'bad-input-admin',
   'POST /api/library/versions/:param/approve': 'bad-input-admin',
-  'PUT /api/equianalgesic-factors/:param/:param': 'bad-input-admin',
   'POST /api/library/versions/:param/send-back': 'bad-input-admin',
   'POST /api/library/import': 'bad-input-uploads',
+  'POST /api/patients/:param/allergies': 'patients',
+  'PUT /api/patients/:param/opioid-tolerance': 'patients',
+  'POST /api/patients/:param/weights': 'patients',
   // No body: the path names the thing, and the id pipe refuses a bad id.
   'POST /api/library/versions/:param/withdraw': 'no body',
   'DELETE /api/library/versions/:param': 'no body',
   'DELETE /api/auth/lockouts/usernames/:param': 'no body',
   'DELETE /api/auth/lockouts/addresses/:param': 'no body',
   'POST /api/auth/logout': 'no body',
+  'POST /api/patients/:param/no-known-allergies': 'no body',
+  'DELETE /api/patients/:param/allergies/:param': 'no body',
 };

@@ -37,7 +37,6 @@ export async function seedBoardWard(dataSource: DataSource, code: string, beds: 
           dateOfBirth: '1970-01-01',
           sex: 'unknown',
           weightKg: 70,
-          allergies: '',
           wardId: ward.id,
           bed: spec.bed,
         }),

@@ -4,12 +4,12 @@ import { z } from 'zod';
  * What an audit event is about. Order-related work (releases, checks, observations, flags) is filed
  * under its order; `sign-in` events are about a username or network address locked after wrong passwords.
  */
-export const AUDIT_ENTITY_TYPES = ['order', 'library-version', 'user', 'ward', 'sign-in', 'equianalgesic-factor'] as const;
+export const AUDIT_ENTITY_TYPES = ['order', 'library-version', 'user', 'ward', 'sign-in', 'equianalgesic-factor', 'patient'] as const;
 export const auditEntityTypeSchema = z.enum(AUDIT_ENTITY_TYPES);
 export type AuditEntityType = z.infer<typeof auditEntityTypeSchema>;
 
 /** Pharmacists may read these; admins read everything. */
-export const PHARMACY_AUDIT_ENTITY_TYPES: readonly AuditEntityType[] = ['order', 'library-version', 'equianalgesic-factor'];
+export const PHARMACY_AUDIT_ENTITY_TYPES: readonly AuditEntityType[] = ['order', 'library-version', 'equianalgesic-factor', 'patient'];
 
 export const AUDIT_ACTION_LABELS = {
   'user.create': 'User created',
@@ -26,6 +26,11 @@ export const AUDIT_ACTION_LABELS = {
   'library-version.send-back': 'Library sent back to draft with a comment',
   'library-version.delete': 'Library draft deleted',
   'equianalgesic-factor.update': 'Equianalgesic factor changed',
+  'patient.allergy-add': 'Allergy recorded',
+  'patient.allergy-remove': 'Allergy entry removed',
+  'patient.no-known-allergies': 'No known allergies recorded',
+  'patient.tolerance-update': 'Opioid tolerance changed',
+  'patient.weight-record': 'Weight recorded',
   'order.create': 'Order written',
   'order.revise': 'Order revised',
   'order.cancel': 'Order cancelled',

@@ -24,5 +24,11 @@ export const PRESCRIBING_ROLES: readonly Role[] = ['prescriber'];
 /** Who verifies orders, releases syringes and keeps the dose-limit library. */
 export const PHARMACY_ROLES: readonly Role[] = ['pharmacist'];
 
+/** Who records a patient's allergies and opioid tolerance: prescribers and pharmacists. */
+export const PATIENT_RECORD_ROLES: readonly Role[] = ['prescriber', 'pharmacist'];
+
+/** Who records a patient's weight: nurses and prescribers. */
+export const WEIGHT_ROLES: readonly Role[] = ['nurse', 'charge_nurse', 'prescriber'];
+
 /** Who reads the audit trail: the admin all of it, pharmacists its order and library events. */
 export const AUDIT_ROLES: readonly Role[] = ['admin', 'pharmacist'];

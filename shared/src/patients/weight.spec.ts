@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { weightAgeDays, weightDateProblem } from './weight.js';
+import { latestTodayAnywhere, weightAgeDays, weightDateProblem } from './weight.js';
 
 describe('weightDateProblem', () => {
   it('accepts a day from the date of birth up to today', () => {
@@ -20,5 +20,12 @@ describe('weightAgeDays', () => {
     expect(weightAgeDays('2026-12-03', '2026-12-03')).toBe(0);
     expect(weightAgeDays(null, '2026-12-03')).toBeNull();
     expect(weightAgeDays('not a day', '2026-12-03')).toBeNull();
+  });
+});
+
+describe('latestTodayAnywhere', () => {
+  it('is the day at UTC+14, so no ward’s today counts as the future', () => {
+    expect(latestTodayAnywhere(new Date('2026-12-03T09:59:00Z'))).toBe('2026-12-03');
+    expect(latestTodayAnywhere(new Date('2026-12-03T10:00:00Z'))).toBe('2026-12-04');
   });
 });

@@ -20,3 +20,11 @@ export function weightAgeDays(measuredOn: string | null, today: string): number 
   if (!Number.isFinite(from) || !Number.isFinite(to)) return null;
   return Math.round((to - from) / 86_400_000);
 }
+
+/**
+ * The latest calendar day anywhere on Earth at `now` (UTC+14): a weight dated up to this day is
+ * not in the future for the ward entering it, whatever its time zone.
+ */
+export function latestTodayAnywhere(now: Date): string {
+  return new Date(now.getTime() + 14 * 3_600_000).toISOString().slice(0, 10);
+}

@@ -7,6 +7,7 @@ import { Handover1764700000000 } from './1764700000000-handover.js';
 import { AuditTrail1764710000000 } from './1764710000000-audit-trail.js';
 import { OrderListsByPrescriber1764729000000 } from './1764729000000-order-lists-by-prescriber.js';
 import { RevokedTokens1764739000000 } from './1764739000000-revoked-tokens.js';
+import { PatientRecord1764750000000 } from './1764750000000-patient-record.js';
 import { EquianalgesicFactors1764780000000 } from './1764780000000-equianalgesic-factors.js';
 import { LibraryIntegrity1764760000000 } from './1764760000000-library-integrity.js';
 
@@ -21,6 +22,7 @@ export const MIGRATIONS = [
   AuditTrail1764710000000,
   OrderListsByPrescriber1764729000000,
   RevokedTokens1764739000000,
+  PatientRecord1764750000000,
   EquianalgesicFactors1764780000000,
   LibraryIntegrity1764760000000,
 ];

@@ -1,4 +1,4 @@
-import type { DoseUnit, Sex } from '@lockstep/shared';
+import type { AllergySeverity, DoseUnit, Sex } from '@lockstep/shared';
 
 // Everything here is invented for the demo: the hospital (Kestrel Bay), wards, people and values.
 
@@ -20,6 +20,8 @@ export const DEMO_DRUGS: { genericName: string; doseUnit: DoseUnit }[] = [
   { genericName: 'fentanyl', doseUnit: 'mcg' },
 ];
 
+export type DemoAllergy = { drug?: string; substance: string; reaction: string; severity: AllergySeverity };
+
 export interface DemoPatient {
   mrn: string;
   givenName: string;
@@ -27,15 +29,24 @@ export interface DemoPatient {
   dateOfBirth: string;
   sex: Sex;
   weightKg: number | null;
-  allergies: string;
+  /** Days before the seed runs that the weight was measured. */
+  weightMeasuredDaysAgo: number;
+  /** `drug` names a formulary drug (its generic name becomes the substance); otherwise free text. */
+  allergies: DemoAllergy[];
+  noKnownAllergies: boolean;
   opioidTolerant: boolean;
+  /** The tolerance basis, meeting the FDA definition (at least 60 mg oral morphine a day for 7 days or more) where tolerant. */
+  toleranceOralMorphineMgPerDay: number | null;
+  toleranceDays: number | null;
   sleepApnoea: boolean;
   otherSedatives: boolean;
   wardCode: string;
   bed: string;
 }
 
-const none = { opioidTolerant: false, sleepApnoea: false, otherSedatives: false };
+const none = { opioidTolerant: false, toleranceOralMorphineMgPerDay: null, toleranceDays: null, sleepApnoea: false, otherSedatives: false };
+/** A clinician recorded "no known allergies". */
+const nka = { allergies: [], noKnownAllergies: true };
 
 export const DEMO_PATIENTS: DemoPatient[] = [
   {
@@ -45,7 +56,8 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1968-03-14',
     sex: 'male',
     weightKg: 82,
-    allergies: 'No known drug allergies',
+    weightMeasuredDaysAgo: 0,
+    ...nka,
     ...none,
     wardCode: 'HAR',
     bed: 'H02',
@@ -57,7 +69,9 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1951-11-02',
     sex: 'female',
     weightKg: 61,
-    allergies: 'Penicillin (rash)',
+    weightMeasuredDaysAgo: 1,
+    allergies: [{ substance: 'Penicillin', reaction: 'rash', severity: 'allergy' }],
+    noKnownAllergies: false,
     ...none,
     sleepApnoea: true,
     wardCode: 'HAR',
@@ -70,9 +84,12 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1979-07-28',
     sex: 'male',
     weightKg: 118,
-    allergies: 'No known drug allergies',
+    weightMeasuredDaysAgo: 1,
+    ...nka,
     ...none,
     opioidTolerant: true,
+    toleranceOralMorphineMgPerDay: 120,
+    toleranceDays: 90,
     wardCode: 'HAR',
     bed: 'H07',
   },
@@ -83,7 +100,9 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1944-01-19',
     sex: 'female',
     weightKg: 54,
-    allergies: 'Codeine (vomiting)',
+    weightMeasuredDaysAgo: 1,
+    allergies: [{ substance: 'Codeine', reaction: 'vomiting', severity: 'intolerance' }],
+    noKnownAllergies: false,
     ...none,
     otherSedatives: true,
     wardCode: 'HAR',
@@ -96,7 +115,8 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1990-09-05',
     sex: 'male',
     weightKg: 74,
-    allergies: 'No known drug allergies',
+    weightMeasuredDaysAgo: 1,
+    ...nka,
     ...none,
     wardCode: 'CED',
     bed: 'C03',
@@ -108,7 +128,9 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1957-05-23',
     sex: 'female',
     weightKg: 88,
-    allergies: 'Latex',
+    weightMeasuredDaysAgo: 1,
+    allergies: [{ substance: 'Latex', reaction: 'throat swelling', severity: 'anaphylaxis' }],
+    noKnownAllergies: false,
     ...none,
     sleepApnoea: true,
     otherSedatives: true,
@@ -122,9 +144,12 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1983-12-30',
     sex: 'male',
     weightKg: 95,
-    allergies: 'No known drug allergies',
+    weightMeasuredDaysAgo: 1,
+    ...nka,
     ...none,
     opioidTolerant: true,
+    toleranceOralMorphineMgPerDay: 90,
+    toleranceDays: 30,
     wardCode: 'CED',
     bed: 'C10',
   },
@@ -135,7 +160,8 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '2014-04-11',
     sex: 'female',
     weightKg: 38,
-    allergies: 'No known drug allergies',
+    weightMeasuredDaysAgo: 1,
+    ...nka,
     ...none,
     wardCode: 'WRE',
     bed: 'W01',
@@ -147,7 +173,9 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '2018-08-17',
     sex: 'male',
     weightKg: 24.5,
-    allergies: 'Ibuprofen (wheeze)',
+    weightMeasuredDaysAgo: 0,
+    allergies: [{ substance: 'Ibuprofen', reaction: 'wheeze', severity: 'allergy' }],
+    noKnownAllergies: false,
     ...none,
     wardCode: 'WRE',
     bed: 'W04',
@@ -159,7 +187,8 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '2011-02-06',
     sex: 'female',
     weightKg: 47,
-    allergies: 'No known drug allergies',
+    weightMeasuredDaysAgo: 1,
+    ...nka,
     ...none,
     sleepApnoea: true,
     wardCode: 'WRE',
@@ -172,7 +201,9 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1949-10-09',
     sex: 'male',
     weightKg: 70,
-    allergies: 'Morphine (itch, not anaphylaxis)',
+    weightMeasuredDaysAgo: 1,
+    allergies: [{ drug: 'morphine', substance: 'morphine', reaction: 'itch', severity: 'intolerance' }],
+    noKnownAllergies: false,
     ...none,
     otherSedatives: true,
     wardCode: 'SUM',
@@ -185,9 +216,12 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1972-06-21',
     sex: 'female',
     weightKg: 66,
-    allergies: 'No known drug allergies',
+    weightMeasuredDaysAgo: 1,
+    ...nka,
     ...none,
     opioidTolerant: true,
+    toleranceOralMorphineMgPerDay: 200,
+    toleranceDays: 180,
     sleepApnoea: true,
     wardCode: 'SUM',
     bed: 'S04',
@@ -200,7 +234,8 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1975-02-11',
     sex: 'male',
     weightKg: 79,
-    allergies: 'No known drug allergies',
+    weightMeasuredDaysAgo: 1,
+    ...nka,
     ...none,
     wardCode: 'HAR',
     bed: 'H03',
@@ -212,7 +247,9 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1962-08-30',
     sex: 'female',
     weightKg: 68,
-    allergies: 'Penicillin (rash)',
+    weightMeasuredDaysAgo: 1,
+    allergies: [{ substance: 'Penicillin', reaction: 'rash', severity: 'allergy' }],
+    noKnownAllergies: false,
     ...none,
     wardCode: 'HAR',
     bed: 'H08',
@@ -224,7 +261,8 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1958-12-03',
     sex: 'male',
     weightKg: 91,
-    allergies: 'No known drug allergies',
+    weightMeasuredDaysAgo: 1,
+    ...nka,
     ...none,
     wardCode: 'HAR',
     bed: 'H09',
@@ -236,9 +274,12 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1986-05-19',
     sex: 'male',
     weightKg: 84,
-    allergies: 'No known drug allergies',
+    weightMeasuredDaysAgo: 1,
+    ...nka,
     ...none,
     opioidTolerant: true,
+    toleranceOralMorphineMgPerDay: 60,
+    toleranceDays: 14,
     wardCode: 'HAR',
     bed: 'H12',
   },
@@ -249,7 +290,9 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1990-01-25',
     sex: 'female',
     weightKg: 63,
-    allergies: 'Latex',
+    weightMeasuredDaysAgo: 1,
+    allergies: [{ substance: 'Latex', reaction: 'hives', severity: 'allergy' }],
+    noKnownAllergies: false,
     ...none,
     wardCode: 'HAR',
     bed: 'H04',
@@ -261,7 +304,8 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1971-04-08',
     sex: 'male',
     weightKg: 77,
-    allergies: 'No known drug allergies',
+    weightMeasuredDaysAgo: 45,
+    ...nka,
     ...none,
     wardCode: 'HAR',
     bed: 'H01',
@@ -273,7 +317,8 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1998-10-14',
     sex: 'male',
     weightKg: 70,
-    allergies: 'No known drug allergies',
+    weightMeasuredDaysAgo: 1,
+    ...nka,
     ...none,
     wardCode: 'HAR',
     bed: 'H06',
@@ -285,7 +330,8 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1969-07-02',
     sex: 'female',
     weightKg: 72,
-    allergies: 'No known drug allergies',
+    weightMeasuredDaysAgo: 1,
+    ...nka,
     ...none,
     wardCode: 'CED',
     bed: 'C05',
@@ -297,7 +343,9 @@ export const DEMO_PATIENTS: DemoPatient[] = [
     dateOfBirth: '1980-03-27',
     sex: 'female',
     weightKg: 59,
-    allergies: 'Ibuprofen (wheeze)',
+    weightMeasuredDaysAgo: 1,
+    allergies: [{ substance: 'Ibuprofen', reaction: 'wheeze', severity: 'allergy' }],
+    noKnownAllergies: false,
     ...none,
     wardCode: 'SUM',
     bed: 'S02',

@@ -4,14 +4,14 @@ import { writeDefaultEquianalgesicFactors } from '../../equianalgesic/default-fa
 import { LibraryVersion } from '../../library/entities/library-version.entity.js';
 import { LibraryVersionEvent } from '../../library/entities/library-version-event.entity.js';
 import { LimitRule } from '../../library/entities/limit-rule.entity.js';
-import { Patient } from '../../patients/entities/patient.entity.js';
 import { User } from '../../users/entities/user.entity.js';
 import { hashPassword } from '../../users/passwords.js';
 import { Ward } from '../../wards/entities/ward.entity.js';
-import { DEMO_DRUGS, DEMO_PATIENTS, DEMO_WARDS } from './demo-data.js';
+import { DEMO_DRUGS, DEMO_WARDS } from './demo-data.js';
 import { DEMO_LIBRARIES, DEMO_PENDING_CHANGE } from './demo-library.js';
 import type { DemoAuditEntry } from './demo-audit.js';
 import { seedDemoOrders } from './demo-orders.js';
+import { seedDemoPatients } from './demo-patients.js';
 import { tellDemoStory } from './demo-story.js';
 import { DEMO_PASSWORD, DEMO_STAFF } from './demo-staff.js';
 
@@ -56,13 +56,10 @@ async function seedDemoData(manager: EntityManager, now: number): Promise<void> 
 
   const libraryStory = await seedDemoLibraries(manager, wards, drugs, users, now);
 
-  await manager.save(
-    Patient,
-    DEMO_PATIENTS.map(({ wardCode, ...patient }) => manager.create(Patient, { ...patient, wardId: wardByCode.get(wardCode)!.id })),
-  );
+  const patientStory = await seedDemoPatients(manager, wards, drugs, users, now);
 
   await seedDemoOrders(manager, users, now);
-  await tellDemoStory(manager, users, libraryStory);
+  await tellDemoStory(manager, users, [...libraryStory, ...patientStory]);
 }
 
 async function seedDemoLibraries(

@@ -1,7 +1,21 @@
-import type { Patient as PatientResponse } from '@lockstep/shared';
+import { sortAllergies, type Patient as PatientResponse, type PatientAllergyEntry } from '@lockstep/shared';
+import type { PatientAllergy } from '../entities/patient-allergy.entity.js';
 import type { Patient } from '../entities/patient.entity.js';
 
-/** Expects `ward` to be loaded. */
+/** Expects `recordedBy` to be loaded. */
+export function toPatientAllergyResponse(allergy: PatientAllergy): PatientAllergyEntry {
+  return {
+    id: allergy.id,
+    drugId: allergy.drugId,
+    substance: allergy.substance,
+    reaction: allergy.reaction,
+    severity: allergy.severity,
+    recordedByName: allergy.recordedBy?.displayName ?? null,
+    recordedAt: allergy.recordedAt ? allergy.recordedAt.toISOString() : null,
+  };
+}
+
+/** Expects `ward` and `allergies` (with `recordedBy`) to be loaded; allergies most severe first. */
 export function toPatientResponse(patient: Patient): PatientResponse {
   return {
     id: patient.id,
@@ -11,8 +25,12 @@ export function toPatientResponse(patient: Patient): PatientResponse {
     dateOfBirth: patient.dateOfBirth,
     sex: patient.sex,
     weightKg: patient.weightKg,
-    allergies: patient.allergies,
+    weightMeasuredOn: patient.weightMeasuredOn,
+    allergies: sortAllergies(patient.allergies.map(toPatientAllergyResponse)),
+    noKnownAllergies: patient.noKnownAllergies,
     opioidTolerant: patient.opioidTolerant,
+    toleranceOralMorphineMgPerDay: patient.toleranceOralMorphineMgPerDay,
+    toleranceDays: patient.toleranceDays,
     sleepApnoea: patient.sleepApnoea,
     otherSedatives: patient.otherSedatives,
     wardId: patient.wardId,

@@ -1,6 +1,7 @@
-import { Column, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
+import { Column, Entity, Index, JoinColumn, ManyToOne, OneToMany, PrimaryGeneratedColumn, type Relation } from 'typeorm';
 import type { Sex } from '@lockstep/shared';
 import { Ward } from '../../wards/entities/ward.entity.js';
+import { PatientAllergy } from './patient-allergy.entity.js';
 
 @Entity('patients')
 export class Patient {
@@ -27,11 +28,28 @@ export class Patient {
   @Column({ type: 'real', nullable: true })
   weightKg: number | null;
 
-  @Column({ type: 'text', default: '' })
-  allergies: string;
+  /** yyyy-mm-dd the weight was measured; null when not recorded. */
+  @Column({ type: 'varchar', length: 10, nullable: true })
+  weightMeasuredOn: string | null;
 
+  /** Load it (`relations: { allergies: true }`) wherever the order check runs: patientFactorsOf refuses a patient without it. */
+  @OneToMany(() => PatientAllergy, (allergy) => allergy.patient)
+  allergies: Relation<PatientAllergy>[];
+
+  /** A clinician recorded "no known allergies"; false with no entries means nothing is recorded yet. */
+  @Column({ type: 'boolean', default: false })
+  noKnownAllergies: boolean;
+
+  /** Follows the basis below (shared toleranceClaimProblem); true without one only on records from before bases were kept. */
   @Column({ type: 'boolean', default: false })
   opioidTolerant: boolean;
+
+  /** The tolerance basis: oral morphine (or equianalgesic) mg a day, taken for `toleranceDays` days. */
+  @Column({ type: 'real', nullable: true })
+  toleranceOralMorphineMgPerDay: number | null;
+
+  @Column({ type: 'integer', nullable: true })
+  toleranceDays: number | null;
 
   @Column({ type: 'boolean', default: false })
   sleepApnoea: boolean;
