@@ -11,7 +11,14 @@ const ROLES = Object.keys(DEMO_USER_BY_ROLE) as Role[];
 // The regimen of support/pca.ts (ASHP Standardize 4 Safety, PCA standards, 2023) with an
 // indication and no clinician bolus.
 const ORDER: CreateOrderRequest = { ...REGIMEN, indication: 'Pain after open abdominal surgery', ...SIGNING };
-const SOFT = { ...ORDER, demandDose: 2.5, overrides: [{ field: 'demandDose', reason: 'Opioid use before surgery; pain team agreed' }] };
+// A 1-hour limit of 10 mg holds what 2.5 mg every 10 minutes could give (15 mg) to the demo rule's
+// 1-hour soft maximum, so the demand dose is the one soft finding.
+const SOFT = {
+  ...ORDER,
+  demandDose: 2.5,
+  oneHourLimit: 10,
+  overrides: [{ field: 'demandDose', reason: 'Opioid use before surgery; pain team agreed' }],
+};
 
 describe('orders, verification and syringe release', () => {
   let t: TestApp;
@@ -66,6 +73,44 @@ describe('orders, verification and syringe release', () => {
         overrides: [{ field: 'demandDose', reason: 'I really mean ten milligrams' }],
       }).expect(400);
       expect(response.body.errors[0]).toMatchObject({ field: 'demandDose' });
+    });
+
+    it('refuses an order whose possible totals are over the hard maxima, although it states no limits', async () => {
+      // Patient 7 on Cedar; demo morphine rule (invented): 1-hour hard 15 mg, 4-hour hard 40 mg.
+      // Demand 2 mg every 6 min could give 20 mg an hour and 80 mg in 4 hours (docs/design.md).
+      const before = await orderCount();
+      const response = await sign({
+        ...ORDER,
+        patientId: 7,
+        demandDose: 2,
+        lockoutMinutes: 6,
+        oneHourLimit: null,
+        fourHourLimit: null,
+        overrides: [
+          { field: 'oneHourLimit', reason: 'A reason cannot pass a hard maximum' },
+          { field: 'fourHourLimit', reason: 'A reason cannot pass a hard maximum' },
+        ],
+      }).expect(400);
+      expect(response.body.errors).toEqual([
+        { field: 'oneHourLimit', message: expect.stringContaining('could give up to 20 mg in an hour') },
+        { field: 'fourHourLimit', message: expect.stringContaining('could give up to 80 mg in 4 hours') },
+      ]);
+      expect(await orderCount()).toBe(before);
+    });
+
+    it('needs a reason for a possible hourly total over the soft maximum', async () => {
+      // Demand 1.5 mg every 8 min: 1.5 × ceil(60 ÷ 8) = 12 mg an hour, over Cedar's 10 mg soft maximum.
+      const body = { ...ORDER, patientId: 7, demandDose: 1.5, lockoutMinutes: 8 };
+      const refused = await sign(body).expect(400);
+      expect(refused.body.errors).toEqual([
+        { field: 'oneHourLimit', message: expect.stringContaining('Reason needed: The pump could give up to 12 mg') },
+      ]);
+      const signed = await sign({
+        ...body,
+        overrides: [{ field: 'oneHourLimit', reason: 'Large wound; pain team review at 2 hours' }],
+      }).expect(201);
+      expect(signed.body.overrides).toEqual([{ field: 'oneHourLimit', reason: 'Large wound; pain team review at 2 hours' }]);
+      await act(signed.body.id, 'cancel', { reason: 'Test order, not for this patient' }, 'prescriber');
     });
 
     it('refuses a wrong signature password with 401 and writes nothing', async () => {

@@ -81,6 +81,7 @@ function writeDemoPca(ctx: OrderContext, { ward, shifts, patient }: DemoPatient,
     changeSyringes: pca.start !== 'syringe-empties-this-shift',
     bolusAt: pca.bolusAfterHours === undefined ? null : start + pca.bolusAfterHours * HOUR + 12 * MINUTE,
     currentShift: pca.currentShift,
+    overrideReason: pca.overrideReason,
   });
 }
 

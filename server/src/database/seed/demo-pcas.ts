@@ -32,6 +32,8 @@ const fentanyl = (regimen: Partial<RegimenChoice> & Pick<RegimenChoice, 'demandD
   doseUnit: 'mcg',
   concentrationPerMl: 10,
   ...usual,
+  // Holds what a demand every 6 minutes could give in an hour to the library's soft maximum.
+  oneHourLimit: 100,
   fourHourLimit: 200,
   clinicianBolusDose: 20,
   ...regimen,
@@ -67,6 +69,8 @@ export type DemoPca = {
   script: DemoCourseScript;
   currentShift: HandoverProgress;
   bolusAfterHours?: number;
+  /** The prescriber's reason for each soft finding (such as what the pump could give in an hour). */
+  overrideReason?: string;
 };
 
 // The first three keep order ids 1, 2 and 3, as earlier demos had them.
@@ -154,6 +158,8 @@ export const DEMO_PCAS: DemoPca[] = [
   {
     mrn: 'KB100947',
     regimen: morphine({ demandDose: 1.5, lockoutMinutes: 8, indication: 'Pain after open abdominal aortic repair' }),
+    overrideReason:
+      'Open aortic repair: 1.5 mg every 8 minutes agreed with the acute pain team; up to 14 mg in an hour only with the clinician bolus (invented)',
     start: { minutesAgo: 40 * 60 + 35 },
     // The first syringe comes down 2 mL short: reported to pharmacy, not yet reviewed.
     script: { doses: [2, 2, 1, 2, 1, 2], ...SETTLED, missing: [2] },
@@ -167,6 +173,7 @@ export const DEMO_PCAS: DemoPca[] = [
       basalRatePerHour: 1,
       indication: 'Pain after spinal decompression; regular opioid before admission',
     }),
+    overrideReason: 'Regular opioid before admission: basal 1 mg/h and demand 1.5 mg agreed with the acute pain team (invented)',
     start: { minutesAgo: 20 * 60 + 25 },
     script: { doses: [2, 1, 2, 1, 1, 2], ...SETTLED },
     currentShift: 'none',
@@ -199,6 +206,7 @@ export const DEMO_PCAS: DemoPca[] = [
       indication: 'Pain after femoral fracture fixation',
     }),
     start: { minutesAgo: 18 * 60 + 15 },
+    overrideReason: 'Femoral fracture: over 0.1 mg/kg in an hour only with the clinician bolus; 4-hour limit set at 7 mg (invented)',
     script: { doses: [2, 1, 2, 1, 1, 1], pain: [4, 3, 3, 2, 2, 3] },
     currentShift: 'both',
   },
@@ -209,6 +217,7 @@ export const DEMO_PCAS: DemoPca[] = [
       basalRatePerHour: 0.1,
       indication: 'Pain after thoracotomy; regular opioid before admission',
     }),
+    overrideReason: 'Regular opioid before admission; thoracotomy: over 2 mg in an hour only with the clinician bolus (invented)',
     start: { minutesAgo: 26 * 60 + 20 },
     script: { doses: [2, 1, 2, 1, 1, 1], ...SETTLED },
     currentShift: 'both',
