@@ -32,6 +32,7 @@ const router = createBrowserRouter([
               { path: paths.handover.path, lazy: () => import('./routes/handover') },
               { path: paths.handoverPrint.path, lazy: () => import('./routes/handover-print') },
               { path: paths.pca.path, lazy: () => import('./routes/pca') },
+              { path: paths.equianalgesicFactors.path, lazy: () => import('./routes/equianalgesic-factors') },
             ],
           },
           {

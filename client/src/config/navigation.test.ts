@@ -5,7 +5,7 @@ import { isSafeRedirect, paths } from './paths';
 
 const NAV_LABELS: Partial<Record<Role, string[]>> = {
   admin: ['Users', 'Ward policies', 'Mailbox', 'Audit'],
-  pharmacist: ['Patients', 'Verification', 'Library', 'Audit'],
+  pharmacist: ['Patients', 'Verification', 'Library', 'Equianalgesic factors', 'Audit'],
   prescriber: ['Patients', 'My orders'],
   nurse: ['Patients', 'PCA orders', 'Handover'],
   charge_nurse: ['Patients', 'PCA orders', 'Handover'],

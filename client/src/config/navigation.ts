@@ -16,7 +16,7 @@ export const AREA_ROLES: Record<Area, readonly Role[]> = {
 };
 
 export type NavIcon =
-  'patients' | 'library' | 'users' | 'orders' | 'verification' | 'mailbox' | 'bedside' | 'handover' | 'policy' | 'audit';
+  'patients' | 'library' | 'equianalgesic' | 'users' | 'orders' | 'verification' | 'mailbox' | 'bedside' | 'handover' | 'policy' | 'audit';
 
 export interface NavItem {
   label: string;
@@ -34,6 +34,8 @@ const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Handover', href: paths.handover.getHref(), icon: 'handover', area: 'bedside' },
   { label: 'Verification', href: paths.verificationQueue.getHref(), icon: 'verification', area: 'pharmacy' },
   { label: 'Library', href: paths.library.getHref(), icon: 'library', area: 'pharmacy' },
+  // Listed for pharmacists, who edit it; every clinical role may open it (the usage page links to it).
+  { label: 'Equianalgesic factors', href: paths.equianalgesicFactors.getHref(), icon: 'equianalgesic', area: 'pharmacy' },
   { label: 'Users', href: paths.adminUsers.getHref(), icon: 'users', area: 'admin' },
   { label: 'Ward policies', href: paths.adminWardPolicies.getHref(), icon: 'policy', area: 'admin' },
   { label: 'Mailbox', href: paths.adminMailbox.getHref(), icon: 'mailbox', area: 'admin' },
@@ -67,6 +69,7 @@ export function homePathFor(role: Role): string {
 const ROUTE_AREAS: ReadonlyArray<{ prefix: string; area: Area }> = [
   { prefix: paths.patients.path, area: 'clinical' },
   { prefix: paths.library.path, area: 'pharmacy' },
+  { prefix: paths.equianalgesicFactors.path, area: 'clinical' },
   { prefix: paths.myOrders.path, area: 'prescribing' },
   { prefix: '/orders', area: 'clinical' },
   { prefix: paths.verificationQueue.path, area: 'pharmacy' },

@@ -29,6 +29,10 @@ export const paths = {
       return search ? `/library?${search}` : '/library';
     },
   },
+  equianalgesicFactors: {
+    path: '/equianalgesic-factors',
+    getHref: () => '/equianalgesic-factors',
+  },
   adminUsers: {
     path: '/admin/users',
     getHref: () => '/admin/users',

@@ -29,6 +29,8 @@ export interface RequestOptions<T> {
    * wrong password to show beside the field; the session goes on.
    */
   signed?: boolean;
+  /** More request headers, e.g. a write's `Idempotency-Key`. */
+  headers?: Record<string, string>;
   signal?: AbortSignal;
 }
 
@@ -70,7 +72,7 @@ export function createApiClient(config: ApiClientConfig): ApiRequest {
   const fetchFn = config.fetchFn ?? ((input, init) => fetch(input, init));
 
   return async function request<T>(path: string, options: RequestOptions<T> = {}): Promise<T> {
-    const headers: Record<string, string> = { Accept: 'application/json' };
+    const headers: Record<string, string> = { ...options.headers, Accept: 'application/json' };
     if (options.body !== undefined) headers['Content-Type'] = 'application/json';
     const token = options.anonymous ? null : config.getToken();
     if (token) headers.Authorization = `Bearer ${token}`;

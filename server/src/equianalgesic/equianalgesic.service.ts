@@ -20,7 +20,7 @@ import type { UpdateEquianalgesicFactorDto } from './dto/update-equianalgesic-fa
 import { EquianalgesicFactor } from './entities/equianalgesic-factor.entity.js';
 
 /** The factors one oral-morphine figure used, each with its source. */
-export type UsedFactors = {
+type UsedFactors = {
   conversion: OralMorphineConversion;
   parenteralSource: string;
   oralSource: string;

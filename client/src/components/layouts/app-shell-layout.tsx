@@ -11,6 +11,7 @@ import {
   IconHistory,
   IconLogout,
   IconMail,
+  IconScale,
   IconUsers,
   IconUsersGroup,
   type IconProps,
@@ -26,6 +27,7 @@ import { LockstepMark } from '../ui/lockstep-mark';
 const NAV_ICONS: Record<NavIcon, ComponentType<IconProps>> = {
   patients: IconUsersGroup,
   library: IconBooks,
+  equianalgesic: IconScale,
   users: IconUsers,
   orders: IconClipboardList,
   verification: IconClipboardCheck,
