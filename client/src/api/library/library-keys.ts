@@ -8,4 +8,6 @@ export const libraryKeys = {
   versionDetail: (id: number) => [...libraryKeys.versionDetails(), id] as const,
   diffs: () => [...libraryKeys.all, 'diff'] as const,
   diff: (id: number) => [...libraryKeys.diffs(), id] as const,
+  affectedOrderLists: () => [...libraryKeys.all, 'affected-orders'] as const,
+  affectedOrders: (id: number) => [...libraryKeys.affectedOrderLists(), id] as const,
 };

@@ -1,19 +1,28 @@
 import { useState } from 'react';
 import { Button, Group, Text } from '@mantine/core';
-import type { LibraryVersion } from '@lockstep/shared';
+import type { LibraryVersionDetail } from '@lockstep/shared';
 import { SignatureModal } from '@/components/dialogs/signature-modal';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
 import { useApproveVersion } from '@/api/library/approve-version';
+import { useAffectedOrders } from '@/api/library/get-affected-orders';
+import { useLibraryDiff } from '@/api/library/get-library-diff';
+import { changeRows } from '../utils/diff-rows';
+import { ApproveReview } from './approve-review';
 
 export interface ApproveModalProps {
-  version: LibraryVersion;
+  version: LibraryVersionDetail;
   onClose: () => void;
 }
 
-/** The second pharmacist's approval, signed with their password typed again. */
+/**
+ * The second pharmacist's approval, signed with their password typed again, after the large
+ * changes (listed first) and the running orders the new limits would put outside.
+ */
 export function ApproveModal({ version, onClose }: ApproveModalProps) {
   const approve = useApproveVersion();
+  const diff = useLibraryDiff(version.id);
+  const affected = useAffectedOrders(version.id);
   // The submission on screen when the dialog opened is the one signed, even if a refetch behind
   // the dialog brings a newer one.
   const [reviewedSubmission] = useState(version.submittedAt);
@@ -24,7 +33,7 @@ export function ApproveModal({ version, onClose }: ApproveModalProps) {
   return (
     <SignatureModal
       title={`Approve version ${version.number}`}
-      size="md"
+      size="xl"
       confirmLabel="Sign and approve"
       pending={approve.isPending}
       refusal={refusal}
@@ -62,6 +71,12 @@ export function ApproveModal({ version, onClose }: ApproveModalProps) {
         Version {version.number} becomes {version.wardName}&apos;s active dose-limit library as soon as you sign, and the version in use now
         is retired. Approve only after checking every change.
       </Text>
+      <ApproveReview
+        rows={diff.data ? changeRows(diff.data, version.rules) : null}
+        addedRules={diff.data?.added.length ?? 0}
+        removedRules={diff.data?.removed.length ?? 0}
+        affected={affected.isError ? undefined : (affected.data ?? null)}
+      />
     </SignatureModal>
   );
 }

@@ -2,9 +2,10 @@ import type { ReactNode } from 'react';
 import { Badge, EmptyState, Group, Stack, Table, Text, Title, VisuallyHidden } from '@mantine/core';
 import { IconArrowRight, IconEqual, IconMinus, IconPencil, IconPlus } from '@tabler/icons-react';
 import { isEmptyDiff, type LibraryDiff } from '@lockstep/shared';
-import { changeRows } from '../utils/diff-rows';
+import { changeRows, largeChangesFirst } from '../utils/diff-rows';
 import type { RuleView } from '../utils/rule-rows';
 import { ChangeDirectionBadge } from './change-direction';
+import { LargeChangeBadge } from './large-change-badge';
 import classes from './library.module.css';
 import { RulesTable } from './rules-table';
 
@@ -53,7 +54,8 @@ export function LibraryDiffView({ diff, rules, subject }: LibraryDiffViewProps) 
       />
     );
   }
-  const rows = changeRows(diff, rules);
+  // Large changes (a factor of 2 or more, or to or from no limit) first, each marked.
+  const rows = largeChangesFirst(changeRows(diff, rules));
   const plural = (n: number, word: string) => `${n} ${word}${n === 1 ? '' : 's'}`;
 
   return (
@@ -87,7 +89,10 @@ export function LibraryDiffView({ diff, rules, subject }: LibraryDiffViewProps) 
                       </Group>
                     </Table.Td>
                     <Table.Td>
-                      <ChangeDirectionBadge direction={row.direction} />
+                      <Group gap={4} wrap="wrap">
+                        {row.large ? <LargeChangeBadge change={row.large} /> : null}
+                        <ChangeDirectionBadge direction={row.direction} />
+                      </Group>
                     </Table.Td>
                   </Table.Tr>
                 ))}

@@ -1,7 +1,22 @@
 import { useId, useState } from 'react';
 import { Button, Group, Text } from '@mantine/core';
-import { IconArrowBackUp, IconDownload, IconEdit, IconInfoCircle, IconSend, IconSignature, IconTrash } from '@tabler/icons-react';
-import { canDoLibraryAction, type Drug, type LibraryVersionAction, type LibraryVersionDetail } from '@lockstep/shared';
+import {
+  IconArrowBackUp,
+  IconDownload,
+  IconEdit,
+  IconInfoCircle,
+  IconMessageReply,
+  IconSend,
+  IconSignature,
+  IconTrash,
+} from '@tabler/icons-react';
+import {
+  canDoLibraryAction,
+  LIBRARY_CONTRIBUTIONS,
+  type Drug,
+  type LibraryVersionAction,
+  type LibraryVersionDetail,
+} from '@lockstep/shared';
 import { errorMessage } from '@/lib/api-error';
 import { notifyError, notifySuccess } from '@/lib/notify';
 import { useExportLibraryVersion } from '@/api/library/export-library-version';
@@ -9,11 +24,21 @@ import { useWithdrawVersion } from '@/api/library/withdraw-version';
 import { ApproveModal } from './approve-modal';
 import { DiscardModal } from './discard-modal';
 import { RulesEditorDrawer } from './rules-editor-drawer';
+import { SendBackModal } from './send-back-modal';
 import { SubmitModal } from './submit-modal';
 
-export const OWN_VERSION_REASON = 'You wrote this version; a second pharmacist approves';
+/** Why the signed-in pharmacist may not approve or send back: they created, imported, edited or submitted it (the server refuses too). */
+export function ownVersionReason(version: LibraryVersionDetail, userId: number): string | null {
+  const did = LIBRARY_CONTRIBUTIONS.filter((kind) =>
+    version.contributors.some((contributor) => contributor.userId === userId && contributor.action === kind),
+  );
+  if (did.length === 0 && version.authorId === userId) did.push('created');
+  if (did.length === 0) return null;
+  const words = did.length === 1 ? did[0] : `${did.slice(0, -1).join(', ')} and ${did[did.length - 1]}`;
+  return `You ${words} this version; a pharmacist who did not approves it or sends it back`;
+}
 
-type OpenDialog = 'edit' | 'submit' | 'discard' | 'approve' | null;
+type OpenDialog = 'edit' | 'submit' | 'discard' | 'approve' | 'sendBack' | null;
 
 export interface VersionActionsProps {
   version: LibraryVersionDetail;
@@ -31,7 +56,8 @@ export function VersionActions({ version, drugs, currentUserId, weightBased, onD
   const reasonId = useId();
   const withdraw = useWithdrawVersion();
   const exportCsv = useExportLibraryVersion();
-  const ownVersion = version.authorId === currentUserId;
+  const ownReason = ownVersionReason(version, currentUserId);
+  const ownVersion = ownReason !== null;
   // What the version's status allows, by the same lifecycle table the server enforces.
   const can = (action: LibraryVersionAction) => canDoLibraryAction(action, version.status);
 
@@ -74,6 +100,11 @@ export function VersionActions({ version, drugs, currentUserId, weightBased, onD
             Approve
           </Button>
         ) : null}
+        {can('sendBack') && !ownVersion ? (
+          <Button variant="default" leftSection={<IconMessageReply size={16} aria-hidden />} onClick={() => setDialog('sendBack')}>
+            Send back with a comment
+          </Button>
+        ) : null}
         {can('withdraw') ? (
           <Button
             variant="default"
@@ -92,7 +123,7 @@ export function VersionActions({ version, drugs, currentUserId, weightBased, onD
         <Group gap={6} wrap="nowrap" mt={6}>
           <IconInfoCircle size={16} aria-hidden color="var(--mantine-color-dimmed)" />
           <Text id={reasonId} size="sm" c="dimmed">
-            {OWN_VERSION_REASON}
+            {ownReason}
           </Text>
         </Group>
       ) : null}
@@ -100,6 +131,7 @@ export function VersionActions({ version, drugs, currentUserId, weightBased, onD
       {dialog === 'submit' ? <SubmitModal version={version} onClose={close} /> : null}
       {dialog === 'discard' ? <DiscardModal version={version} onClose={close} onDiscarded={onDiscarded} /> : null}
       {dialog === 'approve' ? <ApproveModal version={version} onClose={close} /> : null}
+      {dialog === 'sendBack' ? <SendBackModal version={version} onClose={close} /> : null}
       <RulesEditorDrawer opened={dialog === 'edit'} onClose={close} version={version} drugs={drugs} weightBased={weightBased} />
     </>
   );

@@ -1,6 +1,7 @@
 import type { ReactNode } from 'react';
-import { DataList, Group, Stack, Text, Title } from '@mantine/core';
-import type { LibraryVersion } from '@lockstep/shared';
+import { Alert, DataList, Group, Stack, Text, Title } from '@mantine/core';
+import { IconMessageReply } from '@tabler/icons-react';
+import { LIBRARY_CONTRIBUTION_LABELS, type LibraryVersion, type LibraryVersionDetail } from '@lockstep/shared';
 import { formatDateTime } from '@/utils/format-date';
 import { VersionStatusBadge } from './version-status-badge';
 
@@ -13,8 +14,11 @@ function Fact({ label, children }: { label: string; children: ReactNode }) {
   );
 }
 
-/** Which version this is, who wrote and approved it, when, and why (its note). */
-export function VersionHeader({ version }: { version: LibraryVersion }) {
+/**
+ * Which version this is, who created, imported, edited, submitted and approved it, when, why (its
+ * note), and the comment it was last sent back with.
+ */
+export function VersionHeader({ version }: { version: LibraryVersion & Partial<Pick<LibraryVersionDetail, 'contributors' | 'sentBack'>> }) {
   const plural = version.ruleCount === 1 ? 'rule' : 'rules';
   return (
     <Stack gap="sm">
@@ -38,6 +42,17 @@ export function VersionHeader({ version }: { version: LibraryVersion }) {
           </Fact>
         ) : null}
         {version.retiredAt ? <Fact label="Retired">{formatDateTime(version.retiredAt)}</Fact> : null}
+        {version.contributors && version.contributors.length > 0 ? (
+          <Fact label="Worked on by">
+            <Stack gap={2} component="ul" style={{ listStyle: 'none', margin: 0, padding: 0 }} aria-label="Who worked on this version">
+              {version.contributors.map((contributor, index) => (
+                <li key={index}>
+                  {LIBRARY_CONTRIBUTION_LABELS[contributor.action]}: {contributor.userName}, {formatDateTime(contributor.at)}
+                </li>
+              ))}
+            </Stack>
+          </Fact>
+        ) : null}
         <Fact label="Note">
           {version.note || (
             <Text span size="sm" c="dimmed">
@@ -46,6 +61,16 @@ export function VersionHeader({ version }: { version: LibraryVersion }) {
           )}
         </Fact>
       </DataList>
+      {version.sentBack ? (
+        <Alert
+          color="orange"
+          variant="light"
+          icon={<IconMessageReply aria-hidden />}
+          title={`Sent back by ${version.sentBack.byName}, ${formatDateTime(version.sentBack.at)}`}
+        >
+          {version.sentBack.comment}
+        </Alert>
+      ) : null}
     </Stack>
   );
 }

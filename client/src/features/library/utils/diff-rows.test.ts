@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { LibraryDiff, NamedRule } from '@lockstep/shared';
-import { changeRows } from './diff-rows';
+import { changeRows, largeChangesFirst } from './diff-rows';
 
 const morphine: NamedRule = { drugId: 1, drugName: 'morphine', concentrationPerMl: 1, doseUnit: 'mg', perKg: false, limits: {} };
 
@@ -29,6 +29,7 @@ describe('changeRows', () => {
         from: '2 mg',
         to: '1.8 mg',
         direction: 'lowered',
+        large: null,
       },
       {
         key: 'morphine 1 mg/mL-1',
@@ -37,6 +38,7 @@ describe('changeRows', () => {
         from: '40 mg',
         to: '45 mg',
         direction: 'raised',
+        large: null,
       },
       {
         key: 'morphine 1 mg/mL-2',
@@ -45,6 +47,7 @@ describe('changeRows', () => {
         from: 'Not set',
         to: '0.5 mg',
         direction: 'set',
+        large: 'no limit → 0.5 mg',
       },
       {
         key: 'morphine 1 mg/mL-3',
@@ -53,6 +56,7 @@ describe('changeRows', () => {
         from: '6 min',
         to: 'Not set',
         direction: 'cleared',
+        large: '6 min → no limit',
       },
     ]);
   });
@@ -86,6 +90,34 @@ describe('changeRows', () => {
     expect(switched.map(({ what, from, to, direction }) => ({ what, from, to, direction }))).toEqual([
       { what: 'Weight-based (per kg)', from: 'Not per kg', to: 'Per kg', direction: 'switched' },
       { what: 'Demand dose, soft max', from: '0.4 mg', to: '0.004 mg/kg', direction: 'lowered' },
+    ]);
+  });
+
+  // A factor of 2 or more is "large" (shared LARGE_CHANGE_FACTOR, a review threshold of this
+  // product, not a published value); the limits are invented.
+  it('marks a limit changed tenfold as a large change with its factor, and lists large changes first', () => {
+    const rows = changeRows(
+      {
+        changed: [
+          {
+            drugName: 'morphine',
+            concentrationPerMl: 1,
+            doseUnit: 'mg',
+            changes: [
+              { field: 'demandDose', limit: 'softMax', from: 2, to: 1.8 },
+              { field: 'oneHourLimit', limit: 'hardMax', from: 15, to: 150 },
+              { field: 'fourHourLimit', limit: 'hardMax', from: 40, to: 20 },
+            ],
+          },
+        ],
+      },
+      [morphine],
+    );
+    expect(rows.map((row) => row.large)).toEqual([null, '×10', '÷2']);
+    expect(largeChangesFirst(rows).map((row) => row.what)).toEqual([
+      '1-hour limit, hard max',
+      '4-hour limit, hard max',
+      'Demand dose, soft max',
     ]);
   });
 });

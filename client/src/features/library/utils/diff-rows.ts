@@ -1,4 +1,11 @@
-import { REGIMEN_FIELD_LABELS, type ChangedRule, type LibraryDiff, type RuleChange } from '@lockstep/shared';
+import {
+  changeFactorLabel,
+  limitChangeSize,
+  REGIMEN_FIELD_LABELS,
+  type ChangedRule,
+  type LibraryDiff,
+  type RuleChange,
+} from '@lockstep/shared';
 import { formatLimit, isDoseUnit, LIMIT_LABELS, ruleTitle, type RuleView } from './rule-rows';
 
 /** How a value moved; shown as icon and word. */
@@ -13,6 +20,11 @@ export interface ChangeRow {
   from: string;
   to: string;
   direction: ChangeDirection;
+  /**
+   * A limit changed by a factor of 2 or more, or to or from no limit or 0 (shared
+   * `limitChangeSize`): what to show beside "Large change", e.g. "×10" or "no limit → 15 mg".
+   */
+  large: string | null;
 }
 
 const NOT_SET = 'Not set';
@@ -48,20 +60,31 @@ export function changeRows(diff: Pick<LibraryDiff, 'changed'>, rules: readonly R
       const key = `${title}-${index}`;
       if (change.field === 'perKg') {
         const word = (perKg: boolean) => (perKg ? 'Per kg' : 'Not per kg');
-        rows.push({ key, rule: title, what: 'Weight-based (per kg)', from: word(change.from), to: word(change.to), direction: 'switched' });
+        const [from, to] = [word(change.from), word(change.to)];
+        rows.push({ key, rule: title, what: 'Weight-based (per kg)', from, to, direction: 'switched', large: null });
       } else if (change.field === 'doseUnit') {
-        rows.push({ key, rule: title, what: 'Dose unit', from: change.from, to: change.to, direction: 'switched' });
+        rows.push({ key, rule: title, what: 'Dose unit', from: change.from, to: change.to, direction: 'switched', large: null });
       } else {
+        const from = formatLimit(change.from, change.field, oldUnit, oldPerKg) ?? NOT_SET;
+        const to = formatLimit(change.to, change.field, newUnit, newPerKg) ?? NOT_SET;
+        const size = limitChangeSize(change.from, change.to);
+        const noLimit = (value: number | null, shown: string) => (value === null ? 'no limit' : shown);
         rows.push({
           key,
           rule: title,
           what: `${REGIMEN_FIELD_LABELS[change.field]}, ${LIMIT_LABELS[change.limit].toLowerCase()}`,
-          from: formatLimit(change.from, change.field, oldUnit, oldPerKg) ?? NOT_SET,
-          to: formatLimit(change.to, change.field, newUnit, newPerKg) ?? NOT_SET,
+          from,
+          to,
           direction: direction(change.from, change.to),
+          large: size?.large ? (changeFactorLabel(size) ?? `${noLimit(change.from, from)} → ${noLimit(change.to, to)}`) : null,
         });
       }
     });
   }
   return rows;
+}
+
+/** The large changes first (each group in the diff's order), for the approver to see before the rest. */
+export function largeChangesFirst(rows: readonly ChangeRow[]): ChangeRow[] {
+  return [...rows.filter((row) => row.large !== null), ...rows.filter((row) => row.large === null)];
 }
