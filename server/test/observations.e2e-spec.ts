@@ -147,7 +147,10 @@ describe('observations, flags, usage and ward policy', () => {
   it('flags a syringe running low once per syringe and asks pharmacy for the next one', async () => {
     // A 1 mg/h basal at 1 mg/mL runs 1 mL/h: 1.5 mL left is 1.5 h, within the 2-hour threshold.
     // (Demand rates from readings minutes apart are not projected, so the basal carries the test.)
-    const order = await start({ ...ORDER, basalRatePerHour: 1 }, { ...SETTINGS, basalRatePerHour: 1 });
+    // A basal rate for this opioid-naive adult needs the prescriber's reason (Chou R et al.,
+    // Management of Postoperative Pain, APS/ASRA/ASA guideline, J Pain 2016;17(2):131-157).
+    const basal = { field: 'basalRatePerHour', reason: 'Basal rate agreed with the acute pain team for this test' };
+    const order = await start({ ...ORDER, basalRatePerHour: 1, overrides: [basal] }, { ...SETTINGS, basalRatePerHour: 1 });
     const low = { ...CALM, attempts: 40, delivered: 40, volumeInfusedMl: 48.5, syringeRemainingMl: 1.5 };
     await observe(order.id, CALM).expect(201);
     const first = await observe(order.id, low).expect(201);
