@@ -1,5 +1,6 @@
 import './support/lift-password-rate-limit.js';
 import request from 'supertest';
+import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import {
   NCI_PDQ_EQUIANALGESIC_SOURCE,
@@ -8,6 +9,7 @@ import {
   type OrderListEntry,
   type UsageResponse,
 } from '@lockstep/shared';
+import { EquianalgesicFactors1764780000000 } from '../src/database/migrations/1764780000000-equianalgesic-factors.js';
 import { createTestApp, DEMO_PASSWORD, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
 
 // Demo formulary: drug 1 morphine, 2 hydromorphone, 3 fentanyl (server/src/database/seed).
@@ -170,5 +172,44 @@ describe('pharmacy’s equianalgesic table', () => {
     const after = (await request(t.http).get(`/api/orders/${orderId}/usage?hours=24`).set(as('nurse')).expect(200)).body as UsageResponse;
     expect(after.oralMorphineEquivalent24hMg).toBeCloseTo(after.rolling24hDose * 20, 9);
     expect(after.oralMorphineFactors).toMatchObject({ parenteralAmount: 1.5, parenteralSource: AFP_2000 });
+  });
+
+  it('shows no figure (never 0) for a drug with no factor, until a pharmacist sets one', async () => {
+    const dataSource = t.app.get(DataSource);
+    await dataSource.query(`DELETE FROM "equianalgesic_factors" WHERE "drugId" = ? AND "route" = 'parenteral'`, [FENTANYL]);
+    const orders = (await request(t.http).get('/api/orders').set(as('nurse')).expect(200)).body as OrderListEntry[];
+    const running = orders.find((order) => order.status === 'active' && order.drugId === FENTANYL);
+    expect(running, 'a running demo fentanyl PCA').toBeDefined();
+    const usage = (await request(t.http).get(`/api/orders/${running!.id}/usage?hours=24`).set(as('nurse')).expect(200))
+      .body as UsageResponse;
+    expect(usage.oralMorphineEquivalent24hMg).toBeNull();
+    expect(usage.oralMorphineFactors).toBeNull();
+
+    // NCI PDQ Cancer Pain, equianalgesic table: parenteral fentanyl 100 mcg ≈ parenteral morphine 10 mg.
+    await put(FENTANYL, 'parenteral', { amount: 100, unit: 'mcg', source: NCI_PDQ_EQUIANALGESIC_SOURCE, ...signed }).expect(200);
+    expect((await latestEvent()).summary).toMatchObject({ amount: { from: null, to: 100 }, unit: { from: null, to: 'mcg' } });
+    const after = (await request(t.http).get(`/api/orders/${running!.id}/usage?hours=24`).set(as('nurse')).expect(200))
+      .body as UsageResponse;
+    // 100 mcg ≈ 30 mg oral morphine, so 0.3 mg oral morphine per mcg.
+    expect(after.oralMorphineEquivalent24hMg).toBeCloseTo(after.rolling24hDose * 0.3, 9);
+  });
+
+  it('writes the shipped defaults when the table is created on a formulary that has the drugs, found by name once', async () => {
+    const runner = t.app.get(DataSource).createQueryRunner();
+    const migration = new EquianalgesicFactors1764780000000();
+    await migration.down(runner);
+    await migration.up(runner);
+    await runner.release();
+    const rows = await table();
+    expect(rows.map(({ genericName, route, amount, unit, changedByName }) => [genericName, route, amount, unit, changedByName])).toEqual([
+      ['fentanyl', 'parenteral', 100, 'mcg', null],
+      ['hydromorphone', 'parenteral', 2, 'mg', null],
+      ['morphine', 'parenteral', 10, 'mg', null],
+      ['morphine', 'oral', 30, 'mg', null],
+    ]);
+    expect(rows.find((row) => row.genericName === 'hydromorphone')).toMatchObject({
+      drugId: HYDROMORPHONE,
+      source: NCI_PDQ_EQUIANALGESIC_SOURCE,
+    });
   });
 });
