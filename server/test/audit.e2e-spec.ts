@@ -60,7 +60,7 @@ describe('audit trail', () => {
   });
 
   it('tells an order’s whole story to every role, oldest first, each event chained to the one before', async () => {
-    const { id } = await activeOrder(t.http, tokens);
+    const { id } = await activeOrder(t.http, tokens, await t.addPatient());
     await request(t.http)
       .post(`/api/orders/${id}/observations`)
       .set(bearer(nurse))
@@ -148,7 +148,7 @@ describe('audit trail', () => {
     expect((await search(`?from=${encodeURIComponent(new Date(Date.now() + 60_000).toISOString())}`)).total).toBe(0);
     expect((await search(`?to=${encodeURIComponent(new Date(Date.now() + 60_000).toISOString())}`)).total).toBe(page1.total);
 
-    const bad = await request(t.http).get('/api/audit?limit=500&entityType=patient').set(bearer(admin)).expect(400);
+    const bad = await request(t.http).get('/api/audit?limit=500&entityType=pump').set(bearer(admin)).expect(400);
     expect(bad.body.errors.map((error: { field: string }) => error.field).sort()).toEqual(['entityType', 'limit']);
   });
 

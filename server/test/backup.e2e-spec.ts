@@ -61,7 +61,7 @@ describe('database backup (npm run db:backup)', () => {
       pharmacist: await t.tokenFor(DEMO_USER_BY_ROLE.pharmacist),
       nurse: await t.tokenFor(DEMO_USER_BY_ROLE.nurse),
     };
-    const order = await activeOrder(t.http, tokens);
+    const order = await activeOrder(t.http, tokens, await t.addPatient());
     await t.app.listen(0, '127.0.0.1');
     const baseUrl = `http://127.0.0.1:${((t.app.getHttpServer() as Server).address() as AddressInfo).port}`;
     const record = async (): Promise<{ id: number; answeredAt: number }> => {

@@ -18,26 +18,34 @@ import {
   SYRINGE_CHANGE,
 } from './support/bad-input-specs.js';
 import { type BadInputApp, badInputSuite, type BadInputRoute } from './support/bad-input-harness.js';
-import { CALM_OBSERVATION, IDENTITY, RELEASE, ROSA, SETTINGS } from './support/pca.js';
+import { CALM_OBSERVATION, RELEASE, ROSA, SETTINGS } from './support/pca.js';
 import { activeOrder, verifiedOrderWithSyringe } from './support/pca-steps.js';
+import { PATIENT_1 } from './support/test-app.js';
 
-const HARBOUR = 1; // the ward of patient 1, whose orders support/pca.ts writes
+const HARBOUR = 1; // the ward of patient 1, and of the patients TestApp.addPatient copies from him
 
 /** Entities in the state each route expects, made through the API in setup. */
-const state = { released: { id: 0, code: '' }, checkPending: { id: 0, checkId: 0 }, active: { id: 0, code: '' }, spareCode: '', flagId: 0 };
+const state = {
+  released: { id: 0, code: '', patient: PATIENT_1 },
+  checkPending: { id: 0, checkId: 0 },
+  active: { id: 0, code: '' },
+  spareCode: '',
+  flagId: 0,
+};
 
 async function setUp({ t, tokens }: BadInputApp): Promise<void> {
   const pca = { prescriber: tokens.prescriber, pharmacist: tokens.pharmacist, nurse: tokens.nurse };
   const nurse = { Authorization: `Bearer ${tokens.nurse}` };
-  state.released = await verifiedOrderWithSyringe(t.http, pca);
-  const pending = await verifiedOrderWithSyringe(t.http, pca);
+  // One patient each: a patient may have only one open PCA.
+  state.released = await verifiedOrderWithSyringe(t.http, pca, await t.addPatient());
+  const pending = await verifiedOrderWithSyringe(t.http, pca, await t.addPatient());
   const first = await request(t.http)
     .post(`/api/orders/${pending.id}/bedside-checks`)
     .set(nurse)
-    .send({ ...IDENTITY, releaseCode: pending.code, settings: SETTINGS })
+    .send({ ...pending.patient.identity, releaseCode: pending.code, settings: SETTINGS })
     .expect(201);
   state.checkPending = { id: pending.id, checkId: first.body.id };
-  state.active = await activeOrder(t.http, pca);
+  state.active = await activeOrder(t.http, pca, await t.addPatient());
   const spare = await request(t.http)
     .post(`/api/orders/${state.active.id}/releases`)
     .set({ Authorization: `Bearer ${tokens.pharmacist}` })
@@ -62,7 +70,7 @@ const ROUTES: BadInputRoute[] = [
     role: 'nurse',
     spec: FIRST_CHECK,
     dto: FirstCheckDto,
-    valid: () => ({ ...IDENTITY, releaseCode: state.released.code, settings: SETTINGS }),
+    valid: () => ({ ...state.released.patient.identity, releaseCode: state.released.code, settings: SETTINGS }),
   },
   {
     method: 'POST',

@@ -3,23 +3,25 @@ import request from 'supertest';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { waitForMail } from './support/mailbox.js';
-import { IDENTITY, ORDER, RELEASE, ROSA, SETTINGS } from './support/pca.js';
+import { ORDER, RELEASE, ROSA, SETTINGS } from './support/pca.js';
 import { activeOrder as startOrder, verifiedOrderWithSyringe as releasedOrder } from './support/pca-steps.js';
 import { createTestApp, DEMO_PASSWORD, type TestApp } from './support/test-app.js';
 
-// Regimen, patient and syringe are in support/pca.ts (ASHP Standardize 4 Safety, PCA standards, 2023).
+// Regimen and syringe are in support/pca.ts (ASHP Standardize 4 Safety, PCA standards, 2023); each
+// order is for a new copy of its patient (TestApp.addPatient).
 describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
   let t: TestApp;
   const token = {} as Record<'amara' | 'lin' | 'kai' | 'rosa' | 'sam', string>;
   const as = (who: keyof typeof token) => ({ Authorization: `Bearer ${token[who]}` });
 
   const pcaTokens = () => ({ prescriber: token.amara, pharmacist: token.lin, nurse: token.kai });
-  const verifiedOrderWithSyringe = () => releasedOrder(t.http, pcaTokens());
+  // Each order on a patient of its own: a patient may have only one open PCA.
+  const verifiedOrderWithSyringe = async () => releasedOrder(t.http, pcaTokens(), await t.addPatient());
   const firstCheck = (id: number, body: object) => request(t.http).post(`/api/orders/${id}/bedside-checks`).set(as('kai')).send(body);
   const secondCheck = (id: number, checkId: number, body: object) =>
     request(t.http).post(`/api/orders/${id}/bedside-checks/${checkId}/second`).set(as('kai')).send(body);
 
-  const activeOrder = () => startOrder(t.http, pcaTokens());
+  const activeOrder = async () => startOrder(t.http, pcaTokens(), await t.addPatient());
 
   beforeAll(async () => {
     t = await createTestApp();
@@ -35,7 +37,7 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
     it('never sends the first entry back, names each mismatched field and whose entry differs, and starts nothing', async () => {
       const order = await verifiedOrderWithSyringe();
       const first = await firstCheck(order.id, {
-        ...IDENTITY,
+        ...order.patient.identity,
         releaseCode: order.code.toLowerCase().replace('-', ' '),
         settings: { ...SETTINGS, lockoutMinutes: 6 },
       }).expect(201);
@@ -54,7 +56,7 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
 
     it('activates the order and the syringe on a full match, recording both nurses and times', async () => {
       const order = await verifiedOrderWithSyringe();
-      const first = await firstCheck(order.id, { ...IDENTITY, releaseCode: order.code, settings: SETTINGS }).expect(201);
+      const first = await firstCheck(order.id, { ...order.patient.identity, releaseCode: order.code, settings: SETTINGS }).expect(201);
       const second = await secondCheck(order.id, first.body.id, { ...ROSA, settings: SETTINGS }).expect(200);
       expect(second.body).toEqual({ id: first.body.id, status: 'matched', differences: [] });
       const detail = await request(t.http).get(`/api/orders/${order.id}`).set(as('kai')).expect(200);
@@ -74,7 +76,7 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
 
     it('refuses the same nurse twice (400), a wrong second password (401) and a pharmacist as either check (403)', async () => {
       const order = await verifiedOrderWithSyringe();
-      const first = await firstCheck(order.id, { ...IDENTITY, releaseCode: order.code, settings: SETTINGS }).expect(201);
+      const first = await firstCheck(order.id, { ...order.patient.identity, releaseCode: order.code, settings: SETTINGS }).expect(201);
       const same = await secondCheck(order.id, first.body.id, {
         username: 'kai.mendes',
         password: DEMO_PASSWORD,
@@ -86,12 +88,12 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
       await request(t.http)
         .post(`/api/orders/${order.id}/bedside-checks`)
         .set(as('lin'))
-        .send({ ...IDENTITY, releaseCode: order.code, settings: SETTINGS })
+        .send({ ...order.patient.identity, releaseCode: order.code, settings: SETTINGS })
         .expect(403);
       await request(t.http)
         .post(`/api/orders/${order.id}/bedside-checks`)
         .set(as('amara'))
-        .send({ ...IDENTITY, releaseCode: order.code, settings: SETTINGS })
+        .send({ ...order.patient.identity, releaseCode: order.code, settings: SETTINGS })
         .expect(403);
     });
 
@@ -105,12 +107,14 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
         settings: SETTINGS,
       }).expect(400);
       expect(wrongPatient.body.errors.map((e: { field: string }) => e.field)).toEqual(['patientMrn']);
-      const otherSyringe = await firstCheck(order.id, { ...IDENTITY, releaseCode: other.code, settings: SETTINGS }).expect(400);
+      const otherSyringe = await firstCheck(order.id, { ...order.patient.identity, releaseCode: other.code, settings: SETTINGS }).expect(
+        400,
+      );
       expect(otherSyringe.body.errors).toEqual([
         { field: 'releaseCode', message: 'This syringe was released for another order: do not use it' },
       ]);
       const missing = await firstCheck(order.id, {
-        ...IDENTITY,
+        ...order.patient.identity,
         releaseCode: order.code,
         settings: { ...SETTINGS, demandDose: undefined },
       }).expect(400);
@@ -146,13 +150,13 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
       const { body: order } = await request(t.http)
         .post('/api/orders')
         .set(as('amara'))
-        .send({ ...ORDER, clinicianBolusDose: 2 })
+        .send({ ...ORDER, patientId: (await t.addPatient()).id, clinicianBolusDose: 2 })
         .expect(201);
       expect(order.clinicianBolusDose).toBe(2);
       const hard = await request(t.http)
         .post('/api/orders')
         .set(as('amara'))
-        .send({ ...ORDER, clinicianBolusDose: 5 })
+        .send({ ...ORDER, patientId: (await t.addPatient()).id, clinicianBolusDose: 5 })
         .expect(400);
       expect(hard.body.errors[0].field).toBe('clinicianBolusDose');
     });
@@ -162,7 +166,7 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
     it('changes the syringe with witnessed waste that reconciles, then a new blind check starts the new syringe', async () => {
       const order = await activeOrder();
       const { body: next } = await request(t.http).post(`/api/orders/${order.id}/releases`).set(as('lin')).send(RELEASE).expect(201);
-      await firstCheck(order.id, { ...IDENTITY, releaseCode: next.releaseCode, settings: SETTINGS }).expect(409);
+      await firstCheck(order.id, { ...order.patient.identity, releaseCode: next.releaseCode, settings: SETTINGS }).expect(409);
       const change = await request(t.http)
         .post(`/api/orders/${order.id}/syringe-changes`)
         .set(as('kai'))
@@ -183,7 +187,9 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
         .send({ amount: 1, reason: 'Pain on moving', witness: ROSA })
         .expect(409);
       expect(bolus.body.message).toBe('No syringe is running: finish the bedside check first');
-      const first = await firstCheck(order.id, { ...IDENTITY, releaseCode: next.releaseCode, settings: SETTINGS }).expect(201);
+      const first = await firstCheck(order.id, { ...order.patient.identity, releaseCode: next.releaseCode, settings: SETTINGS }).expect(
+        201,
+      );
       await secondCheck(order.id, first.body.id, { ...ROSA, settings: SETTINGS }).expect(200);
       const detail = await request(t.http).get(`/api/orders/${order.id}`).set(as('kai'));
       expect(detail.body.releases.map((r: { status: string }) => r.status)).toEqual(['finished', 'in_use']);

@@ -4,8 +4,8 @@ import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { PcaOrder } from '../src/orders/entities/pca-order.entity.js';
 import { transitionOrder } from '../src/orders/order-transitions.js';
-import { IDENTITY, ORDER, RELEASE, SETTINGS } from './support/pca.js';
-import { createTestApp, DEMO_PASSWORD, type TestApp } from './support/test-app.js';
+import { ORDER, RELEASE, SETTINGS } from './support/pca.js';
+import { createTestApp, DEMO_PASSWORD, type TestApp, type TestPatient } from './support/test-app.js';
 
 // Each race fires its requests at once over real sockets (fetch against app.listen), so they
 // overlap inside Nest exactly as two people pressing the same button would. Every race repeats.
@@ -20,7 +20,9 @@ describe('concurrency: simultaneous requests on one record', { timeout: 120_000 
   let t: TestApp;
   let db: DataSource;
   let baseUrl: string;
-  const token: Record<'amara' | 'lin' | 'tomas' | 'kai', string> = { amara: '', lin: '', tomas: '', kai: '' };
+  const token: Record<'amara' | 'ari' | 'lin' | 'tomas' | 'kai', string> = { amara: '', ari: '', lin: '', tomas: '', kai: '' };
+  // A second prescriber (invented), for two doctors ordering for one patient at once.
+  const ARI = { username: 'ari.vance', displayName: 'Dr Ari Vance', role: 'prescriber', wardIds: [1], password: 'a-long-enough-password' };
   const tally: Record<string, number> = {};
 
   const call = async (method: string, path: string, as: string, body?: object): Promise<Reply> => {
@@ -46,12 +48,15 @@ describe('concurrency: simultaneous requests on one record', { timeout: 120_000 
   const statuses = (replies: Reply[]) => replies.map((reply) => reply.status).sort();
   const count = async (sql: string, parameters: unknown[]): Promise<number> => Number((await db.query(sql, parameters))[0].n);
 
-  const signedOrder = async (): Promise<number> => (await ok('POST', '/api/orders', token.amara, ORDER, 201)).id as number;
-  const verifiedWithSyringe = async (): Promise<{ id: number; code: string }> => {
-    const id = await signedOrder();
+  /** Signed for a patient of its own (a patient may have only one open PCA), or for `patient`. */
+  const signedOrder = async (patient?: TestPatient): Promise<number> =>
+    (await ok('POST', '/api/orders', token.amara, { ...ORDER, patientId: (patient ?? (await t.addPatient())).id }, 201)).id as number;
+  const verifiedWithSyringe = async (): Promise<{ id: number; code: string; patient: TestPatient }> => {
+    const patient = await t.addPatient();
+    const id = await signedOrder(patient);
     await ok('POST', `/api/orders/${id}/verify`, token.lin, SIGNED, 200);
     const release = await ok('POST', `/api/orders/${id}/releases`, token.lin, RELEASE, 201);
-    return { id, code: release.releaseCode as string };
+    return { id, code: release.releaseCode as string, patient };
   };
 
   beforeAll(async () => {
@@ -63,6 +68,8 @@ describe('concurrency: simultaneous requests on one record', { timeout: 120_000 
     token.lin = await t.tokenFor('lin.park');
     token.tomas = await t.tokenFor('tomas.ortiz');
     token.kai = await t.tokenFor('kai.mendes');
+    await ok('POST', '/api/users', await t.tokenFor('sam.rivera'), ARI, 201);
+    token.ari = await t.tokenFor(ARI.username, ARI.password);
   });
   afterAll(async () => {
     console.log(
@@ -71,6 +78,24 @@ describe('concurrency: simultaneous requests on one record', { timeout: 120_000 
         .join(', ')}`,
     );
     await t.close();
+  });
+
+  it(`two prescribers order a PCA for one patient at once: one 201, one 409 naming it, one order written (${ROUNDS} rounds)`, async () => {
+    for (let round = 0; round < ROUNDS; round++) {
+      const patient = await t.addPatient();
+      const body = { ...ORDER, patientId: patient.id };
+      const bodies = [body, { ...body, signature: { password: ARI.password } }];
+      const created = () => count(`SELECT COUNT(*) AS n FROM audit_event WHERE action = 'order.create'`, []);
+      const before = await created();
+      const replies = await Promise.all([token.amara, token.ari].map((as, i) => call('POST', '/api/orders', as, bodies[i])));
+      expect(statuses(replies), JSON.stringify(replies)).toEqual([201, 409]);
+      const winner = replies.find((reply) => reply.status === 201)!.body;
+      const loser = replies.find((reply) => reply.status === 409)!.body;
+      expect(loser).toMatchObject({ openOrderId: winner.id, message: expect.stringContaining(`open PCA (order ${winner.id as number},`) });
+      expect(await count('SELECT COUNT(*) AS n FROM pca_orders WHERE patientId = ?', [patient.id])).toBe(1);
+      expect(await created()).toBe(before + 1);
+      tally['order/order'] = round + 1;
+    }
   });
 
   it(`two pharmacists verify one order at once: one 200, one 409 with the current status (${ROUNDS} rounds)`, async () => {
@@ -105,12 +130,12 @@ describe('concurrency: simultaneous requests on one record', { timeout: 120_000 
 
   it(`two second nurses sign one bedside check at once: one activation (${ROUNDS} rounds)`, async () => {
     for (let round = 0; round < ROUNDS; round++) {
-      const { id, code } = await verifiedWithSyringe();
+      const { id, code, patient } = await verifiedWithSyringe();
       const first = await ok(
         'POST',
         `/api/orders/${id}/bedside-checks`,
         token.kai,
-        { ...IDENTITY, releaseCode: code, settings: SETTINGS },
+        { ...patient.identity, releaseCode: code, settings: SETTINGS },
         201,
       );
       const path = `/api/orders/${id}/bedside-checks/${first.id as number}/second`;

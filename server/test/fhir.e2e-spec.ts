@@ -3,7 +3,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ORDER, ROSA, SETTINGS } from './support/pca.js';
 import { activeOrder } from './support/pca-steps.js';
-import { createTestApp, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
+import { createTestApp, DEMO_USER_BY_ROLE, PATIENT_1, type TestApp } from './support/test-app.js';
 
 // The typed slices of the two outside checkers. Both ship CommonJS without the types used here.
 type FhirValidation = { valid: boolean; messages: { location?: string; severity?: string; message?: string }[] };
@@ -81,8 +81,10 @@ describe('FHIR R4 export', () => {
     for (const role of Object.keys(DEMO_USER_BY_ROLE) as Role[]) tokens[role] = await t.tokenFor(DEMO_USER_BY_ROLE[role]);
 
     // One order in every Lockstep status. Demo orders: 1 awaiting verification, 2 verified, 3 returned.
+    // Patient 1 gets the returned, rejected, cancelled, discontinued and active ones, in the order a
+    // ward could write them: a patient may have only one open PCA, so each is finished (or, for
+    // demo order 1, returned) before the next is signed, and the worked example runs last.
     ids.verified = 2;
-    ids.worked = (await activeOrder(t.http, pcaTokens(), WORKED, WORKED_SETTINGS)).id;
     const { body: returned } = await request(t.http).get('/api/orders/3').set(as('prescriber')).expect(200);
     const revision = {
       ...ORDER,
@@ -115,12 +117,13 @@ describe('FHIR R4 export', () => {
       .set(as('prescriber'))
       .send({ reason: 'Written for the wrong patient' })
       .expect(200);
-    ids.discontinued = (await activeOrder(t.http, pcaTokens())).id;
+    ids.discontinued = (await activeOrder(t.http, pcaTokens(), PATIENT_1)).id;
     await request(t.http)
       .post(`/api/orders/${ids.discontinued}/discontinue`)
       .set(as('nurse'))
       .send({ reason: 'Pain controlled on oral analgesia', volumeInfusedMl: 10, wastedMl: 40, witness: ROSA })
       .expect(200);
+    ids.worked = (await activeOrder(t.http, pcaTokens(), PATIENT_1, WORKED, WORKED_SETTINGS)).id;
 
     const { body: orders } = await request(t.http).get('/api/orders').set(as('admin')).expect(200);
     const { body: patients } = await request(t.http).get('/api/patients').set(as('admin')).expect(200);

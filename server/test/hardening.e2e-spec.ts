@@ -3,7 +3,7 @@ import { JwtService } from '@nestjs/jwt';
 import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
-import { IDENTITY, ROSA, SETTINGS, ORDER as PCA_ORDER } from './support/pca.js';
+import { ROSA, SETTINGS, ORDER as PCA_ORDER } from './support/pca.js';
 import { verifiedOrderWithSyringe } from './support/pca-steps.js';
 import { createTestApp, DEMO_PASSWORD, type TestApp } from './support/test-app.js';
 
@@ -91,7 +91,7 @@ describe('hardening', () => {
       const { body: order } = await request(t.http)
         .post('/api/orders')
         .set(bearer(prescriber))
-        .send({ ...PCA_ORDER, indication: 'Pain after surgery' })
+        .send({ ...PCA_ORDER, patientId: (await t.addPatient()).id, indication: 'Pain after surgery' })
         .expect(201);
       const verify = (password: string) =>
         request(t.http)
@@ -121,15 +121,14 @@ describe('hardening', () => {
     });
 
     it('counts a colleague’s wrong password at the bedside check against the colleague', async () => {
-      const started = await verifiedOrderWithSyringe(
-        t.http,
-        { prescriber, pharmacist, nurse },
-        { ...PCA_ORDER, indication: 'Pain after surgery' },
-      );
+      const started = await verifiedOrderWithSyringe(t.http, { prescriber, pharmacist, nurse }, await t.addPatient(), {
+        ...PCA_ORDER,
+        indication: 'Pain after surgery',
+      });
       const first = await request(t.http)
         .post(`/api/orders/${started.id}/bedside-checks`)
         .set(bearer(nurse))
-        .send({ ...IDENTITY, releaseCode: started.code, settings: SETTINGS })
+        .send({ ...started.patient.identity, releaseCode: started.code, settings: SETTINGS })
         .expect(201);
       const second = (password: string) =>
         request(t.http)

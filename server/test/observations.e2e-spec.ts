@@ -12,8 +12,9 @@ describe('observations, flags, usage and ward policy', () => {
   const as = (who: keyof typeof token) => ({ Authorization: `Bearer ${token[who]}` });
   const observe = (id: number, body: object, who: keyof typeof token = 'kai') =>
     request(t.http).post(`/api/orders/${id}/observations`).set(as(who)).send(body);
-  const start = (order: object = ORDER, settings: object = SETTINGS) =>
-    activeOrder(t.http, { prescriber: token.amara, pharmacist: token.lin, nurse: token.kai }, order, settings);
+  /** A running PCA on a patient of its own: a patient may have only one open PCA. */
+  const start = async (order: object = ORDER, settings: object = SETTINGS) =>
+    activeOrder(t.http, { prescriber: token.amara, pharmacist: token.lin, nurse: token.kai }, await t.addPatient(), order, settings);
 
   beforeAll(async () => {
     t = await createTestApp();
@@ -67,10 +68,11 @@ describe('observations, flags, usage and ward policy', () => {
     const order = await start();
     const response = await observe(order.id, { ...CALM, sedationLevel: '3' }).expect(201);
     expect(response.body.flags).toMatchObject([{ severity: 'urgent', code: 'sedation.3', action: expect.stringContaining('25–50 %') }]);
-    // The demo's own story already holds a sedation-3 e-mail (another bed); this one names bed H02.
-    const thisBed = (to: string) => (m: MailboxMessage) => m.subject === 'URGENT: Sedation level 3 — Harbour bed H02' && m.to === to;
+    // The demo's own story already holds a sedation-3 e-mail (another bed); this one names this patient's bed.
+    const where = `Harbour bed ${order.patient.bed}`;
+    const thisBed = (to: string) => (m: MailboxMessage) => m.subject === `URGENT: Sedation level 3 — ${where}` && m.to === to;
     const toPrescriber = await waitForMail(t.http, token.sam, thisBed('amara.osei@kestrelbay.example'));
-    expect(toPrescriber.text).toContain('Harbour bed H02');
+    expect(toPrescriber.text).toContain(where);
     await waitForMail(t.http, token.sam, thisBed('nurse-in-charge.harbour@kestrelbay.example'));
 
     const flagId = response.body.flags[0].id;
