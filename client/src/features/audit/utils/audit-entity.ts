@@ -9,6 +9,7 @@ export const ENTITY_TYPE_LABELS: Record<AuditEntityType, string> = {
   ward: 'Ward',
   'sign-in': 'Sign-in lock',
   'equianalgesic-factor': 'Equianalgesic factor',
+  patient: 'Patient',
 };
 
 type EntityRef = Pick<AuditEvent, 'entityType' | 'entityId'>;
@@ -28,6 +29,7 @@ export function entityHref(event: EntityRef, role: Role): string | null {
   if (!Number.isSafeInteger(id) || id <= 0) return null;
   if (event.entityType === 'order' && canAccess(role, 'clinical')) return paths.order.getHref(id);
   if (event.entityType === 'ward' && canAccess(role, 'admin')) return paths.adminWardPolicies.getHref(id);
+  if (event.entityType === 'patient' && canAccess(role, 'clinical')) return paths.patient.getHref(id);
   if (event.entityType === 'equianalgesic-factor' && canAccess(role, 'clinical')) return paths.equianalgesicFactors.getHref();
   return null;
 }
