@@ -71,6 +71,7 @@ const POLICY = {
   reconciliationToleranceMl: 0.5,
   painNotControlledScore: 7,
   painNotControlledRatio: 2,
+  weightMaxAgeDays: 7,
   pharmacyEmail: 'pharmacy.harbour@kestrelbay.example',
   nurseInChargeEmail: '',
 };

@@ -9,6 +9,10 @@ import {
   type LibraryVersionAction,
   type LibraryVersionDetail,
   type LimitRuleInput,
+  populationKey,
+  populationProblems,
+  type RuleProblem,
+  rulePopulationOf,
   validateLimitRules,
 } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
@@ -62,15 +66,18 @@ export class LibraryVersionsService {
       );
       const startingRules =
         rules ??
-        active?.rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }) => ({
+        active?.rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits, ...rule }) => ({
           drugId,
           concentrationPerMl,
           doseUnit,
           perKg,
+          ...rulePopulationOf(rule),
           limits,
         })) ??
         [];
-      await this.writeRules(manager, draft.id, startingRules);
+      // A copy of the active rules is written as it is, so a rule saved before a check existed
+      // (a per-kg rule without ceilings) can be corrected in the draft; submitting checks it all.
+      await this.writeRules(manager, draft.id, startingRules, { check: rules !== undefined });
       await this.recordEvent(manager, draft.id, author, rules ? 'imported' : 'created');
       await recordAudit(manager, author, {
         action: rules ? 'library-version.import' : 'library-version.create',
@@ -107,8 +114,16 @@ export class LibraryVersionsService {
   async submit(id: number, note: string | undefined, author: AuthUser): Promise<LibraryVersionDetail> {
     return this.dataSource.transaction(async (manager) => {
       const version = await this.lockedVersion(manager, id, 'submit');
-      if ((await manager.countBy(LimitRule, { versionId: id })) === 0) {
+      const rules = await manager.findBy(LimitRule, { versionId: id });
+      if (rules.length === 0) {
         throw fieldError('rules', 'A library version needs at least one rule before it is submitted');
+      }
+      const problems = await this.ruleProblems(manager, version.wardId, rules);
+      if (problems.length > 0) {
+        throw fieldErrors(
+          'Some limit rules need correcting before the version is submitted',
+          problems.map((problem) => ({ field: problem.path, message: problem.message })),
+        );
       }
       await manager.update(
         LibraryVersion,
@@ -230,8 +245,30 @@ export class LibraryVersionsService {
     return version;
   }
 
-  private async writeRules(manager: EntityManager, versionId: number, rules: LimitRuleInput[]): Promise<void> {
+  /**
+   * validateLimitRules, and per-kg ceilings also against the adult rules of the other wards'
+   * active libraries (a children's ward's library may hold no adult rule of its own).
+   */
+  private async ruleProblems(manager: EntityManager, wardId: number, rules: LimitRuleInput[]): Promise<RuleProblem[]> {
     const problems = validateLimitRules(rules);
+    if (!rules.some((rule) => rule.perKg)) return problems;
+    const adultsElsewhere = await manager
+      .createQueryBuilder(LimitRule, 'rule')
+      .innerJoinAndSelect('rule.version', 'version', 'version.status = :status AND version.wardId != :wardId', { status: 'active', wardId })
+      .innerJoinAndSelect('version.ward', 'ward')
+      .where('rule.population = :population AND rule.perKg = 0', { population: 'adult' })
+      .getMany();
+    const seen = new Set(problems.map((problem) => `${problem.path} ${problem.message}`));
+    const elsewhere = adultsElsewhere.map((rule) => ({ ...rule, wardName: rule.version.ward.name }));
+    for (const problem of populationProblems(rules, elsewhere)) {
+      if (!seen.has(`${problem.path} ${problem.message}`)) problems.push(problem);
+    }
+    return problems;
+  }
+
+  private async writeRules(manager: EntityManager, versionId: number, rules: LimitRuleInput[], options = { check: true }): Promise<void> {
+    const version = await manager.findOneByOrFail(LibraryVersion, { id: versionId });
+    const problems = options.check ? await this.ruleProblems(manager, version.wardId, rules) : [];
     const drugs = await manager.findBy(Drug, { id: In([...new Set(rules.map((rule) => rule.drugId))]) });
     rules.forEach((rule, index) => {
       const drug = drugs.find((candidate) => candidate.id === rule.drugId);
@@ -257,12 +294,14 @@ export class LibraryVersionsService {
         .insert()
         .into(LimitRule)
         .values(
-          rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits }) => ({
+          rules.map(({ drugId, concentrationPerMl, doseUnit, perKg, limits, ...rule }) => ({
             versionId,
             drugId,
             concentrationPerMl,
             doseUnit,
             perKg,
+            ...rulePopulationOf(rule),
+            populationKey: populationKey(rule),
             limits,
           })),
         )

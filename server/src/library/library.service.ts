@@ -1,7 +1,15 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, type EntityManager, In } from 'typeorm';
-import { diffLibrary, type LibraryDiff, type LibraryVersion as LibraryVersionResponse, type LibraryVersionDetail } from '@lockstep/shared';
+import {
+  chooseRule,
+  diffLibrary,
+  type LibraryDiff,
+  type LibraryVersion as LibraryVersionResponse,
+  type LibraryVersionDetail,
+  type PatientForRule,
+  type RuleChoice,
+} from '@lockstep/shared';
 import { Ward } from '../wards/entities/ward.entity.js';
 import { toLibraryVersionDetail, toLibraryVersionResponse } from './dto/library-response.js';
 import { LibraryVersion } from './entities/library-version.entity.js';
@@ -53,17 +61,43 @@ export class LibraryService {
     return { ...diffLibrary(base, version.rules.map(toNamedRule)), againstVersionId: active?.id ?? null };
   }
 
-  /** The active rule of a ward for one drug at one concentration, or null. */
-  async findActiveRule(wardId: number, drugId: number, concentrationPerMl: number): Promise<LimitRule | null> {
-    return (
+  /**
+   * The active rule for a patient on their ward, for one drug at one concentration, chosen by the
+   * patient (shared chooseRule): the ward's library first, then the other wards' active libraries
+   * (by ward name), so a child on an adult ward gets a paediatric rule or none, never adult limits.
+   * Two queries: the ward's candidates, and only when they hold no rule for the patient, the others'.
+   */
+  async findActiveRule(
+    wardId: number,
+    order: { drugId: number; concentrationPerMl: number },
+    patient: PatientForRule,
+  ): Promise<RuleChoice<LimitRule>> {
+    const candidates = (elsewhere: boolean) =>
       this.dataSource.manager
         .createQueryBuilder(LimitRule, 'rule')
-        .innerJoin('rule.version', 'version', 'version.wardId = :wardId AND version.status = :status', { wardId, status: 'active' })
+        .innerJoinAndSelect('rule.version', 'version', `version.wardId ${elsewhere ? '!=' : '='} :wardId AND version.status = :status`, {
+          wardId,
+          status: 'active',
+        })
+        .innerJoinAndSelect('version.ward', 'ward')
         .innerJoinAndSelect('rule.drug', 'drug')
-        .where('rule.drugId = :drugId', { drugId })
+        .where('rule.drugId = :drugId', { drugId: order.drugId })
         // Concentrations are decimals typed by people; compare with a tolerance, not bit for bit.
-        .andWhere('abs(rule.concentrationPerMl - :concentration) < 1e-9', { concentration: concentrationPerMl })
-        .getOne()
+        .andWhere('abs(rule.concentrationPerMl - :concentration) < 1e-9', { concentration: order.concentrationPerMl })
+        .orderBy('ward.name', 'ASC')
+        .addOrderBy('rule.id', 'ASC')
+        .getMany();
+    const own = await candidates(false);
+    const choice = chooseRule(order, patient, own);
+    if (choice.kind === 'ward') return choice;
+    const others = await candidates(true);
+    const libraries = new Map<string, LimitRule[]>();
+    for (const rule of others) libraries.set(rule.version.ward.name, [...(libraries.get(rule.version.ward.name) ?? []), rule]);
+    return chooseRule(
+      order,
+      patient,
+      own,
+      [...libraries].map(([wardName, rules]) => ({ wardName, rules })),
     );
   }
 

@@ -5,9 +5,8 @@ import {
   checkOrder,
   deriveOrderValues,
   duplicatePcaFinding,
-  formatDose,
   patientFactorsOf,
-  tallMan,
+  ruleChoiceFindings,
   type Finding,
   type OrderDerivedValues,
   type OrderPreview,
@@ -18,6 +17,7 @@ import { toLimitRuleResponse } from '../library/dto/library-response.js';
 import type { LimitRule } from '../library/entities/limit-rule.entity.js';
 import { LibraryService } from '../library/library.service.js';
 import { Patient } from '../patients/entities/patient.entity.js';
+import { Ward } from '../wards/entities/ward.entity.js';
 import type { OrderFieldsDto } from './dto/order-fields.dto.js';
 import { fieldError } from '../common/errors/field-error.js';
 import { findOpenPca } from './open-pca.js';
@@ -48,11 +48,28 @@ export class OrderPreviewService {
     const regimen: Regimen = { ...fields };
     const now = new Date();
     const factors = patientFactorsOf(patient, now);
-    const context = { drug: { id: drug.id, genericName: drug.genericName }, today: now.toISOString().slice(0, 10) };
-    const rule = await this.library.findActiveRule(patient.wardId, drug.id, fields.concentrationPerMl);
-    const findings: Finding[] = rule
-      ? checkOrder(regimen, { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits }, factors, context)
-      : [missingRuleFinding(drug, fields), ...checkOrder(regimen, { doseUnit: drug.doseUnit, perKg: false, limits: {} }, factors, context)];
+    const ward = await this.dataSource.manager.findOneByOrFail(Ward, { id: patient.wardId });
+    const context = {
+      drug: { id: drug.id, genericName: drug.genericName },
+      today: now.toISOString().slice(0, 10),
+      weightMaxAgeDays: ward.weightMaxAgeDays,
+    };
+    // Chosen by the patient, not only the ward: a child gets a paediatric rule or none (shared chooseRule).
+    const choice = await this.library.findActiveRule(
+      patient.wardId,
+      { drugId: drug.id, concentrationPerMl: fields.concentrationPerMl },
+      factors,
+    );
+    const rule = choice.kind === 'none' ? null : choice.rule;
+    const checked = checkOrder(
+      regimen,
+      rule ? { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits } : { doseUnit: drug.doseUnit, perKg: false, limits: {} },
+      factors,
+      context,
+    );
+    const choiceFindings = ruleChoiceFindings(choice, drug, fields, factors);
+    // No rule blocks, so it leads; a rule from another ward's library is a caution, so it follows.
+    const findings: Finding[] = rule ? [...checked, ...choiceFindings] : [...choiceFindings, ...checked];
     return { patient, drug, rule, findings, derived: deriveOrderValues(regimen) };
   }
 }
@@ -64,13 +81,3 @@ export type OrderEvaluation = {
   findings: Finding[];
   derived: OrderDerivedValues;
 };
-
-function missingRuleFinding(drug: Drug, fields: OrderFieldsDto): Finding {
-  const concentration = formatDose(fields.concentrationPerMl, `${fields.doseUnit}/mL`);
-  return {
-    field: 'concentrationPerMl',
-    severity: 'hard',
-    code: 'library.no-rule',
-    message: `The ward's dose-limit library has no rule for ${tallMan(drug.genericName)} ${concentration}: choose a listed concentration`,
-  };
-}

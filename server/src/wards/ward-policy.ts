@@ -11,5 +11,6 @@ export function wardPolicy(ward: Ward): WardPolicy {
     reconciliationToleranceMl: ward.reconciliationToleranceMl,
     painNotControlledScore: ward.painNotControlledScore,
     painNotControlledRatio: ward.painNotControlledRatio,
+    weightMaxAgeDays: ward.weightMaxAgeDays,
   };
 }

@@ -3,6 +3,7 @@ import {
   DOSE_UNITS,
   MIN_REASON_LENGTH,
   PASSWORD_MIN_LENGTH,
+  POPULATIONS,
   ROLES,
   SEDATION_LEVELS,
   SIGNOFF_ROLES,
@@ -117,13 +118,24 @@ export const SIGNOFF: BodySpec = {
 };
 
 export const CREATE_DRAFT: BodySpec = { wardId: id, note: note1000 };
-const LIMITS: BodySpec = { hardMin: optionalAmount, softMin: optionalAmount, softMax: optionalAmount, hardMax: optionalAmount };
+const LIMITS: BodySpec = {
+  hardMin: optionalAmount,
+  softMin: optionalAmount,
+  softMax: optionalAmount,
+  hardMax: optionalAmount,
+  ceiling: optionalAmount,
+};
 const limits: FieldSpec = { type: 'object', fields: LIMITS, presence: 'partial' };
 const RULE: BodySpec = {
   drugId: id,
   concentrationPerMl: positive,
   doseUnit: { type: 'enum', values: DOSE_UNITS },
   perKg: { type: 'boolean' },
+  population: { type: 'enum', values: POPULATIONS, presence: 'partial' },
+  minAgeYears: optionalAmount,
+  maxAgeYears: optionalAmount,
+  minWeightKg: optionalAmount,
+  maxWeightKg: optionalAmount,
   limits: {
     type: 'object',
     fields: {
@@ -177,6 +189,7 @@ export const WARD_POLICY: BodySpec = {
   reconciliationToleranceMl: setting({ min: 0, max: 10 }),
   painNotControlledScore: setting({ int: true, min: 0, max: 10 }),
   painNotControlledRatio: setting({ min: 1, max: 20 }),
+  weightMaxAgeDays: setting({ int: true, min: 1, max: 365 }),
   pharmacyEmail: email,
   nurseInChargeEmail: email,
 };

@@ -9,6 +9,8 @@ export type WardPolicy = {
   reconciliationToleranceMl: number;
   painNotControlledScore: number;
   painNotControlledRatio: number;
+  /** A patient's weight older than this many days is a caution on a weight-based or child's order. */
+  weightMaxAgeDays: number;
 };
 
 export const DEFAULT_WARD_POLICY: WardPolicy = {
@@ -24,4 +26,6 @@ export const DEFAULT_WARD_POLICY: WardPolicy = {
   reconciliationToleranceMl: 0.5, // local setting [practice]
   painNotControlledScore: 7, // [practice]
   painNotControlledRatio: 2, // attempts per delivered dose [practice]
+  // Weight-based doses use a current weight: 7 days is a local default [practice], no single published rule.
+  weightMaxAgeDays: 7,
 };

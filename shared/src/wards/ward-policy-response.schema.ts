@@ -16,6 +16,7 @@ export const wardPolicySettingsSchema: z.ZodType<WardPolicySettings> = answer(
     reconciliationToleranceMl: z.number(),
     painNotControlledScore: z.number(),
     painNotControlledRatio: z.number(),
+    weightMaxAgeDays: z.number(),
     pharmacyEmail: z.string(),
     nurseInChargeEmail: z.string(),
   }),

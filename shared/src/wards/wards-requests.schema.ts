@@ -36,6 +36,7 @@ export const updateWardPolicySchema = z.strictObject({
   reconciliationToleranceMl: amount(0, 10, { number: 'A number of mL', low: 'Cannot be negative', high: 'At most 10 mL' }),
   painNotControlledScore: whole(0, 10, { whole: 'A whole pain score', low: 'Pain score is 0 to 10', high: 'Pain score is 0 to 10' }),
   painNotControlledRatio: amount(1, 20, { number: 'A number of attempts per delivered dose', low: 'At least 1', high: 'At most 20' }),
+  weightMaxAgeDays: whole(1, 365, { whole: 'A whole number of days', low: 'At least 1 day', high: 'At most 365 days' }),
   pharmacyEmail: email,
   nurseInChargeEmail: email,
 });

@@ -10,6 +10,7 @@ import { RevokedTokens1764739000000 } from './1764739000000-revoked-tokens.js';
 import { PatientRecord1764750000000 } from './1764750000000-patient-record.js';
 import { EquianalgesicFactors1764780000000 } from './1764780000000-equianalgesic-factors.js';
 import { LibraryIntegrity1764760000000 } from './1764760000000-library-integrity.js';
+import { RulePopulation1764770000000 } from './1764770000000-rule-population.js';
 
 /** In order. Listed explicitly (not globbed) so tests and the built server run the same set. */
 export const MIGRATIONS = [
@@ -25,4 +26,5 @@ export const MIGRATIONS = [
   PatientRecord1764750000000,
   EquianalgesicFactors1764780000000,
   LibraryIntegrity1764760000000,
+  RulePopulation1764770000000,
 ];

@@ -1,4 +1,11 @@
-import { DEFAULT_EQUIANALGESIC_FACTORS, DEFAULT_WARD_POLICY, type LimitRuleResponse, type WardPolicy } from '@lockstep/shared';
+import {
+  DEFAULT_EQUIANALGESIC_FACTORS,
+  DEFAULT_WARD_POLICY,
+  type LimitRuleResponse,
+  populationKey,
+  rulePopulationOf,
+  type WardPolicy,
+} from '@lockstep/shared';
 import { DEMO_DRUGS } from '../seed/demo-data.js';
 import { DEMO_LIBRARIES } from '../seed/demo-library.js';
 import { DEMO_STAFF } from '../seed/demo-staff.js';
@@ -102,6 +109,8 @@ export function writeWards(
         concentrationPerMl: rule.concentrationPerMl,
         doseUnit: rule.doseUnit,
         perKg: rule.perKg ? 1 : 0,
+        ...rulePopulationOf(rule),
+        populationKey: populationKey(rule),
         limits: JSON.stringify(rule.limits),
       });
       rules.set(rule.drug, {
@@ -111,6 +120,7 @@ export function writeWards(
         concentrationPerMl: rule.concentrationPerMl,
         doseUnit: rule.doseUnit,
         perKg: rule.perKg,
+        ...rulePopulationOf(rule),
         limits: rule.limits,
       });
     }

@@ -1,4 +1,4 @@
-import type { DoseUnit, Limits, RegimenField } from '@lockstep/shared';
+import { type DoseUnit, type Limits, populationKey, type RegimenField, type RulePopulation } from '@lockstep/shared';
 
 // Demo dose-limit libraries: INVENTED values for the demo only, shaped after typical adult ranges
 // (morphine 1 mg/mL demand 0.5–2 mg, lockout 5–10 min, 4-hour 30 mg; hydromorphone 0.2 mg/mL
@@ -11,7 +11,13 @@ type DemoRule = {
   doseUnit: DoseUnit;
   perKg: boolean;
   limits: Partial<Record<RegimenField, Limits>>;
-};
+} & Partial<RulePopulation> & { populationKey?: string };
+
+// Wren's rules are for children from 1 to under 18 years weighing 10 kg or more (invented band);
+// each per-kg dose limit has an absolute ceiling, about 50 kg times the per-kg hard maximum and
+// never above the adult rule's hard maximum (invented).
+const CHILDREN: RulePopulation = { population: 'paediatric', minAgeYears: 1, maxAgeYears: 18, minWeightKg: 10, maxWeightKg: null };
+const forChildren = { ...CHILDREN, populationKey: populationKey(CHILDREN) };
 
 const lockout: Limits = { hardMin: 5, softMin: 6, softMax: 15, hardMax: 30 };
 
@@ -69,14 +75,15 @@ const PAEDIATRIC_RULES: DemoRule[] = [
     concentrationPerMl: 1,
     doseUnit: 'mg',
     perKg: true,
+    ...forChildren,
     limits: {
-      loadingDose: { softMax: 0.05, hardMax: 0.1 },
-      demandDose: { hardMin: 0.005, softMin: 0.01, softMax: 0.02, hardMax: 0.03 },
+      loadingDose: { softMax: 0.05, hardMax: 0.1, ceiling: 5 },
+      demandDose: { hardMin: 0.005, softMin: 0.01, softMax: 0.02, hardMax: 0.03, ceiling: 1.5 },
       lockoutMinutes: { hardMin: 5, softMin: 5, softMax: 10, hardMax: 20 },
-      basalRatePerHour: { softMax: 0.004, hardMax: 0.01 },
-      oneHourLimit: { softMax: 0.1, hardMax: 0.12 },
-      fourHourLimit: { softMax: 0.3, hardMax: 0.4 },
-      clinicianBolusDose: { softMax: 0.02, hardMax: 0.05 },
+      basalRatePerHour: { softMax: 0.004, hardMax: 0.01, ceiling: 0.5 },
+      oneHourLimit: { softMax: 0.1, hardMax: 0.12, ceiling: 6 },
+      fourHourLimit: { softMax: 0.3, hardMax: 0.4, ceiling: 20 },
+      clinicianBolusDose: { softMax: 0.02, hardMax: 0.05, ceiling: 2.5 },
     },
   },
   {
@@ -84,11 +91,12 @@ const PAEDIATRIC_RULES: DemoRule[] = [
     concentrationPerMl: 10,
     doseUnit: 'mcg',
     perKg: true,
+    ...forChildren,
     limits: {
-      demandDose: { hardMin: 0.1, softMin: 0.25, softMax: 0.5, hardMax: 1 },
+      demandDose: { hardMin: 0.1, softMin: 0.25, softMax: 0.5, hardMax: 1, ceiling: 25 },
       lockoutMinutes: { hardMin: 5, softMin: 5, softMax: 10, hardMax: 20 },
-      basalRatePerHour: { softMax: 0.15, hardMax: 0.5 },
-      fourHourLimit: { softMax: 4, hardMax: 6 },
+      basalRatePerHour: { softMax: 0.15, hardMax: 0.5, ceiling: 25 },
+      fourHourLimit: { softMax: 4, hardMax: 6, ceiling: 300 },
     },
   },
 ];

@@ -17,6 +17,11 @@ export function toLimitRuleResponse(rule: LimitRule): LimitRuleResponse {
     concentrationPerMl: rule.concentrationPerMl,
     doseUnit: rule.doseUnit,
     perKg: rule.perKg,
+    population: rule.population,
+    minAgeYears: rule.minAgeYears,
+    maxAgeYears: rule.maxAgeYears,
+    minWeightKg: rule.minWeightKg,
+    maxWeightKg: rule.maxWeightKg,
     limits: rule.limits,
   };
 }

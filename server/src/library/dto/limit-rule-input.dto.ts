@@ -12,7 +12,15 @@ import {
   ValidateIf,
   ValidateNested,
 } from 'class-validator';
-import { DOSE_UNITS, type DoseUnit, type LimitRuleInput, type LimitsInput, type RuleLimitsInput } from '@lockstep/shared';
+import {
+  DOSE_UNITS,
+  type DoseUnit,
+  type LimitRuleInput,
+  type LimitsInput,
+  POPULATIONS,
+  type Population,
+  type RuleLimitsInput,
+} from '@lockstep/shared';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 
 const finiteNumber = { allowNaN: false, allowInfinity: false };
@@ -41,7 +49,20 @@ export class LimitsDto implements LimitsInput {
   @IsNumber(finiteNumber, { message: 'hardMax must be a number' })
   @IsOptional()
   hardMax?: number | null;
+
+  @ApiPropertyOptional({
+    type: 'number',
+    nullable: true,
+    minimum: 0,
+    description: 'Per-kg rules: the most this field may ever be, in the dose unit (not per kg), whatever the weight',
+  })
+  @Min(0, { message: 'ceiling must be 0 or more' })
+  @IsNumber(finiteNumber, { message: 'ceiling must be a number' })
+  @IsOptional()
+  ceiling?: number | null;
 }
+
+const band = (description: string) => ApiPropertyOptional({ type: 'number', nullable: true, minimum: 0, description });
 
 const limits = ApiPropertyOptional({ type: () => LimitsDto });
 // A field's limits may be left out (not checked); a null is refused, not stored as a field without limits.
@@ -79,6 +100,35 @@ export class LimitRuleInputDto implements LimitRuleInput {
   @IsBoolean({ message: 'perKg must be true or false' })
   @IsDefined({ message: 'perKg is required' })
   perKg: boolean;
+
+  @ApiPropertyOptional({ enum: POPULATIONS, example: 'adult', description: 'Who the rule is for; left out, adult' })
+  @IsIn(POPULATIONS, { message: 'population must be adult or paediatric' })
+  @unlessAbsent
+  population?: Population;
+
+  @band('Paediatric rules: the youngest age the rule is for, in years (inclusive); blank for no bound')
+  @Min(0, { message: 'minAgeYears must be 0 or more' })
+  @IsNumber(finiteNumber, { message: 'minAgeYears must be a number' })
+  @IsOptional()
+  minAgeYears?: number | null;
+
+  @band('Paediatric rules: the rule is for ages under this, in years; blank for no bound')
+  @Min(0, { message: 'maxAgeYears must be 0 or more' })
+  @IsNumber(finiteNumber, { message: 'maxAgeYears must be a number' })
+  @IsOptional()
+  maxAgeYears?: number | null;
+
+  @band('Paediatric rules: the lightest weight the rule is for, in kg (inclusive); blank for no bound')
+  @Min(0, { message: 'minWeightKg must be 0 or more' })
+  @IsNumber(finiteNumber, { message: 'minWeightKg must be a number' })
+  @IsOptional()
+  minWeightKg?: number | null;
+
+  @band('Paediatric rules: the rule is for weights under this, in kg; blank for no bound')
+  @Min(0, { message: 'maxWeightKg must be 0 or more' })
+  @IsNumber(finiteNumber, { message: 'maxWeightKg must be a number' })
+  @IsOptional()
+  maxWeightKg?: number | null;
 
   @ApiProperty({ type: () => RuleLimitsDto, description: 'Limits per order field; a field left out is not checked' })
   @ValidateNested()

@@ -115,6 +115,19 @@ export class UpdateWardPolicyDto implements UpdateWardPolicyRequest {
   painNotControlledRatio?: number;
 
   @ApiPropertyOptional({
+    type: 'integer',
+    minimum: 1,
+    maximum: 365,
+    example: 7,
+    description: "A patient's weight measured more than this many days ago is a caution on a weight-based or child's order",
+  })
+  @Max(365, { message: 'At most 365 days' })
+  @Min(1, { message: 'At least 1 day' })
+  @IsInt({ message: 'A whole number of days' })
+  @unlessAbsent
+  weightMaxAgeDays?: number;
+
+  @ApiPropertyOptional({
     format: 'email',
     example: 'pharmacy@hospital.example',
     description: 'Where Lockstep e-mails the ward’s pharmacy; empty for none',

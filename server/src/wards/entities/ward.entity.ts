@@ -52,6 +52,10 @@ export class Ward {
   @Column({ type: 'real', default: 2 })
   painNotControlledRatio: number;
 
+  /** A weight older than this many days is a caution on a weight-based or child's order (shared DEFAULT_WARD_POLICY). */
+  @Column({ type: 'integer', default: 7 })
+  weightMaxAgeDays: number;
+
   /** Ward-local clock times ("07:00") at which the day and night shifts start. */
   @Column({ type: 'varchar', length: 5, default: '07:00' })
   dayShiftStart: string;

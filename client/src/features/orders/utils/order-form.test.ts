@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { patientFactorsOf, type LimitRuleResponse, type OrderDetail, type Patient } from '@lockstep/shared';
+import { patientFactorsOf, rulePopulationOf, type LimitRuleResponse, type OrderDetail, type Patient } from '@lockstep/shared';
 import { emptyOrderForm, localFindings, nextDay, readAmount, readOrderForm, valuesFromOrder, type OrderFormValues } from './order-form';
 
 // The demo Harbour morphine 1 mg/mL rule (invented demo values).
@@ -10,6 +10,7 @@ const morphine: LimitRuleResponse = {
   concentrationPerMl: 1,
   doseUnit: 'mg',
   perKg: false,
+  ...rulePopulationOf({}),
   limits: {
     demandDose: { hardMin: 0.2, softMin: 0.5, softMax: 2, hardMax: 3 },
     lockoutMinutes: { hardMin: 5, softMin: 6, softMax: 15, hardMax: 30 },

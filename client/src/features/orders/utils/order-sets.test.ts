@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { LimitRuleResponse } from '@lockstep/shared';
+import { rulePopulationOf, type LimitRuleResponse } from '@lockstep/shared';
 import { availableOrderSets, ORDER_SETS, prefillFromSet } from './order-sets';
 
 const rule = (id: number, drugName: string, concentrationPerMl: number, doseUnit: 'mg' | 'mcg', perKg = false): LimitRuleResponse => ({
@@ -9,6 +9,7 @@ const rule = (id: number, drugName: string, concentrationPerMl: number, doseUnit
   concentrationPerMl,
   doseUnit,
   perKg,
+  ...rulePopulationOf({}),
   limits: {},
 });
 

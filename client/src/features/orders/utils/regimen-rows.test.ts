@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { OrderDetail } from '@lockstep/shared';
+import { rulePopulationOf, type OrderDetail } from '@lockstep/shared';
 import { regimenRows } from './regimen-rows';
 
 // A returned version (demand 2.5 mg, outside the soft maximum) and its revision (demand 1 mg),
@@ -11,6 +11,7 @@ const rule = {
   concentrationPerMl: 1,
   doseUnit: 'mg' as const,
   perKg: false,
+  ...rulePopulationOf({}),
   limits: { demandDose: { hardMin: 0.2, softMin: 0.5, softMax: 2, hardMax: 3 }, fourHourLimit: { softMax: 30, hardMax: 40 } },
 };
 const base = {

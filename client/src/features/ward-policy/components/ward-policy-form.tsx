@@ -21,6 +21,7 @@ const GROUP_TITLES: Record<PolicyGroup, string> = {
   intervals: 'Observation intervals',
   escalation: 'Escalation thresholds',
   syringe: 'Syringe and reconciliation',
+  weight: 'Weight for dosing',
 };
 
 export interface WardPolicyFormProps {

@@ -33,6 +33,7 @@ describe('policy fields', () => {
       '2 attempts per dose',
       '2 h',
       '0.5 mL',
+      '7 days', // weight age: a local default, common practice
     ]);
     expect(formatPolicyValue(field('syringeLowThresholdHours'), 1.5)).toBe('1.5 h');
   });
@@ -51,6 +52,8 @@ describe('range checks, in the server’s words', () => {
     expect(policyNumberError(field('reconciliationToleranceMl'), -1)).toBe('Cannot be negative');
     expect(policyNumberError(field('painNotControlledRatio'), 1.5)).toBeNull();
     expect(policyNumberError(field('painNotControlledScore'), '')).toBe('Enter a value');
+    expect(policyNumberError(field('weightMaxAgeDays'), 0)).toBe('At least 1 day');
+    expect(policyNumberError(field('weightMaxAgeDays'), 1.5)).toBe('A whole number of days');
   });
 
   it('takes an e-mail address or nothing', () => {

@@ -6,7 +6,7 @@ export type PolicyEmailKey = 'pharmacyEmail' | 'nurseInChargeEmail';
 
 export type PolicyFormValues = Record<PolicyNumberKey, NumberFieldValue> & Record<PolicyEmailKey, string>;
 
-export type PolicyGroup = 'intervals' | 'escalation' | 'syringe';
+export type PolicyGroup = 'intervals' | 'escalation' | 'syringe' | 'weight';
 
 export interface PolicyNumberField {
   key: PolicyNumberKey;
@@ -129,6 +129,19 @@ export const POLICY_NUMBER_FIELDS: readonly PolicyNumberField[] = [
     below: 'Cannot be negative',
     above: 'At most 10 mL',
     notWhole: '',
+  },
+  {
+    key: 'weightMaxAgeDays',
+    group: 'weight',
+    label: 'Weight out of date after',
+    unit: 'days',
+    help: "An older weight is a caution on a child's or weight-based order: weigh the patient again",
+    min: 1,
+    max: 365,
+    integer: true,
+    below: 'At least 1 day',
+    above: 'At most 365 days',
+    notWhole: 'A whole number of days',
   },
 ];
 
