@@ -3,6 +3,8 @@ import { formatDose } from './format-dose.js';
 import { isUsableNumber } from './order-number-findings.js';
 import type { Finding, Regimen } from './types.js';
 
+// A lockout under a minute is no lockout at all: Lockstep's own floor (docs/design.md, "Order fields
+// and dosing conventions"), not a clinical limit; the ward's rule sets the real minimum.
 const MIN_LOCKOUT_MINUTES = 1;
 
 /**

@@ -1,4 +1,5 @@
 import { AGE_65_OR_OVER_CAUTION, BASAL_OPIOID_NAIVE_CAUTION, OTHER_SEDATIVES_CAUTION, SLEEP_APNOEA_CAUTION } from './cautions.js';
+import { ADULT_AGE_YEARS } from '../patients/adult-age.js';
 import { isUsableNumber } from './order-number-findings.js';
 import type { Finding, PatientFactors, Regimen } from './types.js';
 
@@ -9,12 +10,6 @@ import type { Finding, PatientFactors, Regimen } from './types.js';
  */
 export const OLDER_PATIENT_AGE_YEARS = 65;
 
-/**
- * Adults from 18: the age Chou et al. (J Pain 2016) write their basal-rate recommendation for
- * ("adults"); 18 as the boundary is common practice.
- */
-const ADULT_AGE_YEARS = 18;
-
 function finding(field: string, severity: Finding['severity'], code: string, message: string): Finding {
   return { field, severity, code, message };
 }
@@ -24,7 +19,8 @@ function finding(field: string, severity: Finding['severity'], code: string, mes
  * - a basal rate for an opioid-naive adult (or a patient of unknown age) needs a reason, `soft` on
  *   the basal rate (Chou R et al., Management of Postoperative Pain, APS/ASRA/ASA guideline, J Pain
  *   2016;17(2):131-157: no routine basal infusion in opioid-naive adults, strong recommendation);
- *   for an opioid-naive child it is a caution (that guideline is written for adults);
+ *   for an opioid-naive child (under `ADULT_AGE_YEARS`, common practice) it is a caution, as that
+ *   guideline is written for adults;
  * - sleep apnoea, age 65 or over and other sedatives are cautions on the field 'patient' (The
  *   Joint Commission, Sentinel Event Alert 49, 2012);
  * - several of them together need a reason: opioid-naive with sleep apnoea and other sedatives
