@@ -3,7 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { AuditAction, AuditPage } from '@lockstep/shared';
 import { type AnswerCheck, answerChecker } from './support/answer-checker.js';
 import { appRoutes, routeKey } from './support/app-routes.js';
-import { IDENTITY, ORDER, RELEASE, ROSA, SETTINGS } from './support/pca.js';
+import { ORDER, RELEASE, ROSA, SETTINGS } from './support/pca.js';
 import { createTestApp, DEMO_PASSWORD, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
 
 /** Writes that change nothing: signing in, and the order check a prescriber runs while typing. */
@@ -80,8 +80,10 @@ describe('every state-changing route writes its audit event', () => {
       'ward.policy-update',
     );
 
-    // One order from signature to a second syringe.
-    const order = await step('post', '/api/orders', '/api/orders', 'prescriber', ORDER, 201, 'order.create');
+    // One order from signature to a second syringe. A patient may have only one open PCA and the
+    // demo's patients 1, 3 and 4 have one, so each order in this walk is for a new patient.
+    const patient = await t.addPatient();
+    const order = await step('post', '/api/orders', '/api/orders', 'prescriber', { ...ORDER, patientId: patient.id }, 201, 'order.create');
     const base = `/api/orders/${order.id}`;
     await step(
       'post',
@@ -98,7 +100,7 @@ describe('every state-changing route writes its audit event', () => {
       '/api/orders/:id/bedside-checks',
       `${base}/bedside-checks`,
       'nurse',
-      { ...IDENTITY, releaseCode: first.releaseCode, settings: SETTINGS },
+      { ...patient.identity, releaseCode: first.releaseCode, settings: SETTINGS },
       201,
       'order.bedside-first-check',
     );
@@ -148,7 +150,7 @@ describe('every state-changing route writes its audit event', () => {
       'order.bolus',
     );
     const { body: wardPatient } = await request(t.http)
-      .get(`/api/patients/${ORDER.patientId}`)
+      .get(`/api/patients/${patient.id}`)
       .set('Authorization', `Bearer ${tokens.nurse}`)
       .expect(200);
     await step(
@@ -176,7 +178,7 @@ describe('every state-changing route writes its audit event', () => {
       '/api/orders/:id/bedside-checks',
       `${base}/bedside-checks`,
       'nurse',
-      { ...IDENTITY, releaseCode: second.releaseCode, settings: SETTINGS },
+      { ...patient.identity, releaseCode: second.releaseCode, settings: SETTINGS },
       201,
       'order.bedside-first-check',
     );
@@ -199,7 +201,16 @@ describe('every state-changing route writes its audit event', () => {
       'order.discontinue',
     );
 
-    const queried = await step('post', '/api/orders', '/api/orders', 'prescriber', { ...ORDER, patientId: 3 }, 201, 'order.create');
+    const queriedFor = (await t.addPatient()).id;
+    const queried = await step(
+      'post',
+      '/api/orders',
+      '/api/orders',
+      'prescriber',
+      { ...ORDER, patientId: queriedFor },
+      201,
+      'order.create',
+    );
     await step(
       'post',
       '/api/orders/:id/return',
@@ -214,11 +225,19 @@ describe('every state-changing route writes its audit event', () => {
       '/api/orders/:id/revise',
       `/api/orders/${queried.id}/revise`,
       'prescriber',
-      { ...ORDER, patientId: 3, fourHourLimit: 25 },
+      { ...ORDER, patientId: queriedFor, fourHourLimit: 25 },
       201,
       'order.revise',
     );
-    const refused = await step('post', '/api/orders', '/api/orders', 'prescriber', { ...ORDER, patientId: 4 }, 201, 'order.create');
+    const refused = await step(
+      'post',
+      '/api/orders',
+      '/api/orders',
+      'prescriber',
+      { ...ORDER, patientId: (await t.addPatient()).id },
+      201,
+      'order.create',
+    );
     await step(
       'post',
       '/api/orders/:id/reject',
@@ -228,7 +247,15 @@ describe('every state-changing route writes its audit event', () => {
       200,
       'order.reject',
     );
-    const unwanted = await step('post', '/api/orders', '/api/orders', 'prescriber', { ...ORDER, patientId: 5 }, 201, 'order.create');
+    const unwanted = await step(
+      'post',
+      '/api/orders',
+      '/api/orders',
+      'prescriber',
+      { ...ORDER, patientId: (await t.addPatient()).id },
+      201,
+      'order.create',
+    );
     await step(
       'post',
       '/api/orders/:id/cancel',
