@@ -12,16 +12,18 @@ import {
 } from './audit-filters';
 
 describe('entity types and actions per role', () => {
-  it('offers pharmacists orders and library versions only', () => {
-    expect(entityTypesFor('admin')).toEqual(['order', 'library-version', 'user', 'ward', 'sign-in']);
-    expect(entityTypesFor('pharmacist')).toEqual(['order', 'library-version']);
+  it('offers pharmacists orders, library versions, equianalgesic factors and patients only', () => {
+    expect(entityTypesFor('admin')).toEqual(['order', 'library-version', 'user', 'ward', 'sign-in', 'equianalgesic-factor', 'patient']);
+    expect(entityTypesFor('pharmacist')).toEqual(['order', 'library-version', 'equianalgesic-factor', 'patient']);
   });
 
   it('groups actions by what they are about, narrowed to the chosen type', () => {
     const pharmacy = actionOptions(entityTypesFor('pharmacist'), null);
-    expect(pharmacy.map((group) => group.group)).toEqual(['Order', 'Library version']);
+    expect(pharmacy.map((group) => group.group)).toEqual(['Order', 'Library version', 'Equianalgesic factor', 'Patient']);
     expect(
-      pharmacy.flatMap((group) => group.items.map((item) => item.value)).every((value) => /^(order|library-version)\./.test(value)),
+      pharmacy
+        .flatMap((group) => group.items.map((item) => item.value))
+        .every((value) => /^(order|library-version|equianalgesic-factor|patient)\./.test(value)),
     ).toBe(true);
 
     const ward = actionOptions(entityTypesFor('admin'), 'ward');
