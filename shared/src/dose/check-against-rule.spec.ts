@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { checkAgainstRule } from './check-against-rule.js';
 
-// Typical ranges [read, a widely used clinical reference table]: morphine demand 0.5–2 mg.
+// Typical ranges, common practice (docs/clinical-sources.md, "Typical ranges"; no single published table): morphine demand 0.5–2 mg.
 // Used here as the soft limits; the hard limits 0.2 and 4 mg are illustrative, not published.
 const morphineDemand = { hardMin: 0.2, softMin: 0.5, softMax: 2, hardMax: 4 };
 

@@ -15,7 +15,7 @@ describe('doseToVolumeMl', () => {
     expect(doseToVolumeMl(0.3, 0.1)).toBe(3); // raw division gives 2.9999999999999996
     expect(doseToVolumeMl(2.5, 1)).toBe(2.5);
     expect(doseToVolumeMl(0, 1)).toBe(0);
-    // Typical ranges [read, a widely used clinical reference table]: a 4-hour limit of 30 mg
+    // Typical ranges, common practice (docs/clinical-sources.md, "Typical ranges"; no single published table): a 4-hour limit of 30 mg
     // morphine at 1 mg/mL is 30 mL, within the usual 20 to 60 mL syringe [practice].
     expect(doseToVolumeMl(30, 1)).toBe(30);
   });

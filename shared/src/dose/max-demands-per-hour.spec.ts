@@ -8,7 +8,7 @@ describe('maxDemandsPerHour', () => {
   });
 
   it('covers the lockouts of the typical ranges', () => {
-    // Typical ranges [read, a widely used clinical reference table]: lockout 5–10 min
+    // Typical ranges, common practice (docs/clinical-sources.md, "Typical ranges"; no single published table): lockout 5–10 min
     // (morphine), 4–10 min (fentanyl). ceil(60 ÷ lockout) is the definition.
     expect(maxDemandsPerHour(5)).toBe(12);
     expect(maxDemandsPerHour(4)).toBe(15);

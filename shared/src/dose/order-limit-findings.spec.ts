@@ -4,7 +4,7 @@ import type { LimitRule, Regimen } from './types.js';
 
 const matched = { weightKg: null, doseUnitMatches: true };
 
-// Typical ranges [read, a widely used clinical reference table]: morphine 1 mg/mL, demand
+// Typical ranges, common practice (docs/clinical-sources.md, "Typical ranges"; no single published table): morphine 1 mg/mL, demand
 // 0.5–2 mg, lockout 5–10 min, 4-hour limit 30 mg. Used as soft limits; the hard limits are
 // illustrative, not published.
 const morphineRule: LimitRule = {
