@@ -3,6 +3,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CreateOrderRequest } from '@lockstep/shared';
 import { waitForMail } from './support/mailbox.js';
 import { REGIMEN, RELEASE, SIGNING } from './support/pca.js';
+import { activeOrder } from './support/pca-steps.js';
 import { createTestApp, DEMO_PASSWORD, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
 
 type Role = keyof typeof DEMO_USER_BY_ROLE;
@@ -29,6 +30,11 @@ describe('orders, verification and syringe release', () => {
   const act = (id: number, action: string, body: object, role: Role = 'pharmacist') =>
     request(t.http).post(`/api/orders/${id}/${action}`).set(as(role)).send(body);
   const orderCount = async () => (await request(t.http).get('/api/orders').set(as('pharmacist'))).body.length as number;
+  /** The body for a new patient with nothing open: a patient may have only one open PCA, and the demo's patient 1 has one. */
+  const forNewPatient = async <T extends object>(body: T): Promise<T & { patientId: number }> => ({
+    ...body,
+    patientId: (await t.addPatient()).id,
+  });
 
   beforeAll(async () => {
     t = await createTestApp();
@@ -39,7 +45,7 @@ describe('orders, verification and syringe release', () => {
 
   describe('signing', () => {
     it('signs an order with one soft override, keeps the findings and reason, and tells pharmacy', async () => {
-      const response = await sign(SOFT).expect(201);
+      const response = await sign(await forNewPatient(SOFT)).expect(201);
       expect(response.body).toMatchObject({
         status: 'awaiting_verification',
         version: 1,
@@ -61,17 +67,19 @@ describe('orders, verification and syringe release', () => {
 
     it('refuses a soft finding without a reason: 400 naming the field, nothing written', async () => {
       const before = await orderCount();
-      const response = await sign({ ...SOFT, overrides: [] }).expect(400);
+      const response = await sign(await forNewPatient({ ...SOFT, overrides: [] })).expect(400);
       expect(response.body.errors).toEqual([{ field: 'demandDose', message: expect.stringContaining('Reason needed') }]);
       expect(await orderCount()).toBe(before);
     });
 
     it('refuses a hard finding (a missed decimal point) even with a reason', async () => {
-      const response = await sign({
-        ...ORDER,
-        demandDose: 10,
-        overrides: [{ field: 'demandDose', reason: 'I really mean ten milligrams' }],
-      }).expect(400);
+      const response = await sign(
+        await forNewPatient({
+          ...ORDER,
+          demandDose: 10,
+          overrides: [{ field: 'demandDose', reason: 'I really mean ten milligrams' }],
+        }),
+      ).expect(400);
       expect(response.body.errors[0]).toMatchObject({ field: 'demandDose' });
     });
 
@@ -115,7 +123,7 @@ describe('orders, verification and syringe release', () => {
 
     it('refuses a wrong signature password with 401 and writes nothing', async () => {
       const before = await orderCount();
-      await sign({ ...ORDER, signature: { password: 'wrong-password' } }).expect(401);
+      await sign(await forNewPatient({ ...ORDER, signature: { password: 'wrong-password' } })).expect(401);
       expect(await orderCount()).toBe(before);
     });
 
@@ -143,7 +151,7 @@ describe('orders, verification and syringe release', () => {
 
   describe('verification', () => {
     it('verifies once: prescriber and nurse 403, wrong password 401, twice 409 with the current status', async () => {
-      const { body: order } = await sign(ORDER).expect(201);
+      const { body: order } = await sign(await forNewPatient(ORDER)).expect(201);
       await act(order.id, 'verify', { signature: { password: DEMO_PASSWORD } }, 'prescriber').expect(403);
       await act(order.id, 'verify', { signature: { password: DEMO_PASSWORD } }, 'nurse').expect(403);
       await act(order.id, 'verify', { signature: { password: 'nope' } }).expect(401);
@@ -158,7 +166,7 @@ describe('orders, verification and syringe release', () => {
     });
 
     it('returns with a query → the prescriber is e-mailed → revises as version 2 → the old one is superseded', async () => {
-      const { body: order } = await sign(ORDER).expect(201);
+      const { body: order } = await sign(await forNewPatient(ORDER)).expect(201);
       await act(order.id, 'return', { reason: 'short' }).expect(400);
       const returned = await act(order.id, 'return', { reason: 'Please confirm the 4-hour limit with the pain team' }).expect(200);
       expect(returned.body).toMatchObject({ status: 'returned', statusReason: 'Please confirm the 4-hour limit with the pain team' });
@@ -168,29 +176,34 @@ describe('orders, verification and syringe release', () => {
       await request(t.http)
         .post(`/api/orders/${order.id}/revise`)
         .set(as('prescriber'))
-        .send({ ...ORDER, patientId: 2 })
+        .send(await forNewPatient(ORDER))
         .expect(400);
       const revised = await request(t.http)
         .post(`/api/orders/${order.id}/revise`)
         .set(as('prescriber'))
-        .send({ ...ORDER, fourHourLimit: 25 })
+        .send({ ...ORDER, patientId: order.patientId, fourHourLimit: 25 })
         .expect(201);
       expect(revised.body).toMatchObject({ version: 2, supersedesId: order.id, status: 'awaiting_verification', fourHourLimit: 25 });
       const old = await request(t.http).get(`/api/orders/${order.id}`).set(as('pharmacist')).expect(200);
       expect(old.body.status).toBe('superseded');
       expect(old.body.events.map((e: { toStatus: string }) => e.toStatus)).toEqual(['awaiting_verification', 'returned', 'superseded']);
-      await request(t.http).post(`/api/orders/${order.id}/revise`).set(as('prescriber')).send(ORDER).expect(409);
+      // Revising it again: 409 (the patient's open PCA is now the revision).
+      await request(t.http)
+        .post(`/api/orders/${order.id}/revise`)
+        .set(as('prescriber'))
+        .send({ ...ORDER, patientId: order.patientId })
+        .expect(409);
     });
 
     it('rejects with a reason, and an ended order cannot be cancelled (409)', async () => {
-      const { body: order } = await sign(ORDER).expect(201);
+      const { body: order } = await sign(await forNewPatient(ORDER)).expect(201);
       await act(order.id, 'reject', { reason: 'Patient has an epidural running instead' }).expect(200);
       await waitForMail(t.http, tokens.admin, (m) => m.subject === `PCA order ${order.id} rejected`);
       await act(order.id, 'cancel', { reason: 'No longer needed for this patient' }, 'prescriber').expect(409);
     });
 
     it('lets the prescriber cancel before the PCA starts, with a reason', async () => {
-      const { body: order } = await sign(ORDER).expect(201);
+      const { body: order } = await sign(await forNewPatient(ORDER)).expect(201);
       await act(order.id, 'cancel', { reason: 'Changed to oral analgesia' }, 'pharmacist').expect(403);
       const cancelled = await act(order.id, 'cancel', { reason: 'Changed to oral analgesia' }, 'prescriber').expect(200);
       expect(cancelled.body.status).toBe('cancelled');
@@ -208,9 +221,80 @@ describe('orders, verification and syringe release', () => {
     });
   });
 
+  describe('one open PCA per patient', () => {
+    const pcaTokens = () => ({ prescriber: tokens.prescriber, pharmacist: tokens.pharmacist, nurse: tokens.nurse });
+    const auditCount = async () =>
+      (await request(t.http).get('/api/audit?limit=1').set(as('admin')).expect(200)).body.events[0].id as number;
+
+    /** Signs `body` and expects the 409 naming the open order, with nothing written. */
+    async function expectRefused(body: object, openOrderId: number, status: string, whatToDo: string): Promise<void> {
+      const [orders, audit] = [await orderCount(), await auditCount()];
+      const refused = await sign(body).expect(409);
+      expect(refused.body).toEqual({
+        statusCode: 409,
+        message: `This patient already has an open PCA (order ${openOrderId}, morphine 1 mg/mL, ${status}): ${whatToDo}`,
+        openOrderId,
+      });
+      expect(await orderCount()).toBe(orders);
+      expect(await auditCount()).toBe(audit);
+    }
+
+    it('refuses a second PCA while one awaits verification: 409 naming it and what to do, nothing written', async () => {
+      // The demo's order 1 for patient 1 awaits verification.
+      await expectRefused(ORDER, 1, 'awaiting verification', 'cancel it, or revise it once pharmacy returns it, before ordering another');
+    });
+
+    it('refuses a second PCA while one is verified, and while one runs', async () => {
+      const verified = await sign(await forNewPatient(ORDER)).expect(201);
+      await act(verified.body.id, 'verify', { signature: { password: DEMO_PASSWORD } }).expect(200);
+      const second = { ...ORDER, patientId: verified.body.patientId, drugId: 2, demandDose: 0.2, fourHourLimit: 4 };
+      await expectRefused(second, verified.body.id, 'verified', 'cancel it before ordering another');
+
+      const running = await activeOrder(t.http, pcaTokens(), await t.addPatient());
+      await expectRefused(
+        { ...ORDER, patientId: running.patient.id },
+        running.id,
+        'active',
+        'discontinue it at the bedside before ordering another',
+      );
+    });
+
+    it('signs a new PCA once the open one is cancelled', async () => {
+      const first = await sign(await forNewPatient(ORDER)).expect(201);
+      await sign({ ...ORDER, patientId: first.body.patientId }).expect(409);
+      await act(first.body.id, 'cancel', { reason: 'Changed to a different regimen' }, 'prescriber').expect(200);
+      const next = await sign({ ...ORDER, patientId: first.body.patientId, demandDose: 1.5 }).expect(201);
+      expect(next.body).toMatchObject({ status: 'awaiting_verification', version: 1, supersedesId: null });
+    });
+
+    it('does not refuse the revision of a returned order, which replaces it', async () => {
+      const { body: order } = await sign(await forNewPatient(ORDER)).expect(201);
+      await act(order.id, 'return', { reason: 'Please confirm the 4-hour limit with the pain team' }).expect(200);
+      const revised = await request(t.http)
+        .post(`/api/orders/${order.id}/revise`)
+        .set(as('prescriber'))
+        .send({ ...ORDER, patientId: order.patientId, fourHourLimit: 25 })
+        .expect(201);
+      expect(revised.body).toMatchObject({ supersedesId: order.id, status: 'awaiting_verification' });
+    });
+
+    it('shows the refusal in the live check as a hard finding on the patient, and not for a patient with nothing open', async () => {
+      const preview = (body: object) => request(t.http).post('/api/orders/preview').set(as('prescriber')).send(body).expect(200);
+      const { body } = await preview(REGIMEN);
+      expect(body.findings[0]).toEqual({
+        field: 'patientId',
+        severity: 'hard',
+        code: 'duplicate.open-pca',
+        message: expect.stringMatching(/^This patient already has an open PCA \(order 1, morphine 1 mg\/mL, awaiting verification\)/),
+      });
+      const { body: free } = await preview(await forNewPatient(REGIMEN));
+      expect(free.findings.map((finding: { code: string }) => finding.code)).not.toContain('duplicate.open-pca');
+    });
+  });
+
   describe('syringe release', () => {
     it('releases a syringe with a readable code for a verified order and tells the nurse in charge', async () => {
-      const { body: order } = await sign(ORDER).expect(201);
+      const { body: order } = await sign(await forNewPatient(ORDER)).expect(201);
       await request(t.http).post(`/api/orders/${order.id}/releases`).set(as('pharmacist')).send(RELEASE).expect(409);
       await act(order.id, 'verify', { signature: { password: DEMO_PASSWORD } }).expect(200);
       await request(t.http).post(`/api/orders/${order.id}/releases`).set(as('nurse')).send(RELEASE).expect(403);
