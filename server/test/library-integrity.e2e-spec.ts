@@ -230,13 +230,14 @@ describe('library integrity', () => {
         drugId: 1,
         concentrationPerMl: 0.0000001,
         doseUnit: 'mg',
-        perKg: true,
+        perKg: false,
         limits: { demandDose: { hardMin: 0.0000001, softMax: 0.30000000000000004, hardMax: 10000 }, lockoutMinutes: { hardMax: 1440 } },
       },
     ];
     const saved = await request(t.http).put(`/api/library/versions/${id}/rules`).set(as(lin)).send({ rules }).expect(200);
     const exported = await request(t.http).get(`/api/library/versions/${id}/export`).set(as(lin)).expect(200);
-    expect(exported.text).toContain('morphine,0.0000001,mg,yes,demand_dose,0.0000001,,0.30000000000000004,10000');
+    expect(exported.text).toContain('morphine,0.0000001,mg,no,');
+    expect(exported.text).toContain('0.0000001,,0.30000000000000004,10000');
     expect(exported.text).not.toMatch(/\de[-+]?\d/i);
     const preview = await request(t.http)
       .post('/api/library/import')

@@ -3,17 +3,18 @@ import { InjectDataSource } from '@nestjs/typeorm';
 import { type DataSource, In } from 'typeorm';
 import {
   checkOrder,
+  chooseRule,
   type Finding,
-  formatDose,
   type LibraryAffectedOrders,
+  type OtherLibrary,
   patientDisplayName,
   patientFactorsOf,
   type Regimen,
-  ruleKey,
-  tallMan,
+  ruleChoiceFindings,
 } from '@lockstep/shared';
 import { PcaOrder } from '../orders/entities/pca-order.entity.js';
-import type { LimitRule } from './entities/limit-rule.entity.js';
+import type { LibraryVersion } from './entities/library-version.entity.js';
+import { LimitRule } from './entities/limit-rule.entity.js';
 import { LibraryService } from './library.service.js';
 
 /** Orders a version's limits apply to the moment it is approved: verified (syringe may be released) or running. */
@@ -22,7 +23,9 @@ const OPEN_STATUSES = ['verified', 'active'] as const;
 /**
  * Which running orders a library version would put outside its limits: each open order on the
  * version's ward checked with the shared `checkOrder` (the same check as signing) against the
- * version's rule for its drug and concentration. Only hard and soft findings are listed.
+ * rule the version would give it, chosen by the patient as at signing (shared `chooseRule`: the
+ * version's rules first, then the other wards' active libraries; no rule is a hard finding).
+ * Only hard and soft findings are listed.
  */
 @Injectable()
 export class AffectedOrdersService {
@@ -39,14 +42,13 @@ export class AffectedOrdersService {
       relations: { patient: { allergies: true }, drug: true },
       order: { id: 'ASC' },
     });
-    const rules = new Map<string, LimitRule>(version.rules.map((rule) => [ruleKey(rule), rule]));
+    const others = orders.length > 0 ? await this.otherLibraries(version) : [];
     const now = new Date();
-    const today = now.toISOString().slice(0, 10);
     const affected: LibraryAffectedOrders['orders'] = [];
     for (const order of orders) {
-      const rule = rules.get(ruleKey(order));
-      const findings = rule ? this.check(order, rule, now, today) : [noRuleFinding(order)];
-      const outside = findings.filter((finding) => finding.severity === 'hard' || finding.severity === 'soft');
+      const outside = this.check(version, others, order, now).filter(
+        (finding) => finding.severity === 'hard' || finding.severity === 'soft',
+      );
       if (outside.length === 0) continue;
       affected.push({
         orderId: order.id,
@@ -63,7 +65,12 @@ export class AffectedOrdersService {
     return { versionId: version.id, wardId: version.wardId, checked: orders.length, orders: affected };
   }
 
-  private check(order: PcaOrder, rule: LimitRule, now: Date, today: string): Finding[] {
+  private check(version: LibraryVersion, others: OtherLibrary<LimitRule>[], order: PcaOrder, now: Date): Finding[] {
+    const factors = patientFactorsOf(order.patient, now);
+    const choice = chooseRule(order, factors, version.rules, others);
+    const choiceFindings = ruleChoiceFindings(choice, order.drug, order, factors);
+    if (choice.kind === 'none') return choiceFindings;
+    const { rule } = choice;
     const regimen: Regimen = {
       doseUnit: order.doseUnit,
       concentrationPerMl: order.concentrationPerMl,
@@ -75,18 +82,29 @@ export class AffectedOrdersService {
       fourHourLimit: order.fourHourLimit,
       clinicianBolusDose: order.clinicianBolusDose,
     };
-    return checkOrder(regimen, { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits }, patientFactorsOf(order.patient, now), {
+    const context = {
       drug: { id: order.drug.id, genericName: order.drug.genericName },
-      today,
-    });
+      today: now.toISOString().slice(0, 10),
+      weightMaxAgeDays: version.ward.weightMaxAgeDays,
+    };
+    const limitRule = { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits };
+    return [...checkOrder(regimen, limitRule, factors, context), ...choiceFindings];
   }
-}
 
-function noRuleFinding(order: PcaOrder): Finding {
-  return {
-    field: 'concentrationPerMl',
-    severity: 'hard',
-    code: 'library.no-rule',
-    message: `This version has no rule for ${tallMan(order.drug.genericName)} ${formatDose(order.concentrationPerMl, `${order.doseUnit}/mL`)}`,
-  };
+  /** The other wards' active libraries, by ward name, for a patient this version has no rule for (as at signing). */
+  private async otherLibraries(version: LibraryVersion): Promise<OtherLibrary<LimitRule>[]> {
+    const rules = await this.dataSource.manager
+      .createQueryBuilder(LimitRule, 'rule')
+      .innerJoinAndSelect('rule.version', 'version', 'version.wardId != :wardId AND version.status = :status', {
+        wardId: version.wardId,
+        status: 'active',
+      })
+      .innerJoinAndSelect('version.ward', 'ward')
+      .orderBy('ward.name', 'ASC')
+      .addOrderBy('rule.id', 'ASC')
+      .getMany();
+    const byWard = new Map<string, LimitRule[]>();
+    for (const rule of rules) byWard.set(rule.version.ward.name, [...(byWard.get(rule.version.ward.name) ?? []), rule]);
+    return [...byWard].map(([wardName, wardRules]) => ({ wardName, rules: wardRules }));
+  }
 }
