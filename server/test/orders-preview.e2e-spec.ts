@@ -9,11 +9,14 @@ const ROLES = Object.keys(DEMO_USER_BY_ROLE) as Role[];
 // Demo ids (seed order): patient 1 is an adult on Harbour, patient 9 a 24.5 kg child on Wren;
 // drug 1 morphine (mg), drug 3 fentanyl (mcg). The limits they meet are the demo library's.
 // ASHP_MORPHINE is support/pca.ts's regimen: ASHP Standardize 4 Safety, PCA standards (2023),
-// morphine 1 mg/mL, demand 1 mg, lockout 10 min.
+// morphine 1 mg/mL, demand 1 mg, lockout 10 min. Patient 1 has the demo's order awaiting
+// verification, which the preview reports as a second PCA (orders.e2e-spec.ts), so the tests of
+// the regimen alone preview it for a copy of patient 1 with nothing open (TestApp.addPatient).
 
 describe('POST /api/orders/preview', () => {
   let t: TestApp;
   const tokens = {} as Record<Role, string>;
+  let regimen: typeof ASHP_MORPHINE;
   const preview = (body: object, role: Role = 'prescriber') =>
     request(t.http)
       .post('/api/orders/preview')
@@ -23,11 +26,12 @@ describe('POST /api/orders/preview', () => {
   beforeAll(async () => {
     t = await createTestApp();
     for (const role of ROLES) tokens[role] = await t.tokenFor(DEMO_USER_BY_ROLE[role]);
+    regimen = { ...ASHP_MORPHINE, patientId: (await t.addPatient()).id };
   });
   afterAll(() => t.close());
 
   it.each(ROLES)('as %s, previews the ASHP starting regimen with no findings', async (role) => {
-    const response = await preview(ASHP_MORPHINE, role).expect(200);
+    const response = await preview(regimen, role).expect(200);
     expect(response.body.findings).toEqual([]);
     expect(response.body.derived).toEqual({
       demandDoseMl: 1,
@@ -45,14 +49,14 @@ describe('POST /api/orders/preview', () => {
 
   it('finds a soft value and asks for a reason (soft), without blocking', async () => {
     // The 1-hour limit holds the 15 mg an hour 2.5 mg every 10 minutes could give to the 10 mg soft maximum.
-    const response = await preview({ ...ASHP_MORPHINE, demandDose: 2.5, oneHourLimit: 10 }).expect(200);
+    const response = await preview({ ...regimen, demandDose: 2.5, oneHourLimit: 10 }).expect(200);
     expect(response.body.findings).toEqual([
       { field: 'demandDose', severity: 'soft', code: 'limit.soft-high', message: expect.stringContaining('2.5 mg') },
     ]);
   });
 
   it('finds a missed decimal point as a hard finding', async () => {
-    const response = await preview({ ...ASHP_MORPHINE, demandDose: 10 }).expect(200);
+    const response = await preview({ ...regimen, demandDose: 10 }).expect(200);
     expect(response.body.findings).toEqual([
       { field: 'demandDose', severity: 'hard', code: 'limit.hard-high', message: expect.stringContaining('10 mg') },
     ]);
@@ -138,7 +142,7 @@ describe('POST /api/orders/preview', () => {
   });
 
   it('gives a hard finding on the concentration when the ward library has no rule for it', async () => {
-    const response = await preview({ ...ASHP_MORPHINE, concentrationPerMl: 2 }).expect(200);
+    const response = await preview({ ...regimen, concentrationPerMl: 2 }).expect(200);
     expect(response.body.rule).toBeNull();
     expect(response.body.findings[0]).toMatchObject({ field: 'concentrationPerMl', severity: 'hard', code: 'library.no-rule' });
   });
