@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { NamedRule } from '@lockstep/shared';
-import { parameterRows, ruleTitle } from './rule-rows';
+import { formatLimit, parameterRows, ruleTitle } from './rule-rows';
 
 // Demo library values (invented, not for clinical use).
 const hydromorphone: NamedRule = {
@@ -61,5 +61,16 @@ describe('parameterRows', () => {
       limits: { fourHourLimit: { softMax: 1200.5, hardMax: 1500 } },
     };
     expect(parameterRows(big)[0].limits).toMatchObject({ softMax: '1,200.5 mcg', hardMax: '1,500 mcg' });
+  });
+});
+
+describe('formatLimit', () => {
+  it('shows a limit to its full stored precision, never rounded, and without an exponent', () => {
+    // ISMP List of Error-Prone Abbreviations, Symbols, and Dose Designations for the spelling.
+    // Written wrong before: 0.0125 mg/kg showed as 0.013 mg/kg and 0.0004 mg as 0 mg.
+    expect(formatLimit(0.0125, 'demandDose', 'mg', true)).toBe('0.0125 mg/kg');
+    expect(formatLimit(0.0004, 'basalRatePerHour', 'mg', false)).toBe('0.0004 mg/h');
+    expect(formatLimit(1e-7, 'demandDose', 'mg', false)).toBe('0.0000001 mg');
+    expect(formatLimit(null, 'demandDose', 'mg', false)).toBeNull();
   });
 });

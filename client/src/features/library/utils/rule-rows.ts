@@ -1,5 +1,5 @@
 import {
-  formatDose,
+  formatLimit as formatStoredLimit,
   LIMIT_KEYS,
   REGIMEN_FIELD_LABELS,
   REGIMEN_FIELDS,
@@ -40,10 +40,10 @@ export function isDoseUnit(unit: string): unit is DoseUnit {
   return unit === 'mg' || unit === 'mcg';
 }
 
-/** A limit value with the unit of its parameter, or null when it is not set. */
+/** A limit value with the unit of its parameter, to its full stored precision (never rounded), or null when it is not set. */
 export function formatLimit(value: number | null | undefined, field: RegimenField, doseUnit: DoseUnit, perKg: boolean): string | null {
   if (value === null || value === undefined) return null;
-  return formatDose(value, regimenFieldUnit(field, doseUnit, perKg));
+  return formatStoredLimit(value, regimenFieldUnit(field, doseUnit, perKg));
 }
 
 /** One row per parameter the rule limits, in order-form order; parameters with no limit are left out. */

@@ -19,4 +19,15 @@ describe('regimen in safe format', () => {
     expect(limitRangeText('lockoutMinutes', { softMin: 5, softMax: 10 }, 'mg', true, 24.5)).toBe('Soft 5–10 min');
     expect(limitRangeText('loadingDose', undefined, 'mg', false, null)).toBeNull();
   });
+
+  it('shows a limit to its full stored precision, never rounded; a range worked out from it in the safe dose format', () => {
+    // ISMP List of Error-Prone Abbreviations, Symbols, and Dose Designations: the spelling; a limit
+    // rounded to 3 decimals (0.0125 → 0.013) would misstate the library.
+    expect(limitRangeText('demandDose', { softMin: 0.0125, softMax: 0.0175 }, 'mg', true, 20)).toBe(
+      'Soft 0.0125–0.0175 mg/kg (soft 0.25–0.35 mg for 20 kg)',
+    );
+    expect(limitRangeText('demandDose', { softMax: 0.0125 }, 'mg', true, 3.3)).toBe(
+      'Soft up to 0.0125 mg/kg (soft up to 41.25 mcg for 3.3 kg)',
+    );
+  });
 });

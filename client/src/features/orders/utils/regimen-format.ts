@@ -1,5 +1,6 @@
 import {
   formatDose,
+  formatLimit,
   regimenFieldUnit,
   drugAndConcentration,
   type DoseUnit,
@@ -19,13 +20,22 @@ export function fieldValueText(field: RegimenField, value: number | null | undef
   return formatDose(value, regimenFieldUnit(field, doseUnit, false));
 }
 
-/** "0.5–2 mg", "up to 30 mg", "from 5 min"; null when neither end is set. */
-export function formatRange(low: number | null | undefined, high: number | null | undefined, unit: string): string | null {
+/**
+ * "0.5–2 mg", "up to 30 mg", "from 5 min"; null when neither end is set. Limits are shown to their
+ * full stored precision (`formatLimit`), never rounded; pass `formatDose` for a range worked out
+ * from them (per kg × weight).
+ */
+export function formatRange(
+  low: number | null | undefined,
+  high: number | null | undefined,
+  unit: string,
+  format: (amount: number, unit: string) => string = formatLimit,
+): string | null {
   const hasLow = low !== null && low !== undefined;
   const hasHigh = high !== null && high !== undefined;
-  if (hasLow && hasHigh) return `${formatDose(low, '')}–${formatDose(high, unit)}`;
-  if (hasHigh) return `up to ${formatDose(high, unit)}`;
-  if (hasLow) return `from ${formatDose(low, unit)}`;
+  if (hasLow && hasHigh) return `${format(low, '')}–${format(high, unit)}`;
+  if (hasHigh) return `up to ${format(high, unit)}`;
+  if (hasLow) return `from ${format(low, unit)}`;
   return null;
 }
 
@@ -55,6 +65,7 @@ export function limitRangeText(
       limits.softMin === null || limits.softMin === undefined ? null : limits.softMin * weightKg,
       limits.softMax === null || limits.softMax === undefined ? null : limits.softMax * weightKg,
       regimenFieldUnit(field, doseUnit, false),
+      formatDose,
     );
     text += ` (soft ${forPatient} for ${formatDose(weightKg, 'kg')})`;
   }
