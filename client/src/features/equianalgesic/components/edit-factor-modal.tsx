@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { Alert, Button, Group, Modal, PasswordInput, Select, Stack, Text, Textarea } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconAlertCircle, IconSignature } from '@tabler/icons-react';
-import { DOSE_UNITS, EQUIANALGESIC_SOURCE_MAX_LENGTH, tallMan, type DoseUnit, type EquianalgesicFactor } from '@lockstep/shared';
+import { DOSE_UNITS, EQUIANALGESIC_SOURCE_MAX_LENGTH, tallMan, type DoseUnit } from '@lockstep/shared';
 import { NumberField } from '@/components/ui/number-field';
 import { isSignatureError } from '@/lib/api-error';
 import { applyServerErrors } from '@/lib/form-errors';
@@ -10,10 +10,10 @@ import { readNumber } from '@/lib/number-input';
 import { notifySuccess } from '@/lib/notify';
 import { useUpdateEquianalgesicFactor } from '../api/update-equianalgesic-factor';
 import { describeFactor } from '../utils/factor-display';
-import { factorFormErrors, factorFormValues, type FactorFormValues } from '../utils/factor-form';
+import { factorFormErrors, factorFormValues, type FactorFormValues, type FactorTarget } from '../utils/factor-form';
 
 export interface EditFactorModalProps {
-  factor: EquianalgesicFactor;
+  factor: FactorTarget;
   onClose: () => void;
 }
 
@@ -56,7 +56,12 @@ export function EditFactorModal({ factor, onClose }: EditFactorModalProps) {
   });
 
   return (
-    <Modal opened onClose={onClose} title={`Change ${tallMan(factor.genericName)} (${route})`} size="lg">
+    <Modal
+      opened
+      onClose={onClose}
+      title={`${factor.amount === undefined ? 'Set' : 'Change'} ${tallMan(factor.genericName)} (${route})`}
+      size="lg"
+    >
       <form onSubmit={submit} noValidate>
         <Stack gap="md">
           <Text size="sm">

@@ -1,19 +1,23 @@
 import { useState } from 'react';
 import { Alert, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { IconInfoCircle } from '@tabler/icons-react';
-import { CROSS_TOLERANCE_CAUTION, type EquianalgesicFactor } from '@lockstep/shared';
+import { CROSS_TOLERANCE_CAUTION } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
+import { useDrugs } from '@/api/drugs/get-drugs';
 import { canAccess } from '@/config/navigation';
 import { useCurrentUser } from '@/lib/auth/use-session';
 import { useEquianalgesicFactors } from '../api/get-equianalgesic-factors';
 import { EditFactorModal } from './edit-factor-modal';
+import { drugsWithoutFactor } from '../utils/factor-display';
+import type { FactorTarget } from '../utils/factor-form';
 import { FactorsTable } from './factors-table';
 
 /** Pharmacy's equianalgesic table: read by everyone who sees an oral-morphine figure, changed by a pharmacist. */
 export function EquianalgesicScreen() {
   const user = useCurrentUser();
   const factors = useEquianalgesicFactors();
-  const [editing, setEditing] = useState<EquianalgesicFactor | null>(null);
+  const drugs = useDrugs();
+  const [editing, setEditing] = useState<FactorTarget | null>(null);
   const canEdit = canAccess(user.role, 'pharmacy');
 
   let body;
@@ -22,7 +26,15 @@ export function EquianalgesicScreen() {
   } else if (!factors.data) {
     body = <Skeleton height={240} aria-label="Loading the factors" />;
   } else {
-    body = <FactorsTable factors={factors.data} canEdit={canEdit} onEdit={setEditing} />;
+    body = (
+      <FactorsTable
+        factors={factors.data}
+        missing={drugsWithoutFactor(drugs.data ?? [], factors.data)}
+        canEdit={canEdit}
+        onEdit={setEditing}
+        onSet={(drug) => setEditing({ drugId: drug.id, genericName: drug.genericName, route: 'parenteral', unit: drug.doseUnit })}
+      />
+    );
   }
 
   return (

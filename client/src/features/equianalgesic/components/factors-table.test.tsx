@@ -18,10 +18,13 @@ const TABLE: EquianalgesicFactor[] = DEFAULT_EQUIANALGESIC_FACTORS.map((factor) 
   factor.genericName === 'hydromorphone' ? { ...factor, amount: 1.5, source: AFP_2000, changedByName: 'Lin Park' } : factor,
 );
 
+// A formulary drug pharmacy has set no factor for (invented for the test).
+const SUFENTANIL = { id: 7, genericName: 'sufentanil', doseUnit: 'mcg' as const };
+
 const render = (canEdit: boolean) =>
   renderToStaticMarkup(
     <MantineProvider>
-      <FactorsTable factors={TABLE} canEdit={canEdit} onEdit={() => undefined} />
+      <FactorsTable factors={TABLE} missing={[SUFENTANIL]} canEdit={canEdit} onEdit={() => undefined} />
     </MantineProvider>,
   );
 /** The text of one row, tags dropped. */
@@ -61,6 +64,14 @@ describe('FactorsTable (the pharmacy screen’s table)', () => {
     const reference = rowText(render(true), 'factor-morphine-parenteral');
     expect(reference).toContain('Reference');
     expect(reference).not.toContain('Change');
+  });
+
+  it('lists a drug with no factor, says why it has no figure, and lets a pharmacist set one', () => {
+    const missing = rowText(render(true), 'factor-sufentanil-missing');
+    expect(missing).toContain('SUFentanil');
+    expect(missing).toContain('No conversion factor set by pharmacy');
+    expect(missing).toContain('Set');
+    expect(rowText(render(false), 'factor-sufentanil-missing')).not.toContain('Set');
   });
 
   it('is read-only for everyone but a pharmacist', () => {

@@ -1,18 +1,21 @@
 import { Badge, Button, Table, Text, VisuallyHidden } from '@mantine/core';
 import { IconPencil } from '@tabler/icons-react';
-import { formatDose, tallMan, type EquianalgesicFactor } from '@lockstep/shared';
+import { formatDose, NO_CONVERSION_FACTOR, tallMan, type Drug, type EquianalgesicFactor } from '@lockstep/shared';
 import { formatDateTime } from '@/utils/format-date';
 import { describeFactor, isReferenceRow, oralMorphinePerUnit } from '../utils/factor-display';
 
 export interface FactorsTableProps {
   factors: readonly EquianalgesicFactor[];
   /** Pharmacists change factors; everyone else reads them. */
+  /** Formulary drugs with no parenteral row. */
+  missing?: readonly Drug[];
   canEdit: boolean;
   onEdit: (factor: EquianalgesicFactor) => void;
+  onSet?: (drug: Drug) => void;
 }
 
 /** Pharmacy's equianalgesic table: each factor with its source, and who changed it when. */
-export function FactorsTable({ factors, canEdit, onEdit }: FactorsTableProps) {
+export function FactorsTable({ factors, missing = [], canEdit, onEdit, onSet }: FactorsTableProps) {
   return (
     <Table.ScrollContainer minWidth={720}>
       <Table striped verticalSpacing="sm" aria-label="Equianalgesic factors">
@@ -79,6 +82,29 @@ export function FactorsTable({ factors, canEdit, onEdit }: FactorsTableProps) {
               </Table.Tr>
             );
           })}
+          {missing.map((drug) => (
+            <Table.Tr key={`${drug.id}-missing`} data-testid={`factor-${drug.genericName}-missing`}>
+              <Table.Td fw={600}>{tallMan(drug.genericName)}</Table.Td>
+              <Table.Td>Parenteral</Table.Td>
+              <Table.Td colSpan={3}>
+                <Text size="sm" c="dimmed">
+                  {NO_CONVERSION_FACTOR}: its PCAs show no oral-morphine figure.
+                </Text>
+              </Table.Td>
+              {canEdit ? (
+                <Table.Td>
+                  <Button
+                    size="xs"
+                    variant="light"
+                    onClick={() => onSet?.(drug)}
+                    aria-label={`Set ${tallMan(drug.genericName)} parenteral`}
+                  >
+                    Set
+                  </Button>
+                </Table.Td>
+              ) : null}
+            </Table.Tr>
+          ))}
         </Table.Tbody>
       </Table>
     </Table.ScrollContainer>

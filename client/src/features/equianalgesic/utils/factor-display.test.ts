@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_EQUIANALGESIC_FACTORS, type EquianalgesicFactor } from '@lockstep/shared';
-import { describeFactor, isReferenceRow, oralMorphinePerUnit } from './factor-display';
+import { describeFactor, drugsWithoutFactor, isReferenceRow, oralMorphinePerUnit } from './factor-display';
 
 const IDS: Record<string, number> = { morphine: 1, hydromorphone: 2, fentanyl: 3 };
 // The shipped table: NCI PDQ Cancer Pain (health professional version), equianalgesic table,
@@ -31,6 +31,15 @@ describe('equianalgesic factor display', () => {
         TABLE.filter((factor) => factor.route !== 'oral'),
       ),
     ).toBeNull();
+  });
+
+  it('finds formulary drugs with no parenteral factor, by id', () => {
+    const drugs = [
+      { id: 1, genericName: 'morphine', doseUnit: 'mg' as const },
+      { id: 2, genericName: 'hydromorphone', doseUnit: 'mg' as const },
+      { id: 7, genericName: 'sufentanil', doseUnit: 'mcg' as const },
+    ];
+    expect(drugsWithoutFactor(drugs, TABLE).map((drug) => drug.id)).toEqual([7]);
   });
 
   it('marks parenteral morphine as the reference', () => {

@@ -1,5 +1,6 @@
 import {
   conversionFor,
+  type Drug,
   formatDose,
   oralMorphineEquivalent,
   REFERENCE_PARENTERAL_MORPHINE_MG,
@@ -15,6 +16,11 @@ export function describeFactor(factor: EquianalgesicFactor): string {
   const amount = formatDose(factor.amount, factor.unit);
   if (factor.route === 'oral') return `${tallMan(factor.genericName)} ${amount} oral ≈ ${REFERENCE}`;
   return `${tallMan(factor.genericName)} ${amount} parenteral ≈ ${REFERENCE}`;
+}
+
+/** Formulary drugs with no parenteral row: they show no oral-morphine figure until pharmacy sets one. */
+export function drugsWithoutFactor(drugs: readonly Drug[], factors: readonly EquianalgesicFactor[]): Drug[] {
+  return drugs.filter((drug) => !factors.some((factor) => factor.drugId === drug.id && factor.route === 'parenteral'));
 }
 
 /** Whether the row is the reference itself (parenteral morphine 10 mg), which no one changes. */

@@ -14,8 +14,12 @@ export interface FactorFormValues {
   password: string;
 }
 
-export function factorFormValues(factor: EquianalgesicFactor): FactorFormValues {
-  return { amount: factor.amount, unit: factor.unit, source: factor.source, password: '' };
+/** The row a pharmacist changes, or sets for a drug that has none (no amount or source yet). */
+export type FactorTarget = Pick<EquianalgesicFactor, 'drugId' | 'genericName' | 'route' | 'unit'> &
+  Partial<Pick<EquianalgesicFactor, 'amount' | 'source'>>;
+
+export function factorFormValues(target: FactorTarget): FactorFormValues {
+  return { amount: target.amount ?? '', unit: target.unit, source: target.source ?? '', password: '' };
 }
 
 /**
