@@ -16,7 +16,7 @@ const findings: Finding[] = [
   finding('demandDose', 'soft'),
   finding('basalRatePerHour', 'caution'),
   finding('patient', 'caution', 'caution.sleep-apnoea'),
-  finding('patient', 'caution', 'caution.age-70-or-over'),
+  finding('patient', 'caution', 'caution.age-65-or-over'),
 ];
 
 describe('findings by field', () => {

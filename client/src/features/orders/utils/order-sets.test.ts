@@ -51,7 +51,11 @@ describe('order sets', () => {
     const prefill = prefillFromSet(set('paediatric-morphine'), rule(7, 'morphine', 1, 'mg', true), 24.5);
     expect(prefill?.demandDose).toBe('0.49');
     expect(prefill?.lockoutMinutes).toBe('10');
-    expect(prefill?.fourHourLimit).toBe('');
+    // Written wrong before: no limits of its own, so 0.49 mg every 10 min could give 11.76 mg
+    // (0.48 mg/kg) in 4 hours, over the Wren rule's 0.4 mg/kg hard maximum. 0.1 and 0.3 mg/kg:
+    // common practice [from memory]; 2.45 and 7.35 mg for 24.5 kg.
+    expect(prefill?.oneHourLimit).toBe('2.45');
+    expect(prefill?.fourHourLimit).toBe('7.35');
     expect(prefillFromSet(set('paediatric-morphine'), rule(7, 'morphine', 1, 'mg', true), 38)?.demandDose).toBe('0.76');
   });
 

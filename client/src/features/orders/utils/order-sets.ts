@@ -13,6 +13,8 @@ export type OrderSet = {
   demandDose: number;
   lockoutMinutes: number;
   basalRatePerHour: number;
+  /** The order's own 1-hour limit, or null to leave it to the rule. */
+  oneHourLimit: number | null;
   fourHourLimit: number | null;
 };
 
@@ -29,6 +31,7 @@ export const ORDER_SETS: readonly OrderSet[] = [
     demandDose: 1,
     lockoutMinutes: 10,
     basalRatePerHour: 0,
+    oneHourLimit: null,
     fourHourLimit: 30,
   },
   // ASHP Standardize 4 Safety, PCA standards (2023).
@@ -42,6 +45,7 @@ export const ORDER_SETS: readonly OrderSet[] = [
     demandDose: 0.2,
     lockoutMinutes: 10,
     basalRatePerHour: 0,
+    oneHourLimit: null,
     fourHourLimit: 6,
   },
   // ASHP Standardize 4 Safety, PCA standards (2023).
@@ -55,11 +59,15 @@ export const ORDER_SETS: readonly OrderSet[] = [
     demandDose: 10,
     lockoutMinutes: 10,
     basalRatePerHour: 0,
+    oneHourLimit: null,
     fourHourLimit: 300,
   },
   // Association of Paediatric Anaesthetists of Great Britain and Ireland, Good Practice in
   // Postoperative and Procedural Pain Management: morphine PCA bolus 10–20 mcg/kg; 0.02 mg/kg
-  // is 20 mcg/kg, lockout 10 minutes, no background infusion.
+  // is 20 mcg/kg, lockout 10 minutes, no background infusion. Every 10 minutes that could add up
+  // to 0.12 mg/kg an hour and 0.48 mg/kg in 4 hours, so the set holds them with the order's own
+  // limits of 0.1 mg/kg an hour and 0.3 mg/kg in 4 hours: common practice [from memory], the
+  // ward's rule decides.
   {
     id: 'paediatric-morphine',
     label: 'Paediatric morphine (per kg)',
@@ -70,7 +78,8 @@ export const ORDER_SETS: readonly OrderSet[] = [
     demandDose: 0.02,
     lockoutMinutes: 10,
     basalRatePerHour: 0,
-    fourHourLimit: null,
+    oneHourLimit: 0.1,
+    fourHourLimit: 0.3,
   },
 ];
 
@@ -126,7 +135,7 @@ export function prefillFromSet(set: OrderSet, rule: LimitRuleResponse, weightKg:
     demandDose: amountText(set.demandDose * factor),
     lockoutMinutes: amountText(set.lockoutMinutes),
     basalRatePerHour: amountText(set.basalRatePerHour * factor),
-    oneHourLimit: '',
+    oneHourLimit: amountText(set.oneHourLimit === null ? null : set.oneHourLimit * factor),
     fourHourLimit: amountText(set.fourHourLimit === null ? null : set.fourHourLimit * factor),
     clinicianBolusDose: '',
   };
