@@ -50,7 +50,7 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
   const [unsigned, setUnsigned] = useState<Omit<CreateOrderRequest, 'signature'> | null>(null);
 
   const rule = rules.find((candidate) => String(candidate.id) === form.values.ruleId) ?? null;
-  const check = useOrderCheck(form.values, rule, patient, revising?.id);
+  const check = useOrderCheck(form.values, rule, patient, rules, revising?.id);
   const soft = softFindingFields(check.findings);
   const blocking = blockingFindings(check.findings);
   const sets = useMemo(() => availableOrderSets(rules, weightBasedWard), [rules, weightBasedWard]);
@@ -133,7 +133,7 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
               />
               <RegimenSection
                 form={form}
-                rule={rule}
+                rule={check.checkedRule ?? (rule ? { ...rule, perKg: false, limits: {} } : null)}
                 weightKg={patient.weightKg}
                 findings={check.findings}
                 softFields={soft}
@@ -168,7 +168,7 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
           </Grid.Col>
           <Grid.Col span={{ base: 12, lg: 4 }}>
             <div style={{ position: 'sticky', top: 72 }}>
-              <OrderCheckPanel check={check} doseUnit={rule?.doseUnit ?? null} rule={rule} weightKg={patient.weightKg} />
+              <OrderCheckPanel check={check} doseUnit={rule?.doseUnit ?? null} rule={check.checkedRule} weightKg={patient.weightKg} />
             </div>
           </Grid.Col>
         </Grid>

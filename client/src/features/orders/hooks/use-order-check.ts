@@ -12,11 +12,16 @@ import {
   ONE_PCA_STATUSES,
   openPcaFor,
   type OtherPcaOrder,
+  DEFAULT_WARD_POLICY,
 } from '@lockstep/shared';
+import { useOtherActiveLibraries } from '@/api/library/get-other-active-libraries';
 import { useOrderPreview } from '@/api/orders/preview-order';
 import { useOrders } from '@/api/orders/get-orders';
+import { useWardPolicy } from '@/api/wards/get-ward-policy';
+import { useWards } from '@/api/wards/get-wards';
 import { sameFindings } from '../utils/findings';
-import { localFindings, readOrderForm, type OrderFormValues } from '../utils/order-form';
+import { readOrderForm, type OrderFormValues } from '../utils/order-form';
+import { patientRuleFindings, ruleForPatient } from '../utils/rule-for-patient';
 
 /** Where the server's confirmation of the local check stands. */
 export type ServerCheck = 'waiting' | 'checking' | 'agrees' | 'differs' | 'failed';
@@ -30,6 +35,8 @@ export interface OrderCheck {
   server: ServerCheck;
   /** The patient's open PCA that signing would duplicate (the API answers 409), or null. */
   openPca: OtherPcaOrder | null;
+  /** The rule the order is checked against, chosen by the patient (shared chooseRule); null when none fits. */
+  checkedRule: LimitRuleResponse | null;
 }
 
 // Long enough not to ask on every keystroke, short enough to answer before the hand leaves the keys.
@@ -44,23 +51,50 @@ function sameFields(a: OrderFields | null, b: OrderFields | null): boolean {
  * keystroke, confirmed by the server's preview once typing pauses. The server runs the same
  * functions on the same library; if it ever disagrees, its answer is the one shown.
  */
-export function useOrderCheck(values: OrderFormValues, rule: LimitRuleResponse | null, patient: Patient, revisingId?: number): OrderCheck {
+export function useOrderCheck(
+  values: OrderFormValues,
+  rule: LimitRuleResponse | null,
+  patient: Patient,
+  wardRules: readonly LimitRuleResponse[],
+  revisingId?: number,
+): OrderCheck {
   const openOrders = useOrders({ patientId: patient.id, status: ONE_PCA_STATUSES });
   const openPca = openPcaFor(openOrders.data ?? [], revisingId);
+  // Until the ward's own rule loads, the shipped default: never "no limit" on the weight's age.
+  const weightMaxAgeDays = useWardPolicy(patient.wardId).data?.weightMaxAgeDays ?? DEFAULT_WARD_POLICY.weightMaxAgeDays;
   const read = useMemo(() => readOrderForm(values, rule, patient.id), [values, rule, patient.id]);
+  const factors = useMemo(() => patientFactorsOf(patient, new Date()), [patient]);
+  // The rule is chosen by the patient: the ward's library first, the other wards' only when it has none for them.
+  const ownChoice = useMemo(() => (rule ? ruleForPatient(rule, factors, wardRules, null) : null), [rule, factors, wardRules]);
+  const wards = useWards();
+  const otherWards = ownChoice?.needsOtherLibraries ? (wards.data ?? []).filter((ward) => ward.id !== patient.wardId) : [];
+  const { libraries } = useOtherActiveLibraries(otherWards);
+  const chosen = useMemo(
+    () => (rule && ownChoice?.needsOtherLibraries ? ruleForPatient(rule, factors, wardRules, libraries) : ownChoice),
+    [rule, ownChoice, factors, wardRules, libraries],
+  );
   const local = useMemo(() => {
-    if (!rule) return null;
-    const today = new Date();
-    const context = { drug: { id: rule.drugId, genericName: rule.drugName }, today: today.toISOString().slice(0, 10) };
-    const findings = localFindings(read, rule, patientFactorsOf(patient, today), context);
+    if (!rule || !chosen) return null;
+    const today = new Date().toISOString().slice(0, 10);
+    const context = { drug: { id: rule.drugId, genericName: rule.drugName }, today, weightMaxAgeDays };
+    const findings = patientRuleFindings(read, rule, chosen, factors, context);
     // The preview puts the same refusal first, so the two lists stay comparable.
     return { derived: deriveOrderValues(read.regimen), findings: openPca ? [duplicatePcaFinding(openPca), ...findings] : findings };
-  }, [read, rule, patient, openPca]);
+  }, [read, rule, chosen, factors, weightMaxAgeDays, openPca]);
+  const checkedRule = chosen?.rule ?? null;
 
   const [settledFields] = useDebouncedValue(read.fields, SERVER_CHECK_DELAY_MS);
   const preview = useOrderPreview(settledFields);
 
-  if (!local) return { fields: null, derived: null, findings: openPca ? [duplicatePcaFinding(openPca)] : [], server: 'waiting', openPca };
+  if (!local)
+    return {
+      fields: null,
+      derived: null,
+      findings: openPca ? [duplicatePcaFinding(openPca)] : [],
+      server: 'waiting',
+      openPca,
+      checkedRule,
+    };
 
   const current = read.fields !== null && sameFields(settledFields, read.fields) && !preview.isPlaceholderData;
   let server: ServerCheck = 'waiting';
@@ -75,5 +109,5 @@ export function useOrderCheck(values: OrderFormValues, rule: LimitRuleResponse |
       findings = preview.data.findings;
     }
   }
-  return { fields: read.fields, derived: local.derived, findings, server, openPca };
+  return { fields: read.fields, derived: local.derived, findings, server, openPca, checkedRule };
 }
