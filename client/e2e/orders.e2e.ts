@@ -80,9 +80,27 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
       await demand.fill('3.5');
       await page.getByText('Hard limit (blocks signing):').first().waitFor();
       await page.getByText('Signing is blocked while a value is marked as an error or outside a hard limit.').waitFor();
+      // The live panel: 3.5 mg every 10 minutes could give 21 mg an hour (3.5 × ceil(60 ÷ 10),
+      // docs/design.md), over the demo rule's 15 mg hard maximum; with the 4-hour limit emptied,
+      // 84 mg in 4 hours, over its 40 mg.
+      const fourHourField = page.getByRole('textbox', { name: '4-hour limit', exact: true });
+      await fourHourField.fill('');
+      const totals = page.getByRole('table', { name: 'What the pump could give' });
+      const totalRow = (name: string) => totals.getByRole('row').filter({ hasText: name });
+      await totalRow('Any other hour').getByText('21 mg').waitFor();
+      await totalRow('Any other hour').getByText('Over hard maximum').waitFor();
+      await totalRow('Any other 4 hours').getByText('84 mg').waitFor();
+      await totalRow('Any other 4 hours').getByText('Over hard maximum').waitFor();
+      await page.getByText('The pump could give up to 21 mg in an hour').first().waitFor();
+      await page.getByRole('button', { name: 'Sign order' }).click();
+      await page.getByText('Signing is blocked: correct').waitFor();
       await shot(page, 'order-hard-limit');
+      await fourHourField.fill('30');
 
       await demand.fill('2.5');
+      // 2.5 mg every 10 minutes could give 15 mg an hour, over the 10 mg soft maximum: the
+      // prescriber holds it with the order's own 1-hour limit rather than give a second reason.
+      await page.getByRole('textbox', { name: '1-hour limit', exact: true }).fill('10');
       // Beside the field (and in the live panel), before the server has even answered.
       const field = page.locator('div').filter({ has: demand }).filter({ hasText: SOFT_FINDING }).last();
       await field.getByText(SOFT_FINDING).waitFor();
@@ -97,7 +115,10 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
       await page.getByText('Give a reason of at least 10 characters').waitFor();
       await reason.fill('Tolerated 2.5 mg in recovery without sedation');
       await page.getByRole('button', { name: 'Sign order' }).click();
-      await page.getByRole('dialog').getByText('morphine 1 mg/mL · demand 2.5 mg · lockout 10 min · 4-hour limit 30 mg').waitFor();
+      await page
+        .getByRole('dialog')
+        .getByText('morphine 1 mg/mL · demand 2.5 mg · lockout 10 min · 1-hour limit 10 mg · 4-hour limit 30 mg')
+        .waitFor();
       await shot(page, 'order-sign-dialog');
       const dialog = await readyDialog(page);
       await dialog.getByLabel('Your password').fill('not-my-password');
