@@ -1,9 +1,13 @@
 import type { ReactNode } from 'react';
 import { DataList, Group, Paper, SimpleGrid, Stack, Text, Title } from '@mantine/core';
-import { ageInYears, hasAllergies, type Patient, patientDisplayName } from '@lockstep/shared';
+import { ageInYears, PATIENT_RECORD_ROLES, type Patient, patientDisplayName, WEIGHT_ROLES } from '@lockstep/shared';
+import { useCurrentUser } from '@/lib/auth/use-session';
 import { formatCalendarDate } from '@/utils/format-date';
-import { formatSex, formatWeight } from '../utils/patient-format';
+import { formatSex } from '../utils/patient-format';
+import { AllergyEditor } from './allergy-editor';
 import { RiskMarkers } from './risk-markers';
+import { ToleranceForm } from './tolerance-form';
+import { WeightForm } from './weight-form';
 
 function Fact({ label, children }: { label: string; children: ReactNode }) {
   return (
@@ -17,6 +21,8 @@ function Fact({ label, children }: { label: string; children: ReactNode }) {
 /** The patient's identity and the facts that shape a PCA order, in one header. */
 export function PatientDetails({ patient }: { patient: Patient }) {
   const age = ageInYears(patient.dateOfBirth);
+  const { role } = useCurrentUser();
+  const editsRecord = PATIENT_RECORD_ROLES.includes(role);
   return (
     <Stack gap="md">
       <Group gap="md" align="baseline" wrap="wrap">
@@ -27,21 +33,34 @@ export function PatientDetails({ patient }: { patient: Patient }) {
       </Group>
 
       <Paper withBorder p="md" radius="md">
+        <DataList labelWidth="9rem" className="tabular-nums">
+          <Fact label="Date of birth">
+            {formatCalendarDate(patient.dateOfBirth)} ({age} {age === 1 ? 'year' : 'years'})
+          </Fact>
+          <Fact label="Sex">{formatSex(patient.sex)}</Fact>
+          <Fact label="Ward and bed">
+            {patient.wardName}, bed {patient.bed}
+          </Fact>
+        </DataList>
+      </Paper>
+
+      <Paper withBorder p="md" radius="md">
         <SimpleGrid cols={{ base: 1, md: 2 }} spacing="xl">
-          <DataList labelWidth="9rem" className="tabular-nums">
-            <Fact label="Date of birth">
-              {formatCalendarDate(patient.dateOfBirth)} ({age} {age === 1 ? 'year' : 'years'})
-            </Fact>
-            <Fact label="Sex">{formatSex(patient.sex)}</Fact>
-            <Fact label="Ward and bed">
-              {patient.wardName}, bed {patient.bed}
-            </Fact>
-          </DataList>
-          <DataList labelWidth="9rem" className="tabular-nums">
-            <Fact label="Weight">{formatWeight(patient.weightKg)}</Fact>
-            <Fact label="Allergies">{hasAllergies(patient.allergies) ? patient.allergies : 'No known allergies'}</Fact>
-          </DataList>
+          <WeightForm
+            key={`weight-${patient.weightKg}-${patient.weightMeasuredOn}`}
+            patient={patient}
+            canEdit={WEIGHT_ROLES.includes(role)}
+          />
+          <ToleranceForm
+            key={`tolerance-${patient.toleranceOralMorphineMgPerDay}-${patient.toleranceDays}`}
+            patient={patient}
+            canEdit={editsRecord}
+          />
         </SimpleGrid>
+      </Paper>
+
+      <Paper withBorder p="md" radius="md">
+        <AllergyEditor patient={patient} canEdit={editsRecord} />
       </Paper>
 
       <Stack gap="xs">

@@ -1,7 +1,15 @@
 import type { ComponentType } from 'react';
 import { Badge, Group, Text } from '@mantine/core';
-import { IconAlertTriangle, IconMoonStars, IconPill, IconZzz, type IconProps } from '@tabler/icons-react';
-import { type Patient, PATIENT_RISK_FACTOR_LABELS, type PatientRiskFactor, patientRiskFactors } from '@lockstep/shared';
+import {
+  IconAlertOctagon,
+  IconAlertTriangle,
+  IconMoonStars,
+  IconPill,
+  IconQuestionMark,
+  IconZzz,
+  type IconProps,
+} from '@tabler/icons-react';
+import { allergiesSummary, type Patient, PATIENT_RISK_FACTOR_LABELS, type PatientRiskFactor, patientRiskFactors } from '@lockstep/shared';
 
 interface RiskMarker {
   key: string;
@@ -12,7 +20,9 @@ interface RiskMarker {
 }
 
 const MARKER_LOOK: Record<PatientRiskFactor, Pick<RiskMarker, 'Icon' | 'color'>> = {
-  allergies: { Icon: IconAlertTriangle, color: 'red' },
+  anaphylaxis: { Icon: IconAlertOctagon, color: 'red' },
+  allergies: { Icon: IconAlertTriangle, color: 'orange' },
+  'allergies-not-recorded': { Icon: IconQuestionMark, color: 'gray' },
   'opioid-tolerant': { Icon: IconPill, color: 'indigo' },
   'sleep-apnoea': { Icon: IconZzz, color: 'orange' },
   'other-sedatives': { Icon: IconMoonStars, color: 'orange' },
@@ -24,7 +34,7 @@ export function riskMarkersOf(patient: Patient): RiskMarker[] {
     key: factor,
     label: PATIENT_RISK_FACTOR_LABELS[factor],
     ...MARKER_LOOK[factor],
-    ...(factor === 'allergies' ? { detail: patient.allergies } : {}),
+    ...(factor === 'allergies' ? { detail: allergiesSummary(patient) } : {}),
   }));
 }
 
@@ -53,7 +63,7 @@ export function RiskMarkers({ patient, size = 'sm', compact = false }: RiskMarke
             key={key}
             size={size}
             color={color}
-            variant="light"
+            variant={key === 'anaphylaxis' ? 'filled' : 'light'}
             leftSection={<Icon size={size === 'sm' ? 12 : 14} aria-hidden />}
             title={text}
             maw={compact && detail ? 200 : undefined}

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { Patient } from '@lockstep/shared';
-import { formatWeight, matchesPatientSearch } from './patient-format';
+import { formatWeight, formatWeightDate, localToday, matchesPatientSearch } from './patient-format';
 
 const patient: Patient = {
   id: 1,
@@ -10,8 +10,14 @@ const patient: Patient = {
   dateOfBirth: '1961-04-09',
   sex: 'female',
   weightKg: 72,
-  allergies: 'Penicillin (rash)',
+  weightMeasuredOn: '2026-12-01',
+  allergies: [
+    { id: 1, drugId: null, substance: 'Penicillin', reaction: 'rash', severity: 'allergy', recordedByName: null, recordedAt: null },
+  ],
+  noKnownAllergies: false,
   opioidTolerant: false,
+  toleranceOralMorphineMgPerDay: null,
+  toleranceDays: null,
   sleepApnoea: true,
   otherSedatives: false,
   wardId: 1,
@@ -24,6 +30,13 @@ describe('patient formatting', () => {
     expect(formatWeight(72)).toBe('72 kg');
     expect(formatWeight(18.65)).toBe('18.65 kg');
     expect(formatWeight(null)).toBe('Not recorded');
+  });
+
+  it('says when the weight was measured, and when that is not recorded', () => {
+    expect(formatWeightDate('2026-12-03', '2026-12-03')).toMatch(/^measured .*2026 \(today\)$/);
+    expect(formatWeightDate('2026-11-28', '2026-12-03')).toMatch(/\(5 days ago\)$/);
+    expect(formatWeightDate(null, '2026-12-03')).toBe('date measured not recorded');
+    expect(localToday(new Date(2026, 11, 3, 23, 59))).toBe('2026-12-03');
   });
 });
 
