@@ -1,14 +1,15 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { CreateOrderRequest } from '@lockstep/shared';
-import { IDENTITY, ORDER as PCA_ORDER, RELEASE, ROSA, SETTINGS } from '../../server/test/support/pca.js';
+import { FREE_PATIENT, ORDER as PCA_ORDER, RELEASE, ROSA, SETTINGS } from '../../server/test/support/pca.js';
 import { DEMO_PASSWORD, openBrowser, openPatients, signInHome, snapshot, type BrowserSession } from './support/browser.js';
-import { apiToken, callApi } from './support/api.js';
+import { apiToken, callApi, patientIdByMrn } from './support/api.js';
 import { startServer, type RunningServer } from './support/server.js';
 
-// An active morphine PCA for NOAH ACHTERBERG (KB100231, born 1968-03-14, Harbour bed H02), set up
-// through the API: the PCA of server/test/support/pca.ts (1 mg/mL, demand 1 mg, lockout 10 min,
-// 4-hour limit 30 mg) with a clinician bolus of up to 3 mg (over the demo library's soft maximum
+// An active morphine PCA for AMARU CONDORI (KB100983, born 1998-10-14, Harbour bed H06), a demo
+// patient with no PCA (a patient may have only one open PCA, and the demo's patient 1 has one
+// awaiting verification), set up through the API: the PCA of server/test/support/pca.ts
+// (1 mg/mL, demand 1 mg, lockout 10 min, 4-hour limit 30 mg) with a clinician bolus of up to 3 mg (over the demo library's soft maximum
 // of 2 mg, so the prescriber gave a reason).
 const ORDER: CreateOrderRequest = {
   ...PCA_ORDER,
@@ -19,11 +20,12 @@ const ORDER: CreateOrderRequest = {
 /** Prescribed, verified, released, started by kai and rosa; then a second syringe is released. */
 async function activeOrderWithSpareSyringe(baseUrl: string): Promise<{ id: number; spareCode: string }> {
   const [amara, lin, kai] = await Promise.all(['amara.osei', 'lin.park', 'kai.mendes'].map((name) => apiToken(baseUrl, name)));
-  const order = await callApi<{ id: number }>(baseUrl, amara, 'POST', '/orders', ORDER);
+  const patientId = await patientIdByMrn(baseUrl, amara, FREE_PATIENT.identity.patientMrn);
+  const order = await callApi<{ id: number }>(baseUrl, amara, 'POST', '/orders', { ...ORDER, patientId });
   await callApi(baseUrl, lin, 'POST', `/orders/${order.id}/verify`, { signature: { password: DEMO_PASSWORD } });
   const first = await callApi<{ releaseCode: string }>(baseUrl, lin, 'POST', `/orders/${order.id}/releases`, RELEASE);
   const check = await callApi<{ id: number }>(baseUrl, kai, 'POST', `/orders/${order.id}/bedside-checks`, {
-    ...IDENTITY,
+    ...FREE_PATIENT.identity,
     releaseCode: first.releaseCode,
     settings: SETTINGS,
   });
@@ -33,7 +35,7 @@ async function activeOrderWithSpareSyringe(baseUrl: string): Promise<{ id: numbe
 }
 
 const stepHeading = (page: Page, name: string | RegExp) => page.getByRole('heading', { level: 2, name });
-const orderRow = (page: Page) => page.getByRole('row', { name: /ACHTERBERG, Noah/ });
+const orderRow = (page: Page) => page.getByRole('row', { name: new RegExp(FREE_PATIENT.name) });
 
 async function enterMorphinePump(page: Page): Promise<void> {
   await page.getByRole('combobox', { name: 'Drug' }).click();
@@ -65,7 +67,7 @@ describe('bedside: clinician bolus over the soft limit, and a syringe change wit
   it('leads from the patient page to the patient’s PCA tasks', async () => {
     const { page } = kai;
     await openPatients(page);
-    await page.getByText('KB100231').click();
+    await page.getByText(FREE_PATIENT.identity.patientMrn).click();
     await page.getByRole('link', { name: 'Bedside PCA tasks' }).click();
     await page.getByRole('heading', { name: 'PCA orders', level: 1 }).waitFor();
     await page.getByText('Showing one patient’s PCA orders.').waitFor();
@@ -127,8 +129,8 @@ describe('bedside: clinician bolus over the soft limit, and a syringe change wit
     await page.getByRole('link', { name: 'Start bedside check for the new syringe' }).click();
 
     await stepHeading(page, 'Identify the patient').waitFor();
-    await page.getByLabel('MRN').fill('KB100231');
-    await page.getByLabel('Date of birth').fill('1968-03-14');
+    await page.getByLabel('MRN').fill(FREE_PATIENT.identity.patientMrn);
+    await page.getByLabel('Date of birth').fill(FREE_PATIENT.identity.patientDateOfBirth);
     await page.getByRole('button', { name: 'Next: syringe' }).click();
     await page.getByLabel('Release code').fill(spareCode);
     await page.getByRole('button', { name: 'Next: first check' }).click();

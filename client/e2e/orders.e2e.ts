@@ -1,5 +1,6 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { FREE_PATIENT } from '../../server/test/support/pca.js';
 import { DEMO_PASSWORD, openBrowser, openPatients, signIn, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { startServer, type RunningServer } from './support/server.js';
 import { readyDialog } from './support/dialog.js';
@@ -7,6 +8,10 @@ import { readyDialog } from './support/dialog.js';
 // The demo Harbour morphine 1 mg/mL rule (invented demo values): demand soft 0.5–2 mg, hard 0.2–3 mg.
 const SOFT_FINDING = 'Demand dose 2.5 mg is above the soft maximum 2 mg';
 const QUERY = 'Demand dose of 2.5 mg is high for an opioid-naive patient: please start at 1 mg.';
+// The order is for AMARU CONDORI (KB100983, Harbour bed H06), a demo patient with no PCA: a patient
+// may have only one open PCA, and the demo's patient 1 (NOAH ACHTERBERG) has one awaiting verification.
+const { name: PATIENT, bed: BED, weight: WEIGHT, identity } = FREE_PATIENT;
+const MRN = identity.patientMrn;
 
 async function signOut(page: Page): Promise<void> {
   await page.getByRole('button', { name: 'Sign out' }).click();
@@ -63,8 +68,8 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
       const { page } = browser;
       await signInHome(page, 'amara.osei');
       await openPatients(page);
-      await page.getByText('KB100231').click();
-      await page.getByRole('heading', { name: 'ACHTERBERG, Noah', level: 1 }).waitFor();
+      await page.getByText(MRN).click();
+      await page.getByRole('heading', { name: PATIENT, level: 1 }).waitFor();
       await page.getByRole('link', { name: 'New PCA order' }).click();
       await page.getByRole('heading', { name: 'New PCA order', level: 1 }).waitFor();
       await page.getByRole('region', { name: 'Patient' }).getByText('Opioid-naive').waitFor();
@@ -144,14 +149,14 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
       await signIn(page, 'lin.park');
       await openNav(page, 'Verification', 'Verification');
       const rows = page.getByRole('table', { name: 'Orders awaiting verification' }).locator('tbody tr');
-      // The demo order for the same patient waited longer, so it comes first.
+      // The demo's order for patient 1 waited longer, so it comes first.
       await expect.poll(() => rows.count()).toBe(2);
       expect(await rows.first().innerText()).toMatch(/\b4[5-9] min\b/);
       await shot(page, 'verification-queue');
 
       await rows.filter({ hasText: 'demand 2.5 mg' }).click();
       await page.getByRole('heading', { name: `Verify order ${firstId}`, level: 1 }).waitFor();
-      await page.getByRole('region', { name: 'Patient' }).getByText('82 kg').waitFor();
+      await page.getByRole('region', { name: 'Patient' }).getByText(WEIGHT).waitFor();
       await page.getByRole('table', { name: 'Regimen against the limit rule' }).getByText('0.5–2 mg').waitFor();
       await shot(page, 'verification-detail');
 
@@ -198,9 +203,10 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
       expect(await changed.innerText()).toContain('Demand dose');
 
       await page.getByRole('link', { name: 'Patients', exact: true }).click();
-      await page.getByText('KB100231').click();
+      await page.getByText(MRN).click();
+      // The returned order, now superseded, and its revision.
       const patientOrders = page.getByRole('table', { name: 'PCA orders for this patient' }).locator('tbody tr');
-      await expect.poll(() => patientOrders.count()).toBe(3);
+      await expect.poll(() => patientOrders.count()).toBe(2);
       await patientOrders.filter({ hasText: 'Superseded' }).waitFor();
       await shot(page, 'patient-orders');
       await signOut(page);
@@ -250,9 +256,9 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
       const label = page.getByRole('article', { name: 'Syringe label' });
       expect(await label.getByTestId('label-release-code').innerText()).toBe(releaseCode);
       const text = await label.innerText();
-      expect(text).toContain('ACHTERBERG, Noah');
-      expect(text).toContain('MRN KB100231');
-      expect(text).toContain('Harbour, bed H02');
+      expect(text).toContain(PATIENT);
+      expect(text).toContain(`MRN ${MRN}`);
+      expect(text).toContain(`Harbour, bed ${BED}`);
       expect(text).toContain('morphine 1 mg/mL');
       expect(text).toContain('50 mg in 50 mL');
       expect(text).toContain('Batch B2403-17');
@@ -276,13 +282,13 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
     await table.getByText(`PCA order ${firstId} awaiting verification`).waitFor();
     await table.getByText(`PCA order ${revisedId} awaiting verification`).waitFor();
     await table.getByText(`PCA order ${firstId} returned with a query`).waitFor();
-    await table.getByText('PCA syringe released for Harbour bed H02').waitFor();
+    await table.getByText(`PCA syringe released for Harbour bed ${BED}`).waitFor();
     const rows = await table.locator('tbody tr').allInnerTexts();
     expect(rows.some((row) => row.includes('pharmacy.') && row.includes('awaiting verification'))).toBe(true);
     expect(rows.some((row) => row.includes('amara.osei@') && row.includes('returned with a query'))).toBe(true);
     expect(rows.some((row) => row.includes('nurse-in-charge.') && row.includes('syringe released'))).toBe(true);
 
-    await table.getByRole('button', { name: /Show the text of “PCA syringe released for Harbour bed H02/ }).click();
+    await table.getByRole('button', { name: new RegExp(`Show the text of “PCA syringe released for Harbour bed ${BED}`) }).click();
     await table.getByText(`release code ${releaseCode}`).waitFor();
     await shot(page, 'mailbox');
   });

@@ -8,7 +8,7 @@ import Database from 'better-sqlite3';
 import { afterAll, describe, expect, it } from 'vitest';
 import { backupDatabase } from '../src/database/backup.js';
 import { DEMO_PASSWORD } from './support/demo-accounts.js';
-import { CALM_OBSERVATION as OBSERVATION, IDENTITY, ORDER, RELEASE, ROSA, SETTINGS } from './support/pca.js';
+import { CALM_OBSERVATION as OBSERVATION, FREE_PATIENT, ORDER, RELEASE, ROSA, SETTINGS } from './support/pca.js';
 import { startBuiltServer } from './support/server-process.js';
 import type { SpawnedServer } from './support/spawn-server.js';
 
@@ -41,15 +41,27 @@ async function api<T = Json>(
 const signIn = async (baseUrl: string, username: string): Promise<string> =>
   (await api<{ accessToken: string }>(baseUrl, 'POST', '/auth/login', null, { username, password: DEMO_PASSWORD }, 200)).accessToken;
 
-/** Signed, verified, a syringe released and a matching two-nurse check: an active PCA. */
+/**
+ * Signed, verified, a syringe released and a matching two-nurse check: an active PCA, for the demo
+ * patient with no PCA (a patient may have only one open PCA; patient 1 has the demo's order).
+ */
 async function activePca(baseUrl: string): Promise<number> {
   const [prescriber, pharmacist, nurse] = await Promise.all(
     ['amara.osei', 'lin.park', 'kai.mendes'].map((username) => signIn(baseUrl, username)),
   );
-  const { id } = await api(baseUrl, 'POST', '/orders', prescriber, ORDER, 201);
+  const patients = await api<{ id: number; mrn: string }[]>(baseUrl, 'GET', '/patients', prescriber, undefined, 200);
+  const patientId = patients.find((patient) => patient.mrn === FREE_PATIENT.identity.patientMrn)!.id;
+  const { id } = await api(baseUrl, 'POST', '/orders', prescriber, { ...ORDER, patientId }, 201);
   await api(baseUrl, 'POST', `/orders/${id}/verify`, pharmacist, { signature: { password: DEMO_PASSWORD } }, 200);
   const { releaseCode } = await api(baseUrl, 'POST', `/orders/${id}/releases`, pharmacist, RELEASE, 201);
-  const first = await api(baseUrl, 'POST', `/orders/${id}/bedside-checks`, nurse, { ...IDENTITY, releaseCode, settings: SETTINGS }, 201);
+  const first = await api(
+    baseUrl,
+    'POST',
+    `/orders/${id}/bedside-checks`,
+    nurse,
+    { ...FREE_PATIENT.identity, releaseCode, settings: SETTINGS },
+    201,
+  );
   await api(baseUrl, 'POST', `/orders/${id}/bedside-checks/${first.id}/second`, nurse, { ...ROSA, settings: SETTINGS }, 200);
   return id as number;
 }

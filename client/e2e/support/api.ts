@@ -22,3 +22,11 @@ export async function apiToken(baseUrl: string, username: string): Promise<strin
   });
   return accessToken;
 }
+
+/** A demo patient's id, found by MRN (ids follow the seed's order; the MRN is what a test names). */
+export async function patientIdByMrn(baseUrl: string, token: string, mrn: string): Promise<number> {
+  const patients = await callApi<{ id: number; mrn: string }[]>(baseUrl, token, 'GET', '/patients');
+  const patient = patients.find((candidate) => candidate.mrn === mrn);
+  if (!patient) throw new Error(`No demo patient with MRN ${mrn}`);
+  return patient.id;
+}

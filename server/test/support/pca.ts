@@ -53,6 +53,21 @@ export const SETTINGS: PumpSettings = {
 /** Patient 1's wristband. */
 export const IDENTITY: WristbandEntry = { patientMrn: 'KB100231', patientDateOfBirth: '1968-03-14' };
 
+/**
+ * A demo patient with no PCA: AMARU CONDORI (KB100983, born 1998-10-14, 70 kg weighed yesterday,
+ * no known allergies, opioid-naive), Harbour bed H06. For
+ * tests that reach the app only over HTTP and sign a PCA of their own (the crash test, the browser
+ * tests): a patient may have only one open PCA, and patient 1 has the demo's order awaiting
+ * verification. Find the id by MRN (`GET /api/patients`); the API tests add patients instead
+ * (TestApp.addPatient).
+ */
+export const FREE_PATIENT = {
+  name: 'CONDORI, Amaru',
+  bed: 'H06',
+  weight: '70 kg',
+  identity: { patientMrn: 'KB100983', patientDateOfBirth: '1998-10-14' } satisfies WristbandEntry,
+};
+
 /** A 50 mL syringe of the ordered concentration. */
 export const RELEASE: CreateReleaseRequest = {
   concentrationPerMl: 1,
