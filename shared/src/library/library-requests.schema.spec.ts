@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { requestFieldErrors } from '../api/request-errors.js';
-import { importLibraryFieldsSchema, replaceRulesSchema } from './library-requests.schema.js';
+import { importLibraryFieldsSchema, replaceRulesSchema, sendBackVersionSchema } from './library-requests.schema.js';
 
 describe('importLibraryFieldsSchema', () => {
   it('reads the multipart text as the server does: a number for wardId, true and false for dryRun', () => {
@@ -38,5 +38,25 @@ describe('replaceRulesSchema', () => {
       { field: 'rules.0.limits.demandDose', message: 'demandDose must be an object' },
       { field: 'rules.0.limits.weight', message: 'property weight should not exist' },
     ]);
+  });
+});
+
+describe('sendBackVersionSchema', () => {
+  const errors = (body: unknown) => {
+    const result = sendBackVersionSchema.safeParse(body);
+    return result.success ? [] : requestFieldErrors(result.error);
+  };
+
+  it('takes a signature and a comment saying what to change, trimmed', () => {
+    expect(sendBackVersionSchema.parse({ signature: { password: 'pw' }, comment: '  Lockout limits look too short  ' }).comment).toBe(
+      'Lockout limits look too short',
+    );
+  });
+
+  it('refuses a missing, blank or short comment, by its field', () => {
+    const signature = { password: 'pw' };
+    expect(errors({ signature })).toEqual([{ field: 'comment', message: 'Say what needs changing' }]);
+    expect(errors({ signature, comment: '        ' })).toEqual([{ field: 'comment', message: 'Give a reason of at least 10 characters' }]);
+    expect(errors({ signature, comment: 42 })).toEqual([{ field: 'comment', message: 'comment must be text' }]);
   });
 });
