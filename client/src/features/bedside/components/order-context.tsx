@@ -1,6 +1,8 @@
 import type { ReactNode } from 'react';
 import { Group, Paper, Stack, Text } from '@mantine/core';
 import { drugAndConcentration, formatRegimen, tallMan, type OrderDetail } from '@lockstep/shared';
+import { usePatient } from '@/api/patients/get-patient';
+import { AllergyList } from '@/components/ui/allergy-list';
 import { OrderStatusBadge } from '@/components/ui/order-status-badge';
 
 function Fact({ label, children }: { label: string; children: ReactNode }) {
@@ -25,8 +27,9 @@ export interface OrderContextProps {
   showRegimen?: boolean;
 }
 
-/** Which patient, bed and drug this screen is about: the first thing a nurse checks. */
+/** Which patient, bed and drug this screen is about, and the patient's allergies: the first things a nurse checks. */
 export function OrderContext({ order, showRegimen = false }: OrderContextProps) {
+  const patient = usePatient(order.patientId);
   return (
     <Paper withBorder radius="md" p="md" bg="slate.0" aria-label="Patient and order" component="section">
       <Group gap="xl" align="flex-start" wrap="wrap">
@@ -42,6 +45,18 @@ export function OrderContext({ order, showRegimen = false }: OrderContextProps) 
           <OrderStatusBadge status={order.status} size="lg" />
         </Stack>
       </Group>
+      <Stack gap={4} mt="sm" aria-label="Allergies">
+        <Text size="xs" c="dimmed" tt="uppercase" fw={600}>
+          Allergies
+        </Text>
+        {patient.data ? (
+          <AllergyList patient={patient.data} />
+        ) : (
+          <Text size="sm" c="dimmed">
+            {patient.isError ? 'The allergies could not be loaded: check the patient’s record' : 'Loading…'}
+          </Text>
+        )}
+      </Stack>
       {showRegimen ? (
         <Text size="sm" mt="sm" className="tabular-nums">
           {formatRegimen(order, { withDrug: false })}
