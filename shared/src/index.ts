@@ -13,7 +13,6 @@ export * from './patients/adult-age.js';
 export * from './patients/growth-reference.js';
 export * from './drugs/drug.schema.js';
 export * from './drugs/equianalgesic.js';
-export * from './drugs/equianalgesic.js';
 export * from './api/api-error.schema.js';
 export * from './auth/demo-accounts.schema.js';
 export * from './dose/types.js';

@@ -8,9 +8,9 @@ import { AuditTrail1764710000000 } from './1764710000000-audit-trail.js';
 import { OrderListsByPrescriber1764729000000 } from './1764729000000-order-lists-by-prescriber.js';
 import { RevokedTokens1764739000000 } from './1764739000000-revoked-tokens.js';
 import { PatientRecord1764750000000 } from './1764750000000-patient-record.js';
-import { EquianalgesicFactors1764780000000 } from './1764780000000-equianalgesic-factors.js';
 import { LibraryIntegrity1764760000000 } from './1764760000000-library-integrity.js';
 import { RulePopulation1764770000000 } from './1764770000000-rule-population.js';
+import { EquianalgesicFactors1764780000000 } from './1764780000000-equianalgesic-factors.js';
 
 /** In order. Listed explicitly (not globbed) so tests and the built server run the same set. */
 export const MIGRATIONS = [
@@ -24,7 +24,7 @@ export const MIGRATIONS = [
   OrderListsByPrescriber1764729000000,
   RevokedTokens1764739000000,
   PatientRecord1764750000000,
-  EquianalgesicFactors1764780000000,
   LibraryIntegrity1764760000000,
   RulePopulation1764770000000,
+  EquianalgesicFactors1764780000000,
 ];
