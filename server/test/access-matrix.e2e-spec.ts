@@ -113,6 +113,15 @@ export const ACCESS_MATRIX: MatrixRow[] = [
     body: UNKNOWN_FIELD,
   },
   { method: 'GET', path: '/api/drugs', url: '/api/drugs', access: 'signed-in', ok: 200 },
+  { method: 'GET', path: '/api/equianalgesic-factors', url: '/api/equianalgesic-factors', access: 'signed-in', ok: 200 },
+  {
+    method: 'PUT',
+    path: '/api/equianalgesic-factors/:drugId/:route',
+    url: '/api/equianalgesic-factors/2/parenteral',
+    access: ['pharmacist'],
+    ok: 400,
+    body: EMPTY,
+  },
   { method: 'GET', path: '/api/drugs', url: '/api/drugs', access: 'signed-in', ok: 200 },
 
   { method: 'GET', path: '/api/wards/:wardId/library', url: '/api/wards/2/library', access: 'signed-in', ok: 200 },

@@ -79,6 +79,16 @@ describe('every state-changing route writes its audit event', () => {
       200,
       'ward.policy-update',
     );
+    // Pharmacy's equianalgesic table: hydromorphone after American Family Physician 2000;61(3):755.
+    await step(
+      'put',
+      '/api/equianalgesic-factors/:drugId/:route',
+      '/api/equianalgesic-factors/2/parenteral',
+      'pharmacist',
+      { amount: 1.5, unit: 'mg', source: 'American Family Physician 2000;61(3):755', signature: { password: DEMO_PASSWORD } },
+      200,
+      'equianalgesic-factor.update',
+    );
 
     // One order from signature to a second syringe. A patient may have only one open PCA and the
     // demo's patients 1, 3 and 4 have one, so each order in this walk is for a new patient.

@@ -35,6 +35,7 @@ import {
   syringeChangeSchema,
   textLength,
   updateUserSchema,
+  updateEquianalgesicFactorSchema,
   updateWardPolicySchema,
   type FieldError,
 } from '@lockstep/shared';
@@ -43,6 +44,7 @@ import { BolusDto, DiscontinueDto, SyringeChangeDto } from '../src/bedside/dto/b
 import { FirstCheckDto, SecondCheckDto } from '../src/bedside/dto/bedside-check.dto.js';
 import { SignedRequestDto } from '../src/common/dto/signature.dto.js';
 import { createValidationPipe } from '../src/common/validation/validation.pipe.js';
+import { UpdateEquianalgesicFactorDto } from '../src/equianalgesic/dto/update-equianalgesic-factor.dto.js';
 import { AcknowledgeFlagDto } from '../src/flags/dto/acknowledge-flag.dto.js';
 import { CreateSignoffDto } from '../src/handover/dto/create-signoff.dto.js';
 import { ApproveVersionDto } from '../src/library/dto/approve-version.dto.js';
@@ -71,6 +73,7 @@ import {
   CREATE_ORDER,
   CREATE_USER,
   DISCONTINUE,
+  EQUIANALGESIC_FACTOR,
   FIRST_CHECK,
   IMPORT_FIELDS,
   LOGIN,
@@ -128,6 +131,11 @@ const CONTRACTS: Record<string, Contract> = {
   'PUT /api/library/versions/:param/rules': { spec: REPLACE_RULES, dto: ReplaceRulesDto, schema: replaceRulesSchema },
   'POST /api/library/versions/:param/submit': { spec: SUBMIT_VERSION, dto: SubmitVersionDto, schema: submitVersionSchema },
   'POST /api/library/versions/:param/approve': { spec: APPROVE_VERSION, dto: ApproveVersionDto, schema: approveVersionSchema },
+  'PUT /api/equianalgesic-factors/:param/:param': {
+    spec: EQUIANALGESIC_FACTOR,
+    dto: UpdateEquianalgesicFactorDto,
+    schema: updateEquianalgesicFactorSchema,
+  },
   'POST /api/library/versions/:param/send-back': { spec: SEND_BACK_VERSION, dto: SendBackVersionDto, schema: sendBackVersionSchema },
   'POST /api/patients/:param/allergies': { spec: ADD_ALLERGY, dto: AddAllergyDto, schema: addAllergySchema },
   'PUT /api/patients/:param/opioid-tolerance': { spec: OPIOID_TOLERANCE, dto: OpioidToleranceDto, schema: opioidToleranceSchema },

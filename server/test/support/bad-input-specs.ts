@@ -59,6 +59,12 @@ export const CREATE_ORDER: BodySpec = {
 export const REASON: BodySpec = { reason };
 export const SIGNED: BodySpec = { signature: { type: 'object', fields: SIGNATURE } };
 export const APPROVE_VERSION: BodySpec = { ...SIGNED, submittedAt: { type: 'datetime' } };
+export const EQUIANALGESIC_FACTOR: BodySpec = {
+  ...SIGNED,
+  amount: { type: 'number', positive: true, max: 1_000_000 },
+  unit: { type: 'enum', values: DOSE_UNITS },
+  source: { type: 'string', min: 1, max: 500, trimmed: true },
+};
 export const SEND_BACK_VERSION: BodySpec = { ...SIGNED, comment: reason };
 
 export const RELEASE: BodySpec = {
@@ -236,6 +242,7 @@ export const BAD_INPUT_COVERAGE: Record<string, string> = {
   'PUT /api/library/versions/:param/rules': 'bad-input-admin',
   'POST /api/library/versions/:param/submit': 'bad-input-admin',
   'POST /api/library/versions/:param/approve': 'bad-input-admin',
+  'PUT /api/equianalgesic-factors/:param/:param': 'bad-input-admin',
   'POST /api/library/versions/:param/send-back': 'bad-input-admin',
   'POST /api/library/import': 'bad-input-uploads',
   'POST /api/patients/:param/allergies': 'patients',
