@@ -122,7 +122,6 @@ export const ACCESS_MATRIX: MatrixRow[] = [
     ok: 400,
     body: EMPTY,
   },
-  { method: 'GET', path: '/api/drugs', url: '/api/drugs', access: 'signed-in', ok: 200 },
 
   { method: 'GET', path: '/api/wards/:wardId/library', url: '/api/wards/2/library', access: 'signed-in', ok: 200 },
   { method: 'GET', path: '/api/library/versions', url: '/api/library/versions?wardId=1', access: 'signed-in', ok: 200 },
