@@ -38,6 +38,9 @@ const WORKED = {
   fourHourLimit: 30,
   clinicianBolusDose: 2,
   indication: 'Pain after laparotomy',
+  // A basal rate for this opioid-naive adult needs the prescriber's reason (Chou R et al.,
+  // Management of Postoperative Pain, APS/ASRA/ASA guideline, J Pain 2016;17(2):131-157).
+  overrides: [{ field: 'basalRatePerHour', reason: 'Basal rate agreed with the acute pain team for this example' }],
 };
 const WORKED_SETTINGS = { ...SETTINGS, loadingDose: 2, basalRatePerHour: 0.5, oneHourLimit: 8, fourHourLimit: 30 };
 
@@ -94,6 +97,8 @@ describe('FHIR R4 export', () => {
       concentrationPerMl: 10,
       demandDose: 20,
       lockoutMinutes: 8,
+      // 20 mcg every 8 minutes could give 160 mcg an hour, over the demo rule's 150 mcg hard maximum.
+      oneHourLimit: 100,
       fourHourLimit: 300,
       clinicianBolusDose: null,
     };
