@@ -33,6 +33,11 @@ describe('validateLimitRules', () => {
       { path: 'rules.0.limits.demandDose.hardMax', message: 'Demand dose: a limit must be a finite number' },
       { path: 'rules.0.limits.lockoutMinutes.hardMin', message: 'Lockout: a limit is at most 1440 minutes; this is 5000' },
     ]);
+    const ceiling = { ...morphine, perKg: true, limits: { demandDose: { softMax: 0.02, hardMax: 0.03, ceiling: 1e9 } } };
+    expect(validateLimitRules([ceiling]).filter((p) => p.path.endsWith('ceiling'))).toContainEqual({
+      path: 'rules.0.limits.demandDose.ceiling',
+      message: 'Demand dose: a limit is at most 10000 (in the dose unit); this is 1000000000',
+    });
   });
 
   it('refuses two rules for one drug at one concentration, but allows another concentration', () => {

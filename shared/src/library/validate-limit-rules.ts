@@ -38,7 +38,7 @@ export function validateLimitRules(rules: readonly LimitRuleInput[]): RuleProble
   return problems;
 }
 
-/** Each present limit must be a finite number from 0 to its field's bound (limit-bounds.ts). */
+/** Each present limit (and a dose's ceiling) must be a finite number from 0 to its field's bound (limit-bounds.ts). */
 export function limitRangeProblems(field: RegimenField, limits: Limits, path: string, label?: string): RuleProblem[] {
   const problems: RuleProblem[] = [];
   for (const key of LIMIT_KEYS) {
@@ -46,6 +46,12 @@ export function limitRangeProblems(field: RegimenField, limits: Limits, path: st
     if (value === null || value === undefined) continue;
     const problem = limitValueProblem(field, value, label);
     if (problem) problems.push({ path: `${path}.${key}`, message: problem });
+  }
+  // A per-kg rule's absolute ceiling is a dose in the dose unit: the same bound (rule-population.ts checks the rest).
+  const ceiling = limits.ceiling;
+  if (typeof ceiling === 'number' && Number.isFinite(ceiling) && field !== 'lockoutMinutes') {
+    const problem = limitValueProblem(field, ceiling, label);
+    if (problem) problems.push({ path: `${path}.ceiling`, message: problem });
   }
   return problems;
 }
