@@ -1,7 +1,18 @@
 import { Button, Checkbox, Fieldset, Group, NumberInput, Select, Table, Text, TextInput } from '@mantine/core';
 import type { UseFormReturnType } from '@mantine/form';
 import { IconTrash } from '@tabler/icons-react';
-import { LIMIT_KEYS, REGIMEN_FIELD_LABELS, REGIMEN_FIELDS, regimenFieldUnit, tallMan, type Drug } from '@lockstep/shared';
+import {
+  DOSE_FIELDS,
+  LIMIT_KEYS,
+  POPULATION_LABELS,
+  POPULATIONS,
+  REGIMEN_FIELD_LABELS,
+  REGIMEN_FIELDS,
+  regimenFieldUnit,
+  tallMan,
+  type BandField,
+  type Drug,
+} from '@lockstep/shared';
 import type { RulesFormValues } from '../utils/rule-form';
 import { LIMIT_LABELS, ruleTitle } from '../utils/rule-rows';
 import classes from './library.module.css';
@@ -12,7 +23,17 @@ export interface RuleFieldsetProps {
   drugs: readonly Drug[];
 }
 
-/** One limit rule in the editor: drug, concentration, per kg, and four limits per parameter. */
+const BANDS: { field: BandField; label: string; unit: string }[] = [
+  { field: 'minAgeYears', label: 'Age from', unit: 'years' },
+  { field: 'maxAgeYears', label: 'Age under', unit: 'years' },
+  { field: 'minWeightKg', label: 'Weight from', unit: 'kg' },
+  { field: 'maxWeightKg', label: 'Weight under', unit: 'kg' },
+];
+
+/**
+ * One limit rule in the editor: drug, concentration, per kg, who it is for (adult, or children in
+ * an age and weight band), four limits per parameter and, per kg, each dose's absolute ceiling.
+ */
 export function RuleFieldset({ form, index, drugs }: RuleFieldsetProps) {
   const path = `rules.${index}` as const;
   const rule = form.values.rules[index];
@@ -63,6 +84,13 @@ export function RuleFieldset({ form, index, drugs }: RuleFieldsetProps) {
           error={form.errors[`${path}.doseUnit`]}
         />
         <Checkbox label="Limits per kg of body weight" mt={30} {...form.getInputProps(`${path}.perKg`, { type: 'checkbox' })} />
+        <Select
+          label="For"
+          data={POPULATIONS.map((population) => ({ value: population, label: POPULATION_LABELS[population] }))}
+          allowDeselect={false}
+          w={140}
+          {...form.getInputProps(`${path}.population`)}
+        />
         <Button
           variant="subtle"
           color="red"
@@ -75,6 +103,28 @@ export function RuleFieldset({ form, index, drugs }: RuleFieldsetProps) {
           Remove rule
         </Button>
       </Group>
+      {rule.population === 'paediatric' ? (
+        <Group align="flex-start" gap="md" wrap="wrap" mb="sm">
+          {BANDS.map(({ field, label, unit }) => (
+            <NumberInput
+              key={field}
+              label={label}
+              description="Empty: no bound"
+              min={0}
+              decimalScale={2}
+              hideControls
+              rightSection={
+                <Text size="xs" c="dimmed">
+                  {unit}
+                </Text>
+              }
+              rightSectionWidth={48}
+              w={140}
+              {...form.getInputProps(`${path}.${field}`)}
+            />
+          ))}
+        </Group>
+      ) : null}
       {/* Fixed layout: every rule's columns line up with the rule above it. */}
       <Table aria-label={`Rule ${index + 1} limits`} tabularNums verticalSpacing={4} withRowBorders={false} layout="fixed">
         <Table.Thead>
@@ -87,6 +137,7 @@ export function RuleFieldset({ form, index, drugs }: RuleFieldsetProps) {
                 {LIMIT_LABELS[key]}
               </Table.Th>
             ))}
+            {rule.perKg ? <Table.Th scope="col">Ceiling ({doseUnit ?? 'mg'}, any weight)</Table.Th> : null}
           </Table.Tr>
         </Table.Thead>
         <Table.Tbody>
@@ -110,6 +161,20 @@ export function RuleFieldset({ form, index, drugs }: RuleFieldsetProps) {
                   />
                 </Table.Td>
               ))}
+              {rule.perKg ? (
+                <Table.Td valign="top">
+                  {DOSE_FIELDS.includes(field) ? (
+                    <NumberInput
+                      size="xs"
+                      min={0}
+                      decimalScale={4}
+                      hideControls
+                      aria-label={`${REGIMEN_FIELD_LABELS[field]} ceiling`}
+                      {...form.getInputProps(`${path}.limits.${field}.ceiling`)}
+                    />
+                  ) : null}
+                </Table.Td>
+              ) : null}
             </Table.Tr>
           ))}
         </Table.Tbody>

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { Group, Table, Text, VisuallyHidden } from '@mantine/core';
-import { LIMIT_KEYS, ruleKey, type LimitKey } from '@lockstep/shared';
+import { LIMIT_KEYS, populationLabel, ruleKey, type LimitKey } from '@lockstep/shared';
 import { LIMIT_LABELS, parameterRows, ruleTitle, type RuleView } from '../utils/rule-rows';
 import classes from './library.module.css';
 import { PerKgBadge } from './per-kg-badge';
@@ -70,6 +70,11 @@ export function RulesTable({ rules, label, empty }: RulesTableProps) {
                     {ruleTitle(rule)}
                   </Text>
                   {rule.perKg ? <PerKgBadge /> : null}
+                  {rule.population === 'paediatric' ? (
+                    <Text span size="sm" c="dimmed">
+                      {populationLabel(rule)}
+                    </Text>
+                  ) : null}
                 </Group>
               </Table.Th>
             </Table.Tr>
@@ -77,6 +82,12 @@ export function RulesTable({ rules, label, empty }: RulesTableProps) {
               <Table.Tr key={row.field}>
                 <Table.Th scope="row" className={classes.parameterCell}>
                   {row.label}
+                  {row.ceiling ? (
+                    <Text span size="xs" c="dimmed">
+                      {' '}
+                      (ceiling {row.ceiling})
+                    </Text>
+                  ) : null}
                 </Table.Th>
                 {LIMIT_KEYS.map((key) => (
                   <Table.Td key={key} className={`${classes.limitCell} ${isHard(key) ? classes.hardLimit : ''}`}>

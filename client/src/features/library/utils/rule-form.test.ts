@@ -26,9 +26,45 @@ describe('rules form', () => {
   it('takes the dose unit from the drug and treats empty inputs as no limit', () => {
     const rule = { ...emptyRuleForm('b', true), drugId: '3', concentrationPerMl: 10 };
     rule.limits.demandDose.softMax = 0.5;
+    // A new per-kg rule starts as a children's rule with open bands.
     expect(readRulesForm({ rules: [rule] }, drugs).rules).toEqual([
-      { drugId: 3, concentrationPerMl: 10, doseUnit: 'mcg', perKg: true, limits: { demandDose: { softMax: 0.5 } } },
+      {
+        drugId: 3,
+        concentrationPerMl: 10,
+        doseUnit: 'mcg',
+        perKg: true,
+        population: 'paediatric',
+        minAgeYears: null,
+        maxAgeYears: null,
+        minWeightKg: null,
+        maxWeightKg: null,
+        limits: { demandDose: { softMax: 0.5 } },
+      },
     ]);
+  });
+
+  it('keeps a paediatric rule’s bands and ceilings, and asks for a ceiling on each per-kg dose limit', () => {
+    // Demo Wren values (invented): children 1 to under 18 years, 10 kg and over; demand ceiling 1.5 mg.
+    const children: LimitRuleInput = {
+      ...morphine,
+      perKg: true,
+      population: 'paediatric',
+      minAgeYears: 1,
+      maxAgeYears: 18,
+      minWeightKg: 10,
+      maxWeightKg: null,
+      limits: { demandDose: { softMax: 0.02, hardMax: 0.03, ceiling: 1.5 }, lockoutMinutes: { hardMin: 5 } },
+    };
+    const form = ruleToForm(children, 'p');
+    expect(form.limits.demandDose.ceiling).toBe(1.5);
+    expect(readRulesForm({ rules: [form] }, drugs)).toEqual({ rules: [children], errors: {} });
+    form.limits.demandDose.ceiling = '';
+    expect(readRulesForm({ rules: [form] }, drugs).errors).toEqual({
+      'rules.0.limits.demandDose.ceiling': 'Demand dose: a per-kg rule needs an absolute ceiling in mg, whatever the weight',
+    });
+    expect(placeRuleErrors([{ field: 'rules.0.maxAgeYears', message: 'Enter a number from 0 to 18 years' }], 1).fieldErrors).toEqual({
+      'rules.0.maxAgeYears': 'Enter a number from 0 to 18 years',
+    });
   });
 
   it('keys every problem by the path of its input', () => {

@@ -1,14 +1,18 @@
 import {
+  BAND_FIELDS,
   LIMIT_KEYS,
   REGIMEN_FIELD_LABELS,
   REGIMEN_FIELDS,
+  rulePopulationOf,
   validateLimitRules,
+  type BandField,
   type DoseUnit,
   type Drug,
   type FieldError,
   type LimitKey,
   type LimitRuleInput,
   type Limits,
+  type Population,
   type RegimenField,
 } from '@lockstep/shared';
 import { readNumber, type NumberFieldValue } from '@/lib/number-input';
@@ -16,7 +20,8 @@ import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 // The rules editor's form. Its paths are the API's (`rules.2.limits.demandDose.softMax`), so a
 // problem found here, by `validateLimitRules` or by the server lands on the same input.
 
-export type RuleFormLimits = Record<RegimenField, Record<LimitKey, NumberFieldValue>>;
+/** The four limits and, for a per-kg rule's dose fields, the absolute ceiling in the dose unit. */
+export type RuleFormLimits = Record<RegimenField, Record<LimitKey | 'ceiling', NumberFieldValue>>;
 
 // Type aliases, not interfaces: the form takes values as a string-keyed record.
 export type RuleFormValue = {
@@ -27,32 +32,55 @@ export type RuleFormValue = {
   /** Follows the drug: the server accepts only the drug's own dosing unit. */
   doseUnit: DoseUnit | null;
   perKg: boolean;
-  limits: RuleFormLimits;
-};
+  /** Adult, or paediatric within the bands (blank: open). */
+  population: Population;
+} & Record<BandField, NumberFieldValue> & {
+    limits: RuleFormLimits;
+  };
 
 export type RulesFormValues = { rules: RuleFormValue[] };
 
 function emptyLimits(): RuleFormLimits {
   const limits = {} as RuleFormLimits;
-  for (const field of REGIMEN_FIELDS) limits[field] = { hardMin: '', softMin: '', softMax: '', hardMax: '' };
+  for (const field of REGIMEN_FIELDS) limits[field] = { hardMin: '', softMin: '', softMax: '', hardMax: '', ceiling: '' };
   return limits;
 }
 
 export function emptyRuleForm(key: string, perKg: boolean): RuleFormValue {
-  return { key, drugId: null, concentrationPerMl: '', doseUnit: null, perKg, limits: emptyLimits() };
+  return {
+    key,
+    drugId: null,
+    concentrationPerMl: '',
+    doseUnit: null,
+    perKg,
+    // A weight-based ward's new rule starts as a children's rule; its bands are for the pharmacist.
+    population: perKg ? 'paediatric' : 'adult',
+    minAgeYears: '',
+    maxAgeYears: '',
+    minWeightKg: '',
+    maxWeightKg: '',
+    limits: emptyLimits(),
+  };
 }
 
 export function ruleToForm(rule: LimitRuleInput, key: string): RuleFormValue {
   const limits = emptyLimits();
   for (const field of REGIMEN_FIELDS) {
     for (const limit of LIMIT_KEYS) limits[field][limit] = rule.limits[field]?.[limit] ?? '';
+    limits[field].ceiling = rule.limits[field]?.ceiling ?? '';
   }
+  const population = rulePopulationOf(rule);
   return {
     key,
     drugId: String(rule.drugId),
     concentrationPerMl: rule.concentrationPerMl,
     doseUnit: rule.doseUnit,
     perKg: rule.perKg,
+    population: population.population,
+    minAgeYears: population.minAgeYears ?? '',
+    maxAgeYears: population.maxAgeYears ?? '',
+    minWeightKg: population.minWeightKg ?? '',
+    maxWeightKg: population.maxWeightKg ?? '',
     limits,
   };
 }
@@ -83,13 +111,25 @@ export function readRulesForm(values: RulesFormValues, drugs: readonly Drug[]): 
           errors[`${path}.limits.${field}.${key}`] = 'Enter a number of 0 or more, or leave empty';
         else if (value !== null) fieldLimits[key] = value;
       }
+      const ceiling = readNumber(rule.limits[field].ceiling);
+      if (ceiling === undefined || (ceiling !== null && ceiling < 0))
+        errors[`${path}.limits.${field}.ceiling`] = 'Enter a number more than 0, or leave empty';
+      else if (ceiling !== null) fieldLimits.ceiling = ceiling;
       if (Object.keys(fieldLimits).length > 0) limits[field] = fieldLimits;
+    }
+    const bands = {} as Record<BandField, number | null>;
+    for (const band of BAND_FIELDS) {
+      const value = rule.population === 'paediatric' ? readNumber(rule[band]) : null;
+      if (value === undefined || (value !== null && value < 0))
+        errors[`${path}.${band}`] = 'Enter a number of 0 or more, or leave empty for no bound';
+      bands[band] = value ?? null;
     }
     return {
       drugId: drug?.id ?? 0,
       concentrationPerMl: concentration ?? 0,
       doseUnit: drug?.doseUnit ?? rule.doseUnit ?? 'mg',
       perKg: rule.perKg,
+      ...(rule.population === 'paediatric' ? { population: 'paediatric' as const, ...bands } : {}),
       limits,
     };
   });
@@ -97,8 +137,8 @@ export function readRulesForm(values: RulesFormValues, drugs: readonly Drug[]): 
   return { rules, errors };
 }
 
-const FIELD_PATH = /^rules\.(\d+)\.(drugId|concentrationPerMl|doseUnit|perKg)$/;
-const LIMIT_PATH = /^rules\.(\d+)\.limits\.(\w+)\.(hardMin|softMin|softMax|hardMax)$/;
+const FIELD_PATH = /^rules\.(\d+)\.(drugId|concentrationPerMl|doseUnit|perKg|population|minAgeYears|maxAgeYears|minWeightKg|maxWeightKg)$/;
+const LIMIT_PATH = /^rules\.(\d+)\.limits\.(\w+)\.(hardMin|softMin|softMax|hardMax|ceiling)$/;
 const RULE_PATH = /^rules\.(\d+)(?:\.limits\.(\w+))?/;
 
 function isRegimenField(name: string): name is RegimenField {

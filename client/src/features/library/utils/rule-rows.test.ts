@@ -34,6 +34,7 @@ describe('parameterRows', () => {
       label: 'Demand dose',
       unit: 'mg',
       limits: { hardMin: '0.05 mg', softMin: '0.1 mg', softMax: '0.4 mg', hardMax: '0.6 mg' },
+      ceiling: null,
     });
     expect(rows[1].limits).toEqual({ hardMin: '5 min', softMin: '6 min', softMax: '15 min', hardMax: '30 min' });
     expect(rows[2].limits).toEqual({ hardMin: null, softMin: null, softMax: '0.2 mg/h', hardMax: '0.4 mg/h' });
@@ -45,11 +46,14 @@ describe('parameterRows', () => {
       drugName: 'morphine',
       concentrationPerMl: 1,
       perKg: true,
-      limits: { demandDose: { softMax: 0.02 }, lockoutMinutes: { hardMin: 5 }, basalRatePerHour: { hardMax: 0.004 } },
+      limits: { demandDose: { softMax: 0.02, ceiling: 1.5 }, lockoutMinutes: { hardMin: 5 }, basalRatePerHour: { hardMax: 0.004 } },
     };
     const rows = parameterRows(paediatric);
     expect(rows.map((row) => row.unit)).toEqual(['mg/kg', 'min', 'mg/kg/h']);
     expect(rows[0].limits.softMax).toBe('0.02 mg/kg');
+    // The absolute ceiling is in the dose unit itself, whatever the weight (demo value, invented).
+    expect(rows[0].ceiling).toBe('1.5 mg');
+    expect(rows[1].ceiling).toBeNull();
     expect(rows[2].limits.hardMax).toBe('0.004 mg/kg/h');
   });
 

@@ -13,7 +13,8 @@ import {
 } from '@lockstep/shared';
 
 /** What the screens need of a rule: the saved (`LimitRuleResponse`) and parsed (`NamedRule`) kinds both fit. */
-export type RuleView = Pick<NamedRule, 'drugId' | 'drugName' | 'concentrationPerMl' | 'doseUnit' | 'perKg' | 'limits'>;
+export type RuleView = Pick<NamedRule, 'drugId' | 'drugName' | 'concentrationPerMl' | 'doseUnit' | 'perKg' | 'limits'> &
+  Partial<Pick<NamedRule, 'population' | 'minAgeYears' | 'maxAgeYears' | 'minWeightKg' | 'maxWeightKg'>>;
 
 export const LIMIT_LABELS: Record<LimitKey, string> = {
   hardMin: 'Hard min',
@@ -29,6 +30,8 @@ export interface ParameterRow {
   unit: string;
   /** Each limit in safe display form ('0.5 mg'), or null where the limit is not set. */
   limits: Record<LimitKey, string | null>;
+  /** A per-kg rule's absolute ceiling for the field, in the dose unit ('1.5 mg'), or null. */
+  ceiling: string | null;
 }
 
 /** "HYDROmorphone 0.2 mg/mL": tall-man name and the concentration in safe form. */
@@ -62,6 +65,7 @@ export function parameterRows(rule: RuleView): ParameterRow[] {
         softMax: formatLimit(limits.softMax, field, rule.doseUnit, rule.perKg),
         hardMax: formatLimit(limits.hardMax, field, rule.doseUnit, rule.perKg),
       },
+      ceiling: rule.perKg ? formatLimit(limits.ceiling, field, rule.doseUnit, false) : null,
     });
   }
   return rows;
