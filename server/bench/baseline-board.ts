@@ -14,7 +14,7 @@ const HOUR = 3_600_000;
 const SQL = {
   ward: `SELECT * FROM wards WHERE id = ?`,
   orders: `SELECT o.id, o.status, o.patientId, o.doseUnit, o.concentrationPerMl, o.demandDose, o.lockoutMinutes, o.basalRatePerHour, o.oneHourLimit, o.fourHourLimit,
-      o.reviewDate, o.signedAt, o.statusChangedAt, o.startedAt, p.bed, p.familyName, p.givenName, p.mrn, p.dateOfBirth, p.weightKg, d.genericName
+      o.reviewDate, o.signedAt, o.statusChangedAt, o.startedAt, p.bed, p.familyName, p.givenName, p.mrn, p.dateOfBirth, p.weightKg, p.noKnownAllergies, d.genericName
     FROM pca_orders o LEFT JOIN patients p ON p.id = o.patientId LEFT JOIN drugs d ON d.id = o.drugId
     WHERE o.status IN ('awaiting_verification', 'verified', 'active') AND p.wardId = ?`,
   observations: (n: number) =>
@@ -30,6 +30,7 @@ const SQL = {
   boluses: (n: number) => `SELECT id, orderId, amount, at FROM clinician_boluses WHERE orderId IN (${marks(n)}) AND at >= ?`,
   discrepancies: (n: number) =>
     `SELECT r.id, r.at, s.orderId FROM release_reconciliations r INNER JOIN syringe_releases s ON s.id = r.releaseId WHERE s.orderId IN (${marks(n)}) AND r.mustReport = 1`,
+  allergies: (n: number) => `SELECT id, patientId, substance, reaction, severity FROM patient_allergies WHERE patientId IN (${marks(n)})`,
   signoffs: `SELECT s.*, u.displayName FROM handover_signoffs s LEFT JOIN users u ON u.id = s.nurseId WHERE s.wardId = ? AND s.shiftDate = ? AND s.shift = ?`,
 };
 
@@ -52,6 +53,12 @@ export class BaselineBoard {
     if (!ward) return null;
     const shift = shiftWindow(now, ward.dayShiftStart, ward.nightShiftStart);
     const orders = (this.statement('orders', SQL.orders).all(wardId) as Row[]).map(toOrder);
+    const patientIds = [...new Set(orders.map((order) => order.patientId))];
+    const allergies =
+      patientIds.length === 0
+        ? []
+        : (this.statement(`allergies:${patientIds.length}`, SQL.allergies(patientIds.length)).all(...patientIds) as Row[]);
+    for (const order of orders) order.patient.allergies = allergies.filter((row) => row.patientId === order.patientId) as never;
     const ids = orders.map((order) => order.id);
     const inputs = ids.length === 0 ? emptyInputs() : this.inputs(ids, wardId, shift, now);
     return {
@@ -126,6 +133,8 @@ function toOrder(row: Row): PcaOrder {
       mrn: row.mrn,
       dateOfBirth: row.dateOfBirth,
       weightKg: row.weightKg,
+      noKnownAllergies: row.noKnownAllergies === 1,
+      allergies: [],
     },
     drug: { genericName: row.genericName },
   } as unknown as PcaOrder;

@@ -36,7 +36,17 @@ const ORDER_COLUMNS = {
   signedAt: true,
   statusChangedAt: true,
   startedAt: true,
-  patient: { id: true, bed: true, familyName: true, givenName: true, mrn: true, dateOfBirth: true, weightKg: true },
+  patient: {
+    id: true,
+    bed: true,
+    familyName: true,
+    givenName: true,
+    mrn: true,
+    dateOfBirth: true,
+    weightKg: true,
+    noKnownAllergies: true,
+    allergies: { id: true, substance: true, reaction: true, severity: true },
+  },
   drug: { id: true, genericName: true },
 } as const;
 const READING_COLUMNS = ['orderId', 'releaseId', 'at', 'attempts', 'delivered', 'volumeInfusedMl'] as const;
@@ -79,7 +89,7 @@ export class HandoverBoardService {
     const orders = await manager.find(PcaOrder, {
       select: ORDER_COLUMNS,
       where: { status: In([...ON_BOARD]), patient: { wardId } },
-      relations: { patient: true, drug: true },
+      relations: { patient: { allergies: true }, drug: true },
     });
     const ids = orders.map((order) => order.id);
     const inputs = ids.length === 0 ? emptyInputs() : await this.inputs(ids, wardId, shift, now);

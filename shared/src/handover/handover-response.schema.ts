@@ -5,6 +5,7 @@ import { observationDueSchema } from '../observations/observation-due.js';
 import { SEDATION_LEVELS } from '../observations/sedation-scale.js';
 import { flagSchema } from '../orders/order-response.schema.js';
 import { orderStatusSchema } from '../orders/order-status.js';
+import { allergySeveritySchema } from '../patients/patient.schema.js';
 import {
   SHIFTS,
   SIGNOFF_ROLES,
@@ -39,7 +40,15 @@ const rowSchema: z.ZodType<HandoverRow> = answer(
     orderId: z.number().int(),
     status: orderStatusSchema,
     bed: z.string(),
-    patient: z.object({ id: z.number().int(), name: z.string(), mrn: z.string(), ageYears: z.number(), weightKg: z.number().nullable() }),
+    patient: z.object({
+      id: z.number().int(),
+      name: z.string(),
+      mrn: z.string(),
+      ageYears: z.number(),
+      weightKg: z.number().nullable(),
+      allergies: z.array(z.object({ substance: z.string(), reaction: z.string(), severity: allergySeveritySchema })),
+      noKnownAllergies: z.boolean(),
+    }),
     drugName: z.string(),
     doseUnit: doseUnitSchema,
     concentrationPerMl: z.number(),

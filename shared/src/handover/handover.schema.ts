@@ -1,4 +1,5 @@
 import type { DoseUnit } from '../drugs/drug.schema.js';
+import type { AllergySeverity } from '../dose/types.js';
 import type { SedationLevel } from '../observations/sedation-scale.js';
 import type { ObservationDue } from '../observations/observation-due.js';
 import type { FlagResponse } from '../orders/order.schema.js';
@@ -30,7 +31,16 @@ export type HandoverRow = {
   orderId: number;
   status: OrderStatus;
   bed: string;
-  patient: { id: number; name: string; mrn: string; ageYears: number; weightKg: number | null };
+  patient: {
+    id: number;
+    name: string;
+    mrn: string;
+    ageYears: number;
+    weightKg: number | null;
+    /** Every recorded allergy, most severe first; `noKnownAllergies` says whether an empty list was recorded as such. */
+    allergies: { substance: string; reaction: string; severity: AllergySeverity }[];
+    noKnownAllergies: boolean;
+  };
   drugName: string;
   doseUnit: DoseUnit;
   concentrationPerMl: number;

@@ -1,6 +1,6 @@
 import type { ReactNode } from 'react';
 import { Group, Stack, Text, VisuallyHidden } from '@mantine/core';
-import { IconAlertTriangle, IconClock, IconHourglassLow } from '@tabler/icons-react';
+import { IconAlertTriangle, IconClock, IconHourglassLow, IconQuestionMark } from '@tabler/icons-react';
 import {
   drugAndConcentration,
   FLAG_SEVERITY_LABELS,
@@ -11,11 +11,12 @@ import {
   ORDER_STATUS_LABELS,
   SEDATION_DESCRIPTIONS,
 } from '@lockstep/shared';
+import { ALLERGY_SEVERITY_LOOK } from '@/components/ui/allergy-list';
 import { SeverityLabel } from '@/components/ui/severity-label';
 import { formatNearTime } from '@/utils/clock';
 import { formatElapsed } from '@/utils/duration';
 import { hasOpenFlags, rowSeverity } from '../utils/board-filters';
-import { lastFourHours, patientFacts } from '../utils/board-format';
+import { allergyLines, lastFourHours, patientFacts } from '../utils/board-format';
 
 // The board's cells, shared by the live table and the printed sheet. Each says in words what it
 // shows, so a cell read on its own (or on paper) needs no colour to be understood.
@@ -47,6 +48,33 @@ export function PatientCell({ patient }: { patient: HandoverRow['patient'] }) {
       <Dimmed>
         MRN {patient.mrn} · {patientFacts(patient)}
       </Dimmed>
+      <PatientAllergies patient={patient} />
+    </Stack>
+  );
+}
+
+/** Each allergy on its own line with its severity as icon and word; anaphylaxis in bold red; an empty record says so. */
+function PatientAllergies({ patient }: { patient: HandoverRow['patient'] }) {
+  return (
+    <Stack gap={0} aria-label="Allergies">
+      {allergyLines(patient).map(({ text, severity }) => {
+        const look = severity ? ALLERGY_SEVERITY_LOOK[severity] : null;
+        const Icon = look?.Icon ?? (patient.noKnownAllergies ? null : IconQuestionMark);
+        return (
+          <Group key={text} gap={4} wrap="nowrap" data-severity={severity ?? undefined}>
+            {Icon ? (
+              <Icon size={12} aria-hidden color={`var(--mantine-color-${look?.color ?? 'orange'}-7)`} style={{ flex: 'none' }} />
+            ) : null}
+            <Text
+              size="xs"
+              fw={severity === 'anaphylaxis' ? 700 : 500}
+              c={severity === 'anaphylaxis' ? 'red.8' : severity ? undefined : 'dimmed'}
+            >
+              {text}
+            </Text>
+          </Group>
+        );
+      })}
     </Stack>
   );
 }

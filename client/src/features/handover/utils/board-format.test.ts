@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { HandoverRow } from '@lockstep/shared';
-import { formatShift, lastFourHours, patientFacts } from './board-format';
+import { allergyLines, formatShift, lastFourHours, patientFacts } from './board-format';
 
 // The demo's hydromorphone order (Harbour H07, invented). The regimen line itself is shared's formatRegimen.
 const hydromorphone: Pick<HandoverRow, 'drugName' | 'concentrationPerMl' | 'doseUnit' | 'regimen' | 'last4h'> = {
@@ -11,11 +11,30 @@ const hydromorphone: Pick<HandoverRow, 'drugName' | 'concentrationPerMl' | 'dose
   last4h: { attempts: 6, delivered: 4, dose: 0.8 },
 };
 
+const faleolo = { id: 3, name: 'FALEOLO, Tavita', mrn: 'KB100672', ageYears: 47, weightKg: 118, allergies: [], noKnownAllergies: true };
+
+describe('allergyLines', () => {
+  it('writes each allergy with its severity as a word, and says whether none are known or none recorded', () => {
+    expect(
+      allergyLines({
+        ...faleolo,
+        noKnownAllergies: false,
+        allergies: [
+          { substance: 'Latex', reaction: 'throat swelling', severity: 'anaphylaxis' },
+          { substance: 'morphine', reaction: 'itch', severity: 'intolerance' },
+        ],
+      }).map((line) => line.text),
+    ).toEqual(['Anaphylaxis: Latex (throat swelling)', 'Intolerance: morphine (itch)']);
+    expect(allergyLines(faleolo)).toEqual([{ text: 'No known allergies', severity: null }]);
+    expect(allergyLines({ ...faleolo, noKnownAllergies: false })).toEqual([{ text: 'Allergies not recorded', severity: null }]);
+  });
+});
+
 describe('board formatting', () => {
   it('writes the last 4 hours and the patient facts', () => {
     expect(lastFourHours(hydromorphone)).toBe('6 / 4 · 0.8 mg');
-    expect(patientFacts({ id: 3, name: 'FALEOLO, Tavita', mrn: 'KB100672', ageYears: 47, weightKg: 118 })).toBe('47 y · 118 kg');
-    expect(patientFacts({ id: 3, name: 'X', mrn: 'Y', ageYears: 47, weightKg: null })).toBe('47 y · weight not recorded');
+    expect(patientFacts({ ...faleolo, weightKg: 118 })).toBe('47 y · 118 kg');
+    expect(patientFacts({ ...faleolo, weightKg: null })).toBe('47 y · weight not recorded');
   });
 });
 

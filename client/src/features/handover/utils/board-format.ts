@@ -1,4 +1,12 @@
-import { formatDose, type HandoverBoard, type HandoverRow } from '@lockstep/shared';
+import {
+  ALLERGY_SEVERITY_LABELS,
+  ALLERGY_STATUS_TEXT,
+  allergyStatus,
+  formatDose,
+  type AllergySeverity,
+  type HandoverBoard,
+  type HandoverRow,
+} from '@lockstep/shared';
 import { formatClock } from '@/utils/clock';
 import { formatCalendarDate } from '@/utils/format-date';
 
@@ -12,6 +20,19 @@ export function formatShift(shift: HandoverBoard['shift'], timeZone?: string): s
 export function patientFacts(patient: HandoverRow['patient']): string {
   const weight = patient.weightKg === null ? 'weight not recorded' : formatDose(patient.weightKg, 'kg');
   return `${patient.ageYears} y · ${weight}`;
+}
+
+/**
+ * The patient's allergies as the board writes them, one line each, most severe first
+ * ("Anaphylaxis: Latex (throat swelling)"), or the words for none recorded / no known allergies.
+ */
+export function allergyLines(patient: HandoverRow['patient']): { text: string; severity: AllergySeverity | null }[] {
+  const status = allergyStatus(patient);
+  if (status !== 'recorded') return [{ text: ALLERGY_STATUS_TEXT[status], severity: null }];
+  return patient.allergies.map(({ substance, reaction, severity }) => ({
+    text: `${ALLERGY_SEVERITY_LABELS[severity]}: ${substance} (${reaction})`,
+    severity,
+  }));
 }
 
 /** "6 / 4 · 0.8 mg": demands attempted / delivered in the last 4 hours, and the dose given. */
