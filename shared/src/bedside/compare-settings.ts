@@ -1,6 +1,7 @@
 import { PUMP_SETTING_FIELDS, type PumpSettings, type SettingDifference } from './bedside.schema.js';
 
 // Values are typed by people from a pump display; compare decimals with a tolerance, not bit for bit.
+// 1e-9 is far below any pump's resolution: Lockstep's own, not a clinical value.
 const TOLERANCE = 1e-9;
 
 function same(a: number | null, b: number | null): boolean {

@@ -4,7 +4,7 @@ export const PUMP_TOTAL_FIELDS = ['attempts', 'delivered', 'volumeInfusedMl'] as
 export type PumpTotalField = (typeof PUMP_TOTAL_FIELDS)[number];
 export type PumpTotals = Record<PumpTotalField, number>;
 
-/** A device clock a little ahead of the server's is not "the future". */
+/** A device clock a little ahead of the server's is not "the future". One minute: Lockstep's own allowance, not a clinical value. */
 export const OBSERVATION_CLOCK_SKEW_MS = 60_000;
 
 type Reading = PumpTotals & { releaseId: number; at: string };

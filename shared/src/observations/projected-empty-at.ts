@@ -1,7 +1,7 @@
 import { hoursUntilEmpty } from '../dose/hours-until-empty.js';
 
 // A demand rate from readings minutes apart swings wildly (2 mL in 30 s is 240 mL/h); below this
-// gap only the basal rate is projected.
+// gap only the basal rate is projected. 15 minutes is Lockstep's own choice, not a clinical value.
 export const MIN_RATE_WINDOW_HOURS = 0.25;
 
 type VolumeReading = { at: string; volumeInfusedMl: number };

@@ -18,9 +18,10 @@ export const DEFAULT_WARD_POLICY: WardPolicy = {
   // Pain Manag Nurs 2011; Jungquist et al., 2020) [memory]. 60 / 120 minutes are local defaults.
   observationIntervalFirst24hMinutes: 60,
   observationIntervalMinutes: 120,
-  // Respiratory rate < 8/min is widely used [practice]; studies used < 10/min (Overdyk et al., Anesth Analg 2007).
+  // Respiratory rate < 8/min is widely used [practice]; studies used < 10/min (Overdyk FJ et al., Anesth Analg
+  // 2007;105(2):412-418) [memory].
   respiratoryRateThreshold: 8,
-  // SpO2 < 90 % (Overdyk et al., Anesth Analg 2007).
+  // SpO2 < 90 % (Overdyk FJ et al., Anesth Analg 2007;105(2):412-418) [memory].
   spo2Threshold: 90,
   syringeLowThresholdHours: 2, // [practice]
   reconciliationToleranceMl: 0.5, // local setting [practice]
