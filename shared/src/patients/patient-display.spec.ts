@@ -60,13 +60,13 @@ describe('patient display', () => {
   it('counts a tolerance only with a basis that meets the FDA definition, and says so', () => {
     const claimedBare = { ...naive, opioidTolerant: true, allergies: [], noKnownAllergies: true };
     expect(patientRiskFactors(claimedBare)).toEqual([]);
-    expect(opioidToleranceText(claimedBare)).toContain('checked as opioid naive');
+    expect(opioidToleranceText(claimedBare)).toContain('checked as opioid-naive');
     expect(opioidToleranceText({ opioidTolerant: true, toleranceOralMorphineMgPerDay: 90, toleranceDays: 30 })).toBe(
       'Opioid tolerant: 90 mg oral morphine a day for 30 days',
     );
     expect(opioidToleranceText({ opioidTolerant: false, toleranceOralMorphineMgPerDay: 30, toleranceDays: 3 })).toBe(
-      'Opioid naive (30 mg oral morphine a day for 3 days)',
+      'Opioid-naive (30 mg oral morphine a day for 3 days)',
     );
-    expect(opioidToleranceText(naive)).toBe('Opioid naive');
+    expect(opioidToleranceText(naive)).toBe('Opioid-naive');
   });
 });

@@ -111,6 +111,6 @@ export function opioidToleranceText(patient: {
   const days = patient.toleranceDays;
   const basis = mg !== null && days !== null ? `${formatDose(mg, 'mg')} oral morphine a day for ${days} day${days === 1 ? '' : 's'}` : null;
   if (isOpioidTolerant(patient)) return `Opioid tolerant: ${basis}`;
-  if (patient.opioidTolerant) return 'Recorded as tolerant without a basis that meets the definition: checked as opioid naive';
-  return basis ? `Opioid naive (${basis})` : 'Opioid naive';
+  if (patient.opioidTolerant) return 'Recorded as tolerant without a basis that meets the definition: checked as opioid-naive';
+  return basis ? `Opioid-naive (${basis})` : 'Opioid-naive';
 }

@@ -61,7 +61,7 @@ describe('PatientBanner', () => {
   // US FDA definition of opioid tolerance: at least 60 mg oral morphine a day for a week or longer.
   it('shows the tolerance with its basis, and a claim without one as checked naive', () => {
     expect(render(patient)).toContain('Opioid tolerant: 90 mg oral morphine a day for 30 days');
-    expect(render({ ...patient, toleranceOralMorphineMgPerDay: null, toleranceDays: null })).toContain('checked as opioid naive');
+    expect(render({ ...patient, toleranceOralMorphineMgPerDay: null, toleranceDays: null })).toContain('checked as opioid-naive');
   });
 
   it('shows when the weight was measured, and an empty allergy record as not recorded', () => {

@@ -56,7 +56,7 @@ export function ToleranceForm({ patient, canEdit }: { patient: Patient; canEdit:
               <NumberField label="For how many days" integer withAsterisk={false} w={160} {...form.getInputProps('days')} />
             </Group>
             <Text size="sm" aria-live="polite">
-              With this basis: <strong>{request.opioidTolerant ? 'opioid tolerant' : 'opioid naive'}</strong>
+              With this basis: <strong>{request.opioidTolerant ? 'opioid tolerant' : 'opioid-naive'}</strong>
             </Text>
             {refusal.length > 0 ? (
               <Alert color="red" icon={<IconAlertCircle size={16} aria-hidden />}>
