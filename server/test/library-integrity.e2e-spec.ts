@@ -126,7 +126,7 @@ describe('library integrity', () => {
 
     const sentBack = await request(t.http)
       .post(url)
-      .set(as(lin))
+      .set({ ...as(lin), 'Idempotency-Key': 'c2f5a7e0-send-back-1' })
       .send({ signature: { password: DEMO_PASSWORD }, comment: `  ${comment} ` })
       .expect(200);
     expect(sentBack.body).toMatchObject({ status: 'draft', submittedAt: null, sentBack: { byName: 'Lin Park', comment } });

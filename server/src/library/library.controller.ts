@@ -24,7 +24,7 @@ import {
   type LibraryVersionDetail,
   PHARMACY_ROLES,
 } from '@lockstep/shared';
-import { ApiBody, ApiConsumes, ApiCreatedResponse, ApiOkResponse, ApiOperation, ApiProduces } from '@nestjs/swagger';
+import { ApiBody, ApiConsumes, ApiCreatedResponse, ApiHeader, ApiOkResponse, ApiOperation, ApiProduces } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 import { Roles } from '../auth/decorators/roles.decorator.js';
@@ -138,6 +138,11 @@ export class LibraryController {
 
   @ApiOperation({
     summary: 'Send a submitted version back to draft with a comment (signed; a pharmacist who did not write it)',
+  })
+  @ApiHeader({
+    name: 'Idempotency-Key',
+    required: false,
+    description: 'Sent by the client with each write; a send-back repeated after it succeeded is refused (409), and nothing changes',
   })
   @ApiErrors(404, 409)
   @Post('versions/:id/send-back')

@@ -7,6 +7,8 @@ export interface SendBackVersionVariables {
   versionId: number;
   comment: string;
   password: string;
+  /** One key per send-back, sent as `Idempotency-Key` like the other writes (the same for a retry). */
+  idempotencyKey: string;
 }
 
 /**
@@ -14,13 +16,14 @@ export interface SendBackVersionVariables {
  * wrong password (on `signature.password`), 403 for a pharmacist who wrote the version (they
  * withdraw it instead), 409 when it is no longer awaiting approval.
  */
-export function sendBackVersion({ versionId, comment, password }: SendBackVersionVariables): Promise<LibraryVersionDetail> {
+export function sendBackVersion({ versionId, comment, password, idempotencyKey }: SendBackVersionVariables): Promise<LibraryVersionDetail> {
   const body: SendBackVersionRequest = { signature: { password }, comment };
   return apiRequest(`/library/versions/${versionId}/send-back`, {
     method: 'POST',
     body,
     schema: libraryVersionDetailSchema,
     signed: true,
+    headers: { 'Idempotency-Key': idempotencyKey },
   });
 }
 

@@ -18,6 +18,8 @@ export interface SendBackModalProps {
 export function SendBackModal({ version, onClose }: SendBackModalProps) {
   const sendBack = useSendBackVersion();
   const [refusal, setRefusal] = useState<string | null>(null);
+  // One key for this send-back, so a retry of the same one carries the same key.
+  const [idempotencyKey] = useState(() => crypto.randomUUID());
   const form = useForm({
     initialValues: { comment: '', signature: { password: '' } },
     validate: zod4Resolver(sendBackVersionSchema),
@@ -33,7 +35,7 @@ export function SendBackModal({ version, onClose }: SendBackModalProps) {
       onSubmit={form.onSubmit(({ comment, signature }) => {
         setRefusal(null);
         sendBack.mutate(
-          { versionId: version.id, comment: comment.trim(), password: signature.password },
+          { versionId: version.id, comment: comment.trim(), password: signature.password, idempotencyKey },
           {
             onSuccess: (draft) => {
               notifySuccess('Sent back', `Version ${draft.number} is a draft again; your comment is shown on it.`);
