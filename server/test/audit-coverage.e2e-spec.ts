@@ -355,11 +355,12 @@ describe('every state-changing route writes its audit event', () => {
       'library-version.delete',
     );
 
-    // The patient record: an allergy entry added and removed, "no known allergies", the tolerance basis, a new weight.
+    // The patient record: an allergy entry added (clearing "no known allergies") and removed, "no known allergies"
+    // recorded again, the tolerance basis, a new weight.
     const withAllergy = await step(
       'post',
       '/api/patients/:id/allergies',
-      '/api/patients/6/allergies',
+      '/api/patients/8/allergies',
       'prescriber',
       { substance: 'Chlorhexidine', reaction: 'hives', severity: 'allergy' },
       201,
@@ -369,7 +370,7 @@ describe('every state-changing route writes its audit event', () => {
     await step(
       'delete',
       '/api/patients/:id/allergies/:allergyId',
-      `/api/patients/6/allergies/${added.id}`,
+      `/api/patients/8/allergies/${added.id}`,
       'pharmacist',
       undefined,
       200,

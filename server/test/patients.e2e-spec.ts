@@ -132,6 +132,24 @@ describe('the patient record', () => {
       });
     });
 
+    it('takes an Idempotency-Key; "no known allergies" sent again records nothing, and a repeated removal is 404', async () => {
+      const patientId = await newPatient();
+      const key = { 'Idempotency-Key': 'f3c2a6d0-1b2c-4d5e-8f90-123456789abc' };
+      const added = (
+        await addAllergy(patientId, { substance: 'Plaster', reaction: 'blisters', severity: 'intolerance' }).set(key).expect(201)
+      ).body as Patient;
+      const remove = () =>
+        request(http()).delete(`/api/patients/${patientId}/allergies/${added.allergies[0].id}`).set(as('prescriber')).set(key);
+      await remove().expect(200);
+      await remove().expect(404);
+      const noneKnown = () => request(http()).post(`/api/patients/${patientId}/no-known-allergies`).set(as('prescriber')).set(key);
+      await noneKnown().expect(200);
+      const recorded = await latestPatientEvent(patientId);
+      expect(recorded.action).toBe('patient.no-known-allergies');
+      expect(((await noneKnown().expect(200)).body as Patient).noKnownAllergies).toBe(true);
+      expect((await latestPatientEvent(patientId)).id).toBe(recorded.id);
+    });
+
     it('lets prescribers and pharmacists edit allergies, not nurses', async () => {
       const body = { substance: 'Latex', reaction: 'hives', severity: 'allergy' };
       await addAllergy(1, body, 'nurse').expect(403);
@@ -253,6 +271,20 @@ describe('the patient record', () => {
         .set(as('pharmacist'))
         .send({ weightKg: 81, measuredOn: today() })
         .expect(403);
+    });
+
+    it('records nothing for the same weight and day sent again', async () => {
+      const patientId = await newPatient();
+      const post = () =>
+        request(http())
+          .post(`/api/patients/${patientId}/weights`)
+          .set(as('nurse'))
+          .send({ weightKg: 79.9, measuredOn: today() })
+          .expect(201);
+      await post();
+      const recorded = await latestPatientEvent(patientId);
+      await post();
+      expect((await latestPatientEvent(patientId)).id).toBe(recorded.id);
     });
 
     it('refuses a day in the future or before birth, and a weight of 0, infinite or over 500 kg, naming the field', async () => {

@@ -1,6 +1,6 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, Post, Put, Query } from '@nestjs/common';
 import { PATIENT_RECORD_ROLES, WEIGHT_ROLES, type Patient } from '@lockstep/shared';
-import { ApiOperation } from '@nestjs/swagger';
+import { ApiHeader, ApiOperation } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 import { Roles } from '../auth/decorators/roles.decorator.js';
@@ -9,6 +9,13 @@ import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
 import { AddAllergyDto, OpioidToleranceDto, RecordWeightDto } from './dto/patient-record.dto.js';
 import { PatientQueryDto } from './dto/patient-query.dto.js';
 import { PatientsService } from './patients.service.js';
+
+/** The `Idempotency-Key` header every write takes: there is no replay store; each route says what a repeat does. */
+const idempotencyKey = (repeat: string) => ({
+  name: 'Idempotency-Key',
+  required: false,
+  description: `Sent by the client with each write; ${repeat}`,
+});
 
 @Controller('patients')
 export class PatientsController {
@@ -28,6 +35,7 @@ export class PatientsController {
   }
 
   @ApiOperation({ summary: 'Record an allergy (a formulary drug or free text, the reaction and its severity)' })
+  @ApiHeader(idempotencyKey('an entry already recorded is refused (400 on substance), and nothing changes'))
   @ApiErrors(404)
   @Post(':id/allergies')
   @Roles(...PATIENT_RECORD_ROLES)
@@ -36,6 +44,7 @@ export class PatientsController {
   }
 
   @ApiOperation({ summary: 'Remove an allergy entry recorded in error (the audit trail keeps it)' })
+  @ApiHeader(idempotencyKey('a removal repeated after it succeeded is 404 (the entry is gone), and nothing changes'))
   @ApiErrors(404)
   @Delete(':id/allergies/:allergyId')
   @Roles(...PATIENT_RECORD_ROLES)
@@ -48,6 +57,7 @@ export class PatientsController {
   }
 
   @ApiOperation({ summary: 'Record that the patient has no known allergies (refused while entries exist)' })
+  @ApiHeader(idempotencyKey('"no known allergies" already recorded changes and records nothing'))
   @ApiErrors(404, 409)
   @Post(':id/no-known-allergies')
   @HttpCode(200)
@@ -57,6 +67,7 @@ export class PatientsController {
   }
 
   @ApiOperation({ summary: 'Record opioid tolerance and its basis (at least 60 mg oral morphine a day for a week or longer)' })
+  @ApiHeader(idempotencyKey('the same tolerance and basis again changes and records nothing'))
   @ApiErrors(404)
   @Put(':id/opioid-tolerance')
   @Roles(...PATIENT_RECORD_ROLES)
@@ -65,6 +76,7 @@ export class PatientsController {
   }
 
   @ApiOperation({ summary: 'Record a new weight and the day it was measured' })
+  @ApiHeader(idempotencyKey('the same weight and day again changes and records nothing'))
   @ApiErrors(404)
   @Post(':id/weights')
   @Roles(...WEIGHT_ROLES)

@@ -94,7 +94,7 @@ export class PatientsService {
     return this.get(id);
   }
 
-  /** Records "no known allergies" (again, if already recorded: each confirmation is audited); refused while entries exist. */
+  /** Records "no known allergies"; refused while entries exist. Already recorded: nothing changes and nothing is recorded (a repeated request is harmless). */
   async recordNoKnownAllergies(id: number, user: AuthUser): Promise<PatientResponse> {
     await this.patients.manager.transaction(async (manager) => {
       const patient = await this.lockedPatient(manager, id);
@@ -103,6 +103,7 @@ export class PatientsService {
         throw new ConflictException(
           `The patient has ${entries} recorded allerg${entries === 1 ? 'y' : 'ies'}: remove the entries before recording no known allergies`,
         );
+      if (patient.noKnownAllergies) return;
       await manager.update(Patient, { id }, { noKnownAllergies: true });
       await recordAudit(manager, user, {
         action: 'patient.no-known-allergies',
@@ -134,12 +135,13 @@ export class PatientsService {
     return this.get(id);
   }
 
-  /** A new weight and its day: not after today anywhere on Earth, not before birth. Every measurement is audited. */
+  /** A new weight and its day: not after today anywhere on Earth, not before birth. The same weight and day again records nothing. */
   async recordWeight(id: number, body: RecordWeightDto, user: AuthUser): Promise<PatientResponse> {
     await this.patients.manager.transaction(async (manager) => {
       const patient = await this.lockedPatient(manager, id);
       const problem = weightDateProblem(body.measuredOn, patient.dateOfBirth, latestTodayAnywhere(new Date()));
       if (problem) throw fieldError('measuredOn', problem);
+      if (patient.weightKg === body.weightKg && patient.weightMeasuredOn === body.measuredOn) return;
       await manager.update(Patient, { id }, { weightKg: body.weightKg, weightMeasuredOn: body.measuredOn });
       await recordAudit(manager, user, {
         action: 'patient.weight-record',
