@@ -59,6 +59,14 @@ describe('POST /api/orders/preview', () => {
     const response = await preview({ ...regimen, demandDose: 10 }).expect(200);
     expect(response.body.findings).toEqual([
       { field: 'demandDose', severity: 'hard', code: 'limit.hard-high', message: expect.stringContaining('10 mg') },
+      // 10 mg every 10 minutes could give 60 mg an hour, held to the 4-hour limit of 30 mg: still
+      // over the demo rule's 15 mg hard maximum an hour.
+      {
+        field: 'oneHourLimit',
+        severity: 'hard',
+        code: 'possible.one-hour.hard-high',
+        message: expect.stringContaining('could give up to 30 mg in an hour'),
+      },
     ]);
   });
 
