@@ -1,7 +1,7 @@
 import { isChild } from '../patients/adult-age.js';
 import { IMPLAUSIBLE_WEIGHT_Z, WEIGHT_FOR_AGE_REFERENCE, weightPlausibility } from '../patients/growth-reference.js';
 import { withoutFloatNoise } from './float-noise.js';
-import { formatDose } from './format-dose.js';
+import { formatDose, formatLimit } from './format-dose.js';
 import { isUsableNumber } from './order-number-findings.js';
 import { DOSE_FIELDS, REGIMEN_FIELD_LABELS, regimenFieldUnit } from './regimen-fields.js';
 import type { Finding, LimitRule, OrderCheckContext, PatientFactors, Regimen, RegimenField } from './types.js';
@@ -125,7 +125,7 @@ function ceilingFindings(r: Regimen, rule: LimitRule): Finding[] {
         field,
         severity: 'hard',
         code: 'limit.ceiling',
-        message: `${REGIMEN_FIELD_LABELS[field]} ${formatDose(value, unit)} is above the rule's absolute ceiling ${formatDose(ceiling, unit)}, whatever the weight`,
+        message: `${REGIMEN_FIELD_LABELS[field]} ${formatDose(value, unit)} is above the rule's absolute ceiling ${formatLimit(ceiling, unit)}, whatever the weight`,
       });
     }
   }

@@ -1,4 +1,4 @@
-import { formatDose } from '../dose/format-dose.js';
+import { formatLimit } from '../dose/format-dose.js';
 import { DOSE_FIELDS, REGIMEN_FIELD_LABELS } from '../dose/regimen-fields.js';
 import type { Limits, RegimenField } from '../dose/types.js';
 import { ADULT_AGE_YEARS } from '../patients/adult-age.js';
@@ -184,7 +184,7 @@ function ceilingProblems(
       if (typeof adultMax === 'number' && ceiling > adultMax) {
         problems.push({
           path: at,
-          message: `${label}: the ceiling ${formatDose(ceiling, rule.doseUnit)} is above the adult hard maximum ${formatDose(adultMax, rule.doseUnit)} (${adult.where})`,
+          message: `${label}: the ceiling ${formatLimit(ceiling, rule.doseUnit)} is above the adult hard maximum ${formatLimit(adultMax, rule.doseUnit)} (${adult.where})`,
         });
         break;
       }
