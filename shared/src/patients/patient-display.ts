@@ -43,7 +43,7 @@ export function sortAllergies<T extends { substance: string; severity: AllergySe
 }
 
 /** One entry in words: "Morphine: itch (Intolerance)". */
-export function allergyText(allergy: { substance: string; reaction: string; severity: AllergySeverity }): string {
+function allergyText(allergy: { substance: string; reaction: string; severity: AllergySeverity }): string {
   return `${allergy.substance}: ${allergy.reaction} (${ALLERGY_SEVERITY_LABELS[allergy.severity]})`;
 }
 

@@ -10,7 +10,7 @@ export const ALLERGY_SEVERITIES = ['intolerance', 'allergy', 'anaphylaxis'] as c
 export const allergySeveritySchema = z.enum(ALLERGY_SEVERITIES);
 
 /** One recorded allergy: a formulary drug (`drugId`) or free text, the reaction, its severity, who recorded it and when. */
-export const patientAllergyEntrySchema = z.object({
+const patientAllergyEntrySchema = z.object({
   id: z.number().int(),
   /** The formulary drug, or null for free text (a drug not on the formulary, a food, latex…). */
   drugId: z.number().int().nullable(),

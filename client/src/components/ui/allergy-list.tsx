@@ -18,7 +18,7 @@ export const ALLERGY_SEVERITY_LOOK: Readonly<Record<AllergySeverity, { Icon: Com
     intolerance: { Icon: IconInfoCircle, color: 'yellow', filled: false },
   };
 
-export function AllergySeverityBadge({ severity }: { severity: AllergySeverity }) {
+function AllergySeverityBadge({ severity }: { severity: AllergySeverity }) {
   const { Icon, color, filled } = ALLERGY_SEVERITY_LOOK[severity];
   return (
     <Badge color={color} variant={filled ? 'filled' : 'light'} leftSection={<Icon size={14} aria-hidden />} style={{ flex: 'none' }}>

@@ -3,7 +3,7 @@ import type { MigrationInterface, QueryRunner } from 'typeorm';
 /** The words the old free-text field used for "none known"; such a record becomes "no known allergies". */
 const NONE_KNOWN = new Set(['none', 'nil', 'nka', 'nkda', 'none known', 'no known allergies', 'no known drug allergies']);
 
-export type MigratedAllergy = { substance: string; reaction: string };
+type MigratedAllergy = { substance: string; reaction: string };
 
 /**
  * The entries in one old free-text allergy field: split on `,` or `;` outside parentheses, text in

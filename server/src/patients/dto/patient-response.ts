@@ -3,7 +3,7 @@ import type { PatientAllergy } from '../entities/patient-allergy.entity.js';
 import type { Patient } from '../entities/patient.entity.js';
 
 /** Expects `recordedBy` to be loaded. */
-export function toPatientAllergyResponse(allergy: PatientAllergy): PatientAllergyEntry {
+function toPatientAllergyResponse(allergy: PatientAllergy): PatientAllergyEntry {
   return {
     id: allergy.id,
     drugId: allergy.drugId,
