@@ -1,12 +1,16 @@
 import { REGIMEN_FIELDS } from '../dose/regimen-fields.js';
 import type { RegimenField } from '../dose/types.js';
-import { LIMIT_KEYS, type LimitKey, type LimitRuleInput } from './library.schema.js';
+import { LIMIT_KEYS, type LimitRuleInput } from './library.schema.js';
 import { ruleKey } from './rule-key.js';
 
 export type NamedRule = LimitRuleInput & { drugName: string };
 
+/** The limits a diff compares: the four limits and a per-kg rule's absolute ceiling. */
+export const DIFF_LIMIT_KEYS = [...LIMIT_KEYS, 'ceiling'] as const;
+export type DiffLimitKey = (typeof DIFF_LIMIT_KEYS)[number];
+
 export type RuleChange =
-  | { field: RegimenField; limit: LimitKey; from: number | null; to: number | null }
+  | { field: RegimenField; limit: DiffLimitKey; from: number | null; to: number | null }
   | { field: 'perKg'; from: boolean; to: boolean }
   | { field: 'doseUnit'; from: string; to: string };
 
@@ -45,7 +49,7 @@ function ruleChanges(before: NamedRule, after: NamedRule): RuleChange[] {
   if (before.doseUnit !== after.doseUnit) changes.push({ field: 'doseUnit', from: before.doseUnit, to: after.doseUnit });
   if (before.perKg !== after.perKg) changes.push({ field: 'perKg', from: before.perKg, to: after.perKg });
   for (const field of REGIMEN_FIELDS) {
-    for (const limit of LIMIT_KEYS) {
+    for (const limit of DIFF_LIMIT_KEYS) {
       const from = before.limits[field]?.[limit] ?? null;
       const to = after.limits[field]?.[limit] ?? null;
       if (from !== to) changes.push({ field, limit, from, to });

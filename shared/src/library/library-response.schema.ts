@@ -4,21 +4,27 @@ import { REGIMEN_FIELDS } from '../dose/regimen-fields.js';
 import { findingSchema } from '../orders/order-response.schema.js';
 import { ORDER_STATUSES } from '../orders/order-status.js';
 import type { RegimenField } from '../dose/types.js';
-import type { LibraryDiff, NamedRule, RuleChange } from './diff-library.js';
-import { LIMIT_KEYS, libraryVersionDetailSchema, libraryVersionSchema, limitRuleSchema } from './library.schema.js';
+import { DIFF_LIMIT_KEYS, type LibraryDiff, type NamedRule, type RuleChange } from './diff-library.js';
+import { libraryVersionDetailSchema, libraryVersionSchema, limitRuleSchema } from './library.schema.js';
 
 answer('LimitRule', limitRuleSchema);
 answer('LibraryVersion', libraryVersionSchema);
 answer('LibraryVersionDetail', libraryVersionDetailSchema);
 
 // An answered rule without its id: built from the answer's own (loose) shape, not the request's.
-export const namedRuleSchema: z.ZodType<NamedRule> = answer('NamedRule', limitRuleSchema.omit({ id: true }));
+// A rule read from a CSV file has no population fields when it is an adult rule (absent means adult).
+export const namedRuleSchema: z.ZodType<NamedRule> = answer(
+  'NamedRule',
+  limitRuleSchema
+    .omit({ id: true })
+    .partial({ population: true, minAgeYears: true, maxAgeYears: true, minWeightKg: true, maxWeightKg: true }),
+);
 
 const limitValue = z.number().nullable();
 const ruleChangeSchema: z.ZodType<RuleChange> = z.union([
   z.object({
     field: z.enum(REGIMEN_FIELDS as [RegimenField, ...RegimenField[]]),
-    limit: z.enum(LIMIT_KEYS),
+    limit: z.enum(DIFF_LIMIT_KEYS),
     from: limitValue,
     to: limitValue,
   }),

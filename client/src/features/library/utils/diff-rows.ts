@@ -6,7 +6,7 @@ import {
   type LibraryDiff,
   type RuleChange,
 } from '@lockstep/shared';
-import { formatLimit, isDoseUnit, LIMIT_LABELS, ruleTitle, type RuleView } from './rule-rows';
+import { DIFF_LIMIT_LABELS, formatLimit, isDoseUnit, ruleTitle, type RuleView } from './rule-rows';
 
 /** How a value moved; shown as icon and word. */
 export type ChangeDirection = 'raised' | 'lowered' | 'set' | 'cleared' | 'switched';
@@ -65,14 +65,16 @@ export function changeRows(diff: Pick<LibraryDiff, 'changed'>, rules: readonly R
       } else if (change.field === 'doseUnit') {
         rows.push({ key, rule: title, what: 'Dose unit', from: change.from, to: change.to, direction: 'switched', large: null });
       } else {
-        const from = formatLimit(change.from, change.field, oldUnit, oldPerKg) ?? NOT_SET;
-        const to = formatLimit(change.to, change.field, newUnit, newPerKg) ?? NOT_SET;
+        // A ceiling is in the dose unit itself, whatever the weight.
+        const ceiling = change.limit === 'ceiling';
+        const from = formatLimit(change.from, change.field, oldUnit, oldPerKg && !ceiling) ?? NOT_SET;
+        const to = formatLimit(change.to, change.field, newUnit, newPerKg && !ceiling) ?? NOT_SET;
         const size = limitChangeSize(change.from, change.to);
         const noLimit = (value: number | null, shown: string) => (value === null ? 'no limit' : shown);
         rows.push({
           key,
           rule: title,
-          what: `${REGIMEN_FIELD_LABELS[change.field]}, ${LIMIT_LABELS[change.limit].toLowerCase()}`,
+          what: `${REGIMEN_FIELD_LABELS[change.field]}, ${DIFF_LIMIT_LABELS[change.limit].toLowerCase()}`,
           from,
           to,
           direction: direction(change.from, change.to),

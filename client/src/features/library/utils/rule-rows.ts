@@ -6,6 +6,7 @@ import {
   regimenFieldUnit,
   ruleLabel,
   tallMan,
+  type DiffLimitKey,
   type DoseUnit,
   type LimitKey,
   type NamedRule,
@@ -22,6 +23,9 @@ export const LIMIT_LABELS: Record<LimitKey, string> = {
   softMax: 'Soft max',
   hardMax: 'Hard max',
 };
+
+/** The limits a diff row can name: the four and a per-kg rule's absolute ceiling. */
+export const DIFF_LIMIT_LABELS: Record<DiffLimitKey, string> = { ...LIMIT_LABELS, ceiling: 'Ceiling' };
 
 export interface ParameterRow {
   field: RegimenField;
