@@ -11,6 +11,7 @@ import {
   type LimitRuleResponse,
   type OrderDetail,
   type Patient,
+  REGIMEN_FIELDS,
   softFindingFields,
 } from '@lockstep/shared';
 import { paths } from '@/config/paths';
@@ -21,6 +22,7 @@ import { orderRequest, placeOrderErrors, unsignedOrderErrors } from '../utils/or
 import { emptyOrderForm, valuesFromOrder, type OrderFormValues } from '../utils/order-form';
 import { availableOrderSets, prefillFromSet, type AvailableOrderSet } from '../utils/order-sets';
 import { DrugSection } from './drug-section';
+import { FindingReasons } from './finding-reasons';
 import { OrderCheckPanel } from './order-check-panel';
 import { RegimenSection } from './regimen-section';
 import { SignOrderModal } from './sign-order-modal';
@@ -51,7 +53,12 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
 
   const rule = rules.find((candidate) => String(candidate.id) === form.values.ruleId) ?? null;
   const check = useOrderCheck(form.values, rule, patient, rules, revising?.id);
-  const soft = softFindingFields(check.findings);
+  const regimenSoft = softFindingFields(check.findings);
+  // Soft findings about something other than a regimen value (a recorded allergy on drugId, the weight) need a reason too.
+  const otherSoftFindings = check.findings.filter(
+    (finding) => finding.severity === 'soft' && !(REGIMEN_FIELDS as readonly string[]).includes(finding.field),
+  );
+  const soft = [...regimenSoft, ...new Set(otherSoftFindings.map((finding) => finding.field))];
   const blocking = blockingFindings(check.findings);
   const sets = useMemo(() => availableOrderSets(rules, weightBasedWard), [rules, weightBasedWard]);
   const showFinding = (finding: Finding) => finding.code !== 'number.missing' || attempted || form.isTouched(finding.field);
@@ -136,10 +143,11 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
                 rule={check.checkedRule ?? (rule ? { ...rule, perKg: false, limits: {} } : null)}
                 weightKg={patient.weightKg}
                 findings={check.findings}
-                softFields={soft}
+                softFields={regimenSoft}
                 showFinding={showFinding}
                 revising={revising}
               />
+              <FindingReasons form={form} findings={otherSoftFindings} />
               <Paper withBorder radius="md" p="md">
                 <Stack gap="md">
                   <Title order={2}>Indication and review</Title>

@@ -5,6 +5,7 @@ import { SignatureModal, type SignatureHandlers } from '@/components/dialogs/sig
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { useCreateOrder } from '@/api/orders/create-order';
 import { useReviseOrder } from '@/api/orders/revise-order';
+import { reasonSubject } from './finding-reasons';
 
 export interface SignOrderModalProps {
   /** The order as it will be sent, short of the password. */
@@ -74,7 +75,7 @@ export function SignOrderModal({ unsigned, drugName, revisingId, onSigned, onRef
             <List size="sm" spacing={4}>
               {unsigned.overrides.map((override) => (
                 <List.Item key={override.field}>
-                  {REGIMEN_FIELD_LABELS[override.field as RegimenField] ?? override.field}: {override.reason}
+                  {REGIMEN_FIELD_LABELS[override.field as RegimenField] ?? reasonSubject(override.field)}: {override.reason}
                 </List.Item>
               ))}
             </List>

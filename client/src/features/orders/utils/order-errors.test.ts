@@ -60,4 +60,25 @@ describe('placing order errors on the form', () => {
     );
     expect(unsignedOrderErrors(fixed, ['demandDose'])).toEqual({});
   });
+
+  it('asks a reason for a soft finding that is not about a regimen value (a recorded allergy on drugId) and places its errors there', () => {
+    expect(orderFormPath('drugId', [], ['drugId'])).toBe('otherReasons.drugId');
+    expect(orderFormPath('drugId', [], [])).toBe('ruleId');
+    expect(orderFormPath('overrides.0.reason', ['drugId'], ['drugId'])).toBe('otherReasons.drugId');
+    const values = { ...emptyOrderForm(new Date(2026, 2, 5)), otherReasons: { drugId: 'Itch only; antihistamine charted' } };
+    const fields = {
+      patientId: 1,
+      drugId: 1,
+      concentrationPerMl: 1,
+      doseUnit: 'mg' as const,
+      demandDose: 1,
+      lockoutMinutes: 10,
+      basalRatePerHour: 0,
+    };
+    const { signature: _signature, ...unsigned } = orderRequest(fields, values, ['drugId'], '');
+    expect(unsigned.overrides).toEqual([{ field: 'drugId', reason: 'Itch only; antihistamine charted' }]);
+    expect(unsignedOrderErrors(unsigned, ['drugId'])).toEqual({});
+    const missing = orderRequest(fields, { ...values, otherReasons: {} }, ['drugId'], '');
+    expect(unsignedOrderErrors(missing, ['drugId'])).toEqual({ 'otherReasons.drugId': expect.any(String) });
+  });
 });

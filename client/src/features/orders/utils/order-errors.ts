@@ -15,19 +15,26 @@ function isRegimenField(field: string): field is RegimenField {
   return (REGIMEN_FIELDS as readonly string[]).includes(field);
 }
 
+/** The form path of the reason for a soft finding on `field`: a regimen value's, or another finding's (a recorded allergy on `drugId`). */
+function reasonPath(field: string): string {
+  return isRegimenField(field) ? `reasons.${field}` : `otherReasons.${field}`;
+}
+
 /**
- * The form path for an API or schema path: a regimen field's value (or, when that field is
- * outside a soft limit, its reason), the rule select for drug and concentration, the reason of
- * the n-th override. Null for what the form has no input for.
+ * The form path for an API or schema path: a regimen field's value (or, when that field has a
+ * soft finding, its reason), the reason for another field's soft finding (a recorded allergy on
+ * `drugId`), the rule select for drug and concentration, the reason of the n-th override. Null
+ * for what the form has no input for.
  */
 export function orderFormPath(field: string, overrideFields: readonly string[], softFields: readonly string[]): string | null {
   if (isRegimenField(field)) return softFields.includes(field) ? `reasons.${field}` : field;
+  if (softFields.includes(field)) return reasonPath(field);
   if (field === 'indication' || field === 'reviewDate') return field;
   if (RULE_FIELDS.has(field)) return 'ruleId';
   const override = OVERRIDE_PATH.exec(field);
   if (override) {
     const target = overrideFields[Number(override[1])];
-    return target !== undefined && isRegimenField(target) ? `reasons.${target}` : null;
+    return target !== undefined && (isRegimenField(target) || softFields.includes(target)) ? reasonPath(target) : null;
   }
   return null;
 }
@@ -54,16 +61,12 @@ export function placeOrderErrors(
 }
 
 /** What signing sends, short of the password: the fields, review date and a reason per soft finding. */
-export function orderRequest(
-  fields: OrderFields,
-  values: OrderFormValues,
-  soft: readonly RegimenField[],
-  password: string,
-): CreateOrderRequest {
+export function orderRequest(fields: OrderFields, values: OrderFormValues, soft: readonly string[], password: string): CreateOrderRequest {
+  const reasonFor = (field: string) => (isRegimenField(field) ? values.reasons[field] : (values.otherReasons[field] ?? ''));
   return {
     ...fields,
     reviewDate: values.reviewDate,
-    overrides: soft.map((field) => ({ field, reason: values.reasons[field].trim() })),
+    overrides: soft.map((field) => ({ field, reason: reasonFor(field).trim() })),
     signature: { password },
   };
 }
@@ -71,7 +74,7 @@ export function orderRequest(
 const unsignedOrderSchema = createOrderSchema.omit({ signature: true });
 
 /** The shared schema's verdict on everything but the password, keyed by form path. */
-export function unsignedOrderErrors(request: Omit<CreateOrderRequest, 'signature'>, soft: readonly RegimenField[]): Record<string, string> {
+export function unsignedOrderErrors(request: Omit<CreateOrderRequest, 'signature'>, soft: readonly string[]): Record<string, string> {
   const parsed = unsignedOrderSchema.safeParse(request);
   if (parsed.success) return {};
   const overrideFields = request.overrides.map((override) => override.field);

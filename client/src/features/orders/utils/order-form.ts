@@ -31,6 +31,8 @@ export type OrderFormValues = {
   reviewDate: string;
   /** A reason per field outside a soft limit. */
   reasons: Record<RegimenField, string>;
+  /** A reason per soft finding about something other than a regimen value (a recorded allergy on `drugId`, the weight), by field. */
+  otherReasons: Record<string, string>;
 };
 
 export const REQUIRED_FIELDS: readonly RegimenField[] = ['demandDose', 'lockoutMinutes', 'basalRatePerHour'];
@@ -59,6 +61,7 @@ export function emptyOrderForm(today: Date): OrderFormValues {
     indication: '',
     reviewDate: nextDay(today),
     reasons: emptyReasons(),
+    otherReasons: {},
   };
 }
 
@@ -75,8 +78,10 @@ function text(value: number | null): string {
 /** A returned order's values, to revise: the same rule, numbers, and the reasons given before. */
 export function valuesFromOrder(order: OrderDetail, rules: readonly LimitRuleResponse[], today: Date): OrderFormValues {
   const reasons = emptyReasons();
+  const otherReasons: Record<string, string> = {};
   for (const override of order.overrides) {
     if ((REGIMEN_FIELDS as readonly string[]).includes(override.field)) reasons[override.field as RegimenField] = override.reason;
+    else otherReasons[override.field] = override.reason;
   }
   const rule = ruleFor(rules, order.drugId, order.concentrationPerMl);
   return {
@@ -92,6 +97,7 @@ export function valuesFromOrder(order: OrderDetail, rules: readonly LimitRuleRes
     // A review date already past is no use for the new version.
     reviewDate: order.reviewDate > nextDay(today) ? order.reviewDate : nextDay(today),
     reasons,
+    otherReasons,
   };
 }
 
