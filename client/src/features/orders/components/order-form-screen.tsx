@@ -11,6 +11,7 @@ import {
   type LimitRuleResponse,
   type OrderDetail,
   type Patient,
+  patientFactorsOf,
   REGIMEN_FIELDS,
   softFindingFields,
 } from '@lockstep/shared';
@@ -21,6 +22,7 @@ import { useOrderCheck } from '../hooks/use-order-check';
 import { orderRequest, placeOrderErrors, unsignedOrderErrors } from '../utils/order-errors';
 import { emptyOrderForm, valuesFromOrder, type OrderFormValues } from '../utils/order-form';
 import { availableOrderSets, prefillFromSet, type AvailableOrderSet } from '../utils/order-sets';
+import { pickableRules } from '../utils/rule-for-patient';
 import { DrugSection } from './drug-section';
 import { FindingReasons } from './finding-reasons';
 import { OrderCheckPanel } from './order-check-panel';
@@ -44,14 +46,16 @@ const RULE_FINDING_FIELDS = ['concentrationPerMl', 'doseUnit', 'drugId'];
 export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner, revising }: OrderFormScreenProps) {
   const navigate = useNavigate();
   const [today] = useState(() => new Date());
+  // One choice per drug and concentration; the check chooses the rule by the patient (shared chooseRule).
+  const pickable = useMemo(() => pickableRules(rules, patientFactorsOf(patient, today)), [rules, patient, today]);
   const form = useForm<OrderFormValues>({
-    initialValues: revising ? valuesFromOrder(revising, rules, today) : emptyOrderForm(today),
+    initialValues: revising ? valuesFromOrder(revising, pickable, today) : emptyOrderForm(today),
   });
   const [attempted, setAttempted] = useState(false);
   const [formAlert, setFormAlert] = useState<string[]>([]);
   const [unsigned, setUnsigned] = useState<Omit<CreateOrderRequest, 'signature'> | null>(null);
 
-  const rule = rules.find((candidate) => String(candidate.id) === form.values.ruleId) ?? null;
+  const rule = pickable.find((candidate) => String(candidate.id) === form.values.ruleId) ?? null;
   const check = useOrderCheck(form.values, rule, patient, rules, revising?.id);
   const regimenSoft = softFindingFields(check.findings);
   // Soft findings about something other than a regimen value (a recorded allergy on drugId, the weight) need a reason too.
@@ -60,7 +64,7 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
   );
   const soft = [...regimenSoft, ...new Set(otherSoftFindings.map((finding) => finding.field))];
   const blocking = blockingFindings(check.findings);
-  const sets = useMemo(() => availableOrderSets(rules, weightBasedWard), [rules, weightBasedWard]);
+  const sets = useMemo(() => availableOrderSets(pickable, weightBasedWard), [pickable, weightBasedWard]);
   const showFinding = (finding: Finding) => finding.code !== 'number.missing' || attempted || form.isTouched(finding.field);
 
   const pickSet = ({ set, rule: setRule }: AvailableOrderSet) => {
@@ -129,7 +133,7 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
           <Grid.Col span={{ base: 12, lg: 8 }}>
             <Stack gap="md">
               <DrugSection
-                rules={rules}
+                rules={pickable}
                 sets={sets}
                 weightKg={patient.weightKg}
                 ruleId={form.values.ruleId}

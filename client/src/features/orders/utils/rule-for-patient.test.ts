@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { type LimitRuleResponse, type PatientFactors, rulePopulationOf } from '@lockstep/shared';
 import { emptyOrderForm, readOrderForm } from './order-form';
-import { patientRuleFindings, ruleForPatient } from './rule-for-patient';
+import { pickableRules, patientRuleFindings, ruleForPatient } from './rule-for-patient';
 
 // The demo libraries (invented): Cedar's adult morphine 1 mg/mL rule and Wren's paediatric per-kg
 // one (1 to under 18 years, 10 kg and over, demand ceiling 1.5 mg). A child is under 18: common
@@ -78,5 +78,14 @@ describe('the live check chooses the rule by the patient', () => {
     const findings = patientRuleFindings(read('0.4'), cedarAdult, chosen, child, context);
     expect(findings[0]).toMatchObject({ field: 'concentrationPerMl', severity: 'hard', code: 'library.no-rule' });
     expect(findings.some((f) => f.code.startsWith('limit.'))).toBe(false);
+  });
+});
+
+describe('the drug picker', () => {
+  it('offers one rule per drug and concentration, the one for this patient where the library has both', () => {
+    const wrenAdult: LimitRuleResponse = { ...cedarAdult, id: 13 };
+    expect(pickableRules([wrenAdult, wrenChildren], child)).toEqual([wrenChildren]);
+    expect(pickableRules([wrenAdult, wrenChildren], adult)).toEqual([wrenAdult]);
+    expect(pickableRules([cedarAdult], child)).toEqual([cedarAdult]);
   });
 });

@@ -1,5 +1,7 @@
 import {
   chooseRule,
+  populationContains,
+  ruleKey,
   type Finding,
   type LimitRuleResponse,
   type OrderCheckContext,
@@ -53,4 +55,19 @@ export function patientRuleFindings(
   if (chosen.rule) return [...localFindings(read, chosen.rule, factors, context), ...chosen.findings];
   const noLimits: LimitRuleResponse = { ...picked, perKg: false, limits: {} };
   return [...chosen.findings, ...localFindings(read, noLimits, factors, context)];
+}
+
+/**
+ * The ward's rules as the drug picker offers them: one per drug and concentration (a library may
+ * hold an adult and paediatric rules for one), the one for this patient where there is one. The
+ * check then chooses the rule by the patient whichever is picked.
+ */
+export function pickableRules(rules: readonly LimitRuleResponse[], factors: PatientFactors): LimitRuleResponse[] {
+  const byDrugAndConcentration = new Map<string, LimitRuleResponse>();
+  for (const rule of rules) {
+    const key = ruleKey({ drugId: rule.drugId, concentrationPerMl: rule.concentrationPerMl });
+    const kept = byDrugAndConcentration.get(key);
+    if (!kept || (!populationContains(kept, factors) && populationContains(rule, factors))) byDrugAndConcentration.set(key, rule);
+  }
+  return [...byDrugAndConcentration.values()];
 }
