@@ -112,7 +112,7 @@ function ceilingFindings(r: Regimen, rule: LimitRule): Finding[] {
     const value = r[field];
     if (!limits || !isUsableNumber(value) || value <= 0) continue;
     const unit = regimenFieldUnit(field, r.doseUnit, false);
-    const ceiling = limits.ceiling;
+    const ceiling = ruleCeiling(rule, field);
     if (ceiling === null || ceiling === undefined) {
       findings.push({
         field,
