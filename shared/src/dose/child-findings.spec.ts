@@ -47,6 +47,32 @@ describe('childFindings: absolute ceilings of per-kg rules', () => {
     expect(codes(childFindings({ ...regimen, basalRatePerHour: 0.6 }, perKgRule, child, context))).toEqual([['limit.ceiling', 'hard']]);
   });
 
+  it('blocks what the pump could give in an hour or 4 hours above the ceiling of the 1-hour or 4-hour limit', () => {
+    const withWindowCeilings: LimitRule = {
+      ...perKgRule,
+      limits: {
+        ...perKgRule.limits,
+        oneHourLimit: { hardMax: 0.12, ceiling: 6 },
+        fourHourLimit: { softMax: 0.3, hardMax: 0.4, ceiling: 20 },
+      },
+    };
+    // 1 mg every 5 minutes: 12 mg an hour (over 6 mg), 48 mg in 4 hours held by the 18 mg 4-hour limit (under 20 mg).
+    const heavy: PatientFactors = { ...child, ageYears: 16, ageMonths: 195, weightKg: 80 };
+    const findings = childFindings({ ...regimen, demandDose: 1, lockoutMinutes: 5, fourHourLimit: 18 }, withWindowCeilings, heavy, context);
+    expect(findings.map((f) => [f.field, f.code, f.severity])).toEqual([['oneHourLimit', 'possible.ceiling', 'hard']]);
+    expect(findings[0].message).toBe(
+      "First hour: the pump could give 12 mg, above the rule's absolute ceiling 6 mg for the 1-hour limit, whatever the weight",
+    );
+    // Said once, at the field, when the order's own 1-hour limit is itself over the ceiling.
+    const own = childFindings(
+      { ...regimen, demandDose: 1, lockoutMinutes: 5, oneHourLimit: 8, fourHourLimit: 18 },
+      withWindowCeilings,
+      heavy,
+      context,
+    );
+    expect(own.map((f) => [f.field, f.code])).toEqual([['oneHourLimit', 'limit.ceiling']]);
+  });
+
   it('says when a per-kg rule limits a dose field without a ceiling (never silently no limit)', () => {
     expect(codes(childFindings({ ...regimen, fourHourLimit: 8 }, perKgRule, child, context))).toEqual([['limit.no-ceiling', 'caution']]);
   });

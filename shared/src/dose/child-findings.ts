@@ -3,6 +3,7 @@ import { IMPLAUSIBLE_WEIGHT_Z, WEIGHT_FOR_AGE_REFERENCE, weightPlausibility } fr
 import { withoutFloatNoise } from './float-noise.js';
 import { formatDose, formatLimit } from './format-dose.js';
 import { isUsableNumber } from './order-number-findings.js';
+import { POSSIBLE_WINDOW_FIELD, POSSIBLE_WINDOW_LABELS, POSSIBLE_WINDOWS, possibleTotals } from './possible-totals.js';
 import { DOSE_FIELDS, REGIMEN_FIELD_LABELS, regimenFieldUnit } from './regimen-fields.js';
 import type { Finding, LimitRule, OrderCheckContext, PatientFactors, Regimen, RegimenField } from './types.js';
 
@@ -132,6 +133,32 @@ function ceilingFindings(r: Regimen, rule: LimitRule): Finding[] {
   return findings;
 }
 
+/**
+ * What the pump could give in each window (possible-totals.ts) against the per-kg rule's ceiling
+ * for the 1-hour and 4-hour limits: over it blocks, however much the patient weighs. A window whose
+ * field already is over its ceiling is said once, there.
+ */
+function possibleCeilingFindings(r: Regimen, rule: LimitRule, already: readonly Finding[]): Finding[] {
+  if (!rule.perKg) return [];
+  const totals = possibleTotals(r);
+  const findings: Finding[] = [];
+  for (const window of POSSIBLE_WINDOWS) {
+    const field = POSSIBLE_WINDOW_FIELD[window];
+    const ceiling = ruleCeiling(rule, field);
+    const dose = totals[window].dose;
+    if (ceiling === null || !Number.isFinite(dose) || dose <= ceiling) continue;
+    if (already.some((finding) => finding.field === field) || findings.some((finding) => finding.field === field)) continue;
+    const unit = regimenFieldUnit(field, r.doseUnit, false);
+    findings.push({
+      field,
+      severity: 'hard',
+      code: 'possible.ceiling',
+      message: `${POSSIBLE_WINDOW_LABELS[window]}: the pump could give ${formatDose(dose, unit)}, above the rule's absolute ceiling ${formatDose(ceiling, unit)} for the ${REGIMEN_FIELD_LABELS[field].toLowerCase()}, whatever the weight`,
+    });
+  }
+  return findings;
+}
+
 /** The per-kg rule's ceiling for a dose field, in the dose unit; null when the rule is not per kg or sets none. */
 export function ruleCeiling(rule: LimitRule, field: RegimenField): number | null {
   if (!rule.perKg) return null;
@@ -139,14 +166,15 @@ export function ruleCeiling(rule: LimitRule, field: RegimenField): number | null
 }
 
 /**
- * Findings that protect children and weight-based dosing: per-kg doses over the rule's absolute
- * ceiling (`hard`); for a child, a weight implausible for the age and sex against the CDC 2000
+ * Findings that protect children and weight-based dosing: per-kg doses, and what the pump could
+ * give in an hour or 4 hours, over the rule's absolute ceiling (`hard`); for a child, a weight implausible for the age and sex against the CDC 2000
  * weight-for-age reference (`soft`, "Check the weight"), or an age the reference does not cover
  * (`caution`); for a child or a per-kg rule, a weight with no measured date or older than the
  * ward's `weightMaxAgeDays` (`caution`).
  */
 export function childFindings(r: Regimen, rule: LimitRule, p: PatientFactors, context: OrderCheckContext): Finding[] {
-  const findings = ceilingFindings(r, rule);
+  const ceilings = ceilingFindings(r, rule);
+  const findings = [...ceilings, ...possibleCeilingFindings(r, rule, ceilings)];
   const weight = p.weightKg;
   // A missing or unusable weight has its own error when the rule is per kg.
   if (!isUsableNumber(weight) || weight <= 0) return findings;
