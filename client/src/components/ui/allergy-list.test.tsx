@@ -22,6 +22,22 @@ const render = (patient: { allergies: PatientAllergyEntry[]; noKnownAllergies: b
   );
 
 describe('AllergyList', () => {
+  it('says who recorded each entry and when, where asked, and which came from the old free text', () => {
+    const html = renderToStaticMarkup(
+      <MantineProvider>
+        <AllergyList
+          patient={{
+            allergies: [entry({}), entry({ id: 2, substance: 'Latex', recordedByName: null, recordedAt: null })],
+            noKnownAllergies: false,
+          }}
+          withRecorder
+        />
+      </MantineProvider>,
+    );
+    expect(html).toContain('recorded by Dr Amara Osei');
+    expect(html).toContain('moved from the earlier free-text record');
+  });
+
   it('says "No known allergies" only when recorded so, and "Allergies not recorded" for an empty record', () => {
     expect(render({ allergies: [], noKnownAllergies: true })).toContain('No known allergies');
     const unknown = render({ allergies: [], noKnownAllergies: false });

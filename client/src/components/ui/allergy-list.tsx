@@ -9,6 +9,7 @@ import {
   type AllergySeverity,
   type PatientAllergyEntry,
 } from '@lockstep/shared';
+import { formatCalendarDate } from '@/utils/format-date';
 
 /** Each severity's look: an icon and the word always, colour on top; anaphylaxis filled red so it stands out. */
 export const ALLERGY_SEVERITY_LOOK: Readonly<Record<AllergySeverity, { Icon: ComponentType<IconProps>; color: string; filled: boolean }>> =
@@ -31,6 +32,14 @@ export interface AllergyListProps {
   patient: { allergies: readonly PatientAllergyEntry[]; noKnownAllergies: boolean };
   /** Something to put at the end of each entry's line (the patient page's remove button). */
   action?: (allergy: PatientAllergyEntry) => ReactNode;
+  /** Adds who recorded each entry and when (the patient page). */
+  withRecorder?: boolean;
+}
+
+/** "recorded by Dr Amara Osei, 1 Dec 2026", or that the entry came from the old free-text field. */
+function recorderText(allergy: PatientAllergyEntry): string {
+  if (allergy.recordedByName === null || allergy.recordedAt === null) return 'moved from the earlier free-text record';
+  return `recorded by ${allergy.recordedByName}, ${formatCalendarDate(allergy.recordedAt.slice(0, 10))}`;
 }
 
 /**
@@ -38,7 +47,7 @@ export interface AllergyListProps {
  * reaction; "No known allergies" only when a clinician recorded it, "Allergies not recorded"
  * (with a warning icon) for an empty record.
  */
-export function AllergyList({ patient, action }: AllergyListProps) {
+export function AllergyList({ patient, action, withRecorder = false }: AllergyListProps) {
   const status = allergyStatus(patient);
   if (status !== 'recorded') {
     const unknown = status === 'not-recorded';
@@ -62,6 +71,11 @@ export function AllergyList({ patient, action }: AllergyListProps) {
           <Text size="sm" c="dimmed">
             {allergy.reaction}
           </Text>
+          {withRecorder ? (
+            <Text size="xs" c="dimmed">
+              ({recorderText(allergy)})
+            </Text>
+          ) : null}
           {action ? action(allergy) : null}
         </Group>
       ))}

@@ -76,7 +76,7 @@ export function AllergyEditor({ patient, canEdit }: { patient: Patient; canEdit:
       <Title order={2} id="allergies-heading">
         Allergies
       </Title>
-      <AllergyList patient={patient} action={removeButton} />
+      <AllergyList patient={patient} action={removeButton} withRecorder />
       {remove.isError ? (
         <Alert color="red" icon={<IconAlertCircle size={16} aria-hidden />}>
           {remove.error.message}
