@@ -94,12 +94,14 @@ describe('audit trail', () => {
     await page.getByRole('button', { name: 'Sign out' }).click();
   });
 
-  it('a pharmacist may search orders and library versions only, and opens an order from its event', async () => {
+  it('a pharmacist may search orders, library versions, equianalgesic factors and patient records only, and opens an order from its event', async () => {
     const { page } = browser;
     await signInHome(page, 'lin.park');
     await openAudit(page);
     await page.getByRole('combobox', { name: 'Record type' }).click();
-    await expect.poll(() => page.getByRole('option').allInnerTexts()).toEqual(['Order', 'Library version']);
+    await expect
+      .poll(() => page.getByRole('option').allInnerTexts())
+      .toEqual(['Order', 'Library version', 'Equianalgesic factor', 'Patient']);
     await page.keyboard.press('Escape');
     expect(await page.getByRole('combobox', { name: 'Person' }).count()).toBe(0);
     expect(await page.getByRole('button', { name: 'Verify chain' }).count()).toBe(0);
