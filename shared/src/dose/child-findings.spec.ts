@@ -95,9 +95,14 @@ describe('childFindings: weight plausibility (CDC 2000 weight-for-age, beyond ±
     expect(childFindings(regimen, adultRule, { ...seven, weightKg: 23 }, context)).toEqual([]);
   });
 
-  it('says the weight is not checked under 2 years instead of calling it plausible', () => {
-    const baby: PatientFactors = { ...child, ageYears: 1, ageMonths: 14, weightKg: 10 };
-    expect(codes(childFindings(regimen, adultRule, baby, context))).toEqual([['weight.not-checked', 'caution']]);
+  it('checks a toddler against the WHO standard, and says when the age is not known instead of calling the weight plausible', () => {
+    // WHO weight-for-age, boys month 15: median 10.3 kg.
+    const toddler: PatientFactors = { ...child, ageYears: 1, ageMonths: 14, weightKg: 10 };
+    expect(childFindings(regimen, adultRule, toddler, context)).toEqual([]);
+    const pounds = childFindings(regimen, adultRule, { ...toddler, weightKg: 22 }, context);
+    expect(codes(pounds)).toEqual([['weight.implausible', 'soft']]);
+    expect(pounds[0].message).toContain('WHO Child Growth Standards weight-for-age');
+    expect(codes(childFindings(regimen, adultRule, { ...toddler, ageMonths: null }, context))).toEqual([['weight.not-checked', 'caution']]);
   });
 
   it('does not check adults against a children’s reference', () => {

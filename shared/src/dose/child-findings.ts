@@ -1,5 +1,5 @@
 import { isChild } from '../patients/adult-age.js';
-import { IMPLAUSIBLE_WEIGHT_Z, WEIGHT_FOR_AGE_REFERENCE, weightPlausibility } from '../patients/growth-reference.js';
+import { IMPLAUSIBLE_WEIGHT_Z, weightPlausibility } from '../patients/growth-reference.js';
 import { withoutFloatNoise } from './float-noise.js';
 import { formatDose, formatLimit } from './format-dose.js';
 import { isUsableNumber } from './order-number-findings.js';
@@ -54,7 +54,7 @@ function weightPlausibilityFindings(p: PatientFactors, weightKg: number): Findin
       code: 'weight.implausible',
       message:
         `Check the weight: ${formatDose(weightKg, 'kg')} is unusual for a ${ageWords(p)} ${sexWords(p.sex)} ` +
-        `(${range} is within ${IMPLAUSIBLE_WEIGHT_Z} SD of the median ${formatDose(result.median, 'kg')}, ${WEIGHT_FOR_AGE_REFERENCE}). ` +
+        `(${range} is within ${IMPLAUSIBLE_WEIGHT_Z} SD of the median ${formatDose(result.median, 'kg')}, ${result.reference}). ` +
         'Was it typed in pounds, or a decimal point slipped? Weigh again, or give a reason',
     },
   ];

@@ -24,8 +24,16 @@ describe('weightForAgeLms', () => {
     expect(weightForAgeLms('female', 150.5)?.m).toBeCloseTo(43.9661169, 0);
   });
 
-  it('has no values outside 24 to 240 months', () => {
-    expect(weightForAgeLms('male', 23.5)).toBeNull();
+  it('gives the WHO standard under 24 months (WHO Child Growth Standards, weight-for-age, 2006)', () => {
+    // WHO weight-for-age tables, boys month 12: L 0.0644, M 9.6479, S 0.10925; girls month 6: M 7.297.
+    expect(weightForAgeLms('male', 12)).toEqual({ ageMonths: 12, l: 0.0644, m: 9.6479, s: 0.10925 });
+    expect(weightForAgeLms('female', 6)?.m).toBeCloseTo(7.297, 6);
+    // Between embedded rows, close to the month left out: girls month 10, M 8.48 kg.
+    expect(weightForAgeLms('female', 10)?.m).toBeCloseTo(8.48, 1);
+  });
+
+  it('has no values outside birth to 240 months', () => {
+    expect(weightForAgeLms('male', -1)).toBeNull();
     expect(weightForAgeLms('female', 240.5)).toBeNull();
     expect(weightForAgeLms('female', Number.NaN)).toBeNull();
   });
@@ -42,6 +50,15 @@ describe('lmsZScore and lmsValueAt (Cole TJ, Eur J Clin Nutr 1990;44:45-60)', ()
     // Sex=2 Agemos=144.5: P3 = 30.01760377 kg, P97 = 65.90102746 kg.
     expect(lmsValueAt(P3_Z, girl12)).toBeCloseTo(30.01760377, 2);
     expect(lmsValueAt(P97_Z, girl12)).toBeCloseTo(65.90102746, 2);
+  });
+
+  it('reproduce the WHO percentiles at −2 and +2 z from L, M and S', () => {
+    // WHO weight-for-age percentiles, boys month 12: 2nd (2.3rd) 7.742219 kg, 98th (97.7th) 11.98574 kg;
+    // girls month 6: 5.729383 kg and 9.33549062 kg.
+    expect(lmsValueAt(-2, weightForAgeLms('male', 12)!)).toBeCloseTo(7.742219, 3);
+    expect(lmsValueAt(2, weightForAgeLms('male', 12)!)).toBeCloseTo(11.98574, 3);
+    expect(lmsValueAt(-2, weightForAgeLms('female', 6)!)).toBeCloseTo(5.729383, 3);
+    expect(lmsValueAt(2, weightForAgeLms('female', 6)!)).toBeCloseTo(9.33549062, 3);
   });
 
   it('is ln(X/M)/S when L is 0', () => {
@@ -73,8 +90,18 @@ describe('weightPlausibility', () => {
     expect(weightPlausibility(2.3, 84, 'other').kind).toBe('implausible');
   });
 
-  it('never calls a weight plausible for an age the table does not cover', () => {
-    expect(weightPlausibility(10, 18, 'female')).toMatchObject({ kind: 'not-checked' });
+  it('checks babies and toddlers against the WHO standard', () => {
+    // WHO weight-for-age, girls month 18: median 10.2315 kg; 10 kg typed as 22 "kg" (pounds).
+    expect(weightPlausibility(10, 18, 'female').kind).toBe('plausible');
+    expect(weightPlausibility(22, 18, 'female')).toMatchObject({
+      kind: 'implausible',
+      reference: 'WHO Child Growth Standards weight-for-age',
+    });
+    expect(weightPlausibility(230, 84, 'male')).toMatchObject({ reference: 'CDC 2000 weight-for-age' });
+  });
+
+  it('never calls a weight plausible for an age the references do not cover', () => {
+    expect(weightPlausibility(10, -1, 'female')).toMatchObject({ kind: 'not-checked' });
     expect(weightPlausibility(70, 240, 'male')).toMatchObject({ kind: 'not-checked' });
     expect(weightPlausibility(10, Number.NaN, 'male')).toMatchObject({ kind: 'not-checked' });
   });

@@ -1,5 +1,9 @@
 /**
- * Weight-for-age reference for children from 2 to 20 years: the CDC 2000 growth charts
+ * Weight-for-age references. From birth to 2 years: the WHO Child Growth Standards (WHO
+ * Multicentre Growth Reference Study Group, WHO Child Growth Standards: length/height-for-age,
+ * weight-for-age, weight-for-length, weight-for-height and body mass index-for-age: methods and
+ * development, World Health Organization, Geneva, 2006), weight-for-age tables by month (Month, L,
+ * M, S). From 2 to 20 years: the CDC 2000 growth charts
  * (National Center for Health Statistics, CDC; Kuczmarski RJ et al., "2000 CDC Growth Charts for
  * the United States: Methods and Development", Vital Health Stat 11(246), 2002), LMS parameters as
  * published in the chart data file `wtage.csv` ("Weight-for-age charts, 2 to 20 years, LMS
@@ -14,6 +18,40 @@ export type GrowthSex = 'male' | 'female';
 
 /** One row of `wtage.csv`: age in months (Agemos), the Box-Cox power L, the median M (kg), the coefficient of variation S. */
 export type LmsRow = { ageMonths: number; l: number; m: number; s: number };
+
+/** WHO Child Growth Standards weight-for-age, boys: months 0 to 6, then every 3 months to 24. */
+const WHO_WEIGHT_FOR_AGE_BOYS: readonly LmsRow[] = [
+  { ageMonths: 0, l: 0.3487, m: 3.3464, s: 0.14602 },
+  { ageMonths: 1, l: 0.2297, m: 4.4709, s: 0.13395 },
+  { ageMonths: 2, l: 0.197, m: 5.5675, s: 0.12385 },
+  { ageMonths: 3, l: 0.1738, m: 6.3762, s: 0.11727 },
+  { ageMonths: 4, l: 0.1553, m: 7.0023, s: 0.11316 },
+  { ageMonths: 5, l: 0.1395, m: 7.5105, s: 0.1108 },
+  { ageMonths: 6, l: 0.1257, m: 7.934, s: 0.10958 },
+  { ageMonths: 9, l: 0.0917, m: 8.9014, s: 0.10881 },
+  { ageMonths: 12, l: 0.0644, m: 9.6479, s: 0.10925 },
+  { ageMonths: 15, l: 0.0413, m: 10.3108, s: 0.11007 },
+  { ageMonths: 18, l: 0.0211, m: 10.9385, s: 0.11119 },
+  { ageMonths: 21, l: 0.0029, m: 11.5486, s: 0.11261 },
+  { ageMonths: 24, l: -0.0137, m: 12.1515, s: 0.11426 },
+];
+
+/** WHO Child Growth Standards weight-for-age, girls: the same months. */
+const WHO_WEIGHT_FOR_AGE_GIRLS: readonly LmsRow[] = [
+  { ageMonths: 0, l: 0.3809, m: 3.2322, s: 0.14171 },
+  { ageMonths: 1, l: 0.1714, m: 4.1873, s: 0.13724 },
+  { ageMonths: 2, l: 0.0962, m: 5.1282, s: 0.13 },
+  { ageMonths: 3, l: 0.0402, m: 5.8458, s: 0.12619 },
+  { ageMonths: 4, l: -0.005, m: 6.4237, s: 0.12402 },
+  { ageMonths: 5, l: -0.043, m: 6.8985, s: 0.12274 },
+  { ageMonths: 6, l: -0.0756, m: 7.297, s: 0.12204 },
+  { ageMonths: 9, l: -0.1507, m: 8.2254, s: 0.12199 },
+  { ageMonths: 12, l: -0.2024, m: 8.9481, s: 0.12268 },
+  { ageMonths: 15, l: -0.2384, m: 9.6008, s: 0.12299 },
+  { ageMonths: 18, l: -0.2637, m: 10.2315, s: 0.12309 },
+  { ageMonths: 21, l: -0.2815, m: 10.8534, s: 0.12335 },
+  { ageMonths: 24, l: -0.2941, m: 11.4775, s: 0.1239 },
+];
 
 /** CDC 2000 `wtage.csv`, Sex = 1 (male), rows at Agemos 24, 36.5, 48.5 … 228.5 and 240. */
 const CDC_WEIGHT_FOR_AGE_MALE: readonly LmsRow[] = [
@@ -61,13 +99,21 @@ const CDC_WEIGHT_FOR_AGE_FEMALE: readonly LmsRow[] = [
   { ageMonths: 240, l: -1.51336185, m: 58.21897289, s: 0.166644749 },
 ];
 
-const TABLES: Readonly<Record<GrowthSex, readonly LmsRow[]>> = { male: CDC_WEIGHT_FOR_AGE_MALE, female: CDC_WEIGHT_FOR_AGE_FEMALE };
+type Reference = { name: string; tables: Readonly<Record<GrowthSex, readonly LmsRow[]>> };
+const WHO: Reference = {
+  name: 'WHO Child Growth Standards weight-for-age',
+  tables: { male: WHO_WEIGHT_FOR_AGE_BOYS, female: WHO_WEIGHT_FOR_AGE_GIRLS },
+};
+const CDC: Reference = { name: 'CDC 2000 weight-for-age', tables: { male: CDC_WEIGHT_FOR_AGE_MALE, female: CDC_WEIGHT_FOR_AGE_FEMALE } };
 
-/** The reference's name, for messages. */
-export const WEIGHT_FOR_AGE_REFERENCE = 'CDC 2000 weight-for-age (2 to 20 years)';
+/**
+ * Under 24 months the WHO standard, from 24 months the CDC reference: the split the CDC recommends
+ * (Grummer-Strawn LM et al., Use of World Health Organization and CDC growth charts for children
+ * aged 0-59 months in the United States, MMWR Recomm Rep 2010;59(RR-9):1-15).
+ */
+const CDC_FROM_MONTHS = 24;
 
-/** The youngest and oldest whole-month ages the table covers (24 months up to, not including, 240). */
-export const WEIGHT_FOR_AGE_MIN_MONTHS = 24;
+/** The oldest whole-month age the references cover (up to, not including, 240 months). */
 export const WEIGHT_FOR_AGE_MAX_MONTHS = 239;
 
 /**
@@ -80,9 +126,12 @@ export const WEIGHT_FOR_AGE_MAX_MONTHS = 239;
  */
 export const IMPLAUSIBLE_WEIGHT_Z = 3;
 
-/** L, M and S for an age in months (Agemos), interpolated linearly between the embedded rows; null outside 24–240. */
+/**
+ * L, M and S for an age in months, interpolated linearly between the embedded rows: WHO's below
+ * 24 months, the CDC's (Agemos) from 24 to 240; null outside.
+ */
 export function weightForAgeLms(sex: GrowthSex, ageMonths: number): LmsRow | null {
-  const rows = TABLES[sex];
+  const rows = (ageMonths < CDC_FROM_MONTHS ? WHO : CDC).tables[sex];
   if (!Number.isFinite(ageMonths) || ageMonths < rows[0].ageMonths || ageMonths > rows[rows.length - 1].ageMonths) return null;
   const upper = rows.findIndex((row) => row.ageMonths >= ageMonths);
   const b = rows[upper];
@@ -110,19 +159,19 @@ export function lmsValueAt(z: number, lms: LmsRow): number {
 
 export type WeightPlausibility =
   | { kind: 'plausible'; zScore: number }
-  | { kind: 'implausible'; zScore: number; low: number; high: number; median: number }
-  /** The age is outside the reference (under 2 years or 20 and over): the weight is not checked. */
+  | { kind: 'implausible'; zScore: number; low: number; high: number; median: number; reference: string }
+  /** The age is outside the references (20 years and over, or not a real age): the weight is not checked. */
   | { kind: 'not-checked'; reason: string };
 
 /**
- * Whether a child's weight is plausible for their age (whole months) and sex against the CDC 2000
- * weight-for-age reference: outside ±3 z is implausible. With a sex other than female or male the
- * weight is plausible if it is plausible for either. Never answers "plausible" for an age the
- * table does not cover.
+ * Whether a child's weight is plausible for their age (whole months, looked up at the middle of the
+ * month) and sex: WHO Child Growth Standards under 2 years, CDC 2000 from 2 to 20 years; outside ±3
+ * z is implausible. With a sex other than female or male the weight is plausible if it is plausible
+ * for either. Never answers "plausible" for an age the references do not cover.
  */
 export function weightPlausibility(weightKg: number, ageMonths: number, sex: string | null | undefined): WeightPlausibility {
-  if (!Number.isFinite(ageMonths) || ageMonths < WEIGHT_FOR_AGE_MIN_MONTHS || ageMonths > WEIGHT_FOR_AGE_MAX_MONTHS) {
-    return { kind: 'not-checked', reason: `the ${WEIGHT_FOR_AGE_REFERENCE} reference covers ages 2 to 20 years` };
+  if (!Number.isFinite(ageMonths) || ageMonths < 0 || ageMonths > WEIGHT_FOR_AGE_MAX_MONTHS) {
+    return { kind: 'not-checked', reason: 'the weight-for-age references cover ages from birth to 20 years' };
   }
   const sexes: GrowthSex[] = sex === 'male' || sex === 'female' ? [sex] : ['female', 'male'];
   const results = sexes.map((s) => {
@@ -134,5 +183,6 @@ export function weightPlausibility(weightKg: number, ageMonths: number, sex: str
   const closest = results.reduce((a, b) => (Math.abs(a.z) <= Math.abs(b.z) ? a : b));
   const low = Math.min(...results.map((result) => lmsValueAt(-IMPLAUSIBLE_WEIGHT_Z, result.lms)));
   const high = Math.max(...results.map((result) => lmsValueAt(IMPLAUSIBLE_WEIGHT_Z, result.lms)));
-  return { kind: 'implausible', zScore: closest.z, low, high, median: closest.lms.m };
+  const reference = `${(ageMonths < CDC_FROM_MONTHS ? WHO : CDC).name}`;
+  return { kind: 'implausible', zScore: closest.z, low, high, median: closest.lms.m, reference };
 }
