@@ -109,7 +109,7 @@ const CDC: Reference = { name: 'CDC 2000 weight-for-age', tables: { male: CDC_WE
 /**
  * Under 24 months the WHO standard, from 24 months the CDC reference: the split the CDC recommends
  * (Grummer-Strawn LM et al., Use of World Health Organization and CDC growth charts for children
- * aged 0-59 months in the United States, MMWR Recomm Rep 2010;59(RR-9):1-15).
+ * aged 0-59 months in the United States, MMWR Recomm Rep 2010;59(RR-9):1-15; from memory).
  */
 const CDC_FROM_MONTHS = 24;
 
