@@ -11,7 +11,7 @@ import { createTestApp, DEMO_USER_BY_ROLE, type TestApp } from './support/test-a
 // "Order fields and dosing conventions"; shared library/choose-rule.ts). Under 18 is a child:
 // common practice (shared patients/adult-age.ts). The demo libraries are invented: Wren's morphine
 // 1 mg/mL and fentanyl 10 mcg/mL rules are paediatric (1 to under 18 years, 10 kg and over) and per
-// kg, with ceilings (morphine demand 1.5 mg, 1-hour 6 mg, 4-hour 20 mg); the adult wards have no
+// kg, with ceilings (morphine demand 1.5 mg, 1-hour 7.5 mg, 4-hour 25 mg); the adult wards have no
 // paediatric rule, and no library has a paediatric hydromorphone rule. Weights are checked against
 // the CDC 2000 weight-for-age reference (wtage.csv, National Center for Health Statistics), beyond
 // ±3 z (common practice); Wren's weight may be 7 days old (ward policy default, common practice).
@@ -158,6 +158,14 @@ describe('children: rule by patient, ceilings, weight plausibility and age', () 
     });
     const signing = await sign({ ...regimen, ...SIGNING }).expect(400);
     expect(signing.body.errors).toContainEqual({ field: 'demandDose', message: expect.stringContaining('absolute ceiling') });
+
+    // An 80 kg 16-year-old: 1.5 mg every 10 minutes is 9 mg an hour, 0.11 mg/kg (inside the per-kg
+    // hard maximum of 0.12 mg/kg) but above the 1-hour ceiling of 7.5 mg.
+    const heavy = await addChild({ wardCode: 'WRE', years: 16, sex: 'male', weightKg: 80, weightMeasuredOn: daysAgo(0) });
+    const hourly = await preview({ ...childMorphine(heavy), demandDose: 1.5, fourHourLimit: 24 });
+    expect(hourly.body.findings).toContainEqual(
+      expect.objectContaining({ field: 'oneHourLimit', severity: 'hard', code: 'possible.ceiling' }),
+    );
   });
 
   it('asks to check a weight implausible for the age (a 7-year-old weighed in pounds) and signs only with a reason', async () => {

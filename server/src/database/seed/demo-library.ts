@@ -14,8 +14,8 @@ type DemoRule = {
 } & Partial<RulePopulation> & { populationKey?: string };
 
 // Wren's rules are for children from 1 to under 18 years weighing 10 kg or more (invented band);
-// each per-kg dose limit has an absolute ceiling, about 50 kg times the per-kg hard maximum and
-// never above the adult rule's hard maximum (invented).
+// each per-kg dose limit has an absolute ceiling, about 50 to 62.5 kg times the per-kg hard maximum
+// and never above the adult rule's hard maximum (invented; the scale seed's heaviest child is 62 kg).
 const CHILDREN: RulePopulation = { population: 'paediatric', minAgeYears: 1, maxAgeYears: 18, minWeightKg: 10, maxWeightKg: null };
 const forChildren = { ...CHILDREN, populationKey: populationKey(CHILDREN) };
 
@@ -81,8 +81,8 @@ const PAEDIATRIC_RULES: DemoRule[] = [
       demandDose: { hardMin: 0.005, softMin: 0.01, softMax: 0.02, hardMax: 0.03, ceiling: 1.5 },
       lockoutMinutes: { hardMin: 5, softMin: 5, softMax: 10, hardMax: 20 },
       basalRatePerHour: { softMax: 0.004, hardMax: 0.01, ceiling: 0.5 },
-      oneHourLimit: { softMax: 0.1, hardMax: 0.12, ceiling: 6 },
-      fourHourLimit: { softMax: 0.3, hardMax: 0.4, ceiling: 20 },
+      oneHourLimit: { softMax: 0.1, hardMax: 0.12, ceiling: 7.5 },
+      fourHourLimit: { softMax: 0.3, hardMax: 0.4, ceiling: 25 },
       clinicianBolusDose: { softMax: 0.02, hardMax: 0.05, ceiling: 2.5 },
     },
   },
