@@ -11,12 +11,11 @@ import { AllergyList } from '@/components/ui/allergy-list';
 import { isApiRequestError } from '@/lib/api-error';
 import { applyServerErrors } from '@/lib/form-errors';
 import { notifySuccess } from '@/lib/notify';
-import { allergyFormErrors, allergyRequest, EMPTY_ALLERGY_FORM, type AllergyFormValues } from '../utils/record-forms';
+import { allergyFormErrors, allergyRequest, EMPTY_ALLERGY_FORM, FREE_TEXT_SUBSTANCE, type AllergyFormValues } from '../utils/record-forms';
 
 const SEVERITY_OPTIONS = [...ALLERGY_SEVERITIES]
   .reverse()
   .map((severity) => ({ value: severity, label: ALLERGY_SEVERITY_LABELS[severity] }));
-const FREE_TEXT = '';
 
 /**
  * The patient's allergies on their page. Prescribers and pharmacists (`canEdit`) add an entry
@@ -35,7 +34,7 @@ export function AllergyEditor({ patient, canEdit }: { patient: Patient; canEdit:
     initialValues: EMPTY_ALLERGY_FORM,
     validate: (values) => allergyFormErrors(values, drugNames),
   });
-  const freeText = form.getValues().drug === FREE_TEXT;
+  const freeText = form.getValues().drug === FREE_TEXT_SUBSTANCE;
 
   const submit = form.onSubmit((values) => {
     setRefusal([]);
@@ -108,7 +107,7 @@ export function AllergyEditor({ patient, canEdit }: { patient: Patient; canEdit:
                   label="Substance"
                   description="A formulary drug, or type another substance"
                   data={[
-                    { value: FREE_TEXT, label: 'Other (type it)' },
+                    { value: FREE_TEXT_SUBSTANCE, label: 'Other (type it)' },
                     ...(drugs.data ?? []).map((drug) => ({ value: String(drug.id), label: tallMan(drug.genericName) })),
                   ]}
                   allowDeselect={false}

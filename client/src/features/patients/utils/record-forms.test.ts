@@ -11,11 +11,11 @@ describe('allergy form', () => {
       reaction: 'itch',
       severity: 'intolerance',
     });
-    expect(allergyRequest({ drug: '', substance: 'Latex', reaction: 'hives', severity: 'allergy' }, drugNames).drugId).toBeNull();
+    expect(allergyRequest({ drug: 'other', substance: 'Latex', reaction: 'hives', severity: 'allergy' }, drugNames).drugId).toBeNull();
   });
 
   it('names each missing field in the server’s words', () => {
-    expect(allergyFormErrors({ drug: '', substance: ' ', reaction: '', severity: '' }, drugNames)).toEqual({
+    expect(allergyFormErrors({ drug: 'other', substance: ' ', reaction: '', severity: '' }, drugNames)).toEqual({
       substance: 'Enter the substance',
       reaction: 'Enter the reaction (or "not known")',
       severity: 'Choose the severity',

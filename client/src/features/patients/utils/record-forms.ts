@@ -32,7 +32,10 @@ const typed = (value: NumberFieldValue) => {
   return number === null ? undefined : (number ?? Number.NaN);
 };
 
-/** `drug` is a formulary drug id as text (the select's value), or '' for a substance typed as free text. */
+/** The select's value for a substance typed as free text. */
+export const FREE_TEXT_SUBSTANCE = 'other';
+
+/** `drug` is a formulary drug id as text (the select's value), or `FREE_TEXT_SUBSTANCE` for a substance typed as free text. */
 export interface AllergyFormValues {
   drug: string;
   substance: string;
@@ -40,11 +43,11 @@ export interface AllergyFormValues {
   severity: AllergySeverity | '';
 }
 
-export const EMPTY_ALLERGY_FORM: AllergyFormValues = { drug: '', substance: '', reaction: '', severity: '' };
+export const EMPTY_ALLERGY_FORM: AllergyFormValues = { drug: FREE_TEXT_SUBSTANCE, substance: '', reaction: '', severity: '' };
 
 /** The request: a picked drug's entry takes the drug's generic name as its substance. */
 export function allergyRequest(values: AllergyFormValues, drugNames: ReadonlyMap<number, string>): AddAllergyRequest {
-  const drugId = values.drug === '' ? null : Number(values.drug);
+  const drugId = values.drug === FREE_TEXT_SUBSTANCE || values.drug === '' ? null : Number(values.drug);
   const substance = drugId === null ? values.substance : (drugNames.get(drugId) ?? values.substance);
   return { drugId, substance, reaction: values.reaction, severity: values.severity as AllergySeverity };
 }
