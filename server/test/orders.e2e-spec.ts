@@ -187,12 +187,13 @@ describe('orders, verification and syringe release', () => {
       const old = await request(t.http).get(`/api/orders/${order.id}`).set(as('pharmacist')).expect(200);
       expect(old.body.status).toBe('superseded');
       expect(old.body.events.map((e: { toStatus: string }) => e.toStatus)).toEqual(['awaiting_verification', 'returned', 'superseded']);
-      // Revising it again: 409 (the patient's open PCA is now the revision).
-      await request(t.http)
+      // Revising it again: 409 saying it is superseded (its status, checked before the patient's open PCA).
+      const again = await request(t.http)
         .post(`/api/orders/${order.id}/revise`)
         .set(as('prescriber'))
         .send({ ...ORDER, patientId: order.patientId })
         .expect(409);
+      expect(again.body).toMatchObject({ currentStatus: 'superseded' });
     });
 
     it('rejects with a reason, and an ended order cannot be cancelled (409)', async () => {

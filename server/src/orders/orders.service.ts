@@ -54,6 +54,8 @@ export class OrdersService {
   /** The server re-checks the order itself; hard and error findings refuse it, soft ones need a reason. */
   async create(dto: CreateOrderDto, prescriber: AuthUser, revising?: number): Promise<OrderDetail> {
     await this.users.verifySignature(prescriber.id, dto.signature.password);
+    // A revision of an order that is no longer returned is a status conflict, said as such first.
+    if (revising !== undefined) await this.revisable(this.dataSource.manager, revising, dto.patientId);
     await this.refuseSecondPca(this.dataSource.manager, dto.patientId, revising);
     const { findings, rule } = await this.previews.evaluate(dto);
     const overrides = checkSignable(findings, dto);
