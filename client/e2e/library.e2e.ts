@@ -37,8 +37,10 @@ const csv = (rows: string[]) => `${[HEADER, ...rows].join('\n')}\n`;
 const BAD_ROWS = ROWS.map((row, index) => (index === 1 ? row.replace('morphine', 'morfine') : row));
 
 /** The rows of one rule (drug + concentration) in a rules table. */
+/** A rule's rows, by its heading (a paediatric rule's heading goes on to say who it is for). */
 function ruleRows(table: Locator, rule: string): Locator {
-  return table.locator('tbody').filter({ has: table.page().getByRole('rowheader', { name: rule, exact: true }) });
+  const heading = new RegExp(`^${rule.replace(/[.*+?^${}()|[\]\\/]/g, '\\$&')}( Paediatric, .*)?$`);
+  return table.locator('tbody').filter({ has: table.page().getByRole('rowheader', { name: heading }) });
 }
 
 async function openLibrary(page: Page): Promise<void> {
@@ -139,6 +141,8 @@ describe('dose-limit library: import a CSV, submit, and a second pharmacist appr
     const rules = page.getByRole('table', { name: 'Limit rules' });
     const morphine = ruleRows(rules, 'morphine 1 mg/mL per kg');
     await morphine.getByText('per kg', { exact: true }).waitFor();
+    // Chosen by the patient, not only the ward: Wren's rule says who it is for.
+    await morphine.getByText(/^Paediatric, /).waitFor();
     await morphine
       .getByRole('row', { name: /^Demand dose/ })
       .getByRole('cell', { name: '0.02 mg/kg' })

@@ -84,7 +84,8 @@ describe('PCA order: sign, return with a query, revise, verify, release and labe
       // Past the hard maximum: blocked, said beside the field, in words as well as colour.
       await demand.fill('3.5');
       await page.getByText('Hard limit (blocks signing):').first().waitFor();
-      await page.getByText('Signing is blocked while a value is marked as an error or outside a hard limit.').waitFor();
+      // The demand dose and what it could give in an hour are both past a hard maximum.
+      await page.getByText('Signing is blocked while values are marked as an error or outside a hard limit.').waitFor();
       // The live panel: 3.5 mg every 10 minutes could give 21 mg an hour (3.5 × ceil(60 ÷ 10),
       // docs/design.md), over the demo rule's 15 mg hard maximum; with the 4-hour limit emptied,
       // 84 mg in 4 hours, over its 40 mg.
