@@ -7,7 +7,7 @@ import { ORDER, RELEASE, ROSA, SETTINGS } from './support/pca.js';
 import { activeOrder as startOrder, verifiedOrderWithSyringe as releasedOrder } from './support/pca-steps.js';
 import { createTestApp, DEMO_PASSWORD, type TestApp } from './support/test-app.js';
 
-// Regimen and syringe are in support/pca.ts (ASHP Standardize 4 Safety, PCA standards, 2023); each
+// Regimen and syringe are in support/pca.ts (a common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]; each
 // order is for a new copy of its patient (TestApp.addPatient).
 describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
   let t: TestApp;

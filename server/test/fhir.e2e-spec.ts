@@ -26,7 +26,7 @@ type Role = keyof typeof DEMO_USER_BY_ROLE;
 type Resource = { resourceType: string } & Record<string, unknown>;
 
 // A worked example on patient 1 (support/pca.ts). Morphine 1 mg/mL, demand 1 mg, lockout 10
-// minutes: ASHP Standardize 4 Safety, PCA standards (2023); 4-hour limit 30 mg: the typical
+// minutes: a common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]; 4-hour limit 30 mg: the typical
 // ranges of a widely used clinical reference table [practice]. Loading dose, basal rate,
 // 1-hour limit and clinician bolus are invented for the example (inside the demo library's soft
 // limits): the mapping does not depend on their clinical values.

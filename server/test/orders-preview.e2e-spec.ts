@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { REGIMEN as ASHP_MORPHINE } from './support/pca.js';
+import { REGIMEN as STARTING_MORPHINE } from './support/pca.js';
 import { createTestApp, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
 
 type Role = keyof typeof DEMO_USER_BY_ROLE;
@@ -8,7 +8,7 @@ const ROLES = Object.keys(DEMO_USER_BY_ROLE) as Role[];
 
 // Demo ids (seed order): patient 1 is an adult on Harbour, patient 9 a 24.5 kg child on Wren;
 // drug 1 morphine (mg), drug 3 fentanyl (mcg). The limits they meet are the demo library's.
-// ASHP_MORPHINE is support/pca.ts's regimen: ASHP Standardize 4 Safety, PCA standards (2023),
+// STARTING_MORPHINE is support/pca.ts's regimen: a common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory],
 // morphine 1 mg/mL, demand 1 mg, lockout 10 min. Patient 1 has the demo's order awaiting
 // verification, which the preview reports as a second PCA (orders.e2e-spec.ts), so the tests of
 // the regimen alone preview it for a copy of patient 1 with nothing open (TestApp.addPatient).
@@ -16,7 +16,7 @@ const ROLES = Object.keys(DEMO_USER_BY_ROLE) as Role[];
 describe('POST /api/orders/preview', () => {
   let t: TestApp;
   const tokens = {} as Record<Role, string>;
-  let regimen: typeof ASHP_MORPHINE;
+  let regimen: typeof STARTING_MORPHINE;
   const preview = (body: object, role: Role = 'prescriber') =>
     request(t.http)
       .post('/api/orders/preview')
@@ -26,11 +26,11 @@ describe('POST /api/orders/preview', () => {
   beforeAll(async () => {
     t = await createTestApp();
     for (const role of ROLES) tokens[role] = await t.tokenFor(DEMO_USER_BY_ROLE[role]);
-    regimen = { ...ASHP_MORPHINE, patientId: (await t.addPatient()).id };
+    regimen = { ...STARTING_MORPHINE, patientId: (await t.addPatient()).id };
   });
   afterAll(() => t.close());
 
-  it.each(ROLES)('as %s, previews the ASHP starting regimen with no findings', async (role) => {
+  it.each(ROLES)('as %s, previews the common starting regimen with no findings', async (role) => {
     const response = await preview(regimen, role).expect(200);
     expect(response.body.findings).toEqual([]);
     expect(response.body.derived).toEqual({
@@ -44,7 +44,7 @@ describe('POST /api/orders/preview', () => {
   });
 
   it('answers 401 without a token', async () => {
-    await request(t.http).post('/api/orders/preview').send(ASHP_MORPHINE).expect(401);
+    await request(t.http).post('/api/orders/preview').send(STARTING_MORPHINE).expect(401);
   });
 
   it('finds a soft value and asks for a reason (soft), without blocking', async () => {
@@ -74,7 +74,7 @@ describe('POST /api/orders/preview', () => {
     // Patient 7 (KB101590) is an adult on Cedar with no PCA; Cedar's demo morphine 1 mg/mL rule
     // (invented): 1-hour hard maximum 15 mg, 4-hour hard maximum 40 mg. Arithmetic on the
     // definitions in docs/design.md: 2 mg × ceil(60 ÷ 6) = 20 mg; 2 mg × ceil(240 ÷ 6) = 80 mg.
-    const cedar = { ...ASHP_MORPHINE, patientId: 7, demandDose: 2, lockoutMinutes: 6, oneHourLimit: null, fourHourLimit: null };
+    const cedar = { ...STARTING_MORPHINE, patientId: 7, demandDose: 2, lockoutMinutes: 6, oneHourLimit: null, fourHourLimit: null };
     const possible = (findings: { code: string; field: string; severity: string }[]) =>
       findings.filter((f) => f.code.startsWith('possible.')).map((f) => [f.field, f.severity]);
 
@@ -124,7 +124,7 @@ describe('POST /api/orders/preview', () => {
       // 0.49 mg (0.02 mg/kg, the top of the 10–20 mcg/kg bolus range of the Association of
       // Paediatric Anaesthetists of Great Britain and Ireland, Good Practice in Postoperative and
       // Procedural Pain Management) × ceil(240 ÷ 10) = 11.76 mg = 0.48 mg/kg.
-      const response = await preview({ ...ASHP_MORPHINE, patientId: 9, demandDose: 0.49, fourHourLimit: null }).expect(200);
+      const response = await preview({ ...STARTING_MORPHINE, patientId: 9, demandDose: 0.49, fourHourLimit: null }).expect(200);
       const fourHour = response.body.findings.find((f: { code: string }) => f.code === 'possible.four-hour.hard-high');
       expect(fourHour).toMatchObject({ field: 'fourHourLimit', severity: 'hard' });
       expect(fourHour.message).toContain('11.76 mg (0.48 mg/kg for 24.5 kg) in 4 hours');
@@ -138,7 +138,7 @@ describe('POST /api/orders/preview', () => {
     // Britain and Ireland, Good Practice in Postoperative and Procedural Pain Management).
     // The order's 1-hour limit 2.45 mg (0.1 mg/kg) and 4-hour limit 7.35 mg (0.3 mg/kg) hold what
     // the pump could give to the demo rule's soft maxima, so only the demand dose is compared here.
-    const child = { ...ASHP_MORPHINE, patientId: 9, oneHourLimit: 2.45, fourHourLimit: 7.35 };
+    const child = { ...STARTING_MORPHINE, patientId: 9, oneHourLimit: 2.45, fourHourLimit: 7.35 };
     const regimenFindings = (findings: { field: string; severity: string; code: string }[]) =>
       findings.filter((f) => f.code.startsWith('limit.') || f.code.startsWith('possible.'));
     const response = await preview({ ...child, demandDose: 0.5 }).expect(200);
@@ -160,7 +160,7 @@ describe('POST /api/orders/preview', () => {
     // Pain, APS/ASRA/ASA guideline, J Pain 2016;17(2):131-157: no routine basal infusion in
     // opioid-naive adults; age and a basal rate together also need a reason (risk factors of The
     // Joint Commission Sentinel Event Alert 49, 2012; a reason for the combination is common practice).
-    const response = await preview({ ...ASHP_MORPHINE, patientId: 2, basalRatePerHour: 0.5 }).expect(200);
+    const response = await preview({ ...STARTING_MORPHINE, patientId: 2, basalRatePerHour: 0.5 }).expect(200);
     const codes = response.body.findings.map(
       (f: { field: string; severity: string; code: string }) => `${f.field}:${f.severity}:${f.code}`,
     );
@@ -175,12 +175,12 @@ describe('POST /api/orders/preview', () => {
   });
 
   it.each([
-    [{ ...ASHP_MORPHINE, lockoutMinutes: 0 }, 'lockoutMinutes', 'Lockout must be at least 1 minute'],
-    [{ ...ASHP_MORPHINE, demandDose: undefined }, 'demandDose', 'Enter the demand dose'],
-    [{ ...ASHP_MORPHINE, demandDose: '1' }, 'demandDose', 'Demand dose must be a number'],
-    [{ ...ASHP_MORPHINE, doseUnit: 'ug' }, 'doseUnit', 'Dose unit must be mg or mcg'],
-    [{ ...ASHP_MORPHINE, basalRatePerHour: -1 }, 'basalRatePerHour', 'Basal rate cannot be negative (enter 0 for none)'],
-    [{ ...ASHP_MORPHINE, patientId: 999 }, 'patientId', 'No patient with id 999'],
+    [{ ...STARTING_MORPHINE, lockoutMinutes: 0 }, 'lockoutMinutes', 'Lockout must be at least 1 minute'],
+    [{ ...STARTING_MORPHINE, demandDose: undefined }, 'demandDose', 'Enter the demand dose'],
+    [{ ...STARTING_MORPHINE, demandDose: '1' }, 'demandDose', 'Demand dose must be a number'],
+    [{ ...STARTING_MORPHINE, doseUnit: 'ug' }, 'doseUnit', 'Dose unit must be mg or mcg'],
+    [{ ...STARTING_MORPHINE, basalRatePerHour: -1 }, 'basalRatePerHour', 'Basal rate cannot be negative (enter 0 for none)'],
+    [{ ...STARTING_MORPHINE, patientId: 999 }, 'patientId', 'No patient with id 999'],
   ])('answers bad input with 400 naming the field (%#)', async (body, field, message) => {
     const response = await preview(body).expect(400);
     expect(response.body.errors).toContainEqual({ field, message });

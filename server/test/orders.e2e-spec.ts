@@ -9,7 +9,7 @@ import { createTestApp, DEMO_PASSWORD, DEMO_USER_BY_ROLE, type TestApp } from '.
 type Role = keyof typeof DEMO_USER_BY_ROLE;
 const ROLES = Object.keys(DEMO_USER_BY_ROLE) as Role[];
 
-// The regimen of support/pca.ts (ASHP Standardize 4 Safety, PCA standards, 2023) with an
+// The regimen of support/pca.ts (a common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory] with an
 // indication and no clinician bolus.
 const ORDER: CreateOrderRequest = { ...REGIMEN, indication: 'Pain after open abdominal surgery', ...SIGNING };
 // A 1-hour limit of 10 mg holds what 2.5 mg every 10 minutes could give (15 mg) to the demo rule's

@@ -10,8 +10,9 @@ import type {
 import { DEMO_PASSWORD } from './demo-accounts.js';
 
 // The invented morphine PCA the API, crash and browser tests share: patient 1 (NOAH ACHTERBERG,
-// KB100231, born 1968-03-14) on Harbour; drug 1 morphine. Regimen after ASHP Standardize 4
-// Safety, PCA standards (2023): 1 mg/mL, demand 1 mg, lockout 10 min; the limits it meets are
+// KB100231, born 1968-03-14) on Harbour; drug 1 morphine. Regimen: demand 1 mg, lockout 10
+// min, a common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg
+// 2005;101(5S):S44-S61, from memory], at the standard 1 mg/mL [practice; ASHP Standardize 4 Safety]; the limits it meets are
 // the demo library's (invented). Plain data and types only, so tests that reach the app over HTTP
 // alone (the crash test, the browser tests by a relative path) can use it too.
 

@@ -3,8 +3,8 @@ import { PUMP_SETTING_FIELDS, PUMP_SETTING_LABELS, type PumpSettings } from './b
 import { compareSettings } from './compare-settings.js';
 
 // An independent double-check compares each clinician's reading of the pump with the order, at
-// start, syringe change and every programming change [read, ISMP recommendations on PCA safety, 2008].
-// Regimen: ASHP Standardize 4 Safety, PCA standards (2023) — morphine 1 mg/mL, demand 1 mg, lockout 10 min.
+// start, syringe change and every programming change [memory: ISMP's PCA safety recommendations; exact title and year to be confirmed].
+// Regimen: a common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory] — morphine 1 mg/mL, demand 1 mg, lockout 10 min.
 const ordered: PumpSettings = {
   drugId: 1,
   concentrationPerMl: 1,

@@ -8,7 +8,7 @@ import type { Finding, LimitRule, Limits, PatientFactors, Regimen, RegimenField 
 
 const codes = (findings: Finding[]) => findings.map((f) => `${f.field}:${f.code}`);
 
-// ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg demand, lockout 10 minutes,
+// A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]: morphine 1 mg demand, lockout 10 minutes,
 // at 1 mg/mL [practice; ASHP Standardize 4 Safety].
 const ashpMorphine: Regimen = {
   doseUnit: 'mg',
@@ -48,7 +48,7 @@ const childMg: Regimen = { ...childMcg, doseUnit: 'mg', concentrationPerMl: 0.4,
 const child20kg: PatientFactors = { weightKg: 20, ageYears: 7, opioidTolerant: false };
 
 describe('checkOrder: adult morphine', () => {
-  it('finds nothing for the ASHP starting regimen', () => {
+  it('finds nothing for the common starting regimen', () => {
     expect(checkOrder(ashpMorphine, morphineRule, adult)).toEqual([]);
   });
 

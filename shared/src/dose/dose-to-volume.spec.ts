@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { doseToVolumeMl } from './dose-to-volume.js';
 
 describe('doseToVolumeMl', () => {
-  it('gives the volume of the ASHP starting demand doses at the standard concentrations', () => {
-    // ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg, hydromorphone 0.2 mg,
+  it('gives the volume of the common starting demand doses at the standard concentrations', () => {
+    // A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]: morphine 1 mg, hydromorphone 0.2 mg,
     // fentanyl 10 mcg demand; standard concentrations [practice; ASHP Standardize 4 Safety]
     // morphine 1 mg/mL, hydromorphone 0.2 mg/mL, fentanyl 10 mcg/mL.
     expect(doseToVolumeMl(1, 1)).toBe(1);

@@ -3,7 +3,7 @@ import { maxDemandsInWindow, maxDemandsPerHour } from './max-demands-per-hour.js
 
 describe('maxDemandsPerHour', () => {
   it('allows 6 demands an hour with a 10-minute lockout', () => {
-    // ASHP Standardize 4 Safety, PCA standards (2023): lockout 10 minutes.
+    // A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]: lockout 10 minutes.
     expect(maxDemandsPerHour(10)).toBe(6);
   });
 

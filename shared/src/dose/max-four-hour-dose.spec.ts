@@ -9,7 +9,7 @@ function regimen(overrides: Partial<Regimen>): Regimen {
 
 describe('maxFourHourDose', () => {
   it('morphine: 1 mg every 10 minutes under a 30 mg 4-hour limit', () => {
-    // ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg demand, lockout 10 minutes.
+    // A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]: morphine 1 mg demand, lockout 10 minutes.
     // Morphine 4-hour limit 30 mg: common practice (docs/clinical-sources.md, "Typical ranges").
     expect(maxFourHourDose(regimen({ fourHourLimit: 30 }))).toBe(24); // 1 × ceil(240 ÷ 10)
     // Same table, demand 2 mg and lockout 5 min: 96 mg uncapped, so the 30 mg limit binds.

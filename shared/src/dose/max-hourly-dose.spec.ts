@@ -16,13 +16,13 @@ const lockout = fc.double({ min: 1, max: 240, noNaN: true });
 
 describe('maxHourlyDose', () => {
   it('gives 6 mg an hour for morphine 1 mg demand with a 10-minute lockout', () => {
-    // ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg demand, lockout 10 minutes;
+    // A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]: morphine 1 mg demand, lockout 10 minutes;
     // 1 mg × ceil(60 ÷ 10) is the definition.
     expect(maxHourlyDose(regimen({}))).toBe(6);
   });
 
-  it('gives the hourly maximum of the other ASHP starting regimens', () => {
-    // ASHP Standardize 4 Safety, PCA standards (2023): hydromorphone 0.2 mg, fentanyl 10 mcg.
+  it('gives the hourly maximum of the other common starting regimens', () => {
+    // A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]: hydromorphone 0.2 mg, fentanyl 10 mcg.
     expect(maxHourlyDose(regimen({ demandDose: 0.2, concentrationPerMl: 0.2 }))).toBe(1.2);
     expect(maxHourlyDose(regimen({ doseUnit: 'mcg', demandDose: 10, concentrationPerMl: 10 }))).toBe(60);
   });

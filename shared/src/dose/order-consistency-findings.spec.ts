@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { consistencyFindings } from './order-consistency-findings.js';
 import type { Regimen } from './types.js';
 
-// ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg demand, lockout 10 minutes.
+// A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]: morphine 1 mg demand, lockout 10 minutes.
 // The limits below are arithmetic on the definitions in docs/design.md, "Order fields and dosing conventions".
 const ashpMorphine: Regimen = { doseUnit: 'mg', concentrationPerMl: 1, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0 };
 

@@ -17,7 +17,7 @@ const morphineRule: LimitRule = {
   },
 };
 
-// ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg demand, lockout 10 minutes.
+// A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]: morphine 1 mg demand, lockout 10 minutes.
 const ashpMorphine: Regimen = {
   doseUnit: 'mg',
   concentrationPerMl: 1,
@@ -28,7 +28,7 @@ const ashpMorphine: Regimen = {
 };
 
 describe('limitFindings', () => {
-  it('finds nothing for the ASHP starting regimen within the typical ranges', () => {
+  it('finds nothing for the common starting regimen within the typical ranges', () => {
     expect(limitFindings(ashpMorphine, morphineRule, 'mg', matched)).toEqual([]);
   });
 

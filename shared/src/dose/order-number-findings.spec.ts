@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { invalidNumberFindings, isUsableNumber } from './order-number-findings.js';
 import type { Regimen } from './types.js';
 
-// ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg demand, lockout 10 minutes;
+// A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]: morphine 1 mg demand, lockout 10 minutes;
 // morphine 1 mg/mL [practice; ASHP Standardize 4 Safety].
 const ashpMorphine: Regimen = {
   doseUnit: 'mg',

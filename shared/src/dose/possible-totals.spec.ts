@@ -6,7 +6,7 @@ import type { LimitRule, Regimen } from './types.js';
 // Every figure here is arithmetic on the definitions in docs/design.md, "Order fields and dosing
 // conventions": basal × hours + demand × ceil(window ÷ lockout) + clinician boluses (one per window
 // by default, Lockstep's own until boluses carry a count) + the loading dose in the first windows.
-// Morphine 1 mg/mL, demand 1 mg, lockout 10 min: ASHP Standardize 4 Safety, PCA standards (2023).
+// Morphine 1 mg/mL, demand 1 mg, lockout 10 min: a common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory].
 const morphine: Regimen = { doseUnit: 'mg', concentrationPerMl: 1, demandDose: 1, lockoutMinutes: 10, basalRatePerHour: 0 };
 // The demo library's 1-hour and 4-hour maxima (invented demo values).
 const rule: LimitRule = {

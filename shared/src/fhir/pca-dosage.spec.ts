@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { type PcaRegimenSource, pcaDosageInstructions } from './pca-dosage.js';
 
-// Hydromorphone 0.2 mg demand, lockout 10 minutes: ASHP Standardize 4 Safety, PCA standards
-// (2023); 4-hour limit 6 mg: a widely used clinical reference table [practice].
+// Hydromorphone 0.2 mg demand, lockout 10 minutes: a common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]; 4-hour limit 6 mg: a widely used clinical reference table [practice].
 const REGIMEN: PcaRegimenSource = {
   doseUnit: 'mg',
   loadingDose: null,

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { toFhirPcaBundle } from './to-fhir-bundle.js';
 import { type FhirOrderSource, toFhirMedicationRequest } from './to-fhir-medication-request.js';
 
-// Morphine 1 mg/mL, demand 1 mg, lockout 10 minutes: ASHP Standardize 4 Safety, PCA standards (2023).
+// Morphine 1 mg/mL, demand 1 mg, lockout 10 minutes: a common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory].
 const ORDER: FhirOrderSource = {
   id: 12,
   version: 2,

@@ -1,8 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { type FhirOrderSource, toFhirMedicationRequest } from './to-fhir-medication-request.js';
 
-// A worked example. Morphine 1 mg/mL, demand 1 mg, lockout 10 minutes: ASHP Standardize 4 Safety,
-// PCA standards (2023); 4-hour limit 30 mg: the typical ranges of a widely used clinical
+// A worked example. Morphine 1 mg/mL, demand 1 mg, lockout 10 minutes: a common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]; 4-hour limit 30 mg: the typical ranges of a widely used clinical
 // reference table [practice]. The loading dose, basal rate, 1-hour limit and clinician bolus
 // are invented for the example: the mapping does not depend on their clinical values.
 const WORKED_EXAMPLE: FhirOrderSource = {
@@ -154,7 +153,7 @@ describe('toFhirMedicationRequest: worked example', () => {
 });
 
 describe('toFhirMedicationRequest: other orders', () => {
-  // Fentanyl 10 mcg/mL, demand 10 mcg: ASHP Standardize 4 Safety, PCA standards (2023).
+  // Fentanyl 10 mcg/mL, demand 10 mcg: a common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory].
   const fentanyl: FhirOrderSource = {
     ...WORKED_EXAMPLE,
     id: 3,

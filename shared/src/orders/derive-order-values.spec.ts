@@ -2,8 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { deriveOrderValues } from './derive-order-values.js';
 
 describe('deriveOrderValues', () => {
-  it('works the ASHP adult morphine starting regimen', () => {
-    // ASHP Standardize 4 Safety, PCA standards (2023): morphine 1 mg demand, lockout 10 minutes,
+  it('works the common adult morphine starting regimen', () => {
+    // A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]: morphine 1 mg demand, lockout 10 minutes,
     // standard concentration 1 mg/mL; 4-hour limit 30 mg (common practice, docs/clinical-sources.md).
     const derived = deriveOrderValues({
       doseUnit: 'mg',
@@ -22,8 +22,8 @@ describe('deriveOrderValues', () => {
     });
   });
 
-  it('works the ASHP hydromorphone regimen with the volume per demand', () => {
-    // ASHP Standardize 4 Safety (2023): hydromorphone 0.2 mg demand at the standard 0.2 mg/mL.
+  it('works the common hydromorphone regimen with the volume per demand', () => {
+    // A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]: hydromorphone 0.2 mg demand at the standard 0.2 mg/mL.
     const derived = deriveOrderValues({
       doseUnit: 'mg',
       concentrationPerMl: 0.2,

@@ -32,7 +32,7 @@ describe('order sets', () => {
   });
 
   it('prefills the adult morphine starting regimen as typed text', () => {
-    // ASHP Standardize 4 Safety, PCA standards (2023): 1 mg demand, lockout 10 min, 4-hour 30 mg.
+    // A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]: 1 mg demand, lockout 10 min, 4-hour 30 mg.
     expect(prefillFromSet(set('adult-morphine'), adultLibrary[0], 82)).toEqual({
       ruleId: '1',
       loadingDose: '',

@@ -19,7 +19,7 @@ export type OrderSet = {
 };
 
 export const ORDER_SETS: readonly OrderSet[] = [
-  // ASHP Standardize 4 Safety, PCA standards (2023): adult opioid-naive starting demand doses,
+  // A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory]: adult opioid-naive starting demand doses,
   // no basal rate, lockout 10 minutes, at the standard concentrations.
   {
     id: 'adult-morphine',
@@ -34,7 +34,7 @@ export const ORDER_SETS: readonly OrderSet[] = [
     oneHourLimit: null,
     fourHourLimit: 30,
   },
-  // ASHP Standardize 4 Safety, PCA standards (2023).
+  // A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory].
   {
     id: 'adult-hydromorphone',
     label: 'Adult hydromorphone',
@@ -48,7 +48,7 @@ export const ORDER_SETS: readonly OrderSet[] = [
     oneHourLimit: null,
     fourHourLimit: 6,
   },
-  // ASHP Standardize 4 Safety, PCA standards (2023).
+  // A common starting regimen [practice; inside the ranges of Grass JA, Anesth Analg 2005;101(5S):S44-S61, from memory].
   {
     id: 'adult-fentanyl',
     label: 'Adult fentanyl',
