@@ -98,7 +98,8 @@ export function signingRecord(
   patient: PatientFactors,
   reason = 'Agreed with the acute pain team (invented)',
 ): { findings: Finding[]; overrides: Override[] } {
-  const findings = checkOrder(regimen, { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits }, patient);
+  const context = { drug: { id: rule.drugId, genericName: rule.drugName }, today: new Date().toISOString().slice(0, 10) };
+  const findings = checkOrder(regimen, { doseUnit: rule.doseUnit, perKg: rule.perKg, limits: rule.limits }, patient, context);
   const blocking = blockingFindings(findings);
   if (blocking.length > 0) {
     throw new Error(`A seeded ${regimen.drug} order would be refused at signing: ${blocking.map((f) => f.message).join('; ')}`);

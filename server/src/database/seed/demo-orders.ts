@@ -1,7 +1,7 @@
 import type { Database } from 'better-sqlite3';
 import type { EntityManager } from 'typeorm';
 import type { BetterSqlite3Driver } from 'typeorm/driver/better-sqlite3/BetterSqlite3Driver.js';
-import { ageInYears, shiftWindow } from '@lockstep/shared';
+import { patientFactorsOf, shiftWindow } from '@lockstep/shared';
 import { Drug } from '../../drugs/entities/drug.entity.js';
 import { toLimitRuleResponse } from '../../library/dto/library-response.js';
 import { LimitRule } from '../../library/entities/limit-rule.entity.js';
@@ -140,20 +140,15 @@ async function demoPatients(manager: EntityManager): Promise<Map<string, DemoPat
       return [ward.id, { ward: written, shifts: ward }];
     }),
   );
-  const patients = await manager.find(Patient);
+  // With their allergy entries: each seeded order is checked with the same patient facts signing uses.
+  const patients = await manager.find(Patient, { relations: { allergies: true } });
+  const today = new Date();
   return new Map(
     patients.map((patient) => [
       patient.mrn,
       {
         ...wards.get(patient.wardId)!,
-        patient: {
-          id: patient.id,
-          weightKg: patient.weightKg ?? 0,
-          ageYears: ageInYears(patient.dateOfBirth),
-          opioidTolerant: patient.opioidTolerant,
-          sleepApnoea: patient.sleepApnoea,
-          otherSedatives: patient.otherSedatives,
-        },
+        patient: { ...patientFactorsOf(patient, today), id: patient.id, weightKg: patient.weightKg ?? 0 },
       },
     ]),
   );
