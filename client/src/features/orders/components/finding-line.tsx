@@ -13,6 +13,19 @@ export const SEVERITY_LOOK: Record<FindingSeverity, SeverityLook> = {
   caution: { word: 'Caution', effect: 'for information', color: 'blue', Icon: IconInfoCircle },
 };
 
+// Hard and soft findings that are not limits (an allergy, a second open PCA, the patient's risk)
+// say what they do without calling themselves limits.
+const NOT_A_LIMIT_LOOK: Partial<Record<FindingSeverity, SeverityLook>> = {
+  hard: { ...SEVERITY_LOOK.hard, word: 'Blocked', effect: 'cannot be signed' },
+  soft: { ...SEVERITY_LOOK.soft, word: 'Check', effect: 'needs a reason' },
+};
+
+/** The finding's look: limits (`limit.*`, `possible.*`) as hard or soft limits, anything else by what it does. */
+export function findingLook(finding: Finding): SeverityLook {
+  const isLimit = finding.code.startsWith('limit.') || finding.code.startsWith('possible.');
+  return (isLimit ? undefined : NOT_A_LIMIT_LOOK[finding.severity]) ?? SEVERITY_LOOK[finding.severity];
+}
+
 export interface FindingLineProps {
   finding: Finding;
   /** Adds what the severity means ("blocks signing") after the word. */
@@ -24,7 +37,7 @@ export interface FindingLineProps {
 
 /** One finding: its severity as icon + word + colour, then the message. */
 export function FindingLine({ finding, withEffect = false, reason, id }: FindingLineProps) {
-  const { word, effect, color, Icon } = SEVERITY_LOOK[finding.severity];
+  const { word, effect, color, Icon } = findingLook(finding);
   return (
     <Group gap={8} wrap="nowrap" align="flex-start" id={id} data-severity={finding.severity}>
       <ThemeIcon size={22} variant="light" color={color} radius="xl" mt={1} aria-hidden>
