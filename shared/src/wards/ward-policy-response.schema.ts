@@ -10,6 +10,9 @@ export const wardPolicySettingsSchema: z.ZodType<WardPolicySettings> = answer(
   z.object({
     observationIntervalFirst24hMinutes: z.number(),
     observationIntervalMinutes: z.number(),
+    closeObservationIntervalMinutes: z.number(),
+    closeObservationPeriodMinutes: z.number(),
+    naloxoneClosePeriodMinutes: z.number(),
     respiratoryRateThreshold: z.number(),
     spo2Threshold: z.number(),
     syringeLowThresholdHours: z.number(),
