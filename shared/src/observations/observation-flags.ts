@@ -1,6 +1,9 @@
 import { formatDose } from '../dose/format-dose.js';
 import { hoursUntilEmpty } from '../dose/hours-until-empty.js';
 import type { FlagSeverity } from '../orders/order.schema.js';
+import { type DeliveryRegimen, deliveryFlags } from './delivery-flags.js';
+import { painFlags } from './pain-flags.js';
+import { projectionFlags } from './projection-flags.js';
 import { MIN_RATE_WINDOW_HOURS } from './projected-empty-at.js';
 import { SEDATION_ACTIONS, type SedationLevel } from './sedation-scale.js';
 import type { WardPolicy } from './ward-policy.js';
@@ -17,6 +20,33 @@ export type ObservationValues = {
   syringeRemainingMl: number;
 };
 
+/** The reading before this one on the same syringe, or the syringe's start (0 delivered, 0 mL infused). */
+export type PreviousReading = Pick<ObservationValues, 'at' | 'attempts' | 'delivered' | 'volumeInfusedMl'>;
+
+/** What else the flags need, where the caller knows it. */
+export type FlagContext = {
+  /** The order's regimen: checks what was delivered against what it allows. */
+  regimen?: DeliveryRegimen;
+  /** This syringe's earlier readings (its start included) within the last 4 hours, for the 1- and 4-hour limits. */
+  earlier?: readonly PreviousReading[];
+  /** mL given since the previous reading other than demand doses and basal (clinician boluses). */
+  otherMlSincePrevious?: number;
+  /** The running syringe's volume: infused plus remaining can never be more. */
+  syringeVolumeMl?: number | null;
+  /** An urgent sedation or breathing flag is still open on the order. */
+  urgentBreathingOpen?: boolean;
+};
+
+/** The syringe's start as the previous reading, so the first observation's flags have one. */
+export function syringeStartReading(startedAt: string): PreviousReading {
+  return { at: startedAt, attempts: 0, delivered: 0, volumeInfusedMl: 0 };
+}
+
+/** Urgent flags that mean sedation or breathing is a concern: the pain flag then never invites more opioid. */
+export function isSedationOrBreathingFlag(code: string): boolean {
+  return /^(sedation|respiratory-rate|spo2|news2)\b/.test(code);
+}
+
 export type FlagDraft = { severity: FlagSeverity; code: string; message: string; action: string };
 
 const MS_PER_HOUR = 3_600_000;
@@ -27,9 +57,10 @@ const MS_PER_HOUR = 3_600_000;
  */
 export function observationFlags(
   current: ObservationValues,
-  previous: ObservationValues | null,
+  previous: PreviousReading | null,
   basalMlPerHour: number,
   policy: WardPolicy,
+  context: FlagContext = {},
 ): FlagDraft[] {
   const flags: FlagDraft[] = [];
   if (current.sedationLevel === '3' || current.sedationLevel === '4') {
@@ -57,21 +88,20 @@ export function observationFlags(
     });
   }
   if (previous) {
-    const attempts = current.attempts - previous.attempts;
-    const delivered = current.delivered - previous.delivered;
-    const ratio = delivered > 0 ? attempts / delivered : attempts > 0 ? Infinity : 0;
-    if (current.painScore >= policy.painNotControlledScore && ratio >= policy.painNotControlledRatio) {
-      flags.push({
-        severity: 'review',
-        code: 'pain.not-controlled',
-        message: `Pain ${current.painScore}/10 with ${attempts} attempts for ${delivered} doses since the last observation`,
-        action: 'Review the regimen with the prescriber or pain team; check the line and the pump',
-      });
+    const doNotIncrease =
+      current.sedationLevel === '3' ||
+      current.sedationLevel === '4' ||
+      context.urgentBreathingOpen === true ||
+      flags.some((flag) => flag.severity === 'urgent' && isSedationOrBreathingFlag(flag.code));
+    flags.push(...painFlags(current, previous, policy, doNotIncrease));
+    if (context.regimen) {
+      flags.push(...deliveryFlags(current, previous, context.earlier ?? [], context.regimen, context.otherMlSincePrevious));
     }
     const hours = (Date.parse(current.at) - Date.parse(previous.at)) / MS_PER_HOUR;
     const usedMl = current.volumeInfusedMl - previous.volumeInfusedMl;
     const demandMlPerHour = hours >= MIN_RATE_WINDOW_HOURS ? Math.max(0, usedMl / hours - basalMlPerHour) : 0;
     const left = hoursUntilEmpty(current.syringeRemainingMl, basalMlPerHour, demandMlPerHour);
+    flags.push(...projectionFlags(current, context.syringeVolumeMl ?? null, basalMlPerHour, demandMlPerHour));
     if (left <= policy.syringeLowThresholdHours) {
       const emptyAt = new Date(Date.parse(current.at) + left * MS_PER_HOUR).toISOString();
       flags.push({
