@@ -32,12 +32,15 @@ describe('observationFlags', () => {
     expect(flag.action).toMatch(/stop the opioid.*stay with the patient.*naloxone/);
   });
 
-  it('respiratory rate under 8/min [practice] and SpO2 under 90 % (Overdyk et al., Anesth Analg 2007) are urgent; equal is not', () => {
-    expect(codes(observationFlags({ ...calm, respiratoryRate: 7, spo2: 89 }, null, 0, DEFAULT_WARD_POLICY))).toEqual([
+  it('respiratory rate 8/min or below and SpO2 91 % or below are urgent by default (NEWS2, Royal College of Physicians 2017); 9/min and 92 % are for review, not urgent', () => {
+    expect(codes(observationFlags({ ...calm, respiratoryRate: 8, spo2: 91 }, null, 0, DEFAULT_WARD_POLICY))).toEqual([
       'urgent:respiratory-rate.low',
       'urgent:spo2.low',
     ]);
-    expect(observationFlags({ ...calm, respiratoryRate: 8, spo2: 90 }, null, 0, DEFAULT_WARD_POLICY)).toEqual([]);
+    expect(codes(observationFlags({ ...calm, respiratoryRate: 9, spo2: 92 }, null, 0, DEFAULT_WARD_POLICY))).toEqual([
+      'review:respiratory-rate.review',
+      'review:spo2.review',
+    ]);
   });
 
   it('pain ≥ 7 with two or more attempts per delivered dose since the last observation needs review [practice]', () => {

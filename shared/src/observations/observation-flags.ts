@@ -1,6 +1,7 @@
 import { formatDose } from '../dose/format-dose.js';
 import { hoursUntilEmpty } from '../dose/hours-until-empty.js';
 import type { FlagSeverity } from '../orders/order.schema.js';
+import { ADULT_VITALS_PATIENT, breathingFlags, type VitalSigns, type VitalsPatient } from './breathing-flags.js';
 import { type DeliveryRegimen, deliveryFlags } from './delivery-flags.js';
 import { painFlags } from './pain-flags.js';
 import { projectionFlags } from './projection-flags.js';
@@ -18,7 +19,7 @@ export type ObservationValues = {
   delivered: number;
   volumeInfusedMl: number;
   syringeRemainingMl: number;
-};
+} & Omit<VitalSigns, 'respiratoryRate' | 'spo2'>;
 
 /** The reading before this one on the same syringe, or the syringe's start (0 delivered, 0 mL infused). */
 export type PreviousReading = Pick<ObservationValues, 'at' | 'attempts' | 'delivered' | 'volumeInfusedMl'>;
@@ -35,6 +36,8 @@ export type FlagContext = {
   syringeVolumeMl?: number | null;
   /** An urgent sedation or breathing flag is still open on the order. */
   urgentBreathingOpen?: boolean;
+  /** The patient's age, ward population and SpO2 scale, for the breathing bands (adult scale 1 when absent). */
+  patient?: VitalsPatient;
 };
 
 /** The syringe's start as the previous reading, so the first observation's flags have one. */
@@ -71,22 +74,7 @@ export function observationFlags(
       action: SEDATION_ACTIONS[current.sedationLevel],
     });
   }
-  if (current.respiratoryRate < policy.respiratoryRateThreshold) {
-    flags.push({
-      severity: 'urgent',
-      code: 'respiratory-rate.low',
-      message: `Respiratory rate ${current.respiratoryRate}/min, below ${policy.respiratoryRateThreshold}/min`,
-      action: 'Stay with the patient, rouse them, pause the PCA, give oxygen and call for help per protocol; consider naloxone',
-    });
-  }
-  if (current.spo2 < policy.spo2Threshold) {
-    flags.push({
-      severity: 'urgent',
-      code: 'spo2.low',
-      message: `SpO2 ${current.spo2} %, below ${policy.spo2Threshold} %`,
-      action: 'Stay with the patient, check the airway and oxygen, pause the PCA and call for help per protocol',
-    });
-  }
+  flags.push(...breathingFlags(current, context.patient ?? ADULT_VITALS_PATIENT, policy));
   if (previous) {
     const doNotIncrease =
       current.sedationLevel === '3' ||
