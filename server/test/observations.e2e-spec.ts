@@ -126,7 +126,7 @@ describe('observations, flags, usage and ward policy', () => {
 
   it('reads only the days its figures use, and still finds an older last observation for what is due', async () => {
     const order = await start();
-    await observe(order.id, { ...CALM, attempts: 6, delivered: 4, volumeInfusedMl: 4, syringeRemainingMl: 46 }).expect(201);
+    await observe(order.id, CALM).expect(201);
     // Move the PCA back: started four days ago, last observed three days ago. Nothing is left
     // inside the window or the last 24 hours.
     const db = t.app.get(DataSource);

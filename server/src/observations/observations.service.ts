@@ -1,15 +1,21 @@
 import { ConflictException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { type DataSource, type EntityManager, LessThanOrEqual, MoreThan } from 'typeorm';
+import { Between, type DataSource, type EntityManager, IsNull, LessThan, LessThanOrEqual, MoreThan } from 'typeorm';
 import {
+  type FlagContext,
   type FlagDraft,
+  isSedationOrBreathingFlag,
   observationFlags,
   type ObservationResponse,
   observationTimelineErrors,
   ORDER_STATUS_LABELS,
+  type PreviousReading,
   type RecordedObservation,
+  syringeStartReading,
 } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
+import { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
+import { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
 import { Flag } from '../flags/entities/flag.entity.js';
 import { FlagsService } from '../flags/flags.service.js';
 import { MailService } from '../mail/mail.service.js';
@@ -55,11 +61,13 @@ export class ObservationsService {
       const saved = await manager.save(
         manager.create(Observation, { ...dto, at, orderId, releaseId: release.id, note: dto.note?.trim() ?? '', recordedById: nurse.id }),
       );
+      const inputs = await flagInputs(manager, found, release, at, previous);
       const drafts = observationFlags(
         { ...dto, at: at.toISOString() },
-        previous ? { ...previous, at: previous.at.toISOString() } : null,
+        inputs.previous,
         found.basalRatePerHour / found.concentrationPerMl,
         wardPolicy(found.patient.ward),
+        inputs.context,
       );
       const flags: (FlagDraft & { id: number })[] = [];
       for (const draft of drafts) {
@@ -100,6 +108,59 @@ export class ObservationsService {
     });
     return observations.map(toObservationResponse);
   }
+}
+
+const FOUR_HOURS_MS = 4 * 3_600_000;
+
+/**
+ * What the flags are worked out from besides the reading: the previous reading of this syringe, or
+ * its start (the matched bedside check: 0 delivered, 0 mL infused) for the first one; the order's
+ * regimen with this syringe's readings of the last 4 hours for its limits; clinician boluses
+ * since the previous reading (volume the doses do not explain); whether an urgent sedation or
+ * breathing flag is still open (the pain flag then never invites more opioid).
+ */
+async function flagInputs(
+  manager: EntityManager,
+  order: PcaOrder,
+  release: SyringeRelease,
+  at: Date,
+  previous: Observation | null,
+): Promise<{ previous: PreviousReading | null; context: FlagContext }> {
+  const check = await manager.findOne(BedsideCheck, {
+    where: { orderId: order.id, releaseId: release.id, status: 'matched' },
+    order: { id: 'DESC' },
+  });
+  const startedAt = check?.secondAt ?? null;
+  const start = startedAt && startedAt.getTime() <= at.getTime() ? syringeStartReading(startedAt.toISOString()) : null;
+  const reading = (o: Observation): PreviousReading => ({
+    at: o.at.toISOString(),
+    attempts: o.attempts,
+    delivered: o.delivered,
+    volumeInfusedMl: o.volumeInfusedMl,
+  });
+  const windowStart = new Date(at.getTime() - FOUR_HOURS_MS);
+  const recent = await manager.find(Observation, {
+    where: { orderId: order.id, releaseId: release.id, at: Between(windowStart, at) },
+    order: { at: 'ASC', id: 'ASC' },
+  });
+  const earlier = [...(start ? [start] : []), ...recent.map(reading)];
+  const since = previous?.at ?? startedAt;
+  const boluses = since ? await manager.findBy(ClinicianBolus, { orderId: order.id, at: Between(since, at) }) : [];
+  // The loading dose goes in through the pump at the first start: it explains volume on the first reading.
+  const firstStart =
+    check !== null && !(await manager.existsBy(BedsideCheck, { orderId: order.id, status: 'matched', id: LessThan(check.id) }));
+  const loadingMl = !previous && firstStart && order.loadingDose ? order.loadingDose / order.concentrationPerMl : 0;
+  const openUrgent = await manager.findBy(Flag, { orderId: order.id, severity: 'urgent', acknowledgedAt: IsNull() });
+  return {
+    previous: previous ? reading(previous) : start,
+    context: {
+      regimen: order,
+      earlier,
+      otherMlSincePrevious: boluses.reduce((ml, bolus) => ml + bolus.amount / order.concentrationPerMl, loadingMl),
+      syringeVolumeMl: release.volumeMl,
+      urgentBreathingOpen: openUrgent.some((flag) => isSedationOrBreathingFlag(flag.code)),
+    },
+  };
 }
 
 /** The observation against its PCA's timeline, by the shared rule the form checks with too. */

@@ -91,8 +91,9 @@ export const CALM_OBSERVATION: Omit<ObservationValues, 'at'> = {
   sedationLevel: '1',
   respiratoryRate: 14,
   spo2: 97,
-  attempts: 4,
-  delivered: 3,
-  volumeInfusedMl: 3,
-  syringeRemainingMl: 47,
+  // One dose: tests record it moments after the start, and a lockout allows only one press in no time.
+  attempts: 2,
+  delivered: 1,
+  volumeInfusedMl: 1,
+  syringeRemainingMl: 49,
 };
