@@ -65,7 +65,7 @@ const RULES = [
 const POLICY = {
   observationIntervalFirst24hMinutes: 60,
   observationIntervalMinutes: 120,
-  respiratoryRateThreshold: 8,
+  respiratoryRateThreshold: 9,
   spo2Threshold: 92,
   syringeLowThresholdHours: 2,
   reconciliationToleranceMl: 0.5,

@@ -171,8 +171,8 @@ describe('observations, flags, usage and ward policy', () => {
     expect(policy.body).toMatchObject({
       observationIntervalFirst24hMinutes: 60,
       observationIntervalMinutes: 120,
-      respiratoryRateThreshold: 8,
-      spo2Threshold: 90,
+      respiratoryRateThreshold: 9,
+      spo2Threshold: 92,
       syringeLowThresholdHours: 2,
       reconciliationToleranceMl: 0.5,
     });
@@ -183,10 +183,30 @@ describe('observations, flags, usage and ward policy', () => {
       .send({ spo2Threshold: 20, pharmacyEmail: 'not-an-address' })
       .expect(400);
     expect(bad.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['pharmacyEmail', 'spo2Threshold']);
-    const changed = await request(t.http).patch('/api/wards/1/policy').set(as('sam')).send({ spo2Threshold: 92 }).expect(200);
-    expect(changed.body.spo2Threshold).toBe(92);
+    const changed = await request(t.http).patch('/api/wards/1/policy').set(as('sam')).send({ spo2Threshold: 93 }).expect(200);
+    expect(changed.body.spo2Threshold).toBe(93);
     const order = await start();
-    const response = await observe(order.id, { ...CALM, spo2: 91 }).expect(201);
+    const response = await observe(order.id, { ...CALM, spo2: 92 }).expect(201);
     expect(response.body.flags.map((f: { code: string }) => f.code)).toEqual(['spo2.low']);
+  });
+
+  // Floors: NEWS2 (Royal College of Physicians, 2017) RR <= 8 and SpO2 <= 91 % (scale 1) score 3; intervals
+  // no longer than the stated defaults (common practice). Shared WARD_POLICY_FLOORS.
+  it('refuses a policy that loosens past a floor, naming the field and the floor', async () => {
+    const bad = await request(t.http)
+      .patch('/api/wards/1/policy')
+      .set(as('sam'))
+      .send({ respiratoryRateThreshold: 8, spo2Threshold: 91, observationIntervalFirst24hMinutes: 90, observationIntervalMinutes: 240 })
+      .expect(400);
+    const messages = Object.fromEntries(bad.body.errors.map((e: { field: string; message: string }) => [e.field, e.message]));
+    expect(messages).toEqual({
+      respiratoryRateThreshold:
+        'At least 9 per minute: a rate of 8/min or below is always urgent (NEWS2, Royal College of Physicians 2017)',
+      spo2Threshold: 'At least 92 %: SpO2 of 91 % or below is always urgent (NEWS2 scale 1, Royal College of Physicians 2017)',
+      observationIntervalFirst24hMinutes: expect.stringMatching(/^At most 60 minutes/),
+      observationIntervalMinutes: expect.stringMatching(/^At most 120 minutes/),
+    });
+    const policy = await request(t.http).get('/api/wards/1/policy').set(as('kai')).expect(200);
+    expect(policy.body.respiratoryRateThreshold).toBeGreaterThanOrEqual(9);
   });
 });

@@ -7,6 +7,9 @@ import {
   ROLES,
   SEDATION_LEVELS,
   SIGNOFF_ROLES,
+  NALOXONE_UNITS,
+  CONSCIOUSNESS_LEVELS,
+  OXYGEN_DEVICES,
 } from '@lockstep/shared';
 import type { BodySpec, FieldSpec } from './bad-values.js';
 
@@ -102,6 +105,14 @@ export const SECOND_CHECK: BodySpec = { ...COLLEAGUE, settings };
 export const BOLUS: BodySpec = { witness, amount: positive, reason, overrideReason: { ...reason, presence: 'optional' } };
 export const SYRINGE_CHANGE: BodySpec = { witness, volumeInfusedMl: amount, wastedMl: amount, newReleaseCode: releaseCode };
 export const DISCONTINUE: BodySpec = { witness, reason, volumeInfusedMl: amount, wastedMl: amount };
+export const NALOXONE: BodySpec = {
+  dose: positive,
+  doseUnit: { type: 'enum', values: NALOXONE_UNITS },
+  givenAt: { type: 'datetime', presence: 'optional' },
+  signature: { type: 'object', fields: SIGNATURE },
+};
+export const PAUSE: BodySpec = { reason };
+export const RESUME: BodySpec = { reason, settings, witness: { type: 'object', fields: { ...COLLEAGUE, settings } } };
 
 const count = (max: number): FieldSpec => ({ type: 'number', int: true, min: 0, max });
 export const OBSERVATION: BodySpec = {
@@ -114,6 +125,12 @@ export const OBSERVATION: BodySpec = {
   delivered: count(100_000),
   volumeInfusedMl: { type: 'number', min: 0, max: 1000 },
   syringeRemainingMl: { type: 'number', min: 0, max: 1000 },
+  oxygenLitresPerMinute: { type: 'number', min: 0, max: 60, presence: 'optional' },
+  oxygenDevice: { type: 'enum', values: OXYGEN_DEVICES, presence: 'optional' },
+  heartRate: { type: 'number', int: true, min: 0, max: 300, presence: 'optional' },
+  systolicBp: { type: 'number', int: true, min: 0, max: 300, presence: 'optional' },
+  temperatureC: { type: 'number', min: 25, max: 45, presence: 'optional' },
+  consciousness: { type: 'enum', values: CONSCIOUSNESS_LEVELS, presence: 'optional' },
   note: { type: 'string', max: 2000, presence: 'optional' },
 };
 export const ACKNOWLEDGE_FLAG: BodySpec = { note: { type: 'string', min: 5, max: 1000, trimmed: true } };
@@ -187,10 +204,11 @@ const setting = (spec: Omit<Extract<FieldSpec, { type: 'number' }>, 'type'>): Fi
 });
 const email: FieldSpec = { type: 'email', emptyAllowed: true, presence: 'partial' };
 export const WARD_POLICY: BodySpec = {
-  observationIntervalFirst24hMinutes: setting({ int: true, min: 15, max: 240 }),
-  observationIntervalMinutes: setting({ int: true, min: 15, max: 480 }),
-  respiratoryRateThreshold: setting({ int: true, min: 4, max: 20 }),
-  spo2Threshold: setting({ int: true, min: 70, max: 100 }),
+  // Floors from shared WARD_POLICY_FLOORS: a ward can tighten, not loosen past them.
+  observationIntervalFirst24hMinutes: setting({ int: true, min: 15, max: 60 }),
+  observationIntervalMinutes: setting({ int: true, min: 15, max: 120 }),
+  respiratoryRateThreshold: setting({ int: true, min: 9, max: 20 }),
+  spo2Threshold: setting({ int: true, min: 92, max: 100 }),
   syringeLowThresholdHours: setting({ min: 0.5, max: 24 }),
   reconciliationToleranceMl: setting({ min: 0, max: 10 }),
   painNotControlledScore: setting({ int: true, min: 0, max: 10 }),
@@ -231,6 +249,9 @@ export const BAD_INPUT_COVERAGE: Record<string, string> = {
   'POST /api/orders/:param/boluses': 'bad-input-bedside',
   'POST /api/orders/:param/syringe-changes': 'bad-input-bedside',
   'POST /api/orders/:param/discontinue': 'bad-input-bedside',
+  'POST /api/orders/:param/naloxone': 'bad-input-bedside',
+  'POST /api/orders/:param/pause': 'bad-input-bedside',
+  'POST /api/orders/:param/resume': 'bad-input-bedside',
   'POST /api/orders/:param/observations': 'bad-input-bedside',
   'POST /api/flags/:param/acknowledge': 'bad-input-bedside',
   'POST /api/wards/:param/handover/signoffs': 'bad-input-bedside',

@@ -36,8 +36,8 @@ describe('urgentWarnings', () => {
   it('says the scale’s action and the threshold crossed; nothing for values not typed yet', () => {
     expect(urgentWarnings({ sedationLevel: '3' }, undefined).sedationLevel).toMatch(/reduce the opioid dose by 25–50 %/);
     expect(urgentWarnings({ respiratoryRate: 6, spo2: 85 }, DEFAULT_WARD_POLICY)).toEqual({
-      respiratoryRate: 'Below the ward’s 8/min: saving raises an urgent flag',
-      spo2: 'Below the ward’s 90 %: saving raises an urgent flag',
+      respiratoryRate: 'Below the ward’s 9/min: saving raises an urgent flag',
+      spo2: 'Below the ward’s 92 %: saving raises an urgent flag',
     });
     expect(urgentWarnings({ respiratoryRate: null, spo2: null, sedationLevel: '' }, DEFAULT_WARD_POLICY)).toEqual({});
   });

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { isEmailAddress } from '../api/email.js';
 import { isWhole } from '../api/request-rules.js';
+import { WARD_POLICY_FLOORS as FLOORS } from '../observations/ward-policy.js';
 
 // A setting left out stays as it is; a null is refused (with the type's message), never taken to blank it.
 const whole = (min: number, max: number, messages: { whole: string; low: string; high: string }) =>
@@ -16,22 +17,27 @@ const email = z
 
 /** A change to a ward's monitoring and escalation settings; only the settings sent change. */
 export const updateWardPolicySchema = z.strictObject({
-  observationIntervalFirst24hMinutes: whole(15, 240, {
+  // A ward can tighten but not loosen past WARD_POLICY_FLOORS (sources beside them).
+  observationIntervalFirst24hMinutes: whole(15, FLOORS.observationIntervalFirst24hMinutes.max, {
     whole: 'A whole number of minutes',
     low: 'At least 15 minutes',
-    high: 'At most 240 minutes',
+    high: FLOORS.observationIntervalFirst24hMinutes.message,
   }),
-  observationIntervalMinutes: whole(15, 480, {
+  observationIntervalMinutes: whole(15, FLOORS.observationIntervalMinutes.max, {
     whole: 'A whole number of minutes',
     low: 'At least 15 minutes',
-    high: 'At most 480 minutes',
+    high: FLOORS.observationIntervalMinutes.message,
   }),
-  respiratoryRateThreshold: whole(4, 20, {
+  respiratoryRateThreshold: whole(FLOORS.respiratoryRateThreshold.min, 20, {
     whole: 'A whole number per minute',
-    low: 'At least 4 per minute',
+    low: FLOORS.respiratoryRateThreshold.message,
     high: 'At most 20 per minute',
   }),
-  spo2Threshold: whole(70, 100, { whole: 'A whole number of %', low: 'At least 70 %', high: 'At most 100 %' }),
+  spo2Threshold: whole(FLOORS.spo2Threshold.min, 100, {
+    whole: 'A whole number of %',
+    low: FLOORS.spo2Threshold.message,
+    high: 'At most 100 %',
+  }),
   syringeLowThresholdHours: amount(0.5, 24, { number: 'A number of hours', low: 'At least 0.5 hours', high: 'At most 24 hours' }),
   reconciliationToleranceMl: amount(0, 10, { number: 'A number of mL', low: 'Cannot be negative', high: 'At most 10 mL' }),
   painNotControlledScore: whole(0, 10, { whole: 'A whole pain score', low: 'Pain score is 0 to 10', high: 'Pain score is 0 to 10' }),

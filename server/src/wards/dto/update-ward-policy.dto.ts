@@ -1,5 +1,5 @@
 import { IS_EMAIL, isEmail, IsInt, IsNumber, Max, Min, ValidateBy, ValidateIf } from 'class-validator';
-import type { UpdateWardPolicyRequest } from '@lockstep/shared';
+import { type UpdateWardPolicyRequest, WARD_POLICY_FLOORS as FLOORS } from '@lockstep/shared';
 import { ApiPropertyOptional } from '@nestjs/swagger';
 
 const finite = { allowNaN: false, allowInfinity: false };
@@ -19,11 +19,11 @@ export class UpdateWardPolicyDto implements UpdateWardPolicyRequest {
   @ApiPropertyOptional({
     type: 'integer',
     minimum: 15,
-    maximum: 240,
+    maximum: FLOORS.observationIntervalFirst24hMinutes.max,
     example: 60,
-    description: 'Minutes between observations in the first 24 hours of a PCA',
+    description: 'Minutes between observations in the first 24 hours of a PCA; a ward can shorten it, not lengthen it past the floor',
   })
-  @Max(240, { message: 'At most 240 minutes' })
+  @Max(FLOORS.observationIntervalFirst24hMinutes.max, { message: FLOORS.observationIntervalFirst24hMinutes.message })
   @Min(15, { message: 'At least 15 minutes' })
   @IsInt({ message: 'A whole number of minutes' })
   @unlessAbsent
@@ -32,11 +32,11 @@ export class UpdateWardPolicyDto implements UpdateWardPolicyRequest {
   @ApiPropertyOptional({
     type: 'integer',
     minimum: 15,
-    maximum: 480,
+    maximum: FLOORS.observationIntervalMinutes.max,
     example: 120,
-    description: 'Minutes between observations after the first 24 hours',
+    description: 'Minutes between observations after the first 24 hours; a ward can shorten it, not lengthen it past the floor',
   })
-  @Max(480, { message: 'At most 480 minutes' })
+  @Max(FLOORS.observationIntervalMinutes.max, { message: FLOORS.observationIntervalMinutes.message })
   @Min(15, { message: 'At least 15 minutes' })
   @IsInt({ message: 'A whole number of minutes' })
   @unlessAbsent
@@ -44,20 +44,26 @@ export class UpdateWardPolicyDto implements UpdateWardPolicyRequest {
 
   @ApiPropertyOptional({
     type: 'integer',
-    minimum: 4,
+    minimum: FLOORS.respiratoryRateThreshold.min,
     maximum: 20,
-    example: 8,
-    description: 'A respiratory rate below this raises an urgent flag',
+    example: 9,
+    description: 'A respiratory rate below this raises an urgent flag; never below the floor (8/min or below is always urgent)',
   })
   @Max(20, { message: 'At most 20 per minute' })
-  @Min(4, { message: 'At least 4 per minute' })
+  @Min(FLOORS.respiratoryRateThreshold.min, { message: FLOORS.respiratoryRateThreshold.message })
   @IsInt({ message: 'A whole number per minute' })
   @unlessAbsent
   respiratoryRateThreshold?: number;
 
-  @ApiPropertyOptional({ type: 'integer', minimum: 70, maximum: 100, example: 90, description: 'An SpO2 below this raises an urgent flag' })
+  @ApiPropertyOptional({
+    type: 'integer',
+    minimum: FLOORS.spo2Threshold.min,
+    maximum: 100,
+    example: 92,
+    description: 'An SpO2 below this raises an urgent flag; never below the floor (91 % or below is always urgent)',
+  })
   @Max(100, { message: 'At most 100 %' })
-  @Min(70, { message: 'At least 70 %' })
+  @Min(FLOORS.spo2Threshold.min, { message: FLOORS.spo2Threshold.message })
   @IsInt({ message: 'A whole number of %' })
   @unlessAbsent
   spo2Threshold?: number;
