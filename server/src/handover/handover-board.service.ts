@@ -8,6 +8,7 @@ import { ReleaseReconciliation } from '../bedside/entities/release-reconciliatio
 import { storedDate } from '../database/stored-date.js';
 import { Flag } from '../flags/entities/flag.entity.js';
 import { Observation } from '../observations/entities/observation.entity.js';
+import { monitoringEvents } from '../observations/next-observation.js';
 import { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
 import { Ward } from '../wards/entities/ward.entity.js';
@@ -36,6 +37,8 @@ const ORDER_COLUMNS = {
   signedAt: true,
   statusChangedAt: true,
   startedAt: true,
+  version: true,
+  loadingDose: true,
   patient: {
     id: true,
     bed: true,
@@ -102,7 +105,7 @@ export class HandoverBoardService {
     const manager = this.dataSource.manager;
     const since = new Date(now.getTime() - 24 * HOUR);
     const readFrom = boardReadingsFrom(now);
-    const [observations, latest, flags, releases, starts, boluses, discrepancies, signoffs] = await Promise.all([
+    const [observations, latest, flags, releases, starts, boluses, discrepancies, signoffs, schedule] = await Promise.all([
       // Raw rows: a ward's day of readings is hundreds of rows, and making entities of them cost
       // more than the query.
       manager
@@ -140,7 +143,9 @@ export class HandoverBoardService {
         where: { wardId, shiftDate: shift.shiftDate, shift: shift.shift as 'day' | 'night' },
         relations: { nurse: true },
       }),
+      monitoringEvents(manager, ids),
     ]);
-    return { observations, latest, flags, releases, starts, boluses, discrepancies, signoffs };
+    const events = [...schedule].flatMap(([orderId, list]) => list.map((event) => ({ ...event, orderId })));
+    return { observations, latest, flags, releases, starts, boluses, discrepancies, signoffs, events };
   }
 }

@@ -1,9 +1,10 @@
-import { observationDue, projectedEmptyAt, usageSummary, type HandoverRow, type SyringeReading, type WardPolicy } from '@lockstep/shared';
+import { projectedEmptyAt, usageSummary, type HandoverRow, type SyringeReading, type WardPolicy } from '@lockstep/shared';
 import type { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
 import type { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
 import type { ReleaseReconciliation } from '../bedside/entities/release-reconciliation.entity.js';
 import type { Flag } from '../flags/entities/flag.entity.js';
 import type { Observation } from '../observations/entities/observation.entity.js';
+import { nextObservationFor, type OrderMonitoringEvent } from '../observations/next-observation.js';
 import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import type { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
 import type { HandoverSignoff } from './entities/handover-signoff.entity.js';
@@ -33,6 +34,8 @@ export type BoardInputs = {
   boluses: ClinicianBolus[];
   discrepancies: (ReleaseReconciliation & { release: SyringeRelease })[];
   signoffs: HandoverSignoff[];
+  /** The latest tightening events of each order, for the monitoring schedule (none when not fetched). */
+  events?: OrderMonitoringEvent[];
 };
 
 /** The same facts for one order: its share of each list. */
@@ -40,7 +43,7 @@ export type OrderInputs = BoardInputs;
 
 /** Every list empty: a ward with no orders, or an order with nothing fetched for it. */
 export function emptyInputs(): BoardInputs {
-  return { observations: [], latest: [], flags: [], releases: [], starts: [], boluses: [], discrepancies: [], signoffs: [] };
+  return { observations: [], latest: [], flags: [], releases: [], starts: [], boluses: [], discrepancies: [], signoffs: [], events: [] };
 }
 
 /**
@@ -55,7 +58,7 @@ export function inputsByOrder(inputs: BoardInputs): Map<number, OrderInputs> {
     return mine;
   };
   for (const key of Object.keys(inputs) as (keyof BoardInputs)[]) {
-    for (const item of inputs[key]) {
+    for (const item of inputs[key] ?? []) {
       const orderId =
         key === 'discrepancies' ? (item as BoardInputs['discrepancies'][number]).release.orderId : (item as { orderId: number }).orderId;
       (share(orderId)[key] as unknown[]).push(item);
@@ -117,10 +120,7 @@ export function rowFigures(order: PcaOrder, mine: OrderInputs, policy: WardPolic
           spo2: last.spo2,
         }
       : null,
-    nextObservation:
-      order.status === 'active' && order.startedAt
-        ? observationDue(order.startedAt.toISOString(), last?.at.toISOString() ?? null, now, policy)
-        : null,
+    nextObservation: nextObservationFor(order, last?.at ?? null, mine.events ?? [], now, policy),
     last4h: { attempts: recent.attempts, delivered: recent.delivered, dose: recent.dose + recent.bolusDose },
     total24hDose: usage.rolling24hDose,
     syringe: {

@@ -7,7 +7,7 @@ import { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
 import { EquianalgesicService } from '../equianalgesic/equianalgesic.service.js';
 import { OrdersService } from '../orders/orders.service.js';
 import { Observation } from './entities/observation.entity.js';
-import { nextObservationFor } from './next-observation.js';
+import { monitoringEvents, nextObservationFor } from './next-observation.js';
 
 /** Hourly use, the 24-hour total, oral-morphine equivalent, projected syringe-empty time and the next observation due. */
 @Injectable()
@@ -74,7 +74,8 @@ export class UsageService {
       last && order.status === 'active'
         ? projectedEmptyAt(syringeReadings, last.syringeRemainingMl, order.basalRatePerHour / order.concentrationPerMl)
         : null;
-    const nextObservation = nextObservationFor(order, last?.at ?? null, now);
+    const schedule = order.status === 'active' ? await monitoringEvents(manager, [order.id]) : new Map();
+    const nextObservation = nextObservationFor(order, last?.at ?? null, schedule.get(order.id) ?? [], now);
     return { ...summary, oralMorphineFactors, doseUnit: order.doseUnit, projectedEmptyAt: projected, nextObservation };
   }
 }

@@ -18,7 +18,7 @@ import {
 import type { AuthUser } from '../auth/auth-user.js';
 import { Flag } from '../flags/entities/flag.entity.js';
 import { Observation } from '../observations/entities/observation.entity.js';
-import { nextObservationFor } from '../observations/next-observation.js';
+import { monitoringEvents, nextObservationFor } from '../observations/next-observation.js';
 import { toLimitRuleResponse } from '../library/dto/library-response.js';
 import { MailService } from '../mail/mail.service.js';
 import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
@@ -155,7 +155,7 @@ export class OrdersService {
     });
     const ids = orders.map((order) => order.id);
     const running = orders.filter((order) => order.status === 'active').map((order) => order.id);
-    const [releases, latest] = await Promise.all([
+    const [releases, latest, events] = await Promise.all([
       ids.length === 0
         ? []
         : manager.find(SyringeRelease, {
@@ -171,13 +171,14 @@ export class OrdersService {
             .where('o.orderId IN (:...running)', { running })
             .groupBy('o.orderId')
             .getRawMany<{ orderId: number; at: string }>(),
+      monitoringEvents(manager, running),
     ]);
     const lastObservedAt = new Map(latest.map((row) => [Number(row.orderId), storedDate(row.at)]));
     const patientOrders = await this.unfinishedOrdersOf(manager, [...new Set(orders.map((order) => order.patientId))]);
     return orders.map((order) => ({
       ...toOrderSummary(order),
       syringeState: syringeState(releases.filter((release) => release.orderId === order.id)),
-      nextObservation: nextObservationFor(order, lastObservedAt.get(order.id) ?? null, now),
+      nextObservation: nextObservationFor(order, lastObservedAt.get(order.id) ?? null, events.get(order.id) ?? [], now),
       otherOpenOrders: otherOpioidOrders(patientOrders.get(order.patientId) ?? [], order.id),
     }));
   }
@@ -220,7 +221,8 @@ export class OrdersService {
       order.status === 'active'
         ? await manager.findOne(Observation, { select: { id: true, at: true }, where: { orderId: id }, order: { at: 'DESC', id: 'DESC' } })
         : null;
-    return toOrderDetail(order, events, releases, flags, nextObservationFor(order, last?.at ?? null, new Date()));
+    const schedule = order.status === 'active' ? await monitoringEvents(manager, [id]) : new Map();
+    return toOrderDetail(order, events, releases, flags, nextObservationFor(order, last?.at ?? null, schedule.get(id) ?? [], new Date()));
   }
 
   async load(manager: EntityManager, id: number): Promise<PcaOrder> {
