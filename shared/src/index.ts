@@ -73,6 +73,7 @@ export * from './handover/handover.schema.js';
 export * from './handover/handover-risk.js';
 export * from './handover/shift-window.js';
 export * from './observations/projected-empty-at.js';
+export * from './observations/delivery-flags.js';
 export * from './audit/audit.schema.js';
 export * from './fhir/index.js';
 export * from './api/response-registry.js';

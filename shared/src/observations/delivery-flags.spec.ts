@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import {
+  atOrOverLimit,
   deliveryFlags,
   type DeliveryRegimen,
   mostDemandsBetweenReadings,
@@ -69,5 +70,18 @@ describe('deliveryFlags', () => {
     expect(flags).toEqual([expect.objectContaining({ severity: 'review', code: 'delivery.volume-mismatch' })]);
     // A clinician bolus of 2 mL in between explains it.
     expect(deliveryFlags({ at: at(60), delivered: 6, volumeInfusedMl: 9 }, start, [], basal, 2)).toEqual([]);
+  });
+});
+
+describe('atOrOverLimit', () => {
+  // The order's own 4-hour limit (docs/design.md, order fields): at the limit counts, as the board shows it.
+  it('is true at or over the limit, false under it or with no limit, and never safe for a broken total', () => {
+    expect(atOrOverLimit(29.9, 30)).toBe(false);
+    expect(atOrOverLimit(30, 30)).toBe(true);
+    expect(atOrOverLimit(40, 30)).toBe(true);
+    expect(atOrOverLimit(40, null)).toBe(false);
+    expect(atOrOverLimit(Number.NaN, 30)).toBe(true);
+    expect(atOrOverLimit(Number.POSITIVE_INFINITY, null)).toBe(true);
+    expect(atOrOverLimit(10, Number.NaN)).toBe(true);
   });
 });

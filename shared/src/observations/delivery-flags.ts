@@ -96,3 +96,14 @@ export function deliveryFlags(
   }
   return flags;
 }
+
+/**
+ * A total given in a window at or over the order's limit for that window (the board's 4-hour
+ * figure against the 4-hour limit). No limit stated: false (the order check held the regimen to
+ * the ward's rule when it was signed). A total that is not a finite number is never taken as safe.
+ */
+export function atOrOverLimit(total: number, limit: number | null): boolean {
+  if (!Number.isFinite(total)) return true;
+  if (limit === null) return false;
+  return !(total < limit);
+}

@@ -2,6 +2,7 @@ import type { ReactNode } from 'react';
 import { Group, Stack, Text, VisuallyHidden } from '@mantine/core';
 import { IconAlertTriangle, IconClock, IconHourglassLow, IconQuestionMark } from '@tabler/icons-react';
 import {
+  atOrOverLimit,
   drugAndConcentration,
   FLAG_SEVERITY_LABELS,
   formatDose,
@@ -150,6 +151,14 @@ export function UsageCell({ row }: { row: HandoverRow }) {
         </Text>
         {lastFourHours(row)}
       </Text>
+      {row.regimen.fourHourLimit !== null && atOrOverLimit(row.last4h.dose, row.regimen.fourHourLimit) ? (
+        <Group gap={4} wrap="nowrap" c="red.9">
+          <IconAlertTriangle size={14} aria-hidden />
+          <Text size="xs" fw={600} c="inherit">
+            At or over the 4-hour limit of {formatDose(row.regimen.fourHourLimit, row.doseUnit)}
+          </Text>
+        </Group>
+      ) : null}
       <Text size="sm" style={{ whiteSpace: 'nowrap' }}>
         <Text span size="xs" c="dimmed">
           24 h{' '}
