@@ -237,22 +237,24 @@ describe('observations: flags, usage charts and acknowledgement', () => {
     await expect.poll(() => new URL(page.url()).searchParams.get('ward')).not.toBeNull();
 
     const spo2 = page.getByLabel('SpO2 below');
-    expect(await spo2.inputValue()).toBe('90');
-    expect(await page.getByTestId('default-spo2Threshold').innerText()).toMatch(/^Shipped default\s+90 %$/);
-    await spo2.fill('92');
+    // Shipped default: urgent at 91 % or below (NEWS2 scale 1, Royal College of Physicians 2017).
+    expect(await spo2.inputValue()).toBe('92');
+    expect(await page.getByTestId('default-spo2Threshold').innerText()).toMatch(/^Shipped default\s+92 %$/);
+    await spo2.fill('93');
     await page.getByRole('button', { name: 'Save' }).click();
     await page.getByText('Ward policy saved').waitFor();
     await page.getByTestId('default-spo2Threshold').getByText('Changed locally').waitFor();
     const token = await apiToken(server.baseUrl, 'sam.rivera');
     const wardId = Number(new URL(page.url()).searchParams.get('ward'));
-    expect((await callApi<{ spo2Threshold: number }>(server.baseUrl, token, 'GET', `/wards/${wardId}/policy`)).spo2Threshold).toBe(92);
+    expect((await callApi<{ spo2Threshold: number }>(server.baseUrl, token, 'GET', `/wards/${wardId}/policy`)).spo2Threshold).toBe(93);
     // The change is audited, and the screen shows who changed what beneath the form.
     const recent = page.getByRole('region', { name: 'Recent changes' });
-    await recent.getByText('90 → 92').waitFor();
+    await recent.getByText('→ 93').waitFor();
     expect(await recent.innerText()).toContain('Sam Rivera');
 
-    await spo2.fill('20');
-    await page.getByText('At least 70 %').waitFor();
+    // Past the floor: 91 % or below is always urgent.
+    await spo2.fill('91');
+    await page.getByText(/^At least 92 %: SpO2 of 91 % or below is always urgent/).waitFor();
     expect(await spo2.getAttribute('aria-invalid')).toBe('true');
     const describedBy = (await spo2.getAttribute('aria-describedby')) ?? '';
     const messages = await Promise.all(
@@ -261,7 +263,7 @@ describe('observations: flags, usage charts and acknowledgement', () => {
         .filter(Boolean)
         .map((id) => page.locator(`[id="${id}"]`).innerText()),
     );
-    expect(messages.join(' ')).toContain('At least 70 %');
+    expect(messages.join(' ')).toContain('At least 92 %');
     await snapshot(page, 'ward-policy-harbour');
   });
 });

@@ -27,8 +27,8 @@ describe('policy fields', () => {
     expect(POLICY_NUMBER_FIELDS.map(shippedDefault)).toEqual([
       '60 min',
       '120 min',
-      '8/min',
-      '90 %',
+      '9/min', // urgent at 8/min or below: NEWS2, Royal College of Physicians 2017
+      '92 %', // urgent at 91 % or below: NEWS2 scale 1, Royal College of Physicians 2017
       '7/10',
       '2 attempts per dose',
       '2 h',
@@ -41,13 +41,17 @@ describe('policy fields', () => {
 
 describe('range checks, in the server’s words', () => {
   it('holds each value to its range', () => {
-    expect(policyNumberError(field('spo2Threshold'), 20)).toBe('At least 70 %');
+    // Floors (shared WARD_POLICY_FLOORS): NEWS2 (Royal College of Physicians 2017); intervals common practice.
+    expect(policyNumberError(field('spo2Threshold'), 91)).toMatch(/^At least 92 %: SpO2 of 91 % or below is always urgent/);
     expect(policyNumberError(field('spo2Threshold'), 101)).toBe('At most 100 %');
     expect(policyNumberError(field('spo2Threshold'), 92.5)).toBe('A whole number of %');
     expect(policyNumberError(field('spo2Threshold'), 92)).toBeNull();
-    expect(policyNumberError(field('observationIntervalFirst24hMinutes'), 241)).toBe('At most 240 minutes');
-    expect(policyNumberError(field('observationIntervalMinutes'), 480)).toBeNull();
-    expect(policyNumberError(field('respiratoryRateThreshold'), 3)).toBe('At least 4 per minute');
+    expect(policyNumberError(field('observationIntervalFirst24hMinutes'), 61)).toMatch(/^At most 60 minutes/);
+    expect(policyNumberError(field('observationIntervalMinutes'), 120)).toBeNull();
+    expect(policyNumberError(field('observationIntervalMinutes'), 121)).toMatch(/^At most 120 minutes/);
+    expect(policyNumberError(field('respiratoryRateThreshold'), 8)).toMatch(
+      /^At least 9 per minute: a rate of 8\/min or below is always urgent/,
+    );
     expect(policyNumberError(field('syringeLowThresholdHours'), 0.25)).toBe('At least 0.5 hours');
     expect(policyNumberError(field('reconciliationToleranceMl'), -1)).toBe('Cannot be negative');
     expect(policyNumberError(field('painNotControlledRatio'), 1.5)).toBeNull();
@@ -65,7 +69,7 @@ describe('range checks, in the server’s words', () => {
   it('checks the whole form', () => {
     expect(validatePolicyForm(policyToForm(SAVED))).toEqual({});
     expect(validatePolicyForm({ ...policyToForm(SAVED), spo2Threshold: 20, pharmacyEmail: 'x' })).toEqual({
-      spo2Threshold: 'At least 70 %',
+      spo2Threshold: expect.stringMatching(/^At least 92 %/),
       pharmacyEmail: 'Enter an e-mail address (or leave empty)',
     });
   });
@@ -74,8 +78,8 @@ describe('range checks, in the server’s words', () => {
 describe('policyChanges', () => {
   it('sends only what changed, numbers as numbers and e-mails trimmed', () => {
     expect(policyChanges(policyToForm(SAVED), SAVED)).toEqual({});
-    expect(policyChanges({ ...policyToForm(SAVED), spo2Threshold: '92', nurseInChargeEmail: ' nic@kestrelbay.example ' }, SAVED)).toEqual({
-      spo2Threshold: 92,
+    expect(policyChanges({ ...policyToForm(SAVED), spo2Threshold: '94', nurseInChargeEmail: ' nic@kestrelbay.example ' }, SAVED)).toEqual({
+      spo2Threshold: 94,
       nurseInChargeEmail: 'nic@kestrelbay.example',
     });
   });

@@ -1,4 +1,11 @@
-import { DEFAULT_WARD_POLICY, formatDose, type UpdateWardPolicyRequest, type WardPolicy, type WardPolicySettings } from '@lockstep/shared';
+import {
+  DEFAULT_WARD_POLICY,
+  formatDose,
+  type UpdateWardPolicyRequest,
+  WARD_POLICY_FLOORS as FLOORS,
+  type WardPolicy,
+  type WardPolicySettings,
+} from '@lockstep/shared';
 import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 
 export type PolicyNumberKey = keyof WardPolicy;
@@ -33,10 +40,10 @@ export const POLICY_NUMBER_FIELDS: readonly PolicyNumberField[] = [
     unit: 'min',
     help: 'Between observations after a PCA starts or its regimen changes',
     min: 15,
-    max: 240,
+    max: FLOORS.observationIntervalFirst24hMinutes.max,
     integer: true,
     below: 'At least 15 minutes',
-    above: 'At most 240 minutes',
+    above: FLOORS.observationIntervalFirst24hMinutes.message,
     notWhole: 'A whole number of minutes',
   },
   {
@@ -46,10 +53,10 @@ export const POLICY_NUMBER_FIELDS: readonly PolicyNumberField[] = [
     unit: 'min',
     help: 'Between observations once the first day has passed',
     min: 15,
-    max: 480,
+    max: FLOORS.observationIntervalMinutes.max,
     integer: true,
     below: 'At least 15 minutes',
-    above: 'At most 480 minutes',
+    above: FLOORS.observationIntervalMinutes.message,
     notWhole: 'A whole number of minutes',
   },
   {
@@ -58,10 +65,10 @@ export const POLICY_NUMBER_FIELDS: readonly PolicyNumberField[] = [
     label: 'Respiratory rate below',
     unit: '/min',
     help: 'A lower rate raises an urgent flag and e-mails the prescriber and nurse in charge',
-    min: 4,
+    min: FLOORS.respiratoryRateThreshold.min,
     max: 20,
     integer: true,
-    below: 'At least 4 per minute',
+    below: FLOORS.respiratoryRateThreshold.message,
     above: 'At most 20 per minute',
     notWhole: 'A whole number per minute',
   },
@@ -71,10 +78,10 @@ export const POLICY_NUMBER_FIELDS: readonly PolicyNumberField[] = [
     label: 'SpO2 below',
     unit: '%',
     help: 'A lower SpO2 raises an urgent flag and e-mails the prescriber and nurse in charge',
-    min: 70,
+    min: FLOORS.spo2Threshold.min,
     max: 100,
     integer: true,
-    below: 'At least 70 %',
+    below: FLOORS.spo2Threshold.message,
     above: 'At most 100 %',
     notWhole: 'A whole number of %',
   },
