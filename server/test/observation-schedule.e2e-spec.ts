@@ -46,7 +46,10 @@ describe('monitoring schedule', () => {
     const row = await boardRow(afterSedation.wardId, order.id);
     expect(row.nextObservation.dueAt).toBe(afterSedation.nextObservation.dueAt);
     const list = await request(t.http).get('/api/orders').set(as('kai')).expect(200);
-    expect(list.body.find((o: { id: number }) => o.id === order.id).nextObservation.dueAt).toBe(afterSedation.nextObservation.dueAt);
+    const entry = list.body.find((o: { id: number }) => o.id === order.id);
+    expect(entry.nextObservation.dueAt).toBe(afterSedation.nextObservation.dueAt);
+    // The nurse's list and the prescriber's bell read the open urgent flags from the list.
+    expect(entry.openUrgentFlags).toBe(1);
   });
 
   it('relaxes to the routine interval only after a reading without urgent flags, once the first hour is past', async () => {

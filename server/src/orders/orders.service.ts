@@ -155,7 +155,7 @@ export class OrdersService {
     });
     const ids = orders.map((order) => order.id);
     const running = orders.filter((order) => order.status === 'active').map((order) => order.id);
-    const [releases, latest, events] = await Promise.all([
+    const [releases, latest, events, urgent] = await Promise.all([
       ids.length === 0
         ? []
         : manager.find(SyringeRelease, {
@@ -172,13 +172,24 @@ export class OrdersService {
             .groupBy('o.orderId')
             .getRawMany<{ orderId: number; at: string }>(),
       monitoringEvents(manager, running),
+      ids.length === 0
+        ? []
+        : manager
+            .createQueryBuilder(Flag, 'f')
+            .select('f.orderId', 'orderId')
+            .addSelect('count(*)', 'open')
+            .where("f.orderId IN (:...ids) AND f.severity = 'urgent' AND f.acknowledgedAt IS NULL", { ids })
+            .groupBy('f.orderId')
+            .getRawMany<{ orderId: number; open: number }>(),
     ]);
+    const openUrgent = new Map(urgent.map((row) => [Number(row.orderId), Number(row.open)]));
     const lastObservedAt = new Map(latest.map((row) => [Number(row.orderId), storedDate(row.at)]));
     const patientOrders = await this.unfinishedOrdersOf(manager, [...new Set(orders.map((order) => order.patientId))]);
     return orders.map((order) => ({
       ...toOrderSummary(order),
       syringeState: syringeState(releases.filter((release) => release.orderId === order.id)),
       nextObservation: nextObservationFor(order, lastObservedAt.get(order.id) ?? null, events.get(order.id) ?? [], now),
+      openUrgentFlags: openUrgent.get(order.id) ?? 0,
       otherOpenOrders: otherOpioidOrders(patientOrders.get(order.patientId) ?? [], order.id),
     }));
   }

@@ -125,6 +125,7 @@ export const orderListEntrySchema: z.ZodType<OrderListEntry> = answer(
     ...summaryShape,
     syringeState: z.enum(['running', 'ready', 'none']),
     nextObservation: observationDueSchema.nullable(),
+    openUrgentFlags: z.number().int(),
     otherOpenOrders: z.array(
       z.object({
         id: z.number().int(),

@@ -115,6 +115,8 @@ export type OrderSummary = {
 export type OrderListEntry = OrderSummary & {
   syringeState: SyringeState;
   nextObservation: ObservationDue | null;
+  /** How many urgent flags on this order are open (not yet acknowledged). */
+  openUrgentFlags: number;
   /** The patient's other unfinished orders (shared `otherOpioidOrders`), for the pharmacist's queue. */
   otherOpenOrders: OtherPcaOrder[];
 };
