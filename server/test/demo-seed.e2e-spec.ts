@@ -54,6 +54,15 @@ describe('the demo hospital, caught in the middle of a shift', () => {
     expect(confirmed).toBeLessThan(running.length);
   });
 
+  it('the demo’s pump totals fit each regimen: the flags it writes (first readings included) never say delivered more than allowed', async () => {
+    const codes: { code: string; n: number }[] = await t.app.get(DataSource).query('SELECT code, count(*) AS n FROM flags GROUP BY code');
+    const found = codes.map((row) => row.code);
+    expect(found).toContain('sedation.3');
+    expect(found).not.toContain('delivery.over-regimen');
+    expect(found).not.toContain('delivery.volume-mismatch');
+    expect(found).not.toContain('syringe.reading');
+  });
+
   it('an order’s detail says when its next observation is due, as the board does; none before it runs', async () => {
     for (const row of (await board(HARBOUR)).rows) {
       const detail = (await get('kai', `/api/orders/${row.orderId}`)).body as OrderDetail;

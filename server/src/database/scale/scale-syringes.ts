@@ -1,4 +1,13 @@
-import { observationFlags, reconcile, type FlagDraft, type ObservationValues, type PumpSettings, type WardPolicy } from '@lockstep/shared';
+import {
+  observationFlags,
+  type PreviousReading,
+  reconcile,
+  syringeStartReading,
+  type FlagDraft,
+  type ObservationValues,
+  type PumpSettings,
+  type WardPolicy,
+} from '@lockstep/shared';
 import { discrepancyFlag } from '../../bedside/reconciliation-records.js';
 import type { ObservationScript } from './observation-script.js';
 import type { Random } from './random.js';
@@ -59,6 +68,8 @@ export function writeSyringes(ctx: SyringeContext, order: ObservedOrder): void {
   let syringes = 0;
   let release = startSyringe(ctx, order, order.start);
   let previous: ObservationValues | null = null;
+  // This syringe's readings, its start first: the first observation's flags, and the 1- and 4-hour limits.
+  let readings: PreviousReading[] = [syringeStartReading(new Date(order.start).toISOString())];
   let at = order.start + HOUR + script.offsetMinutes() * MINUTE;
   for (let hour = 1; at < order.stopAt; hour++) {
     const nextAt = order.start + (hour + 1) * HOUR + script.offsetMinutes() * MINUTE;
@@ -96,18 +107,22 @@ export function writeSyringes(ctx: SyringeContext, order: ObservedOrder): void {
     });
     // Flags on the last observation of a running PCA are still open on the board.
     const acknowledgedAt = last && order.end === null ? null : at + r.int(10, 40) * MINUTE;
-    for (const flag of observationFlags(values, previous, basalMl, ctx.policy)) {
+    const earlier = readings.filter((reading) => at - Date.parse(reading.at) <= 4 * HOUR);
+    const context = { regimen, earlier, syringeVolumeMl: regimen.syringeMl };
+    for (const flag of observationFlags(values, previous ?? readings[0]!, basalMl, ctx.policy, context)) {
       const oncePerSyringe = flag.code === 'syringe.low';
       if (oncePerSyringe && release.lowFlagged) continue;
       if (oncePerSyringe) release.lowFlagged = true;
       writeFlag(ctx, order.orderId, oncePerSyringe ? release.id : null, flag, at, acknowledgedAt);
     }
     previous = values;
+    readings.push(values);
     const changeAt = at + 10 * MINUTE;
     if (order.changeSyringes !== false && values.syringeRemainingMl < CHANGE_BELOW_ML && changeAt < order.stopAt) {
       takeDown(ctx, order, release, changeAt, values, syringes++);
       release = startSyringe(ctx, order, changeAt);
       previous = null;
+      readings = [syringeStartReading(new Date(changeAt).toISOString())];
     }
     at = nextAt;
   }
