@@ -159,6 +159,19 @@ describe('every state-changing route writes its audit event', () => {
       201,
       'order.bolus',
     );
+    await step(
+      'post',
+      '/api/orders/:id/naloxone',
+      `${base}/naloxone`,
+      'nurse',
+      { dose: 100, doseUnit: 'mcg', signature: { password: DEMO_PASSWORD } },
+      201,
+      'order.naloxone',
+    );
+    const resume = { reason: 'Rousable, RR 14: prescriber agreed', settings: SETTINGS, witness: { ...ROSA, settings: SETTINGS } };
+    await step('post', '/api/orders/:id/resume', `${base}/resume`, 'nurse', resume, 200, 'order.resume');
+    await step('post', '/api/orders/:id/pause', `${base}/pause`, 'nurse', { reason: 'Going to theatre' }, 200, 'order.pause');
+    await step('post', '/api/orders/:id/resume', `${base}/resume`, 'nurse', resume, 200, 'order.resume');
     const { body: wardPatient } = await request(t.http)
       .get(`/api/patients/${patient.id}`)
       .set('Authorization', `Bearer ${tokens.nurse}`)

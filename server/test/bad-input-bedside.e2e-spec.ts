@@ -3,6 +3,7 @@ import './support/lift-password-rate-limit.js';
 import request from 'supertest';
 import { describe } from 'vitest';
 import { BolusDto, DiscontinueDto, SyringeChangeDto } from '../src/bedside/dto/bedside-actions.dto.js';
+import { NaloxoneDto, PauseDto, ResumeDto } from '../src/bedside/dto/pause.dto.js';
 import { FirstCheckDto, SecondCheckDto } from '../src/bedside/dto/bedside-check.dto.js';
 import { AcknowledgeFlagDto } from '../src/flags/dto/acknowledge-flag.dto.js';
 import { CreateSignoffDto } from '../src/handover/dto/create-signoff.dto.js';
@@ -11,6 +12,9 @@ import {
   ACKNOWLEDGE_FLAG,
   BOLUS,
   DISCONTINUE,
+  NALOXONE,
+  PAUSE,
+  RESUME,
   FIRST_CHECK,
   OBSERVATION,
   SECOND_CHECK,
@@ -112,6 +116,33 @@ const ROUTES: BadInputRoute[] = [
     spec: DISCONTINUE,
     dto: DiscontinueDto,
     valid: () => ({ reason: 'Prescriber stopped the PCA for oral analgesia', volumeInfusedMl: 48, wastedMl: 2, witness: ROSA }),
+  },
+  {
+    method: 'POST',
+    path: '/api/orders/:orderId/naloxone',
+    url: () => `/api/orders/${state.active.id}/naloxone`,
+    role: 'nurse',
+    spec: NALOXONE,
+    dto: NaloxoneDto,
+    valid: () => ({ dose: 100, doseUnit: 'mcg', givenAt: new Date().toISOString(), signature: { password: 'not-checked-here' } }),
+  },
+  {
+    method: 'POST',
+    path: '/api/orders/:orderId/pause',
+    url: () => `/api/orders/${state.active.id}/pause`,
+    role: 'nurse',
+    spec: PAUSE,
+    dto: PauseDto,
+    valid: () => ({ reason: 'Sedation 3: prescriber called' }),
+  },
+  {
+    method: 'POST',
+    path: '/api/orders/:orderId/resume',
+    url: () => `/api/orders/${state.active.id}/resume`,
+    role: 'nurse',
+    spec: RESUME,
+    dto: ResumeDto,
+    valid: () => ({ reason: 'Rousable, prescriber agreed', settings: { ...SETTINGS }, witness: { ...ROSA, settings: { ...SETTINGS } } }),
   },
   {
     method: 'POST',

@@ -22,6 +22,7 @@ const SAMPLE_URLS: Record<string, string> = {
   '/api/orders/{id}': '/api/orders/4',
   '/api/orders/{orderId}/observations': '/api/orders/4/observations',
   '/api/orders/{orderId}/usage': '/api/orders/4/usage?hours=24',
+  '/api/orders/{orderId}/pause': '/api/orders/4/pause',
   '/api/wards/{wardId}/handover': '/api/wards/1/handover',
   '/api/wards/{wardId}/handover/signoffs': '/api/wards/1/handover/signoffs',
   '/api/orders/{id}/audit': '/api/orders/4/audit',

@@ -16,6 +16,9 @@ import {
   createSignoffSchema,
   createUserSchema,
   discontinueSchema,
+  naloxoneSchema,
+  pauseSchema,
+  resumeSchema,
   firstCheckSchema,
   importLibraryFieldsSchema,
   isCalendarDay,
@@ -42,6 +45,7 @@ import {
 import { LoginDto } from '../src/auth/dto/login.dto.js';
 import { BolusDto, DiscontinueDto, SyringeChangeDto } from '../src/bedside/dto/bedside-actions.dto.js';
 import { FirstCheckDto, SecondCheckDto } from '../src/bedside/dto/bedside-check.dto.js';
+import { NaloxoneDto, PauseDto, ResumeDto } from '../src/bedside/dto/pause.dto.js';
 import { SignedRequestDto } from '../src/common/dto/signature.dto.js';
 import { createValidationPipe } from '../src/common/validation/validation.pipe.js';
 import { UpdateEquianalgesicFactorDto } from '../src/equianalgesic/dto/update-equianalgesic-factor.dto.js';
@@ -73,6 +77,9 @@ import {
   CREATE_ORDER,
   CREATE_USER,
   DISCONTINUE,
+  NALOXONE,
+  PAUSE,
+  RESUME,
   EQUIANALGESIC_FACTOR,
   FIRST_CHECK,
   IMPORT_FIELDS,
@@ -120,6 +127,9 @@ const CONTRACTS: Record<string, Contract> = {
   'POST /api/orders/:param/boluses': { spec: BOLUS, dto: BolusDto, schema: bolusSchema },
   'POST /api/orders/:param/syringe-changes': { spec: SYRINGE_CHANGE, dto: SyringeChangeDto, schema: syringeChangeSchema },
   'POST /api/orders/:param/discontinue': { spec: DISCONTINUE, dto: DiscontinueDto, schema: discontinueSchema },
+  'POST /api/orders/:param/naloxone': { spec: NALOXONE, dto: NaloxoneDto, schema: naloxoneSchema },
+  'POST /api/orders/:param/pause': { spec: PAUSE, dto: PauseDto, schema: pauseSchema },
+  'POST /api/orders/:param/resume': { spec: RESUME, dto: ResumeDto, schema: resumeSchema },
   'POST /api/orders/:param/observations': { spec: OBSERVATION, dto: CreateObservationDto, schema: createObservationSchema },
   'POST /api/flags/:param/acknowledge': { spec: ACKNOWLEDGE_FLAG, dto: AcknowledgeFlagDto, schema: acknowledgeFlagSchema },
   'POST /api/wards/:param/handover/signoffs': { spec: SIGNOFF, dto: CreateSignoffDto, schema: createSignoffSchema },

@@ -2,6 +2,7 @@ import { AuditEvent } from '../audit/entities/audit-event.entity.js';
 import { RevokedToken } from '../auth/entities/revoked-token.entity.js';
 import { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
 import { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
+import { PcaPause } from '../bedside/entities/pca-pause.entity.js';
 import { ReleaseReconciliation } from '../bedside/entities/release-reconciliation.entity.js';
 import { Drug } from '../drugs/entities/drug.entity.js';
 import { EquianalgesicFactor } from '../equianalgesic/entities/equianalgesic-factor.entity.js';
@@ -43,4 +44,5 @@ export const ENTITIES = [
   AuditEvent,
   RevokedToken,
   EquianalgesicFactor,
+  PcaPause,
 ];

@@ -12,7 +12,8 @@ type Recorded = Pick<
   | 'delivered'
   | 'volumeInfusedMl'
   | 'syringeRemainingMl'
->;
+> &
+  Partial<Pick<Observation, 'oxygenLitresPerMinute' | 'oxygenDevice' | 'heartRate' | 'systolicBp' | 'temperatureC' | 'consciousness'>>;
 
 /** What the audit trail keeps of an observation: every value and the flags it raised. */
 export function observationAuditSummary(observation: Recorded, flagsRaised: string[]): Record<string, unknown> {
@@ -28,6 +29,12 @@ export function observationAuditSummary(observation: Recorded, flagsRaised: stri
     delivered,
     volumeInfusedMl,
     syringeRemainingMl,
+    // The vitals recorded, only when recorded.
+    ...Object.fromEntries(
+      (['oxygenLitresPerMinute', 'oxygenDevice', 'heartRate', 'systolicBp', 'temperatureC', 'consciousness'] as const)
+        .filter((key) => observation[key] !== undefined && observation[key] !== null)
+        .map((key) => [key, observation[key]]),
+    ),
     flagsRaised,
   };
 }

@@ -27,6 +27,7 @@ import type { CreateObservationDto } from './dto/create-observation.dto.js';
 import { toObservationResponse } from './dto/observation-response.js';
 import { Observation } from './entities/observation.entity.js';
 import { observationAuditSummary } from './observation-audit.js';
+import { vitalsPatientOf } from './vitals-patient.js';
 import { syringeLowMail, urgentFlagsMail } from './observation-notifications.js';
 import { WardEventsService } from '../ward-events/ward-events.service.js';
 import { recordAudit } from '../audit/record-audit.js';
@@ -67,7 +68,7 @@ export class ObservationsService {
         inputs.previous,
         found.basalRatePerHour / found.concentrationPerMl,
         wardPolicy(found.patient.ward),
-        inputs.context,
+        { ...inputs.context, patient: vitalsPatientOf(found, at) },
       );
       const flags: (FlagDraft & { id: number })[] = [];
       for (const draft of drafts) {
@@ -96,17 +97,17 @@ export class ObservationsService {
     const low = raised.find((flag) => flag.code === 'syringe.low');
     if (low) this.mail.send(syringeLowMail(order, low));
     this.events.publishForOrder(orderId, 'observation');
-    return { ...toObservationResponse(observation), flags: raised };
+    return { ...toObservationResponse(observation, vitalsPatientOf(order, observation.at)), flags: raised };
   }
 
   async list(orderId: number): Promise<ObservationResponse[]> {
-    await this.orders.load(this.dataSource.manager, orderId);
+    const order = await this.orders.load(this.dataSource.manager, orderId);
     const observations = await this.dataSource.manager.find(Observation, {
       where: { orderId },
       relations: { recordedBy: true },
       order: { at: 'ASC', id: 'ASC' },
     });
-    return observations.map(toObservationResponse);
+    return observations.map((observation) => toObservationResponse(observation, vitalsPatientOf(order, observation.at)));
   }
 }
 

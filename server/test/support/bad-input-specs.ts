@@ -8,6 +8,7 @@ import {
   SEDATION_LEVELS,
   SIGNOFF_ROLES,
   NALOXONE_UNITS,
+  NALOXONE_UNITS,
   CONSCIOUSNESS_LEVELS,
   OXYGEN_DEVICES,
 } from '@lockstep/shared';
@@ -105,6 +106,14 @@ export const SECOND_CHECK: BodySpec = { ...COLLEAGUE, settings };
 export const BOLUS: BodySpec = { witness, amount: positive, reason, overrideReason: { ...reason, presence: 'optional' } };
 export const SYRINGE_CHANGE: BodySpec = { witness, volumeInfusedMl: amount, wastedMl: amount, newReleaseCode: releaseCode };
 export const DISCONTINUE: BodySpec = { witness, reason, volumeInfusedMl: amount, wastedMl: amount };
+export const NALOXONE: BodySpec = {
+  dose: positive,
+  doseUnit: { type: 'enum', values: NALOXONE_UNITS },
+  givenAt: { type: 'datetime', presence: 'optional' },
+  signature: { type: 'object', fields: SIGNATURE },
+};
+export const PAUSE: BodySpec = { reason };
+export const RESUME: BodySpec = { reason, settings, witness: { type: 'object', fields: { ...COLLEAGUE, settings } } };
 export const NALOXONE: BodySpec = {
   dose: positive,
   doseUnit: { type: 'enum', values: NALOXONE_UNITS },
@@ -249,6 +258,9 @@ export const BAD_INPUT_COVERAGE: Record<string, string> = {
   'POST /api/orders/:param/boluses': 'bad-input-bedside',
   'POST /api/orders/:param/syringe-changes': 'bad-input-bedside',
   'POST /api/orders/:param/discontinue': 'bad-input-bedside',
+  'POST /api/orders/:param/naloxone': 'bad-input-bedside',
+  'POST /api/orders/:param/pause': 'bad-input-bedside',
+  'POST /api/orders/:param/resume': 'bad-input-bedside',
   'POST /api/orders/:param/naloxone': 'bad-input-bedside',
   'POST /api/orders/:param/pause': 'bad-input-bedside',
   'POST /api/orders/:param/resume': 'bad-input-bedside',

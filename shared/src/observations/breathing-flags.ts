@@ -1,5 +1,5 @@
 import type { FlagDraft } from './observation-flags.js';
-import { CONSCIOUSNESS_LABELS, type Consciousness, news2, NEWS2_RESPONSE_WORDS, type Spo2Scale } from './news2.js';
+import { CONSCIOUSNESS_LABELS, type Consciousness, news2, NEWS2_NOT_FOR_CHILDREN, NEWS2_RESPONSE_WORDS, type Spo2Scale } from './news2.js';
 import { paediatricVitalBand } from './paediatric-vital-bands.js';
 import type { WardPolicy } from './ward-policy.js';
 
@@ -152,4 +152,12 @@ export function news2Of(vitals: VitalSigns, patient: VitalsPatient) {
     patient.spo2Scale,
     patient.ageYears,
   );
+}
+
+/** Why NEWS2 is not scored for these vitals, or null when it is. */
+export function news2NotScoredReason(vitals: VitalSigns, patient: VitalsPatient): string | null {
+  if (usesPaediatricBands(patient)) return NEWS2_NOT_FOR_CHILDREN;
+  if (patient.ageYears === null) return 'NEWS2 is not scored: the patient’s age is not known';
+  if (news2Of(vitals, patient)) return null;
+  return 'NEWS2 needs the full set: respiratory rate, SpO2, air or oxygen, systolic blood pressure, heart rate, consciousness and temperature';
 }

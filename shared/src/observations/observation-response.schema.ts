@@ -3,7 +3,23 @@ import { answer } from '../api/response-registry.js';
 import { DOSE_UNITS } from '../drugs/drug.schema.js';
 import { flagSeveritySchema } from '../orders/order-response.schema.js';
 import { observationDueSchema } from './observation-due.js';
+import { CONSCIOUSNESS_LEVELS } from './news2.js';
+import { OXYGEN_DEVICES } from './observations-requests.schema.js';
 import { SEDATION_LEVELS } from './sedation-scale.js';
+
+const news2ScoreSchema = z.object({
+  parameters: z.object({
+    respiration: z.number(),
+    spo2: z.number(),
+    airOrOxygen: z.number(),
+    systolicBp: z.number(),
+    pulse: z.number(),
+    consciousness: z.number(),
+    temperature: z.number(),
+  }),
+  total: z.number(),
+  response: z.enum(['low', 'low-medium', 'medium', 'high']),
+});
 
 const observationShape = {
   id: z.number().int(),
@@ -18,6 +34,16 @@ const observationShape = {
   delivered: z.number(),
   volumeInfusedMl: z.number(),
   syringeRemainingMl: z.number(),
+  oxygenLitresPerMinute: z.number().nullable(),
+  oxygenDevice: z.enum(OXYGEN_DEVICES).nullable(),
+  heartRate: z.number().nullable(),
+  systolicBp: z.number().nullable(),
+  temperatureC: z.number().nullable(),
+  consciousness: z.enum(CONSCIOUSNESS_LEVELS).nullable(),
+  /** NEWS2 (Royal College of Physicians, 2017) when the full set is present on an adult; null otherwise. */
+  news2: news2ScoreSchema.nullable(),
+  /** Why NEWS2 was not scored (a child, or a value missing); null when it was. */
+  news2NotScored: z.string().nullable(),
   note: z.string(),
   recordedByName: z.string(),
 };

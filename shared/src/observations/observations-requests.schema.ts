@@ -1,7 +1,26 @@
 import { z } from 'zod';
 import { momentSchema } from '../api/date-time.js';
 import { atMost, isWhole, must } from '../api/request-rules.js';
+import { CONSCIOUSNESS_LEVELS } from './news2.js';
 import { SEDATION_LEVELS } from './sedation-scale.js';
+
+/** How supplemental oxygen is given; air is 0 L/min and no device. */
+export const OXYGEN_DEVICES = ['nasal-cannula', 'simple-mask', 'venturi-mask', 'reservoir-mask', 'high-flow', 'other'] as const;
+export type OxygenDevice = (typeof OXYGEN_DEVICES)[number];
+export const OXYGEN_DEVICE_LABELS: Record<OxygenDevice, string> = {
+  'nasal-cannula': 'Nasal cannula',
+  'simple-mask': 'Simple face mask',
+  'venturi-mask': 'Venturi mask',
+  'reservoir-mask': 'Reservoir (non-rebreathe) mask',
+  'high-flow': 'High-flow nasal oxygen',
+  other: 'Other',
+};
+
+/** A number in a range, with the DTO's words; optional (blank is "not recorded"). */
+const ranged = (min: number, max: number, whole: boolean, messages: { type: string; range: string }) => {
+  const base = z.number(must(messages.type, messages.type));
+  return (whole ? base.refine(isWhole, messages.type) : base).min(min, messages.range).max(max, messages.range).nullish();
+};
 
 /** A whole number from 0 to `max`, with the DTO's words. */
 const count = (max: number, messages: { required: string; whole: string; negative: string; tooLarge: string }) =>
@@ -33,6 +52,24 @@ export const createObservationSchema = z.strictObject({
     negative: 'SpO2 is 0 to 100 %',
     tooLarge: 'SpO2 is 0 to 100 %',
   }),
+  /** Supplemental oxygen in L/min; 0 is air. Oxygen keeps the oximeter up while breathing slows. */
+  oxygenLitresPerMinute: ranged(0, 60, false, {
+    type: 'Oxygen is a number of litres per minute (0 for air)',
+    range: 'Oxygen is 0 (air) to 60 L/min',
+  }),
+  oxygenDevice: z.enum(OXYGEN_DEVICES, must('Choose the oxygen device', 'Choose the oxygen device from the list')).nullish(),
+  heartRate: ranged(0, 300, true, { type: 'Heart rate is a whole number per minute', range: 'Heart rate is 0 to 300 per minute' }),
+  systolicBp: ranged(0, 300, true, {
+    type: 'Systolic blood pressure is a whole number of mmHg',
+    range: 'Systolic blood pressure is 0 to 300 mmHg',
+  }),
+  temperatureC: ranged(25, 45, false, { type: 'Temperature is a number of °C', range: 'Temperature is 25 to 45 °C' }),
+  consciousness: z
+    .enum(
+      CONSCIOUSNESS_LEVELS,
+      must('Choose the level of consciousness', 'Consciousness is alert, new confusion, voice, pain or unresponsive'),
+    )
+    .nullish(),
   attempts: count(100_000, {
     required: 'Enter the attempts from the pump',
     whole: 'Attempts is a whole number from the pump',

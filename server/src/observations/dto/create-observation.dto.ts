@@ -1,5 +1,13 @@
 import { IsDefined, IsIn, IsInt, IsISO8601, IsNumber, IsOptional, IsRFC3339, IsString, Max, MaxLength, Min } from 'class-validator';
-import { SEDATION_LEVELS, type CreateObservationRequest, type SedationLevel } from '@lockstep/shared';
+import {
+  CONSCIOUSNESS_LEVELS,
+  type Consciousness,
+  type CreateObservationRequest,
+  OXYGEN_DEVICES,
+  type OxygenDevice,
+  SEDATION_LEVELS,
+  type SedationLevel,
+} from '@lockstep/shared';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
 
 const finite = { allowNaN: false, allowInfinity: false };
@@ -70,6 +78,48 @@ export class CreateObservationDto implements CreateObservationRequest {
   @IsNumber(finite, { message: 'Syringe remaining is a number of mL' })
   @IsDefined({ message: 'Enter the volume left in the syringe' })
   syringeRemainingMl: number;
+
+  @ApiPropertyOptional({ type: 'number', minimum: 0, maximum: 60, example: 0, description: 'Supplemental oxygen in L/min; 0 is air' })
+  @Max(60, { message: 'Oxygen is 0 (air) to 60 L/min' })
+  @Min(0, { message: 'Oxygen is 0 (air) to 60 L/min' })
+  @IsNumber(finite, { message: 'Oxygen is a number of litres per minute (0 for air)' })
+  @IsOptional()
+  oxygenLitresPerMinute?: number | null;
+
+  @ApiPropertyOptional({ enum: OXYGEN_DEVICES, example: 'nasal-cannula', description: 'How oxygen is given' })
+  @IsIn(OXYGEN_DEVICES, { message: 'Choose the oxygen device from the list' })
+  @IsOptional()
+  oxygenDevice?: OxygenDevice | null;
+
+  @ApiPropertyOptional({ type: 'integer', minimum: 0, maximum: 300, example: 78, description: 'Heart rate per minute' })
+  @Max(300, { message: 'Heart rate is 0 to 300 per minute' })
+  @Min(0, { message: 'Heart rate is 0 to 300 per minute' })
+  @IsInt({ message: 'Heart rate is a whole number per minute' })
+  @IsOptional()
+  heartRate?: number | null;
+
+  @ApiPropertyOptional({ type: 'integer', minimum: 0, maximum: 300, example: 124, description: 'Systolic blood pressure, mmHg' })
+  @Max(300, { message: 'Systolic blood pressure is 0 to 300 mmHg' })
+  @Min(0, { message: 'Systolic blood pressure is 0 to 300 mmHg' })
+  @IsInt({ message: 'Systolic blood pressure is a whole number of mmHg' })
+  @IsOptional()
+  systolicBp?: number | null;
+
+  @ApiPropertyOptional({ type: 'number', minimum: 25, maximum: 45, example: 36.8, description: 'Temperature, °C' })
+  @Max(45, { message: 'Temperature is 25 to 45 °C' })
+  @Min(25, { message: 'Temperature is 25 to 45 °C' })
+  @IsNumber(finite, { message: 'Temperature is a number of °C' })
+  @IsOptional()
+  temperatureC?: number | null;
+
+  @ApiPropertyOptional({
+    enum: CONSCIOUSNESS_LEVELS,
+    example: 'alert',
+    description: 'ACVPU: alert, new confusion, voice, pain, unresponsive',
+  })
+  @IsIn(CONSCIOUSNESS_LEVELS, { message: 'Consciousness is alert, new confusion, voice, pain or unresponsive' })
+  @IsOptional()
+  consciousness?: Consciousness | null;
 
   @ApiPropertyOptional({ maxLength: 2000, example: 'Comfortable at rest', description: 'A free-text note' })
   @MaxLength(2000, { message: 'The note is at most 2,000 characters' })

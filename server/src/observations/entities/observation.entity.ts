@@ -1,5 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, type Relation } from 'typeorm';
-import type { SedationLevel } from '@lockstep/shared';
+import type { Consciousness, OxygenDevice, SedationLevel } from '@lockstep/shared';
 import { PcaOrder } from '../../orders/entities/pca-order.entity.js';
 import { SyringeRelease } from '../../releases/entities/syringe-release.entity.js';
 import { User } from '../../users/entities/user.entity.js';
@@ -52,6 +52,25 @@ export class Observation {
 
   @Column({ type: 'real' })
   syringeRemainingMl: number;
+
+  /** Litres per minute of supplemental oxygen; 0 is air; null when not recorded. */
+  @Column({ type: 'real', nullable: true })
+  oxygenLitresPerMinute: number | null;
+
+  @Column({ type: 'varchar', length: 24, nullable: true })
+  oxygenDevice: OxygenDevice | null;
+
+  @Column({ type: 'integer', nullable: true })
+  heartRate: number | null;
+
+  @Column({ type: 'integer', nullable: true })
+  systolicBp: number | null;
+
+  @Column({ type: 'real', nullable: true })
+  temperatureC: number | null;
+
+  @Column({ type: 'varchar', length: 16, nullable: true })
+  consciousness: Consciousness | null;
 
   @Column({ type: 'text', default: '' })
   note: string;

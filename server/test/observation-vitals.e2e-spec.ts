@@ -1,0 +1,119 @@
+import request from 'supertest';
+import { DataSource } from 'typeorm';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { Patient } from '../src/patients/entities/patient.entity.js';
+import { CALM_OBSERVATION as CALM, ORDER, SETTINGS } from './support/pca.js';
+import { activeOrder } from './support/pca-steps.js';
+import { createTestApp, type TestApp } from './support/test-app.js';
+
+// Breathing bands: Royal College of Physicians, National Early Warning Score (NEWS) 2, 2017 (adults); APLS normal
+// values (Advanced Life Support Group, 6th ed., 2016) and APAGBI Good Practice in Postoperative and Procedural Pain
+// Management (2012), from memory, for children.
+describe('observation vitals: NEWS2 bands, NEWS2 score, children’s bands', () => {
+  let t: TestApp;
+  const token = {} as Record<'amara' | 'lin' | 'kai', string>;
+  const observe = (id: number, body: object) =>
+    request(t.http)
+      .post(`/api/orders/${id}/observations`)
+      .set({ Authorization: `Bearer ${token.kai}` })
+      .send(body);
+  const start = async (patient?: Awaited<ReturnType<TestApp['addPatient']>>) =>
+    activeOrder(
+      t.http,
+      { prescriber: token.amara, pharmacist: token.lin, nurse: token.kai },
+      patient ?? (await t.addPatient()),
+      ORDER,
+      SETTINGS,
+    );
+  const codes = (body: { flags: { severity: string; code: string }[] }) =>
+    body.flags.map((f) => `${f.severity}:${f.code}`).filter((c) => /respiratory|spo2|news2|heart/.test(c));
+
+  beforeAll(async () => {
+    t = await createTestApp();
+    token.amara = await t.tokenFor('amara.osei');
+    token.lin = await t.tokenFor('lin.park');
+    token.kai = await t.tokenFor('kai.mendes');
+  });
+  afterAll(() => t.close());
+
+  it('RR 8/min is urgent (NEWS2 scores 3, RCP 2017)', async () => {
+    const order = await start();
+    const { body } = await observe(order.id, { ...CALM, respiratoryRate: 8 }).expect(201);
+    expect(codes(body)).toEqual(['urgent:respiratory-rate.low']);
+  });
+
+  it('RR 10/min is for review (NEWS2 scores 1, RCP 2017)', async () => {
+    const order = await start();
+    const { body } = await observe(order.id, { ...CALM, respiratoryRate: 10 }).expect(201);
+    expect(codes(body)).toEqual(['review:respiratory-rate.review']);
+  });
+
+  it('SpO2 93 % on air is for review (NEWS2 scale 1 scores 2, RCP 2017)', async () => {
+    const order = await start();
+    const { body } = await observe(order.id, { ...CALM, spo2: 93, oxygenLitresPerMinute: 0 }).expect(201);
+    expect(codes(body)).toEqual(['review:spo2.review']);
+  });
+
+  it('answers the NEWS2 score and its parameter scores for a full adult set, and stores the new fields', async () => {
+    const order = await start();
+    const full = {
+      ...CALM,
+      respiratoryRate: 22,
+      spo2: 95,
+      oxygenLitresPerMinute: 2,
+      oxygenDevice: 'nasal-cannula',
+      heartRate: 115,
+      systolicBp: 105,
+      temperatureC: 37.2,
+      consciousness: 'alert',
+    };
+    const { body } = await observe(order.id, full).expect(201);
+    // RR 22: 2; SpO2 95 scale 1: 1; oxygen: 2; SBP 105: 1; pulse 115: 2; alert 0; 37.2: 0 → 8 (RCP NEWS2 2017).
+    expect(body.news2).toEqual({
+      parameters: { respiration: 2, spo2: 1, airOrOxygen: 2, systolicBp: 1, pulse: 2, consciousness: 0, temperature: 0 },
+      total: 8,
+      response: 'high',
+    });
+    expect(codes(body)).toContain('urgent:news2.emergency');
+    const list = await request(t.http)
+      .get(`/api/orders/${order.id}/observations`)
+      .set({ Authorization: `Bearer ${token.kai}` })
+      .expect(200);
+    expect(list.body.at(-1)).toMatchObject({ heartRate: 115, oxygenDevice: 'nasal-cannula', news2: { total: 8 }, news2NotScored: null });
+    const partial = await observe(order.id, { ...CALM, attempts: 3 }).expect(201);
+    expect(partial.body).toMatchObject({ news2: null, news2NotScored: expect.stringContaining('full set') });
+  });
+
+  it.each([
+    [{ heartRate: 301 }, 'heartRate'],
+    [{ temperatureC: 50 }, 'temperatureC'],
+    [{ oxygenLitresPerMinute: -1 }, 'oxygenLitresPerMinute'],
+    [{ consciousness: 'asleep' }, 'consciousness'],
+    [{ systolicBp: 'high' }, 'systolicBp'],
+  ])('refuses a bad vital with 400 naming the field (%o)', async (change, field) => {
+    const order = await start();
+    const { body } = await observe(order.id, { ...CALM, ...change }).expect(400);
+    expect(body.errors.map((e: { field: string }) => e.field)).toContain(field);
+  });
+
+  it('a child’s RR is judged by the paediatric band: 16/min in a 4-year-old is for review and NEWS2 is not scored', async () => {
+    const patient = await t.addPatient();
+    const order = await start(patient);
+    // The patient becomes a 4-year-old: the bands are read at the observation.
+    const fourYearsAgo = new Date(Date.now() - 4.5 * 365.25 * 86_400_000).toISOString().slice(0, 10);
+    await t.app.get(DataSource).getRepository(Patient).update({ id: patient.id }, { dateOfBirth: fourYearsAgo });
+    const { body } = await observe(order.id, {
+      ...CALM,
+      respiratoryRate: 16,
+      heartRate: 110,
+      systolicBp: 100,
+      temperatureC: 36.8,
+      consciousness: 'alert',
+      oxygenLitresPerMinute: 0,
+    }).expect(201);
+    // APLS 2–5 years: normal RR 25–30 (from memory); below 15 urgent (APAGBI 2012, from memory).
+    expect(codes(body)).toEqual(['review:respiratory-rate.review']);
+    expect(body.news2).toBeNull();
+    expect(body.news2NotScored).toMatch(/under 16/);
+  });
+});
