@@ -69,10 +69,11 @@ describe('audit trail', () => {
         sedationLevel: '1',
         respiratoryRate: 14,
         spo2: 97,
-        attempts: 3,
-        delivered: 2,
-        volumeInfusedMl: 2,
-        syringeRemainingMl: 48,
+        // One dose: recorded moments after the start, when the lockout allows only one.
+        attempts: 2,
+        delivered: 1,
+        volumeInfusedMl: 1,
+        syringeRemainingMl: 49,
       })
       .expect(201);
 
