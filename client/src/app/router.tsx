@@ -47,6 +47,7 @@ const router = createBrowserRouter([
             element: <RequireArea area="bedside" />,
             children: [
               { path: paths.bedside.path, lazy: () => import('./routes/bedside') },
+              { path: paths.observationsDue.path, lazy: () => import('./routes/observations-due') },
               { path: paths.bedsideCheck.path, lazy: () => import('./routes/bedside-check') },
               { path: paths.bedsideBolus.path, lazy: () => import('./routes/bedside-bolus') },
               { path: paths.bedsideSyringeChange.path, lazy: () => import('./routes/bedside-syringe-change') },

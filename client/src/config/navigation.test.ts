@@ -7,8 +7,8 @@ const NAV_LABELS: Partial<Record<Role, string[]>> = {
   admin: ['Users', 'Ward policies', 'Mailbox', 'Audit'],
   pharmacist: ['Patients', 'Verification', 'Library', 'Equianalgesic factors', 'Audit'],
   prescriber: ['Patients', 'My orders'],
-  nurse: ['Patients', 'PCA orders', 'Handover'],
-  charge_nurse: ['Patients', 'PCA orders', 'Handover'],
+  nurse: ['Patients', 'PCA orders', 'Observations due', 'Handover'],
+  charge_nurse: ['Patients', 'PCA orders', 'Observations due', 'Handover'],
 };
 
 describe('role homes and navigation', () => {

@@ -30,6 +30,7 @@ const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Patients', href: paths.patients.getHref(), icon: 'patients', area: 'clinical' },
   { label: 'My orders', href: paths.myOrders.getHref(), icon: 'orders', area: 'prescribing' },
   { label: 'PCA orders', href: paths.bedside.getHref(), icon: 'bedside', area: 'bedside' },
+  { label: 'Observations due', href: paths.observationsDue.getHref(), icon: 'bedside', area: 'bedside' },
   // Listed for nurses and charge nurses; prescribers and pharmacists may still open it (clinical area).
   { label: 'Handover', href: paths.handover.getHref(), icon: 'handover', area: 'bedside' },
   { label: 'Verification', href: paths.verificationQueue.getHref(), icon: 'verification', area: 'pharmacy' },

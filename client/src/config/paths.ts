@@ -81,6 +81,11 @@ export const paths = {
       return search ? `/bedside?${search}` : '/bedside';
     },
   },
+  observationsDue: {
+    path: '/bedside/due',
+    /** The ward's running PCAs by when their next observation is due. */
+    getHref: () => '/bedside/due',
+  },
   bedsideCheck: {
     path: '/bedside/:orderId/check',
     getHref: (orderId: number) => `/bedside/${orderId}/check`,

@@ -4,7 +4,9 @@ import { IconClipboardCheck, IconClipboardHeart, IconDroplet, IconPlayerStop, Ic
 import { Link } from 'react-router-dom';
 import { type BedsideAction, bedsideActions, drugAndConcentration, type OrderListEntry, regimenPhrases } from '@lockstep/shared';
 import { OrderStatusBadge } from '@/components/ui/order-status-badge';
+import { SeverityBadge } from '@/components/ui/severity-badge';
 import { paths } from '@/config/paths';
+import { urgentFlagsLabel } from '../utils/observations-due';
 import { bedsideHint } from '../utils/syringe-state';
 import { NextObservationHint } from './next-observation-hint';
 
@@ -138,6 +140,9 @@ export function BedsideOrdersTable({ orders, now, isLoading, emptyMessage }: Bed
                           <Text size="xs" c="dimmed">
                             {hint}
                           </Text>
+                        ) : null}
+                        {order.openUrgentFlags > 0 ? (
+                          <SeverityBadge severity="urgent" size="sm" label={urgentFlagsLabel(order.openUrgentFlags)} />
                         ) : null}
                         {due ? <NextObservationHint due={due} now={now} /> : null}
                       </Stack>
