@@ -75,7 +75,7 @@ describe('every state-changing route writes its audit event', () => {
       '/api/wards/:id/policy',
       '/api/wards/1/policy',
       'admin',
-      { respiratoryRateThreshold: 9 },
+      { respiratoryRateThreshold: 10 },
       200,
       'ward.policy-update',
     );

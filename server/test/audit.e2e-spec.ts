@@ -48,7 +48,7 @@ describe('audit trail', () => {
       actorName: 'Sam Rivera',
       entityType: 'ward',
       entityId: '1',
-      summary: { respiratoryRateThreshold: { from: 8, to: 10 } },
+      summary: { respiratoryRateThreshold: { from: 9, to: 10 } },
     });
     expect(events[0].summary).not.toHaveProperty('syringeLowThresholdHours');
     expect(Date.now() - Date.parse(events[0].at)).toBeLessThan(60_000);

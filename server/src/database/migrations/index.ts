@@ -12,6 +12,7 @@ import { PatientRecord1764750000000 } from './1764750000000-patient-record.js';
 import { LibraryIntegrity1764760000000 } from './1764760000000-library-integrity.js';
 import { RulePopulation1764770000000 } from './1764770000000-rule-population.js';
 import { EquianalgesicFactors1764780000000 } from './1764780000000-equianalgesic-factors.js';
+import { WardPolicySignOff1764810000000 } from './1764810000000-ward-policy-sign-off.js';
 import { NaloxoneAndPause1764800000000 } from './1764800000000-naloxone-and-pause.js';
 
 /** In order. Listed explicitly (not globbed) so tests and the built server run the same set. */
@@ -31,4 +32,5 @@ export const MIGRATIONS = [
   EquianalgesicFactors1764780000000,
   ObservationVitals1764790000000,
   NaloxoneAndPause1764800000000,
+  WardPolicySignOff1764810000000,
 ];

@@ -1,3 +1,4 @@
+import { DEFAULT_WARD_POLICY } from '@lockstep/shared';
 import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
 
 @Entity('wards')
@@ -37,11 +38,13 @@ export class Ward {
   @Column({ type: 'integer', default: 120 })
   observationIntervalMinutes: number;
 
+  // The column defaults (8, 90) predate the floors; a new ward takes the shipped defaults (urgent at
+  // RR <= 8 and SpO2 <= 91 %, NEWS2, Royal College of Physicians 2017) from these initialisers instead.
   @Column({ type: 'integer', default: 8 })
-  respiratoryRateThreshold: number;
+  respiratoryRateThreshold: number = DEFAULT_WARD_POLICY.respiratoryRateThreshold;
 
   @Column({ type: 'integer', default: 90 })
-  spo2Threshold: number;
+  spo2Threshold: number = DEFAULT_WARD_POLICY.spo2Threshold;
 
   @Column({ type: 'real', default: 2 })
   syringeLowThresholdHours: number;
