@@ -3,6 +3,7 @@ import { DoseLimitLibrary1764660000000 } from './1764660000000-dose-limit-librar
 import { OrdersAndReleases1764670000000 } from './1764670000000-orders-and-releases.js';
 import { BedsideChecks1764680000000 } from './1764680000000-bedside-checks.js';
 import { Observations1764690000000 } from './1764690000000-observations.js';
+import { ObservationVitals1764790000000 } from './1764790000000-observation-vitals.js';
 import { Handover1764700000000 } from './1764700000000-handover.js';
 import { AuditTrail1764710000000 } from './1764710000000-audit-trail.js';
 import { OrderListsByPrescriber1764729000000 } from './1764729000000-order-lists-by-prescriber.js';
@@ -11,6 +12,7 @@ import { PatientRecord1764750000000 } from './1764750000000-patient-record.js';
 import { LibraryIntegrity1764760000000 } from './1764760000000-library-integrity.js';
 import { RulePopulation1764770000000 } from './1764770000000-rule-population.js';
 import { EquianalgesicFactors1764780000000 } from './1764780000000-equianalgesic-factors.js';
+import { WardPolicySignOff1764810000000 } from './1764810000000-ward-policy-sign-off.js';
 import { NaloxoneAndPause1764800000000 } from './1764800000000-naloxone-and-pause.js';
 
 /** In order. Listed explicitly (not globbed) so tests and the built server run the same set. */
@@ -28,5 +30,7 @@ export const MIGRATIONS = [
   LibraryIntegrity1764760000000,
   RulePopulation1764770000000,
   EquianalgesicFactors1764780000000,
+  ObservationVitals1764790000000,
   NaloxoneAndPause1764800000000,
+  WardPolicySignOff1764810000000,
 ];
