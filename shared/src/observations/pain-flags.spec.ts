@@ -23,8 +23,8 @@ describe('painFlags', () => {
     ]);
   });
 
-  // POSS sedation 3: reduce or stop the opioid, never increase it (Pasero C, Pain Manag Nurs
-  // 2009; Pasero & McCaffery, Pain Assessment and Pharmacologic Management, 2011) [from memory].
+  // POSS sedation 3: reduce the opioid or notify, never increase it (Pasero C, 1994; Pasero &
+  // McCaffery, Pain Assessment and Pharmacologic Management, 2011) [from memory for the wording].
   it('while sedation or breathing is a concern the pain flag says do not increase the opioid', () => {
     const notControlled = painFlags({ painScore: 8, attempts: 6, delivered: 2 }, start, DEFAULT_WARD_POLICY, true);
     expect(notControlled).toEqual([expect.objectContaining({ code: 'pain.not-controlled', action: DO_NOT_INCREASE_ACTION })]);

@@ -6,9 +6,9 @@ import type { WardPolicy } from './ward-policy.js';
 // threshold (common practice), not a published value.
 export const PAIN_NO_PRESSES_SCORE = 9;
 
-// Sedation 3 on the Pasero Opioid-induced Sedation Scale: stop or reduce the opioid, never
-// increase it (Pasero C, Pain Manag Nurs 2009;10(3):117-125, after Pasero & McCaffery 1994; Pasero
-// C & McCaffery M, Pain Assessment and Pharmacologic Management, Mosby 2011) [from memory].
+// Sedation 3 on the Pasero Opioid-induced Sedation Scale: reduce the opioid or notify, never
+// increase it (Pasero C, 1994; Pasero C & McCaffery M, Pain Assessment and Pharmacologic
+// Management, Mosby 2011) [from memory for the wording]; docs/clinical-sources.md.
 export const DO_NOT_INCREASE_ACTION =
   'Do not increase the opioid: sedation or breathing is a concern (see the urgent flag). Call the prescriber or pain team for a plan without more opioid';
 
