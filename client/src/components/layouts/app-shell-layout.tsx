@@ -21,6 +21,7 @@ import { ROLE_LABELS } from '@lockstep/shared';
 import { navItemsFor, type NavIcon } from '@/config/navigation';
 import { useCurrentUser, useSession } from '@/lib/auth/use-session';
 import { DecisionSupportNote } from '../ui/decision-support-note';
+import { UrgentFlagsBell } from './urgent-flags-bell';
 import { AssignedWards } from './assigned-wards';
 import { LockstepMark } from '../ui/lockstep-mark';
 
@@ -57,6 +58,7 @@ export function AppShellLayout({ children }: { children: ReactNode }) {
             </Text>
           </Group>
           <Group gap="md" wrap="nowrap">
+            {user.role === 'prescriber' ? <UrgentFlagsBell /> : null}
             <AssignedWards wards={user.wards} />
             <div>
               <Text size="sm" fw={600} lh={1.2} data-testid="current-user-name">

@@ -6,7 +6,7 @@ import { type BedsideAction, bedsideActions, drugAndConcentration, type OrderLis
 import { OrderStatusBadge } from '@/components/ui/order-status-badge';
 import { SeverityBadge } from '@/components/ui/severity-badge';
 import { paths } from '@/config/paths';
-import { urgentFlagsLabel } from '../utils/observations-due';
+import { urgentFlagsLabel } from '@/utils/order-alerts';
 import { bedsideHint } from '../utils/syringe-state';
 import { NextObservationHint } from './next-observation-hint';
 

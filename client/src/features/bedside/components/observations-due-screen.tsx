@@ -3,7 +3,7 @@ import { Stack, Text, Title } from '@mantine/core';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { useNow } from '@/hooks/use-now';
 import { useOrders } from '@/api/orders/get-orders';
-import { observationsDue } from '../utils/observations-due';
+import { observationsDue } from '@/utils/order-alerts';
 import { BedsideCaution } from './bedside-caution';
 import { BedsideOrdersTable } from './bedside-orders-table';
 

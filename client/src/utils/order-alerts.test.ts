@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { OrderListEntry } from '@lockstep/shared';
-import { observationsDue, urgentFlagsLabel, urgentNotifications } from './observations-due';
+import { observationsDue, urgentFlagsLabel, urgentNotifications } from './order-alerts';
 
 const entry = (id: number, bed: string, dueAt: string | null, openUrgentFlags = 0, status: OrderListEntry['status'] = 'active') =>
   ({
