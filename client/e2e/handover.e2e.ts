@@ -15,10 +15,11 @@ const URGENT_OBSERVATION = {
   sedationLevel: '3',
   respiratoryRate: 12,
   spo2: 95,
+  // One dose (1 mL at 0.2 mg/mL): recorded moments after the start, when the lockout allows only one.
   attempts: 6,
-  delivered: 4,
-  volumeInfusedMl: 2,
-  syringeRemainingMl: 48,
+  delivered: 1,
+  volumeInfusedMl: 1,
+  syringeRemainingMl: 49,
 };
 
 type BoardAnswer = {

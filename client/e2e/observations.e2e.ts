@@ -104,10 +104,11 @@ describe('observations: flags, usage charts and acknowledgement', () => {
       respiratoryRate: '12',
       spo2: '95',
       pain: '4',
+      // One dose of 0.2 mg at 0.2 mg/mL is 1 mL: moments after the start the lockout allows only one.
       attempts: '6',
-      delivered: '4',
-      volume: '2',
-      remaining: '48',
+      delivered: '1',
+      volume: '1',
+      remaining: '49',
     });
     // Said before saving: sedation 3 is unacceptable, with the scale's action.
     await page.getByText('Urgent: saving raises an urgent flag').waitFor();
@@ -158,9 +159,9 @@ describe('observations: flags, usage charts and acknowledgement', () => {
       spo2: '96',
       pain: '3',
       attempts: '9',
-      delivered: '7',
-      volume: '2.6',
-      remaining: '47.4',
+      delivered: '2',
+      volume: '2',
+      remaining: '48',
     });
     await page.getByRole('button', { name: 'Save observation' }).click();
     await page.getByRole('heading', { name: 'Observation saved' }).waitFor();
@@ -179,7 +180,7 @@ describe('observations: flags, usage charts and acknowledgement', () => {
     await expect.poll(() => cumulative.locator('.recharts-line-curve').count()).toBe(1);
     await attempts
       .locator('figcaption')
-      .getByText(/9 attempts, 7 doses delivered/)
+      .getByText(/9 attempts, 2 doses delivered/)
       .waitFor();
     await painSedation
       .locator('figcaption')
@@ -187,7 +188,7 @@ describe('observations: flags, usage charts and acknowledgement', () => {
       .waitFor();
     await cumulative
       .locator('figcaption')
-      .getByText(/^0\.52 mg given in the 12 hours shown/)
+      .getByText(/^0\.4 mg given in the 12 hours shown/)
       .waitFor();
 
     await painSedation.getByRole('button', { name: 'Show as table' }).click();
