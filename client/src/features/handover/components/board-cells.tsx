@@ -1,5 +1,5 @@
 import type { ReactNode } from 'react';
-import { Group, Stack, Text, VisuallyHidden } from '@mantine/core';
+import { Anchor, Group, Stack, Text, VisuallyHidden } from '@mantine/core';
 import { IconAlertTriangle, IconClock, IconHourglassLow, IconQuestionMark } from '@tabler/icons-react';
 import {
   atOrOverLimit,
@@ -12,8 +12,10 @@ import {
   ORDER_STATUS_LABELS,
   SEDATION_DESCRIPTIONS,
 } from '@lockstep/shared';
+import { Link } from 'react-router-dom';
 import { ALLERGY_SEVERITY_LOOK } from '@/components/ui/allergy-list';
 import { SeverityLabel } from '@/components/ui/severity-label';
+import { paths } from '@/config/paths';
 import { formatNearTime } from '@/utils/clock';
 import { formatElapsed } from '@/utils/duration';
 import { hasOpenFlags, rowSeverity } from '../utils/board-filters';
@@ -40,12 +42,13 @@ export function BedCell({ row }: { row: HandoverRow }) {
   );
 }
 
-export function PatientCell({ patient }: { patient: HandoverRow['patient'] }) {
+/** The patient, the name linking to the order's PCA page. */
+export function PatientCell({ patient, orderId }: { patient: HandoverRow['patient']; orderId: number }) {
   return (
     <Stack gap={0}>
-      <Text size="sm" fw={600}>
+      <Anchor component={Link} to={paths.pca.getHref(orderId)} size="sm" fw={600} aria-label={`${patient.name}: open the PCA page`}>
         {patient.name}
-      </Text>
+      </Anchor>
       <Dimmed>
         MRN {patient.mrn} · {patientFacts(patient)}
       </Dimmed>

@@ -19,7 +19,7 @@ export interface BoardColumn {
 /** The board's columns, left to right, for the live table and the printed sheet alike. */
 export const BOARD_COLUMNS: readonly BoardColumn[] = [
   { header: 'Bed', hint: 'risk', cell: (row) => <BedCell row={row} /> },
-  { header: 'Patient', cell: (row) => <PatientCell patient={row.patient} /> },
+  { header: 'Patient', cell: (row) => <PatientCell patient={row.patient} orderId={row.orderId} /> },
   { header: 'PCA and regimen', cell: (row, { now }) => <PcaCell row={row} now={now} /> },
   { header: 'Last observation', cell: (row, { now }) => <LastObservationCell observation={row.lastObservation} now={now} /> },
   { header: 'Next observation', cell: (row, { now }) => <NextObservationCell next={row.nextObservation} now={now} /> },
