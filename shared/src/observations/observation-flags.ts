@@ -47,7 +47,7 @@ export function syringeStartReading(startedAt: string): PreviousReading {
 
 /** Urgent flags that mean sedation or breathing is a concern: the pain flag then never invites more opioid. */
 export function isSedationOrBreathingFlag(code: string): boolean {
-  return /^(sedation|respiratory-rate|spo2|news2)\b/.test(code);
+  return /^(sedation|respiratory-rate|spo2|news2|consciousness)\b/.test(code);
 }
 
 export type FlagDraft = { severity: FlagSeverity; code: string; message: string; action: string };
