@@ -52,6 +52,7 @@ const router = createBrowserRouter([
               { path: paths.bedsideBolus.path, lazy: () => import('./routes/bedside-bolus') },
               { path: paths.bedsideSyringeChange.path, lazy: () => import('./routes/bedside-syringe-change') },
               { path: paths.bedsideDiscontinue.path, lazy: () => import('./routes/bedside-discontinue') },
+              { path: paths.bedsideResume.path, lazy: () => import('./routes/bedside-resume') },
               { path: paths.pcaObserve.path, lazy: () => import('./routes/pca-observe') },
             ],
           },

@@ -102,6 +102,10 @@ export const paths = {
     path: '/bedside/:orderId/discontinue',
     getHref: (orderId: number) => `/bedside/${orderId}/discontinue`,
   },
+  bedsideResume: {
+    path: '/bedside/:orderId/resume',
+    getHref: (orderId: number) => `/bedside/${orderId}/resume`,
+  },
   handover: {
     path: '/handover',
     /** `ward` picks the board, so a reload keeps it. */

@@ -10,6 +10,7 @@ import { useObservations } from '@/api/orders/get-observations';
 import { useOrder } from '@/api/orders/get-order';
 import type { UsageWindow } from '../utils/usage-windows';
 import { useNow } from '@/hooks/use-now';
+import { PcaPausePanel } from './pca-pause-panel';
 import { FlagsPanel } from './flags-panel';
 import { ObservationsTable } from './observations-table';
 import { PcaHeader } from './pca-header';
@@ -75,6 +76,7 @@ export function PcaScreen({ orderId, hours, onHoursChange }: PcaScreenProps) {
         }
       />
       <FlagsPanel orderId={order.id} flags={order.flags} />
+      <PcaPausePanel order={order} mayAct={canAccess(user.role, 'bedside')} />
       <UsageSection orderId={order.id} hours={hours} onHoursChange={onHoursChange} now={now} />
       <Stack gap="sm" component="section" aria-labelledby="pca-observations-heading">
         <Title order={2} id="pca-observations-heading">
