@@ -39,6 +39,7 @@ async function enterObservation(page: Page, reading: Reading): Promise<void> {
   await page.getByRole('radio', { name: reading.sedation }).check();
   await page.getByLabel('Respiratory rate').fill(reading.respiratoryRate);
   await page.getByLabel('SpO2').fill(reading.spo2);
+  await page.locator('#observation-oxygenLitresPerMinute').fill('0'); // air
   await page.getByLabel('Pain score').fill(reading.pain);
   await page.getByLabel('Attempts').fill(reading.attempts);
   await page.getByLabel('Delivered').fill(reading.delivered);

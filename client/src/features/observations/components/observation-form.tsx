@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { Alert, Button, Group, Paper, SimpleGrid, Stack, Textarea, TextInput, Title } from '@mantine/core';
+import { Alert, Button, Group, Paper, Select, SimpleGrid, Stack, Textarea, TextInput, Title } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconAlertCircle, IconDeviceFloppy } from '@tabler/icons-react';
 import { applyServerErrors } from '@/lib/form-errors';
@@ -9,6 +9,7 @@ import { formatClock } from '@/utils/clock';
 import {
   emptyObservationForm,
   NUMBER_FIELDS,
+  OPTIONAL_NUMBER_FIELDS,
   pumpBounds,
   readLocalDateTime,
   toObservationRequest,
@@ -18,7 +19,20 @@ import {
 import { observationWarnings } from '../utils/observation-warnings';
 import { ObservationNumberInput } from './observation-number-input';
 import { SedationField } from './sedation-field';
-import type { PumpTotalField, WardPolicy, ObservationResponse, OrderDetail, RecordedObservation } from '@lockstep/shared';
+import {
+  CONSCIOUSNESS_LABELS,
+  CONSCIOUSNESS_LEVELS,
+  OXYGEN_DEVICE_LABELS,
+  OXYGEN_DEVICES,
+  type PumpTotalField,
+  type WardPolicy,
+  type ObservationResponse,
+  type OrderDetail,
+  type RecordedObservation,
+} from '@lockstep/shared';
+
+const DEVICE_OPTIONS = OXYGEN_DEVICES.map((value) => ({ value, label: OXYGEN_DEVICE_LABELS[value] }));
+const CONSCIOUSNESS_OPTIONS = CONSCIOUSNESS_LEVELS.map((value) => ({ value, label: CONSCIOUSNESS_LABELS[value] }));
 
 export interface ObservationFormProps {
   order: OrderDetail;
@@ -33,6 +47,12 @@ const FOCUS_ORDER: readonly (keyof ObservationFormValues)[] = [
   'sedationLevel',
   'respiratoryRate',
   'spo2',
+  'oxygenLitresPerMinute',
+  'oxygenDevice',
+  'consciousness',
+  'heartRate',
+  'systolicBp',
+  'temperatureC',
   'painScore',
   'attempts',
   'delivered',
@@ -69,7 +89,7 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
     initialValues: emptyObservationForm(),
     // Read at every check (the form uses this render's rules), so the latest observations count.
     validate: (values) => validateObservationForm(values, { observations, release: running, startedAt: order.startedAt, now: new Date() }),
-    validateInputOnChange: [...NUMBER_FIELDS, 'at'],
+    validateInputOnChange: [...NUMBER_FIELDS, ...OPTIONAL_NUMBER_FIELDS, 'at'],
   });
   const warnings = observationWarnings(form.values, thresholds);
   const { floor } = pumpBounds(observations, running?.id ?? null, new Date());
@@ -122,6 +142,54 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
                 description="0 to 100"
                 warning={warnings.spo2}
                 inputProps={form.getInputProps('spo2')}
+              />
+              <ObservationNumberInput
+                field="oxygenLitresPerMinute"
+                label="Oxygen (L/min)"
+                description="0 for air: oxygen keeps the SpO2 up while breathing slows"
+                inputProps={form.getInputProps('oxygenLitresPerMinute')}
+              />
+              <Select
+                id="observation-oxygenDevice"
+                label="Oxygen device"
+                description="When oxygen is running"
+                placeholder="Air: none"
+                size="lg"
+                data={DEVICE_OPTIONS}
+                clearable
+                value={form.values.oxygenDevice || null}
+                onChange={(value) => form.setFieldValue('oxygenDevice', value ?? '')}
+                error={form.errors.oxygenDevice}
+              />
+              <Select
+                id="observation-consciousness"
+                label="Consciousness"
+                description="Optional: alert, new confusion, voice, pain, unresponsive"
+                placeholder="Not recorded"
+                size="lg"
+                data={CONSCIOUSNESS_OPTIONS}
+                clearable
+                value={form.values.consciousness || null}
+                onChange={(value) => form.setFieldValue('consciousness', value ?? '')}
+                error={form.errors.consciousness}
+              />
+              <ObservationNumberInput
+                field="heartRate"
+                label="Heart rate (/min)"
+                description="Optional"
+                inputProps={form.getInputProps('heartRate')}
+              />
+              <ObservationNumberInput
+                field="systolicBp"
+                label="Systolic BP (mmHg)"
+                description="Optional"
+                inputProps={form.getInputProps('systolicBp')}
+              />
+              <ObservationNumberInput
+                field="temperatureC"
+                label="Temperature (°C)"
+                description="Optional"
+                inputProps={form.getInputProps('temperatureC')}
               />
               <ObservationNumberInput
                 field="painScore"

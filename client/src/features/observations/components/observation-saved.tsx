@@ -1,11 +1,12 @@
 import { Button, Group, Paper, Stack, Text, ThemeIcon, Title } from '@mantine/core';
 import { IconArrowLeft, IconCircleCheck, IconClipboardPlus } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
-import type { RecordedObservation } from '@lockstep/shared';
+import { NEWS2_CREDIT, type RecordedObservation } from '@lockstep/shared';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/utils/format-date';
 import { bySeverityThenNewest } from '../utils/flags';
 import { FlagCard } from './flag-card';
+import { News2Cell } from './news2-cell';
 
 export interface ObservationSavedProps {
   orderId: number;
@@ -30,6 +31,12 @@ export function ObservationSaved({ orderId, observation, onRecordAnother }: Obse
             </Text>
           </div>
         </Group>
+        <Stack gap={4} mt="md" aria-label="NEWS2">
+          <News2Cell observation={observation} />
+          <Text size="xs" c="dimmed">
+            {NEWS2_CREDIT}
+          </Text>
+        </Stack>
       </Paper>
       {flags.length > 0 ? (
         <Stack gap="sm" component="section" aria-labelledby="raised-flags-heading">

@@ -1,8 +1,9 @@
 import { Badge, Table, Text } from '@mantine/core';
 import { IconAlertOctagon } from '@tabler/icons-react';
-import { formatDose, type ObservationResponse } from '@lockstep/shared';
+import { formatDose, NEWS2_CREDIT, type ObservationResponse } from '@lockstep/shared';
 import { formatDateTime } from '@/utils/format-date';
 import { isUnacceptableSedation } from '../utils/sedation';
+import { News2Cell, VitalsCell } from './news2-cell';
 
 /** The observations, newest first, every figure in its own column. */
 export function ObservationsTable({ observations }: { observations: readonly ObservationResponse[] }) {
@@ -20,6 +21,8 @@ export function ObservationsTable({ observations }: { observations: readonly Obs
             <Table.Th scope="col">Sedation</Table.Th>
             <Table.Th scope="col">Resp. rate</Table.Th>
             <Table.Th scope="col">SpO2</Table.Th>
+            <Table.Th scope="col">Oxygen and vitals</Table.Th>
+            <Table.Th scope="col">NEWS2</Table.Th>
             <Table.Th scope="col">Attempts</Table.Th>
             <Table.Th scope="col">Delivered</Table.Th>
             <Table.Th scope="col">Volume infused</Table.Th>
@@ -45,6 +48,12 @@ export function ObservationsTable({ observations }: { observations: readonly Obs
               </Table.Td>
               <Table.Td>{observation.respiratoryRate}/min</Table.Td>
               <Table.Td>{observation.spo2} %</Table.Td>
+              <Table.Td>
+                <VitalsCell observation={observation} />
+              </Table.Td>
+              <Table.Td>
+                <News2Cell observation={observation} />
+              </Table.Td>
               <Table.Td>{observation.attempts}</Table.Td>
               <Table.Td>{observation.delivered}</Table.Td>
               <Table.Td>{formatDose(observation.volumeInfusedMl, 'mL')}</Table.Td>
@@ -61,6 +70,9 @@ export function ObservationsTable({ observations }: { observations: readonly Obs
           ))}
         </Table.Tbody>
       </Table>
+      <Text size="xs" c="dimmed" mt={4}>
+        {NEWS2_CREDIT}. Scored for adults (16 and over) with a full set; children are judged by age-banded rates instead.
+      </Text>
     </Table.ScrollContainer>
   );
 }

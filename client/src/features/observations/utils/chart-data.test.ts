@@ -39,6 +39,14 @@ function observation(at: string, painScore: number, sedationLevel: ObservationRe
     volumeInfusedMl: 0,
     syringeRemainingMl: 50,
     note: '',
+    oxygenLitresPerMinute: null,
+    oxygenDevice: null,
+    heartRate: null,
+    systolicBp: null,
+    temperatureC: null,
+    consciousness: null,
+    news2: null,
+    news2NotScored: null,
     recordedByName: 'Kai Mendes',
   };
 }

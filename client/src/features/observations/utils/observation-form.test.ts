@@ -36,6 +36,14 @@ function observation(
     volumeInfusedMl,
     syringeRemainingMl: 40,
     note: '',
+    oxygenLitresPerMinute: null,
+    oxygenDevice: null,
+    heartRate: null,
+    systolicBp: null,
+    temperatureC: null,
+    consciousness: null,
+    news2: null,
+    news2NotScored: null,
     recordedByName: 'Kai Mendes',
   };
 }
@@ -66,6 +74,7 @@ const FILLED: ObservationFormValues = {
   delivered: 6,
   volumeInfusedMl: 3.5,
   syringeRemainingMl: 46.5,
+  oxygenLitresPerMinute: 0,
 };
 
 describe('plausible ranges', () => {
@@ -145,6 +154,18 @@ describe('the time of the observation', () => {
   });
 });
 
+describe('optional vitals', () => {
+  it('asks for oxygen beside SpO2 (0 for air), a device when oxygen runs, and checks typed vitals with the server’s words', () => {
+    expect(validateObservationForm({ ...FILLED, oxygenLitresPerMinute: '' }, CONTEXT).oxygenLitresPerMinute).toMatch(/0 for air/);
+    expect(validateObservationForm({ ...FILLED, oxygenLitresPerMinute: 2 }, CONTEXT).oxygenDevice).toBe('Choose the oxygen device');
+    expect(validateObservationForm({ ...FILLED, heartRate: 301 }, CONTEXT).heartRate).toBe('Heart rate is 0 to 300 per minute');
+    expect(validateObservationForm({ ...FILLED, temperatureC: 50 }, CONTEXT).temperatureC).toBe('Temperature is 25 to 45 °C');
+    expect(validateObservationForm({ ...FILLED, systolicBp: 120.5 }, CONTEXT).systolicBp).toBe(
+      'Systolic blood pressure is a whole number of mmHg',
+    );
+  });
+});
+
 describe('toObservationRequest', () => {
   it('sends numbers, leaves the time out for "now" and drops an empty note', () => {
     expect(toObservationRequest({ ...FILLED, painScore: '4', note: '  ' })).toEqual({
@@ -156,7 +177,29 @@ describe('toObservationRequest', () => {
       delivered: 6,
       volumeInfusedMl: 3.5,
       syringeRemainingMl: 46.5,
+      oxygenLitresPerMinute: 0,
     });
+  });
+
+  it('sends the optional vitals that were typed, the device only with oxygen running', () => {
+    const request = toObservationRequest({
+      ...FILLED,
+      oxygenLitresPerMinute: 2,
+      oxygenDevice: 'nasal-cannula',
+      heartRate: 88,
+      systolicBp: 118,
+      temperatureC: 37.4,
+      consciousness: 'alert',
+    });
+    expect(request).toMatchObject({
+      oxygenLitresPerMinute: 2,
+      oxygenDevice: 'nasal-cannula',
+      heartRate: 88,
+      systolicBp: 118,
+      temperatureC: 37.4,
+      consciousness: 'alert',
+    });
+    expect(toObservationRequest({ ...FILLED, oxygenDevice: 'simple-mask' }).oxygenDevice).toBeUndefined();
   });
 
   it('sends a typed time as ISO and a trimmed note', () => {

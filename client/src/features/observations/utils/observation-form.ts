@@ -1,5 +1,7 @@
 import {
+  type Consciousness,
   observationTimelineErrors,
+  type OxygenDevice,
   pumpTotalsAround,
   SEDATION_LEVELS,
   type CreateObservationRequest,
@@ -17,7 +19,10 @@ export const NUMBER_FIELDS = [
   'volumeInfusedMl',
   'syringeRemainingMl',
 ] as const;
-export type NumberField = (typeof NUMBER_FIELDS)[number];
+/** Vital signs that may be left blank (blank: not recorded; NEWS2 then is not scored). */
+export const OPTIONAL_NUMBER_FIELDS = ['oxygenLitresPerMinute', 'heartRate', 'systolicBp', 'temperatureC'] as const;
+export type OptionalNumberField = (typeof OPTIONAL_NUMBER_FIELDS)[number];
+export type NumberField = (typeof NUMBER_FIELDS)[number] | OptionalNumberField;
 
 const TIMELINE_FIELDS = ['attempts', 'delivered', 'volumeInfusedMl', 'syringeRemainingMl'] as const;
 type TimelineField = (typeof TIMELINE_FIELDS)[number];
@@ -29,6 +34,10 @@ const NOT_TYPED_YET: Record<TimelineField, number> = { attempts: Infinity, deliv
 /** The form's fields carry the API's names, so a 400's field errors land beside them. */
 export type ObservationFormValues = Record<NumberField, NumberFieldValue> & {
   sedationLevel: string;
+  /** An OXYGEN_DEVICES value, or empty. */
+  oxygenDevice: string;
+  /** A CONSCIOUSNESS_LEVELS value, or empty. */
+  consciousness: string;
   /** A `datetime-local` value; empty means "now". */
   at: string;
   note: string;
@@ -46,6 +55,12 @@ export function emptyObservationForm(): ObservationFormValues {
     delivered: '',
     volumeInfusedMl: '',
     syringeRemainingMl: '',
+    oxygenLitresPerMinute: '',
+    oxygenDevice: '',
+    heartRate: '',
+    systolicBp: '',
+    temperatureC: '',
+    consciousness: '',
     at: '',
     note: '',
   };
@@ -126,6 +141,42 @@ export const NUMBER_RULES: Record<NumberField, NumberRule> = {
     below: 'Syringe remaining cannot be negative',
     above: 'Syringe remaining looks too large: check the syringe',
   },
+  oxygenLitresPerMinute: {
+    min: 0,
+    max: 60,
+    integer: false,
+    empty: 'Enter the oxygen in L/min (0 for air)',
+    notWhole: '',
+    below: 'Oxygen is 0 (air) to 60 L/min',
+    above: 'Oxygen is 0 (air) to 60 L/min',
+  },
+  heartRate: {
+    min: 0,
+    max: 300,
+    integer: true,
+    empty: 'Enter the heart rate',
+    notWhole: 'Heart rate is a whole number per minute',
+    below: 'Heart rate is 0 to 300 per minute',
+    above: 'Heart rate is 0 to 300 per minute',
+  },
+  systolicBp: {
+    min: 0,
+    max: 300,
+    integer: true,
+    empty: 'Enter the systolic blood pressure',
+    notWhole: 'Systolic blood pressure is a whole number of mmHg',
+    below: 'Systolic blood pressure is 0 to 300 mmHg',
+    above: 'Systolic blood pressure is 0 to 300 mmHg',
+  },
+  temperatureC: {
+    min: 25,
+    max: 45,
+    integer: false,
+    empty: 'Enter the temperature',
+    notWhole: '',
+    below: 'Temperature is 25 to 45 °C',
+    above: 'Temperature is 25 to 45 °C',
+  },
 };
 
 /** The range check of one number field, as typed. */
@@ -172,6 +223,17 @@ export function validateObservationForm(values: ObservationFormValues, context: 
     const error = numberFieldError(field, values[field]);
     if (error) errors[field] = error;
   }
+  // Optional vitals: blank is "not recorded"; anything typed is checked like the rest.
+  for (const field of OPTIONAL_NUMBER_FIELDS) {
+    if (readNumber(values[field]) === null) continue;
+    const error = numberFieldError(field, values[field]);
+    if (error) errors[field] = error;
+  }
+  // Oxygen is said beside SpO2: air is 0.
+  if (readNumber(values.oxygenLitresPerMinute) === null && readNumber(values.spo2) !== null)
+    errors.oxygenLitresPerMinute = 'Enter the oxygen in L/min (0 for air): oxygen raises the SpO2 while breathing slows';
+  const litres = readNumber(values.oxygenLitresPerMinute);
+  if (typeof litres === 'number' && litres > 0 && values.oxygenDevice === '') errors.oxygenDevice = 'Choose the oxygen device';
   if (!(SEDATION_LEVELS as readonly string[]).includes(values.sedationLevel)) errors.sedationLevel = 'Choose the sedation level';
 
   let at = context.now;
@@ -224,6 +286,20 @@ export function toObservationRequest(values: ObservationFormValues): CreateObser
     delivered: number('delivered'),
     volumeInfusedMl: number('volumeInfusedMl'),
     syringeRemainingMl: number('syringeRemainingMl'),
+    ...optionalVitals(values),
     ...(note ? { note } : {}),
   };
+}
+
+/** The optional vitals that were typed, as the API takes them. */
+function optionalVitals(values: ObservationFormValues): Partial<CreateObservationRequest> {
+  const vitals: Partial<CreateObservationRequest> = {};
+  for (const field of OPTIONAL_NUMBER_FIELDS) {
+    const value = readNumber(values[field]);
+    if (typeof value === 'number') vitals[field] = value;
+  }
+  if (typeof vitals.oxygenLitresPerMinute === 'number' && vitals.oxygenLitresPerMinute > 0 && values.oxygenDevice !== '')
+    vitals.oxygenDevice = values.oxygenDevice as OxygenDevice;
+  if (values.consciousness !== '') vitals.consciousness = values.consciousness as Consciousness;
+  return vitals;
 }
