@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { OrderListEntry } from '@lockstep/shared';
-import { observationsDue, urgentFlagsLabel, urgentNotifications } from './order-alerts';
+import { observationsDue, ordersByPatient, urgentFlagsLabel, urgentNotifications } from './order-alerts';
 
 const entry = (id: number, bed: string, dueAt: string | null, openUrgentFlags = 0, status: OrderListEntry['status'] = 'active') =>
   ({
@@ -29,5 +29,16 @@ describe('urgentNotifications', () => {
     expect(urgentNotifications(orders).map((order) => order.id)).toEqual([3, 2]);
     expect(urgentFlagsLabel(1)).toBe('1 urgent flag open');
     expect(urgentFlagsLabel(2)).toBe('2 urgent flags open');
+  });
+});
+
+describe('ordersByPatient', () => {
+  it('groups running PCAs by patient', () => {
+    const a = { ...entry(1, 'H1', null), patientId: 7 } as OrderListEntry;
+    const b = { ...entry(2, 'H2', null), patientId: 8 } as OrderListEntry;
+    expect([...ordersByPatient([a, b]).entries()].map(([id, list]) => [id, list.map((o) => o.id)])).toEqual([
+      [7, [1]],
+      [8, [2]],
+    ]);
   });
 });

@@ -18,3 +18,10 @@ export function urgentNotifications(orders: readonly OrderListEntry[]): OrderLis
 export function urgentFlagsLabel(count: number): string {
   return `${count} urgent flag${count === 1 ? '' : 's'} open`;
 }
+
+/** Each patient's running PCAs, for the patient list's alerts column. */
+export function ordersByPatient(orders: readonly OrderListEntry[]): Map<number, OrderListEntry[]> {
+  const byPatient = new Map<number, OrderListEntry[]>();
+  for (const order of orders) byPatient.set(order.patientId, [...(byPatient.get(order.patientId) ?? []), order]);
+  return byPatient;
+}

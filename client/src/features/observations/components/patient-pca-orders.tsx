@@ -1,8 +1,10 @@
 import { Button, Group, Paper, Stack, Text, Title } from '@mantine/core';
 import { IconChartLine, IconClipboardPlus } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
+import { OrderAlertBadges } from '@/components/ui/order-alert-badges';
 import { canAccess } from '@/config/navigation';
 import { paths } from '@/config/paths';
+import { useNow } from '@/hooks/use-now';
 import { useCurrentUser } from '@/lib/auth/use-session';
 import { drugAndConcentration, regimenParts, type OrderStatus } from '@lockstep/shared';
 import { useOrders } from '@/api/orders/get-orders';
@@ -14,6 +16,7 @@ export function PatientPcaOrders({ patientId }: { patientId: number }) {
   const user = useCurrentUser();
   // The patient's running PCAs, asked afresh each time the page opens.
   const orders = useOrders({ patientId, status: RUNNING }, { staleTime: 0 });
+  const now = useNow(30_000);
   if (!orders.data || orders.data.length === 0) return null;
   const mayObserve = canAccess(user.role, 'bedside');
   return (
@@ -31,6 +34,7 @@ export function PatientPcaOrders({ patientId }: { patientId: number }) {
                   .map((part) => `${part.label} ${part.value}`)
                   .join(' · ')}
               </Text>
+              <OrderAlertBadges openUrgentFlags={order.openUrgentFlags} nextObservation={order.nextObservation} now={now} />
             </div>
             <Group gap="xs">
               {mayObserve ? (

@@ -8,6 +8,9 @@ import { usePatients } from '@/api/patients/get-patients';
 import { matchesPatientSearch } from '../utils/patient-format';
 import { ALL_WARDS, PatientFilters } from './patient-filters';
 import { PatientsTable } from './patients-table';
+import { useOrders } from '@/api/orders/get-orders';
+import { useNow } from '@/hooks/use-now';
+import { ordersByPatient } from '@/utils/order-alerts';
 
 export interface PatientsScreenProps {
   wards: Ward[];
@@ -25,6 +28,10 @@ export function PatientsScreen({ wards, wardsLoading }: PatientsScreenProps) {
   const patientsQuery = usePatients({ wardId: Number.isInteger(wardId) ? wardId : undefined });
   const allPatients = useMemo(() => patientsQuery.data ?? [], [patientsQuery.data]);
   const shown = useMemo(() => allPatients.filter((p) => matchesPatientSearch(p, search)), [allPatients, search]);
+  // Running PCAs, for open urgent flags and overdue observations beside each patient.
+  const runningQuery = useOrders({ status: ['active'] }, { staleTime: 0, refetchInterval: 60_000 });
+  const pcas = useMemo(() => ordersByPatient(runningQuery.data ?? []), [runningQuery.data]);
+  const now = useNow(30_000);
 
   const setParam = (key: string, value: string, empty: string) => {
     setSearchParams(
@@ -57,6 +64,8 @@ export function PatientsScreen({ wards, wardsLoading }: PatientsScreenProps) {
         <QueryErrorAlert title="Patients could not be loaded" error={patientsQuery.error} onRetry={() => void patientsQuery.refetch()} />
       ) : (
         <PatientsTable
+          pcas={pcas}
+          now={now}
           patients={shown}
           totalCount={allPatients.length}
           isLoading={patientsQuery.isPending}

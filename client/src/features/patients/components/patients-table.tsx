@@ -3,7 +3,8 @@ import { Anchor, EmptyState } from '@mantine/core';
 import { IconUserSearch } from '@tabler/icons-react';
 import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
-import { ageInYears, type Patient, patientDisplayName } from '@lockstep/shared';
+import { ageInYears, type OrderListEntry, type Patient, patientDisplayName } from '@lockstep/shared';
+import { OrderAlertBadges } from '@/components/ui/order-alert-badges';
 import { DataTable } from '@/components/ui/data-table';
 import { paths } from '@/config/paths';
 import { formatWeight } from '../utils/patient-format';
@@ -11,7 +12,7 @@ import { RiskMarkers } from './risk-markers';
 
 const column = createColumnHelper<Patient>();
 
-const columns = [
+const baseColumns = [
   column.accessor('bed', { header: 'Bed', sortingFn: 'alphanumeric' }),
   column.accessor((patient) => patientDisplayName(patient), {
     id: 'name',
@@ -39,16 +40,35 @@ const columns = [
   }),
 ];
 
+/** With a PCA column: open urgent flags and overdue observations on the patient's running PCAs. */
+function columnsWith(pcas: ReadonlyMap<number, OrderListEntry[]>, now: Date) {
+  return [
+    ...baseColumns,
+    column.display({
+      id: 'pca',
+      header: 'PCA',
+      cell: ({ row }) =>
+        (pcas.get(row.original.id) ?? []).map((order) => (
+          <OrderAlertBadges key={order.id} openUrgentFlags={order.openUrgentFlags} nextObservation={order.nextObservation} now={now} />
+        )),
+    }),
+  ];
+}
+
 export interface PatientsTableProps {
   patients: Patient[];
   totalCount: number;
   isLoading: boolean;
   emptyMessage: string;
   onOpen: (patient: Patient) => void;
+  /** Running PCAs by patient id, for the PCA alerts column; none shows no column. */
+  pcas?: ReadonlyMap<number, OrderListEntry[]>;
+  now?: Date;
 }
 
-export function PatientsTable({ patients, totalCount, isLoading, emptyMessage, onOpen }: PatientsTableProps) {
+export function PatientsTable({ patients, totalCount, isLoading, emptyMessage, onOpen, pcas, now }: PatientsTableProps) {
   const [sorting, setSorting] = useState<SortingState>([{ id: 'bed', desc: false }]);
+  const columns = useMemo(() => (pcas && now ? columnsWith(pcas, now) : baseColumns), [pcas, now]);
   const table = useReactTable({
     data: patients,
     columns,

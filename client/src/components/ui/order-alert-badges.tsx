@@ -1,0 +1,26 @@
+import { Group } from '@mantine/core';
+import type { ObservationDue } from '@lockstep/shared';
+import { describeNextObservation } from '@/utils/next-observation';
+import { urgentFlagsLabel } from '@/utils/order-alerts';
+import { SeverityBadge } from './severity-badge';
+
+export interface OrderAlertBadgesProps {
+  openUrgentFlags: number;
+  nextObservation: ObservationDue | null;
+  now: Date;
+}
+
+/** A running PCA's open urgent flags and an overdue observation, each as icon + word + colour; nothing when neither. */
+export function OrderAlertBadges({ openUrgentFlags, nextObservation, now }: OrderAlertBadgesProps) {
+  const due = nextObservation ? describeNextObservation(nextObservation, now) : null;
+  const overdue = due && due.tone !== 'ok' ? due : null;
+  if (openUrgentFlags === 0 && !overdue) return null;
+  return (
+    <Group gap={6} wrap="wrap">
+      {openUrgentFlags > 0 ? <SeverityBadge severity="urgent" size="sm" label={urgentFlagsLabel(openUrgentFlags)} /> : null}
+      {overdue ? (
+        <SeverityBadge severity={overdue.tone as 'review' | 'urgent'} size="sm" label={`Observation ${overdue.headline.toLowerCase()}`} />
+      ) : null}
+    </Group>
+  );
+}
