@@ -1,8 +1,10 @@
 import request from 'supertest';
+import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_PASSWORD } from '../src/database/seed/demo-staff.js';
+import { monitoringEvents } from '../src/observations/next-observation.js';
 import { waitForMail } from './support/mailbox.js';
-import { ORDER, ROSA, SETTINGS } from './support/pca.js';
+import { CALM_OBSERVATION, ORDER, ROSA, SETTINGS } from './support/pca.js';
 import { activeOrder } from './support/pca-steps.js';
 import { createTestApp, type TestApp } from './support/test-app.js';
 
@@ -51,6 +53,20 @@ describe('naloxone, pausing and resuming a PCA', () => {
     expect(state.body.paused).toBe(true);
   });
 
+  it('after naloxone the next observation stays due every 15 minutes, even after a calm reading (2-hour watch)', async () => {
+    const order = await start();
+    await post(order.id, 'naloxone', { dose: 100, doseUnit: 'mcg', signature: { password: DEMO_PASSWORD } }).expect(201);
+    // Observations go on while paused.
+    const observed = await post(order.id, 'observations', CALM_OBSERVATION).expect(201);
+    expect(observed.body.flags.filter((f: { severity: string }) => f.severity === 'urgent')).toEqual([]);
+    const detail = await request(t.http).get(`/api/orders/${order.id}`).set(as('kai')).expect(200);
+    const due = Date.parse(detail.body.nextObservation.dueAt) - Date.parse(observed.body.at);
+    expect(due).toBe(15 * 60_000);
+    // The schedule reads the naloxone time (its 2-hour close period outlasts the start's first hour).
+    const events = (await monitoringEvents(t.app.get(DataSource).manager, [order.id])).get(order.id) ?? [];
+    expect(events.map((event) => event.kind)).toContain('naloxone');
+  });
+
   it('naloxone is signed with the nurse’s own password, and refuses a time in the future', async () => {
     const order = await start();
     await post(order.id, 'naloxone', { dose: 0.4, doseUnit: 'mg', signature: { password: 'wrong-password' } }).expect(401);
@@ -69,6 +85,8 @@ describe('naloxone, pausing and resuming a PCA', () => {
     const paused = await post(order.id, 'pause', { reason: 'Going to theatre' }).expect(200);
     expect(paused.body).toMatchObject({ paused: true, pauses: [{ cause: 'nurse', reason: 'Going to theatre', resumedAt: null }] });
     await post(order.id, 'pause', { reason: 'Going to theatre' }).expect(409);
+    const bolus = await post(order.id, 'boluses', { amount: 1, reason: 'Breakthrough pain on coughing', witness: ROSA }).expect(409);
+    expect(bolus.body.message).toMatch(/paused/);
 
     // The second nurse cannot be the signed-in one.
     const self = await post(order.id, 'resume', {

@@ -1,6 +1,6 @@
-import { Injectable } from '@nestjs/common';
+import { ConflictException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import type { DataSource } from 'typeorm';
+import { type DataSource, IsNull } from 'typeorm';
 import { BEDSIDE_ROLES, type BolusResponse, checkAgainstRule, formatDose } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { statusConflict } from '../orders/order-transitions.js';
@@ -9,6 +9,7 @@ import { UsersService } from '../users/users.service.js';
 import type { BolusDto } from './dto/bedside-actions.dto.js';
 import { requireBedsideAction } from './bedside-state.js';
 import { ClinicianBolus } from './entities/clinician-bolus.entity.js';
+import { PcaPause } from './entities/pca-pause.entity.js';
 import { recordAudit } from '../audit/record-audit.js';
 import { fieldError } from '../common/errors/field-error.js';
 
@@ -27,6 +28,9 @@ export class BolusesService {
       const order = await this.orders.load(manager, orderId);
       if (order.status !== 'active') throw statusConflict(order.status, 'active');
       await requireBedsideAction(manager, order, 'bolus');
+      if (await manager.existsBy(PcaPause, { orderId, resumedAt: IsNull() })) {
+        throw new ConflictException('This PCA is paused: resume it (two-nurse check of the pump) before giving a bolus');
+      }
       const unit = order.doseUnit;
       if (order.clinicianBolusDose === null) throw fieldError('amount', 'This order has no clinician bolus: ask the prescriber');
       if (dto.amount > order.clinicianBolusDose + 1e-9) {
