@@ -16,6 +16,7 @@ import {
   validateObservationForm,
   type ObservationFormValues,
 } from '../utils/observation-form';
+import { deliveryWarning } from '../utils/delivery-warning';
 import { observationWarnings } from '../utils/observation-warnings';
 import { ObservationNumberInput } from './observation-number-input';
 import { SedationField } from './sedation-field';
@@ -92,6 +93,7 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
     validateInputOnChange: [...NUMBER_FIELDS, ...OPTIONAL_NUMBER_FIELDS, 'at'],
   });
   const warnings = observationWarnings(form.values, thresholds);
+  const deliveredWarning = deliveryWarning(form.values, order, observations, new Date());
   const { floor } = pumpBounds(observations, running?.id ?? null, new Date());
   const pumpHint = (field: PumpTotalField) => (floor ? `At least ${floor[field]} (at ${formatClock(floor.at)})` : 'New syringe: from 0');
 
@@ -211,6 +213,7 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
                 field={field}
                 label={PUMP_LABELS[field]}
                 description={pumpHint(field)}
+                warning={field === 'delivered' ? deliveredWarning : undefined}
                 inputProps={form.getInputProps(field)}
               />
             ))}
