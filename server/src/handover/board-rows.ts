@@ -28,7 +28,8 @@ export function boardRows(
   const rows = orders.map((order) => {
     const mine = byOrder.get(order.id) ?? emptyInputs();
     const figures = rowFigures(order, mine, policy, now, Date.parse(shift.endsAt));
-    const openFlags = mine.flags;
+    // The inputs hold recent acknowledged urgent flags too, for the monitoring schedule.
+    const openFlags = mine.flags.filter((flag) => flag.acknowledgedAt === null);
     const flags = {
       urgent: openFlags.filter((flag) => flag.severity === 'urgent').length,
       review: openFlags.filter((flag) => flag.severity === 'review').length,

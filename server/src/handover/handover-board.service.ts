@@ -8,7 +8,6 @@ import { ReleaseReconciliation } from '../bedside/entities/release-reconciliatio
 import { storedDate } from '../database/stored-date.js';
 import { Flag } from '../flags/entities/flag.entity.js';
 import { Observation } from '../observations/entities/observation.entity.js';
-import { monitoringEvents } from '../observations/next-observation.js';
 import { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
 import { Ward } from '../wards/entities/ward.entity.js';
@@ -105,7 +104,7 @@ export class HandoverBoardService {
     const manager = this.dataSource.manager;
     const since = new Date(now.getTime() - 24 * HOUR);
     const readFrom = boardReadingsFrom(now);
-    const [observations, latest, flags, releases, starts, boluses, discrepancies, signoffs, schedule] = await Promise.all([
+    const [observations, latest, flags, releases, starts, boluses, discrepancies, signoffs] = await Promise.all([
       // Raw rows: a ward's day of readings is hundreds of rows, and making entities of them cost
       // more than the query.
       manager
@@ -123,7 +122,15 @@ export class HandoverBoardService {
         .select(LATEST_COLUMNS.map((column) => `o.${column}`))
         .where('o.id IN (SELECT max(id) FROM observations WHERE orderId IN (:...ids) GROUP BY orderId)', { ids })
         .getMany(),
-      manager.find(Flag, { where: { orderId: In(ids), acknowledgedAt: IsNull() }, order: { raisedAt: 'DESC' } }),
+      // Open flags, and the urgent flags of the readings' window acknowledged or not: an urgent flag
+      // keeps observations every 15 minutes until a reading after it (the monitoring schedule).
+      manager.find(Flag, {
+        where: [
+          { orderId: In(ids), acknowledgedAt: IsNull() },
+          { orderId: In(ids), severity: 'urgent', raisedAt: MoreThanOrEqual(readFrom) },
+        ],
+        order: { raisedAt: 'DESC' },
+      }),
       manager.find(SyringeRelease, { select: { id: true, orderId: true, volumeMl: true }, where: { orderId: In(ids), status: 'in_use' } }),
       manager.find(BedsideCheck, {
         select: { id: true, orderId: true, releaseId: true, firstAt: true, secondAt: true },
@@ -143,9 +150,7 @@ export class HandoverBoardService {
         where: { wardId, shiftDate: shift.shiftDate, shift: shift.shift as 'day' | 'night' },
         relations: { nurse: true },
       }),
-      monitoringEvents(manager, ids),
     ]);
-    const events = [...schedule].flatMap(([orderId, list]) => list.map((event) => ({ ...event, orderId })));
-    return { observations, latest, flags, releases, starts, boluses, discrepancies, signoffs, events };
+    return { observations, latest, flags, releases, starts, boluses, discrepancies, signoffs };
   }
 }

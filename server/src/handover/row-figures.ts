@@ -1,4 +1,11 @@
-import { projectedEmptyAt, usageSummary, type HandoverRow, type SyringeReading, type WardPolicy } from '@lockstep/shared';
+import {
+  type MonitoringEvent,
+  projectedEmptyAt,
+  usageSummary,
+  type HandoverRow,
+  type SyringeReading,
+  type WardPolicy,
+} from '@lockstep/shared';
 import type { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
 import type { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
 import type { ReleaseReconciliation } from '../bedside/entities/release-reconciliation.entity.js';
@@ -67,6 +74,32 @@ export function inputsByOrder(inputs: BoardInputs): Map<number, OrderInputs> {
   return byOrder;
 }
 
+/**
+ * The latest tightening events the board already fetched, as the order detail reads them with
+ * monitoringEvents: the latest matched check, clinician bolus (last 24 h) and urgent flag (open, or
+ * raised in the readings' window).
+ */
+function boardEvents(mine: OrderInputs): MonitoringEvent[] {
+  const latest = (kind: MonitoringEvent['kind'], times: (Date | null)[]): MonitoringEvent[] => {
+    const max = Math.max(...times.filter((time): time is Date => time !== null).map((time) => time.getTime()));
+    return Number.isFinite(max) ? [{ kind, at: new Date(max).toISOString() }] : [];
+  };
+  return [
+    ...latest(
+      'syringe_change',
+      mine.starts.map((check) => check.secondAt),
+    ),
+    ...latest(
+      'clinician_bolus',
+      mine.boluses.map((bolus) => bolus.at),
+    ),
+    ...latest(
+      'urgent_flag',
+      mine.flags.filter((flag) => flag.severity === 'urgent').map((flag) => flag.raisedAt),
+    ),
+  ];
+}
+
 type Figures = Pick<HandoverRow, 'lastObservation' | 'nextObservation' | 'last4h' | 'total24hDose' | 'syringe'>;
 
 /** One order's observation, usage and syringe figures for the board, from its share of the inputs. */
@@ -120,7 +153,7 @@ export function rowFigures(order: PcaOrder, mine: OrderInputs, policy: WardPolic
           spo2: last.spo2,
         }
       : null,
-    nextObservation: nextObservationFor(order, last?.at ?? null, mine.events ?? [], now, policy),
+    nextObservation: nextObservationFor(order, last?.at ?? null, [...boardEvents(mine), ...(mine.events ?? [])], now, policy),
     last4h: { attempts: recent.attempts, delivered: recent.delivered, dose: recent.dose + recent.bolusDose },
     total24hDose: usage.rolling24hDose,
     syringe: {
