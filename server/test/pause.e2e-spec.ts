@@ -84,6 +84,11 @@ describe('naloxone, pausing and resuming a PCA', () => {
     const order = await start();
     const paused = await post(order.id, 'pause', { reason: 'Going to theatre' }).expect(200);
     expect(paused.body).toMatchObject({ paused: true, pauses: [{ cause: 'nurse', reason: 'Going to theatre', resumedAt: null }] });
+    const listed = async () =>
+      ((await request(t.http).get('/api/orders').set(as('kai')).expect(200)).body as { id: number; paused: boolean }[]).find(
+        (entry) => entry.id === order.id,
+      );
+    expect((await listed())?.paused).toBe(true);
     await post(order.id, 'pause', { reason: 'Going to theatre' }).expect(409);
     const bolus = await post(order.id, 'boluses', { amount: 1, reason: 'Breakthrough pain on coughing', witness: ROSA }).expect(409);
     expect(bolus.body.message).toMatch(/paused/);
@@ -103,6 +108,7 @@ describe('naloxone, pausing and resuming a PCA', () => {
     expect(mismatch.body.differences).toEqual([expect.objectContaining({ field: 'demandDose', differs: 'second' })]);
 
     const resumed = await post(order.id, 'resume', resume).expect(200);
+    expect((await listed())?.paused).toBe(false);
     expect(resumed.body).toMatchObject({ paused: false, differences: [] });
     expect(resumed.body.pauses[0]).toMatchObject({ resumedByName: 'Kai Mendes', resumeWitnessName: 'Rosa Adeyemi' });
     await post(order.id, 'resume', resume).expect(409);

@@ -1,6 +1,6 @@
 import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { type DataSource, type EntityManager, In } from 'typeorm';
+import { type DataSource, type EntityManager, In, IsNull } from 'typeorm';
 import {
   blockingFindings,
   type Finding,
@@ -22,6 +22,7 @@ import { monitoringEvents, nextObservationFor } from '../observations/next-obser
 import { toLimitRuleResponse } from '../library/dto/library-response.js';
 import { MailService } from '../mail/mail.service.js';
 import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
+import { PcaPause } from '../bedside/entities/pca-pause.entity.js';
 import { UsersService } from '../users/users.service.js';
 import type { CreateOrderDto } from './dto/create-order.dto.js';
 import { ORDER_SUMMARY_RELATIONS, toOrderDetail, toOrderSummary } from './dto/order-response.js';
@@ -155,7 +156,7 @@ export class OrdersService {
     });
     const ids = orders.map((order) => order.id);
     const running = orders.filter((order) => order.status === 'active').map((order) => order.id);
-    const [releases, latest, events, urgent] = await Promise.all([
+    const [releases, latest, events, urgent, pauses] = await Promise.all([
       ids.length === 0
         ? []
         : manager.find(SyringeRelease, {
@@ -181,7 +182,11 @@ export class OrdersService {
             .where("f.orderId IN (:...ids) AND f.severity = 'urgent' AND f.acknowledgedAt IS NULL", { ids })
             .groupBy('f.orderId')
             .getRawMany<{ orderId: number; open: number }>(),
+      running.length === 0
+        ? []
+        : manager.find(PcaPause, { select: { id: true, orderId: true }, where: { orderId: In(running), resumedAt: IsNull() } }),
     ]);
+    const paused = new Set(pauses.map((pause) => pause.orderId));
     const openUrgent = new Map(urgent.map((row) => [Number(row.orderId), Number(row.open)]));
     const lastObservedAt = new Map(latest.map((row) => [Number(row.orderId), storedDate(row.at)]));
     const patientOrders = await this.unfinishedOrdersOf(manager, [...new Set(orders.map((order) => order.patientId))]);
@@ -190,6 +195,7 @@ export class OrdersService {
       syringeState: syringeState(releases.filter((release) => release.orderId === order.id)),
       nextObservation: nextObservationFor(order, lastObservedAt.get(order.id) ?? null, events.get(order.id) ?? [], now),
       openUrgentFlags: openUrgent.get(order.id) ?? 0,
+      paused: paused.has(order.id),
       otherOpenOrders: otherOpioidOrders(patientOrders.get(order.patientId) ?? [], order.id),
     }));
   }

@@ -126,6 +126,7 @@ export const orderListEntrySchema: z.ZodType<OrderListEntry> = answer(
     syringeState: z.enum(['running', 'ready', 'none']),
     nextObservation: observationDueSchema.nullable(),
     openUrgentFlags: z.number().int(),
+    paused: z.boolean(),
     otherOpenOrders: z.array(
       z.object({
         id: z.number().int(),

@@ -117,6 +117,8 @@ export type OrderListEntry = OrderSummary & {
   nextObservation: ObservationDue | null;
   /** How many urgent flags on this order are open (not yet acknowledged). */
   openUrgentFlags: number;
+  /** A running PCA paused by a nurse or by naloxone given, until a two-nurse resume. */
+  paused: boolean;
   /** The patient's other unfinished orders (shared `otherOpioidOrders`), for the pharmacist's queue. */
   otherOpenOrders: OtherPcaOrder[];
 };

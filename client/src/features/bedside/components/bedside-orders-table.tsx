@@ -4,6 +4,7 @@ import { IconClipboardCheck, IconClipboardHeart, IconDroplet, IconPlayerStop, Ic
 import { Link } from 'react-router-dom';
 import { type BedsideAction, bedsideActions, drugAndConcentration, type OrderListEntry, regimenPhrases } from '@lockstep/shared';
 import { OrderStatusBadge } from '@/components/ui/order-status-badge';
+import { PausedBadge } from '@/components/ui/paused-badge';
 import { SeverityBadge } from '@/components/ui/severity-badge';
 import { paths } from '@/config/paths';
 import { urgentFlagsLabel } from '@/utils/order-alerts';
@@ -136,6 +137,7 @@ export function BedsideOrdersTable({ orders, now, isLoading, emptyMessage }: Bed
                     <Table.Td miw={170}>
                       <Stack gap={4} align="flex-start">
                         <OrderStatusBadge status={order.status} size="md" />
+                        {order.paused ? <PausedBadge /> : null}
                         {hint ? (
                           <Text size="xs" c="dimmed">
                             {hint}
