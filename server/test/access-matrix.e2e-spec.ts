@@ -105,6 +105,14 @@ export const ACCESS_MATRIX: MatrixRow[] = [
     body: UNKNOWN_FIELD,
   },
   {
+    method: 'PUT',
+    path: '/api/patients/:id/spo2-scale',
+    url: '/api/patients/1/spo2-scale',
+    access: ['prescriber'],
+    ok: 400,
+    body: UNKNOWN_FIELD,
+  },
+  {
     method: 'POST',
     path: '/api/patients/:id/weights',
     url: '/api/patients/1/weights',

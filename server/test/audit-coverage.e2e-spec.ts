@@ -408,6 +408,15 @@ describe('every state-changing route writes its audit event', () => {
       'patient.tolerance-update',
     );
     await step(
+      'put',
+      '/api/patients/:id/spo2-scale',
+      '/api/patients/6/spo2-scale',
+      'prescriber',
+      { spo2Scale: '2' },
+      200,
+      'patient.spo2-scale',
+    );
+    await step(
       'post',
       '/api/patients/:id/weights',
       '/api/patients/6/weights',

@@ -84,6 +84,27 @@ describe('observation vitals: NEWS2 bands, NEWS2 score, children’s bands', () 
     expect(partial.body).toMatchObject({ news2: null, news2NotScored: expect.stringContaining('full set') });
   });
 
+  it('SpO2 scale 2 is chosen per patient by a prescriber only, audited, and then 88 % raises nothing (RCP NEWS2 2017; scale 2 bands from memory)', async () => {
+    const patient = await t.addPatient();
+    const order = await start(patient);
+    const put = (who: string, body: object) =>
+      request(t.http)
+        .put(`/api/patients/${patient.id}/spo2-scale`)
+        .set({ Authorization: `Bearer ${who}` })
+        .send(body);
+    await put(token.kai, { spo2Scale: '2' }).expect(403);
+    await put(token.lin, { spo2Scale: '2' }).expect(403);
+    expect((await put(token.amara, { spo2Scale: '3' }).expect(400)).body.errors[0]).toEqual({
+      field: 'spo2Scale',
+      message: 'SpO2 scale is 1 or 2',
+    });
+    expect((await put(token.amara, { spo2Scale: '2' }).expect(200)).body.spo2Scale).toBe('2');
+    const { body } = await observe(order.id, { ...CALM, spo2: 88, oxygenLitresPerMinute: 0 }).expect(201);
+    expect(codes(body)).toEqual([]);
+    const low = await observe(order.id, { ...CALM, attempts: 3, spo2: 83, oxygenLitresPerMinute: 0 }).expect(201);
+    expect(codes(low.body)).toEqual(['urgent:spo2.low']);
+  });
+
   it.each([
     [{ heartRate: 301 }, 'heartRate'],
     [{ temperatureC: 50 }, 'temperatureC'],

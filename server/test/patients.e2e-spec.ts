@@ -2,9 +2,9 @@ import 'reflect-metadata';
 import request from 'supertest';
 import { describe, expect, it } from 'vitest';
 import type { AuditPage, Finding, OrderPreview, Patient } from '@lockstep/shared';
-import { AddAllergyDto, OpioidToleranceDto, RecordWeightDto } from '../src/patients/dto/patient-record.dto.js';
+import { AddAllergyDto, OpioidToleranceDto, RecordWeightDto, Spo2ScaleDto } from '../src/patients/dto/patient-record.dto.js';
 import { type BadInputApp, badInputSuite, type BadInputRoute } from './support/bad-input-harness.js';
-import { ADD_ALLERGY, OPIOID_TOLERANCE, RECORD_WEIGHT } from './support/bad-input-specs.js';
+import { ADD_ALLERGY, OPIOID_TOLERANCE, RECORD_WEIGHT, SPO2_SCALE } from './support/bad-input-specs.js';
 import { ORDER, REGIMEN } from './support/pca.js';
 
 // The patient record: allergies as entries (and the order check that reads them), opioid tolerance
@@ -36,6 +36,15 @@ const ROUTES: BadInputRoute[] = [
     spec: OPIOID_TOLERANCE,
     dto: OpioidToleranceDto,
     valid: () => ({ opioidTolerant: true, oralMorphineMgPerDay: 90, days: 14 }),
+  },
+  {
+    method: 'PUT',
+    path: '/api/patients/:id/spo2-scale',
+    url: () => `/api/patients/${state.patientId}/spo2-scale`,
+    role: 'prescriber',
+    spec: SPO2_SCALE,
+    dto: Spo2ScaleDto,
+    valid: () => ({ spo2Scale: '1' }),
   },
   {
     method: 'POST',

@@ -11,6 +11,7 @@ import {
   bolusSchema,
   createDraftSchema,
   createObservationSchema,
+  spo2ScaleRequestSchema,
   createOrderSchema,
   createReleaseSchema,
   createSignoffSchema,
@@ -61,7 +62,7 @@ import { CreateObservationDto } from '../src/observations/dto/create-observation
 import { CreateOrderDto } from '../src/orders/dto/create-order.dto.js';
 import { OrderFieldsDto } from '../src/orders/dto/order-fields.dto.js';
 import { ReasonDto } from '../src/orders/dto/reason.dto.js';
-import { AddAllergyDto, OpioidToleranceDto, RecordWeightDto } from '../src/patients/dto/patient-record.dto.js';
+import { AddAllergyDto, OpioidToleranceDto, RecordWeightDto, Spo2ScaleDto } from '../src/patients/dto/patient-record.dto.js';
 import { CreateReleaseDto } from '../src/releases/dto/create-release.dto.js';
 import { CreateUserDto } from '../src/users/dto/create-user.dto.js';
 import { UpdateUserDto } from '../src/users/dto/update-user.dto.js';
@@ -85,6 +86,7 @@ import {
   IMPORT_FIELDS,
   LOGIN,
   OBSERVATION,
+  SPO2_SCALE,
   OPIOID_TOLERANCE,
   ORDER_FIELDS,
   REASON,
@@ -131,6 +133,7 @@ const CONTRACTS: Record<string, Contract> = {
   'POST /api/orders/:param/pause': { spec: PAUSE, dto: PauseDto, schema: pauseSchema },
   'POST /api/orders/:param/resume': { spec: RESUME, dto: ResumeDto, schema: resumeSchema },
   'POST /api/orders/:param/observations': { spec: OBSERVATION, dto: CreateObservationDto, schema: createObservationSchema },
+  'PUT /api/patients/:param/spo2-scale': { spec: SPO2_SCALE, dto: Spo2ScaleDto, schema: spo2ScaleRequestSchema },
   'POST /api/flags/:param/acknowledge': { spec: ACKNOWLEDGE_FLAG, dto: AcknowledgeFlagDto, schema: acknowledgeFlagSchema },
   'POST /api/wards/:param/handover/signoffs': { spec: SIGNOFF, dto: CreateSignoffDto, schema: createSignoffSchema },
   'POST /api/auth/login': { spec: LOGIN, dto: LoginDto, schema: loginSchema },

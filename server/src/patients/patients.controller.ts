@@ -1,12 +1,12 @@
 import { Body, Controller, Delete, Get, HttpCode, Param, Post, Put, Query } from '@nestjs/common';
-import { PATIENT_RECORD_ROLES, WEIGHT_ROLES, type Patient } from '@lockstep/shared';
+import { PATIENT_RECORD_ROLES, PRESCRIBING_ROLES, WEIGHT_ROLES, type Patient } from '@lockstep/shared';
 import { ApiHeader, ApiOperation } from '@nestjs/swagger';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
 import { Roles } from '../auth/decorators/roles.decorator.js';
 import { ApiErrors } from '../common/openapi/api-errors.decorator.js';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
-import { AddAllergyDto, OpioidToleranceDto, RecordWeightDto } from './dto/patient-record.dto.js';
+import { AddAllergyDto, OpioidToleranceDto, RecordWeightDto, Spo2ScaleDto } from './dto/patient-record.dto.js';
 import { PatientQueryDto } from './dto/patient-query.dto.js';
 import { PatientsService } from './patients.service.js';
 
@@ -73,6 +73,15 @@ export class PatientsController {
   @Roles(...PATIENT_RECORD_ROLES)
   updateTolerance(@Param('id', ParseIdPipe) id: number, @Body() body: OpioidToleranceDto, @CurrentUser() user: AuthUser): Promise<Patient> {
     return this.patients.updateTolerance(id, body, user);
+  }
+
+  @ApiOperation({ summary: 'Choose the NEWS2 SpO2 scale: 2 only for confirmed hypercapnic respiratory failure (prescribers)' })
+  @ApiHeader(idempotencyKey('the same scale again changes and records nothing'))
+  @ApiErrors(404)
+  @Put(':id/spo2-scale')
+  @Roles(...PRESCRIBING_ROLES)
+  updateSpo2Scale(@Param('id', ParseIdPipe) id: number, @Body() body: Spo2ScaleDto, @CurrentUser() user: AuthUser): Promise<Patient> {
+    return this.patients.updateSpo2Scale(id, body, user);
   }
 
   @ApiOperation({ summary: 'Record a new weight and the day it was measured' })

@@ -6,7 +6,7 @@ import type { AuthUser } from '../auth/auth-user.js';
 import { changedFields, recordAudit } from '../audit/record-audit.js';
 import { fieldError } from '../common/errors/field-error.js';
 import { Drug } from '../drugs/entities/drug.entity.js';
-import type { AddAllergyDto, OpioidToleranceDto, RecordWeightDto } from './dto/patient-record.dto.js';
+import type { AddAllergyDto, OpioidToleranceDto, RecordWeightDto, Spo2ScaleDto } from './dto/patient-record.dto.js';
 import { toPatientResponse } from './dto/patient-response.js';
 import { PatientAllergy } from './entities/patient-allergy.entity.js';
 import { Patient } from './entities/patient.entity.js';
@@ -131,6 +131,18 @@ export class PatientsService {
       if (Object.keys(changed).length === 0) return;
       await manager.update(Patient, { id }, after);
       await recordAudit(manager, user, { action: 'patient.tolerance-update', entityType: 'patient', entityId: id, summary: changed });
+    });
+    return this.get(id);
+  }
+
+  /** The NEWS2 SpO2 scale a prescriber chose; the same scale again writes nothing. */
+  async updateSpo2Scale(id: number, body: Spo2ScaleDto, user: AuthUser): Promise<PatientResponse> {
+    await this.patients.manager.transaction(async (manager) => {
+      const patient = await this.lockedPatient(manager, id);
+      const changed = changedFields(patient, { spo2Scale: body.spo2Scale });
+      if (Object.keys(changed).length === 0) return;
+      await manager.update(Patient, { id }, { spo2Scale: body.spo2Scale });
+      await recordAudit(manager, user, { action: 'patient.spo2-scale', entityType: 'patient', entityId: id, summary: changed });
     });
     return this.get(id);
   }

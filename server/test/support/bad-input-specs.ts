@@ -8,9 +8,9 @@ import {
   SEDATION_LEVELS,
   SIGNOFF_ROLES,
   NALOXONE_UNITS,
-  NALOXONE_UNITS,
   CONSCIOUSNESS_LEVELS,
   OXYGEN_DEVICES,
+  SPO2_SCALES,
 } from '@lockstep/shared';
 import type { BodySpec, FieldSpec } from './bad-values.js';
 
@@ -114,14 +114,6 @@ export const NALOXONE: BodySpec = {
 };
 export const PAUSE: BodySpec = { reason };
 export const RESUME: BodySpec = { reason, settings, witness: { type: 'object', fields: { ...COLLEAGUE, settings } } };
-export const NALOXONE: BodySpec = {
-  dose: positive,
-  doseUnit: { type: 'enum', values: NALOXONE_UNITS },
-  givenAt: { type: 'datetime', presence: 'optional' },
-  signature: { type: 'object', fields: SIGNATURE },
-};
-export const PAUSE: BodySpec = { reason };
-export const RESUME: BodySpec = { reason, settings, witness: { type: 'object', fields: { ...COLLEAGUE, settings } } };
 
 const count = (max: number): FieldSpec => ({ type: 'number', int: true, min: 0, max });
 export const OBSERVATION: BodySpec = {
@@ -142,6 +134,7 @@ export const OBSERVATION: BodySpec = {
   consciousness: { type: 'enum', values: CONSCIOUSNESS_LEVELS, presence: 'optional' },
   note: { type: 'string', max: 2000, presence: 'optional' },
 };
+export const SPO2_SCALE: BodySpec = { spo2Scale: { type: 'enum', values: SPO2_SCALES } };
 export const ACKNOWLEDGE_FLAG: BodySpec = { note: { type: 'string', min: 5, max: 1000, trimmed: true } };
 export const SIGNOFF: BodySpec = {
   orderId: id,
@@ -261,9 +254,6 @@ export const BAD_INPUT_COVERAGE: Record<string, string> = {
   'POST /api/orders/:param/naloxone': 'bad-input-bedside',
   'POST /api/orders/:param/pause': 'bad-input-bedside',
   'POST /api/orders/:param/resume': 'bad-input-bedside',
-  'POST /api/orders/:param/naloxone': 'bad-input-bedside',
-  'POST /api/orders/:param/pause': 'bad-input-bedside',
-  'POST /api/orders/:param/resume': 'bad-input-bedside',
   'POST /api/orders/:param/observations': 'bad-input-bedside',
   'POST /api/flags/:param/acknowledge': 'bad-input-bedside',
   'POST /api/wards/:param/handover/signoffs': 'bad-input-bedside',
@@ -280,6 +270,7 @@ export const BAD_INPUT_COVERAGE: Record<string, string> = {
   'POST /api/library/import': 'bad-input-uploads',
   'POST /api/patients/:param/allergies': 'patients',
   'PUT /api/patients/:param/opioid-tolerance': 'patients',
+  'PUT /api/patients/:param/spo2-scale': 'patients',
   'POST /api/patients/:param/weights': 'patients',
   // No body: the path names the thing, and the id pipe refuses a bad id.
   'POST /api/library/versions/:param/withdraw': 'no body',

@@ -30,6 +30,7 @@ export const AUDIT_ACTION_LABELS = {
   'patient.allergy-remove': 'Allergy entry removed',
   'patient.no-known-allergies': 'No known allergies recorded',
   'patient.tolerance-update': 'Opioid tolerance changed',
+  'patient.spo2-scale': 'SpO2 scale changed',
   'patient.weight-record': 'Weight recorded',
   'order.create': 'Order written',
   'order.revise': 'Order revised',

@@ -42,6 +42,8 @@ export const patientSchema = z.object({
   /** The tolerance basis: oral morphine (or equianalgesic) mg a day, and for how many days; null when not recorded. */
   toleranceOralMorphineMgPerDay: z.number().nullable(),
   toleranceDays: z.number().int().nullable(),
+  /** NEWS2 SpO2 scale: 2 only for confirmed hypercapnic respiratory failure, chosen by a prescriber (RCP, NEWS2, 2017). */
+  spo2Scale: z.enum(['1', '2']),
   sleepApnoea: z.boolean(),
   otherSedatives: z.boolean(),
   wardId: z.number().int(),

@@ -66,6 +66,7 @@ export const RESPONSE_SCHEMAS: Readonly<Record<string, Answer | Answer[]>> = {
   'DELETE /api/patients/{id}/allergies/{allergyId}': { schema: patientSchema },
   'POST /api/patients/{id}/no-known-allergies': { schema: patientSchema },
   'PUT /api/patients/{id}/opioid-tolerance': { schema: patientSchema },
+  'PUT /api/patients/{id}/spo2-scale': { schema: patientSchema },
   'POST /api/patients/{id}/weights': { schema: patientSchema },
   'GET /api/drugs': { schema: drugSchema, list: true },
   'GET /api/equianalgesic-factors': { schema: equianalgesicFactorSchema, list: true },

@@ -17,6 +17,9 @@ import {
 } from 'class-validator';
 import {
   ALLERGY_SEVERITIES,
+  SPO2_SCALES,
+  type Spo2Scale,
+  type Spo2ScaleRequest,
   TOLERANCE_MAX_DAYS,
   TOLERANCE_MAX_ORAL_MORPHINE_MG_PER_DAY,
   WEIGHT_MAX_KG,
@@ -129,4 +132,12 @@ export class RecordWeightDto implements RecordWeightRequest {
   @IsISO8601({ strict: true }, { message: 'Enter the date the weight was measured (yyyy-mm-dd)' })
   @IsDefined({ message: 'Enter the date the weight was measured' })
   measuredOn: string;
+}
+
+/** The patient's NEWS2 SpO2 scale: 2 only for confirmed hypercapnic respiratory failure (RCP, NEWS2, 2017). */
+export class Spo2ScaleDto implements Spo2ScaleRequest {
+  @ApiProperty({ enum: SPO2_SCALES, example: '1', description: 'NEWS2 SpO2 scale: 2 only for confirmed hypercapnic respiratory failure' })
+  @IsIn(SPO2_SCALES, { message: 'SpO2 scale is 1 or 2' })
+  @IsDefined({ message: 'Choose SpO2 scale 1 or 2' })
+  spo2Scale: Spo2Scale;
 }

@@ -31,6 +31,7 @@ export function toPatientResponse(patient: Patient): PatientResponse {
     opioidTolerant: patient.opioidTolerant,
     toleranceOralMorphineMgPerDay: patient.toleranceOralMorphineMgPerDay,
     toleranceDays: patient.toleranceDays,
+    spo2Scale: patient.spo2Scale,
     sleepApnoea: patient.sleepApnoea,
     otherSedatives: patient.otherSedatives,
     wardId: patient.wardId,

@@ -1,5 +1,5 @@
 import { Column, Entity, Index, JoinColumn, ManyToOne, OneToMany, PrimaryGeneratedColumn, type Relation } from 'typeorm';
-import type { Sex } from '@lockstep/shared';
+import type { Sex, Spo2Scale } from '@lockstep/shared';
 import { Ward } from '../../wards/entities/ward.entity.js';
 import { PatientAllergy } from './patient-allergy.entity.js';
 
@@ -50,6 +50,10 @@ export class Patient {
 
   @Column({ type: 'integer', nullable: true })
   toleranceDays: number | null;
+
+  /** NEWS2 SpO2 scale, chosen by a prescriber: '2' only for confirmed hypercapnic respiratory failure (RCP, NEWS2, 2017). */
+  @Column({ type: 'varchar', length: 1, default: '1' })
+  spo2Scale: Spo2Scale;
 
   @Column({ type: 'boolean', default: false })
   sleepApnoea: boolean;

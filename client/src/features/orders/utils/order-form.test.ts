@@ -31,6 +31,7 @@ const noah: Patient = {
   opioidTolerant: false,
   toleranceOralMorphineMgPerDay: null,
   toleranceDays: null,
+  spo2Scale: '1',
   sleepApnoea: false,
   otherSedatives: false,
   wardId: 1,

@@ -37,6 +37,7 @@ const patient: Patient = {
   opioidTolerant: true,
   toleranceOralMorphineMgPerDay: 90,
   toleranceDays: 30,
+  spo2Scale: '1',
   sleepApnoea: false,
   otherSedatives: false,
   wardId: 4,

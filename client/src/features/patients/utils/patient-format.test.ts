@@ -18,6 +18,7 @@ const patient: Patient = {
   opioidTolerant: false,
   toleranceOralMorphineMgPerDay: null,
   toleranceDays: null,
+  spo2Scale: '1',
   sleepApnoea: true,
   otherSedatives: false,
   wardId: 1,
