@@ -8,7 +8,9 @@ import {
 } from '@lockstep/shared';
 import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 
-export type PolicyNumberKey = keyof WardPolicy;
+/** The close-observation settings follow the shipped defaults until wards can store their own (issue 17). */
+type NotYetEditable = 'closeObservationIntervalMinutes' | 'closeObservationPeriodMinutes' | 'naloxoneClosePeriodMinutes';
+export type PolicyNumberKey = Exclude<keyof WardPolicy, NotYetEditable>;
 export type PolicyEmailKey = 'pharmacyEmail' | 'nurseInChargeEmail';
 
 export type PolicyFormValues = Record<PolicyNumberKey, NumberFieldValue> & Record<PolicyEmailKey, string>;
