@@ -4,7 +4,7 @@ import { DEMO_PASSWORD, openBrowser, signIn, signInHome, snapshot, type BrowserS
 import { apiToken, callApi } from './support/api.js';
 import { startServer, type RunningServer } from './support/server.js';
 
-// The demo's Harbour ward (id 1) keeps SpO2 below 90 % as its shipped threshold; the demo order
+// The demo's Harbour ward (id 1) keeps SpO2 below 92 % as its shipped threshold (NEWS2's floor); the demo order
 // for NOAH ACHTERBERG (H02) waits for verification. Besides the demo's own back-story, the API
 // makes two events here: Lin Park verifies that order, Sam Rivera raises Harbour's SpO2 threshold.
 const HARBOUR = 1;
@@ -38,7 +38,7 @@ describe('audit trail', () => {
     verifiedId = order.id;
     await callApi(server.baseUrl, lin, 'POST', `/orders/${verifiedId}/verify`, { signature: { password: DEMO_PASSWORD } });
     const sam = await apiToken(server.baseUrl, 'sam.rivera');
-    await callApi(server.baseUrl, sam, 'PATCH', `/wards/${HARBOUR}/policy`, { spo2Threshold: 92 });
+    await callApi(server.baseUrl, sam, 'PATCH', `/wards/${HARBOUR}/policy`, { spo2Threshold: 93 });
   });
   afterAll(async () => {
     await browser?.close();
@@ -61,7 +61,7 @@ describe('audit trail', () => {
     const policyText = await policyRow.innerText();
     expect(policyText).toContain('Sam Rivera');
     expect(policyText).toContain('Ward Harbour');
-    expect(policyText).toContain('90 → 92');
+    expect(policyText).toContain('92 → 93');
     await snapshot(page, 'audit-ward-policy');
 
     await policyRow.click();
