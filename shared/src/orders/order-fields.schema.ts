@@ -17,7 +17,7 @@ const id = (required: string, name: string) =>
     .refine(isWhole, `${name} must be a whole number`)
     .positive(`${name} must be positive`);
 
-/** The regimen fields of an order (BRIEF §6), as a prescriber enters them. */
+/** The regimen fields of an order (docs/design.md, "Order fields and dosing conventions"), as a prescriber enters them. */
 export const orderFieldsSchema = z.strictObject({
   patientId: id('Choose the patient', 'patientId'),
   drugId: id('Choose the drug', 'drugId'),
