@@ -97,5 +97,6 @@ export * from './flags/flags-requests.schema.js';
 export * from './handover/handover-requests.schema.js';
 export * from './wards/wards-requests.schema.js';
 export * from './wards/ward-policy-sign-off.js';
+export * from './wards/ward-policy-change.schema.js';
 export * from './orders/orders-requests.schema.js';
 export * from './library/library-requests.schema.js';
