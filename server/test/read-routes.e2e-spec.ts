@@ -30,6 +30,9 @@ describe('read routes', () => {
     const response = await request(t.http).get('/api/wards').set(as('nurse')).expect(200);
     expect(response.body.map((ward: { name: string }) => ward.name)).toEqual(['Cedar', 'Harbour', 'Summit', 'Wren']);
     expect(response.body.find((ward: { name: string }) => ward.name === 'Wren').weightBasedDosing).toBe(true);
+    // The population is the ward's own fact: Wren is the children's ward, the others adult.
+    const populations = Object.fromEntries(response.body.map((ward: { name: string; population: string }) => [ward.name, ward.population]));
+    expect(populations).toEqual({ Cedar: 'adult', Harbour: 'adult', Summit: 'adult', Wren: 'paediatric' });
   });
 
   it('lists patients, and filters them by ward', async () => {

@@ -1,16 +1,25 @@
-import { ageInYears, type VitalsPatient } from '@lockstep/shared';
+import { ageInYears, type Population, type VitalsPatient } from '@lockstep/shared';
 import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
 
+/** What the bands need to know of a patient and their ward, as stored. */
+export type VitalsPatientFacts = { dateOfBirth: string | null; wardPopulation: Population; spo2Scale: string | null };
+
 /**
- * Who the breathing bands and NEWS2 are for: the patient's age at the observation, whether the ward is a
- * children's ward (a ward with weight-based dosing is the paediatric population), and the SpO2 scale the
- * prescriber chose (PUT /api/patients/:id/spo2-scale). Expects `patient.ward` loaded.
+ * Who the breathing bands and NEWS2 are for at `at`: the patient's age then, whether the ward's population is
+ * paediatric (the ward's own setting, not its weight-based dosing: how doses are checked is a separate fact),
+ * and the SpO2 scale the prescriber chose (PUT /api/patients/:id/spo2-scale). The observation route and the
+ * demo and scale seeds both use it, so seeded flags follow the same bands as recorded ones.
  */
-export function vitalsPatientOf(order: PcaOrder, at: Date): VitalsPatient {
-  const dateOfBirth = order.patient.dateOfBirth;
+export function vitalsPatient(facts: VitalsPatientFacts, at: Date): VitalsPatient {
   return {
-    ageYears: dateOfBirth ? ageInYears(dateOfBirth, at) : null,
-    paediatricWard: order.patient.ward.weightBasedDosing,
-    spo2Scale: order.patient.spo2Scale === '2' ? '2' : '1',
+    ageYears: facts.dateOfBirth ? ageInYears(facts.dateOfBirth, at) : null,
+    paediatricWard: facts.wardPopulation === 'paediatric',
+    spo2Scale: facts.spo2Scale === '2' ? '2' : '1',
   };
+}
+
+/** `vitalsPatient` for an order's patient. Expects `patient.ward` loaded. */
+export function vitalsPatientOf(order: PcaOrder, at: Date): VitalsPatient {
+  const { patient } = order;
+  return vitalsPatient({ dateOfBirth: patient.dateOfBirth, wardPopulation: patient.ward.population, spo2Scale: patient.spo2Scale }, at);
 }

@@ -14,6 +14,7 @@ import { RulePopulation1764770000000 } from './1764770000000-rule-population.js'
 import { EquianalgesicFactors1764780000000 } from './1764780000000-equianalgesic-factors.js';
 import { WardPolicySignOff1764810000000 } from './1764810000000-ward-policy-sign-off.js';
 import { NaloxoneAndPause1764800000000 } from './1764800000000-naloxone-and-pause.js';
+import { WardPopulation1764840000000 } from './1764840000000-ward-population.js';
 
 /** In order. Listed explicitly (not globbed) so tests and the built server run the same set. */
 export const MIGRATIONS = [
@@ -33,4 +34,5 @@ export const MIGRATIONS = [
   ObservationVitals1764790000000,
   NaloxoneAndPause1764800000000,
   WardPolicySignOff1764810000000,
+  WardPopulation1764840000000,
 ];

@@ -1,4 +1,10 @@
-import type { SedationLevel } from '@lockstep/shared';
+import {
+  type PaediatricVitalBand,
+  paediatricVitalBand,
+  type SedationLevel,
+  usesPaediatricBands,
+  type VitalsPatient,
+} from '@lockstep/shared';
 import type { Random } from './random.js';
 
 /** What the patient and the pump showed at one hourly observation, before the syringe caps it. */
@@ -32,11 +38,21 @@ export interface ObservationScript {
   missingAtTakeDown(index: number): number;
 }
 
+/**
+ * The children's band a patient's observations are judged by (shared breathing-flags.ts), or null for an adult:
+ * a settled child breathes within the band's normal range, not an adult's.
+ */
+export function childBandOf(patient: VitalsPatient): PaediatricVitalBand | null {
+  return usesPaediatricBands(patient) ? paediatricVitalBand(patient.ageYears) : null;
+}
+
 /** The scale seed's values: settled patients, the odd struggling hour, unacceptable sedation at the end if asked. */
 export class RandomScript implements ObservationScript {
   constructor(
     private readonly random: Random,
     private readonly sedatedAtLast: boolean,
+    /** A child's band: settled breathing within its normal range, slowed just below it when sedated. */
+    private readonly child: PaediatricVitalBand | null = null,
   ) {}
 
   offsetMinutes(): number {
@@ -53,10 +69,17 @@ export class RandomScript implements ObservationScript {
       delivered,
       painScore: struggling ? r.int(7, 9) : Math.max(0, (early ? 4 : 3) + r.int(-2, 2)),
       sedationLevel: sedated ? '3' : r.pick<SedationLevel>(['S', '1', '1', '1', '2']),
-      respiratoryRate: sedated ? 9 : r.int(11, 20),
+      respiratoryRate: this.respiratoryRate(sedated),
       spo2: r.int(93, 99),
       refused: struggling ? delivered + r.int(2, 4) : r.chance(0.3) ? r.int(1, 2) : 0,
     };
+  }
+
+  /** Drawn only when calm, as before children had their own range, so adults' values are unchanged. */
+  private respiratoryRate(sedated: boolean): number {
+    const band = this.child?.respiratoryRate;
+    if (sedated) return band ? band.low - 1 : 9;
+    return band ? this.random.int(band.low, band.high) : this.random.int(11, 20);
   }
 
   missingAtTakeDown(): number {

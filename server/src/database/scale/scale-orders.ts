@@ -1,8 +1,9 @@
 import { type OrderStatus, type PatientFactors, regimenTypeOf, shiftWindow } from '@lockstep/shared';
+import { vitalsPatient, type VitalsPatientFacts } from '../../observations/vitals-patient.js';
 import type { Random } from './random.js';
 import type { Drugs, Staff, WrittenWard } from './scale-reference.js';
 import { pickRegimen, signingRecord, type ScaleRegimen } from './scale-regimen.js';
-import { RandomScript, type ObservationScript } from './observation-script.js';
+import { childBandOf, RandomScript, type ObservationScript } from './observation-script.js';
 import { type ReleaseCodes, writeSyringes } from './scale-syringes.js';
 import { type ScaleWriter, sqlTime } from './scale-writer.js';
 
@@ -12,7 +13,12 @@ const DAY = 24 * HOUR;
 const DISCONTINUE_REASON = 'Stepped down to oral analgesia';
 
 export type OrderContext = { writer: ScaleWriter; random: Random; staff: Staff; drugs: Drugs; codes: ReleaseCodes; now: number };
-export type ScalePatient = PatientFactors & { id: number; weightKg: number };
+export type ScalePatient = PatientFactors & { id: number; weightKg: number; dateOfBirth: string };
+
+/** What the observation bands need of the patient on this ward (the seeds never choose SpO2 scale 2). */
+export function vitalsFactsOf(ward: WrittenWard, patient: ScalePatient): VitalsPatientFacts {
+  return { dateOfBirth: patient.dateOfBirth, wardPopulation: ward.population, spo2Scale: '1' };
+}
 
 export type PcaStory = {
   ward: WrittenWard;
@@ -40,7 +46,11 @@ export function writePcaStory(ctx: OrderContext, story: PcaStory): void {
     signedAt,
     verifiedAt,
     stopAt,
-    script: new RandomScript(r, story.sedatedAtLast),
+    script: new RandomScript(
+      r,
+      story.sedatedAtLast,
+      childBandOf(vitalsPatient(vitalsFactsOf(story.ward, story.patient), new Date(story.start))),
+    ),
     bolusAt: bolusAt !== null && bolusAt < (story.end ?? now) ? bolusAt : null,
     currentShift: 'both',
   });
@@ -97,6 +107,7 @@ export function writePca(ctx: OrderContext, course: PcaCourse): number {
       start: course.start,
       stopAt: course.stopAt,
       end: course.end,
+      patient: vitalsFactsOf(course.ward, course.patient),
       script: course.script,
       changeSyringes: course.changeSyringes,
     },

@@ -114,6 +114,6 @@ export class PatientFactory {
         recordedById: null,
         recordedAt: sqlTime(this.now - r.int(1, 72) * 3_600_000),
       });
-    return { id, weightKg, ageYears: age, ...factors };
+    return { id, weightKg, dateOfBirth: born, ageYears: age, ...factors };
   }
 }

@@ -1,3 +1,4 @@
+import type { Population } from '@lockstep/shared';
 import { DEMO_WARDS } from '../seed/demo-data.js';
 import type { ScaleOptions } from './scale-options.js';
 
@@ -6,6 +7,8 @@ export type PlannedWard = {
   name: string;
   specialty: string;
   weightBasedDosing: boolean;
+  /** A paediatric ward's observations use the children's bands. */
+  population: Population;
   beds: number;
   /** Beds with a running PCA now. */
   active: number;
@@ -76,7 +79,14 @@ export function planWards(options: Pick<ScaleOptions, 'wards' | 'beds' | 'active
 
 function identity(index: number): Omit<PlannedWard, 'beds' | 'active'> {
   const demo = DEMO_WARDS[index];
-  if (demo) return { code: demo.code, name: demo.name, specialty: demo.specialty, weightBasedDosing: demo.weightBasedDosing };
+  if (demo)
+    return {
+      code: demo.code,
+      name: demo.name,
+      specialty: demo.specialty,
+      weightBasedDosing: demo.weightBasedDosing,
+      population: demo.population,
+    };
   const n = index - DEMO_WARDS.length;
   const base = MORE_NAMES[n % MORE_NAMES.length];
   const round = Math.floor(n / MORE_NAMES.length);
@@ -86,6 +96,7 @@ function identity(index: number): Omit<PlannedWard, 'beds' | 'active'> {
     name,
     specialty: SPECIALTIES[n % SPECIALTIES.length],
     weightBasedDosing: false,
+    population: 'adult',
   };
 }
 

@@ -2,6 +2,7 @@ import {
   DEFAULT_EQUIANALGESIC_FACTORS,
   DEFAULT_WARD_POLICY,
   type LimitRuleResponse,
+  type Population,
   populationKey,
   rulePopulationOf,
   type WardPolicy,
@@ -22,8 +23,17 @@ export type Staff = {
   chargeNurse: number;
 };
 export type Drugs = Map<string, { id: number; doseUnit: string }>;
-/** What the PCA writers need of a ward: its id, whether it doses by weight, its active rules by drug and its policy. */
-export type WrittenWard = { id: number; paediatric: boolean; rules: Map<string, LimitRuleResponse>; policy: WardPolicy };
+/**
+ * What the PCA writers need of a ward: its id, whether it doses by weight (`paediatric`: children's regimens and
+ * patients), its population (the observation bands), its active rules by drug and its policy.
+ */
+export type WrittenWard = {
+  id: number;
+  paediatric: boolean;
+  population: Population;
+  rules: Map<string, LimitRuleResponse>;
+  policy: WardPolicy;
+};
 
 const DAY = 86_400_000;
 
@@ -83,6 +93,7 @@ export function writeWards(
       name: ward.name,
       specialty: ward.specialty,
       weightBasedDosing: ward.weightBasedDosing ? 1 : 0,
+      population: ward.population,
       pharmacyEmail: `pharmacy.${slug}@kestrelbay.example`,
       nurseInChargeEmail: `nurse-in-charge.${slug}@kestrelbay.example`,
     });

@@ -9,6 +9,7 @@ import {
   type WardPolicy,
 } from '@lockstep/shared';
 import { discrepancyFlag } from '../../bedside/reconciliation-records.js';
+import { vitalsPatient, type VitalsPatientFacts } from '../../observations/vitals-patient.js';
 import type { ObservationScript } from './observation-script.js';
 import type { Random } from './random.js';
 import type { Staff } from './scale-reference.js';
@@ -32,6 +33,8 @@ export type ObservedOrder = {
   stopAt: number;
   /** Discontinued at this time (its last syringe is reconciled), or null while it runs. */
   end: number | null;
+  /** The patient's age, ward population and SpO2 scale: each observation's flags use their bands, as the app's do. */
+  patient: VitalsPatientFacts;
   /** Where each observation's values come from. */
   script: ObservationScript;
   /** False when the next syringe never came: the running one is left to run low. */
@@ -84,6 +87,8 @@ export function writeSyringes(ctx: SyringeContext, order: ObservedOrder): void {
       sedationLevel: planned.sedationLevel,
       respiratoryRate: planned.respiratoryRate,
       spo2: planned.spo2,
+      // On air: the seeded patients need no oxygen.
+      oxygenLitresPerMinute: 0,
       attempts: (previous?.attempts ?? 0) + delivered + planned.refused,
       delivered: (previous?.delivered ?? 0) + delivered,
       volumeInfusedMl: round2(Math.min(regimen.syringeMl, (previous?.volumeInfusedMl ?? 0) + delivered * demandMl + basalMl)),
@@ -98,6 +103,7 @@ export function writeSyringes(ctx: SyringeContext, order: ObservedOrder): void {
       sedationLevel: values.sedationLevel,
       respiratoryRate: values.respiratoryRate,
       spo2: values.spo2,
+      oxygenLitresPerMinute: values.oxygenLitresPerMinute ?? 0,
       attempts: values.attempts,
       delivered: values.delivered,
       volumeInfusedMl: values.volumeInfusedMl,
@@ -108,7 +114,7 @@ export function writeSyringes(ctx: SyringeContext, order: ObservedOrder): void {
     // Flags on the last observation of a running PCA are still open on the board.
     const acknowledgedAt = last && order.end === null ? null : at + r.int(10, 40) * MINUTE;
     const earlier = readings.filter((reading) => at - Date.parse(reading.at) <= 4 * HOUR);
-    const context = { regimen, earlier, syringeVolumeMl: regimen.syringeMl };
+    const context = { regimen, earlier, syringeVolumeMl: regimen.syringeMl, patient: vitalsPatient(order.patient, new Date(at)) };
     for (const flag of observationFlags(values, previous ?? readings[0]!, basalMl, ctx.policy, context)) {
       const oncePerSyringe = flag.code === 'syringe.low';
       if (oncePerSyringe && release.lowFlagged) continue;

@@ -10,7 +10,7 @@ type Row = Record<string, string | number | null>;
 const TABLES = {
   drugs: ['genericName', 'doseUnit'],
   equianalgesic_factors: ['drugId', 'route', 'amount', 'unit', 'source', 'changedById', 'changedAt'],
-  wards: ['code', 'name', 'specialty', 'weightBasedDosing', 'pharmacyEmail', 'nurseInChargeEmail'],
+  wards: ['code', 'name', 'specialty', 'weightBasedDosing', 'population', 'pharmacyEmail', 'nurseInChargeEmail'],
   users: ['username', 'displayName', 'role', 'passwordHash', 'email'],
   user_wards: ['userId', 'wardId'],
   library_versions: ['wardId', 'number', 'status', 'note', 'authorId', 'approverId', 'createdAt', 'submittedAt', 'approvedAt'],
@@ -124,6 +124,7 @@ const TABLES = {
     'sedationLevel',
     'respiratoryRate',
     'spo2',
+    'oxygenLitresPerMinute',
     'attempts',
     'delivered',
     'volumeInfusedMl',

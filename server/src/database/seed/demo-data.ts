@@ -1,4 +1,4 @@
-import type { AllergySeverity, DoseUnit, Sex } from '@lockstep/shared';
+import type { AllergySeverity, DoseUnit, Population, Sex } from '@lockstep/shared';
 
 // Everything here is invented for the demo: the hospital (Kestrel Bay), wards, people and values.
 
@@ -7,11 +7,15 @@ const wardMail = (ward: string) => ({
   nurseInChargeEmail: `nurse-in-charge.${ward}@kestrelbay.example`,
 });
 
+const ADULT: Population = 'adult';
+const PAEDIATRIC: Population = 'paediatric';
+
+/** Wren is the children's ward: paediatric population, doses checked per kg. */
 export const DEMO_WARDS = [
-  { code: 'HAR', name: 'Harbour', specialty: 'General surgery', weightBasedDosing: false, ...wardMail('harbour') },
-  { code: 'CED', name: 'Cedar', specialty: 'Orthopaedics', weightBasedDosing: false, ...wardMail('cedar') },
-  { code: 'WRE', name: 'Wren', specialty: 'Paediatrics', weightBasedDosing: true, ...wardMail('wren') },
-  { code: 'SUM', name: 'Summit', specialty: 'High dependency', weightBasedDosing: false, ...wardMail('summit') },
+  { code: 'HAR', name: 'Harbour', specialty: 'General surgery', weightBasedDosing: false, population: ADULT, ...wardMail('harbour') },
+  { code: 'CED', name: 'Cedar', specialty: 'Orthopaedics', weightBasedDosing: false, population: ADULT, ...wardMail('cedar') },
+  { code: 'WRE', name: 'Wren', specialty: 'Paediatrics', weightBasedDosing: true, population: PAEDIATRIC, ...wardMail('wren') },
+  { code: 'SUM', name: 'Summit', specialty: 'High dependency', weightBasedDosing: false, population: ADULT, ...wardMail('summit') },
 ];
 
 export const DEMO_DRUGS: { genericName: string; doseUnit: DoseUnit }[] = [

@@ -8,9 +8,11 @@ import { LimitRule } from '../../library/entities/limit-rule.entity.js';
 import { Patient } from '../../patients/entities/patient.entity.js';
 import type { User } from '../../users/entities/user.entity.js';
 import { Ward } from '../../wards/entities/ward.entity.js';
+import { vitalsPatient } from '../../observations/vitals-patient.js';
 import { wardPolicy } from '../../wards/ward-policy.js';
 import { Random } from '../scale/random.js';
-import { type OrderContext, type ScalePatient, writePca, writeUnstartedOrder } from '../scale/scale-orders.js';
+import { childBandOf } from '../scale/observation-script.js';
+import { type OrderContext, type ScalePatient, vitalsFactsOf, writePca, writeUnstartedOrder } from '../scale/scale-orders.js';
 import type { Drugs, Staff, WrittenWard } from '../scale/scale-reference.js';
 import { ReleaseCodes } from '../scale/scale-syringes.js';
 import { ScaleWriter } from '../scale/scale-writer.js';
@@ -76,7 +78,12 @@ function writeDemoPca(ctx: OrderContext, { ward, shifts, patient }: DemoPatient,
     start,
     end,
     stopAt,
-    script: new DemoScript(random, pca.script, Math.floor((stopAt - start) / HOUR)),
+    script: new DemoScript(
+      random,
+      pca.script,
+      Math.floor((stopAt - start) / HOUR),
+      childBandOf(vitalsPatient(vitalsFactsOf(ward, patient), new Date(start))),
+    ),
     // Left to run low: pharmacy has been asked for the next syringe.
     changeSyringes: pca.start !== 'syringe-empties-this-shift',
     bolusAt: pca.bolusAfterHours === undefined ? null : start + pca.bolusAfterHours * HOUR + 12 * MINUTE,
@@ -134,6 +141,7 @@ async function demoPatients(manager: EntityManager): Promise<Map<string, DemoPat
       const written: WrittenWard = {
         id: ward.id,
         paediatric: ward.weightBasedDosing,
+        population: ward.population,
         rules: new Map(mine.map((rule) => [rule.drug.genericName, toLimitRuleResponse(rule)])),
         policy: wardPolicy(ward),
       };
@@ -148,7 +156,7 @@ async function demoPatients(manager: EntityManager): Promise<Map<string, DemoPat
       patient.mrn,
       {
         ...wards.get(patient.wardId)!,
-        patient: { ...patientFactorsOf(patient, today), id: patient.id, weightKg: patient.weightKg ?? 0 },
+        patient: { ...patientFactorsOf(patient, today), id: patient.id, weightKg: patient.weightKg ?? 0, dateOfBirth: patient.dateOfBirth },
       },
     ]),
   );

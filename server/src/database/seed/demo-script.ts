@@ -1,4 +1,4 @@
-import type { SedationLevel } from '@lockstep/shared';
+import type { PaediatricVitalBand, SedationLevel } from '@lockstep/shared';
 import type { HourContext, HourValues, ObservationScript } from '../scale/observation-script.js';
 import type { Random } from '../scale/random.js';
 
@@ -25,6 +25,8 @@ export class DemoScript implements ObservationScript {
     private readonly script: DemoCourseScript,
     /** How many observations the course will have, so the ending lands on the last ones. */
     private readonly observations: number,
+    /** A child's band (shared paediatric-vital-bands.ts): calm breathing within its normal range. */
+    private readonly child: PaediatricVitalBand | null = null,
   ) {}
 
   offsetMinutes(): number {
@@ -39,7 +41,7 @@ export class DemoScript implements ObservationScript {
       refused: r.chance(0.25) ? 1 : 0,
       painScore: pain[(hour - 1) % pain.length],
       sedationLevel: CALM_SEDATION[(hour - 1) % CALM_SEDATION.length],
-      respiratoryRate: r.int(13, 18),
+      respiratoryRate: this.child ? r.int(this.child.respiratoryRate.low, this.child.respiratoryRate.high) : r.int(13, 18),
       spo2: r.int(94, 98),
     };
     const fromEnd = last ? 0 : this.observations - hour;

@@ -8,5 +8,6 @@ export function toWardResponse(ward: Ward): WardResponse {
     name: ward.name,
     specialty: ward.specialty,
     weightBasedDosing: ward.weightBasedDosing,
+    population: ward.population,
   };
 }

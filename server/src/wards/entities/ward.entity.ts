@@ -1,4 +1,4 @@
-import { DEFAULT_WARD_POLICY } from '@lockstep/shared';
+import { DEFAULT_WARD_POLICY, type Population } from '@lockstep/shared';
 import { Column, Entity, PrimaryGeneratedColumn } from 'typeorm';
 
 @Entity('wards')
@@ -18,6 +18,10 @@ export class Ward {
   /** Paediatric wards check doses per kg of body weight. */
   @Column({ type: 'boolean', default: false })
   weightBasedDosing: boolean;
+
+  /** Who the ward cares for: a paediatric ward's observations use the children's bands (shared breathing-flags.ts). */
+  @Column({ type: 'varchar', length: 12, default: 'adult' })
+  population: Population;
 
   /** Where new orders awaiting verification and reconciliation alerts are e-mailed. */
   @Column({ type: 'varchar', length: 200, default: '' })

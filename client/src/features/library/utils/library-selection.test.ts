@@ -8,6 +8,7 @@ const ward = (id: number, name: string): Ward => ({
   name,
   specialty: 'x',
   weightBasedDosing: false,
+  population: 'adult',
 });
 const wards = [ward(1, 'Harbour'), ward(2, 'Cedar')];
 
