@@ -66,6 +66,10 @@ const router = createBrowserRouter([
             ],
           },
           {
+            element: <RequireArea area="policySignOff" />,
+            children: [{ path: paths.wardPolicySignOff.path, lazy: () => import('./routes/ward-policy-sign-off') }],
+          },
+          {
             element: <RequireArea area="admin" />,
             children: [
               { path: paths.adminUsers.path, lazy: () => import('./routes/admin-users') },

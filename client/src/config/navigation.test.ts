@@ -5,10 +5,10 @@ import { isSafeRedirect, paths } from './paths';
 
 const NAV_LABELS: Partial<Record<Role, string[]>> = {
   admin: ['Users', 'Ward policies', 'Mailbox', 'Audit'],
-  pharmacist: ['Patients', 'Verification', 'Library', 'Equianalgesic factors', 'Audit'],
+  pharmacist: ['Patients', 'Verification', 'Library', 'Equianalgesic factors', 'Ward policy sign-off', 'Audit'],
   prescriber: ['Patients', 'My orders'],
   nurse: ['Patients', 'PCA orders', 'Observations due', 'Handover'],
-  charge_nurse: ['Patients', 'PCA orders', 'Observations due', 'Handover'],
+  charge_nurse: ['Patients', 'PCA orders', 'Observations due', 'Handover', 'Ward policy sign-off'],
 };
 
 describe('role homes and navigation', () => {
@@ -154,6 +154,20 @@ describe('PCA and ward policy routes', () => {
     expect(landingPathFor('admin', '/pca/14')).toBe('/admin/users');
     expect(landingPathFor('admin', '/admin/ward-policies?ward=2')).toBe('/admin/ward-policies?ward=2');
     expect(landingPathFor('charge_nurse', '/admin/ward-policies')).toBe(homePathFor('charge_nurse'));
+  });
+});
+
+describe('ward policy sign-off route', () => {
+  it('builds its href', () => {
+    expect(paths.wardPolicySignOff.getHref()).toBe('/ward-policies/sign-off');
+  });
+
+  it('is open to charge nurses and pharmacists, who sign changes off, and to nobody else (the admin proposes)', () => {
+    expect(landingPathFor('charge_nurse', '/ward-policies/sign-off')).toBe('/ward-policies/sign-off');
+    expect(landingPathFor('pharmacist', '/ward-policies/sign-off')).toBe('/ward-policies/sign-off');
+    expect(landingPathFor('admin', '/ward-policies/sign-off')).toBe(homePathFor('admin'));
+    expect(landingPathFor('nurse', '/ward-policies/sign-off')).toBe(homePathFor('nurse'));
+    expect(landingPathFor('prescriber', '/ward-policies/sign-off')).toBe(homePathFor('prescriber'));
   });
 });
 

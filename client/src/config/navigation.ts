@@ -1,8 +1,16 @@
-import { AUDIT_ROLES, BEDSIDE_ROLES, CLINICAL_ROLES, PHARMACY_ROLES, PRESCRIBING_ROLES, type Role } from '@lockstep/shared';
+import {
+  AUDIT_ROLES,
+  BEDSIDE_ROLES,
+  CLINICAL_ROLES,
+  PHARMACY_ROLES,
+  PRESCRIBING_ROLES,
+  WARD_POLICY_APPROVER_ROLES,
+  type Role,
+} from '@lockstep/shared';
 import { isSafeRedirect, paths } from './paths';
 
 /** Groups of screens; each route is guarded by one of these. */
-export type Area = 'clinical' | 'prescribing' | 'bedside' | 'pharmacy' | 'admin' | 'audit';
+export type Area = 'clinical' | 'prescribing' | 'bedside' | 'pharmacy' | 'policySignOff' | 'admin' | 'audit';
 
 // The same role groups the server's @Roles use (shared), so a screen shows exactly what the API allows.
 export const AREA_ROLES: Record<Area, readonly Role[]> = {
@@ -10,6 +18,8 @@ export const AREA_ROLES: Record<Area, readonly Role[]> = {
   prescribing: PRESCRIBING_ROLES,
   bedside: BEDSIDE_ROLES,
   pharmacy: PHARMACY_ROLES,
+  // Charge nurses and pharmacists give a ward policy change its clinical second signature.
+  policySignOff: WARD_POLICY_APPROVER_ROLES,
   admin: ['admin'],
   // The server narrows what a pharmacist may read to orders and library versions.
   audit: AUDIT_ROLES,
@@ -37,6 +47,7 @@ const NAV_ITEMS: readonly NavItem[] = [
   { label: 'Library', href: paths.library.getHref(), icon: 'library', area: 'pharmacy' },
   // Listed for pharmacists, who edit it; every clinical role may open it (the usage page links to it).
   { label: 'Equianalgesic factors', href: paths.equianalgesicFactors.getHref(), icon: 'equianalgesic', area: 'pharmacy' },
+  { label: 'Ward policy sign-off', href: paths.wardPolicySignOff.getHref(), icon: 'policy', area: 'policySignOff' },
   { label: 'Users', href: paths.adminUsers.getHref(), icon: 'users', area: 'admin' },
   { label: 'Ward policies', href: paths.adminWardPolicies.getHref(), icon: 'policy', area: 'admin' },
   { label: 'Mailbox', href: paths.adminMailbox.getHref(), icon: 'mailbox', area: 'admin' },
@@ -78,6 +89,7 @@ const ROUTE_AREAS: ReadonlyArray<{ prefix: string; area: Area }> = [
   { prefix: paths.bedside.path, area: 'bedside' },
   { prefix: paths.handover.path, area: 'clinical' },
   { prefix: '/pca', area: 'clinical' },
+  { prefix: paths.wardPolicySignOff.path, area: 'policySignOff' },
   { prefix: paths.adminAudit.path, area: 'audit' },
   { prefix: '/admin', area: 'admin' },
 ];

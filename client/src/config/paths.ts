@@ -136,6 +136,11 @@ export const paths = {
       return text ? `/admin/audit?${text}` : '/admin/audit';
     },
   },
+  wardPolicySignOff: {
+    path: '/ward-policies/sign-off',
+    /** Ward policy changes waiting for a charge nurse's or pharmacist's signature. */
+    getHref: () => '/ward-policies/sign-off',
+  },
   adminWardPolicies: {
     path: '/admin/ward-policies',
     /** `ward` picks the ward, so a reload keeps it. */

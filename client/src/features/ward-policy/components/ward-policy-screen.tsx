@@ -1,10 +1,18 @@
 import { Alert, Select, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { IconAdjustments } from '@tabler/icons-react';
-import { LOCAL_POLICY_CAUTION, type Ward } from '@lockstep/shared';
+import { LOCAL_POLICY_CAUTION, type Ward, type WardPolicySettings } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { useWardPolicy } from '@/api/wards/get-ward-policy';
+import { useWardPolicyChanges } from '@/api/ward-policy-changes/get-ward-policy-changes';
+import { PendingPolicyChange } from './pending-policy-change';
 import { WardPolicyChanges } from './ward-policy-changes';
 import { WardPolicyForm } from './ward-policy-form';
+import { POLICY_NUMBER_FIELDS } from '../utils/policy-form';
+
+/** The ward's clinical settings (not its e-mail addresses, which save without resetting the form). */
+function settingsKey(policy: WardPolicySettings): string {
+  return JSON.stringify(POLICY_NUMBER_FIELDS.map((field) => policy[field.key]));
+}
 
 export interface WardPolicyScreenProps {
   wards: readonly Ward[];
@@ -18,18 +26,32 @@ export interface WardPolicyScreenProps {
 export function WardPolicyScreen({ wards, wardsLoading, wardId, onWardChange }: WardPolicyScreenProps) {
   const ward = wards.find((candidate) => candidate.id === wardId) ?? wards[0] ?? null;
   const policy = useWardPolicy(ward?.id ?? null);
+  const pending = useWardPolicyChanges({ status: 'pending', wardId: ward?.id }, { enabled: ward !== null });
 
   let body;
   if (wardsLoading) body = <Skeleton height={480} />;
   else if (!ward) body = <Text>No wards yet.</Text>;
   else if (policy.isError)
     body = <QueryErrorAlert title="The policy could not be loaded" error={policy.error} onRetry={() => void policy.refetch()} />;
-  else if (!policy.data) body = <Skeleton height={480} aria-label="Loading the policy" />;
-  // Keyed by ward so that moving to another ward starts from that ward's saved values.
+  else if (pending.isError)
+    body = (
+      <QueryErrorAlert title="Changes awaiting sign-off could not be loaded" error={pending.error} onRetry={() => void pending.refetch()} />
+    );
+  else if (!policy.data || !pending.data) body = <Skeleton height={480} aria-label="Loading the policy" />;
   else {
+    const waiting = pending.data.find((change) => change.wardId === ward.id) ?? null;
     body = (
       <>
-        <WardPolicyForm key={ward.id} wardId={ward.id} wardName={ward.name} policy={policy.data} />
+        {waiting ? <PendingPolicyChange change={waiting} /> : null}
+        {/* Keyed by ward and its saved settings, so that moving to another ward, or a change signed off, starts
+            the form from the values the ward now works to. */}
+        <WardPolicyForm
+          key={`${ward.id}:${settingsKey(policy.data)}`}
+          wardId={ward.id}
+          wardName={ward.name}
+          policy={policy.data}
+          pending={waiting}
+        />
         <WardPolicyChanges wardId={ward.id} />
       </>
     );
@@ -40,7 +62,8 @@ export function WardPolicyScreen({ wards, wardsLoading, wardId, onWardChange }: 
       <Title order={1}>Ward policies</Title>
       <Alert color="lagoon" variant="light" icon={<IconAdjustments aria-hidden />} title="Local settings">
         These values are this ward&apos;s own policy: observation intervals, the thresholds that raise flags, when a syringe counts as low
-        and the tolerance for reconciliation. {LOCAL_POLICY_CAUTION} Each value shows the default Lockstep shipped with.
+        and the tolerance for reconciliation. {LOCAL_POLICY_CAUTION} Each value shows the default Lockstep shipped with. A change is
+        proposed with your signature and applies once a charge nurse or pharmacist signs it off; the e-mail addresses save at once.
       </Alert>
       <Select
         label="Ward"
