@@ -27,7 +27,7 @@ export function DeclineChangeModal({ change, onClose }: DeclineChangeModalProps)
 
   return (
     <FormModal
-      title={`Decline ${change.wardName}'s policy change`}
+      title={`Decline ${change.wardName}’s policy change`}
       onClose={onClose}
       refusal={refusal}
       refusalTitle="Not declined"

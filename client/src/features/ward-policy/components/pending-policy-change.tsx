@@ -13,8 +13,8 @@ export function PendingPolicyChange({ change }: { change: WardPolicyChange }) {
       variant="light"
       icon={<IconHourglass aria-hidden />}
       title="Awaiting sign-off by a charge nurse or pharmacist"
-      component="section"
-      aria-label="Change awaiting sign-off"
+      // A standing notice, not an interruption: a region named by its title.
+      role="region"
     >
       <Stack gap="xs">
         <Text size="sm">

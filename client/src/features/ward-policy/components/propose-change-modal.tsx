@@ -70,7 +70,7 @@ export function ProposeChangeModal({ wardId, wardName, settings, saved, onSettin
 
   return (
     <FormModal
-      title={`Propose a change to ${wardName}'s policy`}
+      title={`Propose a change to ${wardName}’s policy`}
       size="xl"
       onClose={onClose}
       onSubmit={submit}

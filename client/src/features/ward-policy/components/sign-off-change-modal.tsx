@@ -22,7 +22,7 @@ export function SignOffChangeModal({ change, onClose }: SignOffChangeModalProps)
 
   return (
     <SignatureModal
-      title={`Sign off ${change.wardName}'s policy change`}
+      title={`Sign off ${change.wardName}’s policy change`}
       size="xl"
       confirmLabel="Sign off"
       pending={signOff.isPending}
