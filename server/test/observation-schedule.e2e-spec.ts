@@ -67,4 +67,21 @@ describe('monitoring schedule', () => {
     // A calm reading after the hour: the ward's first-24-hours interval (60 min by default).
     expect(minutesFrom(Date.parse(calmAt), (await detail(order.id)).nextObservation.dueAt)).toBe(60);
   });
+
+  it('counts an urgent flag from the reading it came from, so a reading entered late is due sooner, not later', async () => {
+    const order = await start();
+    const db = t.app.get(DataSource);
+    const back = (column: string) => `${column} = strftime('%Y-%m-%d %H:%M:%f', ${column}, '-2 hours')`;
+    await db.query(`UPDATE bedside_checks SET ${back('firstAt')}, ${back('secondAt')} WHERE orderId = ?`, [order.id]);
+    await db.query(`UPDATE pca_orders SET ${back('startedAt')} WHERE id = ?`, [order.id]);
+
+    // Sedation 3 observed 20 minutes ago and entered now: the next reading was due 15 minutes after it.
+    const observedAt = Date.now() - 20 * 60_000;
+    await observe(order.id, { ...CALM, sedationLevel: '3', at: new Date(observedAt).toISOString() }).expect(201);
+    const { nextObservation } = await detail(order.id);
+    expect(minutesFrom(observedAt, nextObservation.dueAt)).toBe(15);
+    expect(nextObservation.overdueMinutes).toBeGreaterThanOrEqual(4);
+    const wardId = (await detail(order.id)).wardId;
+    expect((await boardRow(wardId, order.id)).nextObservation.dueAt).toBe(nextObservation.dueAt);
+  });
 });

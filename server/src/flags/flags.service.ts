@@ -8,7 +8,15 @@ import { Flag } from './entities/flag.entity.js';
 import { WardEventsService } from '../ward-events/ward-events.service.js';
 import { recordAudit } from '../audit/record-audit.js';
 
-export type NewFlag = { orderId: number; releaseId?: number | null; severity: FlagSeverity; code: string; message: string; action: string };
+export type NewFlag = {
+  orderId: number;
+  releaseId?: number | null;
+  observationId?: number | null;
+  severity: FlagSeverity;
+  code: string;
+  message: string;
+  action: string;
+};
 
 @Injectable()
 export class FlagsService {
@@ -22,6 +30,7 @@ export class FlagsService {
     return manager.save(
       manager.create(Flag, {
         releaseId: null,
+        observationId: null,
         ...flag,
         raisedAt: new Date(),
         acknowledgedAt: null,

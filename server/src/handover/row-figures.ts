@@ -95,7 +95,11 @@ function boardEvents(mine: OrderInputs): MonitoringEvent[] {
     ),
     ...latest(
       'urgent_flag',
-      mine.flags.filter((flag) => flag.severity === 'urgent').map((flag) => flag.raisedAt),
+      // A flag the latest observation raised counts from the reading's time, as monitoringEvents does
+      // (an earlier reading's flag is closed by the later reading either way).
+      mine.flags
+        .filter((flag) => flag.severity === 'urgent')
+        .map((flag) => mine.latest.find((o) => o.id === flag.observationId)?.at ?? flag.raisedAt),
     ),
   ];
 }

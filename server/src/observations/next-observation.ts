@@ -26,7 +26,8 @@ function orderEvents(order: Pick<PcaOrder, 'startedAt' | 'version' | 'loadingDos
  * The latest of each kind of tightening event recorded against these orders, in one query: the
  * latest matched two-nurse check (a syringe change, or the start itself), the latest clinician
  * bolus, the latest naloxone given and the latest urgent flag, open or acknowledged (an acknowledgement does not relax the
- * schedule; a reading without urgent flags does). The latest of a kind is enough: its close period
+ * schedule; a reading without urgent flags does). A flag an observation raised counts from the reading's time, not
+ * from when it was saved, so a late entry is due sooner, never later. The latest of a kind is enough: its close period
  * ends after every earlier one's.
  */
 export async function monitoringEvents(manager: EntityManager, orderIds: number[]): Promise<Map<number, MonitoringEvent[]>> {
@@ -36,7 +37,8 @@ export async function monitoringEvents(manager: EntityManager, orderIds: number[
   const rows: { orderId: number; kind: MonitoringEventKind; at: string | null }[] = await manager.query(
     `SELECT orderId, 'syringe_change' AS kind, max(secondAt) AS at FROM bedside_checks WHERE status = 'matched' AND orderId IN (${marks}) GROUP BY orderId
      UNION ALL SELECT orderId, 'clinician_bolus' AS kind, max(at) AS at FROM clinician_boluses WHERE orderId IN (${marks}) GROUP BY orderId
-     UNION ALL SELECT orderId, 'urgent_flag' AS kind, max(raisedAt) AS at FROM flags WHERE severity = 'urgent' AND orderId IN (${marks}) GROUP BY orderId
+     UNION ALL SELECT f.orderId, 'urgent_flag' AS kind, max(coalesce(o.at, f.raisedAt)) AS at FROM flags f LEFT JOIN observations o ON o.id = f.observationId
+       WHERE f.severity = 'urgent' AND f.orderId IN (${marks}) GROUP BY f.orderId
      UNION ALL SELECT orderId, 'naloxone' AS kind, max(naloxoneGivenAt) AS at FROM pca_pauses WHERE naloxoneGivenAt IS NOT NULL AND orderId IN (${marks}) GROUP BY orderId`,
     [...orderIds, ...orderIds, ...orderIds, ...orderIds],
   );

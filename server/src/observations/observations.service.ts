@@ -74,7 +74,12 @@ export class ObservationsService {
       for (const draft of drafts) {
         const oncePerSyringe = draft.code === 'syringe.low';
         if (oncePerSyringe && (await manager.existsBy(Flag, { orderId, releaseId: release.id, code: draft.code }))) continue;
-        const flag = await this.flags.raise(manager, { ...draft, orderId, releaseId: oncePerSyringe ? release.id : null });
+        const flag = await this.flags.raise(manager, {
+          ...draft,
+          orderId,
+          releaseId: oncePerSyringe ? release.id : null,
+          observationId: saved.id,
+        });
         flags.push({ ...draft, id: flag.id });
       }
       await recordAudit(manager, nurse, {

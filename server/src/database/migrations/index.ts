@@ -15,6 +15,7 @@ import { EquianalgesicFactors1764780000000 } from './1764780000000-equianalgesic
 import { WardPolicySignOff1764810000000 } from './1764810000000-ward-policy-sign-off.js';
 import { NaloxoneAndPause1764800000000 } from './1764800000000-naloxone-and-pause.js';
 import { WardPopulation1764840000000 } from './1764840000000-ward-population.js';
+import { FlagObservation1764850000000 } from './1764850000000-flag-observation.js';
 
 /** In order. Listed explicitly (not globbed) so tests and the built server run the same set. */
 export const MIGRATIONS = [
@@ -35,4 +36,5 @@ export const MIGRATIONS = [
   NaloxoneAndPause1764800000000,
   WardPolicySignOff1764810000000,
   WardPopulation1764840000000,
+  FlagObservation1764850000000,
 ];

@@ -21,6 +21,13 @@ export class Flag {
   @Column({ type: 'integer', nullable: true })
   releaseId: number | null;
 
+  /**
+   * The observation that raised it, where one did: the monitoring schedule counts an urgent flag from the
+   * reading's time, so a reading entered late is not given a fresh interval from the moment it was saved.
+   */
+  @Column({ type: 'integer', nullable: true })
+  observationId: number | null;
+
   @Column({ type: 'varchar', length: 8 })
   severity: FlagSeverity;
 
