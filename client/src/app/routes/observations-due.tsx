@@ -1,7 +1,9 @@
 import { ObservationsDueScreen } from '@/features/bedside/components/observations-due-screen';
+import { useWards } from '@/api/wards/get-wards';
 import { usePageTitle } from '@/hooks/use-page-title';
 
 export function Component() {
   usePageTitle('Observations due');
-  return <ObservationsDueScreen />;
+  const wards = useWards();
+  return <ObservationsDueScreen wards={wards.data ?? []} wardsLoading={wards.isPending} />;
 }

@@ -1,17 +1,19 @@
 import { useMemo } from 'react';
-import { Anchor, Group, Select, Stack, Text, Title } from '@mantine/core';
+import { Alert, Anchor, Group, Stack, Text, Title } from '@mantine/core';
+import { IconInfoCircle } from '@tabler/icons-react';
 import { Link, useSearchParams } from 'react-router-dom';
 import type { Ward } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
-import { paths } from '@/config/paths';
 import { useNow } from '@/hooks/use-now';
+import { useCurrentUser } from '@/lib/auth/use-session';
 import { useOrders } from '@/api/orders/get-orders';
+import { useWardChoice } from '../hooks/use-ward-choice';
 import { BEDSIDE_STATUSES } from '../utils/bedside-statuses';
 import { byWardAndBed } from '../utils/order-sort';
+import { ALL_WARDS, bedsideOrdersSummary, onChosenWards, wardParamValue, wardsPhrase } from '../utils/ward-choice';
 import { BedsideCaution } from './bedside-caution';
 import { BedsideOrdersTable } from './bedside-orders-table';
-
-const ALL_WARDS = 'all';
+import { WardChoiceFilter } from './ward-choice-filter';
 
 export interface BedsideOrdersScreenProps {
   wards: readonly Ward[];
@@ -23,52 +25,59 @@ function positiveId(value: string | null): number | undefined {
   return value && Number.isInteger(id) && id > 0 ? id : undefined;
 }
 
-/** The nurse's PCA orders: waiting for a bedside check, or running, on the chosen ward. */
+/** The nurse's PCA orders: waiting for a bedside check, or running, on the chosen wards (her own by default). */
 export function BedsideOrdersScreen({ wards, wardsLoading }: BedsideOrdersScreenProps) {
-  // Ward and patient live in the address, so "back" from a bedside task returns to the same list.
-  const [searchParams, setSearchParams] = useSearchParams();
-  const wardId = positiveId(searchParams.get('ward'));
+  const user = useCurrentUser();
+  // Wards and patient live in the address, so "back" from a bedside task returns to the same list.
+  const [searchParams] = useSearchParams();
   const patientId = positiveId(searchParams.get('patient'));
+  // A link to one patient's orders shows them wherever the patient lies.
+  const { wards: choice, source, ownWardIds, choose } = useWardChoice(wards, { defaultAll: patientId !== undefined });
+  // One ward is asked of the server; several are read from every ward's list.
+  const wardId = choice !== ALL_WARDS && choice.length === 1 ? choice[0] : undefined;
 
   // One request: each order comes with its syringe state and next observation. Asked again each time the list is shown.
   const ordersQuery = useOrders({ wardId, patientId, status: BEDSIDE_STATUSES }, { staleTime: 0 });
-  const orders = useMemo(() => [...(ordersQuery.data ?? [])].sort(byWardAndBed), [ordersQuery.data]);
+  const orders = useMemo(() => onChosenWards(ordersQuery.data ?? [], choice).sort(byWardAndBed), [ordersQuery.data, choice]);
   const now = useNow(30_000);
-
-  const wardOptions = [{ value: ALL_WARDS, label: 'All wards' }, ...wards.map((ward) => ({ value: String(ward.id), label: ward.name }))];
-  const chooseWard = (value: string | null) => setSearchParams(value && value !== ALL_WARDS ? { ward: value } : {}, { replace: true });
+  // While the wards load, the person's own wards still have names.
+  const phrase = wardsPhrase(choice, wards.length > 0 ? wards : user.wards);
 
   return (
     <Stack gap="md">
       <Title order={1}>PCA orders</Title>
-      <Group gap="md" align="flex-end" wrap="wrap">
-        <Select
-          label="Ward"
-          data={wardOptions}
-          value={wardId ? String(wardId) : ALL_WARDS}
-          onChange={chooseWard}
-          allowDeselect={false}
-          disabled={wardsLoading}
-          w={220}
-        />
-        {patientId ? (
-          <Text size="sm" pb={8}>
-            Showing one patient’s PCA orders.{' '}
-            <Anchor component={Link} to={paths.bedside.getHref({ wardId })}>
-              Show the whole ward
-            </Anchor>
-          </Text>
-        ) : null}
-      </Group>
+      <WardChoiceFilter wards={wards} wardsLoading={wardsLoading} choice={choice} ownWardIds={ownWardIds} onChange={choose} />
+      {source === 'no-own-wards' ? (
+        <Alert variant="light" color="blue" icon={<IconInfoCircle aria-hidden />} title="Every ward is shown">
+          You are not assigned to a ward, so the list shows every ward’s PCA orders. An administrator can assign your wards; meanwhile
+          choose the wards you are looking after above.
+        </Alert>
+      ) : null}
+      {patientId ? (
+        <Group gap="xs">
+          <Text size="sm">Showing one patient’s PCA orders.</Text>
+          <Anchor component={Link} to={{ search: `?ward=${wardParamValue(choice)}` }} size="sm">
+            Show every patient on {choice === ALL_WARDS ? 'every ward' : phrase}
+          </Anchor>
+        </Group>
+      ) : null}
       {ordersQuery.isError ? (
         <QueryErrorAlert title="PCA orders could not be loaded" error={ordersQuery.error} onRetry={() => void ordersQuery.refetch()} />
       ) : (
-        <BedsideOrdersTable
-          orders={orders}
-          now={now}
-          isLoading={ordersQuery.isPending}
-          emptyMessage="No PCA order here is waiting for a bedside check or running."
-        />
+        <>
+          {patientId ? null : (
+            <Text fw={600} aria-live="polite" data-testid="bedside-orders-summary">
+              {/* Another ward's answer may stand in while the chosen wards load: no count until they have. */}
+              {ordersQuery.isPending || ordersQuery.isPlaceholderData ? phrase : bedsideOrdersSummary(phrase, orders.length)}
+            </Text>
+          )}
+          <BedsideOrdersTable
+            orders={orders}
+            now={now}
+            isLoading={ordersQuery.isPending}
+            emptyMessage="No PCA order here is waiting for a bedside check or running."
+          />
+        </>
       )}
       <BedsideCaution />
     </Stack>
