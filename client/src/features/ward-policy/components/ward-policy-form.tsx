@@ -59,6 +59,8 @@ export function WardPolicyForm({ wardId, wardName, policy, pending }: WardPolicy
   const propose = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
     setFormAlert([]);
+    // Enter in an e-mail field submits too: there is nothing to propose then.
+    if (!settingsChanged || blocked) return;
     if (valid(POLICY_NUMBER_FIELDS.map((field) => field.key))) setProposing(true);
   };
 
