@@ -16,6 +16,13 @@ describe('naloxone, pausing and resuming a PCA', () => {
     activeOrder(t.http, { prescriber: token.amara, pharmacist: token.lin, nurse: token.kai }, await t.addPatient(), ORDER, SETTINGS);
   const post = (id: number, what: string, body: object, who: keyof typeof token = 'kai') =>
     request(t.http).post(`/api/orders/${id}/${what}`).set(as(who)).send(body);
+  const boardRow = async (wardId: number, orderId: number) =>
+    (
+      (await request(t.http).get(`/api/wards/${wardId}/handover`).set(as('mei')).expect(200)).body.rows as {
+        orderId: number;
+        paused: boolean;
+      }[]
+    ).find((row) => row.orderId === orderId);
   const resume = { reason: 'Rousable, RR 14: prescriber agreed', settings: SETTINGS, witness: { ...ROSA, settings: SETTINGS } };
 
   beforeAll(async () => {
@@ -62,6 +69,9 @@ describe('naloxone, pausing and resuming a PCA', () => {
     const detail = await request(t.http).get(`/api/orders/${order.id}`).set(as('kai')).expect(200);
     const due = Date.parse(detail.body.nextObservation.dueAt) - Date.parse(observed.body.at);
     expect(due).toBe(15 * 60_000);
+    // The board reads the naloxone time too: the same due time, and the row says Paused.
+    const row = await boardRow(detail.body.wardId, order.id);
+    expect(row).toMatchObject({ paused: true, nextObservation: { dueAt: detail.body.nextObservation.dueAt } });
     // The schedule reads the naloxone time (its 2-hour close period outlasts the start's first hour).
     const events = (await monitoringEvents(t.app.get(DataSource).manager, [order.id])).get(order.id) ?? [];
     expect(events.map((event) => event.kind)).toContain('naloxone');
@@ -89,6 +99,12 @@ describe('naloxone, pausing and resuming a PCA', () => {
         (entry) => entry.id === order.id,
       );
     expect((await listed())?.paused).toBe(true);
+    // The order detail and the ward's board say so too.
+    const shown = async () => {
+      const detail = await request(t.http).get(`/api/orders/${order.id}`).set(as('amara')).expect(200);
+      return { detail: detail.body.paused, board: (await boardRow(detail.body.wardId, order.id))?.paused };
+    };
+    expect(await shown()).toEqual({ detail: true, board: true });
     await post(order.id, 'pause', { reason: 'Going to theatre' }).expect(409);
     const bolus = await post(order.id, 'boluses', { amount: 1, reason: 'Breakthrough pain on coughing', witness: ROSA }).expect(409);
     expect(bolus.body.message).toMatch(/paused/);
@@ -109,6 +125,7 @@ describe('naloxone, pausing and resuming a PCA', () => {
 
     const resumed = await post(order.id, 'resume', resume).expect(200);
     expect((await listed())?.paused).toBe(false);
+    expect(await shown()).toEqual({ detail: false, board: false });
     expect(resumed.body).toMatchObject({ paused: false, differences: [] });
     expect(resumed.body.pauses[0]).toMatchObject({ resumedByName: 'Kai Mendes', resumeWitnessName: 'Rosa Adeyemi' });
     await post(order.id, 'resume', resume).expect(409);

@@ -3,6 +3,7 @@ import {
   compareHandoverRows,
   type HandoverRow,
   patientDisplayName,
+  pcaPaused,
   sortAllergies,
   type PendingTask,
   riskTier,
@@ -63,6 +64,7 @@ export function boardRows(
       minutesSinceStart: order.startedAt ? Math.floor((now.getTime() - order.startedAt.getTime()) / 60_000) : null,
       ...figures,
       flags,
+      paused: pcaPaused(mine.pauses ?? []),
       pendingTasks: pendingTasks(order, mine, now),
       signoffs: mine.signoffs.map(toSignoffResponse),
     };

@@ -50,6 +50,8 @@ const ORDER_COLUMNS = {
     allergies: { id: true, substance: true, reaction: true, severity: true },
   },
   drug: { id: true, genericName: true },
+  // Pauses are few: whether the PCA is paused now, and naloxone given (the after-naloxone watch).
+  pauses: { id: true, orderId: true, resumedAt: true, naloxoneGivenAt: true },
 } as const;
 const READING_COLUMNS = ['orderId', 'releaseId', 'at', 'attempts', 'delivered', 'volumeInfusedMl'] as const;
 type RawReading = Omit<BoardReading, 'at'> & { at: string | Date };
@@ -91,10 +93,12 @@ export class HandoverBoardService {
     const orders = await manager.find(PcaOrder, {
       select: ORDER_COLUMNS,
       where: { status: In([...ON_BOARD]), patient: { wardId } },
-      relations: { patient: { allergies: true }, drug: true },
+      relations: { patient: { allergies: true }, drug: true, pauses: true },
     });
     const ids = orders.map((order) => order.id);
     const inputs = ids.length === 0 ? emptyInputs() : await this.inputs(ids, wardId, shift, now);
+    // Read with the orders (in the same query), so the board stays within its query budget.
+    inputs.pauses = orders.flatMap((order) => order.pauses);
 
     const rows = boardRows(orders, inputs, wardPolicy(ward), shift, now);
     return { wardId, wardName: ward.name, generatedAt: now.toISOString(), shift, rows };

@@ -8,6 +8,7 @@ import {
 } from '@lockstep/shared';
 import type { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
 import type { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
+import type { PcaPause } from '../bedside/entities/pca-pause.entity.js';
 import type { ReleaseReconciliation } from '../bedside/entities/release-reconciliation.entity.js';
 import type { Flag } from '../flags/entities/flag.entity.js';
 import type { Observation } from '../observations/entities/observation.entity.js';
@@ -41,6 +42,8 @@ export type BoardInputs = {
   boluses: ClinicianBolus[];
   discrepancies: (ReleaseReconciliation & { release: SyringeRelease })[];
   signoffs: HandoverSignoff[];
+  /** The orders' pauses: whether each PCA is paused, and naloxone given for the after-naloxone watch (none when not fetched). */
+  pauses?: Pick<PcaPause, 'orderId' | 'resumedAt' | 'naloxoneGivenAt'>[];
   /** The latest tightening events of each order, for the monitoring schedule (none when not fetched). */
   events?: OrderMonitoringEvent[];
 };
@@ -50,7 +53,18 @@ export type OrderInputs = BoardInputs;
 
 /** Every list empty: a ward with no orders, or an order with nothing fetched for it. */
 export function emptyInputs(): BoardInputs {
-  return { observations: [], latest: [], flags: [], releases: [], starts: [], boluses: [], discrepancies: [], signoffs: [], events: [] };
+  return {
+    observations: [],
+    latest: [],
+    flags: [],
+    releases: [],
+    starts: [],
+    boluses: [],
+    discrepancies: [],
+    signoffs: [],
+    pauses: [],
+    events: [],
+  };
 }
 
 /**
@@ -76,8 +90,8 @@ export function inputsByOrder(inputs: BoardInputs): Map<number, OrderInputs> {
 
 /**
  * The latest tightening events the board already fetched, as the order detail reads them with
- * monitoringEvents: the latest matched check, clinician bolus (last 24 h) and urgent flag (open, or
- * raised in the readings' window).
+ * monitoringEvents: the latest matched check, clinician bolus (last 24 h), urgent flag (open, or
+ * raised in the readings' window) and naloxone given.
  */
 function boardEvents(mine: OrderInputs): MonitoringEvent[] {
   const latest = (kind: MonitoringEvent['kind'], times: (Date | null)[]): MonitoringEvent[] => {
@@ -100,6 +114,10 @@ function boardEvents(mine: OrderInputs): MonitoringEvent[] {
       mine.flags
         .filter((flag) => flag.severity === 'urgent')
         .map((flag) => mine.latest.find((o) => o.id === flag.observationId)?.at ?? flag.raisedAt),
+    ),
+    ...latest(
+      'naloxone',
+      (mine.pauses ?? []).map((pause) => pause.naloxoneGivenAt),
     ),
   ];
 }

@@ -239,7 +239,9 @@ export class OrdersService {
         ? await manager.findOne(Observation, { select: { id: true, at: true }, where: { orderId: id }, order: { at: 'DESC', id: 'DESC' } })
         : null;
     const schedule = order.status === 'active' ? await monitoringEvents(manager, [id]) : new Map();
-    return toOrderDetail(order, events, releases, flags, nextObservationFor(order, last?.at ?? null, schedule.get(id) ?? [], new Date()));
+    const paused = order.status === 'active' && (await manager.existsBy(PcaPause, { orderId: id, resumedAt: IsNull() }));
+    const next = nextObservationFor(order, last?.at ?? null, schedule.get(id) ?? [], new Date());
+    return toOrderDetail(order, events, releases, flags, next, paused);
   }
 
   async load(manager: EntityManager, id: number): Promise<PcaOrder> {

@@ -75,6 +75,7 @@ const rowSchema: z.ZodType<HandoverRow> = answer(
     total24hDose: z.number(),
     syringe: z.object({ remainingMl: z.number().nullable(), projectedEmptyAt: z.string().nullable(), emptiesThisShift: z.boolean() }),
     flags: z.object({ urgent: z.number(), review: z.number(), info: z.number(), open: z.array(flagSchema) }),
+    paused: z.boolean(),
     pendingTasks: z.array(pendingTaskSchema),
     signoffs: z.array(signoffSchema),
     riskTier: z.union([z.literal(0), z.literal(1), z.literal(2), z.literal(3)]),

@@ -59,6 +59,8 @@ export type HandoverRow = {
   total24hDose: number;
   syringe: { remainingMl: number | null; projectedEmptyAt: string | null; emptiesThisShift: boolean };
   flags: { urgent: number; review: number; info: number; open: FlagResponse[] };
+  /** A running PCA paused by a nurse or by naloxone given, until a two-nurse resume. */
+  paused: boolean;
   pendingTasks: PendingTask[];
   signoffs: HandoverSignoffResponse[];
   /** 0 urgent flags, 1 overdue observation, 2 syringe empties within the shift, 3 the rest. */

@@ -154,6 +154,7 @@ export const orderDetailSchema: z.ZodType<OrderDetail> = answer(
     flags: z.array(flagSchema),
     startedAt: z.string().nullable(),
     nextObservation: observationDueSchema.nullable(),
+    paused: z.boolean(),
   }),
 );
 

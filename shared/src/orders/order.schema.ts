@@ -136,6 +136,8 @@ export type OrderDetail = OrderSummary & {
   startedAt: string | null;
   /** When the next observation of a running PCA is due, by the ward's policy; null unless active. */
   nextObservation: ObservationDue | null;
+  /** A running PCA paused by a nurse or by naloxone given, until a two-nurse resume; false unless active. */
+  paused: boolean;
 };
 
 export type FlagSeverity = 'info' | 'review' | 'urgent';

@@ -1,10 +1,10 @@
-import { Badge } from '@mantine/core';
+import { Badge, type MantineSize } from '@mantine/core';
 import { IconPlayerPause } from '@tabler/icons-react';
 
 /** "Paused" as icon and word, for every place that shows a PCA's state. */
-export function PausedBadge() {
+export function PausedBadge({ size = 'lg' }: { size?: MantineSize }) {
   return (
-    <Badge color="orange" size="lg" leftSection={<IconPlayerPause size={14} aria-hidden />}>
+    <Badge color="orange" size={size} leftSection={<IconPlayerPause size={size === 'lg' || size === 'xl' ? 14 : 12} aria-hidden />}>
       Paused
     </Badge>
   );

@@ -51,6 +51,7 @@ export function toOrderDetail(
   releases: SyringeRelease[],
   flags: Flag[],
   nextObservation: ObservationDue | null,
+  paused: boolean,
 ): OrderDetail {
   return {
     ...toOrderSummary(order),
@@ -73,5 +74,6 @@ export function toOrderDetail(
     flags: flags.map(toFlagResponse),
     startedAt: order.startedAt?.toISOString() ?? null,
     nextObservation,
+    paused,
   };
 }

@@ -14,6 +14,7 @@ import {
 } from '@lockstep/shared';
 import { Link } from 'react-router-dom';
 import { ALLERGY_SEVERITY_LOOK } from '@/components/ui/allergy-list';
+import { PausedBadge } from '@/components/ui/paused-badge';
 import { SeverityLabel } from '@/components/ui/severity-label';
 import { paths } from '@/config/paths';
 import { formatNearTime } from '@/utils/clock';
@@ -83,17 +84,22 @@ function PatientAllergies({ patient }: { patient: HandoverRow['patient'] }) {
   );
 }
 
-/** Drug, regimen, and how long it has run (or the status that keeps it from running). */
+/** Drug, regimen, and how long it has run (or the status that keeps it from running); Paused as icon and word. */
 export function PcaCell({ row, now }: { row: HandoverRow; now: Date }) {
   const started =
     row.status === 'active' && row.startedAt !== null && row.minutesSinceStart !== null
-      ? `Running ${formatElapsed(row.minutesSinceStart)} (from ${formatNearTime(row.startedAt, now)})`
+      ? `${row.paused ? 'Started' : 'Running'} ${formatElapsed(row.minutesSinceStart)}${row.paused ? ' ago' : ''} (from ${formatNearTime(row.startedAt, now)})`
       : `${ORDER_STATUS_LABELS[row.status]} · not started`;
   return (
     <Stack gap={0}>
       <Text size="sm" fw={600}>
         {drugAndConcentration(row)}
       </Text>
+      {row.paused ? (
+        <div>
+          <PausedBadge size="sm" />
+        </div>
+      ) : null}
       <Text size="xs">{formatRegimen({ ...row, ...row.regimen }, { withDrug: false })}</Text>
       <Dimmed>{started}</Dimmed>
     </Stack>

@@ -34,7 +34,12 @@ export function PatientPcaOrders({ patientId }: { patientId: number }) {
                   .map((part) => `${part.label} ${part.value}`)
                   .join(' · ')}
               </Text>
-              <OrderAlertBadges openUrgentFlags={order.openUrgentFlags} nextObservation={order.nextObservation} now={now} />
+              <OrderAlertBadges
+                paused={order.paused}
+                openUrgentFlags={order.openUrgentFlags}
+                nextObservation={order.nextObservation}
+                now={now}
+              />
             </div>
             <Group gap="xs">
               {mayObserve ? (

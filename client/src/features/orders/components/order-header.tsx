@@ -4,6 +4,7 @@ import { IconArrowBackUp, IconBan, IconSquareX } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
 import { REGIMEN_TYPE_LABELS, type OrderDetail } from '@lockstep/shared';
 import { OrderStatusBadge } from '@/components/ui/order-status-badge';
+import { PausedBadge } from '@/components/ui/paused-badge';
 import { paths } from '@/config/paths';
 import { formatCalendarDate, formatDateTime } from '@/utils/format-date';
 
@@ -20,7 +21,7 @@ export interface OrderHeaderProps {
   actions?: ReactNode;
 }
 
-/** The order's title, status, who signed and verified it, and why it was returned or ended. */
+/** The order's title, status (and Paused, while a running PCA is paused), who signed and verified it, and why it was returned or ended. */
 export function OrderHeader({ order, title, actions }: OrderHeaderProps) {
   const reasonLook =
     order.status === 'returned' || order.status === 'rejected' || order.status === 'cancelled' ? REASON_LOOK[order.status] : null;
@@ -31,6 +32,7 @@ export function OrderHeader({ order, title, actions }: OrderHeaderProps) {
           <Group gap="sm" align="center">
             <Title order={1}>{title}</Title>
             <OrderStatusBadge status={order.status} size="lg" />
+            {order.paused ? <PausedBadge /> : null}
           </Group>
           <Text size="sm" c="dimmed" className="tabular-nums">
             Version {order.version} · {REGIMEN_TYPE_LABELS[order.regimenType]} · signed by {order.prescriberName},{' '}

@@ -3,9 +3,10 @@ import { Anchor, Button, EmptyState, Group, Stack, Text } from '@mantine/core';
 import { IconArrowBackUp, IconClipboardList, IconPencil, IconSquareX } from '@tabler/icons-react';
 import { createColumnHelper, getCoreRowModel, getSortedRowModel, useReactTable, type SortingState } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
-import { canCancel, formatRegimen, type OrderSummary } from '@lockstep/shared';
+import { canCancel, formatRegimen, type OrderListEntry, type OrderSummary } from '@lockstep/shared';
 import { DataTable } from '@/components/ui/data-table';
 import { OrderStatusBadge } from '@/components/ui/order-status-badge';
+import { PausedBadge } from '@/components/ui/paused-badge';
 import { paths } from '@/config/paths';
 import { formatDateTime } from '@/utils/format-date';
 
@@ -23,10 +24,11 @@ export interface OrdersTableProps {
 
 const column = createColumnHelper<OrderSummary>();
 
-function StatusCell({ order }: { order: OrderSummary }) {
+function StatusCell({ order }: { order: OrderSummary & Partial<Pick<OrderListEntry, 'paused'>> }) {
   return (
     <Stack gap={4} align="flex-start" miw={190}>
       <OrderStatusBadge status={order.status} />
+      {order.paused ? <PausedBadge size="md" /> : null}
       {order.status === 'returned' && order.statusReason ? (
         <Group gap={4} wrap="nowrap" align="flex-start" maw={320}>
           <IconArrowBackUp size={14} aria-hidden style={{ marginTop: 3, flex: 'none' }} />

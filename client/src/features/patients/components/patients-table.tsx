@@ -49,7 +49,13 @@ function columnsWith(pcas: ReadonlyMap<number, OrderListEntry[]>, now: Date) {
       header: 'PCA',
       cell: ({ row }) =>
         (pcas.get(row.original.id) ?? []).map((order) => (
-          <OrderAlertBadges key={order.id} openUrgentFlags={order.openUrgentFlags} nextObservation={order.nextObservation} now={now} />
+          <OrderAlertBadges
+            key={order.id}
+            paused={order.paused}
+            openUrgentFlags={order.openUrgentFlags}
+            nextObservation={order.nextObservation}
+            now={now}
+          />
         )),
     }),
   ];
