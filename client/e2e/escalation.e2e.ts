@@ -14,7 +14,14 @@ const HARBOUR = 1;
 const WHITLOCK = 'WHITLOCK, Ezra';
 
 type Due = { dueAt: string; overdueMinutes: number; severity: 'review' | 'urgent' | null };
-type ListEntry = { id: number; patientName: string; status: string; nextObservation: Due | null; openUrgentFlags: number };
+type ListEntry = {
+  id: number;
+  patientName: string;
+  wardId: number;
+  status: string;
+  nextObservation: Due | null;
+  openUrgentFlags: number;
+};
 type Release = { id: number; status: string };
 type OrderDetail = { id: number; status: string; releases: Release[]; nextObservation: Due | null };
 type Observation = {
@@ -191,16 +198,20 @@ describe('escalation: a nurse records a deteriorating set and it shows on every 
     await snapshot(page, 'escalation-pca-list');
   });
 
-  it('"Observations due" lists the running PCAs soonest first, with the patient before every one due later', async () => {
+  it('"Observations due" lists the running PCAs on her own wards soonest first, with the patient before every one due later', async () => {
     const { page } = kai;
     await page.getByRole('navigation').getByRole('link', { name: 'Observations due' }).click();
     await page.getByRole('heading', { name: 'Observations due', level: 1 }).waitFor();
+    // The list opens on the nurse's own wards (kai.mendes: Harbour and Summit), not every ward's.
+    const me = await callApi<{ wards: { id: number; name: string }[] }>(server.baseUrl, kaiToken, 'GET', '/auth/me');
+    const ownWards = me.wards.map((ward) => ward.id);
     const running = await callApi<ListEntry[]>(server.baseUrl, kaiToken, 'GET', '/orders?status=active');
     const byDue = running
-      .filter((entry) => entry.nextObservation !== null)
+      .filter((entry) => entry.nextObservation !== null && ownWards.includes(entry.wardId))
       .sort((a, b) => Date.parse(a.nextObservation!.dueAt) - Date.parse(b.nextObservation!.dueAt));
     const rows = tableRows(page, 'PCA orders');
     await expect.poll(() => rows.count()).toBe(byDue.length);
+    await page.getByText(`Harbour and Summit: ${byDue.length} PCAs, sorted by due time`).waitFor();
     const shown = await rows.locator('th[scope="row"]').allInnerTexts();
     // Ties (same due time) may sit either way round; every other pair is in due order.
     const dueOf = (name: string) => Date.parse(byDue.find((entry) => entry.patientName === name)!.nextObservation!.dueAt);
