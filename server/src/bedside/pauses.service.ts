@@ -5,13 +5,15 @@ import {
   BEDSIDE_ROLES,
   compareSettings,
   formatDose,
-  NALOXONE_WATCH,
+  naloxoneWatch,
+  naloxoneWatchSpan,
   naloxoneWatchUntil,
   pcaPaused,
   tallMan,
   type PcaPauseState,
   type PumpSettings,
   type SettingDifference,
+  type WardPolicy,
 } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { fieldError } from '../common/errors/field-error.js';
@@ -24,6 +26,7 @@ import { OrdersService } from '../orders/orders.service.js';
 import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
 import { UsersService } from '../users/users.service.js';
 import { WardEventsService } from '../ward-events/ward-events.service.js';
+import { wardPolicy } from '../wards/ward-policy.js';
 import { requireBedsideAction } from './bedside-state.js';
 import type { NaloxoneDto, PauseDto, ResumeDto } from './dto/pause.dto.js';
 import { PcaPause } from './entities/pca-pause.entity.js';
@@ -47,8 +50,8 @@ export class PausesService {
   ) {}
 
   async state(orderId: number): Promise<PcaPauseState> {
-    await this.orders.load(this.dataSource.manager, orderId);
-    return pauseState(this.dataSource.manager, orderId, []);
+    const order = await this.orders.load(this.dataSource.manager, orderId);
+    return pauseState(this.dataSource.manager, order, []);
   }
 
   async naloxone(orderId: number, dto: NaloxoneDto, nurse: AuthUser): Promise<PcaPauseState> {
@@ -77,12 +80,13 @@ export class PausesService {
           resumeReason: null,
         }),
       );
+      const watch = naloxoneWatch(wardPolicy(order.patient.ward));
       const flag = await this.flags.raise(manager, {
         orderId,
         severity: 'urgent',
         code: 'naloxone.given',
         message: `Naloxone ${dose} given: PCA paused`,
-        action: `Stay with the patient; observe every ${NALOXONE_WATCH.everyMinutes} minutes for at least ${NALOXONE_WATCH.forMinutes / 60} hours, as naloxone can wear off before the opioid; the prescriber reviews before the PCA resumes`,
+        action: `Stay with the patient; observe every ${watch.everyMinutes} minutes for at least ${naloxoneWatchSpan(watch.forMinutes)}, as naloxone can wear off before the opioid; the prescriber reviews before the PCA resumes`,
       });
       await recordAudit(manager, nurse, {
         action: 'order.naloxone',
@@ -97,16 +101,18 @@ export class PausesService {
           paused: wasPaused ? 'already paused' : { from: false, to: true },
         },
       });
-      return { order, state: await pauseState(manager, orderId, []) };
+      return { order, state: await pauseState(manager, order, []) };
     });
-    this.mail.send(naloxoneMail(order, formatDose(dto.dose, dto.doseUnit), nurse.displayName));
+    this.mail.send(
+      naloxoneMail(order, formatDose(dto.dose, dto.doseUnit), nurse.displayName, naloxoneWatch(wardPolicy(order.patient.ward))),
+    );
     this.events.publishForOrder(orderId, 'flag');
     return state;
   }
 
   async pause(orderId: number, dto: PauseDto, nurse: AuthUser): Promise<PcaPauseState> {
     const state = await this.dataSource.transaction(async (manager) => {
-      await this.running(manager, orderId);
+      const order = await this.running(manager, orderId);
       if (pcaPaused(await openPauses(manager, orderId))) throw new ConflictException('This PCA is already paused');
       const pause = await manager.save(
         manager.create(PcaPause, {
@@ -130,7 +136,7 @@ export class PausesService {
         entityId: orderId,
         summary: { pauseId: pause.id, reason: pause.reason, paused: { from: false, to: true } },
       });
-      return pauseState(manager, orderId, []);
+      return pauseState(manager, order, []);
     });
     this.events.publishForOrder(orderId, 'order');
     return state;
@@ -173,7 +179,7 @@ export class PausesService {
           ...(differences.length === 0 ? { paused: { from: true, to: false } } : { differences }),
         },
       });
-      return pauseState(manager, orderId, differences);
+      return pauseState(manager, order, differences);
     });
     if (state.differences.length === 0) this.events.publishForOrder(orderId, 'order');
     return state;
@@ -192,13 +198,19 @@ function openPauses(manager: EntityManager, orderId: number): Promise<PcaPause[]
   return manager.find(PcaPause, { where: { orderId, resumedAt: IsNull() } });
 }
 
-async function pauseState(manager: EntityManager, orderId: number, differences: SettingDifference[]): Promise<PcaPauseState> {
+/** The order's pauses and the after-naloxone watch by its ward's policy. Expects the patient's ward loaded. */
+async function pauseState(manager: EntityManager, order: PcaOrder, differences: SettingDifference[]): Promise<PcaPauseState> {
+  const orderId = order.id;
+  const policy: WardPolicy = wardPolicy(order.patient.ward);
   const pauses = await manager.find(PcaPause, {
     where: { orderId },
     relations: { pausedBy: true, resumedBy: true, resumeWitness: true },
     order: { pausedAt: 'DESC', id: 'DESC' },
   });
-  const watchUntil = naloxoneWatchUntil(pauses.flatMap((pause) => (pause.naloxoneGivenAt ? [pause.naloxoneGivenAt] : [])));
+  const watchUntil = naloxoneWatchUntil(
+    pauses.flatMap((pause) => (pause.naloxoneGivenAt ? [pause.naloxoneGivenAt] : [])),
+    policy,
+  );
   return {
     orderId,
     paused: pcaPaused(pauses),
@@ -217,6 +229,7 @@ async function pauseState(manager: EntityManager, orderId: number, differences: 
       resumeReason: pause.resumeReason,
     })),
     naloxoneWatchUntil: watchUntil?.toISOString() ?? null,
+    naloxoneWatchEveryMinutes: naloxoneWatch(policy).everyMinutes,
     differences,
   };
 }
@@ -236,11 +249,11 @@ function orderedSettings(order: PcaOrder, release: SyringeRelease): PumpSettings
 }
 
 // As with the other notices: bed and MRN, not the patient's name.
-function naloxoneMail(order: PcaOrder, dose: string, nurseName: string): OutgoingMail {
+function naloxoneMail(order: PcaOrder, dose: string, nurseName: string, watch: { everyMinutes: number; forMinutes: number }): OutgoingMail {
   const where = `${order.patient.ward.name} bed ${order.patient.bed} (MRN ${order.patient.mrn})`;
   return {
     to: order.prescriber.email,
     subject: `URGENT: naloxone given, PCA paused — ${order.patient.ward.name} bed ${order.patient.bed}`,
-    text: `${nurseName} gave naloxone ${dose} to the patient on the ${tallMan(order.drug.genericName)} PCA for ${where} (order ${order.id}). The PCA is paused.\n\nObservations every ${NALOXONE_WATCH.everyMinutes} minutes for at least ${NALOXONE_WATCH.forMinutes / 60} hours: naloxone can wear off before the opioid. Please review the patient and the regimen; the PCA resumes only after a two-nurse check of the pump settings.`,
+    text: `${nurseName} gave naloxone ${dose} to the patient on the ${tallMan(order.drug.genericName)} PCA for ${where} (order ${order.id}). The PCA is paused.\n\nObservations every ${watch.everyMinutes} minutes for at least ${naloxoneWatchSpan(watch.forMinutes)}: naloxone can wear off before the opioid. Please review the patient and the regimen; the PCA resumes only after a two-nurse check of the pump settings.`,
   };
 }

@@ -1,4 +1,4 @@
-import { DEFAULT_WARD_POLICY, type WardPolicy, withWardPolicyFloors } from '@lockstep/shared';
+import { type WardPolicy, withWardPolicyFloors } from '@lockstep/shared';
 import type { Ward } from './entities/ward.entity.js';
 
 /** The ward's stored policy, held at the floors (shared WARD_POLICY_FLOORS) where a stored value is looser. */
@@ -6,10 +6,9 @@ export function wardPolicy(ward: Ward): WardPolicy {
   return withWardPolicyFloors({
     observationIntervalFirst24hMinutes: ward.observationIntervalFirst24hMinutes,
     observationIntervalMinutes: ward.observationIntervalMinutes,
-    // Close-observation settings are the defaults until wards store their own.
-    closeObservationIntervalMinutes: DEFAULT_WARD_POLICY.closeObservationIntervalMinutes,
-    closeObservationPeriodMinutes: DEFAULT_WARD_POLICY.closeObservationPeriodMinutes,
-    naloxoneClosePeriodMinutes: DEFAULT_WARD_POLICY.naloxoneClosePeriodMinutes,
+    closeObservationIntervalMinutes: ward.closeObservationIntervalMinutes,
+    closeObservationPeriodMinutes: ward.closeObservationPeriodMinutes,
+    naloxoneClosePeriodMinutes: ward.naloxoneClosePeriodMinutes,
     respiratoryRateThreshold: ward.respiratoryRateThreshold,
     spo2Threshold: ward.spo2Threshold,
     syringeLowThresholdHours: ward.syringeLowThresholdHours,

@@ -209,6 +209,9 @@ export const WARD_POLICY: BodySpec = {
   // Floors from shared WARD_POLICY_FLOORS: a ward can tighten, not loosen past them.
   observationIntervalFirst24hMinutes: setting({ int: true, min: 15, max: 60 }),
   observationIntervalMinutes: setting({ int: true, min: 15, max: 120 }),
+  closeObservationIntervalMinutes: setting({ int: true, min: 5, max: 15 }),
+  closeObservationPeriodMinutes: setting({ int: true, min: 60, max: 240 }),
+  naloxoneClosePeriodMinutes: setting({ int: true, min: 120, max: 720 }),
   respiratoryRateThreshold: setting({ int: true, min: 9, max: 20 }),
   spo2Threshold: setting({ int: true, min: 92, max: 100 }),
   syringeLowThresholdHours: setting({ min: 0.5, max: 24 }),

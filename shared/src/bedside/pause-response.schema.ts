@@ -35,6 +35,8 @@ export const pcaPauseStateSchema = answer(
     paused: z.boolean(),
     pauses: z.array(pcaPauseSchema),
     naloxoneWatchUntil: moment.nullable(),
+    /** How often to observe during the watch: the ward's close-observation interval. */
+    naloxoneWatchEveryMinutes: z.number().int(),
     differences: z.array(
       z.object({
         field: z.enum(PUMP_SETTING_FIELDS as readonly (keyof PumpSettings)[] as [keyof PumpSettings, ...(keyof PumpSettings)[]]),

@@ -1,3 +1,5 @@
+import type { WardPolicy } from '../observations/ward-policy.js';
+
 /** Why a PCA was paused: a nurse's decision, or naloxone given (which always pauses it). */
 export const PAUSE_CAUSES = ['nurse', 'naloxone'] as const;
 export type PauseCause = (typeof PAUSE_CAUSES)[number];
@@ -7,23 +9,42 @@ export const NALOXONE_UNITS = ['mcg', 'mg'] as const;
 export type NaloxoneUnit = (typeof NALOXONE_UNITS)[number];
 
 /**
- * After naloxone: observations every 15 minutes for at least 2 hours. Naloxone's action is shorter
- * than that of many opioids, so sedation and slow breathing can return after it wears off: naloxone
- * hydrochloride injection, US prescribing information (FDA label), warning that "the duration of
+ * After naloxone: observations at the ward's close-observation interval (at most every 15 minutes) for the
+ * ward's naloxone close period (at least 2 hours; both floors in WARD_POLICY_FLOORS). Naloxone's action is
+ * shorter than that of many opioids, so sedation and slow breathing can return after it wears off:
+ * naloxone hydrochloride injection, US prescribing information (FDA label), warning that "the duration of
  * action of some opioids may exceed that of naloxone" (from memory). The 15-minute interval and the
  * 2-hour span are common practice, not a single published figure.
  */
-export const NALOXONE_WATCH = { everyMinutes: 15, forMinutes: 120 } as const;
+export function naloxoneWatch(policy: Pick<WardPolicy, 'closeObservationIntervalMinutes' | 'naloxoneClosePeriodMinutes'>): {
+  everyMinutes: number;
+  forMinutes: number;
+} {
+  return { everyMinutes: policy.closeObservationIntervalMinutes, forMinutes: policy.naloxoneClosePeriodMinutes };
+}
 
-/** Until when the after-naloxone watch runs, counted from the latest naloxone dose; null with none. */
-export function naloxoneWatchUntil(naloxoneGivenAt: readonly (string | Date)[]): Date | null {
+/** "2 hours", "3 hours", "2.5 hours", "90 minutes": how long the after-naloxone watch runs, in words. */
+export function naloxoneWatchSpan(forMinutes: number): string {
+  if (forMinutes < 120) return `${forMinutes} minutes`;
+  const hours = Math.round((forMinutes / 60) * 100) / 100;
+  return `${hours} hours`;
+}
+
+/**
+ * Until when the after-naloxone watch runs, counted from the latest naloxone dose for the ward's naloxone
+ * close period; null with none.
+ */
+export function naloxoneWatchUntil(
+  naloxoneGivenAt: readonly (string | Date)[],
+  policy: Pick<WardPolicy, 'naloxoneClosePeriodMinutes'>,
+): Date | null {
   let latest: number | null = null;
   for (const at of naloxoneGivenAt) {
     const time = new Date(at).getTime();
     if (!Number.isFinite(time)) continue;
     if (latest === null || time > latest) latest = time;
   }
-  return latest === null ? null : new Date(latest + NALOXONE_WATCH.forMinutes * 60_000);
+  return latest === null ? null : new Date(latest + policy.naloxoneClosePeriodMinutes * 60_000);
 }
 
 /** A PCA is paused while one of its pauses has not been resumed. */

@@ -83,6 +83,29 @@ export const WARD_POLICY_FLOORS = {
     max: 120,
     message: 'At most 120 minutes: observations on a running PCA are at least two-hourly (common practice)',
   },
+  /**
+   * Close observation at least every 15 minutes: common practice. The ASPMN guideline (Jarzyna D et al.,
+   * American Society for Pain Management Nursing guidelines on monitoring for opioid-induced sedation and
+   * respiratory depression, Pain Manag Nurs 2011;12(3):118-145) says monitoring intensity follows risk and
+   * gives no single interval.
+   */
+  closeObservationIntervalMinutes: {
+    max: 15,
+    message: 'At most 15 minutes: close observation is at least every 15 minutes (common practice)',
+  },
+  /** Close observation lasts at least the first hour after a start or a change that raises the dose: common practice, no single published rule. */
+  closeObservationPeriodMinutes: {
+    min: 60,
+    message: 'At least 60 minutes: close observation lasts at least an hour (common practice)',
+  },
+  /**
+   * At least 2 hours of close observation after naloxone: naloxone wears off before most opioids, so
+   * sedation and slow breathing can return. Common practice; no single published interval.
+   */
+  naloxoneClosePeriodMinutes: {
+    min: 120,
+    message: 'At least 120 minutes: naloxone wears off before most opioids (common practice)',
+  },
 } as const;
 
 /** Sedation 3 (frequently drowsy, drifts off mid-conversation) is always urgent, whatever the ward sets (POSS, Pasero C, 1994). */
@@ -107,17 +130,25 @@ export function wardPolicyFloorErrors(policy: Partial<WardPolicy>): Partial<Reco
   return errors;
 }
 
+/** A stored value below `min`, or one that is not a finite number, is held at `min`. */
+const atLeast = (value: number, min: number) => (Number.isFinite(value) ? Math.max(value, min) : min);
+/** A stored value above `max`, or one that is not a finite number, is held at `max`. */
+const atMost = (value: number, max: number) => (Number.isFinite(value) ? Math.min(value, max) : max);
+
 /**
  * The policy a ward works to: any stored setting past a floor (a ward saved before the floors existed) is
- * held at the floor, so a looser value is never used.
+ * held at the floor, so a looser value is never used; a value that is not a finite number is held at the floor too.
  */
 export function withWardPolicyFloors<T extends WardPolicy>(policy: T): T {
   const F = WARD_POLICY_FLOORS;
   return {
     ...policy,
-    respiratoryRateThreshold: Math.max(policy.respiratoryRateThreshold, F.respiratoryRateThreshold.min),
-    spo2Threshold: Math.max(policy.spo2Threshold, F.spo2Threshold.min),
-    observationIntervalFirst24hMinutes: Math.min(policy.observationIntervalFirst24hMinutes, F.observationIntervalFirst24hMinutes.max),
-    observationIntervalMinutes: Math.min(policy.observationIntervalMinutes, F.observationIntervalMinutes.max),
+    respiratoryRateThreshold: atLeast(policy.respiratoryRateThreshold, F.respiratoryRateThreshold.min),
+    spo2Threshold: atLeast(policy.spo2Threshold, F.spo2Threshold.min),
+    observationIntervalFirst24hMinutes: atMost(policy.observationIntervalFirst24hMinutes, F.observationIntervalFirst24hMinutes.max),
+    observationIntervalMinutes: atMost(policy.observationIntervalMinutes, F.observationIntervalMinutes.max),
+    closeObservationIntervalMinutes: atMost(policy.closeObservationIntervalMinutes, F.closeObservationIntervalMinutes.max),
+    closeObservationPeriodMinutes: atLeast(policy.closeObservationPeriodMinutes, F.closeObservationPeriodMinutes.min),
+    naloxoneClosePeriodMinutes: atLeast(policy.naloxoneClosePeriodMinutes, F.naloxoneClosePeriodMinutes.min),
   };
 }

@@ -28,6 +28,21 @@ export const updateWardPolicySchema = z.strictObject({
     low: 'At least 15 minutes',
     high: FLOORS.observationIntervalMinutes.message,
   }),
+  closeObservationIntervalMinutes: whole(5, FLOORS.closeObservationIntervalMinutes.max, {
+    whole: 'A whole number of minutes',
+    low: 'At least 5 minutes',
+    high: FLOORS.closeObservationIntervalMinutes.message,
+  }),
+  closeObservationPeriodMinutes: whole(FLOORS.closeObservationPeriodMinutes.min, 240, {
+    whole: 'A whole number of minutes',
+    low: FLOORS.closeObservationPeriodMinutes.message,
+    high: 'At most 240 minutes',
+  }),
+  naloxoneClosePeriodMinutes: whole(FLOORS.naloxoneClosePeriodMinutes.min, 720, {
+    whole: 'A whole number of minutes',
+    low: FLOORS.naloxoneClosePeriodMinutes.message,
+    high: 'At most 720 minutes',
+  }),
   respiratoryRateThreshold: whole(FLOORS.respiratoryRateThreshold.min, 20, {
     whole: 'A whole number per minute',
     low: FLOORS.respiratoryRateThreshold.message,

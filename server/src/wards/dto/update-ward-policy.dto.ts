@@ -44,6 +44,47 @@ export class UpdateWardPolicyDto implements UpdateWardPolicyRequest {
 
   @ApiPropertyOptional({
     type: 'integer',
+    minimum: 5,
+    maximum: FLOORS.closeObservationIntervalMinutes.max,
+    example: 15,
+    description:
+      'Minutes between observations while close observation runs (after a start, loading dose, clinician bolus, regimen or syringe change, urgent flag or naloxone); a ward can shorten it, not lengthen it past the floor',
+  })
+  @Max(FLOORS.closeObservationIntervalMinutes.max, { message: FLOORS.closeObservationIntervalMinutes.message })
+  @Min(5, { message: 'At least 5 minutes' })
+  @IsInt({ message: 'A whole number of minutes' })
+  @unlessAbsent
+  closeObservationIntervalMinutes?: number;
+
+  @ApiPropertyOptional({
+    type: 'integer',
+    minimum: FLOORS.closeObservationPeriodMinutes.min,
+    maximum: 240,
+    example: 60,
+    description:
+      'Minutes close observation lasts after a start, loading dose, clinician bolus, regimen or syringe change; a ward can lengthen it, not shorten it past the floor',
+  })
+  @Max(240, { message: 'At most 240 minutes' })
+  @Min(FLOORS.closeObservationPeriodMinutes.min, { message: FLOORS.closeObservationPeriodMinutes.message })
+  @IsInt({ message: 'A whole number of minutes' })
+  @unlessAbsent
+  closeObservationPeriodMinutes?: number;
+
+  @ApiPropertyOptional({
+    type: 'integer',
+    minimum: FLOORS.naloxoneClosePeriodMinutes.min,
+    maximum: 720,
+    example: 120,
+    description: 'Minutes close observation lasts after naloxone; a ward can lengthen it, not shorten it past the floor',
+  })
+  @Max(720, { message: 'At most 720 minutes' })
+  @Min(FLOORS.naloxoneClosePeriodMinutes.min, { message: FLOORS.naloxoneClosePeriodMinutes.message })
+  @IsInt({ message: 'A whole number of minutes' })
+  @unlessAbsent
+  naloxoneClosePeriodMinutes?: number;
+
+  @ApiPropertyOptional({
+    type: 'integer',
     minimum: FLOORS.respiratoryRateThreshold.min,
     maximum: 20,
     example: 9,

@@ -42,6 +42,16 @@ export class Ward {
   @Column({ type: 'integer', default: 120 })
   observationIntervalMinutes: number;
 
+  /** Close observation: its interval, how long it lasts after a start or change, and after naloxone (shared DEFAULT_WARD_POLICY, WARD_POLICY_FLOORS). */
+  @Column({ type: 'integer', default: DEFAULT_WARD_POLICY.closeObservationIntervalMinutes })
+  closeObservationIntervalMinutes: number;
+
+  @Column({ type: 'integer', default: DEFAULT_WARD_POLICY.closeObservationPeriodMinutes })
+  closeObservationPeriodMinutes: number;
+
+  @Column({ type: 'integer', default: DEFAULT_WARD_POLICY.naloxoneClosePeriodMinutes })
+  naloxoneClosePeriodMinutes: number;
+
   // The column defaults (8, 90) predate the floors; a new ward takes the shipped defaults (urgent at
   // RR <= 8 and SpO2 <= 91 %, NEWS2, Royal College of Physicians 2017) from these initialisers instead.
   @Column({ type: 'integer', default: 8 })

@@ -3,15 +3,7 @@ import { Alert, Button, Card, Group, PasswordInput, SegmentedControl, Stack, Tex
 import { useForm } from '@mantine/form';
 import { IconPlayerPause, IconPlayerPlay, IconVaccine } from '@tabler/icons-react';
 import { Link } from 'react-router-dom';
-import {
-  formatDose,
-  MIN_REASON_LENGTH,
-  NALOXONE_WATCH,
-  pauseActions,
-  syringeState,
-  type NaloxoneUnit,
-  type OrderDetail,
-} from '@lockstep/shared';
+import { formatDose, MIN_REASON_LENGTH, pauseActions, syringeState, type NaloxoneUnit, type OrderDetail } from '@lockstep/shared';
 import { NumberField } from '@/components/ui/number-field';
 import { PausedBadge } from '@/components/ui/paused-badge';
 import { applyServerErrors } from '@/lib/form-errors';
@@ -79,8 +71,8 @@ export function PcaPausePanel({ order, mayAct }: { order: OrderDetail; mayAct: b
         )}
         {state.naloxoneWatchUntil && Date.parse(state.naloxoneWatchUntil) > Date.now() && (
           <Alert color="red" title="After naloxone">
-            Observe every {NALOXONE_WATCH.everyMinutes} minutes until at least {formatDateTime(state.naloxoneWatchUntil)}: naloxone can wear
-            off before the opioid.
+            Observe every {state.naloxoneWatchEveryMinutes} minutes until at least {formatDateTime(state.naloxoneWatchUntil)}: naloxone can
+            wear off before the opioid.
           </Alert>
         )}
         {open === 'pause' && <PauseForm orderId={order.id} onDone={() => setOpen(null)} />}
