@@ -6,6 +6,7 @@ import { formatCalendarDate } from '@/utils/format-date';
 import { formatSex } from '../utils/patient-format';
 import { AllergyEditor } from './allergy-editor';
 import { RiskMarkers } from './risk-markers';
+import { Spo2ScaleSection } from './spo2-scale-section';
 import { ToleranceForm } from './tolerance-form';
 import { WeightForm } from './weight-form';
 
@@ -61,6 +62,10 @@ export function PatientDetails({ patient }: { patient: Patient }) {
 
       <Paper withBorder p="md" radius="md">
         <AllergyEditor patient={patient} canEdit={editsRecord} />
+      </Paper>
+
+      <Paper withBorder p="md" radius="md">
+        <Spo2ScaleSection patient={patient} />
       </Paper>
 
       <Stack gap="xs">
