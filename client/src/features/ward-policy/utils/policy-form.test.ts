@@ -19,17 +19,17 @@ const field = (key: string) => {
 };
 
 describe('policy fields', () => {
-  it('cover every value of the ward policy a ward can store', () => {
-    // The close-observation settings are not stored per ward yet: the shipped defaults apply everywhere.
-    const notYetEditable = ['closeObservationIntervalMinutes', 'closeObservationPeriodMinutes', 'naloxoneClosePeriodMinutes'];
-    const storable = Object.keys(DEFAULT_WARD_POLICY).filter((key) => !notYetEditable.includes(key));
-    expect(POLICY_NUMBER_FIELDS.map((f) => f.key).sort()).toEqual(storable.sort());
+  it('cover every value of the ward policy, the close-observation settings included', () => {
+    expect(POLICY_NUMBER_FIELDS.map((f) => f.key).sort()).toEqual(Object.keys(DEFAULT_WARD_POLICY).sort());
   });
 
   it('show the shipped defaults with their units', () => {
     expect(POLICY_NUMBER_FIELDS.map(shippedDefault)).toEqual([
       '60 min',
       '120 min',
+      '15 min', // close observation every 15 minutes: common practice (ASPMN guideline, Jarzyna et al. 2011, gives no single interval)
+      '60 min', // for the first hour: common practice
+      '120 min', // 2 hours after naloxone, which wears off before most opioids: common practice, no single published interval
       '9/min', // urgent at 8/min or below: NEWS2, Royal College of Physicians 2017
       '92 %', // urgent at 91 % or below: NEWS2 scale 1, Royal College of Physicians 2017
       '7/10',
@@ -63,6 +63,22 @@ describe('range checks, in the server’s words', () => {
     expect(policyNumberError(field('weightMaxAgeDays'), 1.5)).toBe('A whole number of days');
   });
 
+  it('holds the close-observation settings to the floors (shared WARD_POLICY_FLOORS; common practice)', () => {
+    expect(policyNumberError(field('closeObservationIntervalMinutes'), 15)).toBeNull();
+    expect(policyNumberError(field('closeObservationIntervalMinutes'), 16)).toMatch(/^At most 15 minutes: close observation/);
+    expect(policyNumberError(field('closeObservationIntervalMinutes'), 5)).toBeNull();
+    expect(policyNumberError(field('closeObservationIntervalMinutes'), 4)).toBe('At least 5 minutes');
+    expect(policyNumberError(field('closeObservationIntervalMinutes'), 7.5)).toBe('A whole number of minutes');
+    expect(policyNumberError(field('closeObservationPeriodMinutes'), 60)).toBeNull();
+    expect(policyNumberError(field('closeObservationPeriodMinutes'), 59)).toMatch(/^At least 60 minutes/);
+    expect(policyNumberError(field('closeObservationPeriodMinutes'), 241)).toBe('At most 240 minutes');
+    expect(policyNumberError(field('naloxoneClosePeriodMinutes'), 120)).toBeNull();
+    expect(policyNumberError(field('naloxoneClosePeriodMinutes'), 119)).toMatch(/^At least 120 minutes: naloxone wears off/);
+    expect(policyNumberError(field('naloxoneClosePeriodMinutes'), 720)).toBeNull();
+    expect(policyNumberError(field('naloxoneClosePeriodMinutes'), 721)).toBe('At most 720 minutes');
+    expect(policyNumberError(field('naloxoneClosePeriodMinutes'), '')).toBe('Enter a value');
+  });
+
   it('takes an e-mail address or nothing', () => {
     expect(emailError('')).toBeNull();
     expect(emailError('nic.harbour@kestrelbay.example')).toBeNull();
@@ -84,6 +100,9 @@ describe('policyChanges', () => {
     expect(policyChanges({ ...policyToForm(SAVED), spo2Threshold: '94', nurseInChargeEmail: ' nic@kestrelbay.example ' }, SAVED)).toEqual({
       spo2Threshold: 94,
       nurseInChargeEmail: 'nic@kestrelbay.example',
+    });
+    expect(policyChanges({ ...policyToForm(SAVED), naloxoneClosePeriodMinutes: '180' }, SAVED)).toEqual({
+      naloxoneClosePeriodMinutes: 180,
     });
   });
 });

@@ -8,9 +8,7 @@ import {
 } from '@lockstep/shared';
 import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 
-/** The close-observation settings follow the shipped defaults until wards can store their own (issue 17). */
-type NotYetEditable = 'closeObservationIntervalMinutes' | 'closeObservationPeriodMinutes' | 'naloxoneClosePeriodMinutes';
-export type PolicyNumberKey = Exclude<keyof WardPolicy, NotYetEditable>;
+export type PolicyNumberKey = keyof WardPolicy;
 export type PolicyEmailKey = 'pharmacyEmail' | 'nurseInChargeEmail';
 
 export type PolicyFormValues = Record<PolicyNumberKey, NumberFieldValue> & Record<PolicyEmailKey, string>;
@@ -59,6 +57,45 @@ export const POLICY_NUMBER_FIELDS: readonly PolicyNumberField[] = [
     integer: true,
     below: 'At least 15 minutes',
     above: FLOORS.observationIntervalMinutes.message,
+    notWhole: 'A whole number of minutes',
+  },
+  {
+    key: 'closeObservationIntervalMinutes',
+    group: 'intervals',
+    label: 'Close observation every',
+    unit: 'min',
+    help: 'Between observations after a start, loading dose, clinician bolus, regimen or syringe change, an urgent flag or naloxone',
+    min: 5,
+    max: FLOORS.closeObservationIntervalMinutes.max,
+    integer: true,
+    below: 'At least 5 minutes',
+    above: FLOORS.closeObservationIntervalMinutes.message,
+    notWhole: 'A whole number of minutes',
+  },
+  {
+    key: 'closeObservationPeriodMinutes',
+    group: 'intervals',
+    label: 'Close observation lasts',
+    unit: 'min',
+    help: 'After a start, loading dose, clinician bolus, regimen or syringe change, until a reading taken after it',
+    min: FLOORS.closeObservationPeriodMinutes.min,
+    max: 240,
+    integer: true,
+    below: FLOORS.closeObservationPeriodMinutes.message,
+    above: 'At most 240 minutes',
+    notWhole: 'A whole number of minutes',
+  },
+  {
+    key: 'naloxoneClosePeriodMinutes',
+    group: 'intervals',
+    label: 'Close observation after naloxone lasts',
+    unit: 'min',
+    help: 'Naloxone can wear off before the opioid, so sedation and slow breathing can return',
+    min: FLOORS.naloxoneClosePeriodMinutes.min,
+    max: 720,
+    integer: true,
+    below: FLOORS.naloxoneClosePeriodMinutes.message,
+    above: 'At most 720 minutes',
     notWhole: 'A whole number of minutes',
   },
   {
