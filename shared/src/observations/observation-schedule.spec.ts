@@ -56,6 +56,19 @@ describe('observationSchedule', () => {
     expect(schedule(events, at('12:00'), at('12:01'))).toMatchObject({ dueAt: at('13:00'), close: false });
   });
 
+  it('follows the ward’s close-observation settings: its interval, its period and its naloxone period', () => {
+    // A ward tighter than the defaults (within WARD_POLICY_FLOORS): every 10 minutes, for 90 minutes, 3 hours after naloxone.
+    const ward = { ...policy, closeObservationIntervalMinutes: 10, closeObservationPeriodMinutes: 90, naloxoneClosePeriodMinutes: 180 };
+    const on = (events: MonitoringEvent[], lastReadingAt: string | null, now: string) =>
+      observationSchedule({ startedAt: at('02:00'), events, lastReadingAt }, new Date(now), ward);
+    const bolus: MonitoringEvent[] = [{ kind: 'clinician_bolus', at: at('10:00') }];
+    expect(on(bolus, at('11:20'), at('11:21'))).toMatchObject({ dueAt: at('11:30'), close: true, intervalMinutes: 10 });
+    expect(on(bolus, at('11:30'), at('11:31'))).toMatchObject({ dueAt: at('12:30'), close: false });
+    const naloxone: MonitoringEvent[] = [{ kind: 'naloxone', at: at('10:00') }];
+    expect(on(naloxone, at('12:30'), at('12:31'))).toMatchObject({ dueAt: at('12:40'), close: true });
+    expect(on(naloxone, at('13:00'), at('13:01'))).toMatchObject({ dueAt: at('14:00'), close: false });
+  });
+
   it('is a review when late and urgent when more than one interval late', () => {
     const events: MonitoringEvent[] = [{ kind: 'start', at: START }];
     expect(schedule(events, null, at('08:20'))).toMatchObject({ overdueMinutes: 5, severity: 'review' });
