@@ -69,6 +69,7 @@ describe('list endpoints cost a fixed number of queries, however many rows', () 
   it.each([
     ['orders of a ward', 'kai', (ward: number) => `/api/orders?wardId=${ward}`],
     ['orders of a ward by status', 'kai', (ward: number) => `/api/orders?wardId=${ward}&status=verified,active`],
+    ['orders of several wards (a nurse’s own)', 'kai', (ward: number) => `/api/orders?wardIds=1,${ward}&status=active`],
     ['patients of a ward', 'kai', (ward: number) => `/api/patients?wardId=${ward}`],
     ['handover board', 'mei', (ward: number) => `/api/wards/${ward}/handover`],
     ['library versions of a ward', 'lin', (ward: number) => `/api/library/versions?wardId=${ward}`],

@@ -41,6 +41,16 @@ import { WardEventsService } from '../ward-events/ward-events.service.js';
 
 const DETAIL_RELATIONS = { ...ORDER_SUMMARY_RELATIONS, verifiedBy: true } as const;
 
+/**
+ * The wards an order list is narrowed to: `wardId`, `wardIds`, or only the wards in both when both
+ * are given (none, then). Undefined: every ward.
+ */
+function askedWards(query: Pick<OrderQueryDto, 'wardId' | 'wardIds'>): number[] | undefined {
+  if (!query.wardIds) return query.wardId ? [query.wardId] : undefined;
+  const wards = [...new Set(query.wardIds)];
+  return query.wardId ? wards.filter((id) => id === query.wardId) : wards;
+}
+
 /** Signing, revising, cancelling and reading PCA orders. */
 @Injectable()
 export class OrdersService {
@@ -142,12 +152,14 @@ export class OrdersService {
 
   /** Newest first, each with its syringe state and next observation: three queries however many orders. */
   async list(query: OrderQueryDto, user: AuthUser, now = new Date()): Promise<OrderListEntry[]> {
+    const wards = askedWards(query);
+    if (wards?.length === 0) return [];
     const manager = this.dataSource.manager;
     const orders = await manager.find(PcaOrder, {
       where: {
         ...(query.status ? { status: In(query.status) } : {}),
         ...(query.patientId ? { patientId: query.patientId } : {}),
-        ...(query.wardId ? { patient: { wardId: query.wardId } } : {}),
+        ...(wards ? { patient: { wardId: wards.length === 1 ? wards[0] : In(wards) } } : {}),
         ...(query.mine ? { prescriberId: user.id } : {}),
       },
       relations: ORDER_SUMMARY_RELATIONS,
