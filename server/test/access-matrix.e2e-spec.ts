@@ -71,6 +71,38 @@ export const ACCESS_MATRIX: MatrixRow[] = [
   { method: 'GET', path: '/api/wards', url: '/api/wards', access: 'signed-in', ok: 200 },
   { method: 'GET', path: '/api/wards/:wardId/policy', url: '/api/wards/1/policy', access: 'signed-in', ok: 200 },
   { method: 'PATCH', path: '/api/wards/:wardId/policy', url: '/api/wards/1/policy', access: ['admin'], ok: 400, body: UNKNOWN_FIELD },
+  // No change exists in the demo: the readers get an empty list; the writes are refused at the body.
+  {
+    method: 'GET',
+    path: '/api/wards/policy-changes',
+    url: '/api/wards/policy-changes?status=pending',
+    access: ['admin', 'charge_nurse', 'pharmacist'],
+    ok: 200,
+  },
+  {
+    method: 'POST',
+    path: '/api/wards/:wardId/policy-changes',
+    url: '/api/wards/1/policy-changes',
+    access: ['admin'],
+    ok: 400,
+    body: EMPTY,
+  },
+  {
+    method: 'POST',
+    path: '/api/wards/policy-changes/:changeId/sign-off',
+    url: '/api/wards/policy-changes/1/sign-off',
+    access: ['charge_nurse', 'pharmacist'],
+    ok: 400,
+    body: EMPTY,
+  },
+  {
+    method: 'POST',
+    path: '/api/wards/policy-changes/:changeId/decline',
+    url: '/api/wards/policy-changes/1/decline',
+    access: ['charge_nurse', 'pharmacist'],
+    ok: 400,
+    body: EMPTY,
+  },
   { method: 'GET', path: '/api/patients', url: '/api/patients?wardId=1', access: 'signed-in', ok: 200 },
   { method: 'GET', path: '/api/patients/:id', url: '/api/patients/1', access: 'signed-in', ok: 200 },
   // Patient 2 (VALDIVIA) has a recorded allergy, so "no known allergies" is refused (409); no patient has allergy entry 999.

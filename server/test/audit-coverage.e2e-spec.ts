@@ -75,9 +75,48 @@ describe('every state-changing route writes its audit event', () => {
       '/api/wards/:id/policy',
       '/api/wards/1/policy',
       'admin',
-      { respiratoryRateThreshold: 10 },
+      { pharmacyEmail: 'pharmacy.audit@kestrelbay.example' },
       200,
       'ward.policy-update',
+    );
+    // A clinical setting: the admin proposes, a charge nurse signs off (the ward's policy event), or a pharmacist declines.
+    const signed = { signature: { password: DEMO_PASSWORD } };
+    const proposal = { ...signed, changes: { respiratoryRateThreshold: 10 }, reason: 'Flag slow breathing a little earlier' };
+    const applied = await step(
+      'post',
+      '/api/wards/:id/policy-changes',
+      '/api/wards/1/policy-changes',
+      'admin',
+      proposal,
+      201,
+      'ward.policy-change-propose',
+    );
+    await step(
+      'post',
+      '/api/wards/policy-changes/:id/sign-off',
+      `/api/wards/policy-changes/${applied.id}/sign-off`,
+      'charge_nurse',
+      signed,
+      200,
+      'ward.policy-update',
+    );
+    const declined = await step(
+      'post',
+      '/api/wards/:id/policy-changes',
+      '/api/wards/1/policy-changes',
+      'admin',
+      { ...proposal, changes: { spo2Threshold: 94 } },
+      201,
+      'ward.policy-change-propose',
+    );
+    await step(
+      'post',
+      '/api/wards/policy-changes/:id/decline',
+      `/api/wards/policy-changes/${declined.id}/decline`,
+      'pharmacist',
+      { ...signed, reason: 'Too many flags for this ward at 94 %' },
+      200,
+      'ward.policy-change-decline',
     );
     // Pharmacy's equianalgesic table: hydromorphone after American Family Physician 2000;61(3):755.
     await step(
@@ -133,6 +172,7 @@ describe('every state-changing route writes its audit event', () => {
         sedationLevel: '3',
         respiratoryRate: 12,
         spo2: 96,
+        oxygenLitresPerMinute: 0,
         attempts: 2,
         delivered: 2,
         volumeInfusedMl: 2,

@@ -3,6 +3,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { AuditEvent, AuditPage } from '@lockstep/shared';
 import { activeOrder, type PcaTokens } from './support/pca-steps.js';
+import { changeWardPolicy } from './support/ward-policy-steps.js';
 import { createTestApp, DEMO_PASSWORD, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
 
 describe('audit trail', () => {
@@ -36,26 +37,35 @@ describe('audit trail', () => {
   });
 
   it('records a ward policy change with who, when and each field’s old and new value; a no-op writes nothing', async () => {
-    await request(t.http)
-      .patch('/api/wards/1/policy')
-      .set(bearer(admin))
-      .send({ respiratoryRateThreshold: 10, syringeLowThresholdHours: 2 })
-      .expect(200);
-    const { events } = await search('?entityType=ward&entityId=1');
+    const approver = await t.tokenFor(DEMO_USER_BY_ROLE.charge_nurse);
+    const change = await changeWardPolicy(t.http, { admin, approver }, 1, { respiratoryRateThreshold: 10, syringeLowThresholdHours: 2 });
+    const { events } = await search('?entityType=ward&entityId=1&action=ward.policy-update');
     expect(events).toHaveLength(1);
     expect(events[0]).toMatchObject({
       action: 'ward.policy-update',
-      actorName: 'Sam Rivera',
+      actorName: 'Mei Tan',
       entityType: 'ward',
       entityId: '1',
-      summary: { respiratoryRateThreshold: { from: 9, to: 10 } },
+      summary: { respiratoryRateThreshold: { from: 9, to: 10 }, change: change.id, proposedBy: 'Sam Rivera' },
     });
     expect(events[0].summary).not.toHaveProperty('syringeLowThresholdHours');
     expect(Date.now() - Date.parse(events[0].at)).toBeLessThan(60_000);
+    const proposed = await search('?entityType=ward&entityId=1&action=ward.policy-change-propose');
+    expect(proposed.events[0]).toMatchObject({
+      actorName: 'Sam Rivera',
+      summary: { change: change.id, respiratoryRateThreshold: { from: 9, to: 10 } },
+    });
 
     const before = await auditCount();
-    await request(t.http).patch('/api/wards/1/policy').set(bearer(admin)).send({ respiratoryRateThreshold: 10 }).expect(200);
-    await request(t.http).patch('/api/wards/1/policy').set(bearer(admin)).send({ respiratoryRateThreshold: -3 }).expect(400);
+    const email = { pharmacyEmail: 'pharmacy.harbour@kestrelbay.example' };
+    await request(t.http).patch('/api/wards/1/policy').set(bearer(admin)).send(email).expect(200);
+    const propose = (changes: object) =>
+      request(t.http)
+        .post('/api/wards/1/policy-changes')
+        .set(bearer(admin))
+        .send({ changes, reason: 'Nothing should change here', signature: { password: DEMO_PASSWORD } });
+    await propose({ respiratoryRateThreshold: 10 }).expect(400);
+    await propose({ respiratoryRateThreshold: -3 }).expect(400);
     expect(await auditCount()).toBe(before);
   });
 
@@ -69,6 +79,7 @@ describe('audit trail', () => {
         sedationLevel: '1',
         respiratoryRate: 14,
         spo2: 97,
+        oxygenLitresPerMinute: 0,
         // One dose: recorded moments after the start, when the lockout allows only one.
         attempts: 2,
         delivered: 1,

@@ -11,7 +11,7 @@ import { SendBackVersionDto } from '../src/library/dto/send-back-version.dto.js'
 import { SubmitVersionDto } from '../src/library/dto/submit-version.dto.js';
 import { CreateUserDto } from '../src/users/dto/create-user.dto.js';
 import { UpdateUserDto } from '../src/users/dto/update-user.dto.js';
-import { UpdateWardPolicyDto } from '../src/wards/dto/update-ward-policy.dto.js';
+import { UpdateWardContactsDto } from '../src/wards/dto/update-ward-contacts.dto.js';
 import { appRoutes } from './support/app-routes.js';
 import { type BadInputApp, badInputSuite, type BadInputRoute } from './support/bad-input-harness.js';
 import {
@@ -25,7 +25,7 @@ import {
   SEND_BACK_VERSION,
   SUBMIT_VERSION,
   UPDATE_USER,
-  WARD_POLICY,
+  WARD_CONTACTS,
 } from './support/bad-input-specs.js';
 import { DEMO_PASSWORD } from './support/test-app.js';
 
@@ -115,9 +115,10 @@ const ROUTES: BadInputRoute[] = [
     path: '/api/wards/:wardId/policy',
     url: () => `/api/wards/${HARBOUR}/policy`,
     role: 'admin',
-    spec: WARD_POLICY,
-    dto: UpdateWardPolicyDto,
-    valid: () => POLICY,
+    // The admin changes the e-mail addresses alone; clinical settings go through a signed-off change (ward-policy-changes.e2e-spec.ts).
+    spec: WARD_CONTACTS,
+    dto: UpdateWardContactsDto,
+    valid: () => ({ pharmacyEmail: POLICY.pharmacyEmail, nurseInChargeEmail: POLICY.nurseInChargeEmail }),
   },
   {
     method: 'POST',

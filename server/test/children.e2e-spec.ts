@@ -5,7 +5,8 @@ import type { Finding, OrderFields } from '@lockstep/shared';
 import { Patient } from '../src/patients/entities/patient.entity.js';
 import { Ward } from '../src/wards/entities/ward.entity.js';
 import { SIGNING } from './support/pca.js';
-import { createTestApp, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
+import { createTestApp, DEMO_PASSWORD, DEMO_USER_BY_ROLE, type TestApp } from './support/test-app.js';
+import { changeWardPolicy } from './support/ward-policy-steps.js';
 
 // Children get children's limits, chosen by the patient and not only the ward (docs/design.md,
 // "Order fields and dosing conventions"; shared library/choose-rule.ts). Under 18 is a child:
@@ -197,19 +198,16 @@ describe('children: rule by patient, ceilings, weight plausibility and age', () 
     const undated = await addChild({ wardCode: 'WRE', years: 8, sex: 'female', weightKg: 24.5, weightMeasuredOn: null });
     expect(codes((await preview(childMorphine(undated))).body.findings)).toEqual([['weight.undated', 'caution']]);
 
-    // The ward's own rule: an admin allows 60 days on Wren, and the 30-day-old weight passes.
+    // The ward's own rule: an admin proposes 60 days on Wren, a pharmacist signs it off, and the 30-day-old weight passes.
     const wren = await t.app.get(DataSource).manager.findOneByOrFail(Ward, { code: 'WRE' });
-    const policy = await request(t.http)
-      .patch(`/api/wards/${wren.id}/policy`)
-      .set({ Authorization: `Bearer ${admin}` })
-      .send({ weightMaxAgeDays: 60 })
-      .expect(200);
-    expect(policy.body.weightMaxAgeDays).toBe(60);
+    const approver = await t.tokenFor(DEMO_USER_BY_ROLE.pharmacist);
+    const change = await changeWardPolicy(t.http, { admin, approver }, wren.id, { weightMaxAgeDays: 60 });
+    expect(change.settings).toEqual([{ field: 'weightMaxAgeDays', from: 7, to: 60 }]);
     expect((await preview(childMorphine(old))).body.findings).toEqual([]);
     await request(t.http)
-      .patch(`/api/wards/${wren.id}/policy`)
+      .post(`/api/wards/${wren.id}/policy-changes`)
       .set({ Authorization: `Bearer ${admin}` })
-      .send({ weightMaxAgeDays: 0 })
+      .send({ changes: { weightMaxAgeDays: 0 }, reason: 'Any weight at all will do', signature: { password: DEMO_PASSWORD } })
       .expect(400);
   });
 

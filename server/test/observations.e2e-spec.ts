@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { type MailboxMessage, waitForMail } from './support/mailbox.js';
 import { CALM_OBSERVATION as CALM, ORDER, SETTINGS } from './support/pca.js';
 import { activeOrder } from './support/pca-steps.js';
+import { changeWardPolicy } from './support/ward-policy-steps.js';
 import { createTestApp, type TestApp } from './support/test-app.js';
 
 describe('observations, flags, usage and ward policy', () => {
@@ -176,15 +177,17 @@ describe('observations, flags, usage and ward policy', () => {
       syringeLowThresholdHours: 2,
       reconciliationToleranceMl: 0.5,
     });
-    await request(t.http).patch('/api/wards/1/policy').set(as('mei')).send({ spo2Threshold: 92 }).expect(403);
+    await request(t.http).patch('/api/wards/1/policy').set(as('mei')).send({ pharmacyEmail: '' }).expect(403);
     const bad = await request(t.http)
       .patch('/api/wards/1/policy')
       .set(as('sam'))
       .send({ spo2Threshold: 20, pharmacyEmail: 'not-an-address' })
       .expect(400);
     expect(bad.body.errors.map((e: { field: string }) => e.field).sort()).toEqual(['pharmacyEmail', 'spo2Threshold']);
-    const changed = await request(t.http).patch('/api/wards/1/policy').set(as('sam')).send({ spo2Threshold: 93 }).expect(200);
-    expect(changed.body.spo2Threshold).toBe(93);
+    // A clinical setting changes only through a proposal that a charge nurse or a pharmacist signs off.
+    const changed = await changeWardPolicy(t.http, { admin: token.sam, approver: token.mei }, 1, { spo2Threshold: 93 });
+    expect(changed.settings).toEqual([{ field: 'spo2Threshold', from: 92, to: 93 }]);
+    expect((await request(t.http).get('/api/wards/1/policy').set(as('kai')).expect(200)).body.spo2Threshold).toBe(93);
     const order = await start();
     const response = await observe(order.id, { ...CALM, spo2: 92 }).expect(201);
     expect(response.body.flags.map((f: { code: string }) => f.code)).toEqual(['spo2.low']);
@@ -194,17 +197,26 @@ describe('observations, flags, usage and ward policy', () => {
   // no longer than the stated defaults (common practice). Shared WARD_POLICY_FLOORS.
   it('refuses a policy that loosens past a floor, naming the field and the floor', async () => {
     const bad = await request(t.http)
-      .patch('/api/wards/1/policy')
+      .post('/api/wards/1/policy-changes')
       .set(as('sam'))
-      .send({ respiratoryRateThreshold: 8, spo2Threshold: 91, observationIntervalFirst24hMinutes: 90, observationIntervalMinutes: 240 })
+      .send({
+        changes: {
+          respiratoryRateThreshold: 8,
+          spo2Threshold: 91,
+          observationIntervalFirst24hMinutes: 90,
+          observationIntervalMinutes: 240,
+        },
+        reason: 'Fewer flags on this ward',
+        signature: { password: 'lockstep-demo' },
+      })
       .expect(400);
     const messages = Object.fromEntries(bad.body.errors.map((e: { field: string; message: string }) => [e.field, e.message]));
     expect(messages).toEqual({
-      respiratoryRateThreshold:
+      'changes.respiratoryRateThreshold':
         'At least 9 per minute: a rate of 8/min or below is always urgent (NEWS2, Royal College of Physicians 2017)',
-      spo2Threshold: 'At least 92 %: SpO2 of 91 % or below is always urgent (NEWS2 scale 1, Royal College of Physicians 2017)',
-      observationIntervalFirst24hMinutes: expect.stringMatching(/^At most 60 minutes/),
-      observationIntervalMinutes: expect.stringMatching(/^At most 120 minutes/),
+      'changes.spo2Threshold': 'At least 92 %: SpO2 of 91 % or below is always urgent (NEWS2 scale 1, Royal College of Physicians 2017)',
+      'changes.observationIntervalFirst24hMinutes': expect.stringMatching(/^At most 60 minutes/),
+      'changes.observationIntervalMinutes': expect.stringMatching(/^At most 120 minutes/),
     });
     const policy = await request(t.http).get('/api/wards/1/policy').set(as('kai')).expect(200);
     expect(policy.body.respiratoryRateThreshold).toBeGreaterThanOrEqual(9);

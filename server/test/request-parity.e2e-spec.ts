@@ -40,7 +40,10 @@ import {
   textLength,
   updateUserSchema,
   updateEquianalgesicFactorSchema,
-  updateWardPolicySchema,
+  updateWardContactsSchema,
+  proposeWardPolicyChangeSchema,
+  signOffWardPolicyChangeSchema,
+  declineWardPolicyChangeSchema,
   type FieldError,
 } from '@lockstep/shared';
 import { LoginDto } from '../src/auth/dto/login.dto.js';
@@ -66,7 +69,8 @@ import { AddAllergyDto, OpioidToleranceDto, RecordWeightDto, Spo2ScaleDto } from
 import { CreateReleaseDto } from '../src/releases/dto/create-release.dto.js';
 import { CreateUserDto } from '../src/users/dto/create-user.dto.js';
 import { UpdateUserDto } from '../src/users/dto/update-user.dto.js';
-import { UpdateWardPolicyDto } from '../src/wards/dto/update-ward-policy.dto.js';
+import { UpdateWardContactsDto } from '../src/wards/dto/update-ward-contacts.dto.js';
+import { DeclineWardPolicyChangeDto, ProposeWardPolicyChangeDto } from '../src/wards/dto/ward-policy-change.dto.js';
 import { type BadBody, badBodies, related, toJson } from './support/bad-bodies.js';
 import {
   ACKNOWLEDGE_FLAG,
@@ -100,7 +104,9 @@ import {
   SUBMIT_VERSION,
   SYRINGE_CHANGE,
   UPDATE_USER,
-  WARD_POLICY,
+  WARD_CONTACTS,
+  PROPOSE_WARD_POLICY_CHANGE,
+  DECLINE_WARD_POLICY_CHANGE,
 } from './support/bad-input-specs.js';
 import type { BodySpec } from './support/bad-values.js';
 import { validBodies } from './support/valid-values.js';
@@ -139,7 +145,18 @@ const CONTRACTS: Record<string, Contract> = {
   'POST /api/auth/login': { spec: LOGIN, dto: LoginDto, schema: loginSchema },
   'POST /api/users': { spec: CREATE_USER, dto: CreateUserDto, schema: createUserSchema },
   'PATCH /api/users/:param': { spec: UPDATE_USER, dto: UpdateUserDto, schema: updateUserSchema },
-  'PATCH /api/wards/:param/policy': { spec: WARD_POLICY, dto: UpdateWardPolicyDto, schema: updateWardPolicySchema },
+  'PATCH /api/wards/:param/policy': { spec: WARD_CONTACTS, dto: UpdateWardContactsDto, schema: updateWardContactsSchema },
+  'POST /api/wards/:param/policy-changes': {
+    spec: PROPOSE_WARD_POLICY_CHANGE,
+    dto: ProposeWardPolicyChangeDto,
+    schema: proposeWardPolicyChangeSchema,
+  },
+  'POST /api/wards/policy-changes/:param/sign-off': { spec: SIGNED, dto: SignedRequestDto, schema: signOffWardPolicyChangeSchema },
+  'POST /api/wards/policy-changes/:param/decline': {
+    spec: DECLINE_WARD_POLICY_CHANGE,
+    dto: DeclineWardPolicyChangeDto,
+    schema: declineWardPolicyChangeSchema,
+  },
   'POST /api/library/versions': { spec: CREATE_DRAFT, dto: CreateDraftDto, schema: createDraftSchema },
   'PUT /api/library/versions/:param/rules': { spec: REPLACE_RULES, dto: ReplaceRulesDto, schema: replaceRulesSchema },
   'POST /api/library/versions/:param/submit': { spec: SUBMIT_VERSION, dto: SubmitVersionDto, schema: submitVersionSchema },

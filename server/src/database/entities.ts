@@ -20,6 +20,7 @@ import { PatientAllergy } from '../patients/entities/patient-allergy.entity.js';
 import { SyringeRelease } from '../releases/entities/syringe-release.entity.js';
 import { User } from '../users/entities/user.entity.js';
 import { Ward } from '../wards/entities/ward.entity.js';
+import { WardPolicyChange } from '../wards/entities/ward-policy-change.entity.js';
 
 /** Every entity, for the data source used outside Nest (migrations, reset, schema check). */
 export const ENTITIES = [
@@ -45,4 +46,5 @@ export const ENTITIES = [
   RevokedToken,
   EquianalgesicFactor,
   PcaPause,
+  WardPolicyChange,
 ];

@@ -4,7 +4,7 @@ import { ApiOperation } from '@nestjs/swagger';
 import { Roles } from '../auth/decorators/roles.decorator.js';
 import { ApiErrors } from '../common/openapi/api-errors.decorator.js';
 import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
-import { UpdateWardPolicyDto } from './dto/update-ward-policy.dto.js';
+import { UpdateWardContactsDto } from './dto/update-ward-contacts.dto.js';
 import { WardsService } from './wards.service.js';
 import type { AuthUser } from '../auth/auth-user.js';
 import { CurrentUser } from '../auth/decorators/current-user.decorator.js';
@@ -27,13 +27,14 @@ export class WardsController {
     return this.wards.policy(wardId);
   }
 
-  @ApiOperation({ summary: 'Change a ward’s policy' })
+  /** Clinical settings change through a proposed change that a charge nurse or a pharmacist signs off (ward-policy-changes.controller.ts). */
+  @ApiOperation({ summary: 'Change a ward’s e-mail addresses (clinical settings change through POST /api/wards/{wardId}/policy-changes)' })
   @ApiErrors(404)
   @Patch(':wardId/policy')
   @Roles('admin')
   updatePolicy(
     @Param('wardId', ParseIdPipe) wardId: number,
-    @Body() body: UpdateWardPolicyDto,
+    @Body() body: UpdateWardContactsDto,
     @CurrentUser() admin: AuthUser,
   ): Promise<WardPolicySettings> {
     return this.wards.updatePolicy(wardId, body, admin);

@@ -2,7 +2,7 @@ import { Injectable, NotFoundException } from '@nestjs/common';
 import { InjectRepository } from '@nestjs/typeorm';
 import type { Repository } from 'typeorm';
 import { type Ward as WardResponse, type WardPolicySettings } from '@lockstep/shared';
-import type { UpdateWardPolicyDto } from './dto/update-ward-policy.dto.js';
+import type { UpdateWardContactsDto } from './dto/update-ward-contacts.dto.js';
 import { wardPolicy } from './ward-policy.js';
 import { toWardResponse } from './dto/ward-response.js';
 import { Ward } from './entities/ward.entity.js';
@@ -24,13 +24,15 @@ export class WardsService {
     return { ...wardPolicy(ward), pharmacyEmail: ward.pharmacyEmail, nurseInChargeEmail: ward.nurseInChargeEmail };
   }
 
-  async updatePolicy(wardId: number, changes: UpdateWardPolicyDto, admin: AuthUser): Promise<WardPolicySettings> {
+  /** The ward's e-mail addresses; the admin changes them alone (clinical settings: WardPolicyChangesService). */
+  async updatePolicy(wardId: number, changes: UpdateWardContactsDto, admin: AuthUser): Promise<WardPolicySettings> {
     await this.wards.manager.transaction(async (manager) => {
       const ward = await manager.findOneBy(Ward, { id: wardId });
       if (!ward) throw new NotFoundException(`No ward with id ${wardId}`);
-      const changed = changedFields(ward, { ...changes });
+      const contacts = { pharmacyEmail: changes.pharmacyEmail, nurseInChargeEmail: changes.nurseInChargeEmail };
+      const changed = changedFields(ward, contacts);
       if (Object.keys(changed).length === 0) return;
-      await manager.update(Ward, { id: wardId }, changes);
+      await manager.update(Ward, { id: wardId }, Object.fromEntries(Object.entries(contacts).filter(([, value]) => value !== undefined)));
       await recordAudit(manager, admin, { action: 'ward.policy-update', entityType: 'ward', entityId: wardId, summary: changed });
     });
     return this.policy(wardId);

@@ -205,7 +205,7 @@ const setting = (spec: Omit<Extract<FieldSpec, { type: 'number' }>, 'type'>): Fi
   ...spec,
 });
 const email: FieldSpec = { type: 'email', emptyAllowed: true, presence: 'partial' };
-export const WARD_POLICY: BodySpec = {
+const WARD_POLICY: BodySpec = {
   // Floors from shared WARD_POLICY_FLOORS: a ward can tighten, not loosen past them.
   observationIntervalFirst24hMinutes: setting({ int: true, min: 15, max: 60 }),
   observationIntervalMinutes: setting({ int: true, min: 15, max: 120 }),
@@ -222,6 +222,11 @@ export const WARD_POLICY: BodySpec = {
   pharmacyEmail: email,
   nurseInChargeEmail: email,
 };
+/** What an admin changes alone (PATCH /wards/:wardId/policy): the e-mail addresses. */
+export const WARD_CONTACTS: BodySpec = { pharmacyEmail: email, nurseInChargeEmail: email };
+const { pharmacyEmail: _pharmacyEmail, nurseInChargeEmail: _nurseInChargeEmail, ...WARD_POLICY_SETTINGS } = WARD_POLICY;
+export const PROPOSE_WARD_POLICY_CHANGE: BodySpec = { ...SIGNED, changes: { type: 'object', fields: WARD_POLICY_SETTINGS }, reason };
+export const DECLINE_WARD_POLICY_CHANGE: BodySpec = { ...SIGNED, reason };
 
 export const ADD_ALLERGY: BodySpec = {
   drugId: { ...id, presence: 'optional' },
@@ -264,6 +269,9 @@ export const BAD_INPUT_COVERAGE: Record<string, string> = {
   'POST /api/users': 'bad-input-admin',
   'PATCH /api/users/:param': 'bad-input-admin',
   'PATCH /api/wards/:param/policy': 'bad-input-admin',
+  'POST /api/wards/:param/policy-changes': 'ward-policy-changes',
+  'POST /api/wards/policy-changes/:param/sign-off': 'ward-policy-changes',
+  'POST /api/wards/policy-changes/:param/decline': 'ward-policy-changes',
   'POST /api/library/versions': 'bad-input-admin',
   'PUT /api/library/versions/:param/rules': 'bad-input-admin',
   'POST /api/library/versions/:param/submit': 'bad-input-admin',

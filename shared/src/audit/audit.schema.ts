@@ -16,6 +16,8 @@ export const AUDIT_ACTION_LABELS = {
   'user.update': 'User changed',
   'user.sign-out': 'Signed out',
   'ward.policy-update': 'Ward policy changed',
+  'ward.policy-change-propose': 'Ward policy change proposed',
+  'ward.policy-change-decline': 'Ward policy change declined',
   'sign-in.unlock': 'Sign-in lock cleared',
   'library-version.create': 'Library draft created',
   'library-version.import': 'Library draft imported from CSV',

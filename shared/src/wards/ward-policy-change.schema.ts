@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { answer } from '../api/response-registry.js';
+import { must } from '../api/request-rules.js';
 import { reasonText } from '../orders/order.schema.js';
 import { signedRequestSchema } from '../orders/orders-requests.schema.js';
 import { updateWardPolicySchema } from './wards-requests.schema.js';
@@ -12,12 +13,41 @@ import { updateWardPolicySchema } from './wards-requests.schema.js';
 export const WARD_POLICY_CHANGE_STATUSES = ['pending', 'applied', 'declined'] as const;
 export type WardPolicyChangeStatus = (typeof WARD_POLICY_CHANGE_STATUSES)[number];
 
-/** The clinical settings a proposal may change: every ward policy setting except the e-mail addresses. */
-export const wardPolicySettingChangesSchema = updateWardPolicySchema
-  .omit({ pharmacyEmail: true, nurseInChargeEmail: true })
-  .refine((changes) => Object.keys(changes).length > 0, 'Change at least one setting');
+const wardContactFields = updateWardPolicySchema.pick({ pharmacyEmail: true, nurseInChargeEmail: true }).shape;
+const wardPolicySettingFields = updateWardPolicySchema.omit({ pharmacyEmail: true, nurseInChargeEmail: true }).shape;
+
+/**
+ * The clinical settings a proposal may change: every ward policy setting except the e-mail addresses. At
+ * least one setting is named before the settings themselves are checked (as the server's DTO does).
+ */
+export const wardPolicySettingChangesSchema = z
+  .looseObject({}, must('Choose the settings to change', 'changes must be an object of settings'))
+  .refine((changes) => Object.keys(changes).some((key) => Object.hasOwn(wardPolicySettingFields, key)), {
+    message: 'Change at least one setting',
+    abort: true,
+  })
+  .pipe(z.strictObject(wardPolicySettingFields));
 export type WardPolicySettingChanges = z.infer<typeof wardPolicySettingChangesSchema>;
 export type WardPolicySettingField = keyof WardPolicySettingChanges;
+
+/** Every clinical setting's name, in the order the ward policy lists them. */
+export const WARD_POLICY_SETTING_FIELDS = Object.keys(wardPolicySettingFields) as WardPolicySettingField[];
+
+export const CLINICAL_SETTING_NEEDS_SIGN_OFF =
+  'Clinical settings change through a proposed change that a charge nurse or a pharmacist signs off';
+
+/**
+ * What the admin changes alone (PATCH /wards/:wardId/policy): the e-mail addresses. A clinical setting sent
+ * there is refused naming the field, with the way to change it.
+ */
+export const updateWardContactsSchema = z.strictObject({
+  ...wardContactFields,
+  ...(Object.fromEntries(WARD_POLICY_SETTING_FIELDS.map((field) => [field, z.never(CLINICAL_SETTING_NEEDS_SIGN_OFF).optional()])) as Record<
+    WardPolicySettingField,
+    z.ZodOptional<z.ZodNever>
+  >),
+});
+export type UpdateWardContactsRequest = Pick<z.infer<typeof updateWardContactsSchema>, keyof typeof wardContactFields>;
 
 const TOO_LONG = 'At most 1,000 characters';
 

@@ -14,6 +14,7 @@ import { RulePopulation1764770000000 } from './1764770000000-rule-population.js'
 import { EquianalgesicFactors1764780000000 } from './1764780000000-equianalgesic-factors.js';
 import { WardPolicySignOff1764810000000 } from './1764810000000-ward-policy-sign-off.js';
 import { NaloxoneAndPause1764800000000 } from './1764800000000-naloxone-and-pause.js';
+import { WardPolicyChanges1764820000000 } from './1764820000000-ward-policy-changes.js';
 import { WardCloseObservation1764830000000 } from './1764830000000-ward-close-observation.js';
 import { WardPopulation1764840000000 } from './1764840000000-ward-population.js';
 import { FlagObservation1764850000000 } from './1764850000000-flag-observation.js';
@@ -36,6 +37,7 @@ export const MIGRATIONS = [
   ObservationVitals1764790000000,
   NaloxoneAndPause1764800000000,
   WardPolicySignOff1764810000000,
+  WardPolicyChanges1764820000000,
   WardCloseObservation1764830000000,
   WardPopulation1764840000000,
   FlagObservation1764850000000,
