@@ -9,6 +9,8 @@ export function getOrders(filters: OrderListFilters, signal?: AbortSignal): Prom
     schema: orderListEntrySchema.array(),
     params: {
       wardId: filters.wardId,
+      // An empty list goes as a blank the server refuses: never read as every ward.
+      wardIds: filters.wardIds ? filters.wardIds.join(',') : undefined,
       patientId: filters.patientId,
       status: filters.status && filters.status.length > 0 ? filters.status.join(',') : undefined,
       mine: filters.mine ? true : undefined,

@@ -2,6 +2,8 @@ import type { OrderFields, OrderStatus } from '@lockstep/shared';
 
 export interface OrderListFilters {
   wardId?: number;
+  /** Several wards at once (a nurse's own), sent as `wardIds=1,4`. */
+  wardIds?: readonly number[];
   status?: readonly OrderStatus[];
   mine?: boolean;
   patientId?: number;

@@ -33,11 +33,12 @@ export function BedsideOrdersScreen({ wards, wardsLoading }: BedsideOrdersScreen
   const patientId = positiveId(searchParams.get('patient'));
   // A link to one patient's orders shows them wherever the patient lies.
   const { wards: choice, source, ownWardIds, choose } = useWardChoice(wards, { defaultAll: patientId !== undefined });
-  // One ward is asked of the server; several are read from every ward's list.
-  const wardId = choice !== ALL_WARDS && choice.length === 1 ? choice[0] : undefined;
+  // Only the chosen wards are asked of the server (in one order, so the cached answer is shared).
+  const wardIds = choice === ALL_WARDS ? undefined : [...choice].sort((a, b) => a - b);
 
   // One request: each order comes with its syringe state and next observation. Asked again each time the list is shown.
-  const ordersQuery = useOrders({ wardId, patientId, status: BEDSIDE_STATUSES }, { staleTime: 0 });
+  const ordersQuery = useOrders({ wardIds, patientId, status: BEDSIDE_STATUSES }, { staleTime: 0 });
+  // The chosen wards only, also while another choice's answer stands in.
   const orders = useMemo(() => onChosenWards(ordersQuery.data ?? [], choice).sort(byWardAndBed), [ordersQuery.data, choice]);
   const now = useNow(30_000);
   // While the wards load, the person's own wards still have names.

@@ -22,10 +22,11 @@ export interface ObservationsDueScreenProps {
 export function ObservationsDueScreen({ wards, wardsLoading }: ObservationsDueScreenProps) {
   const user = useCurrentUser();
   const { wards: choice, source, ownWardIds, choose } = useWardChoice(wards);
-  // One ward is asked of the server; several are read from every ward's running PCAs (a short list).
-  const wardId = choice !== ALL_WARDS && choice.length === 1 ? choice[0] : undefined;
+  // Only the chosen wards are asked of the server (in one order, so the cached answer is shared).
+  const wardIds = choice === ALL_WARDS ? undefined : [...choice].sort((a, b) => a - b);
   // The same list and schedule as the PCA orders screen; asked again each time it is shown and every minute.
-  const ordersQuery = useOrders({ wardId, status: ['active'] }, { staleTime: 0, refetchInterval: 60_000 });
+  const ordersQuery = useOrders({ wardIds, status: ['active'] }, { staleTime: 0, refetchInterval: 60_000 });
+  // The chosen wards only, also while another choice's answer stands in.
   const orders = useMemo(() => observationsDue(onChosenWards(ordersQuery.data ?? [], choice)), [ordersQuery.data, choice]);
   const now = useNow(30_000);
   // While the wards load, the person's own wards still have names.
