@@ -6,7 +6,9 @@ import type { OrderDetail } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
 import { isApiRequestError } from '@/lib/api-error';
+import { useCurrentUser } from '@/lib/auth/use-session';
 import { useOrder } from '@/api/orders/get-order';
+import { bedsideListWard } from '../utils/ward-choice';
 import { BedsideCaution } from './bedside-caution';
 import { OrderContext } from './order-context';
 
@@ -23,6 +25,7 @@ export function BedsideOrderPage({ orderId, title, showRegimen, children }: Beds
   // At the bedside the status and syringe must be current: always ask again on opening.
   const orderQuery = useOrder(orderId, { staleTime: 0 });
   const order = orderQuery.data;
+  const ownWardIds = useCurrentUser().wards.map((ward) => ward.id);
 
   let body: ReactNode;
   if (order) {
@@ -52,7 +55,7 @@ export function BedsideOrderPage({ orderId, title, showRegimen, children }: Beds
 
   return (
     <Stack gap="lg" maw={1100}>
-      <Anchor component={Link} to={paths.bedside.getHref({ wardId: order?.wardId })} size="sm">
+      <Anchor component={Link} to={paths.bedside.getHref({ wardId: bedsideListWard(order?.wardId, ownWardIds) })} size="sm">
         <Group gap={4} component="span">
           <IconArrowLeft size={16} aria-hidden />
           Back to PCA orders

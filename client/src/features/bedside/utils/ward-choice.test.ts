@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import {
   ALL_WARDS,
+  bedsideListWard,
   bedsideOrdersSummary,
   defaultWardChoice,
   observationsDueSummary,
@@ -121,5 +122,15 @@ describe('wardsPhrase and the summaries', () => {
     expect(observationsDueSummary('All wards', 0)).toBe('All wards: no PCA is running');
     expect(bedsideOrdersSummary('Harbour and Summit', 4)).toBe('Harbour and Summit: 4 PCA orders waiting for a bedside check or running');
     expect(bedsideOrdersSummary('Wren', 0)).toBe('Wren: no PCA order waiting for a bedside check or running');
+  });
+});
+
+describe('bedsideListWard', () => {
+  it("leads back to the nurse's usual list (her own wards) from an order on one of them, else to the order's ward", () => {
+    expect(bedsideListWard(1, KAI)).toBeUndefined();
+    expect(bedsideListWard(4, KAI)).toBeUndefined();
+    expect(bedsideListWard(2, KAI)).toBe(2);
+    expect(bedsideListWard(2, [])).toBe(2);
+    expect(bedsideListWard(undefined, KAI)).toBeUndefined();
   });
 });

@@ -105,3 +105,11 @@ export function bedsideOrdersSummary(phrase: string, count: number): string {
   if (count === 0) return `${phrase}: no PCA order waiting for a bedside check or running`;
   return `${phrase}: ${count} PCA order${count === 1 ? '' : 's'} waiting for a bedside check or running`;
 }
+
+/**
+ * Where "Back to PCA orders" leads from an order on this ward: the nurse's usual list (her own
+ * wards, no `?ward=`) when the ward is one of hers, else that ward's list.
+ */
+export function bedsideListWard(orderWardId: number | undefined, ownWardIds: readonly number[]): number | undefined {
+  return orderWardId === undefined || ownWardIds.includes(orderWardId) ? undefined : orderWardId;
+}
