@@ -69,7 +69,6 @@ export * from './observations/usage-summary.js';
 export * from './observations/observation-due.js';
 export * from './observations/observation-schedule.js';
 export * from './observations/observation-timeline.js';
-export * from './observations/urgent-warnings.js';
 export * from './handover/handover.schema.js';
 export * from './handover/handover-risk.js';
 export * from './handover/shift-window.js';

@@ -16,8 +16,11 @@ import {
   validateObservationForm,
   type ObservationFormValues,
 } from '../utils/observation-form';
+import { usePatient } from '@/api/patients/get-patient';
+import { useWards } from '@/api/wards/get-wards';
 import { deliveryWarning } from '../utils/delivery-warning';
-import { observationWarnings } from '../utils/observation-warnings';
+import { fieldWarnings, observationFindings, vitalsPatientFor } from '../utils/observation-warnings';
+import { ObservationFindings } from './observation-findings';
 import { ObservationNumberInput } from './observation-number-input';
 import { SedationField } from './sedation-field';
 import {
@@ -38,8 +41,8 @@ const CONSCIOUSNESS_OPTIONS = CONSCIOUSNESS_LEVELS.map((value) => ({ value, labe
 export interface ObservationFormProps {
   order: OrderDetail;
   observations: readonly ObservationResponse[];
-  /** The ward's breathing thresholds (from its policy), to warn before an urgent flag is raised. */
-  thresholds: Pick<WardPolicy, 'respiratoryRateThreshold' | 'spo2Threshold'> | undefined;
+  /** The ward's policy, to say before saving what the observation will raise (the defaults until it is loaded). */
+  thresholds: WardPolicy | undefined;
   onSaved: (observation: RecordedObservation) => void;
 }
 
@@ -92,8 +95,21 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
     validate: (values) => validateObservationForm(values, { observations, release: running, startedAt: order.startedAt, now: new Date() }),
     validateInputOnChange: [...NUMBER_FIELDS, ...OPTIONAL_NUMBER_FIELDS, 'at'],
   });
-  const warnings = observationWarnings(form.values, thresholds);
-  const deliveredWarning = deliveryWarning(form.values, order, observations, new Date());
+  // Who the bands are for: the patient's age and SpO2 scale, and the ward's population.
+  const patient = usePatient(order.patientId).data;
+  const ward = useWards().data?.find((candidate) => candidate.id === order.wardId);
+  const now = new Date();
+  const findings = observationFindings(form.values, {
+    order,
+    observations,
+    policy: thresholds,
+    patient: patient && ward ? vitalsPatientFor(patient, ward, now) : undefined,
+    now,
+  });
+  const warnings = fieldWarnings(findings);
+  // The doses typed against the lockout and limits as soon as Delivered is typed, before the rest.
+  const earlyDelivered = deliveryWarning(form.values, order, observations, now);
+  const deliveredWarning = warnings.delivered ?? (earlyDelivered ? { severity: 'urgent' as const, text: earlyDelivered } : undefined);
   const { floor } = pumpBounds(observations, running?.id ?? null, new Date());
   const pumpHint = (field: PumpTotalField) => (floor ? `At least ${floor[field]} (at ${formatClock(floor.at)})` : 'New syringe: from 0');
 
@@ -128,7 +144,7 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
               value={form.values.sedationLevel}
               onChange={(level) => form.setFieldValue('sedationLevel', level)}
               error={form.errors.sedationLevel}
-              warning={warnings.sedationLevel}
+              warning={warnings.sedationLevel?.action}
             />
             <SimpleGrid cols={{ base: 1, sm: 3 }} spacing="lg">
               <ObservationNumberInput
@@ -179,6 +195,7 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
                 field="heartRate"
                 label="Heart rate (/min)"
                 description="Optional"
+                warning={warnings.heartRate}
                 inputProps={form.getInputProps('heartRate')}
               />
               <ObservationNumberInput
@@ -197,6 +214,7 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
                 field="painScore"
                 label="Pain score (0–10)"
                 description="0 no pain, 10 worst imaginable"
+                warning={warnings.painScore}
                 inputProps={form.getInputProps('painScore')}
               />
             </SimpleGrid>
@@ -221,6 +239,7 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
               field="syringeRemainingMl"
               label="Syringe left (mL)"
               description={running ? `Of the ${running.volumeMl} mL syringe` : 'Read off the syringe'}
+              warning={warnings.syringeRemainingMl}
               inputProps={form.getInputProps('syringeRemainingMl')}
             />
           </SimpleGrid>
@@ -245,6 +264,7 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
             {...form.getInputProps('note')}
           />
         </SimpleGrid>
+        <ObservationFindings findings={findings} />
         <Group justify="flex-end">
           <Button type="submit" size="lg" loading={record.isPending} leftSection={<IconDeviceFloppy size={22} aria-hidden />}>
             Save observation

@@ -10,7 +10,6 @@ import {
   type ObservationCheckContext,
   type ObservationFormValues,
 } from './observation-form';
-import { observationWarnings } from './observation-warnings';
 
 const NOW = new Date('2026-03-03T14:00:00.000Z');
 
@@ -206,15 +205,5 @@ describe('toObservationRequest', () => {
     const request = toObservationRequest({ ...FILLED, at: '2026-03-03T12:30', note: ' Rousable to voice ' });
     expect(request.at).toBe((readLocalDateTime('2026-03-03T12:30') as Date).toISOString());
     expect(request.note).toBe('Rousable to voice');
-  });
-});
-
-describe('observationWarnings', () => {
-  it('gives the sedation scale’s action for 3 and 4, and breathing below the ward’s thresholds', () => {
-    const warnings = observationWarnings({ ...FILLED, respiratoryRate: 7, spo2: 89 }, { respiratoryRateThreshold: 8, spo2Threshold: 90 });
-    expect(warnings.sedationLevel).toMatch(/reduce the opioid dose by 25–50 % or notify the prescriber/);
-    expect(warnings.respiratoryRate).toBe('Below the ward’s 8/min: saving raises an urgent flag');
-    expect(warnings.spo2).toBe('Below the ward’s 90 %: saving raises an urgent flag');
-    expect(observationWarnings({ ...FILLED, sedationLevel: '2' }, { respiratoryRateThreshold: 8, spo2Threshold: 90 })).toEqual({});
   });
 });
