@@ -15,6 +15,7 @@ const URGENT_OBSERVATION = {
   sedationLevel: '3',
   respiratoryRate: 12,
   spo2: 95,
+  oxygenLitresPerMinute: 0, // air
   // One dose (1 mL at 0.2 mg/mL): recorded moments after the start, when the lockout allows only one.
   attempts: 6,
   delivered: 1,

@@ -31,6 +31,7 @@ export function observationRequests(
             sedationLevel: '1',
             respiratoryRate: 14,
             spo2: 97,
+            oxygenLitresPerMinute: 0,
             attempts: order.attempts,
             delivered: order.delivered,
             volumeInfusedMl: order.volumeInfusedMl,

@@ -121,6 +121,7 @@ describe('handover board', () => {
         sedationLevel: '1',
         respiratoryRate: 14,
         spo2: 97,
+        oxygenLitresPerMinute: 0,
         attempts: 13,
         delivered: 11,
         volumeInfusedMl: 11,

@@ -2,6 +2,7 @@ import request from 'supertest';
 import { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Patient } from '../src/patients/entities/patient.entity.js';
+import { Ward } from '../src/wards/entities/ward.entity.js';
 import { CALM_OBSERVATION as CALM, ORDER, SETTINGS } from './support/pca.js';
 import { activeOrder } from './support/pca-steps.js';
 import { createTestApp, type TestApp } from './support/test-app.js';
@@ -105,6 +106,26 @@ describe('observation vitals: NEWS2 bands, NEWS2 score, children’s bands', () 
     expect(codes(low.body)).toEqual(['urgent:spo2.low']);
   });
 
+  it('requires the oxygen beside SpO2 (0 for air), a device when oxygen runs and none on air, naming the field', async () => {
+    const order = await start();
+    const { oxygenLitresPerMinute: _air, ...withoutOxygen } = CALM;
+    const missing = await observe(order.id, withoutOxygen).expect(400);
+    expect(missing.body.errors).toEqual([
+      { field: 'oxygenLitresPerMinute', message: 'Record the oxygen: 0 for air, or litres per minute' },
+    ]);
+    await observe(order.id, { ...CALM, oxygenLitresPerMinute: null }).expect(400);
+    const noDevice = await observe(order.id, { ...CALM, oxygenLitresPerMinute: 2 }).expect(400);
+    expect(noDevice.body.errors).toEqual([{ field: 'oxygenDevice', message: 'Choose the oxygen device: oxygen is running at 2 L/min' }]);
+    const deviceOnAir = await observe(order.id, { ...CALM, oxygenDevice: 'simple-mask' }).expect(400);
+    expect(deviceOnAir.body.errors.map((e: { field: string }) => e.field)).toEqual(['oxygenDevice']);
+    // Nothing was saved by the refusals.
+    const list = await request(t.http)
+      .get(`/api/orders/${order.id}/observations`)
+      .set({ Authorization: `Bearer ${token.kai}` });
+    expect(list.body).toEqual([]);
+    await observe(order.id, { ...CALM, oxygenLitresPerMinute: 2, oxygenDevice: 'nasal-cannula' }).expect(201);
+  });
+
   it.each([
     [{ heartRate: 301 }, 'heartRate'],
     [{ temperatureC: 50 }, 'temperatureC'],
@@ -136,5 +157,25 @@ describe('observation vitals: NEWS2 bands, NEWS2 score, children’s bands', () 
     expect(codes(body)).toEqual(['review:respiratory-rate.review']);
     expect(body.news2).toBeNull();
     expect(body.news2NotScored).toMatch(/under 16/);
+  });
+
+  it('the ward’s population, not its weight-based dosing, brings the children’s bands: RR 12/min at 17 on a paediatric ward', async () => {
+    const wards = t.app.get(DataSource).getRepository(Ward);
+    const patient = await t.addPatient();
+    const order = await start(patient);
+    const seventeen = new Date(Date.now() - 17.5 * 365.25 * 86_400_000).toISOString().slice(0, 10);
+    await t.app.get(DataSource).getRepository(Patient).update({ id: patient.id }, { dateOfBirth: seventeen });
+    const { wardId } = await t.app.get(DataSource).getRepository(Patient).findOneByOrFail({ id: patient.id });
+    // An adult ward: RR 12 scores 0 on NEWS2 (RCP 2017).
+    expect(codes((await observe(order.id, { ...CALM, respiratoryRate: 12 }).expect(201)).body)).toEqual([]);
+    await wards.update({ id: wardId }, { population: 'paediatric' });
+    try {
+      expect((await wards.findOneByOrFail({ id: wardId })).weightBasedDosing).toBe(false);
+      // Over 12 years: normal RR 15–20 (APLS, as tabulated by Fleming et al., Lancet 2011) → review.
+      const { body } = await observe(order.id, { ...CALM, attempts: 3, respiratoryRate: 12 }).expect(201);
+      expect(codes(body)).toEqual(['review:respiratory-rate.review']);
+    } finally {
+      await wards.update({ id: wardId }, { population: 'adult' });
+    }
   });
 });

@@ -92,6 +92,7 @@ export * from './api/email.js';
 export * from './bedside/bedside-requests.schema.js';
 export * from './bedside/pause-requests.schema.js';
 export * from './observations/observations-requests.schema.js';
+export * from './observations/oxygen.js';
 export * from './flags/flags-requests.schema.js';
 export * from './handover/handover-requests.schema.js';
 export * from './wards/wards-requests.schema.js';

@@ -9,6 +9,7 @@ import {
   type ObservationResponse,
   observationTimelineErrors,
   ORDER_STATUS_LABELS,
+  oxygenErrors,
   type PreviousReading,
   type RecordedObservation,
   syringeStartReading,
@@ -45,6 +46,8 @@ export class ObservationsService {
   ) {}
 
   async record(orderId: number, dto: CreateObservationDto, nurse: AuthUser): Promise<RecordedObservation> {
+    const oxygen = oxygenErrors(dto);
+    if (oxygen.length > 0) throw fieldErrors('The observation needs correcting', oxygen);
     const { order, observation, raised } = await this.dataSource.transaction(async (manager) => {
       const found = await this.orders.load(manager, orderId);
       if (found.status !== 'active') {

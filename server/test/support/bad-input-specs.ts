@@ -126,7 +126,7 @@ export const OBSERVATION: BodySpec = {
   delivered: count(100_000),
   volumeInfusedMl: { type: 'number', min: 0, max: 1000 },
   syringeRemainingMl: { type: 'number', min: 0, max: 1000 },
-  oxygenLitresPerMinute: { type: 'number', min: 0, max: 60, presence: 'optional' },
+  oxygenLitresPerMinute: { type: 'number', min: 0, max: 60 },
   oxygenDevice: { type: 'enum', values: OXYGEN_DEVICES, presence: 'optional' },
   heartRate: { type: 'number', int: true, min: 0, max: 300, presence: 'optional' },
   systolicBp: { type: 'number', int: true, min: 0, max: 300, presence: 'optional' },

@@ -114,6 +114,7 @@ export async function seedBoardWard(dataSource: DataSource, code: string, beds: 
             sedationLevel: '1',
             respiratoryRate: 14,
             spo2: 97,
+            oxygenLitresPerMinute: 0,
             attempts: 12,
             delivered: 10,
             volumeInfusedMl: 50 - remaining,

@@ -91,6 +91,7 @@ export const CALM_OBSERVATION: Omit<ObservationValues, 'at'> = {
   sedationLevel: '1',
   respiratoryRate: 14,
   spo2: 97,
+  oxygenLitresPerMinute: 0, // air: always recorded beside SpO2
   // One dose: tests record it moments after the start, and a lockout allows only one press in no time.
   attempts: 2,
   delivered: 1,

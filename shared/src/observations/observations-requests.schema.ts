@@ -16,6 +16,9 @@ export const OXYGEN_DEVICE_LABELS: Record<OxygenDevice, string> = {
   other: 'Other',
 };
 
+/** What a request without the oxygen is told: SpO2 is always recorded, and oxygen beside it. */
+export const OXYGEN_REQUIRED_MESSAGE = 'Record the oxygen: 0 for air, or litres per minute';
+
 /** A number in a range, with the DTO's words; optional (blank is "not recorded"). */
 const ranged = (min: number, max: number, whole: boolean, messages: { type: string; range: string }) => {
   const base = z.number(must(messages.type, messages.type));
@@ -52,11 +55,14 @@ export const createObservationSchema = z.strictObject({
     negative: 'SpO2 is 0 to 100 %',
     tooLarge: 'SpO2 is 0 to 100 %',
   }),
-  /** Supplemental oxygen in L/min; 0 is air. Oxygen keeps the oximeter up while breathing slows. */
-  oxygenLitresPerMinute: ranged(0, 60, false, {
-    type: 'Oxygen is a number of litres per minute (0 for air)',
-    range: 'Oxygen is 0 (air) to 60 L/min',
-  }),
+  /**
+   * Supplemental oxygen in L/min; 0 is air. Required: SpO2 is always recorded, and oxygen keeps the oximeter up
+   * while breathing slows. The device goes with it (shared oxygenErrors: needed above 0, refused at 0).
+   */
+  oxygenLitresPerMinute: z
+    .number(must(OXYGEN_REQUIRED_MESSAGE, 'Oxygen is a number of litres per minute (0 for air)'))
+    .min(0, 'Oxygen is 0 (air) to 60 L/min')
+    .max(60, 'Oxygen is 0 (air) to 60 L/min'),
   oxygenDevice: z.enum(OXYGEN_DEVICES, must('Choose the oxygen device', 'Choose the oxygen device from the list')).nullish(),
   heartRate: ranged(0, 300, true, { type: 'Heart rate is a whole number per minute', range: 'Heart rate is 0 to 300 per minute' }),
   systolicBp: ranged(0, 300, true, {

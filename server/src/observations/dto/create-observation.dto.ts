@@ -4,6 +4,7 @@ import {
   type Consciousness,
   type CreateObservationRequest,
   OXYGEN_DEVICES,
+  OXYGEN_REQUIRED_MESSAGE,
   type OxygenDevice,
   SEDATION_LEVELS,
   type SedationLevel,
@@ -79,14 +80,24 @@ export class CreateObservationDto implements CreateObservationRequest {
   @IsDefined({ message: 'Enter the volume left in the syringe' })
   syringeRemainingMl: number;
 
-  @ApiPropertyOptional({ type: 'number', minimum: 0, maximum: 60, example: 0, description: 'Supplemental oxygen in L/min; 0 is air' })
+  @ApiProperty({
+    type: 'number',
+    minimum: 0,
+    maximum: 60,
+    example: 0,
+    description: 'Supplemental oxygen in L/min, always recorded beside SpO2; 0 is air',
+  })
   @Max(60, { message: 'Oxygen is 0 (air) to 60 L/min' })
   @Min(0, { message: 'Oxygen is 0 (air) to 60 L/min' })
   @IsNumber(finite, { message: 'Oxygen is a number of litres per minute (0 for air)' })
-  @IsOptional()
-  oxygenLitresPerMinute?: number | null;
+  @IsDefined({ message: OXYGEN_REQUIRED_MESSAGE })
+  oxygenLitresPerMinute: number;
 
-  @ApiPropertyOptional({ enum: OXYGEN_DEVICES, example: 'nasal-cannula', description: 'How oxygen is given' })
+  @ApiPropertyOptional({
+    enum: OXYGEN_DEVICES,
+    example: 'nasal-cannula',
+    description: 'How oxygen is given: required when oxygen is above 0 L/min, refused on air',
+  })
   @IsIn(OXYGEN_DEVICES, { message: 'Choose the oxygen device from the list' })
   @IsOptional()
   oxygenDevice?: OxygenDevice | null;

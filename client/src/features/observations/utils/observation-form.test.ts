@@ -96,7 +96,9 @@ describe('plausible ranges', () => {
     const errors = validateObservationForm(emptyObservationForm(), CONTEXT);
     expect(errors.sedationLevel).toBe('Choose the sedation level');
     expect(errors.painScore).toBe('Enter the pain score');
-    expect(Object.keys(errors)).toHaveLength(8);
+    // Oxygen too: SpO2 is always recorded, and the oxygen beside it (0 for air).
+    expect(errors.oxygenLitresPerMinute).toBe('Record the oxygen: 0 for air, or litres per minute');
+    expect(Object.keys(errors)).toHaveLength(9);
   });
 });
 

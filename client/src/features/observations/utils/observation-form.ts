@@ -1,6 +1,7 @@
 import {
   type Consciousness,
   observationTimelineErrors,
+  OXYGEN_REQUIRED_MESSAGE,
   type OxygenDevice,
   pumpTotalsAround,
   SEDATION_LEVELS,
@@ -145,7 +146,7 @@ export const NUMBER_RULES: Record<NumberField, NumberRule> = {
     min: 0,
     max: 60,
     integer: false,
-    empty: 'Enter the oxygen in L/min (0 for air)',
+    empty: OXYGEN_REQUIRED_MESSAGE,
     notWhole: '',
     below: 'Oxygen is 0 (air) to 60 L/min',
     above: 'Oxygen is 0 (air) to 60 L/min',
@@ -229,9 +230,8 @@ export function validateObservationForm(values: ObservationFormValues, context: 
     const error = numberFieldError(field, values[field]);
     if (error) errors[field] = error;
   }
-  // Oxygen is said beside SpO2: air is 0.
-  if (readNumber(values.oxygenLitresPerMinute) === null && readNumber(values.spo2) !== null)
-    errors.oxygenLitresPerMinute = 'Enter the oxygen in L/min (0 for air): oxygen raises the SpO2 while breathing slows';
+  // Oxygen is always said beside SpO2 (the server requires it): air is 0.
+  if (readNumber(values.oxygenLitresPerMinute) === null) errors.oxygenLitresPerMinute = OXYGEN_REQUIRED_MESSAGE;
   const litres = readNumber(values.oxygenLitresPerMinute);
   if (typeof litres === 'number' && litres > 0 && values.oxygenDevice === '') errors.oxygenDevice = 'Choose the oxygen device';
   if (!(SEDATION_LEVELS as readonly string[]).includes(values.sedationLevel)) errors.sedationLevel = 'Choose the sedation level';
@@ -286,6 +286,7 @@ export function toObservationRequest(values: ObservationFormValues): CreateObser
     delivered: number('delivered'),
     volumeInfusedMl: number('volumeInfusedMl'),
     syringeRemainingMl: number('syringeRemainingMl'),
+    oxygenLitresPerMinute: number('oxygenLitresPerMinute'),
     ...optionalVitals(values),
     ...(note ? { note } : {}),
   };
