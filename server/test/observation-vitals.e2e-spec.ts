@@ -7,9 +7,9 @@ import { CALM_OBSERVATION as CALM, ORDER, SETTINGS } from './support/pca.js';
 import { activeOrder } from './support/pca-steps.js';
 import { createTestApp, type TestApp } from './support/test-app.js';
 
-// Breathing bands: Royal College of Physicians, National Early Warning Score (NEWS) 2, 2017 (adults); APLS normal
-// values (Advanced Life Support Group, 6th ed., 2016) and APAGBI Good Practice in Postoperative and Procedural Pain
-// Management (2012), from memory, for children.
+// Breathing bands: Royal College of Physicians, National Early Warning Score (NEWS) 2, 2017 (adults); for children,
+// APLS normal ranges as published in Fleming et al., Lancet 2011;377:1011–1018 (web appendix, Web Box 1), and urgent
+// rates from memory of APAGBI Good Practice in Postoperative and Procedural Pain Management (2012).
 describe('observation vitals: NEWS2 bands, NEWS2 score, children’s bands', () => {
   let t: TestApp;
   const token = {} as Record<'amara' | 'lin' | 'kai', string>;
@@ -153,7 +153,7 @@ describe('observation vitals: NEWS2 bands, NEWS2 score, children’s bands', () 
       consciousness: 'alert',
       oxygenLitresPerMinute: 0,
     }).expect(201);
-    // APLS 2–5 years: normal RR 25–30 (from memory); below 15 urgent (APAGBI 2012, from memory).
+    // APLS 2–5 years: normal RR 25–30 (Fleming et al. 2011, Web Box 1); below 15 urgent (APAGBI 2012, from memory).
     expect(codes(body)).toEqual(['review:respiratory-rate.review']);
     expect(body.news2).toBeNull();
     expect(body.news2NotScored).toMatch(/under 16/);

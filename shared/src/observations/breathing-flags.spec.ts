@@ -59,9 +59,10 @@ describe('breathingFlags, adults: NEWS2 bands (Royal College of Physicians, NEWS
   });
 });
 
-// Children: APLS normal values (Advanced Life Support Group, 6th ed., 2016) and APAGBI Good Practice in Postoperative
-// and Procedural Pain Management (2012), both from memory.
-describe('breathingFlags, children: age bands (APLS 2016; APAGBI 2012; from memory)', () => {
+// Children: APLS normal ranges as published in Fleming et al., Normal ranges of heart rate and respiratory rate in
+// children from birth to 18 years of age, Lancet 2011;377:1011–1018 (web appendix, Web Box 1); urgent rates from
+// memory of APAGBI Good Practice in Postoperative and Procedural Pain Management (2012).
+describe('breathingFlags, children: age bands (APLS per Fleming et al. 2011; APAGBI 2012 from memory)', () => {
   const child = (ageYears: number): VitalsPatient => ({ ageYears, paediatricWard: true, spo2Scale: '1' });
   it('a 4-year-old: RR 14 urgent (below 15), RR 20 review (below the normal 25), RR 28 nothing, RR 34 review high', () => {
     expect(codes({ ...calm, respiratoryRate: 14 }, child(4))).toEqual(['urgent:respiratory-rate.low']);

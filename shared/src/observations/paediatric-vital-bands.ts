@@ -2,9 +2,15 @@
  * Age-banded respiratory and heart rates for children, used instead of the adult (NEWS2) bands on a paediatric
  * ward or for a patient under 16.
  *
- * Normal ranges: Advanced Life Support Group, Advanced Paediatric Life Support (APLS): a practical approach to
- * emergencies, 6th edition, Wiley-Blackwell, 2016, table of normal vital signs by age (values from memory of
- * that table; confirm against the edition the ward uses). Outside the normal range → review.
+ * Normal ranges: the Advanced Paediatric Life Support (APLS, Advanced Life Support Group) ranges as published in
+ * Fleming S, Thompson M, Stevens R, Heneghan C, Plüddemann A, Maconochie I, Tarassenko L, Mant D. Normal ranges
+ * of heart rate and respiratory rate in children from birth to 18 years of age: a systematic review of
+ * observational studies. Lancet 2011;377(9770):1011–1018, web appendix, Web Box 1 "Existing reference ranges"
+ * (row APLS/PHPLS). That table states, per age in years, RR 30–40 (0–1), 25–35 (1–2), 25–30 (2–3, 3–4, 4–5),
+ * 20–25 (5–6, 6–12), 15–20 (12–13, 13–18) and HR 110–160 (0–1), 100–150 (1–2), 95–140 (2–3, 3–5), 80–120
+ * (5–6, 6–10, 10–12), 60–100 (12–13, 13–18): the bands below, unchanged. Fleming et al. found these ranges
+ * often disagree with measured centiles, and the APLS 6th edition (2016) gives 5th–95th centile ranges at rest
+ * instead; a ward using those should change these values. Outside the normal range → review.
  *
  * Urgent respiratory rates for a child on an opioid infusion or PCA: from memory of the Association of
  * Paediatric Anaesthetists of Great Britain and Ireland, Good Practice in Postoperative and Procedural Pain
@@ -15,11 +21,11 @@ export type PaediatricVitalBand = {
   /** Applies from this age in whole years (inclusive) up to the next band's. */
   fromYears: number;
   label: string;
-  /** APLS normal respiratory rate per minute (from memory). */
+  /** APLS normal respiratory rate per minute (Fleming et al., Lancet 2011, web appendix Web Box 1). */
   respiratoryRate: { low: number; high: number };
   /** Below this rate per minute is urgent (APAGBI 2012, from memory). */
   respiratoryRateUrgentBelow: number;
-  /** APLS normal heart rate per minute (from memory). */
+  /** APLS normal heart rate per minute (Fleming et al., Lancet 2011, web appendix Web Box 1). */
   heartRate: { low: number; high: number };
 };
 
@@ -62,7 +68,7 @@ export const PAEDIATRIC_VITAL_BANDS: readonly PaediatricVitalBand[] = [
 ];
 
 export const PAEDIATRIC_BANDS_SOURCE =
-  'APLS normal values (Advanced Life Support Group, 6th ed., 2016) and APAGBI Good Practice in Postoperative and Procedural Pain Management (2012), from memory';
+  'APLS normal ranges as tabulated by Fleming et al., Lancet 2011 (web appendix, Web Box 1); urgent rates from memory of APAGBI Good Practice in Postoperative and Procedural Pain Management (2012)';
 
 /** The band for a child's age in whole years; null for an unknown, negative or non-finite age. */
 export function paediatricVitalBand(ageYears: number | null): PaediatricVitalBand | null {
