@@ -4,6 +4,7 @@ import { IconAlertCircle, IconAlertTriangle, IconLungs } from '@tabler/icons-rea
 import { ageInYears, type Patient, PRESCRIBING_ROLES, type Spo2Scale } from '@lockstep/shared';
 import { useUpdateSpo2Scale } from '@/api/patients/update-spo2-scale';
 import { useWardPolicy } from '@/api/wards/get-ward-policy';
+import { useWards } from '@/api/wards/get-wards';
 import { errorMessage } from '@/lib/api-error';
 import { useCurrentUser } from '@/lib/auth/use-session';
 import { notifySuccess } from '@/lib/notify';
@@ -24,7 +25,9 @@ export function Spo2ScaleSection({ patient }: { patient: Patient }) {
   const [confirming, setConfirming] = useState<Spo2Scale | null>(null);
   const current = patient.spo2Scale;
   const next = otherSpo2Scale(current);
-  const child = ageInYears(patient.dateOfBirth) < NEWS2_FROM_AGE;
+  const ward = useWards().data?.find((candidate) => candidate.id === patient.wardId);
+  // As the breathing flags read it: a child, or anyone on a paediatric ward, is flagged by the children's bands.
+  const child = ageInYears(patient.dateOfBirth) < NEWS2_FROM_AGE || ward?.population === 'paediatric';
 
   const close = () => {
     update.reset();
@@ -58,7 +61,7 @@ export function Spo2ScaleSection({ patient }: { patient: Patient }) {
       <Text size="sm">{spo2BandsText(current, policy)}.</Text>
       {child ? (
         <Text size="sm" c="dimmed">
-          Under {NEWS2_FROM_AGE}: SpO2 is flagged by the children’s bands, whatever the scale.
+          Children (under {NEWS2_FROM_AGE}, or on a paediatric ward): SpO2 is flagged by the children’s bands, whatever the scale.
         </Text>
       ) : null}
       {canChange ? (
