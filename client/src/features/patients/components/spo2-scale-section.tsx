@@ -10,7 +10,7 @@ import { useCurrentUser } from '@/lib/auth/use-session';
 import { notifySuccess } from '@/lib/notify';
 import { otherSpo2Scale, SPO2_SCALE_NAMES, spo2BandsText, spo2ScaleChangeConsequence } from '../utils/spo2-scale';
 
-/** NEWS2 starts at 16 (Royal College of Physicians, NEWS2, 2017); children's SpO2 is read by the paediatric bands. */
+/** NEWS2 starts at 16 (Royal College of Physicians, NEWS2, 2017); children's SpO2 keeps scale 1's bands (the breathing flags). */
 const NEWS2_FROM_AGE = 16;
 
 /**
@@ -26,7 +26,7 @@ export function Spo2ScaleSection({ patient }: { patient: Patient }) {
   const current = patient.spo2Scale;
   const next = otherSpo2Scale(current);
   const ward = useWards().data?.find((candidate) => candidate.id === patient.wardId);
-  // As the breathing flags read it: a child, or anyone on a paediatric ward, is flagged by the children's bands.
+  // As the breathing flags read it: a child, or anyone on a paediatric ward, is flagged by the children's bands, SpO2 on scale 1's.
   const child = ageInYears(patient.dateOfBirth) < NEWS2_FROM_AGE || ward?.population === 'paediatric';
 
   const close = () => {
@@ -61,7 +61,8 @@ export function Spo2ScaleSection({ patient }: { patient: Patient }) {
       <Text size="sm">{spo2BandsText(current, policy)}.</Text>
       {child ? (
         <Text size="sm" c="dimmed">
-          Children (under {NEWS2_FROM_AGE}, or on a paediatric ward): SpO2 is flagged by the children’s bands, whatever the scale.
+          Children (under {NEWS2_FROM_AGE}, or on a paediatric ward): SpO2 is flagged on scale 1’s bands whatever the scale, and NEWS2 is
+          not scored.
         </Text>
       ) : null}
       {canChange ? (
