@@ -4,6 +4,7 @@ import { useSearchParams } from 'react-router-dom';
 import type { HandoverRow, SignoffRole, Ward } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { paths } from '@/config/paths';
+import { wardKindLabel } from '@/utils/ward-kind';
 import { useHandoverBoard } from '../api/get-handover-board';
 import { useWardStream } from '../hooks/use-ward-stream';
 import { useWardParam } from '../hooks/use-ward-param';
@@ -31,6 +32,7 @@ export function HandoverScreen({ wards, wardsLoading, canSignOff }: HandoverScre
   const [signing, setSigning] = useState<{ orderId: number; role: SignoffRole } | null>(null);
 
   const rows = useMemo(() => board.data?.rows ?? [], [board.data]);
+  const kind = wardKindLabel(wards.find((ward) => ward.id === board.data?.wardId));
   const shown = useMemo(() => filterRows(rows, filters), [rows, filters]);
   // The open modal follows the row as the board refreshes underneath it.
   const signingRow: HandoverRow | undefined = signing ? rows.find((row) => row.orderId === signing.orderId) : undefined;
@@ -53,7 +55,8 @@ export function HandoverScreen({ wards, wardsLoading, canSignOff }: HandoverScre
           <Title order={1}>Handover</Title>
           {board.data ? (
             <Text size="sm" c="dimmed" data-testid="board-shift">
-              {board.data.wardName} · {formatShift(board.data.shift)}
+              {board.data.wardName}
+              {kind ? ` · ${kind}` : ''} · {formatShift(board.data.shift)}
             </Text>
           ) : (
             <Skeleton height={18} width={260} />

@@ -2,6 +2,7 @@ import { Alert, Select, Skeleton, Stack, Text, Title } from '@mantine/core';
 import { IconAdjustments } from '@tabler/icons-react';
 import { LOCAL_POLICY_CAUTION, type Ward, type WardPolicySettings } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
+import { wardKindLabel } from '@/utils/ward-kind';
 import { useWardPolicy } from '@/api/wards/get-ward-policy';
 import { useWardPolicyChanges } from '@/api/ward-policy-changes/get-ward-policy-changes';
 import { PendingPolicyChange } from './pending-policy-change';
@@ -69,6 +70,7 @@ export function WardPolicyScreen({ wards, wardsLoading, wardId, onWardChange }: 
         label="Ward"
         data={wards.map((candidate) => ({ value: String(candidate.id), label: candidate.name }))}
         value={ward ? String(ward.id) : null}
+        description={wardKindLabel(ward) ?? undefined}
         onChange={(value) => value && onWardChange(Number(value))}
         allowDeselect={false}
         maw={320}
