@@ -58,7 +58,7 @@ export function Spo2ScaleSection({ patient }: { patient: Patient }) {
           {SPO2_SCALE_NAMES[current]}
         </Text>
       </Group>
-      <Text size="sm">{spo2BandsText(current, policy)}.</Text>
+      <Text size="sm">{spo2BandsText(child ? '1' : current, policy)}.</Text>
       {child ? (
         <Text size="sm" c="dimmed">
           Children (under {NEWS2_FROM_AGE}, or on a paediatric ward): SpO2 is flagged on scale 1’s bands whatever the scale, and NEWS2 is
