@@ -6,7 +6,8 @@ import { startServer, type RunningServer } from './support/server.js';
 
 // The demo's Harbour ward (id 1) keeps SpO2 below 92 % as its shipped threshold (NEWS2's floor); the demo order
 // for NOAH ACHTERBERG (H02) waits for verification. Besides the demo's own back-story, the API
-// makes two events here: Lin Park verifies that order, Sam Rivera raises Harbour's SpO2 threshold.
+// makes these events here: Lin Park verifies that order, Sam Rivera proposes raising Harbour's SpO2 threshold and
+// Mei Tan (charge nurse) signs it off, which changes the policy.
 const HARBOUR = 1;
 
 type OrderSummary = { id: number; status: string };
@@ -37,8 +38,15 @@ describe('audit trail', () => {
     if (!order) throw new Error('The demo has no order awaiting verification');
     verifiedId = order.id;
     await callApi(server.baseUrl, lin, 'POST', `/orders/${verifiedId}/verify`, { signature: { password: DEMO_PASSWORD } });
+    // A clinical setting changes by a signed proposal that a charge nurse signs off (then it is audited as changed).
     const sam = await apiToken(server.baseUrl, 'sam.rivera');
-    await callApi(server.baseUrl, sam, 'PATCH', `/wards/${HARBOUR}/policy`, { spo2Threshold: 93 });
+    const proposed = await callApi<{ id: number }>(server.baseUrl, sam, 'POST', `/wards/${HARBOUR}/policy-changes`, {
+      changes: { spo2Threshold: 93 },
+      reason: 'Flag SpO2 of 92 % as urgent on Harbour',
+      signature: { password: DEMO_PASSWORD },
+    });
+    const mei = await apiToken(server.baseUrl, 'mei.tan');
+    await callApi(server.baseUrl, mei, 'POST', `/wards/policy-changes/${proposed.id}/sign-off`, { signature: { password: DEMO_PASSWORD } });
   });
   afterAll(async () => {
     await browser?.close();
@@ -59,9 +67,10 @@ describe('audit trail', () => {
     await expect.poll(() => auditRows(page).count()).toBe(1);
     const policyRow = auditRows(page).first();
     const policyText = await policyRow.innerText();
-    expect(policyText).toContain('Sam Rivera');
+    // The change applies at the sign-off: the charge nurse who signed it off changed the policy; the proposer is named.
+    expect(policyText).toContain('Mei Tan');
     expect(policyText).toContain('Ward Harbour');
-    expect(policyText).toContain('92 → 93');
+    expect(policyText).toContain('Proposed by: Sam Rivera');
     await snapshot(page, 'audit-ward-policy');
 
     await policyRow.click();
@@ -71,6 +80,7 @@ describe('audit trail', () => {
     expect(hashes).toHaveLength(2);
     for (const hash of hashes) expect(hash).toMatch(/^[0-9a-f]{12}$/);
     await drawer.getByText('SpO₂ threshold').waitFor();
+    expect(await drawer.innerText()).toContain('92 → 93');
     await snapshot(page, 'audit-event-details');
     await page.keyboard.press('Escape');
     await drawer.waitFor({ state: 'detached' });

@@ -1,6 +1,6 @@
 import type { Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { openBrowser, signIn, signInHome, snapshot as saveSnapshot, type BrowserSession } from './support/browser.js';
+import { DEMO_PASSWORD, openBrowser, signIn, signInHome, snapshot as saveSnapshot, type BrowserSession } from './support/browser.js';
 import { apiToken, callApi } from './support/api.js';
 import { startFaleoloPca } from './support/demo-pca.js';
 import { startServer, type RunningServer } from './support/server.js';
@@ -59,6 +59,7 @@ describe('observations: flags, usage charts and acknowledgement', () => {
   let server: RunningServer;
   let kai: BrowserSession;
   let sam: BrowserSession | undefined;
+  let mei: BrowserSession | undefined;
   let order: OrderSummary;
 
   beforeAll(async () => {
@@ -68,6 +69,7 @@ describe('observations: flags, usage charts and acknowledgement', () => {
     await signInHome(kai.page, 'kai.mendes');
   });
   afterAll(async () => {
+    await mei?.close();
     await sam?.close();
     await kai?.close();
     await server?.stop();
@@ -228,7 +230,7 @@ describe('observations: flags, usage charts and acknowledgement', () => {
     await snapshot(page, 'observations-flag-acknowledged');
   });
 
-  it('sam.rivera sets Harbour’s SpO2 threshold to 92 %, and an out-of-range value is refused beside the field', async () => {
+  it('sam.rivera proposes Harbour’s SpO2 threshold of 93 %, signed with a reason; nothing changes until a clinician signs it off', async () => {
     sam = await openBrowser(server.baseUrl);
     const { page } = sam;
     await signIn(page, 'sam.rivera');
@@ -237,22 +239,88 @@ describe('observations: flags, usage charts and acknowledgement', () => {
     await page.getByRole('combobox', { name: 'Ward' }).click();
     await page.getByRole('option', { name: 'Harbour' }).click();
     await expect.poll(() => new URL(page.url()).searchParams.get('ward')).not.toBeNull();
+    const wardId = Number(new URL(page.url()).searchParams.get('ward'));
+    const token = await apiToken(server.baseUrl, 'sam.rivera');
+    const spo2Threshold = async () =>
+      (await callApi<{ spo2Threshold: number }>(server.baseUrl, token, 'GET', `/wards/${wardId}/policy`)).spo2Threshold;
 
     const spo2 = page.getByLabel('SpO2 below');
     // Shipped default: urgent at 91 % or below (NEWS2 scale 1, Royal College of Physicians 2017).
     expect(await spo2.inputValue()).toBe('92');
     expect(await page.getByTestId('default-spo2Threshold').innerText()).toMatch(/^Shipped default\s+92 %$/);
     await spo2.fill('93');
-    await page.getByRole('button', { name: 'Save' }).click();
-    await page.getByText('Ward policy saved').waitFor();
-    await page.getByTestId('default-spo2Threshold').getByText('Changed locally').waitFor();
-    const token = await apiToken(server.baseUrl, 'sam.rivera');
+    await page.getByRole('button', { name: 'Propose change' }).click();
+    const dialog = await readyDialog(page, 'Propose a change to Harbour’s policy');
+    const row = dialog.getByRole('table', { name: 'Settings to change' }).getByRole('row', { name: /SpO2 below/ });
+    expect(await row.innerText()).toMatch(/SpO2 below\s+92 %\s+→\s*93 %/);
+    // Reason and password are required, each said beside its field.
+    await dialog.getByRole('button', { name: 'Sign and propose' }).click();
+    await dialog.getByText('Give a reason of at least 10 characters').waitFor();
+    await dialog.getByText('Enter your password to sign').waitFor();
+    await dialog.getByLabel('Reason for the change').fill('Two near-misses on Harbour: flag SpO2 of 92 % as urgent too');
+    await dialog.getByLabel('Your password').fill(DEMO_PASSWORD);
+    await snapshot(page, 'ward-policy-propose');
+    await dialog.getByRole('button', { name: 'Sign and propose' }).click();
+    await dialog.waitFor({ state: 'hidden' });
+    await page.getByText('Change proposed', { exact: true }).waitFor();
+
+    // Pending: the ward still works to 92 %, the change shows above the form and holds another proposal.
+    expect(await spo2Threshold()).toBe(92);
+    const pending = page.getByRole('region', { name: 'Awaiting sign-off by a charge nurse or pharmacist' });
+    await pending.waitFor();
+    expect(await pending.innerText()).toContain('Proposed by Sam Rivera');
+    expect(await pending.getByRole('row', { name: /SpO2 below/ }).innerText()).toMatch(/92 %\s+→\s*93 %/);
+    expect(await spo2.inputValue()).toBe('92');
+    await page.getByText(/^A change proposed by Sam Rivera is awaiting sign-off/).waitFor();
+    await spo2.fill('94');
+    expect(await page.getByRole('button', { name: 'Propose change' }).isDisabled()).toBe(true);
+    await page.getByRole('button', { name: 'Undo changes' }).click();
+    const waiting = await callApi<{ status: string; settings: { field: string; from: number; to: number }[] }[]>(
+      server.baseUrl,
+      token,
+      'GET',
+      `/wards/policy-changes?status=pending&wardId=${wardId}`,
+    );
+    expect(waiting).toHaveLength(1);
+    expect(waiting[0]?.settings).toEqual([{ field: 'spo2Threshold', from: 92, to: 93 }]);
+    await snapshot(page, 'ward-policy-pending');
+  });
+
+  it('mei.tan, charge nurse, signs the change off with her password: Harbour now flags below 93 %', async () => {
+    mei = await openBrowser(server.baseUrl);
+    const { page } = mei;
+    await signInHome(page, 'mei.tan');
+    await page.getByRole('navigation').getByRole('link', { name: 'Ward policy sign-off' }).click();
+    await page.getByRole('heading', { name: 'Ward policy sign-off', level: 1 }).waitFor();
+    const change = page.getByRole('article', { name: 'Harbour' });
+    await change.getByText('Two near-misses on Harbour').waitFor();
+    expect(await change.innerText()).toContain('Proposed by Sam Rivera');
+    // Now, proposed and the shipped default side by side.
+    expect(await change.getByRole('row', { name: /SpO2 below/ }).innerText()).toMatch(/92 %\s+→\s*93 %\s+92 %/);
+    await snapshot(page, 'ward-policy-sign-off');
+    await change.getByRole('button', { name: 'Sign off' }).click();
+    const dialog = await readyDialog(page, 'Sign off Harbour’s policy change');
+    await dialog.getByLabel('Your password').fill(DEMO_PASSWORD);
+    await dialog.getByRole('button', { name: 'Sign off' }).click();
+    await dialog.waitFor({ state: 'hidden' });
+    await page.getByText('No ward policy change is waiting for sign-off.').waitFor();
+  });
+
+  it('sam.rivera sees the change applied in Recent changes, and a value past the floor is refused beside the field', async () => {
+    if (!sam) throw new Error('sam.rivera signed in above');
+    const { page } = sam;
     const wardId = Number(new URL(page.url()).searchParams.get('ward'));
+    const token = await apiToken(server.baseUrl, 'sam.rivera');
     expect((await callApi<{ spo2Threshold: number }>(server.baseUrl, token, 'GET', `/wards/${wardId}/policy`)).spo2Threshold).toBe(93);
-    // The change is audited, and the screen shows who changed what beneath the form.
+    await page.reload();
+    const spo2 = page.getByLabel('SpO2 below');
+    await expect.poll(() => spo2.inputValue()).toBe('93');
+    await page.getByTestId('default-spo2Threshold').getByText('Changed locally').waitFor();
+    expect(await page.getByRole('region', { name: 'Awaiting sign-off by a charge nurse or pharmacist' }).count()).toBe(0);
+    // The change is audited, signed off by the charge nurse: the screen shows who changed what beneath the form.
     const recent = page.getByRole('region', { name: 'Recent changes' });
     await recent.getByText('→ 93').waitFor();
-    expect(await recent.innerText()).toContain('Sam Rivera');
+    expect(await recent.innerText()).toContain('Mei Tan');
 
     // Past the floor: 91 % or below is always urgent.
     await spo2.fill('91');
