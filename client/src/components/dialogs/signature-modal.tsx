@@ -1,5 +1,6 @@
+import { SigningPasswordInput } from './signing-password-input';
 import type { ReactNode } from 'react';
-import { PasswordInput, type ModalProps } from '@mantine/core';
+import { type ModalProps } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconSignature } from '@tabler/icons-react';
 import { isApiRequestError, isSignatureError } from '@/lib/api-error';
@@ -70,16 +71,7 @@ export function SignatureModal({
       backLabel={backLabel}
       confirm={{ label: confirmLabel, icon: <IconSignature size={16} aria-hidden />, pending }}
       instead={instead}
-      field={
-        <PasswordInput
-          label="Your password"
-          description={passwordDescription}
-          autoComplete="current-password"
-          size="md"
-          data-autofocus
-          {...form.getInputProps('password')}
-        />
-      }
+      field={<SigningPasswordInput description={passwordDescription} data-autofocus {...form.getInputProps('password')} />}
     >
       {children}
     </FormModal>

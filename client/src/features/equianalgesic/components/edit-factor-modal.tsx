@@ -1,5 +1,6 @@
+import { SigningPasswordInput } from '@/components/dialogs/signing-password-input';
 import { useState } from 'react';
-import { Alert, Button, Group, Modal, PasswordInput, Select, Stack, Text, Textarea } from '@mantine/core';
+import { Alert, Button, Group, Modal, Select, Stack, Text, Textarea } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconAlertCircle, IconSignature } from '@tabler/icons-react';
 import { DOSE_UNITS, EQUIANALGESIC_SOURCE_MAX_LENGTH, tallMan, type DoseUnit } from '@lockstep/shared';
@@ -94,12 +95,7 @@ export function EditFactorModal({ factor, onClose }: EditFactorModalProps) {
             withAsterisk
             {...form.getInputProps('source')}
           />
-          <PasswordInput
-            label="Your password"
-            description="Type your password again to sign the change"
-            autoComplete="current-password"
-            {...form.getInputProps('password')}
-          />
+          <SigningPasswordInput description="Type your password again to sign the change" {...form.getInputProps('password')} />
           <Group justify="flex-end">
             <Button variant="default" onClick={onClose}>
               Cancel

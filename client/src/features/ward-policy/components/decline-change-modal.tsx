@@ -1,5 +1,6 @@
+import { SigningPasswordInput } from '@/components/dialogs/signing-password-input';
 import { useState } from 'react';
-import { PasswordInput, Stack, Text, Textarea } from '@mantine/core';
+import { Stack, Text, Textarea } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconX } from '@tabler/icons-react';
 import { zod4Resolver } from 'mantine-form-zod-resolver';
@@ -66,13 +67,7 @@ export function DeclineChangeModal({ change, onClose }: DeclineChangeModalProps)
             data-autofocus
             {...form.getInputProps('reason')}
           />
-          <PasswordInput
-            label="Your password"
-            description="Type your password again to sign"
-            autoComplete="current-password"
-            size="md"
-            {...form.getInputProps('signature.password')}
-          />
+          <SigningPasswordInput {...form.getInputProps('signature.password')} />
         </Stack>
       }
     >

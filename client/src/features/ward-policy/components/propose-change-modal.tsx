@@ -1,5 +1,6 @@
+import { SigningPasswordInput } from '@/components/dialogs/signing-password-input';
 import { useState } from 'react';
-import { PasswordInput, Stack, Text, Textarea } from '@mantine/core';
+import { Stack, Text, Textarea } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconSignature } from '@tabler/icons-react';
 import { zod4Resolver } from 'mantine-form-zod-resolver';
@@ -90,13 +91,7 @@ export function ProposeChangeModal({ wardId, wardName, settings, saved, onSettin
             data-autofocus
             {...form.getInputProps('reason')}
           />
-          <PasswordInput
-            label="Your password"
-            description="Type your password again to sign the proposal"
-            autoComplete="current-password"
-            size="md"
-            {...form.getInputProps('signature.password')}
-          />
+          <SigningPasswordInput description="Type your password again to sign the proposal" {...form.getInputProps('signature.password')} />
         </Stack>
       }
     >
