@@ -5,6 +5,7 @@ import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { wardKindLabel } from '@/utils/ward-kind';
 import { useWardPolicy } from '@/api/wards/get-ward-policy';
 import { useWardPolicyChanges } from '@/api/ward-policy-changes/get-ward-policy-changes';
+import { DeclinedPolicyChange } from './declined-policy-change';
 import { PendingPolicyChange } from './pending-policy-change';
 import { WardPolicyChanges } from './ward-policy-changes';
 import { WardPolicyForm } from './ward-policy-form';
@@ -27,23 +28,25 @@ export interface WardPolicyScreenProps {
 export function WardPolicyScreen({ wards, wardsLoading, wardId, onWardChange }: WardPolicyScreenProps) {
   const ward = wards.find((candidate) => candidate.id === wardId) ?? wards[0] ?? null;
   const policy = useWardPolicy(ward?.id ?? null);
-  const pending = useWardPolicyChanges({ status: 'pending', wardId: ward?.id }, { enabled: ward !== null });
+  // Every status, newest first: the change waiting, or else the last one declined with its reason.
+  const changes = useWardPolicyChanges({ wardId: ward?.id }, { enabled: ward !== null });
 
   let body;
   if (wardsLoading) body = <Skeleton height={480} />;
   else if (!ward) body = <Text>No wards yet.</Text>;
   else if (policy.isError)
     body = <QueryErrorAlert title="The policy could not be loaded" error={policy.error} onRetry={() => void policy.refetch()} />;
-  else if (pending.isError)
-    body = (
-      <QueryErrorAlert title="Changes awaiting sign-off could not be loaded" error={pending.error} onRetry={() => void pending.refetch()} />
-    );
-  else if (!policy.data || !pending.data) body = <Skeleton height={480} aria-label="Loading the policy" />;
+  else if (changes.isError)
+    body = <QueryErrorAlert title="Proposed changes could not be loaded" error={changes.error} onRetry={() => void changes.refetch()} />;
+  else if (!policy.data || !changes.data) body = <Skeleton height={480} aria-label="Loading the policy" />;
   else {
-    const waiting = pending.data.find((change) => change.wardId === ward.id) ?? null;
+    const ours = changes.data.filter((change) => change.wardId === ward.id);
+    const waiting = ours.find((change) => change.status === 'pending') ?? null;
+    const lastDecided = ours.find((change) => change.status !== 'pending') ?? null;
     body = (
       <>
         {waiting ? <PendingPolicyChange change={waiting} /> : null}
+        {!waiting && lastDecided?.status === 'declined' ? <DeclinedPolicyChange change={lastDecided} /> : null}
         {/* Keyed by ward and its saved settings, so that moving to another ward, or a change signed off, starts
             the form from the values the ward now works to. */}
         <WardPolicyForm
