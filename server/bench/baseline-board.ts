@@ -32,7 +32,7 @@ const SQL = {
     `SELECT r.id, r.at, s.orderId FROM release_reconciliations r INNER JOIN syringe_releases s ON s.id = r.releaseId WHERE s.orderId IN (${marks(n)}) AND r.mustReport = 1`,
   allergies: (n: number) => `SELECT id, patientId, substance, reaction, severity FROM patient_allergies WHERE patientId IN (${marks(n)})`,
   pauses: (n: number) =>
-    `SELECT id, orderId, resumedAt, naloxoneGivenAt FROM pca_pauses WHERE (orderId IN (${marks(n)}) AND resumedAt IS NULL) OR (orderId IN (${marks(n)}) AND naloxoneGivenAt IS NOT NULL)`,
+    `SELECT orderId, resumedAt, naloxoneGivenAt FROM pca_pauses WHERE orderId IN (${marks(n)}) AND (resumedAt IS NULL OR naloxoneGivenAt IS NOT NULL)`,
   signoffs: `SELECT s.*, u.displayName FROM handover_signoffs s LEFT JOIN users u ON u.id = s.nurseId WHERE s.wardId = ? AND s.shiftDate = ? AND s.shift = ?`,
 };
 
@@ -103,7 +103,7 @@ export class BaselineBoard {
         at: date(row.at as string),
         release: { orderId: row.orderId },
       })) as unknown as BoardInputs['discrepancies'],
-      pauses: (this.statement(`pauses:${n}`, SQL.pauses(n)).all(...ids, ...ids) as Row[]).map((row) => ({
+      pauses: (this.statement(`pauses:${n}`, SQL.pauses(n)).all(...ids) as Row[]).map((row) => ({
         orderId: row.orderId as number,
         resumedAt: row.resumedAt === null ? null : date(row.resumedAt as string),
         naloxoneGivenAt: row.naloxoneGivenAt === null ? null : date(row.naloxoneGivenAt as string),

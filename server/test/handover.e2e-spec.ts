@@ -67,7 +67,10 @@ describe('handover board', () => {
     const smallQueries = await queryCounter.measure(() => request(t.http).get(`/api/wards/${small}/handover`).set(as('mei')).expect(200));
     const largeQueries = await queryCounter.measure(() => request(t.http).get(`/api/wards/${large}/handover`).set(as('mei')).expect(200));
     expect(largeQueries).toBe(smallQueries);
-    expect(smallQueries).toBeLessThanOrEqual(12);
+    // 13: the ward's open pauses and naloxone given are their own small indexed query (by orderId);
+    // joined to the orders' query instead they cost more (0.15-0.2 ms of about 5 ms a board on the
+    // benchmark's full dataset, measured alternately in one process).
+    expect(smallQueries).toBeLessThanOrEqual(13);
   });
 
   it('lets clinical roles read the board, not the admin; 401 without a token', async () => {

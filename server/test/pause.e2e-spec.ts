@@ -77,6 +77,22 @@ describe('naloxone, pausing and resuming a PCA', () => {
     expect(events.map((event) => event.kind)).toContain('naloxone');
   });
 
+  it('the board keeps the after-naloxone watch once the PCA is resumed (the pause closed, naloxone still counts)', async () => {
+    const order = await start();
+    // The start two hours back, so its first hour's close observation is over: only naloxone tightens.
+    const db = t.app.get(DataSource);
+    const back = (column: string) => `${column} = strftime('%Y-%m-%d %H:%M:%f', ${column}, '-2 hours')`;
+    await db.query(`UPDATE bedside_checks SET ${back('firstAt')}, ${back('secondAt')} WHERE orderId = ?`, [order.id]);
+    await db.query(`UPDATE pca_orders SET ${back('startedAt')} WHERE id = ?`, [order.id]);
+    await post(order.id, 'naloxone', { dose: 100, doseUnit: 'mcg', signature: { password: DEMO_PASSWORD } }).expect(201);
+    await post(order.id, 'resume', resume).expect(200);
+    const observed = await post(order.id, 'observations', CALM_OBSERVATION).expect(201);
+    const detail = await request(t.http).get(`/api/orders/${order.id}`).set(as('kai')).expect(200);
+    expect(Date.parse(detail.body.nextObservation.dueAt) - Date.parse(observed.body.at)).toBe(15 * 60_000);
+    const row = await boardRow(detail.body.wardId, order.id);
+    expect(row).toMatchObject({ paused: false, nextObservation: { dueAt: detail.body.nextObservation.dueAt } });
+  });
+
   it('naloxone is signed with the nurse’s own password, and refuses a time in the future', async () => {
     const order = await start();
     await post(order.id, 'naloxone', { dose: 0.4, doseUnit: 'mg', signature: { password: 'wrong-password' } }).expect(401);

@@ -4,6 +4,7 @@ import { type DataSource, In, IsNull, MoreThanOrEqual } from 'typeorm';
 import { shiftWindow, type HandoverBoard } from '@lockstep/shared';
 import { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
 import { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
+import { PcaPause } from '../bedside/entities/pca-pause.entity.js';
 import { ReleaseReconciliation } from '../bedside/entities/release-reconciliation.entity.js';
 import { storedDate } from '../database/stored-date.js';
 import { Flag } from '../flags/entities/flag.entity.js';
@@ -50,8 +51,6 @@ const ORDER_COLUMNS = {
     allergies: { id: true, substance: true, reaction: true, severity: true },
   },
   drug: { id: true, genericName: true },
-  // Pauses are few: whether the PCA is paused now, and naloxone given (the after-naloxone watch).
-  pauses: { id: true, orderId: true, resumedAt: true, naloxoneGivenAt: true },
 } as const;
 const READING_COLUMNS = ['orderId', 'releaseId', 'at', 'attempts', 'delivered', 'volumeInfusedMl'] as const;
 type RawReading = Omit<BoardReading, 'at'> & { at: string | Date };
@@ -66,6 +65,8 @@ const LATEST_COLUMNS = [
   'spo2',
   'syringeRemainingMl',
 ] as const;
+const PAUSE_COLUMNS = ['orderId', 'resumedAt', 'naloxoneGivenAt'] as const;
+type RawPause = { orderId: number; resumedAt: string | Date | null; naloxoneGivenAt: string | Date | null };
 const SIGNOFF_COLUMNS = {
   id: true,
   orderId: true,
@@ -93,12 +94,10 @@ export class HandoverBoardService {
     const orders = await manager.find(PcaOrder, {
       select: ORDER_COLUMNS,
       where: { status: In([...ON_BOARD]), patient: { wardId } },
-      relations: { patient: { allergies: true }, drug: true, pauses: true },
+      relations: { patient: { allergies: true }, drug: true },
     });
     const ids = orders.map((order) => order.id);
     const inputs = ids.length === 0 ? emptyInputs() : await this.inputs(ids, wardId, shift, now);
-    // Read with the orders (in the same query), so the board stays within its query budget.
-    inputs.pauses = orders.flatMap((order) => order.pauses);
 
     const rows = boardRows(orders, inputs, wardPolicy(ward), shift, now);
     return { wardId, wardName: ward.name, generatedAt: now.toISOString(), shift, rows };
@@ -108,7 +107,7 @@ export class HandoverBoardService {
     const manager = this.dataSource.manager;
     const since = new Date(now.getTime() - 24 * HOUR);
     const readFrom = boardReadingsFrom(now);
-    const [observations, latest, flags, releases, starts, boluses, discrepancies, signoffs] = await Promise.all([
+    const [observations, latest, flags, releases, starts, boluses, discrepancies, signoffs, pauses] = await Promise.all([
       // Raw rows: a ward's day of readings is hundreds of rows, and making entities of them cost
       // more than the query.
       manager
@@ -154,7 +153,23 @@ export class HandoverBoardService {
         where: { wardId, shiftDate: shift.shiftDate, shift: shift.shift as 'day' | 'night' },
         relations: { nurse: true },
       }),
+      // Only the pauses that matter to the board: open ones (the PCA is paused) and naloxone given (the
+      // after-naloxone watch). Its own query, as raw rows: joined to the orders' query instead (one
+      // statement fewer), the board took 0.15-0.2 ms longer, of about 5 ms (the benchmark's full
+      // dataset, the two versions run alternately in one process).
+      manager
+        .createQueryBuilder(PcaPause, 'p')
+        .select(PAUSE_COLUMNS.map((column) => `p.${column} AS "${column}"`))
+        .where('p.orderId IN (:...ids) AND (p.resumedAt IS NULL OR p.naloxoneGivenAt IS NOT NULL)', { ids })
+        .getRawMany<RawPause>()
+        .then((rows) =>
+          rows.map((row) => ({
+            orderId: row.orderId,
+            resumedAt: row.resumedAt === null ? null : storedDate(row.resumedAt),
+            naloxoneGivenAt: row.naloxoneGivenAt === null ? null : storedDate(row.naloxoneGivenAt),
+          })),
+        ),
     ]);
-    return { observations, latest, flags, releases, starts, boluses, discrepancies, signoffs };
+    return { observations, latest, flags, releases, starts, boluses, discrepancies, signoffs, pauses };
   }
 }

@@ -14,7 +14,6 @@ import type { DoseUnit, Finding, LimitRuleResponse, OrderStatus, Override, Regim
 import { Drug } from '../../drugs/entities/drug.entity.js';
 import { Patient } from '../../patients/entities/patient.entity.js';
 import { User } from '../../users/entities/user.entity.js';
-import { PcaPause } from '../../bedside/entities/pca-pause.entity.js';
 import { OrderEvent } from './order-event.entity.js';
 
 /** A signed PCA order. A changed regimen is a new row (version + 1) that supersedes the old one. */
@@ -140,8 +139,4 @@ export class PcaOrder {
 
   @OneToMany(() => OrderEvent, (event) => event.order)
   events: Relation<OrderEvent>[];
-
-  /** Its pauses (a nurse's, or naloxone given); loaded only where asked (the handover board, in its orders query). */
-  @OneToMany(() => PcaPause, (pause) => pause.order)
-  pauses: Relation<PcaPause>[];
 }
