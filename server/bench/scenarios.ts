@@ -50,13 +50,20 @@ export function usageLoad({ baseUrl, options, facts, tokens }: Context): LoadSpe
   };
 }
 
+/** Room left in a syringe for a PCA to be written to (each write adds 0.05 mL). */
+const WRITE_HEADROOM_ML = 2;
+
 /**
  * Observations written to every running PCA in the hospital but the busy ward's (a connection per
  * share of them), so the board measured next time is the same board even on reused data.
  */
 export function writesLoad({ baseUrl, options, facts, tokens }: Context): LoadSpec {
   const busy = new Set(facts.busyWardActiveOrderIds);
-  const orders = facts.activeOrders.filter((order) => !busy.has(order.orderId));
+  // Each write adds 0.05 mL; a PCA whose syringe is nearly spent (the seed leaves some to run low)
+  // would soon report more than the syringe held, which the API refuses (400). 2 mL is 40 writes.
+  const orders = facts.activeOrders.filter(
+    (order) => !busy.has(order.orderId) && order.syringeMl - order.volumeInfusedMl >= WRITE_HEADROOM_ML,
+  );
   const connections = Math.min(options.connections, orders.length);
   return {
     name: 'observation writes',
