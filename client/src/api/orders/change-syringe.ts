@@ -3,20 +3,27 @@ import { syringeChangeResponseSchema, type SyringeChangeRequest, type SyringeCha
 import { apiRequest } from '@/lib/api-client';
 import { orderKeys } from './order-keys';
 
+export interface ChangeSyringeVariables {
+  request: SyringeChangeRequest;
+  /** One key per opening of the syringe change, sent as `Idempotency-Key` (the same for a retry). */
+  idempotencyKey: string;
+}
+
 /** Finishes the running syringe with witnessed waste; the new one starts only after a bedside check. */
-export function changeSyringe(orderId: number, request: SyringeChangeRequest): Promise<SyringeChangeResponse> {
+export function changeSyringe(orderId: number, { request, idempotencyKey }: ChangeSyringeVariables): Promise<SyringeChangeResponse> {
   return apiRequest(`/orders/${orderId}/syringe-changes`, {
     method: 'POST',
     body: request,
     schema: syringeChangeResponseSchema,
     signed: true,
+    headers: { 'Idempotency-Key': idempotencyKey },
   });
 }
 
 export function useChangeSyringe(orderId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (request: SyringeChangeRequest) => changeSyringe(orderId, request),
+    mutationFn: (variables: ChangeSyringeVariables) => changeSyringe(orderId, variables),
     // The order's syringes and flags, on every order screen and list.
     onSuccess: () => queryClient.invalidateQueries({ queryKey: orderKeys.all }),
   });

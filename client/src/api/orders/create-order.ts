@@ -3,12 +3,24 @@ import { orderDetailSchema, type CreateOrderRequest, type OrderDetail } from '@l
 import { apiRequest } from '@/lib/api-client';
 import { orderKeys } from './order-keys';
 
+export interface CreateOrderVariables {
+  request: CreateOrderRequest;
+  /** One key per opening of the form, sent as `Idempotency-Key` (the same for a retry). */
+  idempotencyKey: string;
+}
+
 /**
  * Signs a new order. 401 on `signature.password` for a wrong password; 400 naming each field
  * with a blocking finding or a soft finding without a reason.
  */
-export function createOrder(request: CreateOrderRequest): Promise<OrderDetail> {
-  return apiRequest('/orders', { method: 'POST', body: request, schema: orderDetailSchema, signed: true });
+export function createOrder({ request, idempotencyKey }: CreateOrderVariables): Promise<OrderDetail> {
+  return apiRequest('/orders', {
+    method: 'POST',
+    body: request,
+    schema: orderDetailSchema,
+    signed: true,
+    headers: { 'Idempotency-Key': idempotencyKey },
+  });
 }
 
 export function useCreateOrder() {

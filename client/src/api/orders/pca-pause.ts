@@ -19,10 +19,23 @@ export function usePauseState(orderId: number) {
   return useQuery(pauseStateQueryOptions(orderId));
 }
 
-function usePauseMutation<T>(orderId: number, send: (request: T) => Promise<PcaPauseState>) {
+/** A pause write: the request and one key per opening of its form, sent as `Idempotency-Key` (the same for a retry). */
+export interface PauseWriteVariables<T> {
+  request: T;
+  idempotencyKey: string;
+}
+
+function usePauseMutation<T>(orderId: number, path: string, signed = false) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: send,
+    mutationFn: ({ request, idempotencyKey }: PauseWriteVariables<T>) =>
+      apiRequest(`/orders/${orderId}/${path}`, {
+        method: 'POST',
+        body: request,
+        schema: pcaPauseStateSchema,
+        signed,
+        headers: { 'Idempotency-Key': idempotencyKey },
+      }),
     // The answer is the pause state as it is now; the order's flags and lists change with it.
     onSuccess: (answer) => {
       queryClient.setQueryData(pauseKey(orderId), answer);
@@ -33,20 +46,14 @@ function usePauseMutation<T>(orderId: number, send: (request: T) => Promise<PcaP
 
 /** Naloxone given, signed with the nurse's password: pauses the PCA and raises an urgent flag. */
 export function useRecordNaloxone(orderId: number) {
-  return usePauseMutation(orderId, (request: NaloxoneRequest) =>
-    apiRequest(`/orders/${orderId}/naloxone`, { method: 'POST', body: request, schema: pcaPauseStateSchema, signed: true }),
-  );
+  return usePauseMutation<NaloxoneRequest>(orderId, 'naloxone', true);
 }
 
 export function usePausePca(orderId: number) {
-  return usePauseMutation(orderId, (request: PauseRequest) =>
-    apiRequest(`/orders/${orderId}/pause`, { method: 'POST', body: request, schema: pcaPauseStateSchema }),
-  );
+  return usePauseMutation<PauseRequest>(orderId, 'pause');
 }
 
 /** Both nurses re-enter the pump settings; a mismatch answers 200 with the differences and stays paused. */
 export function useResumePca(orderId: number) {
-  return usePauseMutation(orderId, (request: ResumeRequest) =>
-    apiRequest(`/orders/${orderId}/resume`, { method: 'POST', body: request, schema: pcaPauseStateSchema }),
-  );
+  return usePauseMutation<ResumeRequest>(orderId, 'resume');
 }

@@ -6,11 +6,18 @@ import { orderKeys } from './order-keys';
 export interface RecordObservationVariables {
   orderId: number;
   observation: CreateObservationRequest;
+  /** One key per opening of the form, sent as `Idempotency-Key` (the same for a retry). */
+  idempotencyKey: string;
 }
 
 /** 400 names the fields (pump totals never go down within one syringe); 409 when the PCA is not running. */
-export function recordObservation({ orderId, observation }: RecordObservationVariables): Promise<RecordedObservation> {
-  return apiRequest(`/orders/${orderId}/observations`, { method: 'POST', body: observation, schema: recordedObservationSchema });
+export function recordObservation({ orderId, observation, idempotencyKey }: RecordObservationVariables): Promise<RecordedObservation> {
+  return apiRequest(`/orders/${orderId}/observations`, {
+    method: 'POST',
+    body: observation,
+    schema: recordedObservationSchema,
+    headers: { 'Idempotency-Key': idempotencyKey },
+  });
 }
 
 export function useRecordObservation() {

@@ -7,11 +7,19 @@ export interface ReviseOrderVariables {
   /** The returned order; the new version supersedes it. */
   orderId: number;
   request: CreateOrderRequest;
+  /** One key per opening of the form, sent as `Idempotency-Key` (the same for a retry). */
+  idempotencyKey: string;
 }
 
 /** Signs a new version of a returned order (409 when it is no longer returned). */
-export function reviseOrder({ orderId, request }: ReviseOrderVariables): Promise<OrderDetail> {
-  return apiRequest(`/orders/${orderId}/revise`, { method: 'POST', body: request, schema: orderDetailSchema, signed: true });
+export function reviseOrder({ orderId, request, idempotencyKey }: ReviseOrderVariables): Promise<OrderDetail> {
+  return apiRequest(`/orders/${orderId}/revise`, {
+    method: 'POST',
+    body: request,
+    schema: orderDetailSchema,
+    signed: true,
+    headers: { 'Idempotency-Key': idempotencyKey },
+  });
 }
 
 export function useReviseOrder() {

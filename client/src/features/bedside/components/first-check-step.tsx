@@ -3,6 +3,7 @@ import { Stack } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import type { Drug, OrderDetail } from '@lockstep/shared';
 import { useStartFirstCheck } from '@/api/orders/start-first-check';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import type { BouncedErrors, CheckStep } from '../hooks/use-bedside-check';
 import type { IdentityValues } from '../utils/identity-check';
 import { emptyPumpSettingsForm, readPumpSettingsForm, type PumpSettingsFormValues } from '../utils/pump-settings-form';
@@ -41,6 +42,8 @@ export function FirstCheckStep({
   onBack,
 }: FirstCheckStepProps) {
   const firstCheck = useStartFirstCheck(order.id);
+  // One key per opening of this step: a double-click or a retry records one pending check.
+  const idempotency = useIdempotencyKey();
   const [alert, setAlert] = useState<string | null>(null);
   const form = useForm<PumpSettingsFormValues>({
     initialValues: draft ?? emptyPumpSettingsForm(),
@@ -52,9 +55,12 @@ export function FirstCheckStep({
     if (!settings) return;
     setAlert(null);
     firstCheck.mutate(
-      { ...identity, releaseCode, settings },
+      { request: { ...identity, releaseCode, settings }, idempotencyKey: idempotency.key },
       {
-        onSuccess: (answer) => onSent(answer.id),
+        onSuccess: (answer) => {
+          idempotency.renew();
+          onSent(answer.id);
+        },
         onError: (error) => {
           const step = stepOfFirstCheckError(error);
           const placed = placeServerErrors(error, step === 'first' ? FORM_FIELDS : ['patientMrn', 'patientDateOfBirth', 'releaseCode'], {

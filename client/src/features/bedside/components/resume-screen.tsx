@@ -5,6 +5,7 @@ import { useNavigate } from 'react-router-dom';
 import { MIN_REASON_LENGTH, PUMP_SETTING_LABELS, type OrderDetail, type PcaPauseState } from '@lockstep/shared';
 import { paths } from '@/config/paths';
 import { applyServerErrors } from '@/lib/form-errors';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { useDrugs } from '@/api/drugs/get-drugs';
 import { usePauseState, useResumePca } from '@/api/orders/pca-pause';
 import { emptyPumpSettingsForm, readPumpSettingsForm, type PumpSettingsFormValues } from '../utils/pump-settings-form';
@@ -50,6 +51,9 @@ type ResumeValues = {
 
 function ResumeForm({ order, onDone }: { order: OrderDetail; onDone: () => void }) {
   const resume = useResumePca(order.id);
+  // One key per attempt: a double-click or a retry is one resume; after an answer (even a
+  // mismatch, which stays paused) the next attempt is a new one.
+  const idempotency = useIdempotencyKey();
   const drugs = useDrugs().data ?? [];
   const [problems, setProblems] = useState<string[]>([]);
   const [differences, setDifferences] = useState<PcaPauseState['differences']>([]);
@@ -79,12 +83,16 @@ function ResumeForm({ order, onDone }: { order: OrderDetail; onDone: () => void 
     }
     resume.mutate(
       {
-        reason: values.reason.trim(),
-        settings: first.settings,
-        witness: { username: values.witness.username.trim(), password: values.witness.password, settings: second.settings },
+        request: {
+          reason: values.reason.trim(),
+          settings: first.settings,
+          witness: { username: values.witness.username.trim(), password: values.witness.password, settings: second.settings },
+        },
+        idempotencyKey: idempotency.key,
       },
       {
         onSuccess: (answer) => {
+          idempotency.renew();
           if (answer.differences.length === 0) onDone();
           else setDifferences(answer.differences);
         },

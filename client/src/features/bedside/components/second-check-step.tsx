@@ -5,6 +5,7 @@ import { IconSignature } from '@tabler/icons-react';
 import type { Drug, SecondCheckResponse, OrderDetail } from '@lockstep/shared';
 import { isApiRequestError } from '@/lib/api-error';
 import { useCompleteSecondCheck } from '@/api/orders/complete-second-check';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { emptyPumpSettingsForm, readPumpSettingsForm, type PumpSettingsFormValues } from '../utils/pump-settings-form';
 import { placeServerErrors } from '../utils/server-errors';
 import { ColleagueFields } from './colleague-fields';
@@ -33,6 +34,8 @@ const FORM_FIELDS = ['username', 'password', ...Object.keys(emptyPumpSettingsFor
  */
 export function SecondCheckStep({ order, drugs, checkId, firstNurseName, stepCount, onCompared, onRestart }: SecondCheckStepProps) {
   const secondCheck = useCompleteSecondCheck(order.id);
+  // One key per opening of this step: a double-click or a retry signs the check once.
+  const idempotency = useIdempotencyKey();
   const [alert, setAlert] = useState<string | null>(null);
   const [closed, setClosed] = useState(false);
   const form = useForm<SecondCheckValues>({
@@ -50,9 +53,12 @@ export function SecondCheckStep({ order, drugs, checkId, firstNurseName, stepCou
     setAlert(null);
     const username = values.username.trim();
     secondCheck.mutate(
-      { checkId, request: { username, password: values.password, settings } },
+      { checkId, request: { username, password: values.password, settings }, idempotencyKey: idempotency.key },
       {
-        onSuccess: (result) => onCompared(result, username),
+        onSuccess: (result) => {
+          idempotency.renew();
+          onCompared(result, username);
+        },
         onError: (error) => {
           form.setFieldValue('password', '');
           // 403: a pharmacist or prescriber tried to sign; that belongs beside the username.

@@ -1,5 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import type { ColleagueRequest } from '@lockstep/shared';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { isApiRequestError } from '@/lib/api-error';
 import { placeServerErrors } from '../utils/server-errors';
 import { stepWithErrors, validateStepFields, type StepForm } from '../utils/step-form';
@@ -23,9 +24,12 @@ interface WitnessedForm<Values extends WitnessedValues> extends StepForm {
   setErrors: (errors: Record<string, string>) => void;
 }
 
-/** The part of a TanStack mutation the task drives. */
+/** The part of a TanStack mutation the task drives: the request and the task's `Idempotency-Key`. */
 interface WitnessedMutation<Request, Result> {
-  mutate: (request: Request, options: { onSuccess: (result: Result) => void; onError: (error: unknown) => void }) => void;
+  mutate: (
+    variables: { request: Request; idempotencyKey: string },
+    options: { onSuccess: (result: Result) => void; onError: (error: unknown) => void },
+  ) => void;
   isPending: boolean;
 }
 
@@ -44,7 +48,9 @@ export interface WitnessedStepOptions<Values extends WitnessedValues, Request, R
  * Fill → witness signs → result: the bolus, syringe change and discontinue screens. Each Next
  * checks only its own step's fields. A refusal sends the nurse back to the step holding the field
  * at fault; a wrong witness password (the request is `signed`, so no sign-out) shows beside the
- * witness's field and is cleared for another try.
+ * witness's field and is cleared for another try. One `Idempotency-Key` per opening of the
+ * screen, kept for a retry (a double-click or a lost answer gives one record) and renewed after a
+ * success.
  */
 export function useWitnessedStep<Values extends WitnessedValues, Request, Result>({
   form,
@@ -56,6 +62,7 @@ export function useWitnessedStep<Values extends WitnessedValues, Request, Result
   const [step, setStep] = useState(0);
   const [result, setResult] = useState<Result | null>(null);
   const [alert, setAlert] = useState<string | null>(null);
+  const idempotency = useIdempotencyKey();
 
   const refused = (error: unknown) => {
     form.setFieldValue('witness.password', '');
@@ -78,7 +85,16 @@ export function useWitnessedStep<Values extends WitnessedValues, Request, Result
     }
     const values = form.getValues();
     const witness = { username: values.witness.username.trim(), password: values.witness.password };
-    mutation.mutate(toRequest(values, witness), { onSuccess: setResult, onError: refused });
+    mutation.mutate(
+      { request: toRequest(values, witness), idempotencyKey: idempotency.key },
+      {
+        onSuccess: (answer) => {
+          idempotency.renew();
+          setResult(answer);
+        },
+        onError: refused,
+      },
+    );
   };
 
   const back = () => setStep((current) => Math.max(0, current - 1));

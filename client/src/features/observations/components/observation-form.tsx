@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Alert, Button, Group, Paper, Select, SimpleGrid, Stack, Textarea, TextInput, Title } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconAlertCircle, IconDeviceFloppy } from '@tabler/icons-react';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { applyServerErrors } from '@/lib/form-errors';
 import { formatDateTime } from '@/utils/format-date';
 import { useRecordObservation } from '@/api/orders/record-observation';
@@ -86,6 +87,8 @@ function focusField(field: keyof ObservationFormValues) {
 /** An observation, typed fast: large boxes in the order they are taken, checked as they are typed. */
 export function ObservationForm({ order, observations, thresholds, onSaved }: ObservationFormProps) {
   const record = useRecordObservation();
+  // One key per observation: a double-click or a retry saves it once; the next one gets a new key.
+  const idempotency = useIdempotencyKey();
   const [formAlert, setFormAlert] = useState<string[]>([]);
   const running = order.releases.find((release) => release.status === 'in_use') ?? null;
 
@@ -117,8 +120,14 @@ export function ObservationForm({ order, observations, thresholds, onSaved }: Ob
     (values) => {
       setFormAlert([]);
       record.mutate(
-        { orderId: order.id, observation: toObservationRequest(values) },
-        { onSuccess: onSaved, onError: (error) => setFormAlert(applyServerErrors(form, error)) },
+        { orderId: order.id, observation: toObservationRequest(values), idempotencyKey: idempotency.key },
+        {
+          onSuccess: (saved) => {
+            idempotency.renew();
+            onSaved(saved);
+          },
+          onError: (error) => setFormAlert(applyServerErrors(form, error)),
+        },
       );
     },
     (errors) => {

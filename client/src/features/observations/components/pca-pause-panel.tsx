@@ -6,6 +6,7 @@ import { Link } from 'react-router-dom';
 import { formatDose, MIN_REASON_LENGTH, pauseActions, syringeState, type NaloxoneUnit, type OrderDetail } from '@lockstep/shared';
 import { NumberField } from '@/components/ui/number-field';
 import { PausedBadge } from '@/components/ui/paused-badge';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { applyServerErrors } from '@/lib/form-errors';
 import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 import { formatDateTime } from '@/utils/format-date';
@@ -93,10 +94,21 @@ function Problems({ messages }: { messages: string[] }) {
 
 function PauseForm({ orderId, onDone }: { orderId: number; onDone: () => void }) {
   const pause = usePausePca(orderId);
+  // One key per opening of the form: a double-click or a retry is one pause.
+  const idempotency = useIdempotencyKey();
   const [problems, setProblems] = useState<string[]>([]);
   const form = useForm({ initialValues: { reason: '' }, validate: { reason: reasonRule } });
   const submit = form.onSubmit((values) =>
-    pause.mutate({ reason: values.reason.trim() }, { onSuccess: onDone, onError: (error) => setProblems(applyServerErrors(form, error)) }),
+    pause.mutate(
+      { request: { reason: values.reason.trim() }, idempotencyKey: idempotency.key },
+      {
+        onSuccess: () => {
+          idempotency.renew();
+          onDone();
+        },
+        onError: (error) => setProblems(applyServerErrors(form, error)),
+      },
+    ),
   );
   return (
     <form onSubmit={submit} noValidate>
@@ -120,6 +132,8 @@ type NaloxoneValues = { dose: NumberFieldValue; doseUnit: NaloxoneUnit; givenAt:
 
 function NaloxoneForm({ orderId, onDone }: { orderId: number; onDone: () => void }) {
   const record = useRecordNaloxone(orderId);
+  // One key per opening of the form: a double-click or a retry records the naloxone once.
+  const idempotency = useIdempotencyKey();
   const [problems, setProblems] = useState<string[]>([]);
   const form = useForm<NaloxoneValues>({
     initialValues: { dose: '', doseUnit: 'mcg', givenAt: '', signature: { password: '' } },
@@ -135,12 +149,21 @@ function NaloxoneForm({ orderId, onDone }: { orderId: number; onDone: () => void
   const submit = form.onSubmit((values) =>
     record.mutate(
       {
-        dose: readNumber(values.dose) as number,
-        doseUnit: values.doseUnit,
-        givenAt: values.givenAt ? new Date(values.givenAt).toISOString() : undefined,
-        signature: { password: values.signature.password },
+        request: {
+          dose: readNumber(values.dose) as number,
+          doseUnit: values.doseUnit,
+          givenAt: values.givenAt ? new Date(values.givenAt).toISOString() : undefined,
+          signature: { password: values.signature.password },
+        },
+        idempotencyKey: idempotency.key,
       },
-      { onSuccess: onDone, onError: (error) => setProblems(applyServerErrors(form, error)) },
+      {
+        onSuccess: () => {
+          idempotency.renew();
+          onDone();
+        },
+        onError: (error) => setProblems(applyServerErrors(form, error)),
+      },
     ),
   );
   const dose = readNumber(form.values.dose);

@@ -16,6 +16,7 @@ import {
   softFindingFields,
 } from '@lockstep/shared';
 import { paths } from '@/config/paths';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { isApiRequestError } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
 import { useOrderCheck } from '../hooks/use-order-check';
@@ -54,6 +55,9 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
   const [attempted, setAttempted] = useState(false);
   const [formAlert, setFormAlert] = useState<string[]>([]);
   const [unsigned, setUnsigned] = useState<Omit<CreateOrderRequest, 'signature'> | null>(null);
+  // One key per opening of the order form, kept across signing attempts: a double-click or a
+  // retry after a lost answer signs one order.
+  const idempotency = useIdempotencyKey();
 
   const rule = pickable.find((candidate) => String(candidate.id) === form.values.ruleId) ?? null;
   const check = useOrderCheck(form.values, rule, patient, rules, revising?.id);
@@ -108,6 +112,7 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
   };
 
   const onSigned = (order: OrderDetail) => {
+    idempotency.renew();
     setUnsigned(null);
     notifySuccess('Order signed', `PCA order ${order.id} is waiting for pharmacy verification.`);
     navigate(paths.order.getHref(order.id));
@@ -190,6 +195,7 @@ export function OrderFormScreen({ patient, rules, weightBasedWard, patientBanner
           unsigned={unsigned}
           drugName={rule.drugName}
           revisingId={revising?.id}
+          idempotencyKey={idempotency.key}
           onSigned={onSigned}
           onRefusedFields={onRefusedFields}
           onClose={() => setUnsigned(null)}

@@ -10,6 +10,7 @@ import {
   type OrderSummary,
   type SyringeReleaseResponse,
 } from '@lockstep/shared';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { applyServerErrors } from '@/lib/form-errors';
 import { useCreateRelease } from '@/api/orders/create-release';
@@ -26,6 +27,8 @@ export interface ReleaseModalProps {
 /** Pharmacy releases a labelled syringe of the order's concentration, then prints its label. */
 export function ReleaseModal({ order, onClose }: ReleaseModalProps) {
   const release = useCreateRelease();
+  // One key per opening of the dialog: a double-click or a retry releases one syringe.
+  const idempotency = useIdempotencyKey();
   const [released, setReleased] = useState<SyringeReleaseResponse | null>(null);
   const [formAlert, setFormAlert] = useState<string[]>([]);
   const form = useForm<ReleaseFormValues>({ initialValues: releaseFormValues(order) });
@@ -43,9 +46,12 @@ export function ReleaseModal({ order, onClose }: ReleaseModalProps) {
       return;
     }
     release.mutate(
-      { orderId: order.id, request },
+      { orderId: order.id, request, idempotencyKey: idempotency.key },
       {
-        onSuccess: setReleased,
+        onSuccess: (answer) => {
+          idempotency.renew();
+          setReleased(answer);
+        },
         onError: (error) =>
           setFormAlert(isApiRequestError(error) && error.status === 400 ? applyServerErrors(form, error) : [errorMessage(error)]),
       },

@@ -13,6 +13,8 @@ export interface SignOrderModalProps {
   drugName: string;
   /** The returned order this signs a new version of. */
   revisingId?: number;
+  /** The order form's `Idempotency-Key`: the same for every signing attempt of this form opening. */
+  idempotencyKey: string;
   onSigned: (order: OrderDetail) => void;
   /** A 400: the form puts its field errors beside the inputs. */
   onRefusedFields: (error: unknown) => void;
@@ -20,7 +22,15 @@ export interface SignOrderModalProps {
 }
 
 /** The signing step: what is being signed, the reasons given, and the password typed again. */
-export function SignOrderModal({ unsigned, drugName, revisingId, onSigned, onRefusedFields, onClose }: SignOrderModalProps) {
+export function SignOrderModal({
+  unsigned,
+  drugName,
+  revisingId,
+  idempotencyKey,
+  onSigned,
+  onRefusedFields,
+  onClose,
+}: SignOrderModalProps) {
   const create = useCreateOrder();
   const revise = useReviseOrder();
   const [refusal, setRefusal] = useState<string | null>(null);
@@ -37,8 +47,8 @@ export function SignOrderModal({ unsigned, drugName, revisingId, onSigned, onRef
         else setRefusal(errorMessage(error));
       },
     };
-    if (revisingId === undefined) create.mutate(request, handlers);
-    else revise.mutate({ orderId: revisingId, request }, handlers);
+    if (revisingId === undefined) create.mutate({ request, idempotencyKey }, handlers);
+    else revise.mutate({ orderId: revisingId, request, idempotencyKey }, handlers);
   };
 
   const regimen = {
