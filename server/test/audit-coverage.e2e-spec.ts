@@ -216,12 +216,22 @@ describe('every state-changing route writes its audit event', () => {
       .get(`/api/patients/${patient.id}`)
       .set('Authorization', `Bearer ${tokens.nurse}`)
       .expect(200);
+    // Handover confirms no PCA with an open urgent flag: acknowledge those the walk raised.
+    const { body: beforeHandover } = await request(t.http).get(base).set('Authorization', `Bearer ${tokens.nurse}`).expect(200);
+    for (const flag of beforeHandover.flags.filter(
+      (f: { severity: string; acknowledgedAt: string | null }) => f.severity === 'urgent' && !f.acknowledgedAt,
+    ))
+      await request(t.http)
+        .post(`/api/flags/${flag.id}/acknowledge`)
+        .set('Authorization', `Bearer ${tokens.nurse}`)
+        .send({ note: 'Reviewed with the prescriber' })
+        .expect(200);
     await step(
       'post',
       '/api/wards/:id/handover/signoffs',
       `/api/wards/${wardPatient.wardId}/handover/signoffs`,
       'nurse',
-      { orderId: order.id, role: 'outgoing' },
+      { orderId: order.id, role: 'outgoing', signature: { password: DEMO_PASSWORD } },
       201,
       'order.handover-signoff',
     );

@@ -169,7 +169,7 @@ const ROUTES: BadInputRoute[] = [
     role: 'charge_nurse',
     spec: SIGNOFF,
     dto: CreateSignoffDto,
-    valid: () => ({ orderId: state.active.id, role: 'incoming', pumpSettingsMatch: true }),
+    valid: () => ({ orderId: state.active.id, role: 'incoming', settings: { ...SETTINGS }, signature: { password: 'not-checked-here' } }),
   },
 ];
 

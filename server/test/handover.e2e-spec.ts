@@ -4,7 +4,11 @@ import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { queryCounter } from '../src/database/query-counter.js';
 import { seedBoardWard, type FixtureBed } from './support/board-fixture.js';
+import { DEMO_PASSWORD } from './support/demo-accounts.js';
+import { runningSettings } from './support/handover-steps.js';
 import { createTestApp, type TestApp } from './support/test-app.js';
+
+const signature = { password: DEMO_PASSWORD };
 
 describe('handover board', () => {
   let t: TestApp;
@@ -80,22 +84,19 @@ describe('handover board', () => {
     await request(t.http).get('/api/wards/999/handover').set(as('mei')).expect(404);
   });
 
-  it('records shift sign-off by an outgoing and a different incoming nurse, with the pump re-check', async () => {
+  it('records shift sign-off by an outgoing and a different incoming nurse, each signed, with the pump re-entered', async () => {
     const wardId = await seedBoardWard(dataSource, 'SGN', [{ bed: 'S1', startedMinutesAgo: 60, observedMinutesAgo: 10 }]);
     const board = await request(t.http).get(`/api/wards/${wardId}/handover`).set(as('mei')).expect(200);
     const orderId = board.body.rows[0].orderId;
+    const settings = await runningSettings(dataSource, orderId);
     const url = `/api/wards/${wardId}/handover/signoffs`;
-    await request(t.http).post(url).set(as('amara')).send({ orderId, role: 'outgoing' }).expect(403);
-    await request(t.http).post(url).set(as('kai')).send({ orderId, role: 'outgoing' }).expect(201);
-    await request(t.http).post(url).set(as('kai')).send({ orderId, role: 'outgoing' }).expect(409);
-    await request(t.http).post(url).set(as('kai')).send({ orderId, role: 'incoming', pumpSettingsMatch: true }).expect(400);
-    const refused = await request(t.http).post(url).set(as('rosa')).send({ orderId, role: 'incoming' }).expect(400);
-    expect(refused.body.errors[0].field).toBe('pumpSettingsMatch');
-    const incoming = await request(t.http)
-      .post(url)
-      .set(as('rosa'))
-      .send({ orderId, role: 'incoming', pumpSettingsMatch: true })
-      .expect(201);
+    await request(t.http).post(url).set(as('amara')).send({ orderId, role: 'outgoing', signature }).expect(403);
+    await request(t.http).post(url).set(as('kai')).send({ orderId, role: 'outgoing', signature }).expect(201);
+    await request(t.http).post(url).set(as('kai')).send({ orderId, role: 'outgoing', signature }).expect(409);
+    await request(t.http).post(url).set(as('kai')).send({ orderId, role: 'incoming', settings, signature }).expect(400);
+    const refused = await request(t.http).post(url).set(as('rosa')).send({ orderId, role: 'incoming', signature }).expect(400);
+    expect(refused.body.errors[0].field).toBe('settings');
+    const incoming = await request(t.http).post(url).set(as('rosa')).send({ orderId, role: 'incoming', settings, signature }).expect(201);
     expect(incoming.body).toMatchObject({ role: 'incoming', nurseName: 'Rosa Adeyemi', pumpSettingsMatch: true });
     const after = await request(t.http).get(`/api/wards/${wardId}/handover`).set(as('mei')).expect(200);
     expect(after.body.rows[0].signoffs.map((s: { role: string }) => s.role)).toEqual(['outgoing', 'incoming']);

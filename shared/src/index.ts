@@ -72,6 +72,7 @@ export * from './observations/observation-timeline.js';
 export * from './handover/handover.schema.js';
 export * from './handover/handover-risk.js';
 export * from './handover/shift-window.js';
+export * from './handover/handover-confirm.js';
 export * from './observations/projected-empty-at.js';
 export * from './observations/delivery-flags.js';
 export * from './audit/audit.schema.js';

@@ -139,7 +139,8 @@ export const ACKNOWLEDGE_FLAG: BodySpec = { note: { type: 'string', min: 5, max:
 export const SIGNOFF: BodySpec = {
   orderId: id,
   role: { type: 'enum', values: SIGNOFF_ROLES },
-  pumpSettingsMatch: { type: 'boolean', presence: 'optional' },
+  settings: { ...settings, presence: 'optional' },
+  signature: { type: 'object', fields: SIGNATURE },
 };
 
 export const CREATE_DRAFT: BodySpec = { wardId: id, note: note1000 };

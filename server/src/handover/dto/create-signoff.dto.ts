@@ -1,6 +1,9 @@
-import { IsBoolean, IsDefined, IsIn, IsInt, IsOptional, IsPositive } from 'class-validator';
+import { Type } from 'class-transformer';
+import { IsDefined, IsIn, IsInt, IsObject, IsOptional, IsPositive, ValidateNested } from 'class-validator';
 import { SIGNOFF_ROLES, type CreateSignoffRequest, type SignoffRole } from '@lockstep/shared';
 import { ApiProperty, ApiPropertyOptional } from '@nestjs/swagger';
+import { PumpSettingsDto } from '../../bedside/dto/pump-settings.dto.js';
+import { SignatureDto } from '../../common/dto/signature.dto.js';
 
 export class CreateSignoffDto implements CreateSignoffRequest {
   @ApiProperty({ type: 'integer', minimum: 1, example: 2, description: 'The PCA order being confirmed' })
@@ -14,9 +17,22 @@ export class CreateSignoffDto implements CreateSignoffRequest {
   @IsDefined({ message: 'Say whether you are the outgoing or incoming nurse' })
   role: SignoffRole;
 
-  /** The incoming nurse confirms the pump settings match the order (a re-check at handover). */
-  @ApiPropertyOptional({ type: 'boolean', example: true, description: 'The incoming nurse confirms the pump settings match the order' })
-  @IsBoolean({ message: 'pumpSettingsMatch must be true or false' })
+  /** The incoming nurse's blind reading of the pump, compared with the running order; required for them. */
+  @ApiPropertyOptional({
+    type: () => PumpSettingsDto,
+    nullable: true,
+    description: 'The incoming nurse re-enters the pump’s settings as read off it (required for the incoming nurse)',
+  })
+  @ValidateNested()
+  @Type(() => PumpSettingsDto)
+  @IsObject({ message: 'settings must be the pump settings' })
   @IsOptional()
-  pumpSettingsMatch?: boolean;
+  settings?: PumpSettingsDto | null;
+
+  @ApiProperty({ type: () => SignatureDto, description: 'The nurse signs with their own password' })
+  @ValidateNested()
+  @Type(() => SignatureDto)
+  @IsObject({ message: 'signature must be an object with your password' })
+  @IsDefined({ message: 'signature is required: enter your password to sign' })
+  signature: SignatureDto;
 }
