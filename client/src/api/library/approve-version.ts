@@ -9,6 +9,8 @@ export interface ApproveVersionVariables {
   /** The version's `submittedAt` as shown: the server refuses if it was submitted again since. */
   submittedAt: string;
   password: string;
+  /** One key per opening of the dialog, sent as `Idempotency-Key` like the other writes (the same for a retry). */
+  idempotencyKey: string;
 }
 
 /**
@@ -16,13 +18,19 @@ export interface ApproveVersionVariables {
  * wrong password (on `signature.password`), 403 for the version's own author, 409 when the version
  * was withdrawn and submitted again after it was opened.
  */
-export function approveVersion({ versionId, submittedAt, password }: ApproveVersionVariables): Promise<LibraryVersionDetail> {
+export function approveVersion({
+  versionId,
+  submittedAt,
+  password,
+  idempotencyKey,
+}: ApproveVersionVariables): Promise<LibraryVersionDetail> {
   const body: ApproveVersionRequest = { signature: { password }, submittedAt };
   return apiRequest(`/library/versions/${versionId}/approve`, {
     method: 'POST',
     body,
     schema: libraryVersionDetailSchema,
     signed: true,
+    headers: { 'Idempotency-Key': idempotencyKey },
   });
 }
 

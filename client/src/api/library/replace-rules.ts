@@ -3,11 +3,20 @@ import { libraryVersionDetailSchema, type LibraryVersionDetail, type ReplaceRule
 import { apiRequest } from '@/lib/api-client';
 import { libraryKeys } from './library-keys';
 
-export type ReplaceRulesVariables = ReplaceRulesRequest & { versionId: number };
+export type ReplaceRulesVariables = ReplaceRulesRequest & {
+  versionId: number;
+  /** One key per opening of the rules editor, sent as `Idempotency-Key` (the same for a retry). */
+  idempotencyKey: string;
+};
 
 /** Draft only. A 400 names each field as `rules.<index>.…`. */
-export function replaceRules({ versionId, rules }: ReplaceRulesVariables): Promise<LibraryVersionDetail> {
-  return apiRequest(`/library/versions/${versionId}/rules`, { method: 'PUT', body: { rules }, schema: libraryVersionDetailSchema });
+export function replaceRules({ versionId, rules, idempotencyKey }: ReplaceRulesVariables): Promise<LibraryVersionDetail> {
+  return apiRequest(`/library/versions/${versionId}/rules`, {
+    method: 'PUT',
+    body: { rules },
+    schema: libraryVersionDetailSchema,
+    headers: { 'Idempotency-Key': idempotencyKey },
+  });
 }
 
 export function useReplaceRules() {

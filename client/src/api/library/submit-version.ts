@@ -3,14 +3,19 @@ import { libraryVersionDetailSchema, type LibraryVersionDetail, type SubmitVersi
 import { apiRequest } from '@/lib/api-client';
 import { libraryKeys } from './library-keys';
 
-export type SubmitVersionVariables = SubmitVersionRequest & { versionId: number };
+export type SubmitVersionVariables = SubmitVersionRequest & {
+  versionId: number;
+  /** One key per opening of the dialog, sent as `Idempotency-Key` like the other writes (the same for a retry). */
+  idempotencyKey: string;
+};
 
 /** Draft → awaiting approval. */
-export function submitVersion({ versionId, note }: SubmitVersionVariables): Promise<LibraryVersionDetail> {
+export function submitVersion({ versionId, note, idempotencyKey }: SubmitVersionVariables): Promise<LibraryVersionDetail> {
   return apiRequest(`/library/versions/${versionId}/submit`, {
     method: 'POST',
     body: note ? { note } : {},
     schema: libraryVersionDetailSchema,
+    headers: { 'Idempotency-Key': idempotencyKey },
   });
 }
 

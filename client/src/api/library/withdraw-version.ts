@@ -3,9 +3,20 @@ import { libraryVersionDetailSchema, type LibraryVersionDetail } from '@lockstep
 import { apiRequest } from '@/lib/api-client';
 import { libraryKeys } from './library-keys';
 
+export interface WithdrawVersionVariables {
+  versionId: number;
+  /** One key per withdrawal, sent as `Idempotency-Key` (the same for a retry). */
+  idempotencyKey: string;
+}
+
 /** Awaiting approval → draft, for changes after a colleague's query. */
-export function withdrawVersion(versionId: number): Promise<LibraryVersionDetail> {
-  return apiRequest(`/library/versions/${versionId}/withdraw`, { method: 'POST', body: {}, schema: libraryVersionDetailSchema });
+export function withdrawVersion({ versionId, idempotencyKey }: WithdrawVersionVariables): Promise<LibraryVersionDetail> {
+  return apiRequest(`/library/versions/${versionId}/withdraw`, {
+    method: 'POST',
+    body: {},
+    schema: libraryVersionDetailSchema,
+    headers: { 'Idempotency-Key': idempotencyKey },
+  });
 }
 
 export function useWithdrawVersion() {

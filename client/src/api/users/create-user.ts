@@ -3,8 +3,14 @@ import { userSchema, type CreateUserRequest, type User } from '@lockstep/shared'
 import { apiRequest } from '@/lib/api-client';
 import { userKeys } from './user-keys';
 
-export function createUser(input: CreateUserRequest): Promise<User> {
-  return apiRequest('/users', { method: 'POST', body: input, schema: userSchema });
+export interface CreateUserVariables {
+  input: CreateUserRequest;
+  /** One key per opening of the new-user dialog, sent as `Idempotency-Key`: a double-click or a retry creates one account. */
+  idempotencyKey: string;
+}
+
+export function createUser({ input, idempotencyKey }: CreateUserVariables): Promise<User> {
+  return apiRequest('/users', { method: 'POST', body: input, schema: userSchema, headers: { 'Idempotency-Key': idempotencyKey } });
 }
 
 export function useCreateUser() {

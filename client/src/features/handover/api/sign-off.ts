@@ -4,15 +4,26 @@ import { orderKeys } from '@/api/orders/order-keys';
 import { apiRequest } from '@/lib/api-client';
 import { handoverKeys } from './handover-keys';
 
-/** 400 for an incoming sign-off without `pumpSettingsMatch: true`. */
-export function signOff(wardId: number, request: CreateSignoffRequest): Promise<HandoverSignoffResponse> {
-  return apiRequest(`/wards/${wardId}/handover/signoffs`, { method: 'POST', body: request, schema: signoffSchema });
+/**
+ * The sign-off request and one key per opening of the sign-off dialog, sent as `Idempotency-Key`
+ * (the same for a double-click or a retry). Optional while the dialog is being reworked; the
+ * dialog should pass `useIdempotencyKey().key`.
+ */
+export type SignOffVariables = CreateSignoffRequest & { idempotencyKey?: string };
+
+export function signOff(wardId: number, { idempotencyKey, ...request }: SignOffVariables): Promise<HandoverSignoffResponse> {
+  return apiRequest(`/wards/${wardId}/handover/signoffs`, {
+    method: 'POST',
+    body: request,
+    schema: signoffSchema,
+    headers: idempotencyKey ? { 'Idempotency-Key': idempotencyKey } : undefined,
+  });
 }
 
 export function useSignOff(wardId: number) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (request: CreateSignoffRequest) => signOff(wardId, request),
+    mutationFn: (variables: SignOffVariables) => signOff(wardId, variables),
     // The stream would refetch the board too; this makes the signer's own board follow at once.
     // The sign-off is filed under the order, so its story changes as well.
     onSuccess: (_signoff, { orderId }) =>

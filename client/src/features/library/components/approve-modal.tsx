@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Button, Group, Text } from '@mantine/core';
 import type { LibraryVersionDetail } from '@lockstep/shared';
 import { SignatureModal } from '@/components/dialogs/signature-modal';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
 import { useApproveVersion } from '@/api/library/approve-version';
@@ -21,6 +22,8 @@ export interface ApproveModalProps {
  */
 export function ApproveModal({ version, onClose }: ApproveModalProps) {
   const approve = useApproveVersion();
+  // One key per opening of the dialog: a double-click or a retry signs one approval.
+  const idempotency = useIdempotencyKey();
   const diff = useLibraryDiff(version.id);
   const affected = useAffectedOrders(version.id);
   // The submission on screen when the dialog opened is the one signed, even if a refetch behind
@@ -53,9 +56,10 @@ export function ApproveModal({ version, onClose }: ApproveModalProps) {
       onSign={(password, { passwordRefused, clearPassword }) => {
         setRefusal(null);
         approve.mutate(
-          { versionId: version.id, submittedAt: reviewedSubmission ?? '', password },
+          { versionId: version.id, submittedAt: reviewedSubmission ?? '', password, idempotencyKey: idempotency.key },
           {
             onSuccess: (approved) => {
+              idempotency.renew();
               notifySuccess('Version approved', `Version ${approved.number} is now ${approved.wardName}'s active dose-limit library.`);
               onClose();
             },

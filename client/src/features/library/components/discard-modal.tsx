@@ -1,6 +1,7 @@
 import { Alert, Button, Group, Modal, Stack, Text } from '@mantine/core';
 import { IconAlertCircle, IconTrash } from '@tabler/icons-react';
 import type { LibraryVersion } from '@lockstep/shared';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { errorMessage } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
 import { useDiscardVersion } from '@/api/library/discard-version';
@@ -13,14 +14,20 @@ export interface DiscardModalProps {
 
 export function DiscardModal({ version, onClose, onDiscarded }: DiscardModalProps) {
   const discard = useDiscardVersion();
+  // One key per opening of the dialog: a double-click or a retry is one discard.
+  const idempotency = useIdempotencyKey();
   const confirm = () =>
-    discard.mutate(version, {
-      onSuccess: () => {
-        notifySuccess('Draft discarded', `Draft version ${version.number} of ${version.wardName}'s library was deleted.`);
-        onDiscarded();
-        onClose();
+    discard.mutate(
+      { version, idempotencyKey: idempotency.key },
+      {
+        onSuccess: () => {
+          idempotency.renew();
+          notifySuccess('Draft discarded', `Draft version ${version.number} of ${version.wardName}'s library was deleted.`);
+          onDiscarded();
+          onClose();
+        },
       },
-    });
+    );
 
   return (
     <Modal opened onClose={onClose} title={`Discard draft version ${version.number}?`} size="sm">

@@ -5,6 +5,7 @@ import { useSearchParams } from 'react-router-dom';
 import type { Drug, LibraryVersion, LibraryVersionDetail, Ward } from '@lockstep/shared';
 import { QueryErrorAlert } from '@/components/errors/query-error-alert';
 import { DecisionSupportNote } from '@/components/ui/decision-support-note';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { errorMessage } from '@/lib/api-error';
 import { useCurrentUser } from '@/lib/auth/use-session';
 import { notifySuccess } from '@/lib/notify';
@@ -32,6 +33,8 @@ export function LibraryScreen({ wards, wardsLoading, drugs }: LibraryScreenProps
   const versionsQuery = useLibraryVersions(wardId);
   const versions = versionsQuery.data ?? [];
   const createDraft = useCreateDraft();
+  // One key per draft started here: a double-click or a retry starts one draft.
+  const draftKey = useIdempotencyKey();
   const [draftRefusal, setDraftRefusal] = useState<string | null>(null);
   const [importing, setImporting] = useState(false);
 
@@ -55,9 +58,10 @@ export function LibraryScreen({ wards, wardsLoading, drugs }: LibraryScreenProps
     if (wardId === null) return;
     setDraftRefusal(null);
     createDraft.mutate(
-      { wardId },
+      { request: { wardId }, idempotencyKey: draftKey.key },
       {
         onSuccess: (draft) => {
+          draftKey.renew();
           notifySuccess(
             'Draft started',
             `Version ${draft.number} of ${draft.wardName}'s library is a draft copied from the active version.`,

@@ -3,6 +3,7 @@ import { Alert, Button, Drawer, Group, List, Stack, Text } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconAlertCircle, IconDeviceFloppy, IconPlus } from '@tabler/icons-react';
 import type { Drug, LibraryVersionDetail } from '@lockstep/shared';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
 import { useReplaceRules } from '@/api/library/replace-rules';
@@ -36,6 +37,8 @@ type RulesEditorFormProps = Omit<RulesEditorDrawerProps, 'opened'>;
 
 function RulesEditorForm({ version, drugs, weightBased, onClose }: RulesEditorFormProps) {
   const replaceRules = useReplaceRules();
+  // One key per opening of the editor: a double-click or a retry saves the rules once.
+  const idempotency = useIdempotencyKey();
   const [alerts, setAlerts] = useState<string[]>([]);
   const newKeys = useRef(0);
   const form = useForm<RulesFormValues>({
@@ -54,9 +57,10 @@ function RulesEditorForm({ version, drugs, weightBased, onClose }: RulesEditorFo
       setAlerts([]);
       const { rules } = readRulesForm(values, drugs);
       replaceRules.mutate(
-        { versionId: version.id, rules },
+        { versionId: version.id, rules, idempotencyKey: idempotency.key },
         {
           onSuccess: (saved) => {
+            idempotency.renew();
             notifySuccess(
               'Rules saved',
               `Draft version ${saved.number} now has ${saved.ruleCount} ${saved.ruleCount === 1 ? 'rule' : 'rules'}.`,

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Alert, Button, Group, Modal, Stack, Text, Textarea } from '@mantine/core';
 import { IconAlertCircle, IconSend } from '@tabler/icons-react';
 import type { LibraryVersion } from '@lockstep/shared';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { errorMessage } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
 import { useSubmitVersion } from '@/api/library/submit-version';
@@ -10,14 +11,17 @@ const NOTE_MAX = 1000;
 
 export function SubmitModal({ version, onClose }: { version: LibraryVersion; onClose: () => void }) {
   const submitVersion = useSubmitVersion();
+  // One key per opening of the dialog: a double-click or a retry is one submission.
+  const idempotency = useIdempotencyKey();
   const [note, setNote] = useState(version.note);
 
   const submit = () => {
     const trimmed = note.trim();
     submitVersion.mutate(
-      { versionId: version.id, note: trimmed && trimmed !== version.note ? trimmed : undefined },
+      { versionId: version.id, note: trimmed && trimmed !== version.note ? trimmed : undefined, idempotencyKey: idempotency.key },
       {
         onSuccess: (submitted) => {
+          idempotency.renew();
           notifySuccess('Submitted for approval', `Version ${submitted.number} now waits for a second pharmacist to approve it.`);
           onClose();
         },

@@ -17,6 +17,7 @@ import {
   type LibraryVersionAction,
   type LibraryVersionDetail,
 } from '@lockstep/shared';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { errorMessage } from '@/lib/api-error';
 import { notifyError, notifySuccess } from '@/lib/notify';
 import { useExportLibraryVersion } from '@/api/library/export-library-version';
@@ -55,6 +56,8 @@ export function VersionActions({ version, drugs, currentUserId, weightBased, onD
   const close = () => setDialog(null);
   const reasonId = useId();
   const withdraw = useWithdrawVersion();
+  // One key per withdrawal: a double-click or a retry withdraws once; renewed after it is done.
+  const withdrawKey = useIdempotencyKey();
   const exportCsv = useExportLibraryVersion();
   const ownReason = ownVersionReason(version, currentUserId);
   const ownVersion = ownReason !== null;
@@ -62,10 +65,16 @@ export function VersionActions({ version, drugs, currentUserId, weightBased, onD
   const can = (action: LibraryVersionAction) => canDoLibraryAction(action, version.status);
 
   const doWithdraw = () =>
-    withdraw.mutate(version.id, {
-      onSuccess: (draft) => notifySuccess('Withdrawn to draft', `Version ${draft.number} is a draft again and can be edited.`),
-      onError: (error) => notifyError('Not withdrawn', errorMessage(error)),
-    });
+    withdraw.mutate(
+      { versionId: version.id, idempotencyKey: withdrawKey.key },
+      {
+        onSuccess: (draft) => {
+          withdrawKey.renew();
+          notifySuccess('Withdrawn to draft', `Version ${draft.number} is a draft again and can be edited.`);
+        },
+        onError: (error) => notifyError('Not withdrawn', errorMessage(error)),
+      },
+    );
   const doExport = () =>
     exportCsv.mutate(version, {
       onSuccess: (filename) => notifySuccess('CSV exported', `Saved as ${filename}.`),

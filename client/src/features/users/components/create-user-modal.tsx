@@ -4,6 +4,7 @@ import { useForm } from '@mantine/form';
 import { IconAlertCircle } from '@tabler/icons-react';
 import { zod4Resolver } from 'mantine-form-zod-resolver';
 import { createUserSchema, PASSWORD_MIN_LENGTH, type Ward } from '@lockstep/shared';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { isApiRequestError } from '@/lib/api-error';
 import { applyServerErrors } from '@/lib/form-errors';
 import { notifySuccess } from '@/lib/notify';
@@ -20,6 +21,9 @@ export interface CreateUserModalProps {
 
 export function CreateUserModal({ opened, onClose, wards }: CreateUserModalProps) {
   const createUser = useCreateUser();
+  // One key per opening of the dialog (it stays mounted, so closing renews it): a double-click or
+  // a retry creates one account.
+  const idempotency = useIdempotencyKey();
   const [formAlert, setFormAlert] = useState<string[]>([]);
   const form = useForm<CreateUserFormValues>({
     initialValues: emptyCreateUserForm,
@@ -30,6 +34,7 @@ export function CreateUserModal({ opened, onClose, wards }: CreateUserModalProps
     form.reset();
     setFormAlert([]);
     createUser.reset();
+    idempotency.renew();
     onClose();
   };
 
@@ -37,20 +42,23 @@ export function CreateUserModal({ opened, onClose, wards }: CreateUserModalProps
     setFormAlert([]);
     // Already validated by the resolver; parsing again trims and narrows the types.
     const input = createUserSchema.parse(values);
-    createUser.mutate(input, {
-      onSuccess: (user) => {
-        notifySuccess('User created', `${user.displayName} (${user.username}) can now sign in.`);
-        close();
+    createUser.mutate(
+      { input, idempotencyKey: idempotency.key },
+      {
+        onSuccess: (user) => {
+          notifySuccess('User created', `${user.displayName} (${user.username}) can now sign in.`);
+          close();
+        },
+        onError: (error) => {
+          // 409: the username is taken; it belongs beside the username, not in an alert.
+          if (isApiRequestError(error) && error.status === 409 && error.errors.length === 0) {
+            form.setFieldError('username', error.message);
+            return;
+          }
+          setFormAlert(applyServerErrors(form, error));
+        },
       },
-      onError: (error) => {
-        // 409: the username is taken; it belongs beside the username, not in an alert.
-        if (isApiRequestError(error) && error.status === 409 && error.errors.length === 0) {
-          form.setFieldError('username', error.message);
-          return;
-        }
-        setFormAlert(applyServerErrors(form, error));
-      },
-    });
+    );
   });
 
   return (
