@@ -6,6 +6,7 @@ import { AuditModule } from './audit/audit.module.js';
 import { AuthModule } from './auth/auth.module.js';
 import { BedsideModule } from './bedside/bedside.module.js';
 import { AllExceptionsFilter } from './common/filters/all-exceptions.filter.js';
+import { IdempotencyModule } from './common/idempotency/idempotency.module.js';
 import { clientDistPath } from './config/paths.js';
 import { validateEnv } from './config/env.validation.js';
 import { DatabaseModule } from './database/database.module.js';
@@ -52,6 +53,7 @@ function clientModules(): DynamicModule[] {
     AuditModule,
     FhirModule,
     HealthModule,
+    IdempotencyModule,
     ...clientModules(),
   ],
   providers: [{ provide: APP_FILTER, useClass: AllExceptionsFilter }],

@@ -6,6 +6,7 @@ import { PcaPause } from '../bedside/entities/pca-pause.entity.js';
 import { ReleaseReconciliation } from '../bedside/entities/release-reconciliation.entity.js';
 import { Drug } from '../drugs/entities/drug.entity.js';
 import { EquianalgesicFactor } from '../equianalgesic/entities/equianalgesic-factor.entity.js';
+import { IdempotencyKey } from '../common/idempotency/idempotency-key.entity.js';
 import { Flag } from '../flags/entities/flag.entity.js';
 import { HandoverSignoff } from '../handover/entities/handover-signoff.entity.js';
 import { LibraryVersion } from '../library/entities/library-version.entity.js';
@@ -47,4 +48,5 @@ export const ENTITIES = [
   EquianalgesicFactor,
   PcaPause,
   WardPolicyChange,
+  IdempotencyKey,
 ];

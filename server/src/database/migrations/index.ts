@@ -18,6 +18,7 @@ import { WardPolicyChanges1764820000000 } from './1764820000000-ward-policy-chan
 import { WardCloseObservation1764830000000 } from './1764830000000-ward-close-observation.js';
 import { WardPopulation1764840000000 } from './1764840000000-ward-population.js';
 import { FlagObservation1764850000000 } from './1764850000000-flag-observation.js';
+import { IdempotencyKeys1764860000000 } from './1764860000000-idempotency-keys.js';
 
 /** In order. Listed explicitly (not globbed) so tests and the built server run the same set. */
 export const MIGRATIONS = [
@@ -41,4 +42,5 @@ export const MIGRATIONS = [
   WardCloseObservation1764830000000,
   WardPopulation1764840000000,
   FlagObservation1764850000000,
+  IdempotencyKeys1764860000000,
 ];
