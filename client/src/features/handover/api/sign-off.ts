@@ -16,6 +16,8 @@ export function signOff(wardId: number, { idempotencyKey, ...request }: SignOffV
     method: 'POST',
     body: request,
     schema: signoffSchema,
+    // Signed with the nurse's password: a wrong one is shown beside the field, not a sign-out.
+    signed: true,
     headers: idempotencyKey ? { 'Idempotency-Key': idempotencyKey } : undefined,
   });
 }
