@@ -3,12 +3,22 @@ import { flagSchema, type AcknowledgeFlagRequest, type FlagResponse } from '@loc
 import { apiRequest } from '@/lib/api-client';
 import { orderKeys } from './order-keys';
 
-export type AcknowledgeFlagVariables = AcknowledgeFlagRequest & { orderId: number; flagId: number };
+export type AcknowledgeFlagVariables = AcknowledgeFlagRequest & {
+  orderId: number;
+  flagId: number;
+  /** One key per opening of the dialog, sent as `Idempotency-Key` like the other writes (the same for a retry). */
+  idempotencyKey: string;
+};
 
 /** 409 when someone else acknowledged it first. */
-export function acknowledgeFlag({ flagId, note }: AcknowledgeFlagVariables): Promise<FlagResponse> {
+export function acknowledgeFlag({ flagId, note, idempotencyKey }: AcknowledgeFlagVariables): Promise<FlagResponse> {
   const body: AcknowledgeFlagRequest = { note };
-  return apiRequest(`/flags/${flagId}/acknowledge`, { method: 'POST', body, schema: flagSchema });
+  return apiRequest(`/flags/${flagId}/acknowledge`, {
+    method: 'POST',
+    body,
+    schema: flagSchema,
+    headers: { 'Idempotency-Key': idempotencyKey },
+  });
 }
 
 export function useAcknowledgeFlag() {

@@ -11,6 +11,9 @@ const { reviseOrder } = await import('./revise-order');
 const { createRelease } = await import('./create-release');
 const { startFirstCheck } = await import('./start-first-check');
 const { recordObservation } = await import('./record-observation');
+const { verifyOrder } = await import('./verify-order');
+const { cancelOrder } = await import('./cancel-order');
+const { acknowledgeFlag } = await import('./acknowledge-flag');
 
 const KEY = '3f2b8c1e-9d4a-4e7b-8a6c-1f0e2d3c4b5a';
 
@@ -60,5 +63,23 @@ describe('create writes send their Idempotency-Key', () => {
     });
     await recordObservation({ orderId: 3, observation: {} as CreateObservationRequest, idempotencyKey: KEY });
     expect(lastCall()).toMatchObject({ path: '/orders/3/observations', headers: { 'Idempotency-Key': KEY } });
+  });
+
+  it('pharmacy verify, cancel and a flag acknowledgement send it, and the key is not in the body', async () => {
+    await verifyOrder({ orderId: 3, password: 'pw', idempotencyKey: KEY });
+    expect(lastCall()).toMatchObject({
+      path: '/orders/3/verify',
+      body: { signature: { password: 'pw' } },
+      headers: { 'Idempotency-Key': KEY },
+    });
+    await cancelOrder({ orderId: 3, reason: 'patient moved to theatre', idempotencyKey: KEY });
+    expect(lastCall()).toMatchObject({ path: '/orders/3/cancel', headers: { 'Idempotency-Key': KEY } });
+    expect(lastCall().body).toEqual({ reason: 'patient moved to theatre' });
+    await acknowledgeFlag({ orderId: 3, flagId: 5, note: 'reviewed by doctor', idempotencyKey: KEY });
+    expect(lastCall()).toMatchObject({
+      path: '/flags/5/acknowledge',
+      body: { note: 'reviewed by doctor' },
+      headers: { 'Idempotency-Key': KEY },
+    });
   });
 });

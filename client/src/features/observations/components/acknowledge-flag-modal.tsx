@@ -2,6 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { Alert, Button, Group, Modal, Stack, Text, Textarea } from '@mantine/core';
 import { IconAlertCircle } from '@tabler/icons-react';
 import type { FlagResponse } from '@lockstep/shared';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
 import { useAcknowledgeFlag } from '@/api/orders/acknowledge-flag';
@@ -18,6 +19,9 @@ export interface AcknowledgeFlagModalProps {
 /** A flag is closed only with a note of what was done. */
 export function AcknowledgeFlagModal({ orderId, flag, onClose }: AcknowledgeFlagModalProps) {
   const acknowledge = useAcknowledgeFlag();
+  // One key per opening of the dialog (it stays mounted, so closing renews it): a double-click or
+  // a retry acknowledges once.
+  const idempotency = useIdempotencyKey();
   const [note, setNote] = useState('');
   const [noteError, setNoteError] = useState<string | null>(null);
 
@@ -25,6 +29,7 @@ export function AcknowledgeFlagModal({ orderId, flag, onClose }: AcknowledgeFlag
     setNote('');
     setNoteError(null);
     acknowledge.reset();
+    idempotency.renew();
     onClose();
   };
 
@@ -35,7 +40,7 @@ export function AcknowledgeFlagModal({ orderId, flag, onClose }: AcknowledgeFlag
     setNoteError(problem);
     if (problem) return;
     acknowledge.mutate(
-      { orderId, flagId: flag.id, note: note.trim() },
+      { orderId, flagId: flag.id, note: note.trim(), idempotencyKey: idempotency.key },
       {
         onSuccess: () => {
           notifySuccess('Flag acknowledged', flag.message);

@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { Text } from '@mantine/core';
 import type { OrderDetail } from '@lockstep/shared';
 import { SignatureModal } from '@/components/dialogs/signature-modal';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { errorMessage, isApiRequestError } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
 import { useRejectOrder } from '@/api/orders/reject-order';
@@ -30,6 +31,8 @@ export function VerificationDecision({ order, decision, onDone, onConflict, onCl
   const verify = useVerifyOrder();
   const returnOrder = useReturnOrder();
   const reject = useRejectOrder();
+  // One key per opening of the decision dialog: a double-click or a retry decides once.
+  const idempotency = useIdempotencyKey();
   const [refusal, setRefusal] = useState<string | null>(null);
   const summary = <OrderInBrief order={order} />;
   const onError = (error: unknown) => {
@@ -48,9 +51,10 @@ export function VerificationDecision({ order, decision, onDone, onConflict, onCl
         onSign={(password, { passwordRefused }) => {
           setRefusal(null);
           verify.mutate(
-            { orderId: order.id, password },
+            { orderId: order.id, password, idempotencyKey: idempotency.key },
             {
               onSuccess: () => {
+                idempotency.renew();
                 notifySuccess('Order verified', `Order ${order.id} is verified: a syringe can be released.`);
                 onDone('verify');
               },
@@ -86,9 +90,10 @@ export function VerificationDecision({ order, decision, onDone, onConflict, onCl
       onConfirm={(reason) => {
         setRefusal(null);
         mutation.mutate(
-          { orderId: order.id, reason },
+          { orderId: order.id, reason, idempotencyKey: idempotency.key },
           {
             onSuccess: () => {
+              idempotency.renew();
               notifySuccess(returning ? 'Order returned' : 'Order rejected', `${order.prescriberName} has been told by e-mail.`);
               onDone(decision);
             },
