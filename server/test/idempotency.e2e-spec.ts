@@ -191,4 +191,30 @@ describe('Idempotency-Key replay', () => {
     }
     expect(await count(Observation, { orderId: started.id })).toBe(0);
   });
+
+  it('keeps a key 24 hours: an older one is deleted when a key is claimed, and its reuse runs', async () => {
+    const started = await activeOrder(t.http, tokens, await t.addPatient());
+    const key = newKey();
+    const nurse = await request(t.http).get('/api/auth/me').set(bearer(tokens.nurse)).expect(200);
+    await t.app.get(DataSource).manager.insert(IdempotencyKey, {
+      userId: nurse.body.id,
+      key,
+      method: 'POST',
+      path: '/api/orders/1/boluses',
+      bodyHash: '0'.repeat(64),
+      state: 'done',
+      responseStatus: 201,
+      responseBody: '{}',
+      createdAt: new Date(Date.now() - 25 * 60 * 60 * 1000),
+    });
+    const fresh = await request(t.http)
+      .post(`/api/orders/${started.id}/observations`)
+      .set(bearer(tokens.nurse))
+      .set('Idempotency-Key', key)
+      .send(observation())
+      .expect(201);
+    expect(fresh.headers['idempotent-replayed']).toBeUndefined();
+    const rows = await t.app.get(DataSource).manager.findBy(IdempotencyKey, { key });
+    expect(rows).toEqual([expect.objectContaining({ path: `/api/orders/${started.id}/observations`, state: 'done', responseStatus: 201 })]);
+  });
 });
