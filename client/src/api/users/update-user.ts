@@ -6,10 +6,12 @@ import { userKeys } from './user-keys';
 export interface UpdateUserVariables {
   id: number;
   changes: UpdateUserRequest;
+  /** One key per opening of the form, sent as `Idempotency-Key` like the other writes (the same for a retry). */
+  idempotencyKey: string;
 }
 
-export function updateUser({ id, changes }: UpdateUserVariables): Promise<User> {
-  return apiRequest(`/users/${id}`, { method: 'PATCH', body: changes, schema: userSchema });
+export function updateUser({ id, changes, idempotencyKey }: UpdateUserVariables): Promise<User> {
+  return apiRequest(`/users/${id}`, { method: 'PATCH', body: changes, schema: userSchema, headers: { 'Idempotency-Key': idempotencyKey } });
 }
 
 export function useUpdateUser() {

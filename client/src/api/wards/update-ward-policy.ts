@@ -7,11 +7,18 @@ import { wardKeys } from './ward-keys';
 export interface UpdateWardPolicyVariables {
   wardId: number;
   changes: UpdateWardPolicyRequest;
+  /** One key per opening of the form, sent as `Idempotency-Key` like the other writes (the same for a retry). */
+  idempotencyKey: string;
 }
 
 /** Admin only. Any subset of the values; a 400 names each field out of range. */
-export function updateWardPolicy({ wardId, changes }: UpdateWardPolicyVariables): Promise<WardPolicySettings> {
-  return apiRequest(`/wards/${wardId}/policy`, { method: 'PATCH', body: changes, schema: wardPolicySettingsSchema });
+export function updateWardPolicy({ wardId, changes, idempotencyKey }: UpdateWardPolicyVariables): Promise<WardPolicySettings> {
+  return apiRequest(`/wards/${wardId}/policy`, {
+    method: 'PATCH',
+    body: changes,
+    schema: wardPolicySettingsSchema,
+    headers: { 'Idempotency-Key': idempotencyKey },
+  });
 }
 
 export function useUpdateWardPolicy() {

@@ -4,6 +4,7 @@ import { useForm } from '@mantine/form';
 import { IconAlertCircle } from '@tabler/icons-react';
 import { zod4Resolver } from 'mantine-form-zod-resolver';
 import { PASSWORD_MIN_LENGTH, type User, type Ward } from '@lockstep/shared';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { applyServerErrors } from '@/lib/form-errors';
 import { notifySuccess } from '@/lib/notify';
 import { useUpdateUser } from '@/api/users/update-user';
@@ -20,6 +21,8 @@ export interface EditUserModalProps {
 /** Mounted only while open, so its form always starts from the user's current details. */
 export function EditUserModal({ user, wards, onClose }: EditUserModalProps) {
   const updateUser = useUpdateUser();
+  // One key per opening of the dialog: a double-click or a retry saves once.
+  const idempotency = useIdempotencyKey();
   const [formAlert, setFormAlert] = useState<string[]>([]);
   const form = useForm<EditUserFormValues>({
     initialValues: editFormValuesOf(user),
@@ -34,9 +37,10 @@ export function EditUserModal({ user, wards, onClose }: EditUserModalProps) {
       return;
     }
     updateUser.mutate(
-      { id: user.id, changes },
+      { id: user.id, changes, idempotencyKey: idempotency.key },
       {
         onSuccess: (saved) => {
+          idempotency.renew();
           const passwordNote = changes.password ? ' The new password works from their next sign-in.' : '';
           notifySuccess('Changes saved', `${saved.displayName} (${saved.username}) is updated.${passwordNote}`);
           onClose();

@@ -1,6 +1,7 @@
 import { Alert, Button, Group, Modal, Stack, Text } from '@mantine/core';
 import { IconAlertCircle } from '@tabler/icons-react';
 import type { User } from '@lockstep/shared';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { errorMessage } from '@/lib/api-error';
 import { notifySuccess } from '@/lib/notify';
 import { useUpdateUser } from '@/api/users/update-user';
@@ -13,14 +14,17 @@ export interface SetActiveModalProps {
 /** Confirms deactivating (or reactivating) an account; the account is kept for the audit trail. */
 export function SetActiveModal({ user, onClose }: SetActiveModalProps) {
   const updateUser = useUpdateUser();
+  // One key per opening of the dialog: a double-click or a retry changes the account once.
+  const idempotency = useIdempotencyKey();
   const activate = !user.active;
   const verb = activate ? 'Reactivate' : 'Deactivate';
 
   const confirm = () =>
     updateUser.mutate(
-      { id: user.id, changes: { active: activate } },
+      { id: user.id, changes: { active: activate }, idempotencyKey: idempotency.key },
       {
         onSuccess: (saved) => {
+          idempotency.renew();
           notifySuccess(
             activate ? 'User reactivated' : 'User deactivated',
             activate ? `${saved.displayName} can sign in again.` : `${saved.displayName} can no longer sign in.`,

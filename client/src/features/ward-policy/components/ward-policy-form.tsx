@@ -2,6 +2,7 @@ import { useState, type FormEvent } from 'react';
 import { Alert, Button, Group, Paper, Stack, Text, TextInput, Title } from '@mantine/core';
 import { useForm } from '@mantine/form';
 import { IconAlertCircle, IconDeviceFloppy, IconSignature } from '@tabler/icons-react';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { applyServerErrors } from '@/lib/form-errors';
 import { notifySuccess } from '@/lib/notify';
 import type { WardPolicyChange, WardPolicySettings } from '@lockstep/shared';
@@ -40,6 +41,8 @@ export interface WardPolicyFormProps {
  */
 export function WardPolicyForm({ wardId, wardName, policy, pending }: WardPolicyFormProps) {
   const update = useUpdateWardPolicy();
+  // One key per save of the addresses: a double-click or a retry saves once; renewed after it is saved.
+  const emailsKey = useIdempotencyKey();
   const [formAlert, setFormAlert] = useState<string[]>([]);
   const [proposing, setProposing] = useState(false);
   const form = useForm<PolicyFormValues>({
@@ -68,9 +71,10 @@ export function WardPolicyForm({ wardId, wardName, policy, pending }: WardPolicy
     setFormAlert([]);
     if (!valid(POLICY_EMAIL_FIELDS.map((field) => field.key))) return;
     update.mutate(
-      { wardId, changes: emails },
+      { wardId, changes: emails, idempotencyKey: emailsKey.key },
       {
         onSuccess: (saved) => {
+          emailsKey.renew();
           // Only the addresses are saved: any setting being edited stays as typed.
           form.setInitialValues(policyToForm(saved));
           for (const { key } of POLICY_EMAIL_FIELDS) form.setFieldValue(key, saved[key]);
