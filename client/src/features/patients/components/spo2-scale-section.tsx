@@ -5,6 +5,7 @@ import { ageInYears, type Patient, PRESCRIBING_ROLES, type Spo2Scale } from '@lo
 import { useUpdateSpo2Scale } from '@/api/patients/update-spo2-scale';
 import { useWardPolicy } from '@/api/wards/get-ward-policy';
 import { useWards } from '@/api/wards/get-wards';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { errorMessage } from '@/lib/api-error';
 import { useCurrentUser } from '@/lib/auth/use-session';
 import { notifySuccess } from '@/lib/notify';
@@ -22,6 +23,8 @@ export function Spo2ScaleSection({ patient }: { patient: Patient }) {
   const canChange = PRESCRIBING_ROLES.includes(role);
   const policy = useWardPolicy(patient.wardId).data;
   const update = useUpdateSpo2Scale();
+  // One key per confirmation dialog: a double-click or a retry changes the scale once.
+  const idempotency = useIdempotencyKey();
   const [confirming, setConfirming] = useState<Spo2Scale | null>(null);
   const current = patient.spo2Scale;
   const next = otherSpo2Scale(current);
@@ -31,13 +34,15 @@ export function Spo2ScaleSection({ patient }: { patient: Patient }) {
 
   const close = () => {
     update.reset();
+    idempotency.renew();
     setConfirming(null);
   };
   const confirm = (scale: Spo2Scale) =>
     update.mutate(
-      { patientId: patient.id, spo2Scale: scale, idempotencyKey: crypto.randomUUID() },
+      { patientId: patient.id, spo2Scale: scale, idempotencyKey: idempotency.key },
       {
         onSuccess: (saved) => {
+          idempotency.renew();
           notifySuccess(
             `SpO2 ${SPO2_SCALE_NAMES[saved.spo2Scale].toLowerCase()}`,
             `${spo2BandsText(saved.spo2Scale, policy)}, from the next observation.`,

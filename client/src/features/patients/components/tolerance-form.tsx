@@ -10,6 +10,7 @@ import {
 } from '@lockstep/shared';
 import { useUpdateOpioidTolerance } from '@/api/patients/update-opioid-tolerance';
 import { NumberField } from '@/components/ui/number-field';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { applyServerErrors } from '@/lib/form-errors';
 import { notifySuccess } from '@/lib/notify';
 import { toleranceFormErrors, toleranceFormValues, toleranceRequest, type ToleranceFormValues } from '../utils/record-forms';
@@ -21,6 +22,8 @@ import { toleranceFormErrors, toleranceFormValues, toleranceRequest, type Tolera
  */
 export function ToleranceForm({ patient, canEdit }: { patient: Patient; canEdit: boolean }) {
   const update = useUpdateOpioidTolerance();
+  // One key per change saved: a double-click or a retry saves it once.
+  const idempotency = useIdempotencyKey();
   const [refusal, setRefusal] = useState<string[]>([]);
   const form = useForm<ToleranceFormValues>({ initialValues: toleranceFormValues(patient), validate: toleranceFormErrors });
   const request = toleranceRequest(form.getValues());
@@ -28,9 +31,12 @@ export function ToleranceForm({ patient, canEdit }: { patient: Patient; canEdit:
   const submit = form.onSubmit((values) => {
     setRefusal([]);
     update.mutate(
-      { patientId: patient.id, tolerance: toleranceRequest(values), idempotencyKey: crypto.randomUUID() },
+      { patientId: patient.id, tolerance: toleranceRequest(values), idempotencyKey: idempotency.key },
       {
-        onSuccess: (saved) => notifySuccess('Opioid tolerance saved', opioidToleranceText(saved)),
+        onSuccess: (saved) => {
+          idempotency.renew();
+          notifySuccess('Opioid tolerance saved', opioidToleranceText(saved));
+        },
         onError: (error) => setRefusal(applyServerErrors(form, error)),
       },
     );

@@ -5,6 +5,7 @@ import { IconAlertCircle } from '@tabler/icons-react';
 import type { Patient } from '@lockstep/shared';
 import { useRecordWeight } from '@/api/patients/record-weight';
 import { NumberField } from '@/components/ui/number-field';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { applyServerErrors } from '@/lib/form-errors';
 import { notifySuccess } from '@/lib/notify';
 import { formatWeight, formatWeightDate, localToday } from '../utils/patient-format';
@@ -13,6 +14,8 @@ import { weightFormErrors, weightRequest, type WeightFormValues } from '../utils
 /** The weight with the day it was measured; nurses and prescribers (`canEdit`) record a new one, audited. */
 export function WeightForm({ patient, canEdit }: { patient: Patient; canEdit: boolean }) {
   const record = useRecordWeight();
+  // One key per weight typed: a double-click or a retry records it once; the next one gets a new key.
+  const idempotency = useIdempotencyKey();
   const [refusal, setRefusal] = useState<string[]>([]);
   const today = localToday();
   const form = useForm<WeightFormValues>({
@@ -23,9 +26,10 @@ export function WeightForm({ patient, canEdit }: { patient: Patient; canEdit: bo
   const submit = form.onSubmit((values) => {
     setRefusal([]);
     record.mutate(
-      { patientId: patient.id, weight: weightRequest(values), idempotencyKey: crypto.randomUUID() },
+      { patientId: patient.id, weight: weightRequest(values), idempotencyKey: idempotency.key },
       {
         onSuccess: (saved) => {
+          idempotency.renew();
           notifySuccess('Weight recorded', `${formatWeight(saved.weightKg)}, ${formatWeightDate(saved.weightMeasuredOn, today)}`);
           form.reset();
         },
