@@ -217,4 +217,24 @@ describe('Idempotency-Key replay', () => {
     const rows = await t.app.get(DataSource).manager.findBy(IdempotencyKey, { key });
     expect(rows).toEqual([expect.objectContaining({ path: `/api/orders/${started.id}/observations`, state: 'done', responseStatus: 201 })]);
   });
+
+  it('documents the header and the 422 on every signed-in POST in the OpenAPI document, not on sign-in', async () => {
+    const { body: document } = await request(t.http).get('/api/docs-json').expect(200);
+    type Operation = { parameters?: { name: string; in: string; description?: string }[]; responses: Record<string, unknown> };
+    const post = (path: string) => document.paths[path].post as Operation;
+    for (const path of [
+      '/api/orders',
+      '/api/orders/{orderId}/releases',
+      '/api/orders/{orderId}/boluses',
+      '/api/orders/{orderId}/naloxone',
+    ]) {
+      const header = post(path).parameters?.find((parameter) => parameter.name === 'Idempotency-Key');
+      expect(header, path).toMatchObject({ in: 'header', description: expect.stringContaining('Idempotent-Replayed: true') });
+      expect(post(path).responses, path).toHaveProperty('422');
+    }
+    expect(
+      post('/api/orders/{orderId}/naloxone').parameters?.find((parameter) => parameter.name === 'Idempotency-Key')?.description,
+    ).toContain('Without a key, or with a new one: a repeat records a second dose');
+    expect(post('/api/auth/login').parameters ?? []).not.toContainEqual(expect.objectContaining({ name: 'Idempotency-Key' }));
+  });
 });

@@ -9,7 +9,7 @@ import { ParseIdPipe } from '../common/pipes/parse-id.pipe.js';
 import { NaloxoneDto, PauseDto, ResumeDto } from './dto/pause.dto.js';
 import { PausesService } from './pauses.service.js';
 
-/** The `Idempotency-Key` header every write takes: there is no replay store; each route says what a repeat does. */
+/** The `Idempotency-Key` header every write takes: on a POST the same key replays the first answer (common/idempotency/); each route says what a repeat without it does. */
 const idempotencyKey = (repeat: string) => ({
   name: 'Idempotency-Key',
   required: false,

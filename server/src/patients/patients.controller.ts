@@ -10,7 +10,7 @@ import { AddAllergyDto, OpioidToleranceDto, RecordWeightDto, Spo2ScaleDto } from
 import { PatientQueryDto } from './dto/patient-query.dto.js';
 import { PatientsService } from './patients.service.js';
 
-/** The `Idempotency-Key` header every write takes: there is no replay store; each route says what a repeat does. */
+/** The `Idempotency-Key` header every write takes: on a POST the same key replays the first answer (common/idempotency/); each route says what a repeat without it does. */
 const idempotencyKey = (repeat: string) => ({
   name: 'Idempotency-Key',
   required: false,

@@ -1,5 +1,6 @@
 import type { INestApplication } from '@nestjs/common';
 import { DocumentBuilder, type OpenAPIObject, SwaggerModule } from '@nestjs/swagger';
+import { addIdempotencyKeyHeader } from '../idempotency/idempotency-openapi.js';
 import { ApiErrorModel } from './api-error.model.js';
 import { addAccessAndCommonErrors } from './document-access.js';
 import { fillDocumentDefaults } from './document-defaults.js';
@@ -26,5 +27,5 @@ export function buildOpenApiDocument(app: INestApplication): OpenAPIObject {
     .build();
   const document = SwaggerModule.createDocument(app, config, { extraModels: [ApiErrorModel], operationIdFactory: operationIdOf });
   const facts = readRouteFacts(app);
-  return addAccessAndCommonErrors(addResponseSchemas(fillDocumentDefaults(document, facts)), facts);
+  return addAccessAndCommonErrors(addIdempotencyKeyHeader(addResponseSchemas(fillDocumentDefaults(document, facts)), facts), facts);
 }
