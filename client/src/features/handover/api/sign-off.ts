@@ -6,10 +6,9 @@ import { handoverKeys } from './handover-keys';
 
 /**
  * The sign-off request and one key per opening of the sign-off dialog, sent as `Idempotency-Key`
- * (the same for a double-click or a retry). Optional while the dialog is being reworked; the
- * dialog should pass `useIdempotencyKey().key`.
+ * (the same for a double-click or a retry).
  */
-export type SignOffVariables = CreateSignoffRequest & { idempotencyKey?: string };
+export type SignOffVariables = CreateSignoffRequest & { idempotencyKey: string };
 
 export function signOff(wardId: number, { idempotencyKey, ...request }: SignOffVariables): Promise<HandoverSignoffResponse> {
   return apiRequest(`/wards/${wardId}/handover/signoffs`, {
@@ -18,7 +17,7 @@ export function signOff(wardId: number, { idempotencyKey, ...request }: SignOffV
     schema: signoffSchema,
     // Signed with the nurse's password: a wrong one is shown beside the field, not a sign-out.
     signed: true,
-    headers: idempotencyKey ? { 'Idempotency-Key': idempotencyKey } : undefined,
+    headers: { 'Idempotency-Key': idempotencyKey },
   });
 }
 

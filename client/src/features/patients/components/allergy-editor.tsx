@@ -8,6 +8,7 @@ import { useAddAllergy } from '@/api/patients/add-allergy';
 import { useRecordNoKnownAllergies } from '@/api/patients/record-no-known-allergies';
 import { useRemoveAllergy } from '@/api/patients/remove-allergy';
 import { AllergyList } from '@/components/ui/allergy-list';
+import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { isApiRequestError } from '@/lib/api-error';
 import { applyServerErrors } from '@/lib/form-errors';
 import { notifySuccess } from '@/lib/notify';
@@ -28,6 +29,8 @@ export function AllergyEditor({ patient, canEdit }: { patient: Patient; canEdit:
   const add = useAddAllergy();
   const remove = useRemoveAllergy();
   const noneKnown = useRecordNoKnownAllergies();
+  // One key for "no known allergies" until it is recorded: a double-click records it once.
+  const noneKnownKey = useIdempotencyKey();
   const [key, setKey] = useState(() => crypto.randomUUID());
   const [refusal, setRefusal] = useState<string[]>([]);
   const form = useForm<AllergyFormValues>({
@@ -87,7 +90,9 @@ export function AllergyEditor({ patient, canEdit }: { patient: Patient; canEdit:
             variant="default"
             size="xs"
             loading={noneKnown.isPending}
-            onClick={() => noneKnown.mutate({ patientId: patient.id, idempotencyKey: crypto.randomUUID() })}
+            onClick={() =>
+              noneKnown.mutate({ patientId: patient.id, idempotencyKey: noneKnownKey.key }, { onSuccess: () => noneKnownKey.renew() })
+            }
           >
             Record no known allergies
           </Button>
