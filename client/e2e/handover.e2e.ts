@@ -1,7 +1,8 @@
-import type { Page } from 'playwright-core';
+import type { Locator, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { openBrowser, saveArtifact, signInHome, snapshot, type BrowserSession } from './support/browser.js';
 import { apiToken, callApi } from './support/api.js';
+import { DEMO_PASSWORD } from '../../server/test/support/demo-accounts.js';
 import { FALEOLO, startFaleoloPca } from './support/demo-pca.js';
 import { startServer, type RunningServer } from './support/server.js';
 
@@ -41,6 +42,18 @@ function confirmedText(answer: BoardAnswer): string {
     (row) => row.signoffs.some((s) => s.role === 'outgoing') && row.signoffs.some((s) => s.role === 'incoming'),
   );
   return `${confirmed.length} of ${running.length} PCAs confirmed`;
+}
+
+/** The incoming nurse's reading of FALEOLO's pump, typed into the sign-off dialog; only the demand dose varies. */
+async function enterPump(page: Page, dialog: Locator, demandDose: string): Promise<void> {
+  await dialog.getByRole('combobox', { name: 'Drug' }).click();
+  await page.getByRole('option', { name: 'HYDROmorphone' }).click();
+  await dialog.getByLabel('Concentration').fill('0.2');
+  await dialog.getByLabel('Syringe volume').fill('50');
+  await dialog.getByLabel('Demand dose').fill(demandDose);
+  await dialog.getByLabel('Lockout').fill('10');
+  await dialog.getByLabel('Basal rate').fill('0.1');
+  await dialog.getByLabel('4-hour limit').fill('6');
 }
 
 const board = (page: Page) => page.getByRole('table', { name: 'Handover board' });
@@ -150,16 +163,35 @@ describe('handover board', () => {
     await signInHome(page, 'kai.mendes');
     await openHarbourBoard(page);
 
+    // FALEOLO's sedation 3 flag is open: the dialog says so and Sign stays disabled until it is acknowledged.
     await page.getByRole('button', { name: /^Sign off \(outgoing\): FALEOLO, Tavita/ }).click();
     const outgoing = page.getByRole('dialog', { name: 'Sign off (outgoing): FALEOLO, Tavita' });
-    await outgoing.getByRole('button', { name: 'Sign as outgoing nurse' }).click();
+    await outgoing
+      .getByRole('alert')
+      .filter({ hasText: /Cannot be confirmed yet[\s\S]*Acknowledge the open urgent flag/ })
+      .waitFor();
+    const signOutgoing = outgoing.getByRole('button', { name: 'Sign as outgoing nurse' });
+    expect(await signOutgoing.isDisabled()).toBe(true);
+    await snapshot(page, 'handover-urgent-flag-blocks');
+    const flagged = await callApi<{ rows: { orderId: number; flags: { open: { id: number; severity: string }[] } }[] }>(
+      server.baseUrl,
+      kaiToken,
+      'GET',
+      `/wards/${HARBOUR}/handover`,
+    );
+    for (const flag of flagged.rows.find((row) => row.orderId === faleoloOrderId)!.flags.open.filter((f) => f.severity === 'urgent'))
+      await callApi(server.baseUrl, kaiToken, 'POST', `/flags/${flag.id}/acknowledge`, { note: 'Prescriber reviewed, dose reduced' });
+    await expect.poll(() => signOutgoing.isDisabled(), { timeout: 2500 }).toBe(false);
+    await outgoing.getByLabel('Your password').fill(DEMO_PASSWORD);
+    await signOutgoing.click();
     await outgoing.waitFor({ state: 'detached' });
     await expect.poll(() => rowOf(mei.page, 'FALEOLO').innerText(), { timeout: 2500 }).toContain('Outgoing ✓ Kai Mendes');
 
     // The same nurse cannot also take the PCA over: the server's refusal shows in the dialog.
     await page.getByRole('button', { name: /^Sign off \(incoming\): FALEOLO, Tavita/ }).click();
     const sameNurse = page.getByRole('dialog', { name: 'Sign off (incoming): FALEOLO, Tavita' });
-    await sameNurse.getByRole('checkbox', { name: 'The pump settings match the order' }).check();
+    await enterPump(page, sameNurse, '0.2');
+    await sameNurse.getByLabel('Your password').fill(DEMO_PASSWORD);
     await sameNurse.getByRole('button', { name: 'Sign as incoming nurse' }).click();
     await sameNurse.getByRole('alert').filter({ hasText: 'two different people' }).waitFor();
     await sameNurse.getByRole('button', { name: 'Back' }).click();
@@ -169,11 +201,28 @@ describe('handover board', () => {
     await openHarbourBoard(page);
     await page.getByRole('button', { name: /^Sign off \(incoming\): FALEOLO, Tavita/ }).click();
     const incoming = page.getByRole('dialog', { name: 'Sign off (incoming): FALEOLO, Tavita' });
-    await incoming.getByRole('table', { name: "The order's regimen" }).getByText('0.1 mg/h').waitFor();
+    // Blind: the order's regimen is not shown to the incoming nurse, and every reading starts empty.
+    await incoming.getByLabel('Demand dose').waitFor();
+    expect(await incoming.getByRole('table', { name: "The order's regimen" }).count()).toBe(0);
+    expect(await incoming.getByLabel('Demand dose').inputValue()).toBe('');
     await incoming.getByRole('button', { name: 'Sign as incoming nurse' }).click();
-    await incoming.getByText(/^Confirm the pump settings match the order/).waitFor();
-    await snapshot(page, 'handover-incoming-confirm');
-    await incoming.getByRole('checkbox', { name: 'The pump settings match the order' }).check();
+    await incoming.getByText('Enter the demand dose').waitFor();
+    await incoming.getByText('Enter your password to sign').waitFor();
+
+    // The pump reads a demand dose of 0.3 mg where the order says 0.2 mg: refused, named beside the field.
+    await enterPump(page, incoming, '0.3');
+    await incoming.getByLabel('Your password').fill(DEMO_PASSWORD);
+    await incoming.getByRole('button', { name: 'Sign as incoming nurse' }).click();
+    await incoming.getByText(/^Demand dose differs from the running order/).waitFor();
+    await incoming
+      .getByRole('alert')
+      .filter({ hasText: /Not signed[\s\S]*differ from the running order/ })
+      .waitFor();
+    expect(await incoming.getByText(/^Lockout differs/).count()).toBe(0);
+    await snapshot(page, 'handover-incoming-mismatch');
+    expect(await rowOf(mei.page, 'FALEOLO').innerText()).toContain('Incoming: not signed');
+
+    await incoming.getByLabel('Demand dose').fill('0.2');
     await incoming.getByRole('button', { name: 'Sign as incoming nurse' }).click();
     await incoming.waitFor({ state: 'detached' });
 
@@ -199,7 +248,11 @@ describe('handover board', () => {
     const sheet = page.getByRole('table', { name: 'Handover sheet' });
     const answer = await callApi<BoardAnswer>(server.baseUrl, kaiToken, 'GET', `/wards/${HARBOUR}/handover`);
     expect(await sheet.locator('tbody tr').count()).toBe(answer.rows.length);
-    expect(await sheet.locator('tbody tr').nth(1).innerText()).toMatch(/^H07\s+Urgent[\s\S]*FALEOLO, Tavita/);
+    // FALEOLO's urgent flag was acknowledged before the sign-off, so VALDIVIA's is the sheet's only urgent row at the top.
+    expect(await sheet.locator('tbody tr').nth(0).innerText()).toMatch(/^H05\s+Urgent[\s\S]*VALDIVIA, Ines/);
+    expect(await sheet.locator('tbody tr').filter({ hasText: 'FALEOLO, Tavita' }).innerText()).toMatch(
+      /^H07[\s\S]*Incoming ✓ Rosa Adeyemi/,
+    );
     await sheet.getByText(/^Decision support only:/).waitFor();
 
     // Roughly the printable area of A4 landscape with 10 mm margins, at 96 px to the inch.

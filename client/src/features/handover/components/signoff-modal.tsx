@@ -53,14 +53,15 @@ export function SignoffModal({ wardId, row, role, onClose }: SignoffModalProps) 
   const blocked = handoverConfirmRefusal(row.flags.open);
   const form = useForm<SignoffValues>({
     initialValues: { ...emptyPumpReading(), password: '' },
-    validate: { password: (value) => (value ? null : 'Enter your password to sign') },
   });
 
   const submit = form.onSubmit((values) => {
     setRefusals([]);
+    // Every problem at once: the reading's and the password's.
     const reading = incoming ? readPumpReading(values) : null;
-    if (reading && !reading.settings) {
-      form.setErrors(reading.errors);
+    const errors: Record<string, string> = { ...reading?.errors, ...(values.password ? {} : { password: 'Enter your password to sign' }) };
+    if (Object.keys(errors).length > 0 || (reading && !reading.settings)) {
+      form.setErrors(errors);
       return;
     }
     mutation.mutate(
