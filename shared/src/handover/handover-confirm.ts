@@ -2,7 +2,7 @@ import { compareSettings } from '../bedside/compare-settings.js';
 import { PUMP_SETTING_LABELS, type PumpSettings } from '../bedside/bedside.schema.js';
 
 /** An open flag as the handover rule reads it: enough to name it. */
-export type HandoverOpenFlag = { id: number; severity: 'info' | 'review' | 'urgent'; message: string };
+type HandoverOpenFlag = { id: number; severity: 'info' | 'review' | 'urgent'; message: string };
 
 /**
  * Why a PCA cannot be confirmed at handover, or null when it can: an urgent flag still open must be

@@ -4,7 +4,7 @@ import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 // The incoming nurse's blind reading of the pump at handover: always starts empty, never filled
 // in from the order (that would defeat the re-check). The server compares it with the order.
 
-export type PumpReadingField = Exclude<keyof PumpSettings, 'drugId'>;
+type PumpReadingField = Exclude<keyof PumpSettings, 'drugId'>;
 export type PumpReadingValues = { drugId: string | null } & Record<PumpReadingField, NumberFieldValue>;
 
 export const PUMP_READING_FIELDS: readonly PumpReadingField[] = PUMP_SETTING_FIELDS.filter(
