@@ -58,6 +58,8 @@ export * from './bedside/compare-settings.js';
 export * from './bedside/wristband.js';
 export * from './bedside/bedside-actions.js';
 export * from './bedside/pca-pause.js';
+export * from './bedside/bolus-checks.js';
+export * from './bedside/release-guards.js';
 export * from './observations/sedation-scale.js';
 export * from './observations/ward-policy.js';
 export * from './observations/observation-flags.js';
