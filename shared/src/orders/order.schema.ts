@@ -181,6 +181,8 @@ export const createReleaseSchema = z.strictObject({
   preparedBy: name('Enter who prepared the syringe', 'preparedBy must be text'),
   checkedBy: name('Enter who checked the syringe', 'checkedBy must be text'),
   overrideReason: reasonText('overrideReason must be text', 'overrideReason must be text').nullish(),
+  /** Needed when the order already has a ready or running syringe (secondReleaseRefusal). */
+  secondSyringeReason: reasonText('secondSyringeReason must be text', 'secondSyringeReason must be text').nullish(),
 });
 export type CreateReleaseRequest = z.infer<typeof createReleaseSchema>;
 
