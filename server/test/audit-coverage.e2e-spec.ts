@@ -169,7 +169,8 @@ describe('every state-changing route writes its audit event', () => {
       'nurse',
       {
         painScore: 3,
-        sedationLevel: '3',
+        // Sedation 2: a bolus follows, and none is given after sedation 3 (shared bolusSafetyRefusal).
+        sedationLevel: '2',
         respiratoryRate: 12,
         spo2: 96,
         oxygenLitresPerMinute: 0,

@@ -1,14 +1,26 @@
 import { ConflictException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { type DataSource, IsNull } from 'typeorm';
-import { BEDSIDE_ROLES, type BolusResponse, checkAgainstRule, formatDose } from '@lockstep/shared';
+import { type DataSource, type EntityManager, In, IsNull, MoreThanOrEqual } from 'typeorm';
+import {
+  BEDSIDE_ROLES,
+  type BolusResponse,
+  bolusLimitRefusal,
+  bolusSafetyRefusal,
+  checkAgainstRule,
+  formatDose,
+  type SyringeReading,
+} from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { statusConflict } from '../orders/order-transitions.js';
 import { OrdersService } from '../orders/orders.service.js';
 import { UsersService } from '../users/users.service.js';
 import type { BolusDto } from './dto/bedside-actions.dto.js';
 import { requireBedsideAction } from './bedside-state.js';
+import { BedsideCheck } from './entities/bedside-check.entity.js';
 import { ClinicianBolus } from './entities/clinician-bolus.entity.js';
+import { Flag } from '../flags/entities/flag.entity.js';
+import { Observation } from '../observations/entities/observation.entity.js';
+import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { PcaPause } from './entities/pca-pause.entity.js';
 import { recordAudit } from '../audit/record-audit.js';
 import { fieldError } from '../common/errors/field-error.js';
@@ -52,6 +64,8 @@ export class BolusesService {
           throw fieldError('overrideReason', message);
         }
       }
+      const now = new Date();
+      await refuseUnsafeBolus(manager, order, dto.amount, now);
       const bolus = await manager.save(
         manager.create(ClinicianBolus, {
           orderId,
@@ -60,7 +74,7 @@ export class BolusesService {
           overrideReason: dto.overrideReason?.trim() ?? null,
           givenById: nurse.id,
           witnessId: witness.id,
-          at: new Date(),
+          at: now,
         }),
       );
       await recordAudit(manager, nurse, {
@@ -89,4 +103,66 @@ export class BolusesService {
       };
     });
   }
+}
+
+const FOUR_HOURS_MS = 4 * 3_600_000;
+
+/**
+ * The shared bolus checks against the record (409 with "contact the prescriber"): the latest
+ * observation's sedation and the open urgent breathing flags (`bolusSafetyRefusal`), then the
+ * hour's and 4 hours' total with this bolus against the order's limits (`bolusLimitRefusal`), from
+ * the pump totals of the last 4 hours (each syringe starting at zero at its matched bedside check,
+ * as the usage figures read them) and the clinician boluses given in them.
+ */
+async function refuseUnsafeBolus(manager: EntityManager, order: PcaOrder, amount: number, now: Date): Promise<void> {
+  const last = await manager.findOne(Observation, { where: { orderId: order.id }, order: { at: 'DESC', id: 'DESC' } });
+  const open = await manager.findBy(Flag, { orderId: order.id, severity: 'urgent', acknowledgedAt: IsNull() });
+  const safety = bolusSafetyRefusal({ lastSedation: last?.sedationLevel ?? null, openUrgentFlagCodes: open.map((flag) => flag.code) });
+  if (safety) throw new ConflictException(safety);
+
+  // A day before the window as well, so the first reading inside it has the one before it.
+  const since = new Date(now.getTime() - FOUR_HOURS_MS - 24 * 3_600_000);
+  const recent = await manager.find(Observation, {
+    where: { orderId: order.id, at: MoreThanOrEqual(since) },
+    order: { at: 'ASC', id: 'ASC' },
+  });
+  const releaseIds = [...new Set(recent.map((observation) => observation.releaseId))];
+  const starts =
+    releaseIds.length === 0
+      ? []
+      : await manager.find(BedsideCheck, { where: { orderId: order.id, status: 'matched', releaseId: In(releaseIds) } });
+  const readings: SyringeReading[] = [
+    ...starts.map((check) => ({
+      syringeId: check.releaseId,
+      at: (check.secondAt ?? check.firstAt).toISOString(),
+      attempts: 0,
+      delivered: 0,
+      volumeInfusedMl: 0,
+    })),
+    ...recent.map((o) => ({
+      syringeId: o.releaseId,
+      at: o.at.toISOString(),
+      attempts: o.attempts,
+      delivered: o.delivered,
+      volumeInfusedMl: o.volumeInfusedMl,
+    })),
+  ];
+  const boluses = await manager.find(ClinicianBolus, {
+    where: { orderId: order.id, at: MoreThanOrEqual(new Date(now.getTime() - FOUR_HOURS_MS)) },
+  });
+  const limit = bolusLimitRefusal(
+    amount,
+    readings,
+    boluses.map((bolus) => ({ at: bolus.at.toISOString(), amount: bolus.amount })),
+    {
+      doseUnit: order.doseUnit,
+      demandDose: order.demandDose,
+      basalRatePerHour: order.basalRatePerHour,
+      oneHourLimit: order.oneHourLimit,
+      fourHourLimit: order.fourHourLimit,
+      startedAt: order.startedAt?.toISOString() ?? null,
+    },
+    now,
+  );
+  if (limit) throw new ConflictException(limit);
 }
