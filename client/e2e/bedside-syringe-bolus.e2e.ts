@@ -30,7 +30,10 @@ async function activeOrderWithSpareSyringe(baseUrl: string): Promise<{ id: numbe
     settings: SETTINGS,
   });
   await callApi(baseUrl, kai, 'POST', `/orders/${order.id}/bedside-checks/${check.id}/second`, { ...ROSA, settings: SETTINGS });
-  const spare = await callApi<{ releaseCode: string }>(baseUrl, lin, 'POST', `/orders/${order.id}/releases`, RELEASE);
+  const spare = await callApi<{ releaseCode: string }>(baseUrl, lin, 'POST', `/orders/${order.id}/releases`, {
+    ...RELEASE,
+    secondSyringeReason: 'Replacement for the running syringe',
+  });
   return { id: order.id, spareCode: spare.releaseCode };
 }
 

@@ -236,7 +236,15 @@ describe('every state-changing route writes its audit event', () => {
       201,
       'order.handover-signoff',
     );
-    const second = await step('post', '/api/orders/:id/releases', `${base}/releases`, 'pharmacist', RELEASE, 201, 'order.release');
+    const second = await step(
+      'post',
+      '/api/orders/:id/releases',
+      `${base}/releases`,
+      'pharmacist',
+      { ...RELEASE, secondSyringeReason: 'Replacement for the running syringe' },
+      201,
+      'order.release',
+    );
     await step(
       'post',
       '/api/orders/:id/syringe-changes',

@@ -53,7 +53,7 @@ async function setUp({ t, tokens }: BadInputApp): Promise<void> {
   const spare = await request(t.http)
     .post(`/api/orders/${state.active.id}/releases`)
     .set({ Authorization: `Bearer ${tokens.pharmacist}` })
-    .send(RELEASE)
+    .send({ ...RELEASE, secondSyringeReason: 'Replacement for the running syringe' })
     .expect(201);
   state.spareCode = spare.body.releaseCode;
   const sedated = await request(t.http)

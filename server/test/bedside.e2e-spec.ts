@@ -165,7 +165,11 @@ describe('bedside: two-nurse check, bolus, syringe change, discontinue', () => {
   describe('syringe change and discontinue', () => {
     it('changes the syringe with witnessed waste that reconciles, then a new blind check starts the new syringe', async () => {
       const order = await activeOrder();
-      const { body: next } = await request(t.http).post(`/api/orders/${order.id}/releases`).set(as('lin')).send(RELEASE).expect(201);
+      const { body: next } = await request(t.http)
+        .post(`/api/orders/${order.id}/releases`)
+        .set(as('lin'))
+        .send({ ...RELEASE, secondSyringeReason: 'Replacement for the running syringe' })
+        .expect(201);
       await firstCheck(order.id, { ...order.patient.identity, releaseCode: next.releaseCode, settings: SETTINGS }).expect(409);
       const change = await request(t.http)
         .post(`/api/orders/${order.id}/syringe-changes`)

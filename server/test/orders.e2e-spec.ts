@@ -313,7 +313,12 @@ describe('orders, verification and syringe release', () => {
       const unusual = await request(t.http)
         .post(`/api/orders/${order.id}/releases`)
         .set(as('pharmacist'))
-        .send({ ...RELEASE, volumeMl: 100, overrideReason: 'Only 100 mL syringes in stock tonight' })
+        .send({
+          ...RELEASE,
+          volumeMl: 100,
+          overrideReason: 'Only 100 mL syringes in stock tonight',
+          secondSyringeReason: 'Spare for the night shift',
+        })
         .expect(201);
       expect(unusual.body.releaseCode).not.toBe(released.body.releaseCode);
 

@@ -4,6 +4,7 @@ import type { DataSource, EntityManager } from 'typeorm';
 import {
   BEDSIDE_ROLES,
   compareSettings,
+  pendingCheckRefusal,
   wristbandErrors,
   type FirstCheckResponse,
   type PumpSettings,
@@ -44,6 +45,12 @@ export class BedsideChecksService {
       checkIdentity(order, dto);
       const release = await readyRelease(manager, order, dto.releaseCode, 'releaseCode');
       await requireBedsideAction(manager, order, 'check');
+      // One pending check per syringe: read inside the (queued) transaction, so 20 at once start one.
+      const pendingRefusal = pendingCheckRefusal(
+        await manager.findBy(BedsideCheck, { releaseId: release.id, status: 'awaiting_second' }),
+        release.id,
+      );
+      if (pendingRefusal) throw new ConflictException({ statusCode: 409, message: pendingRefusal, field: 'releaseCode' });
       const check = await manager.save(
         manager.create(BedsideCheck, {
           orderId,

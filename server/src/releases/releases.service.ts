@@ -5,7 +5,9 @@ import type { DataSource, EntityManager } from 'typeorm';
 import {
   formatDose,
   ORDER_STATUS_LABELS,
+  openReleases,
   releaseCode,
+  secondReleaseRefusal,
   USUAL_SYRINGE_ML,
   type FieldError,
   type SyringeReleaseResponse,
@@ -46,6 +48,18 @@ export class ReleasesService {
         });
       }
       checkRelease(dto, found.concentrationPerMl, found.doseUnit);
+      // Read inside the write transaction (transactions are queued one at a time), so two releases at once cannot both pass.
+      const existing = await manager.find(SyringeRelease, { where: { orderId }, order: { id: 'ASC' } });
+      const refusal = secondReleaseRefusal(existing, dto.secondSyringeReason);
+      if (refusal) {
+        throw new ConflictException({
+          statusCode: 409,
+          message: refusal,
+          field: 'secondSyringeReason',
+          openReleaseCodes: openReleases(existing).map((release) => release.releaseCode),
+        });
+      }
+      const secondSyringe = openReleases(existing).length > 0;
       const saved = await manager.save(
         manager.create(SyringeRelease, {
           orderId,
@@ -66,7 +80,15 @@ export class ReleasesService {
         action: 'order.release',
         entityType: 'order',
         entityId: orderId,
-        summary: releaseAuditSummary(saved),
+        summary: {
+          ...releaseAuditSummary(saved),
+          ...(secondSyringe
+            ? {
+                secondSyringeReason: dto.secondSyringeReason?.trim(),
+                alongside: openReleases(existing).map((release) => release.releaseCode),
+              }
+            : {}),
+        },
       });
       return {
         order: found,

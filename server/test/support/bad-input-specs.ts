@@ -79,6 +79,7 @@ export const RELEASE: BodySpec = {
   preparedBy: { type: 'string', min: 1, max: 120, trimmed: true },
   checkedBy: { type: 'string', min: 1, max: 120, trimmed: true },
   overrideReason: { ...reason, presence: 'optional' },
+  secondSyringeReason: { ...reason, presence: 'optional' },
 };
 
 const PUMP_SETTINGS: BodySpec = {

@@ -61,4 +61,16 @@ export class CreateReleaseDto implements CreateReleaseRequest {
   @IsString({ message: 'overrideReason must be text' })
   @IsOptional()
   overrideReason?: string;
+
+  @ApiPropertyOptional({
+    minLength: MIN_REASON_LENGTH,
+    maxLength: 1000,
+    description: 'Needed when the order already has a ready or running syringe: why a second one is released',
+  })
+  @Trim()
+  @MaxLength(1000, { message: 'The reason is at most 1,000 characters' })
+  @MinLength(MIN_REASON_LENGTH, { message: `Give a reason of at least ${MIN_REASON_LENGTH} characters` })
+  @IsString({ message: 'secondSyringeReason must be text' })
+  @IsOptional()
+  secondSyringeReason?: string;
 }
