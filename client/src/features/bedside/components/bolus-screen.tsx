@@ -5,9 +5,11 @@ import { formatDose, MIN_REASON_LENGTH, syringeState, tallMan, type OrderDetail 
 import { NumberField } from '@/components/ui/number-field';
 import { readNumber, type NumberFieldValue } from '@/lib/number-input';
 import { useGiveBolus } from '@/api/orders/give-bolus';
+import { useObservations } from '@/api/orders/get-observations';
 import { emptyWitness, useWitnessedStep, WITNESS_RULES, type WitnessedValues } from '../hooks/use-witnessed-step';
 import { BedsideOrderPage } from './bedside-order-page';
 import { BolusGiven } from './bolus-given';
+import { BolusSafetyPanel } from './bolus-safety-panel';
 import { OrderNotice } from './order-notice';
 import { WitnessedDone, WitnessedSteps } from './witnessed-steps';
 
@@ -34,6 +36,7 @@ export function BolusScreen({ orderId }: { orderId: number }) {
 
 function Bolus({ order }: { order: OrderDetail }) {
   const bolus = useGiveBolus(order.id);
+  const observations = useObservations(order.id);
   const [needsOverride, setNeedsOverride] = useState(false);
   const unit = order.doseUnit;
   const maximum = order.clinicianBolusDose;
@@ -97,6 +100,7 @@ function Bolus({ order }: { order: OrderDetail }) {
         next: 'Next: witness',
         fields: (
           <>
+            <BolusSafetyPanel observation={observations.data?.at(-1) ?? null} flags={order.flags} loading={observations.isPending} />
             <NumberField
               label={`Bolus (${unit})`}
               description={`Ordered clinician bolus: at most ${formatDose(maximum, unit)} of ${tallMan(order.drugName)}`}
