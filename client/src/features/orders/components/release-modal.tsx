@@ -6,7 +6,10 @@ import {
   DECISION_SUPPORT_CAUTION,
   formatDose,
   MIN_REASON_LENGTH,
+  openReleases,
+  RELEASE_STATUS_LABELS,
   USUAL_SYRINGE_ML,
+  type OrderDetail,
   type OrderSummary,
   type SyringeReleaseResponse,
 } from '@lockstep/shared';
@@ -20,7 +23,8 @@ import { OrderInBrief } from './order-in-brief';
 import { ReleaseResult } from './release-result';
 
 export interface ReleaseModalProps {
-  order: OrderSummary;
+  /** With its releases when known (the order's detail), so an open syringe is named before sending. */
+  order: OrderSummary & Partial<Pick<OrderDetail, 'releases'>>;
   onClose: () => void;
 }
 
@@ -31,6 +35,10 @@ export function ReleaseModal({ order, onClose }: ReleaseModalProps) {
   const idempotency = useIdempotencyKey();
   const [released, setReleased] = useState<SyringeReleaseResponse | null>(null);
   const [formAlert, setFormAlert] = useState<string[]>([]);
+  // The server's 409 for a second syringe this screen did not know of: shown beside the reason field.
+  const [serverRefusal, setServerRefusal] = useState<string | null>(null);
+  const open = openReleases(order.releases ?? []);
+  const asksSecondReason = open.length > 0 || serverRefusal !== null;
   const form = useForm<ReleaseFormValues>({ initialValues: releaseFormValues(order) });
   const unit = order.doseUnit;
   const volume = readAmount(form.values.volumeMl);
@@ -40,7 +48,7 @@ export function ReleaseModal({ order, onClose }: ReleaseModalProps) {
 
   const submit = form.onSubmit((values) => {
     setFormAlert([]);
-    const { request, errors } = readReleaseForm(values, new Date());
+    const { request, errors } = readReleaseForm(values, new Date(), order.releases ?? [], serverRefusal);
     if (!request) {
       form.setErrors(errors);
       return;
@@ -52,8 +60,14 @@ export function ReleaseModal({ order, onClose }: ReleaseModalProps) {
           idempotency.renew();
           setReleased(answer);
         },
-        onError: (error) =>
-          setFormAlert(isApiRequestError(error) && error.status === 400 ? applyServerErrors(form, error) : [errorMessage(error)]),
+        onError: (error) => {
+          if (isApiRequestError(error) && error.status === 409 && error.message.includes('give a reason to release a second')) {
+            setServerRefusal(error.message);
+            form.setFieldError('secondSyringeReason', error.message);
+            return;
+          }
+          setFormAlert(isApiRequestError(error) && error.status === 400 ? applyServerErrors(form, error) : [errorMessage(error)]);
+        },
       },
     );
   });
@@ -118,6 +132,28 @@ export function ReleaseModal({ order, onClose }: ReleaseModalProps) {
             <TextInput label="Prepared by" size="md" withAsterisk autoComplete="off" {...form.getInputProps('preparedBy')} />
             <TextInput label="Checked by" size="md" withAsterisk autoComplete="off" {...form.getInputProps('checkedBy')} />
           </SimpleGrid>
+          {open.length > 0 ? (
+            <Alert color="yellow" variant="light" icon={<IconAlertCircle aria-hidden />} title="This order already has a syringe">
+              {open
+                .map(
+                  (syringe) =>
+                    `${syringe.releaseCode} (${RELEASE_STATUS_LABELS[syringe.status].toLowerCase()}, ${formatDose(syringe.volumeMl, 'mL')})`,
+                )
+                .join(', ')}
+              . One ready or running syringe per order: give the reason for a second one.
+            </Alert>
+          ) : null}
+          {asksSecondReason ? (
+            <Textarea
+              label="Reason for a second syringe"
+              description={`The order already has a ready or running syringe; at least ${MIN_REASON_LENGTH} characters`}
+              autosize
+              minRows={2}
+              size="md"
+              withAsterisk
+              {...form.getInputProps('secondSyringeReason')}
+            />
+          ) : null}
           {unusual ? (
             <Textarea
               label="Reason for the unusual volume"

@@ -47,6 +47,34 @@ describe('syringe release form', () => {
     });
   });
 
+  it('asks for the reason for a second syringe while the order has one ready or running, naming it', () => {
+    const open = [
+      { releaseCode: 'ACD-EFG', status: 'in_use' as const },
+      { releaseCode: 'HJK-MNP', status: 'finished' as const },
+    ];
+    expect(readReleaseForm(filled, now, open)).toEqual({
+      request: null,
+      errors: { secondSyringeReason: 'This order already has syringe ACD-EFG (in use): give a reason to release a second' },
+    });
+    expect(readReleaseForm({ ...filled, secondSyringeReason: 'spare' }, now, open).errors).toEqual({
+      secondSyringeReason: 'Give a reason of at least 10 characters',
+    });
+    const given = readReleaseForm({ ...filled, secondSyringeReason: ' Running syringe nearly empty ' }, now, open);
+    expect(given.request?.secondSyringeReason).toBe('Running syringe nearly empty');
+    // Finished syringes only: no reason asked, none sent.
+    const after = readReleaseForm({ ...filled, secondSyringeReason: 'left over from before' }, now, [open[1]]);
+    expect(after.errors).toEqual({});
+    expect(after.request).not.toHaveProperty('secondSyringeReason');
+  });
+
+  it('shows the server’s refusal beside the reason when it knew of a syringe this screen did not', () => {
+    const refusal = 'This order already has syringe ACD-EFG (ready): give a reason to release a second';
+    expect(readReleaseForm(filled, now, [], refusal).errors).toEqual({ secondSyringeReason: refusal });
+    expect(readReleaseForm({ ...filled, secondSyringeReason: 'Spare for theatre' }, now, [], refusal).request?.secondSyringeReason).toBe(
+      'Spare for theatre',
+    );
+  });
+
   it('names every missing field', () => {
     const { request, errors } = readReleaseForm({ ...releaseFormValues({ concentrationPerMl: 1 }), volumeMl: 'fifty' }, now);
     expect(request).toBeNull();

@@ -1,4 +1,11 @@
-import { createReleaseSchema, USUAL_SYRINGE_ML, type CreateReleaseRequest, type OrderSummary } from '@lockstep/shared';
+import {
+  createReleaseSchema,
+  secondReleaseRefusal,
+  USUAL_SYRINGE_ML,
+  type CreateReleaseRequest,
+  type OrderSummary,
+  type ReleaseStatus,
+} from '@lockstep/shared';
 import { readAmount } from './order-form';
 
 export type ReleaseFormValues = {
@@ -10,6 +17,8 @@ export type ReleaseFormValues = {
   preparedBy: string;
   checkedBy: string;
   overrideReason: string;
+  /** Why a second syringe is released while the order has one ready or running. */
+  secondSyringeReason: string;
 };
 
 /** Volume of a usual PCA syringe, offered first. */
@@ -24,6 +33,7 @@ export function releaseFormValues(order: Pick<OrderSummary, 'concentrationPerMl'
     preparedBy: '',
     checkedBy: '',
     overrideReason: '',
+    secondSyringeReason: '',
   };
 }
 
@@ -42,8 +52,20 @@ export function localDateTimeToIso(value: string): string {
 
 export type ReadRelease = { request: CreateReleaseRequest | null; errors: Record<string, string> };
 
-/** The form checked against the shared schema, plus the reason an unusual volume needs. */
-export function readReleaseForm(values: ReleaseFormValues, now: Date): ReadRelease {
+/**
+ * The form checked against the shared schema, plus the reason an unusual volume needs and, when the
+ * order already has a ready or running syringe (`releases`), the reason for a second one.
+ */
+export function readReleaseForm(
+  values: ReleaseFormValues,
+  now: Date,
+  releases: readonly { releaseCode: string; status: ReleaseStatus }[] = [],
+  /** The server's 409 when it knew of an open syringe this screen did not: its words stand beside the field. */
+  serverRefusal: string | null = null,
+): ReadRelease {
+  const secondReason = values.secondSyringeReason.trim();
+  const secondRefusal = secondReleaseRefusal(releases, secondReason) ?? (serverRefusal && secondReason === '' ? serverRefusal : null);
+  const needsSecondReason = secondReleaseRefusal(releases, null) !== null || serverRefusal !== null;
   const volume = readAmount(values.volumeMl);
   const unusual = isUnusualVolume(volume);
   const reason = values.overrideReason.trim();
@@ -57,6 +79,8 @@ export function readReleaseForm(values: ReleaseFormValues, now: Date): ReadRelea
     checkedBy: values.checkedBy,
     // Only an unusual volume carries a reason; a reason typed before the volume changed is dropped.
     ...(unusual ? { overrideReason: reason } : {}),
+    // Only sent while the order has a ready or running syringe (known here or named by the server's 409).
+    ...(needsSecondReason ? { secondSyringeReason: secondReason } : {}),
   };
   const errors: Record<string, string> = {};
   const parsed = createReleaseSchema.safeParse(candidate);
@@ -69,6 +93,7 @@ export function readReleaseForm(values: ReleaseFormValues, now: Date): ReadRelea
   }
   if (unusual && reason === '')
     errors.overrideReason = `Outside the usual ${USUAL_SYRINGE_ML.min}–${USUAL_SYRINGE_ML.max} mL: give a reason`;
+  if (secondRefusal) errors.secondSyringeReason = secondRefusal;
   if (expiresAt && new Date(expiresAt).getTime() <= now.getTime()) errors.expiresAt ??= 'The expiry must be later than now';
   return { request: parsed.success && Object.keys(errors).length === 0 ? parsed.data : null, errors };
 }
