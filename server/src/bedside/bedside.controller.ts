@@ -52,7 +52,11 @@ export class BedsideController {
     return this.checks.second(orderId, checkId, body);
   }
 
-  @ApiOperation({ summary: 'Give a clinician bolus, with a witness' })
+  @ApiOperation({
+    summary: 'Give a clinician bolus, with a witness',
+    description:
+      "Refused (409, \"contact the prescriber\") when the latest observation shows sedation 3 or 4, an urgent sedation or breathing flag is open, or the bolus would take the hour's or 4 hours' total over the order's limit (shared bolus checks).",
+  })
   @ApiErrors(404, 409)
   @Post('boluses')
   bolus(@Param('orderId', ParseIdPipe) orderId: number, @Body() body: BolusDto, @CurrentUser() user: AuthUser): Promise<BolusResponse> {
