@@ -6,7 +6,7 @@ import { useStartFirstCheck } from '@/api/orders/start-first-check';
 import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import type { BouncedErrors, CheckStep } from '../hooks/use-bedside-check';
 import type { IdentityValues } from '../utils/identity-check';
-import { emptyPumpSettingsForm, readPumpSettingsForm, type PumpSettingsFormValues } from '../utils/pump-settings-form';
+import { emptyPumpSettingsForm, readPumpSettingsForm, type PumpSettingsFormValues } from '@/utils/pump-settings-form';
 import { placeServerErrors, stepOfFirstCheckError } from '../utils/server-errors';
 import { PumpSettingsFields } from './pump-settings-fields';
 import { StepActions } from './step-actions';

@@ -7,8 +7,8 @@ import {
   OPTIONAL_SETTING_FIELDS,
   type NumericSettingField,
   type PumpSettingsFormValues,
-} from '../utils/pump-settings-form';
-import { pumpSettingUnit } from '../utils/setting-format';
+} from '@/utils/pump-settings-form';
+import { pumpSettingUnit } from '@/utils/pump-setting-format';
 
 export interface PumpSettingsFieldsProps {
   drugs: readonly Drug[];

@@ -8,7 +8,7 @@ import { applyServerErrors } from '@/lib/form-errors';
 import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
 import { useDrugs } from '@/api/drugs/get-drugs';
 import { usePauseState, useResumePca } from '@/api/orders/pca-pause';
-import { emptyPumpSettingsForm, readPumpSettingsForm, type PumpSettingsFormValues } from '../utils/pump-settings-form';
+import { emptyPumpSettingsForm, readPumpSettingsForm, type PumpSettingsFormValues } from '@/utils/pump-settings-form';
 import { BedsideOrderPage } from './bedside-order-page';
 import { ColleagueFields } from './colleague-fields';
 import { OrderNotice } from './order-notice';

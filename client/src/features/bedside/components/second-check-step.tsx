@@ -6,7 +6,7 @@ import type { Drug, SecondCheckResponse, OrderDetail } from '@lockstep/shared';
 import { isApiRequestError } from '@/lib/api-error';
 import { useCompleteSecondCheck } from '@/api/orders/complete-second-check';
 import { useIdempotencyKey } from '@/hooks/use-idempotency-key';
-import { emptyPumpSettingsForm, readPumpSettingsForm, type PumpSettingsFormValues } from '../utils/pump-settings-form';
+import { emptyPumpSettingsForm, readPumpSettingsForm, type PumpSettingsFormValues } from '@/utils/pump-settings-form';
 import { placeServerErrors } from '../utils/server-errors';
 import { ColleagueFields } from './colleague-fields';
 import { PumpSettingsFields } from './pump-settings-fields';

@@ -1,7 +1,7 @@
 import { useCallback, useState } from 'react';
 import type { SecondCheckResponse } from '@lockstep/shared';
 import type { IdentityValues } from '../utils/identity-check';
-import type { PumpSettingsFormValues } from '../utils/pump-settings-form';
+import type { PumpSettingsFormValues } from '@/utils/pump-settings-form';
 
 export const CHECK_STEPS = ['identify', 'syringe', 'first', 'second', 'result'] as const;
 export type CheckStep = (typeof CHECK_STEPS)[number];

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import type { Drug } from '@lockstep/shared';
 import { differenceRows } from './setting-differences';
-import { formatPumpSetting, pumpSettingUnit } from './setting-format';
+import { formatPumpSetting, pumpSettingUnit } from '@/utils/pump-setting-format';
 
 const drugs: Drug[] = [
   { id: 1, genericName: 'morphine', doseUnit: 'mg' },

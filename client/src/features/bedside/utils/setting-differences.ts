@@ -1,5 +1,5 @@
 import { PUMP_SETTING_LABELS, type DoseUnit, type Drug, type PumpSettings, type SettingDifference } from '@lockstep/shared';
-import { formatPumpSetting } from './setting-format';
+import { formatPumpSetting } from '@/utils/pump-setting-format';
 
 export interface DifferenceRow {
   field: keyof PumpSettings;
