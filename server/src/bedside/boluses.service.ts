@@ -1,27 +1,19 @@
 import { ConflictException, Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { type DataSource, type EntityManager, In, IsNull, MoreThanOrEqual } from 'typeorm';
-import {
-  BEDSIDE_ROLES,
-  type BolusResponse,
-  bolusLimitRefusal,
-  bolusSafetyRefusal,
-  checkAgainstRule,
-  formatDose,
-  type SyringeReading,
-} from '@lockstep/shared';
+import { type DataSource, type EntityManager, IsNull, MoreThanOrEqual } from 'typeorm';
+import { BEDSIDE_ROLES, type BolusResponse, bolusLimitRefusal, bolusSafetyRefusal, checkAgainstRule, formatDose } from '@lockstep/shared';
 import type { AuthUser } from '../auth/auth-user.js';
 import { statusConflict } from '../orders/order-transitions.js';
 import { OrdersService } from '../orders/orders.service.js';
 import { UsersService } from '../users/users.service.js';
 import type { BolusDto } from './dto/bedside-actions.dto.js';
 import { requireBedsideAction } from './bedside-state.js';
-import { BedsideCheck } from './entities/bedside-check.entity.js';
 import { ClinicianBolus } from './entities/clinician-bolus.entity.js';
 import { Flag } from '../flags/entities/flag.entity.js';
 import { Observation } from '../observations/entities/observation.entity.js';
 import type { PcaOrder } from '../orders/entities/pca-order.entity.js';
 import { PcaPause } from './entities/pca-pause.entity.js';
+import { pumpReadingsSince } from '../observations/pump-readings.js';
 import { recordAudit } from '../audit/record-audit.js';
 import { fieldError } from '../common/errors/field-error.js';
 
@@ -122,31 +114,7 @@ async function refuseUnsafeBolus(manager: EntityManager, order: PcaOrder, amount
 
   // A day before the window as well, so the first reading inside it has the one before it.
   const since = new Date(now.getTime() - FOUR_HOURS_MS - 24 * 3_600_000);
-  const recent = await manager.find(Observation, {
-    where: { orderId: order.id, at: MoreThanOrEqual(since) },
-    order: { at: 'ASC', id: 'ASC' },
-  });
-  const releaseIds = [...new Set(recent.map((observation) => observation.releaseId))];
-  const starts =
-    releaseIds.length === 0
-      ? []
-      : await manager.find(BedsideCheck, { where: { orderId: order.id, status: 'matched', releaseId: In(releaseIds) } });
-  const readings: SyringeReading[] = [
-    ...starts.map((check) => ({
-      syringeId: check.releaseId,
-      at: (check.secondAt ?? check.firstAt).toISOString(),
-      attempts: 0,
-      delivered: 0,
-      volumeInfusedMl: 0,
-    })),
-    ...recent.map((o) => ({
-      syringeId: o.releaseId,
-      at: o.at.toISOString(),
-      attempts: o.attempts,
-      delivered: o.delivered,
-      volumeInfusedMl: o.volumeInfusedMl,
-    })),
-  ];
+  const { readings } = await pumpReadingsSince(manager, order.id, since);
   const boluses = await manager.find(ClinicianBolus, {
     where: { orderId: order.id, at: MoreThanOrEqual(new Date(now.getTime() - FOUR_HOURS_MS)) },
   });

@@ -1,11 +1,11 @@
 import { Injectable } from '@nestjs/common';
 import { InjectDataSource } from '@nestjs/typeorm';
-import { type DataSource, In, MoreThanOrEqual } from 'typeorm';
-import { projectedEmptyAt, type SyringeReading, type UsageResponse, usageSummary } from '@lockstep/shared';
-import { BedsideCheck } from '../bedside/entities/bedside-check.entity.js';
+import { type DataSource, MoreThanOrEqual } from 'typeorm';
+import { projectedEmptyAt, type UsageResponse, usageSummary } from '@lockstep/shared';
 import { ClinicianBolus } from '../bedside/entities/clinician-bolus.entity.js';
 import { EquianalgesicService } from '../equianalgesic/equianalgesic.service.js';
 import { OrdersService } from '../orders/orders.service.js';
+import { pumpReadingsSince } from './pump-readings.js';
 import { Observation } from './entities/observation.entity.js';
 import { monitoringEvents, nextObservationFor } from './next-observation.js';
 
@@ -24,28 +24,8 @@ export class UsageService {
     // Only the readings the figures can use (the window, the rolling 24 hours, and a day before
     // them for the first differences), by index: a PCA running for weeks reads no more than a new one.
     const since = new Date(now.getTime() - Math.max(hours, 24) * 3_600_000 - 24 * 3_600_000);
-    const recent = await manager.find(Observation, { where: { orderId, at: MoreThanOrEqual(since) }, order: { at: 'ASC', id: 'ASC' } });
+    const { observations: recent, readings } = await pumpReadingsSince(manager, orderId, since);
     const last = recent.at(-1) ?? (await manager.findOne(Observation, { where: { orderId }, order: { at: 'DESC', id: 'DESC' } }));
-    const releaseIds = [...new Set(recent.map((observation) => observation.releaseId))];
-    // Each syringe's counters start at zero when its bedside check matched.
-    const starts =
-      releaseIds.length === 0 ? [] : await manager.find(BedsideCheck, { where: { orderId, status: 'matched', releaseId: In(releaseIds) } });
-    const readings: SyringeReading[] = [
-      ...starts.map((check) => ({
-        syringeId: check.releaseId,
-        at: (check.secondAt ?? check.firstAt).toISOString(),
-        attempts: 0,
-        delivered: 0,
-        volumeInfusedMl: 0,
-      })),
-      ...recent.map((o) => ({
-        syringeId: o.releaseId,
-        at: o.at.toISOString(),
-        attempts: o.attempts,
-        delivered: o.delivered,
-        volumeInfusedMl: o.volumeInfusedMl,
-      })),
-    ];
     const boluses = await manager.find(ClinicianBolus, { where: { orderId, at: MoreThanOrEqual(since) } });
     // Pharmacy's equianalgesic table, read by the order's formulary drug id (never by its name).
     const factors = await this.equianalgesic.factorsFor(manager, order.drugId);
